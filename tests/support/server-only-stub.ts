@@ -1,0 +1,2 @@
+// Empty stand-in for the "server-only" marker package under vitest.
+export {};
