@@ -1,0 +1,97 @@
+import { beamAngles, type BeamAngles } from "./validate";
+import { DEG } from "./vector";
+
+export type Family = "profile" | "fresnel" | "wash" | "par" | "led-wash" | "cyc" | "followspot";
+/** flat: full core with a cosine fade (the design's profile-spot model); peaked: falls from the axis. */
+export type ProfileShape = "flat" | "peaked";
+
+export const FIXTURE_FAMILIES: ReadonlyArray<{ value: Family; label: string; shape: ProfileShape }> = [
+  { value: "profile", label: "Profile spot", shape: "flat" },
+  { value: "fresnel", label: "Fresnel", shape: "peaked" },
+  { value: "wash", label: "Wash light", shape: "peaked" },
+  { value: "par", label: "PAR can", shape: "peaked" },
+  { value: "led-wash", label: "LED wash", shape: "peaked" },
+  { value: "cyc", label: "Cyc or batten flood", shape: "peaked" },
+  { value: "followspot", label: "Followspot", shape: "flat" },
+];
+
+const SHAPES: Record<Family, ProfileShape> = Object.fromEntries(
+  FIXTURE_FAMILIES.map((f) => [f.value, f.shape]),
+) as Record<Family, ProfileShape>;
+
+export function profileShapeOf(family: Family): ProfileShape {
+  const shape = SHAPES[family];
+  if (!shape) throw new RangeError(`Unknown fixture family "${String(family)}".`);
+  return shape;
+}
+
+/** ln(ln 10 / ln 2): makes the peaked curve, which is ½ at the beam half-angle, equal 1/10 at the field one. */
+const LOG_TEN_OVER_HALF = Math.log(Math.log(10) / Math.log(2));
+
+/** Precomputed profile of one beam, radians; shared by the single-point and the grid evaluation. */
+export type Profile = {
+  peaked: boolean;
+  outer: number;
+  core: number;
+  cosOuter: number;
+  cosCore: number;
+  /** Peaked: P(β) = exp(−c·β^k). */
+  k: number;
+  c: number;
+};
+
+export function makeProfile(ang: BeamAngles, shape: ProfileShape): Profile {
+  const peaked = shape === "peaked";
+  let k = Infinity;
+  let c = 0;
+  if (peaked && ang.outer > ang.half) {
+    k = LOG_TEN_OVER_HALF / Math.log(ang.outer / ang.half);
+    c = Math.LN2 / Math.pow(ang.half, k);
+  }
+  return {
+    peaked, outer: ang.outer, core: ang.core, k, c,
+    cosOuter: Math.cos(ang.outer),
+    // A peaked beam with no softness is a plain hard-edged disc: the core spans the whole cone.
+    // cosCore: at or inside this the intensity is full, so callers can skip acos and the curve.
+    cosCore: peaked ? (k === Infinity ? Math.cos(ang.outer) : 1) : ang.core > 0 ? Math.cos(ang.core) : 1,
+  };
+}
+
+/** Relative intensity (0..1) at angle beta (radians) off the axis. */
+export function profileAt(p: Profile, beta: number): number {
+  if (beta > p.outer) return 0;
+  if (p.peaked) return p.k === Infinity ? 1 : Math.exp(-p.c * Math.pow(beta, p.k));
+  if (beta <= p.core) return 1;
+  return 0.5 * (1 + Math.cos((Math.PI * (beta - p.core)) / (p.outer - p.core)));
+}
+
+/**
+ * Relative intensity at betaDeg off the axis for a beam of this cone, softness and family.
+ * Flat (profile spots, followspots): 1 in the core, the design's cosine fade to 0 at the cone's edge.
+ * Peaked (fresnels, washes, PARs, LED washes, cyc floods): exp(−ln2·(β/βb)^k), 1 on the axis, exactly ½ at
+ * the 50 % half-angle βb = (θ−s)/2 and exactly 1/10 at the field half-angle θ/2, then 0 beyond (spill under
+ * a tenth of the peak is not modelled, so the drawn pool, the grid culling and the light agree).
+ */
+export function relativeIntensity(betaDeg: number, coneDeg: number, softnessDeg: number, family: Family = "profile"): number {
+  const prof = makeProfile(beamAngles(coneDeg, softnessDeg), profileShapeOf(family));
+  return profileAt(prof, Math.abs(betaDeg) * DEG);
+}
+
+/**
+ * A datasheet's beam (50 %) and field (10 %) angles as the design's cone and softness: cone = field,
+ * softness = field − beam. A beam angle under half the field gives a softness that will be clamped.
+ */
+export function fromDatasheet(d: { beamDeg: number; fieldDeg: number }): { coneDeg: number; softnessDeg: number; warning?: string } {
+  const { beamDeg, fieldDeg } = d;
+  if (!Number.isFinite(beamDeg) || !Number.isFinite(fieldDeg) || beamDeg <= 0 || fieldDeg >= 180) {
+    throw new RangeError(`Datasheet angles must be above 0° and under 180° (beam ${beamDeg}°, field ${fieldDeg}°).`);
+  }
+  if (beamDeg > fieldDeg) {
+    throw new RangeError(`The beam angle (${beamDeg}°) cannot be wider than the field angle (${fieldDeg}°).`);
+  }
+  const out = { coneDeg: fieldDeg, softnessDeg: fieldDeg - beamDeg };
+  if (out.softnessDeg > fieldDeg / 2) {
+    return { ...out, warning: `A beam angle under half the field angle is modelled with a ${fieldDeg / 2}° beam.` };
+  }
+  return out;
+}

@@ -1,0 +1,122 @@
+import { assertFinite, assertVec3 } from "./validate";
+import { DEG, type Point, type Vec3 } from "./vector";
+
+export type Occluder =
+  | { kind: "performer"; x: number; y: number; height: number; radius: number }
+  | { kind: "panel"; a: Point; b: Point; height: number };
+
+export type ShadowInput = { source: Vec3; apertureDiameter: number; backWallY: number; occluder: Occluder };
+
+export type Shadow = {
+  lands: "deck" | "wall" | "unbounded" | "none";
+  reason?: string;
+  /** Farthest point of the shadow: on the deck (z = 0) or on the back wall (z = wallHeight). */
+  tip: Vec3 | null;
+  /** Along the deck, from the occluder's far side to the tip (to the foot of the wall when it lands there). */
+  length: number | null;
+  wallHeight: number | null;
+  /** At the tip, square to the rays (the design's D·b/a); on the surface divide by cos(incidenceDeg). */
+  penumbraWidth: number | null;
+  umbraWidth: number | null;
+  /** Angle between the rays at the tip and the surface's normal. */
+  incidenceDeg: number | null;
+};
+
+/** Penumbra width D·b/a of a source of diameter D, edge at distance a, surface b beyond it (similar triangles). */
+export function penumbraWidth(d: number, a: number, b: number): number {
+  return (d * b) / a;
+}
+
+/** Umbra width W·(a+b)/a − D·b/a of an object of width W; 0 where the umbra has closed. */
+export function umbraWidth(w: number, d: number, a: number, b: number): number {
+  return Math.max(0, (w * (a + b)) / a - (d * b) / a);
+}
+
+/** The occluding edge the tip comes from: the top of the far side, its foot, and the width seen from the lens. */
+export type Edge = { top: Vec3; foot: Point; width: number; insideReason: string | null };
+
+export function occludingEdge(source: Vec3, o: Occluder): Edge {
+  assertFinite("Occluder height", o.height);
+  if (o.height <= 0) throw new RangeError(`Occluder height must be above 0 m (got ${o.height}).`);
+  if (o.kind === "performer") {
+    assertFinite("Performer x", o.x);
+    assertFinite("Performer y", o.y);
+    assertFinite("Performer radius", o.radius);
+    if (o.radius < 0) throw new RangeError(`Performer radius cannot be negative (got ${o.radius}).`);
+    const wx = o.x - source.x;
+    const wy = o.y - source.y;
+    const r0 = Math.hypot(wx, wy);
+    // Directly overhead the shadow pools all round; upstage is an arbitrary but stable choice of tip.
+    const ux = r0 > 1e-9 ? wx / r0 : 0;
+    const uy = r0 > 1e-9 ? wy / r0 : 1;
+    const foot = { x: o.x + o.radius * ux, y: o.y + o.radius * uy };
+    const inside = r0 <= o.radius && source.z <= o.height;
+    return {
+      top: { ...foot, z: o.height }, foot, width: 2 * o.radius,
+      insideReason: inside ? "The lens is inside the performer's outline." : null,
+    };
+  }
+  for (const [k, p] of [["a", o.a], ["b", o.b]] as const) {
+    assertFinite(`Panel point ${k}.x`, p.x);
+    assertFinite(`Panel point ${k}.y`, p.y);
+  }
+  const lx = o.b.x - o.a.x;
+  const ly = o.b.y - o.a.y;
+  const len = Math.hypot(lx, ly);
+  if (!(len > 1e-9)) throw new RangeError("A scenery panel needs two different end points.");
+  const foot = { x: (o.a.x + o.b.x) / 2, y: (o.a.y + o.b.y) / 2 };
+  const wx = foot.x - source.x;
+  const wy = foot.y - source.y;
+  const r0 = Math.hypot(wx, wy);
+  // Width seen from the lens: the panel's extent square to the line of sight in plan.
+  const width = r0 > 1e-9 ? Math.abs((lx * -wy + ly * wx) / r0) : len;
+  const onLine = Math.abs(lx * (source.y - o.a.y) - ly * (source.x - o.a.x)) / len < 1e-9;
+  const t = ((source.x - o.a.x) * lx + (source.y - o.a.y) * ly) / (len * len);
+  const inside = onLine && t >= 0 && t <= 1 && source.z <= o.height;
+  return {
+    top: { ...foot, z: o.height }, foot, width,
+    insideReason: inside ? "The lens is inside the scenery panel." : null,
+  };
+}
+
+const NONE = { tip: null, length: null, wallHeight: null, penumbraWidth: null, umbraWidth: null, incidenceDeg: null };
+
+/** Where the shadow of a performer or a panel lands for one lens, and its edge widths at the tip. */
+export function shadowOf(i: ShadowInput): Shadow {
+  const s = i.source;
+  assertVec3("Lens position", s);
+  assertFinite("Lens aperture", i.apertureDiameter);
+  if (i.apertureDiameter < 0) throw new RangeError(`Lens aperture cannot be negative (got ${i.apertureDiameter}).`);
+  if (Number.isNaN(i.backWallY)) throw new RangeError("Back-wall depth must be a number (Infinity for none).");
+  if (s.y >= i.backWallY) throw new RangeError("The lens is behind the back wall.");
+  const e = occludingEdge(s, i.occluder);
+  if (e.top.y >= i.backWallY) throw new RangeError("The occluder is at or behind the back wall.");
+  if (e.insideReason) return { lands: "none", reason: e.insideReason, ...NONE };
+
+  const dx = e.top.x - s.x;
+  const dy = e.top.y - s.y;
+  const dz = e.top.z - s.z;
+  const a = Math.sqrt(dx * dx + dy * dy + dz * dz);
+  // Ray S + t·(E − S); t = 1 at the edge. Deck at z = 0 when the ray descends, wall at y = backWallY.
+  const tDeck = dz < 0 ? s.z / -dz : Infinity;
+  const tWall = dy > 0 && Number.isFinite(i.backWallY) ? (i.backWallY - s.y) / dy : Infinity;
+  if (tDeck === Infinity && tWall === Infinity) {
+    return { lands: "unbounded", reason: "The lens is level with or below the top, so the shadow runs to the horizon.", ...NONE };
+  }
+  const onWall = tWall < tDeck;
+  const t = onWall ? tWall : tDeck;
+  const tip = { x: s.x + t * dx, y: s.y + t * dy, z: onWall ? s.z + t * dz : 0 };
+  // t − 1 from the edge's own offsets: with a distant source (the Sun) t is 1 + 1e-11 and t − 1 would be noise.
+  const beyond = onWall ? (i.backWallY - e.top.y) / dy : e.top.z / -dz;
+  const b = beyond * a;
+  const cosInc = onWall ? dy / a : -dz / a;
+  return {
+    lands: onWall ? "wall" : "deck",
+    tip,
+    length: Math.hypot(tip.x - e.foot.x, tip.y - e.foot.y),
+    wallHeight: onWall ? tip.z : null,
+    penumbraWidth: penumbraWidth(i.apertureDiameter, a, b),
+    umbraWidth: umbraWidth(e.width, i.apertureDiameter, a, b),
+    incidenceDeg: Math.acos(Math.min(1, cosInc)) / DEG,
+  };
+}
