@@ -35,21 +35,16 @@ export type Profile = {
   core: number;
   cosOuter: number;
   cosCore: number;
-  /** Peaked: P(β) = exp(−c·β^k). */
+  /** Peaked: P(β) = exp(−ln2·(β/half)^k); the ratio form stays finite when k is huge (tiny softness). */
+  half: number;
   k: number;
-  c: number;
 };
 
 export function makeProfile(ang: BeamAngles, shape: ProfileShape): Profile {
   const peaked = shape === "peaked";
-  let k = Infinity;
-  let c = 0;
-  if (peaked && ang.outer > ang.half) {
-    k = LOG_TEN_OVER_HALF / Math.log(ang.outer / ang.half);
-    c = Math.LN2 / Math.pow(ang.half, k);
-  }
+  const k = peaked && ang.outer > ang.half ? LOG_TEN_OVER_HALF / Math.log(ang.outer / ang.half) : Infinity;
   return {
-    peaked, outer: ang.outer, core: ang.core, k, c,
+    peaked, outer: ang.outer, core: ang.core, half: ang.half, k,
     cosOuter: Math.cos(ang.outer),
     // A peaked beam with no softness is a plain hard-edged disc: the core spans the whole cone.
     // cosCore: at or inside this the intensity is full, so callers can skip acos and the curve.
@@ -60,7 +55,7 @@ export function makeProfile(ang: BeamAngles, shape: ProfileShape): Profile {
 /** Relative intensity (0..1) at angle beta (radians) off the axis. */
 export function profileAt(p: Profile, beta: number): number {
   if (beta > p.outer) return 0;
-  if (p.peaked) return p.k === Infinity ? 1 : Math.exp(-p.c * Math.pow(beta, p.k));
+  if (p.peaked) return p.k === Infinity ? 1 : Math.exp(-Math.LN2 * Math.pow(beta / p.half, p.k));
   if (beta <= p.core) return 1;
   return 0.5 * (1 + Math.cos((Math.PI * (beta - p.core)) / (p.outer - p.core)));
 }
