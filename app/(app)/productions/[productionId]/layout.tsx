@@ -1,0 +1,27 @@
+import { memberForPage } from "@/lib/auth/page-guards";
+import { requireProduction } from "@/lib/data/productions";
+import { ROLE_LABELS } from "@/lib/auth/roles";
+import { ProductionTabs } from "@/components/production-tabs";
+
+export default async function ProductionLayout({ children, params }: { children: React.ReactNode; params: Promise<{ productionId: string }> }) {
+  const { productionId, member } = await memberForPage((await params).productionId);
+  const production = await requireProduction(productionId);
+  return (
+    <div className="flex flex-col">
+      <div className="no-print border-b border-line bg-surface px-4 pt-3">
+        <div className="flex flex-wrap items-baseline justify-between gap-2">
+          <h1 className="text-lg font-semibold" data-testid="production-name">
+            {production.name}
+            <span className="ml-2 text-sm font-normal text-muted">{production.venue}</span>
+          </h1>
+          <span className="text-xs text-muted" data-testid="your-role">
+            You: {ROLE_LABELS[member.role]}
+            {member.isOwner ? " (owner)" : ""}
+          </span>
+        </div>
+        <ProductionTabs productionId={productionId} />
+      </div>
+      {children}
+    </div>
+  );
+}

@@ -1,0 +1,75 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { memberForPage } from "@/lib/auth/page-guards";
+import { getProductionOverview, requireProduction } from "@/lib/data/productions";
+import { getTeamByProduction } from "@/lib/data/memberships";
+import { ROLE_LABELS } from "@/lib/auth/roles";
+import { formatLength } from "@/lib/optics";
+import { Card } from "@/components/ui/card";
+
+export const metadata: Metadata = { title: "Overview" };
+
+export default async function OverviewPage({ params }: { params: Promise<{ productionId: string }> }) {
+  const { productionId } = await memberForPage((await params).productionId);
+  const [production, overview, team] = await Promise.all([
+    requireProduction(productionId),
+    getProductionOverview({ productionId }),
+    getTeamByProduction({ productionId }),
+  ]);
+  const { counts } = overview;
+  const len = (m: number) => formatLength(m, production.displayUnits);
+  const stats: Array<[string, number | string, string]> = [
+    ["Positions", counts.positions, "plot"],
+    ["Fixtures", counts.fixtures, "rig"],
+    ["Hung", `${counts.hung} / ${counts.fixtures}`, "rig"],
+    ["Focused", `${counts.focused} / ${counts.fixtures}`, "focus"],
+    ["Focus points", counts.focusPoints, "plot"],
+    ["Cues", counts.cues, "cues"],
+  ];
+  return (
+    <main className="mx-auto grid max-w-6xl gap-4 px-4 py-6 lg:grid-cols-3">
+      <Card title="Where things stand" className="lg:col-span-2">
+        <dl className="grid grid-cols-2 gap-3 sm:grid-cols-3" data-testid="overview-counts">
+          {stats.map(([label, value, tab]) => (
+            <Link key={label} href={`/productions/${productionId}/${tab}`} className="rounded-md border border-line p-3 hover:border-accent">
+              <dt className="text-xs uppercase tracking-wide text-muted">{label}</dt>
+              <dd className="text-2xl font-semibold tabular-nums">{value}</dd>
+            </Link>
+          ))}
+        </dl>
+      </Card>
+      <Card title="Warnings">
+        {overview.warnings.length ? (
+          <ul className="list-disc pl-5 text-sm text-caution">
+            {overview.warnings.map((w) => (
+              <li key={w}>{w}</li>
+            ))}
+          </ul>
+        ) : (
+          <p className="text-sm text-muted">Nothing needs attention.</p>
+        )}
+        <p className="mt-3 text-xs text-muted">Latest revision: none issued yet.</p>
+      </Card>
+      <Card title="Stage" className="lg:col-span-2">
+        <p className="text-sm">
+          Proscenium {len(production.prosceniumWidth)} wide × {len(production.prosceniumHeight)} high; stage {len(production.stageWidth)} wide and{" "}
+          {len(production.stageDepth)} deep from the {production.datumName}; back wall {len(production.backWallY)} upstage of it. Head height for
+          focusing {len(production.headHeight)}.
+        </p>
+      </Card>
+      <Card title="Team">
+        <ul className="flex flex-col gap-1 text-sm" data-testid="overview-team">
+          {team.map((m) => (
+            <li key={m.userId} className="flex justify-between gap-2">
+              <span>{m.name}</span>
+              <span className="text-muted">
+                {ROLE_LABELS[m.role]}
+                {m.isOwner ? " · owner" : ""}
+              </span>
+            </li>
+          ))}
+        </ul>
+      </Card>
+    </main>
+  );
+}

@@ -1,0 +1,19 @@
+import type { ButtonHTMLAttributes } from "react";
+
+type Variant = "primary" | "secondary" | "quiet" | "danger";
+
+const VARIANTS: Record<Variant, string> = {
+  primary: "bg-accent text-accent-ink hover:opacity-90",
+  secondary: "border border-line bg-surface text-ink hover:bg-raised",
+  quiet: "text-muted hover:text-ink",
+  danger: "bg-danger text-white hover:opacity-90",
+};
+
+export function Button({ variant = "primary", className = "", ...props }: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant }) {
+  return (
+    <button
+      {...props}
+      className={`inline-flex min-h-10 items-center justify-center gap-2 rounded-md px-4 text-sm font-medium disabled:cursor-not-allowed disabled:opacity-50 ${VARIANTS[variant]} ${className}`}
+    />
+  );
+}

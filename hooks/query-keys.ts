@@ -1,0 +1,8 @@
+// Query keys shared by server prefetching and the client hooks (kept out of "use client" files so
+// Server Components can import them).
+export const productionKeys = {
+  all: ["productions"] as const,
+  list: () => [...productionKeys.all, "list"] as const,
+  detail: (id: number) => [...productionKeys.all, id] as const,
+  fixtures: (id: number) => [...productionKeys.all, id, "fixtures"] as const,
+};

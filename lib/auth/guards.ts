@@ -1,0 +1,35 @@
+import "server-only";
+import { AppError, forbidden } from "@/lib/errors";
+import { getCurrentUser } from "./session";
+import { can, type Member, type Permission } from "./policy";
+import { getMembership } from "@/lib/data/memberships";
+
+export type CurrentUser = { id: number; name: string; email: string };
+export type MemberContext = { user: CurrentUser; member: Member; productionId: number };
+
+export async function requireUser(): Promise<CurrentUser> {
+  const user = await getCurrentUser();
+  if (!user) throw new AppError("unauthorized", "Please sign in.");
+  return user;
+}
+
+/** Parses a production id from the URL; anything that is not a positive integer is simply not found. */
+export function parseProductionId(raw: string): number {
+  const id = /^\d{1,10}$/.test(raw) ? Number(raw) : NaN;
+  if (!Number.isSafeInteger(id) || id <= 0) throw new AppError("not_found", "That production was not found.");
+  return id;
+}
+
+/**
+ * The signed-in member of a production, checked against the role table. Outsiders get 404 (the
+ * production's existence is not revealed); members without the right get 403.
+ */
+export async function requireMember(rawProductionId: string | number, permission: Permission = "production.view"): Promise<MemberContext> {
+  const user = await requireUser();
+  const productionId = typeof rawProductionId === "number" ? rawProductionId : parseProductionId(rawProductionId);
+  const membership = await getMembership({ userId: user.id, productionId });
+  if (!membership) throw new AppError("not_found", "That production was not found.");
+  const member: Member = { role: membership.role, isOwner: membership.isOwner };
+  if (!can(member, permission)) throw forbidden();
+  return { user, member, productionId };
+}

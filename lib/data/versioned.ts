@@ -1,0 +1,38 @@
+import "server-only";
+import { literal, type Model, type ModelStatic, type Transaction, type WhereOptions } from "sequelize";
+import { AppError, notFound } from "@/lib/errors";
+
+/**
+ * Optimistic locking: the write lands only if the row still has the version the client read.
+ * Otherwise 409 with the current row, so the client can show the other person's change.
+ */
+export async function versionedUpdate<M extends Model, Dto>(opts: {
+  model: ModelStatic<M>;
+  scope: WhereOptions;
+  id: number;
+  version: number;
+  changes: Record<string, unknown>;
+  toDto: (row: M) => Dto;
+  what: string;
+  transaction?: Transaction;
+}): Promise<{ before: M; after: M }> {
+  const { model, scope, id, version, changes, toDto, what, transaction } = opts;
+  const where = { ...(scope as object), id } as WhereOptions;
+  const before = await model.findOne({ where, transaction });
+  if (!before) throw notFound(what);
+  const [count] = await model.update({ ...changes, version: literal("version + 1") } as never, {
+    where: { ...(where as object), version } as WhereOptions,
+    transaction,
+  });
+  if (count === 0) {
+    const current = await model.findOne({ where, transaction });
+    if (!current) throw notFound(what);
+    throw new AppError("conflict", `Someone else changed this ${what.toLowerCase()} first. Here is the current version.`, {
+      current: toDto(current),
+    });
+  }
+  const after = await model.findOne({ where, transaction });
+  return { before, after: after! };
+}
+
+export const iso = (d: Date | string | null | undefined) => (d == null ? null : new Date(d).toISOString());

@@ -1,0 +1,38 @@
+import "server-only";
+import { NextResponse } from "next/server";
+import type { z } from "zod";
+import { AppError, fromZodError, toAppError } from "@/lib/errors";
+
+/** Wraps a route handler: its result becomes JSON, its errors a JSON error with the right status. */
+export function route<Ctx>(fn: (req: Request, ctx: Ctx) => Promise<unknown>) {
+  return async (req: Request, ctx: Ctx): Promise<Response> => {
+    try {
+      const result = await fn(req, ctx);
+      if (result instanceof Response) return result;
+      return NextResponse.json(result ?? { ok: true });
+    } catch (err) {
+      const appError = toAppError(err);
+      return NextResponse.json(appError.toJSON(), { status: appError.status });
+    }
+  };
+}
+
+/** Reads and validates a JSON body; a body that is not JSON is a 400 that says so. */
+export async function readJson<S extends z.ZodType>(req: Request, schema: S): Promise<z.infer<S>> {
+  let body: unknown;
+  try {
+    body = await req.json();
+  } catch {
+    throw new AppError("bad_request", "The request body is not valid JSON.", { fieldErrors: { "(body)": ["not valid JSON"] } });
+  }
+  const parsed = schema.safeParse(body);
+  if (!parsed.success) throw fromZodError(parsed.error);
+  return parsed.data;
+}
+
+export function readQuery<S extends z.ZodType>(req: Request, schema: S): z.infer<S> {
+  const params = Object.fromEntries(new URL(req.url).searchParams.entries());
+  const parsed = schema.safeParse(params);
+  if (!parsed.success) throw fromZodError(parsed.error);
+  return parsed.data;
+}

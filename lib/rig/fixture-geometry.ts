@@ -1,0 +1,59 @@
+// What the server computes for every fixture it returns: where the lens is, where it aims,
+// and its pools at the deck and at head height. The API is the authority for these numbers.
+import { beamAim, poolAtPlane, type PlanePool, type Vec3 } from "@/lib/optics";
+
+export type GeometryInput = {
+  x: number;
+  y: number;
+  lensHeight: number | null;
+  focusX: number | null;
+  focusY: number | null;
+  aim: "deck" | "head";
+  coneDeg: number | null;
+  softnessDeg: number | null;
+  focusPoint: { x: number; y: number } | null;
+  position: { trimHeight: number };
+  type: { coneMinDeg: number; coneMaxDeg: number; defaultSoftnessDeg: number; lensDropM: number };
+};
+
+export type FixtureGeometry = {
+  lensHeight: number;
+  lensHeightIsDefault: boolean;
+  coneDeg: number;
+  softnessDeg: number;
+  source: Vec3;
+  focus: Vec3 | null;
+  throw: number | null;
+  tiltDeg: number | null;
+  panDeg: number | null;
+  deck: PlanePool | null;
+  head: PlanePool | null;
+};
+
+/** Lens height defaults to the position's trim less the type's lens drop (booms and ladders set their own). */
+export function defaultLensHeight(trimHeight: number, lensDropM: number): number {
+  return Math.max(0, trimHeight - lensDropM);
+}
+
+export function computeFixtureGeometry(f: GeometryInput, headHeight: number): FixtureGeometry {
+  const lensHeight = f.lensHeight ?? defaultLensHeight(f.position.trimHeight, f.type.lensDropM);
+  const coneDeg = f.coneDeg ?? f.type.coneMaxDeg;
+  const softnessDeg = f.softnessDeg ?? f.type.defaultSoftnessDeg;
+  const source: Vec3 = { x: f.x, y: f.y, z: lensHeight };
+  const mark = f.focusPoint ?? (f.focusX != null && f.focusY != null ? { x: f.focusX, y: f.focusY } : null);
+  const base = { lensHeight, lensHeightIsDefault: f.lensHeight == null, coneDeg, softnessDeg, source };
+  if (!mark) return { ...base, focus: null, throw: null, tiltDeg: null, panDeg: null, deck: null, head: null };
+
+  const focus: Vec3 = { x: mark.x, y: mark.y, z: f.aim === "head" ? headHeight : 0 };
+  const aim = beamAim({ source, focus });
+  const pool = (planeZ: number) => poolAtPlane({ source, focus, coneDeg, softnessDeg, planeZ });
+  return {
+    ...base,
+    focus,
+    throw: aim.throw,
+    tiltDeg: aim.tiltDeg,
+    panDeg: aim.panDeg,
+    deck: pool(0),
+    head: pool(headHeight),
+  };
+}

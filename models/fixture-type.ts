@@ -1,0 +1,52 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+
+export type DmxMode = { name: string; footprint: number };
+
+export class FixtureType extends Model<InferAttributes<FixtureType>, InferCreationAttributes<FixtureType>> {
+  declare id: CreationOptional<number>;
+  declare productionId: number;
+  declare name: string;
+  declare family: string;
+  declare coneMinDeg: number;
+  declare coneMaxDeg: number;
+  declare defaultSoftnessDeg: CreationOptional<number>;
+  declare peakCandela: number;
+  declare wattage: CreationOptional<number>;
+  declare weightKg: CreationOptional<number>;
+  declare dmxModes: DmxMode[];
+  declare lensApertureM: CreationOptional<number>;
+  declare frameSize: string | null;
+  declare goboSize: string | null;
+  declare lensDropM: CreationOptional<number>;
+  declare cells: CreationOptional<number>;
+  declare version: CreationOptional<number>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+export function initFixtureType(sequelize: Sequelize) {
+  FixtureType.init(
+    {
+      id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+      productionId: { type: DataTypes.INTEGER, allowNull: false },
+      name: { type: DataTypes.STRING(80), allowNull: false },
+      family: { type: DataTypes.STRING(24), allowNull: false },
+      coneMinDeg: { type: DataTypes.DOUBLE, allowNull: false },
+      coneMaxDeg: { type: DataTypes.DOUBLE, allowNull: false },
+      defaultSoftnessDeg: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 2 },
+      peakCandela: { type: DataTypes.DOUBLE, allowNull: false },
+      wattage: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0 },
+      weightKg: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0 },
+      dmxModes: { type: DataTypes.JSON, allowNull: false },
+      lensApertureM: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0.15 },
+      frameSize: { type: DataTypes.STRING(40), allowNull: true },
+      goboSize: { type: DataTypes.STRING(20), allowNull: true },
+      lensDropM: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0.4 },
+      cells: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+      version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+      createdAt: DataTypes.DATE,
+      updatedAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: "fixture_types", underscored: true },
+  );
+}

@@ -1,0 +1,54 @@
+// The one Sequelize instance, created on first use (never at build time) and kept on globalThis
+// so that dev reloads and test files reuse a single pool.
+import { Sequelize } from "sequelize";
+import * as mariadb from "mariadb";
+import { initUser, User } from "./user";
+import { initProduction, Production } from "./production";
+import { initMembership, Membership } from "./membership";
+import { initPosition, Position } from "./position";
+import { initFixtureType, FixtureType } from "./fixture-type";
+import { initFocusPoint, FocusPoint } from "./focus-point";
+import { initFixture, Fixture } from "./fixture";
+import { initCue, Cue, CueLevel } from "./cue";
+import { initChangeEntry, ChangeEntry } from "./change-entry";
+
+const models = { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, ChangeEntry };
+export type Db = typeof models & { sequelize: Sequelize };
+
+function associate() {
+  Membership.belongsTo(User, { foreignKey: "userId", as: "user" });
+  Membership.belongsTo(Production, { foreignKey: "productionId", as: "production" });
+  Production.hasMany(Membership, { foreignKey: "productionId", as: "memberships" });
+  Fixture.belongsTo(Position, { foreignKey: "positionId", as: "position" });
+  Fixture.belongsTo(FixtureType, { foreignKey: "fixtureTypeId", as: "fixtureType" });
+  Fixture.belongsTo(FocusPoint, { foreignKey: "focusPointId", as: "focusPoint" });
+  Position.hasMany(Fixture, { foreignKey: "positionId", as: "fixtures" });
+  Cue.hasMany(CueLevel, { foreignKey: "cueId", as: "levels" });
+  CueLevel.belongsTo(Cue, { foreignKey: "cueId", as: "cue" });
+}
+
+function createDb(): Db {
+  const url = process.env.DATABASE_URL;
+  if (!url) throw new Error("DATABASE_URL is not set");
+  const sequelize = new Sequelize(url, {
+    dialect: "mariadb",
+    dialectModule: mariadb,
+    logging: false,
+    pool: { max: 10, min: 0, idle: 10_000, acquire: 10_000 },
+    dialectOptions: { timezone: "Z", connectTimeout: 5_000 },
+  });
+  for (const init of [initUser, initProduction, initMembership, initPosition, initFixtureType, initFocusPoint, initFixture, initCue, initChangeEntry]) {
+    init(sequelize);
+  }
+  associate();
+  return { sequelize, ...models };
+}
+
+const holder = globalThis as unknown as { __throwlineDb?: Db };
+
+export function getDb(): Db {
+  holder.__throwlineDb ??= createDb();
+  return holder.__throwlineDb;
+}
+
+export { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, ChangeEntry };

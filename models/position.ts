@@ -1,0 +1,55 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+
+export const POSITION_KINDS = [
+  "overhead-pipe",
+  "truss",
+  "boom",
+  "ladder",
+  "box-boom",
+  "foh-bridge",
+  "foh-rail",
+  "pipe-end",
+  "floor",
+  "flying-electric",
+] as const;
+export type PositionKind = (typeof POSITION_KINDS)[number];
+
+/** A hanging position. Lines (pipes, trusses, rails) have both ends; booms, ladders and floor spots a single point. */
+export class Position extends Model<InferAttributes<Position>, InferCreationAttributes<Position>> {
+  declare id: CreationOptional<number>;
+  declare productionId: number;
+  declare name: string;
+  declare kind: PositionKind;
+  declare x1: number;
+  declare y1: number;
+  declare x2: number | null;
+  declare y2: number | null;
+  declare trimHeight: number;
+  declare ratedLoadKg: number | null;
+  declare sortOrder: CreationOptional<number>;
+  declare version: CreationOptional<number>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+export function initPosition(sequelize: Sequelize) {
+  Position.init(
+    {
+      id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+      productionId: { type: DataTypes.INTEGER, allowNull: false },
+      name: { type: DataTypes.STRING(80), allowNull: false },
+      kind: { type: DataTypes.ENUM(...POSITION_KINDS), allowNull: false },
+      x1: { type: DataTypes.DOUBLE, allowNull: false },
+      y1: { type: DataTypes.DOUBLE, allowNull: false },
+      x2: { type: DataTypes.DOUBLE, allowNull: true },
+      y2: { type: DataTypes.DOUBLE, allowNull: true },
+      trimHeight: { type: DataTypes.DOUBLE, allowNull: false },
+      ratedLoadKg: { type: DataTypes.DOUBLE, allowNull: true },
+      sortOrder: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+      version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+      createdAt: DataTypes.DATE,
+      updatedAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: "positions", underscored: true },
+  );
+}

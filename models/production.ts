@@ -1,0 +1,52 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+
+export type DisplayUnits = "metric" | "imperial";
+export type NumberingRule = "from-stage-left" | "from-stage-right";
+
+export class Production extends Model<InferAttributes<Production>, InferCreationAttributes<Production>> {
+  declare id: CreationOptional<number>;
+  declare name: string;
+  declare venue: CreationOptional<string>;
+  declare displayUnits: CreationOptional<DisplayUnits>;
+  declare datumName: CreationOptional<string>;
+  declare headHeight: CreationOptional<number>;
+  declare backWallY: CreationOptional<number>;
+  declare prosceniumWidth: CreationOptional<number>;
+  declare prosceniumHeight: CreationOptional<number>;
+  declare stageWidth: CreationOptional<number>;
+  declare stageDepth: CreationOptional<number>;
+  declare apronDepth: CreationOptional<number>;
+  declare voltage: CreationOptional<number>;
+  declare derating: CreationOptional<number>;
+  declare numberingRule: CreationOptional<NumberingRule>;
+  declare version: CreationOptional<number>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+export function initProduction(sequelize: Sequelize) {
+  const metres = (defaultValue: number) => ({ type: DataTypes.DOUBLE, allowNull: false, defaultValue });
+  Production.init(
+    {
+      id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+      name: { type: DataTypes.STRING(160), allowNull: false },
+      venue: { type: DataTypes.STRING(160), allowNull: false, defaultValue: "" },
+      displayUnits: { type: DataTypes.ENUM("metric", "imperial"), allowNull: false, defaultValue: "metric" },
+      datumName: { type: DataTypes.STRING(60), allowNull: false, defaultValue: "setting line" },
+      headHeight: metres(1.7),
+      backWallY: metres(10),
+      prosceniumWidth: metres(10),
+      prosceniumHeight: metres(6),
+      stageWidth: metres(16),
+      stageDepth: metres(10),
+      apronDepth: metres(1.5),
+      voltage: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 230 },
+      derating: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0.8 },
+      numberingRule: { type: DataTypes.ENUM("from-stage-left", "from-stage-right"), allowNull: false, defaultValue: "from-stage-left" },
+      version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+      createdAt: DataTypes.DATE,
+      updatedAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: "productions", underscored: true },
+  );
+}
