@@ -101,13 +101,16 @@ export function shadowOf(i: ShadowInput): Shadow {
   const tDeck = dz < 0 ? s.z / -dz : Infinity;
   const tWall = dy > 0 && Number.isFinite(i.backWallY) ? (i.backWallY - s.y) / dy : Infinity;
   if (tDeck === Infinity && tWall === Infinity) {
-    return { lands: "unbounded", reason: "The lens is level with or below the top, so the shadow runs to the horizon.", ...NONE };
+    const reason = "The lens is level with or below the top, so the shadow runs to the horizon.";
+    return { lands: "unbounded", reason, ...NONE };
   }
   const onWall = tWall < tDeck;
-  const t = onWall ? tWall : tDeck;
-  const tip = { x: s.x + t * dx, y: s.y + t * dy, z: onWall ? s.z + t * dz : 0 };
-  // t − 1 from the edge's own offsets: with a distant source (the Sun) t is 1 + 1e-11 and t − 1 would be noise.
+  // t − 1 from the edge's own offsets: with a distant source (the Sun) t is 1 + 1e-11 and t − 1 would be
+  // noise, so the tip is stepped out from the edge rather than from the lens.
   const beyond = onWall ? (i.backWallY - e.top.y) / dy : e.top.z / -dz;
+  const tip = onWall
+    ? { x: e.top.x + beyond * dx, y: i.backWallY, z: e.top.z + beyond * dz }
+    : { x: e.top.x + beyond * dx, y: e.top.y + beyond * dy, z: 0 };
   const b = beyond * a;
   const cosInc = onWall ? dy / a : -dz / a;
   return {
