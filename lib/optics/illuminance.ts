@@ -51,6 +51,7 @@ export function beamLux(b: PreparedBeam, px: number, py: number, pz: number): nu
   const dx = px - b.sx;
   const dy = py - b.sy;
   const d2 = dx * dx + dy * dy + rise * rise;
+  if (d2 < 1e-18) return 0; // within a nanometre of the lens: a point there is not a lit surface
   const d = Math.sqrt(d2);
   const cosBeta = (dx * b.ax + dy * b.ay - rise * b.az) / d;
   const p = b.prof;
