@@ -6,6 +6,7 @@ import { ensurePackages, log } from "./lib/system.mjs";
 import { ensureNodeModules } from "./lib/node-modules.mjs";
 import { ensureEnvFile } from "./lib/env-file.mjs";
 import { startMariaDb } from "./lib/mariadb.mjs";
+import { startMailStandIn } from "./lib/mail-stand-in.mjs";
 import { ROOT, bin, buildIfStale, migrate, seedWhenEmpty, DEMO_PASSWORD, DEMO_SIGN_INS } from "./lib/project.mjs";
 
 const dev = process.argv.includes("--dev");
@@ -52,6 +53,13 @@ async function main() {
     databaseUrl = db.url;
   }
   const env = { DATABASE_URL: databaseUrl, SESSION_SECRET: settings.SESSION_SECRET, NEXT_TELEMETRY_DISABLED: "1" };
+  if (!settings.SMTP_URL) {
+    // The local mail stand-in: messages land in .data/outbox, shown on the app's outbox page.
+    const mail = await startMailStandIn({ port: Number(settings.SMTP_PORT || 2525), outboxDir: path.join(ROOT, ".data", "outbox") });
+    cleanups.push(() => mail.stop());
+    Object.assign(env, { SMTP_URL: mail.url, MAIL_OUTBOX_DIR: mail.outboxDir });
+    log(`Mail stand-in listening on ${mail.url} (outbox in .data/outbox).`);
+  }
   migrate(env);
   await seedWhenEmpty(env);
 

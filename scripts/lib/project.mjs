@@ -1,6 +1,7 @@
 // Shared steps of `npm start`, `npm run dev` and `npm test`: database bootstrap, migrations, seed, build.
 import { createHash } from "node:crypto";
 import { existsSync, readdirSync, readFileSync, statSync, writeFileSync } from "node:fs";
+import { createRequire } from "node:module";
 import net from "node:net";
 import path from "node:path";
 import { log, run } from "./system.mjs";
@@ -23,7 +24,7 @@ export function migrate(env) {
 
 /** Seeds the demo production unless the database already has users. */
 export async function seedWhenEmpty(env) {
-  const mariadb = (await import(path.join(ROOT, "node_modules/mariadb/promise.js"))).default;
+  const mariadb = createRequire(path.join(ROOT, "package.json"))("mariadb");
   const conn = await mariadb.createConnection(env.DATABASE_URL);
   let count;
   try {

@@ -1,0 +1,143 @@
+// `npm test`: the whole suite from a fresh clone. Starts its own throwaway MariaDB (own port and
+// folder, removed afterwards), migrates and seeds it, runs the unit suite, builds the app, starts it,
+// runs the integration suite (through the route handlers over HTTP) and the end-to-end suite in
+// Debian's Chromium, and ends with one plain line: `N passed, N failed`.
+import { spawn } from "node:child_process";
+import { randomBytes } from "node:crypto";
+import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync } from "node:fs";
+import os from "node:os";
+import path from "node:path";
+import { ensurePackages, log } from "./lib/system.mjs";
+import { ensureNodeModules } from "./lib/node-modules.mjs";
+import { startMariaDb } from "./lib/mariadb.mjs";
+import { ROOT, bin, buildIfStale, freePort, migrate, seedWhenEmpty, waitForHttp } from "./lib/project.mjs";
+import { startMailStandIn } from "./lib/mail-stand-in.mjs";
+
+// `npm test -- cues plot` runs only test files whose path contains one of the words (still all three
+// suites). TEST_DIST_DIR and TEST_RESULTS_DIR let several runs share one checkout without colliding.
+const FILTERS = process.argv.slice(2).filter((a) => !a.startsWith("-"));
+const RESULTS = path.resolve(ROOT, process.env.TEST_RESULTS_DIR ?? "test-results");
+const DIST_DIR = process.env.TEST_DIST_DIR ?? ".next-test";
+const cleanups = [];
+const totals = { passed: 0, failed: 0, skipped: 0 };
+
+async function cleanup() {
+  for (const fn of cleanups.reverse()) {
+    try {
+      await fn();
+    } catch (err) {
+      log(`cleanup: ${err.message}`);
+    }
+  }
+  cleanups.length = 0;
+}
+for (const sig of ["SIGINT", "SIGTERM"]) {
+  process.on(sig, async () => {
+    await cleanup();
+    process.exit(130);
+  });
+}
+
+function runVitest(name, configFile, dir, env) {
+  const args = ["--config", configFile, "--dir", dir, ...(FILTERS.length ? ["--passWithNoTests", ...FILTERS] : [])];
+  const report = path.join(RESULTS, `${name}.json`);
+  rmSync(report, { force: true });
+  return new Promise((resolve) => {
+    const child = spawn(process.execPath, [bin("vitest"), "run", "--reporter=default", "--reporter=json", `--outputFile.json=${report}`, ...args], {
+      cwd: ROOT,
+      stdio: "inherit",
+      env: { ...process.env, ...env, NO_COLOR: "1", FORCE_COLOR: "0" },
+    });
+    child.on("exit", (code) => {
+      count(name, report, code);
+      resolve(code);
+    });
+  });
+}
+
+/** Adds a suite's JSON report to the totals; a suite that crashed without a report counts as one failure. */
+function count(name, report, code) {
+  if (!existsSync(report)) {
+    log(`${name}: no report written (exit ${code}); counted as 1 failure.`);
+    totals.failed += 1;
+    return;
+  }
+  const r = JSON.parse(readFileSync(report, "utf8"));
+  // A file that fails to load has no test results of its own: count it as a failure too.
+  const brokenFiles = r.testResults.filter((f) => f.status === "failed" && f.assertionResults.every((a) => a.status !== "failed")).length;
+  totals.passed += r.numPassedTests;
+  totals.failed += r.numFailedTests + brokenFiles;
+  totals.skipped += r.numPendingTests + r.numTodoTests;
+  log(`${name}: ${r.numPassedTests} passed, ${r.numFailedTests + brokenFiles} failed`);
+}
+
+async function main() {
+  mkdirSync(RESULTS, { recursive: true });
+  ensurePackages(["mariadb", "mariadbClient", "chromium", "pdftoppm", "fonts"]);
+  ensureNodeModules(ROOT);
+
+  const dbDir = mkdtempSync(path.join(os.tmpdir(), "throwline-test-db-"));
+  cleanups.push(() => rmSync(dbDir, { recursive: true, force: true }));
+  const db = await startMariaDb({ dir: dbDir, port: await freePort(), password: randomBytes(12).toString("hex") });
+  cleanups.push(() => db.stop());
+  const mail = await startMailStandIn({ port: await freePort(), outboxDir: path.join(dbDir, "outbox") });
+  cleanups.push(() => mail.stop());
+
+  const env = {
+    DATABASE_URL: db.url,
+    SESSION_SECRET: randomBytes(36).toString("base64url"),
+    SMTP_URL: mail.url,
+    MAIL_OUTBOX_DIR: mail.outboxDir,
+    STORAGE_DIR: path.join(dbDir, "uploads"),
+    NEXT_TELEMETRY_DISABLED: "1",
+  };
+  migrate(env);
+  await seedWhenEmpty(env);
+
+  await runVitest("unit", "vitest.config.mts", "tests/unit", env);
+
+  let serverUp = false;
+  try {
+    buildIfStale(DIST_DIR, env);
+    const port = await freePort();
+    const baseUrl = `http://127.0.0.1:${port}`;
+    const server = spawn(process.execPath, [bin("next"), "start", "-p", String(port), "-H", "127.0.0.1"], {
+      cwd: ROOT,
+      stdio: ["ignore", "ignore", "inherit"],
+      env: { ...process.env, ...env, NEXT_DIST_DIR: DIST_DIR, NODE_ENV: "production", TEST_RESULTS_DIR: RESULTS },
+    });
+    cleanups.push(
+      () =>
+        new Promise((resolve) => {
+          if (server.exitCode !== null) return resolve();
+          server.once("exit", resolve);
+          server.kill("SIGTERM");
+        }),
+    );
+    await waitForHttp(`${baseUrl}/api/health`);
+    serverUp = true;
+    Object.assign(env, { APP_URL: baseUrl });
+  } catch (err) {
+    log(`The app could not be built or started: ${err.message}`);
+    totals.failed += 1;
+  }
+
+  if (serverUp) {
+    await runVitest("integration", "vitest.config.mts", "tests/integration", env);
+    await runVitest("e2e", "vitest.e2e.config.mts", "tests/e2e", env);
+  }
+}
+
+let exitCode = 1;
+try {
+  await main();
+} catch (err) {
+  log(`The test run stopped early: ${err.stack ?? err.message}`);
+  totals.failed += 1;
+} finally {
+  await cleanup();
+  const skipped = totals.skipped ? `, ${totals.skipped} skipped` : "";
+  process.stdout.write(`\n${totals.passed} passed, ${totals.failed} failed${skipped}\n`);
+  exitCode = totals.failed === 0 && totals.passed > 0 ? 0 : 1;
+}
+process.exit(exitCode);

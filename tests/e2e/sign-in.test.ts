@@ -1,0 +1,68 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { BrowserContext } from "playwright-core";
+import { DEMO, openBrowser, screenshot, signIn } from "./support/browser";
+
+let browser: BrowserContext;
+beforeAll(async () => {
+  browser = await openBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+async function freshPage() {
+  await browser.clearCookies();
+  return browser.newPage();
+}
+
+describe("each demo user lands on the right page", () => {
+  const cases: Array<[string, string, RegExp, string]> = [
+    ["designer", DEMO.designer, /\/productions\/\d+$/, "Where things stand"],
+    ["electrician", DEMO.electrician, /\/productions\/\d+$/, "Where things stand"],
+    ["stage-manager", DEMO.stageManager, /\/productions\/\d+\/cues$/, "Cues"],
+    ["viewer", DEMO.viewer, /\/productions\/\d+$/, "Where things stand"],
+  ];
+  for (const [name, email, path, text] of cases) {
+    it(`${name} lands on ${path}`, async () => {
+      const page = await freshPage();
+      await signIn(page, email);
+      expect(new URL(page.url()).pathname).toMatch(path);
+      await expect(page.getByTestId("production-name").textContent()).resolves.toContain("Salt and Lantern");
+      await expect(page.getByText(text).first().isVisible()).resolves.toBe(true);
+      await screenshot(page, `landing-${name}`);
+      await page.close();
+    });
+  }
+});
+
+describe("sign-in errors", () => {
+  it("shows one plain message for a wrong password", async () => {
+    const page = await freshPage();
+    await page.goto("/sign-in");
+    await page.getByLabel("E-mail").fill(DEMO.designer);
+    await page.getByLabel("Password").fill("wrong-password");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await page.getByRole("alert").filter({ hasText: "do not match" }).waitFor();
+    expect(new URL(page.url()).pathname).toBe("/sign-in");
+    await page.close();
+  });
+});
+
+describe("theme and sign-out", () => {
+  it("toggles the dark theme, remembers it, and signs out", async () => {
+    const page = await freshPage();
+    await signIn(page, DEMO.electrician);
+    const isDark = () => page.evaluate(() => document.documentElement.classList.contains("dark"));
+    const before = await isDark();
+    await page.getByTestId("theme-toggle").click();
+    expect(await isDark()).toBe(!before);
+    await page.reload();
+    expect(await isDark()).toBe(!before);
+    if (!before) await screenshot(page, "overview-dark");
+    await page.getByRole("button", { name: "Sign out" }).click();
+    await page.waitForURL("**/sign-in");
+    await page.goto("/productions");
+    await page.waitForURL("**/sign-in");
+    await page.close();
+  });
+});

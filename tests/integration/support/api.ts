@@ -1,0 +1,60 @@
+// A small HTTP client with a cookie jar, for integration tests through the real route handlers.
+export const BASE_URL = process.env.APP_URL ?? "http://127.0.0.1:3000";
+export const DEMO_PASSWORD = "lantern-demo-2026";
+
+export class ApiSession {
+  private cookie = "";
+
+  async request(method: string, path: string, body?: unknown, rawBody?: string) {
+    const res = await fetch(BASE_URL + path, {
+      method,
+      redirect: "manual",
+      headers: {
+        ...(this.cookie ? { cookie: this.cookie } : {}),
+        ...(body !== undefined || rawBody !== undefined ? { "content-type": "application/json" } : {}),
+      },
+      body: rawBody ?? (body !== undefined ? JSON.stringify(body) : undefined),
+    });
+    const setCookie = res.headers.getSetCookie();
+    for (const c of setCookie) {
+      const [pair] = c.split(";");
+      this.cookie = pair.endsWith("=") ? "" : pair;
+    }
+    const text = await res.text();
+    let json: any = null;
+    try {
+      json = text ? JSON.parse(text) : null;
+    } catch {
+      json = { raw: text };
+    }
+    return { status: res.status, json };
+  }
+
+  get = (path: string) => this.request("GET", path);
+  post = (path: string, body?: unknown) => this.request("POST", path, body);
+  patch = (path: string, body?: unknown) => this.request("PATCH", path, body);
+
+  async signIn(email: string, password = DEMO_PASSWORD) {
+    const r = await this.post("/api/auth/sign-in", { email, password });
+    if (r.status !== 200) throw new Error(`sign-in failed for ${email}: ${r.status} ${JSON.stringify(r.json)}`);
+    return this;
+  }
+}
+
+export const uniqueEmail = (tag: string) => `${tag}-${Date.now()}-${Math.floor(Math.random() * 1e6)}@example.test`;
+
+/** Signs up a fresh account and returns its session. */
+export async function freshUser(tag: string) {
+  const s = new ApiSession();
+  const email = uniqueEmail(tag);
+  const r = await s.post("/api/auth/sign-up", { name: `Test ${tag}`, email, password: "a-long-test-password" });
+  if (r.status !== 201) throw new Error(`sign-up failed: ${r.status} ${JSON.stringify(r.json)}`);
+  return { session: s, email, user: r.json.user };
+}
+
+export async function demoProductionId(session: ApiSession): Promise<number> {
+  const r = await session.get("/api/productions");
+  const p = r.json.productions.find((x: { name: string }) => x.name === "Salt and Lantern");
+  if (!p) throw new Error("demo production not found");
+  return p.id;
+}

@@ -1,0 +1,76 @@
+import { describe, expect, it } from "vitest";
+import { can, canEditField, forbiddenFields, PERMISSIONS, type Member, type Permission } from "@/lib/auth/policy";
+import { ROLES, type Role } from "@/lib/auth/roles";
+
+// The role table of shared/DESIGN.md ("Roles"), written out here independently of lib/auth/policy.ts
+// so that a change to either one is caught. Y = allowed.
+const EXPECTED: Record<Permission, Record<Role, boolean>> = {
+  "production.view": { designer: true, electrician: true, stage_manager: true, viewer: true },
+  "settings.edit": { designer: true, electrician: false, stage_manager: false, viewer: false },
+  "plot.edit": { designer: true, electrician: false, stage_manager: false, viewer: false },
+  "rig.editElectrics": { designer: true, electrician: true, stage_manager: false, viewer: false },
+  "rig.import": { designer: true, electrician: true, stage_manager: false, viewer: false },
+  "rig.export": { designer: true, electrician: true, stage_manager: true, viewer: true },
+  "cues.edit": { designer: true, electrician: false, stage_manager: false, viewer: false },
+  "cues.editCallNotes": { designer: true, electrician: false, stage_manager: true, viewer: false },
+  "studies.view": { designer: true, electrician: true, stage_manager: true, viewer: true },
+  "studies.run": { designer: true, electrician: true, stage_manager: false, viewer: false },
+  "revisions.issue": { designer: true, electrician: true, stage_manager: false, viewer: false },
+  "team.manage": { designer: false, electrician: false, stage_manager: false, viewer: false },
+};
+
+describe("role table (DESIGN.md, Roles)", () => {
+  for (const permission of PERMISSIONS) {
+    for (const role of ROLES) {
+      it(`${role} ${EXPECTED[permission][role] ? "may" : "may not"} ${permission}`, () => {
+        expect(can({ role, isOwner: false }, permission)).toBe(EXPECTED[permission][role]);
+      });
+    }
+  }
+
+  it("team management belongs to the owner whatever the role", () => {
+    for (const role of ROLES) expect(can({ role, isOwner: true }, "team.manage")).toBe(true);
+  });
+
+  it("a non-member can do nothing", () => {
+    for (const permission of PERMISSIONS) expect(can(null, permission)).toBe(false);
+  });
+});
+
+describe("field-level rules for fixtures", () => {
+  const designer: Member = { role: "designer", isOwner: false };
+  const electrician: Member = { role: "electrician", isOwner: false };
+  const stageManager: Member = { role: "stage_manager", isOwner: false };
+  const designerFields = ["channel", "colour", "purpose", "focusX", "focusY", "focusPointId", "coneDeg", "softnessDeg", "shutterCuts", "x", "y", "positionId"];
+  const electricsFields = ["circuit", "dimmer", "universe", "address", "dmxMode", "fixtureTypeId", "hung", "focused", "focusNotes"];
+
+  it("the designer edits both groups", () => {
+    expect(forbiddenFields(designer, "fixture", [...designerFields, ...electricsFields])).toEqual([]);
+  });
+  it("the electrician edits electrics, hang and focus status but not the design", () => {
+    expect(forbiddenFields(electrician, "fixture", electricsFields)).toEqual([]);
+    expect(forbiddenFields(electrician, "fixture", designerFields)).toEqual(designerFields);
+  });
+  it("the stage manager and viewer edit no fixture field", () => {
+    for (const m of [stageManager, { role: "viewer", isOwner: true } as Member]) {
+      expect(forbiddenFields(m, "fixture", [...designerFields, ...electricsFields])).toHaveLength(designerFields.length + electricsFields.length);
+    }
+  });
+  it("an unknown field is refused for everyone", () => {
+    expect(canEditField(designer, "fixture", "productionId")).toBe(false);
+    expect(canEditField(designer, "fixture", "version")).toBe(false);
+  });
+});
+
+describe("field-level rules for cues and types", () => {
+  it("the stage manager edits page and call note only", () => {
+    const sm: Member = { role: "stage_manager", isOwner: false };
+    expect(forbiddenFields(sm, "cue", ["page", "callNote"])).toEqual([]);
+    expect(forbiddenFields(sm, "cue", ["number", "upTime", "label", "follow"])).toEqual(["number", "upTime", "label", "follow"]);
+  });
+  it("the electrician edits a type's wattage and weight but not its optics", () => {
+    const el: Member = { role: "electrician", isOwner: false };
+    expect(forbiddenFields(el, "fixtureType", ["wattage", "weightKg"])).toEqual([]);
+    expect(forbiddenFields(el, "fixtureType", ["coneMaxDeg", "peakCandela"])).toEqual(["coneMaxDeg", "peakCandela"]);
+  });
+});

@@ -1,0 +1,17 @@
+import { defineConfig } from "vitest/config";
+import path from "node:path";
+
+const root = path.dirname(new URL(import.meta.url).pathname);
+
+// End-to-end suite: drives Debian's Chromium (playwright-core, no browser download) against the
+// server that scripts/test.mjs built and started (APP_URL).
+export default defineConfig({
+  resolve: { alias: { "@": root } },
+  test: {
+    include: ["tests/e2e/**/*.test.ts"],
+    environment: "node",
+    testTimeout: 90_000,
+    hookTimeout: 90_000,
+    fileParallelism: false,
+  },
+});
