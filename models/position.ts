@@ -1,18 +1,7 @@
+import { POSITION_KINDS, type PositionKind } from "@/lib/rig/position-kinds";
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
 
-export const POSITION_KINDS = [
-  "overhead-pipe",
-  "truss",
-  "boom",
-  "ladder",
-  "box-boom",
-  "foh-bridge",
-  "foh-rail",
-  "pipe-end",
-  "floor",
-  "flying-electric",
-] as const;
-export type PositionKind = (typeof POSITION_KINDS)[number];
+export { POSITION_KINDS, type PositionKind };
 
 /** A hanging position. Lines (pipes, trusses, rails) have both ends; booms, ladders and floor spots a single point. */
 export class Position extends Model<InferAttributes<Position>, InferCreationAttributes<Position>> {

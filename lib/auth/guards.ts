@@ -1,5 +1,6 @@
 import "server-only";
 import { AppError, forbidden } from "@/lib/errors";
+import { parseId } from "@/lib/http/respond";
 import { getCurrentUser } from "./session";
 import { can, type Member, type Permission } from "./policy";
 import { getMembership } from "@/lib/data/memberships";
@@ -13,12 +14,6 @@ export async function requireUser(): Promise<CurrentUser> {
   return user;
 }
 
-/** Parses a production id from the URL; anything that is not a positive integer is simply not found. */
-export function parseProductionId(raw: string): number {
-  const id = /^\d{1,10}$/.test(raw) ? Number(raw) : NaN;
-  if (!Number.isSafeInteger(id) || id <= 0) throw new AppError("not_found", "That production was not found.");
-  return id;
-}
 
 /**
  * The signed-in member of a production, checked against the role table. Outsiders get 404 (the
@@ -26,7 +21,7 @@ export function parseProductionId(raw: string): number {
  */
 export async function requireMember(rawProductionId: string | number, permission: Permission = "production.view"): Promise<MemberContext> {
   const user = await requireUser();
-  const productionId = typeof rawProductionId === "number" ? rawProductionId : parseProductionId(rawProductionId);
+  const productionId = typeof rawProductionId === "number" ? rawProductionId : parseId(rawProductionId, "That production");
   const membership = await getMembership({ userId: user.id, productionId });
   if (!membership) throw new AppError("not_found", "That production was not found.");
   const member: Member = { role: membership.role, isOwner: membership.isOwner };

@@ -1,7 +1,7 @@
 import "server-only";
 import { getDb, type Fixture, type FixtureType, type FocusPoint, type Position } from "@/models";
 import { AppError, notFound } from "@/lib/errors";
-import type { FixturePatch } from "@/lib/validation/fixture";
+import type { FixtureCreate, FixturePatch } from "@/lib/validation/fixture";
 import { computeFixtureGeometry, type FixtureGeometry } from "@/lib/rig/fixture-geometry";
 import { unitSortKey } from "@/lib/rig/unit-number";
 import { iso, versionedUpdate } from "./versioned";
@@ -202,4 +202,51 @@ export async function updateFixture({ productionId, fixtureId, patch, userId }: 
     await recordChange({ productionId, userId, entity: "fixture", entityId: fixtureId, action: "update", before: toFixtureRecord(before), after: toFixtureRecord(after) }, transaction);
   });
   return (await getFixtureById({ productionId, fixtureId }))!;
+}
+
+/** Creates fixtures in one transaction (all or none); returns them with computed geometry. */
+export async function createFixtures({ productionId, userId, inputs }: { productionId: number; userId: number; inputs: FixtureCreate[] }): Promise<FixtureDto[]> {
+  const { sequelize, Fixture } = getDb();
+  const ids = await sequelize.transaction(async (transaction) => {
+    const created: number[] = [];
+    for (const [i, input] of inputs.entries()) {
+      const merged = { focusPointId: null, address: null, footprint: null, ...input } as FixtureRecord;
+      await checkReferences(productionId, merged).catch((err) => {
+        if (err instanceof AppError && inputs.length > 1) err.message = `Fixture ${i + 1}: ${err.message}`;
+        throw err;
+      });
+      const row = await Fixture.create({ ...emptyFixture(), ...input, productionId, unitSort: unitSortKey(input.unitNumber) }, { transaction }).catch((err) => {
+        if ((err as { name?: string }).name === "SequelizeUniqueConstraintError") {
+          throw new AppError("bad_request", `Unit ${input.unitNumber} already exists on that position.`, { fieldErrors: { unitNumber: ["already used on this position"] } });
+        }
+        throw err;
+      });
+      await recordChange({ productionId, userId, entity: "fixture", entityId: row.id, action: "create", after: toFixtureRecord(row) }, transaction);
+      created.push(row.id);
+    }
+    return created;
+  });
+  const all = await getFixturesByProduction({ productionId });
+  return all.filter((f) => ids.includes(f.id));
+}
+
+function emptyFixture() {
+  return {
+    focusPointId: null, bodyKey: null, cell: null, channel: null, universe: null, address: null, dmxMode: null, footprint: null,
+    circuit: null, dimmer: null, colour: null, gobo: null, purpose: null, lensHeight: null, focusX: null, focusY: null,
+    coneDeg: null, softnessDeg: null, shutterCuts: null, irisPercent: null, notes: null, focusNotes: null, focusedAt: null, focusedBy: null,
+  };
+}
+
+/** Deletes fixtures of this production by id, recording each; unknown ids are a 404 and nothing is deleted. */
+export async function deleteFixtures({ productionId, userId, fixtureIds }: { productionId: number; userId: number; fixtureIds: number[] }) {
+  const { sequelize, Fixture } = getDb();
+  await sequelize.transaction(async (transaction) => {
+    const rows = await Fixture.findAll({ where: { productionId, id: fixtureIds }, transaction });
+    if (rows.length !== new Set(fixtureIds).size) throw notFound("Fixture");
+    for (const row of rows) {
+      await recordChange({ productionId, userId, entity: "fixture", entityId: row.id, action: "delete", before: toFixtureRecord(row) }, transaction);
+    }
+    await Fixture.destroy({ where: { productionId, id: fixtureIds }, transaction });
+  });
 }

@@ -36,3 +36,10 @@ export function readQuery<S extends z.ZodType>(req: Request, schema: S): z.infer
   if (!parsed.success) throw fromZodError(parsed.error);
   return parsed.data;
 }
+
+/** Parses a numeric id from a URL segment; anything else is simply not found. */
+export function parseId(raw: string, what: string): number {
+  const id = /^\d{1,10}$/.test(raw) ? Number(raw) : NaN;
+  if (!Number.isSafeInteger(id) || id <= 0) throw new AppError("not_found", `${what} was not found.`);
+  return id;
+}

@@ -6,8 +6,10 @@ export type Aim = { throw: number; tiltDeg: number; panDeg: number };
 /** Axis of a beam in the angles the geometry needs: phi from straight down, and the plan bearing. */
 export type Axis = {
   throw: number;
-  /** Angle of the axis from straight down, radians, 0..π. */
+  /** Angle of the axis from straight down, radians, 0..π, with its sine and cosine from the vector itself. */
   phi: number;
+  sinPhi: number;
+  cosPhi: number;
   /** Plan bearing as a unit vector (cos, sin of pan); (1, 0) when the axis is vertical. */
   ux: number;
   uy: number;
@@ -27,7 +29,11 @@ export function axisOf(source: Vec3, focus: Vec3): Axis {
     throw new RangeError("The focus point is at the lens: a beam needs a throw longer than zero.");
   }
   const phi = Math.atan2(plan, -dz);
-  return plan > 0 ? { throw: t, phi, ux: dx / plan, uy: dy / plan } : { throw: t, phi, ux: 1, uy: 0 };
+  const sinPhi = plan / t;
+  const cosPhi = -dz / t;
+  return plan > 0
+    ? { throw: t, phi, sinPhi, cosPhi, ux: dx / plan, uy: dy / plan }
+    : { throw: t, phi, sinPhi, cosPhi, ux: 1, uy: 0 };
 }
 
 /**

@@ -1,6 +1,8 @@
-import { beamLux, prepareBeam, type LitBeam } from "./illuminance";
+import { prepareBeam, type LitBeam, type PreparedBeam } from "./illuminance";
 import { ellipseBounds, poolAtPlane } from "./pool";
 import { pointInPolygon } from "./polygon";
+import { coneRowSpan } from "./span";
+import { profileTable, TABLE_STEPS } from "./table";
 import { assertFinite } from "./validate";
 import type { Point } from "./vector";
 
@@ -45,53 +47,97 @@ function checkGrid(i: GridInput): { cols: number; rows: number } {
 }
 
 /**
- * Cell range a beam can reach. Culling is exact, not an approximation: outside its outer ellipse a beam
- * gives 0 (every profile is 0 beyond the cone). An open pool or an upward axis (whose lower edge may still
- * spill onto the plane) gets the whole grid; a lens at or below the plane lights nothing on it.
+ * Rows a beam can reach: its outer pool's bounding box, with one spare cell each side for rounding. Culling
+ * is exact, not an approximation: outside its cone a beam gives 0 (every profile is 0 beyond the cone).
+ * An open pool or an upward axis (whose lower edge may still spill onto the plane) keeps every row; the
+ * per-row cone span in span.ts then trims those too.
  */
-function reach(beam: LitBeam, planeZ: number, ox: number, oy: number, res: number, cols: number, rows: number) {
-  const all = { c0: 0, c1: cols - 1, r0: 0, r1: rows - 1 };
-  if (beam.source.z <= planeZ) return null;
+function reachRows(beam: LitBeam, planeZ: number, oy: number, res: number, rows: number): [number, number, number, number] | null {
   const pool = poolAtPlane({ ...beam, planeZ });
-  if (pool.status !== "ok" || !pool.outer) return all;
+  if (pool.status !== "ok" || !pool.outer) return [0, rows - 1, -Infinity, Infinity];
   const bb = ellipseBounds(pool.outer);
-  // One spare cell each side absorbs rounding between the box and the per-point cone test.
-  const c0 = Math.max(0, Math.floor((bb.minX - ox) / res) - 1);
-  const c1 = Math.min(cols - 1, Math.ceil((bb.maxX - ox) / res) + 1);
   const r0 = Math.max(0, Math.floor((bb.minY - oy) / res) - 1);
   const r1 = Math.min(rows - 1, Math.ceil((bb.maxY - oy) / res) + 1);
-  return c0 > c1 || r0 > r1 ? null : { c0, c1, r0, r1 };
+  return r0 > r1 ? null : [r0, r1, bb.minX, bb.maxX];
 }
 
-/** Illuminance over a rectangle of the stage at cell centres, summed over the beams. */
+/** Adds one beam's lux to acc; returns the number of cells evaluated. The loop allocates nothing. */
+function addBeam(acc: Float64Array, b: PreparedBeam, g: Layout, beam: LitBeam, cull: boolean, span: Int32Array): number {
+  const h = b.sz - g.pz;
+  let r0 = 0;
+  let r1 = g.rows - 1;
+  let cMin = 0;
+  let cMax = g.cols - 1;
+  if (cull) {
+    const reach = reachRows(beam, g.pz, g.oy, g.res, g.rows);
+    if (!reach) return 0;
+    [r0, r1] = reach;
+    cMin = Math.max(0, Math.floor((reach[2] - g.ox) / g.res) - 1);
+    cMax = Math.min(g.cols - 1, Math.ceil((reach[3] - g.ox) / g.res) + 1);
+  }
+  const t = profileTable(b.prof);
+  const { values: table, tau0, scale, invRange } = t;
+  const { sx, sy, ax, ay, az, intensity } = b;
+  const { cosOuter, cosCore } = b.prof;
+  const last = TABLE_STEPS;
+  let evaluations = 0;
+  for (let row = r0; row <= r1; row++) {
+    const wy = g.oy + row * g.res - sy;
+    let c0 = cMin;
+    let c1 = cMax;
+    if (cull) {
+      if (!coneRowSpan(ax, ay, az, cosOuter, wy, h, sx, g.ox, g.res, g.cols, span)) continue;
+      c0 = Math.max(c0, span[0]);
+      c1 = Math.min(c1, span[1]);
+    }
+    const base = row * g.cols;
+    const dyz = wy * ay - h * az;
+    const wy2h2 = wy * wy + h * h;
+    for (let col = c0; col <= c1; col++) {
+      const wx = g.ox + col * g.res - sx;
+      const d2 = wx * wx + wy2h2;
+      if (d2 < 1e-18) continue; // as in beamLux: a point at the lens is not a lit surface
+      const d = Math.sqrt(d2);
+      const dot = wx * ax + dyz;
+      if (dot < cosOuter * d) continue;
+      let rel = 1;
+      if (dot < cosCore * d) {
+        const x = ((1 - dot / d) * invRange - tau0) * scale;
+        const j = x | 0;
+        rel = j >= last ? table[last] : table[j] + (x - j) * (table[j + 1] - table[j]);
+      }
+      acc[base + col] += (intensity * rel * h) / (d2 * d);
+    }
+    evaluations += c1 - c0 + 1;
+  }
+  return evaluations;
+}
+
+type Layout = { cols: number; rows: number; res: number; ox: number; oy: number; pz: number };
+
+/**
+ * Illuminance over a rectangle of the stage at cell centres, summed over the beams. The profile comes from
+ * a per-beam table (table.ts), so a cell can differ from illuminanceAt by up to ~1e-3 of the beam's peak.
+ */
 export function illuminanceGrid(i: GridInput): Grid {
   const { cols, rows } = checkGrid(i);
   const res = i.resolution;
-  const ox = i.bounds.minX + res / 2;
-  const oy = i.bounds.minY + res / 2;
-  const pz = i.planeZ;
+  const g: Layout = { cols, rows, res, ox: i.bounds.minX + res / 2, oy: i.bounds.minY + res / 2, pz: i.planeZ };
   const cull = i.cull !== false;
-  // Summed in float64 and stored as float32 once, so culled and unculled sums match bit for bit.
+  // Summed in float64 and stored as float32 once; culling only skips exact zeros, so both sums match.
   const acc = new Float64Array(cols * rows);
+  const span = new Int32Array(2);
   let evaluations = 0;
   for (const beam of i.beams) {
     const b = prepareBeam(beam);
-    if (b.intensity === 0) continue;
-    const r = cull ? reach(beam, pz, ox, oy, res, cols, rows) : { c0: 0, c1: cols - 1, r0: 0, r1: rows - 1 };
-    if (!r) continue;
-    for (let row = r.r0; row <= r.r1; row++) {
-      const py = oy + row * res;
-      const base = row * cols;
-      for (let col = r.c0; col <= r.c1; col++) {
-        acc[base + col] += beamLux(b, ox + col * res, py, pz);
-      }
-    }
-    evaluations += (r.r1 - r.r0 + 1) * (r.c1 - r.c0 + 1);
+    // A lens at or below the plane lights only the underside of an upward-facing surface.
+    if (b.intensity === 0 || b.sz <= g.pz) continue;
+    evaluations += addBeam(acc, b, g, beam, cull, span);
   }
-  const values = Float32Array.from(acc);
-  const s = zoneStats({ values, cols, rows, originX: ox, originY: oy, resolution: res });
+  const values = new Float32Array(acc);
+  const s = zoneStats({ values, cols, rows, originX: g.ox, originY: g.oy, resolution: res });
   return {
-    values, cols, rows, resolution: res, planeZ: pz, originX: ox, originY: oy,
+    values, cols, rows, resolution: res, planeZ: g.pz, originX: g.ox, originY: g.oy,
     min: s.min ?? 0, mean: s.mean ?? 0, max: s.max ?? 0, evaluations,
   };
 }

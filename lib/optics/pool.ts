@@ -33,21 +33,24 @@ export const REASON_AXIS_UP = "The beam is aimed level or upward, so it makes no
 export const REASON_OPEN =
   "The beam's edge reaches the horizon on this plane, so the pool has no far edge: tilt it down or narrow it.";
 
+/** The lens's foot on the plane and the axis, shared by the three cones. */
+type Frame = { h: number; phi: number; sinPhi: number; cosPhi: number; ux: number; uy: number; fx: number; fy: number; rot: number };
+
 /**
- * Conic section of a cone (half-angle alpha, axis phi from straight down) with a plane h below its apex.
- * K = cos²α − sin²φ is computed as cos(φ+α)·cos(φ−α), which keeps its relative precision as φ+α nears 90°.
- * Returns null when the cone reaches the horizon (decided in angle space, not from the sign of K).
+ * Conic section of a cone (half-angle alpha) with the plane. K = cos²α − sin²φ is taken as
+ * cos(φ+α)·cos(φ−α) (passed in, so the soft band can reuse them), which keeps its relative precision as
+ * φ+α nears 90°. Null when the cone reaches the horizon, decided in angle space, not from the sign of K.
  */
-function section(h: number, phi: number, alpha: number, ux: number, uy: number, fx: number, fy: number, rot: number): Ellipse | null {
-  if (phi + alpha >= HALF_PI - HORIZON_TOL) return null;
-  const k = Math.cos(phi + alpha) * Math.cos(phi - alpha);
+function section(f: Frame, alpha: number, cosPlus: number, cosMinus: number): Ellipse | null {
+  if (f.phi + alpha >= HALF_PI - HORIZON_TOL) return null;
+  const k = cosPlus * cosMinus;
   const sa = Math.sin(alpha);
-  const c = (h * Math.sin(phi) * Math.cos(phi)) / k;
+  const c = (f.h * f.sinPhi * f.cosPhi) / k;
   return {
-    centre: { x: fx + c * ux, y: fy + c * uy },
-    semiMajor: (h * sa * Math.cos(alpha)) / k,
-    semiMinor: (h * sa) / Math.sqrt(k),
-    rotationDeg: rot,
+    centre: { x: f.fx + c * f.ux, y: f.fy + c * f.uy },
+    semiMajor: (f.h * sa * Math.cos(alpha)) / k,
+    semiMinor: (f.h * sa) / Math.sqrt(k),
+    rotationDeg: f.rot,
   };
 }
 
@@ -69,29 +72,30 @@ export function poolAtPlane(i: PoolInput): PlanePool {
   const { phi, ux, uy } = axis;
   if (phi > HALF_PI + HORIZON_TOL) return none(REASON_AXIS_UP, warnings);
 
-  const fx = i.source.x;
-  const fy = i.source.y;
-  const rot = noNegZero(Math.atan2(uy, ux) / DEG);
+  const f: Frame = {
+    h, phi, sinPhi: axis.sinPhi, cosPhi: axis.cosPhi, ux, uy, fx: i.source.x, fy: i.source.y,
+    rot: noNegZero(Math.atan2(uy, ux) / DEG),
+  };
   const level = phi >= HALF_PI - HORIZON_TOL;
-  const hitDist = level ? 0 : h * Math.tan(phi);
-  const axisHit = level ? null : { x: fx + hitDist * ux, y: fy + hitDist * uy };
-  const half = section(h, phi, ang.half, ux, uy, fx, fy, rot);
-  const core = ang.core > 0 ? section(h, phi, ang.core, ux, uy, fx, fy, rot) : null;
-  const outer = section(h, phi, ang.outer, ux, uy, fx, fy, rot);
+  const hitDist = level ? 0 : (h * f.sinPhi) / f.cosPhi;
+  const axisHit = level ? null : { x: f.fx + hitDist * ux, y: f.fy + hitDist * uy };
+  // An empty core is the axis itself (half-angle 0), so the band then runs to the axis hit point.
+  const ao = ang.outer;
+  const ac = ang.core > 0 ? ang.core : 0;
+  const cpo = Math.cos(phi + ao);
+  const cmo = Math.cos(phi - ao);
+  const cpc = ac > 0 ? Math.cos(phi + ac) : f.cosPhi;
+  const cmc = ac > 0 ? Math.cos(phi - ac) : f.cosPhi;
+  const half = section(f, ang.half, Math.cos(phi + ang.half), Math.cos(phi - ang.half));
+  const core = ac > 0 ? section(f, ac, cpc, cmc) : null;
+  const outer = section(f, ao, cpo, cmo);
   if (!outer) {
     return { status: "open", reason: REASON_OPEN, axisHit, outer: null, half, core,
       lengthAlong: null, widthAcross: null, band: null, warnings };
   }
   // tan x − tan y = sin(x−y)/(cos x·cos y): exact non-negative band widths without cancelling two tans.
-  // An empty core is the axis itself (half-angle 0), so the band then runs to the axis hit point.
-  const ao = ang.outer;
-  const ac = ang.core > 0 ? ang.core : 0;
   const sd = h * Math.sin(ao - ac);
-  const band = {
-    near: sd / (Math.cos(phi - ac) * Math.cos(phi - ao)),
-    far: sd / (Math.cos(phi + ao) * Math.cos(phi + ac)),
-    across: outer.semiMinor - (core ? core.semiMinor : 0),
-  };
+  const band = { near: sd / (cmc * cmo), far: sd / (cpo * cpc), across: outer.semiMinor - (core ? core.semiMinor : 0) };
   return {
     status: "ok", axisHit, outer, half, core,
     lengthAlong: 2 * outer.semiMajor, widthAcross: 2 * outer.semiMinor, band, warnings,

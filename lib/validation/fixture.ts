@@ -12,10 +12,8 @@ export const shutterCutSchema = z.object({
   b: point,
 });
 
-/** Every field a client may change on a fixture; who may change which is decided by lib/auth/policy. */
-export const fixturePatchSchema = z
-  .object({
-    version: versionSchema,
+/** Every field a client may set on a fixture; who may change which is decided by lib/auth/policy. */
+export const fixtureFieldsSchema = z.object({
     positionId: z.number().int().positive(),
     unitNumber: z.string().trim().regex(/^[0-9]{1,4}[A-Za-z]{0,2}$/, { error: "Unit number is digits with up to two letters, e.g. 7 or 12A" }),
     fixtureTypeId: z.number().int().positive(),
@@ -46,8 +44,13 @@ export const fixturePatchSchema = z
     cell: z.number().int().min(1).max(64).nullable(),
     hung: z.boolean(),
     focused: z.boolean(),
-  })
-  .partial()
-  .required({ version: true })
-  .strict();
+  });
+
+export const fixturePatchSchema = fixtureFieldsSchema.partial().extend({ version: versionSchema }).strict();
 export type FixturePatch = z.infer<typeof fixturePatchSchema>;
+
+export const fixtureCreateSchema = fixtureFieldsSchema
+  .partial()
+  .required({ positionId: true, fixtureTypeId: true, unitNumber: true, x: true, y: true })
+  .strict();
+export type FixtureCreate = z.infer<typeof fixtureCreateSchema>;
