@@ -11,8 +11,11 @@ import { initFocusPoint, FocusPoint } from "./focus-point";
 import { initFixture, Fixture } from "./fixture";
 import { initCue, Cue, CueLevel } from "./cue";
 import { initChangeEntry, ChangeEntry } from "./change-entry";
+import { initAreaZone, AreaZone } from "./area-zone";
+import { initLandmark, Landmark } from "./landmark";
+import { initUpload, Upload } from "./upload";
 
-const models = { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, ChangeEntry };
+const models = { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, ChangeEntry, AreaZone, Landmark, Upload };
 export type Db = typeof models & { sequelize: Sequelize };
 
 function associate() {
@@ -37,7 +40,7 @@ function createDb(): Db {
     pool: { max: 10, min: 0, idle: 10_000, acquire: 10_000 },
     dialectOptions: { timezone: "Z", connectTimeout: 5_000 },
   });
-  for (const init of [initUser, initProduction, initMembership, initPosition, initFixtureType, initFocusPoint, initFixture, initCue, initChangeEntry]) {
+  for (const init of [initUser, initProduction, initMembership, initPosition, initFixtureType, initFocusPoint, initFixture, initCue, initChangeEntry, initAreaZone, initLandmark, initUpload]) {
     init(sequelize);
   }
   associate();
@@ -51,4 +54,4 @@ export function getDb(): Db {
   return holder.__throwlineDb;
 }
 
-export { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, ChangeEntry };
+export { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, ChangeEntry, AreaZone, Landmark, Upload };
