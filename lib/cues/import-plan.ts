@@ -1,0 +1,28 @@
+// Turns cues read from a file into the moves Throwline stores. A file's cue may be meant as a full
+// state (channels it does not list are out) or as changes only (they keep their level): the person
+// importing chooses; Throwline's own exports read the same either way (see usitt-ascii-write.ts).
+import { compareCueNumbers } from "./cue-number";
+import { movesToReach } from "./tracking";
+import type { CueWithMoves } from "./types";
+
+export type ImportMode = "state" | "moves";
+
+export function toStoredMoves<C extends CueWithMoves>(cues: ReadonlyArray<C>, mode: ImportMode): C[] {
+  const ordered = [...cues].sort((a, b) => compareCueNumbers(a.number, b.number));
+  let state = new Map<number, number>();
+  return ordered.map((cue) => {
+    const listed = new Map(Object.entries(cue.levels).map(([ch, l]) => [Number(ch), l]));
+    if (cue.block) {
+      state = new Map([...listed].filter(([, l]) => l > 0));
+      return { ...cue, levels: Object.fromEntries(state) };
+    }
+    if (mode === "moves") {
+      for (const [ch, l] of listed) state.set(ch, l);
+      return { ...cue, levels: Object.fromEntries(listed) };
+    }
+    const target = new Map([...listed].filter(([, l]) => l > 0));
+    const moves = movesToReach(state, target);
+    state = target;
+    return { ...cue, levels: moves };
+  });
+}

@@ -1,0 +1,7 @@
+// Cues: pure helpers (no I/O) shared by the data layer, the route handlers and the screens.
+export * from "./cue-number";
+export * from "./fade-time";
+export * from "./tracking";
+export * from "./summary";
+export * from "./types";
+export * from "./keyboard-entry";

@@ -1,0 +1,90 @@
+// What the stage manager reads: each cue's running time, a one-line summary of what it does to the
+// stage, and the standbys (cues called together because one follows the other within seconds).
+import { countMoves, type TrackedShow } from "./tracking";
+import { formatCueNumber } from "./cue-number";
+
+export type CueTiming = { upTime: number; downTime: number | null; delay: number };
+
+/** What a channel lights: the purposes and focus points (acting areas) of its fixtures. */
+export type ChannelInfo = ReadonlyMap<number, { purposes: readonly string[]; areas: readonly string[] }>;
+
+/**
+ * How long the fade runs from GO until the last channel arrives: the delay plus the up time when
+ * something goes up and the down time when something goes down (the longer of the two). A cue
+ * that moves nothing still takes its time on the console, so then the longer time counts.
+ */
+export function runningTime(cue: CueTiming, moves?: { up: number; down: number }): number {
+  const down = cue.downTime ?? cue.upTime;
+  const none = !moves || (moves.up === 0 && moves.down === 0);
+  const up = none || moves!.up > 0 ? cue.upTime : 0;
+  const dn = none || moves!.down > 0 ? down : 0;
+  return cue.delay + Math.max(up, dn);
+}
+
+const MAX_NAMES = 3;
+
+function names(list: string[]): string {
+  if (list.length <= MAX_NAMES) return list.join(", ");
+  return `${list.slice(0, MAX_NAMES).join(", ")} +${list.length - MAX_NAMES} more`;
+}
+
+/** Acting areas first (where on stage), then purposes (what kind of light), each once. */
+function lit(cols: number[], show: TrackedShow, info: ChannelInfo): string[] {
+  const areas = new Set<string>();
+  const purposes = new Set<string>();
+  for (const col of cols) {
+    const i = info.get(show.channels[col]);
+    i?.areas.forEach((a) => areas.add(a));
+    i?.purposes.forEach((p) => purposes.add(p));
+  }
+  const byName = (a: string, b: string) => a.localeCompare(b, undefined, { numeric: true });
+  return [...[...areas].sort(byName), ...[...purposes].sort(byName)];
+}
+
+/** One line for the cue at `index`, e.g. "4 up, 2 down · brighter: Area 2, front light · darker: cyc". */
+export function summarizeCue(show: TrackedShow, index: number, info: ChannelInfo): { up: number; down: number; text: string } {
+  const { up, down, changed } = countMoves(show, index);
+  if (!changed.length) return { up, down, text: "no level changes" };
+  const now = show.states[index];
+  const before = index > 0 ? show.states[index - 1] : null;
+  const brighter = changed.filter((col) => now[col] > (before ? before[col] : 0));
+  const darker = changed.filter((col) => now[col] < (before ? before[col] : 0));
+  const counts = [up ? `${up} up` : "", down ? `${down} down` : ""].filter(Boolean).join(", ");
+  const parts = [counts];
+  const wasDark = !before || before.every((l) => l === 0);
+  const isDark = now.every((l) => l === 0);
+  if (isDark) parts.push("to blackout");
+  else if (wasDark) parts.push("from dark");
+  const b = lit(brighter, show, info);
+  const d = lit(darker, show, info);
+  if (b.length) parts.push(`brighter: ${names(b)}`);
+  if (d.length && !isDark) parts.push(`darker: ${names(d)}`);
+  return { up, down, text: parts.join(" · ") };
+}
+
+/** Cues that start by themselves this soon after the one before are called in the same standby. */
+export const STANDBY_WINDOW_SECONDS = 5; // Throwline's choice, no source
+
+export type StandbyGroup = { cueIds: number[]; label: string };
+
+/**
+ * Groups cues in running order: a cue whose follow is set and at most `window` seconds joins the
+ * cue before it in one standby ("Standby LX 14 and 14.5"); everything else is its own standby.
+ */
+export function groupStandbys(
+  cues: ReadonlyArray<{ id: number; number: number; follow: number | null }>,
+  window = STANDBY_WINDOW_SECONDS,
+): StandbyGroup[] {
+  const groups: Array<{ cues: Array<{ id: number; number: number }> }> = [];
+  let joinNext = false;
+  for (const cue of cues) {
+    if (joinNext && groups.length) groups[groups.length - 1].cues.push(cue);
+    else groups.push({ cues: [cue] });
+    joinNext = cue.follow != null && cue.follow <= window;
+  }
+  return groups.map((g) => {
+    const nums = g.cues.map((c) => formatCueNumber(c.number));
+    const label = nums.length === 1 ? nums[0] : nums.length === 2 ? `${nums[0]} and ${nums[1]}` : `${nums[0]} to ${nums.at(-1)} (${nums.length} cues)`;
+    return { cueIds: g.cues.map((c) => c.id), label };
+  });
+}
