@@ -2,7 +2,7 @@
 // folder, removed afterwards), migrates and seeds it, runs the unit suite, builds the app, starts it,
 // runs the integration suite (through the route handlers over HTTP) and the end-to-end suite in
 // Debian's Chromium, and ends with one plain line: `N passed, N failed`.
-import { spawn } from "node:child_process";
+import { spawn, spawnSync } from "node:child_process";
 import { randomBytes } from "node:crypto";
 import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync } from "node:fs";
 import os from "node:os";
@@ -71,6 +71,20 @@ function count(name, report, code) {
   log(`${name}: ${r.numPassedTests} passed, ${r.numFailedTests + brokenFiles} failed`);
 }
 
+/** `tsc --noEmit` over the whole tree counts as one test. */
+function typecheck() {
+  log("Type-checking (tsc --noEmit) …");
+  const r = spawnSync(process.execPath, [path.join(ROOT, "node_modules/typescript/bin/tsc"), "--noEmit", "-p", "tsconfig.json"], { cwd: ROOT, encoding: "utf8" });
+  if (r.status === 0) {
+    totals.passed += 1;
+    log("typecheck: passed");
+  } else {
+    totals.failed += 1;
+    process.stdout.write(r.stdout + r.stderr);
+    log("typecheck: failed");
+  }
+}
+
 async function main() {
   mkdirSync(RESULTS, { recursive: true });
   ensurePackages(["mariadb", "mariadbClient", "chromium", "pdftoppm", "fonts"]);
@@ -95,6 +109,7 @@ async function main() {
   await seedWhenEmpty(env);
 
   await runVitest("unit", "vitest.config.mts", "tests/unit", env);
+  if (!FILTERS.length) typecheck();
 
   let serverUp = false;
   try {
