@@ -33,7 +33,9 @@ function isEllipse(s: Ellipse | Point[]): s is Ellipse {
  * Returns [] when nothing of the pool is left.
  */
 export function clipPoolByCuts(shape: Ellipse | Point[], cuts: CutLine[], keepPoint: Point): Point[] {
-  if (cuts.length > MAX_CUTS) throw new RangeError(`A fixture has at most ${MAX_CUTS} shutter cuts (got ${cuts.length}).`);
+  if (cuts.length > MAX_CUTS) {
+    throw new RangeError(`A fixture has at most ${MAX_CUTS} shutter cuts (got ${cuts.length}).`);
+  }
   let poly = isEllipse(shape) ? ellipseToPolygon(shape) : shape.slice();
   cuts.forEach((cut, n) => {
     const len = Math.hypot(cut.b.x - cut.a.x, cut.b.y - cut.a.y);

@@ -52,8 +52,12 @@ function checkGrid(i: GridInput): { cols: number; rows: number } {
  * An open pool or an upward axis (whose lower edge may still spill onto the plane) keeps every row; the
  * per-row cone span in span.ts then trims those too.
  */
-function reachRows(beam: LitBeam, planeZ: number, oy: number, res: number, rows: number): [number, number, number, number] | null {
-  const pool = poolAtPlane({ ...beam, planeZ });
+type Reach = [r0: number, r1: number, minX: number, maxX: number];
+
+function reachRows(beam: LitBeam, planeZ: number, oy: number, res: number, rows: number): Reach | null {
+  const pool = poolAtPlane({
+    source: beam.source, focus: beam.focus, coneDeg: beam.coneDeg, softnessDeg: beam.softnessDeg, planeZ,
+  });
   if (pool.status !== "ok" || !pool.outer) return [0, rows - 1, -Infinity, Infinity];
   const bb = ellipseBounds(pool.outer);
   const r0 = Math.max(0, Math.floor((bb.minY - oy) / res) - 1);
@@ -62,7 +66,9 @@ function reachRows(beam: LitBeam, planeZ: number, oy: number, res: number, rows:
 }
 
 /** Adds one beam's lux to acc; returns the number of cells evaluated. The loop allocates nothing. */
-function addBeam(acc: Float64Array, b: PreparedBeam, g: Layout, beam: LitBeam, cull: boolean, span: Int32Array): number {
+function addBeam(
+  acc: Float64Array, b: PreparedBeam, g: Layout, beam: LitBeam, cull: boolean, span: Int32Array,
+): number {
   const h = b.sz - g.pz;
   let r0 = 0;
   let r1 = g.rows - 1;

@@ -34,22 +34,32 @@ export const REASON_OPEN =
   "The beam's edge reaches the horizon on this plane, so the pool has no far edge: tilt it down or narrow it.";
 
 /** The lens's foot on the plane and the axis, shared by the three cones. */
-type Frame = { h: number; phi: number; sinPhi: number; cosPhi: number; ux: number; uy: number; fx: number; fy: number; rot: number };
+type Frame = {
+  h: number; phi: number; sinPhi: number; cosPhi: number; ux: number; uy: number; fx: number; fy: number; rot: number;
+};
+
+/** One cone's half-angle with the cosines the section and the soft band share. */
+type Cone = { alpha: number; sin: number; cos: number; cosPlus: number; cosMinus: number };
+
+function cone(f: Frame, alpha: number): Cone {
+  const sa = Math.sin(alpha);
+  const ca = Math.cos(alpha);
+  // cos(φ±α) by the sum formulas: as precise near the horizon as cos of the rounded sum, and no trig calls.
+  return { alpha, sin: sa, cos: ca, cosPlus: f.cosPhi * ca - f.sinPhi * sa, cosMinus: f.cosPhi * ca + f.sinPhi * sa };
+}
 
 /**
- * Conic section of a cone (half-angle alpha) with the plane. K = cos²α − sin²φ is taken as
- * cos(φ+α)·cos(φ−α) (passed in, so the soft band can reuse them), which keeps its relative precision as
- * φ+α nears 90°. Null when the cone reaches the horizon, decided in angle space, not from the sign of K.
+ * Conic section of a cone with the plane, K = cos²α − sin²φ taken as cos(φ+α)·cos(φ−α). Null when the cone
+ * reaches the horizon, decided in angle space with a tolerance: at φ+α = 90° K comes out near 2e-16, not 0.
  */
-function section(f: Frame, alpha: number, cosPlus: number, cosMinus: number): Ellipse | null {
-  if (f.phi + alpha >= HALF_PI - HORIZON_TOL) return null;
-  const k = cosPlus * cosMinus;
-  const sa = Math.sin(alpha);
-  const c = (f.h * f.sinPhi * f.cosPhi) / k;
+function section(f: Frame, c: Cone): Ellipse | null {
+  if (f.phi + c.alpha >= HALF_PI - HORIZON_TOL) return null;
+  const k = c.cosPlus * c.cosMinus;
+  const centre = (f.h * f.sinPhi * f.cosPhi) / k;
   return {
-    centre: { x: f.fx + c * f.ux, y: f.fy + c * f.uy },
-    semiMajor: (f.h * sa * Math.cos(alpha)) / k,
-    semiMinor: (f.h * sa) / Math.sqrt(k),
+    centre: { x: f.fx + centre * f.ux, y: f.fy + centre * f.uy },
+    semiMajor: (f.h * c.sin * c.cos) / k,
+    semiMinor: (f.h * c.sin) / Math.sqrt(k),
     rotationDeg: f.rot,
   };
 }
@@ -80,22 +90,22 @@ export function poolAtPlane(i: PoolInput): PlanePool {
   const hitDist = level ? 0 : (h * f.sinPhi) / f.cosPhi;
   const axisHit = level ? null : { x: f.fx + hitDist * ux, y: f.fy + hitDist * uy };
   // An empty core is the axis itself (half-angle 0), so the band then runs to the axis hit point.
-  const ao = ang.outer;
-  const ac = ang.core > 0 ? ang.core : 0;
-  const cpo = Math.cos(phi + ao);
-  const cmo = Math.cos(phi - ao);
-  const cpc = ac > 0 ? Math.cos(phi + ac) : f.cosPhi;
-  const cmc = ac > 0 ? Math.cos(phi - ac) : f.cosPhi;
-  const half = section(f, ang.half, Math.cos(phi + ang.half), Math.cos(phi - ang.half));
-  const core = ac > 0 ? section(f, ac, cpc, cmc) : null;
-  const outer = section(f, ao, cpo, cmo);
+  const co = cone(f, ang.outer);
+  const cc = cone(f, ang.core > 0 ? ang.core : 0);
+  const half = section(f, cone(f, ang.half));
+  const core = ang.core > 0 ? section(f, cc) : null;
+  const outer = section(f, co);
   if (!outer) {
     return { status: "open", reason: REASON_OPEN, axisHit, outer: null, half, core,
       lengthAlong: null, widthAcross: null, band: null, warnings };
   }
   // tan x − tan y = sin(x−y)/(cos x·cos y): exact non-negative band widths without cancelling two tans.
-  const sd = h * Math.sin(ao - ac);
-  const band = { near: sd / (cmc * cmo), far: sd / (cpo * cpc), across: outer.semiMinor - (core ? core.semiMinor : 0) };
+  const sd = f.h * (co.sin * cc.cos - co.cos * cc.sin);
+  const band = {
+    near: sd / (cc.cosMinus * co.cosMinus),
+    far: sd / (co.cosPlus * cc.cosPlus),
+    across: outer.semiMinor - (core ? core.semiMinor : 0),
+  };
   return {
     status: "ok", axisHit, outer, half, core,
     lengthAlong: 2 * outer.semiMajor, widthAcross: 2 * outer.semiMinor, band, warnings,

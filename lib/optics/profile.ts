@@ -67,7 +67,9 @@ export function profileAt(p: Profile, beta: number): number {
  * the 50 % half-angle βb = (θ−s)/2 and exactly 1/10 at the field half-angle θ/2, then 0 beyond (spill under
  * a tenth of the peak is not modelled, so the drawn pool, the grid culling and the light agree).
  */
-export function relativeIntensity(betaDeg: number, coneDeg: number, softnessDeg: number, family: Family = "profile"): number {
+export function relativeIntensity(
+  betaDeg: number, coneDeg: number, softnessDeg: number, family: Family = "profile",
+): number {
   const prof = makeProfile(beamAngles(coneDeg, softnessDeg), profileShapeOf(family));
   return profileAt(prof, Math.abs(betaDeg) * DEG);
 }
@@ -76,7 +78,9 @@ export function relativeIntensity(betaDeg: number, coneDeg: number, softnessDeg:
  * A datasheet's beam (50 %) and field (10 %) angles as the design's cone and softness: cone = field,
  * softness = field − beam. A beam angle under half the field gives a softness that will be clamped.
  */
-export function fromDatasheet(d: { beamDeg: number; fieldDeg: number }): { coneDeg: number; softnessDeg: number; warning?: string } {
+export function fromDatasheet(d: { beamDeg: number; fieldDeg: number }): {
+  coneDeg: number; softnessDeg: number; warning?: string;
+} {
   const { beamDeg, fieldDeg } = d;
   if (!Number.isFinite(beamDeg) || !Number.isFinite(fieldDeg) || beamDeg <= 0 || fieldDeg >= 180) {
     throw new RangeError(`Datasheet angles must be above 0° and under 180° (beam ${beamDeg}°, field ${fieldDeg}°).`);

@@ -63,7 +63,8 @@ export function shadowPolygons(i: ShadowInput, opts: { lensSamples?: number; sid
   const { base, top, height } = outlines(i.occluder, opts.sides ?? 32);
   const rim = lensRim(i.source, occludingEdge(i.source, i.occluder).top, i.apertureDiameter, opts.lensSamples ?? 24);
   if (rim.some((p) => p.z <= height + 1e-9)) {
-    return { umbra: [], penumbra: [], reason: "Part of the lens is level with or below the top, so the shadow runs to the horizon." };
+    const reason = "Part of the lens is level with or below the top, so the shadow runs to the horizon.";
+    return { umbra: [], penumbra: [], reason };
   }
   const shadows = rim.map((p) => shadowFrom(p, base, top, height));
   let umbra = shadows[0];
