@@ -40,11 +40,12 @@ export function describeBeam(source: Vec3, focus: Vec3): string {
   const elevation = Math.round(Math.abs(90 - axis.phi / DEG));
   const updown = axis.phi <= Math.PI / 2 ? "down" : "up";
   if (plan < 1e-9) return `from directly ${updown === "down" ? "above" : "below"}, ${elevation}° ${updown}`;
-  const off = Math.atan2(Math.abs(dx), Math.abs(dy)) / DEG;
+  // Classified on the rounded angle, so the words never disagree with the number printed beside them.
+  const off = Math.round(Math.atan2(Math.abs(dx), Math.abs(dy)) / DEG);
   const fb = dy < 0 ? "DS" : "US";
   const side = dx < 0 ? "SR" : "SL";
   const where = off < STRAIGHT_DEG ? fb : off > SIDE_DEG ? side : `${fb[0]}${side}`;
-  return `from ${where}, ${Math.round(off)}° off the centre line, ${elevation}° ${updown}`;
+  return `from ${where}, ${off}° off the centre line, ${elevation}° ${updown}`;
 }
 
 export type EdgeWord = "sharp" | "soft" | "very soft";

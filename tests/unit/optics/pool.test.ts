@@ -162,7 +162,9 @@ describe("edge cases", () => {
   it("rejects negative softness and non-finite positions", () => {
     // issue 3: softness ≥ 0; never NaN in output
     expect(() => poolAtPlane({ ...aimed(6, 20), coneDeg: 20, softnessDeg: -1, planeZ: 0 })).toThrow(/softness/);
-    expect(() => poolAtPlane({ source: { x: Number.NaN, y: 0, z: 6 }, focus: { x: 0, y: 0, z: 0 }, coneDeg: 20, softnessDeg: 1, planeZ: 0 })).toThrow(RangeError);
+    const nan = { x: Number.NaN, y: 0, z: 6 };
+    expect(() => poolAtPlane({ source: nan, focus: { x: 0, y: 0, z: 0 }, coneDeg: 20, softnessDeg: 1, planeZ: 0 }))
+      .toThrow(RangeError);
     expect(() => poolAtPlane({ ...aimed(6, 20), coneDeg: 20, softnessDeg: 1, planeZ: Number.NaN })).toThrow(/Plane height/);
   });
 

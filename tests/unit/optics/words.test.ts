@@ -48,6 +48,9 @@ describe("describeBeam", () => {
     expect(describeBeam(lens(5, 30, -1, -1), mark)).toBe("from DS, 5° off the centre line, 30° down");
     expect(describeBeam(lens(0, 50, 1, 1), mark)).toBe("from US, 0° off the centre line, 50° down");
     expect(describeBeam(lens(88, 20, -1, 1), mark)).toBe("from SR, 88° off the centre line, 20° down");
+    // 14.6° prints as 15°, so it reads as a diagonal, in step with the number shown.
+    expect(describeBeam(lens(14.6, 30, -1, -1), mark)).toBe("from DSR, 15° off the centre line, 30° down");
+    expect(describeBeam(lens(75.4, 30, 1, 1), mark)).toBe("from USL, 75° off the centre line, 30° down");
   });
 
   it("handles a lens straight overhead and one below the mark", () => {
