@@ -14,8 +14,10 @@ import { initChangeEntry, ChangeEntry } from "./change-entry";
 import { initAreaZone, AreaZone } from "./area-zone";
 import { initLandmark, Landmark } from "./landmark";
 import { initUpload, Upload } from "./upload";
+import { initAccessory, Accessory } from "./accessory";
+import { initImportMapping, ImportMapping } from "./import-mapping";
 
-const models = { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, ChangeEntry, AreaZone, Landmark, Upload };
+const models = { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping };
 export type Db = typeof models & { sequelize: Sequelize };
 
 function associate() {
@@ -28,6 +30,7 @@ function associate() {
   Position.hasMany(Fixture, { foreignKey: "positionId", as: "fixtures" });
   Cue.hasMany(CueLevel, { foreignKey: "cueId", as: "levels" });
   CueLevel.belongsTo(Cue, { foreignKey: "cueId", as: "cue" });
+  Accessory.belongsTo(Fixture, { foreignKey: "fixtureId", as: "fixture" });
 }
 
 function createDb(): Db {
@@ -40,7 +43,7 @@ function createDb(): Db {
     pool: { max: 10, min: 0, idle: 10_000, acquire: 10_000 },
     dialectOptions: { timezone: "Z", connectTimeout: 5_000 },
   });
-  for (const init of [initUser, initProduction, initMembership, initPosition, initFixtureType, initFocusPoint, initFixture, initCue, initChangeEntry, initAreaZone, initLandmark, initUpload]) {
+  for (const init of [initUser, initProduction, initMembership, initPosition, initFixtureType, initFocusPoint, initFixture, initCue, initChangeEntry, initAreaZone, initLandmark, initUpload, initAccessory, initImportMapping]) {
     init(sequelize);
   }
   associate();
@@ -54,4 +57,4 @@ export function getDb(): Db {
   return holder.__throwlineDb;
 }
 
-export { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, ChangeEntry, AreaZone, Landmark, Upload };
+export { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping };
