@@ -46,14 +46,14 @@ function checkGrid(i: GridInput): { cols: number; rows: number } {
   return { cols, rows };
 }
 
+type Reach = [r0: number, r1: number, minX: number, maxX: number];
+
 /**
  * Rows a beam can reach: its outer pool's bounding box, with one spare cell each side for rounding. Culling
  * is exact, not an approximation: outside its cone a beam gives 0 (every profile is 0 beyond the cone).
  * An open pool or an upward axis (whose lower edge may still spill onto the plane) keeps every row; the
  * per-row cone span in span.ts then trims those too.
  */
-type Reach = [r0: number, r1: number, minX: number, maxX: number];
-
 function reachRows(beam: LitBeam, planeZ: number, oy: number, res: number, rows: number): Reach | null {
   const pool = poolAtPlane({
     source: beam.source, focus: beam.focus, coneDeg: beam.coneDeg, softnessDeg: beam.softnessDeg, planeZ,
@@ -95,6 +95,7 @@ function addBeam(
       if (!coneRowSpan(ax, ay, az, cosOuter, wy, h, sx, g.ox, g.res, g.cols, span)) continue;
       c0 = Math.max(c0, span[0]);
       c1 = Math.min(c1, span[1]);
+      if (c0 > c1) continue;
     }
     const base = row * g.cols;
     const dyz = wy * ay - h * az;

@@ -29,7 +29,7 @@ export type PoolInput = { source: Vec3; focus: Vec3; coneDeg: number; softnessDe
 const HALF_PI = Math.PI / 2;
 
 export const REASON_PLANE_ABOVE = "The plane is at or above the lens, so the beam cannot land on it.";
-export const REASON_AXIS_UP = "The beam is aimed level or upward, so it makes no pool on this plane.";
+export const REASON_AXIS_UP = "The beam is aimed upward, so it makes no pool on this plane.";
 export const REASON_OPEN =
   "The beam's edge reaches the horizon on this plane, so the pool has no far edge: tilt it down or narrow it.";
 
@@ -45,7 +45,8 @@ function cone(f: Frame, alpha: number): Cone {
   const sa = Math.sin(alpha);
   const ca = Math.cos(alpha);
   // cos(φ±α) by the sum formulas: as precise near the horizon as cos of the rounded sum, and no trig calls.
-  return { alpha, sin: sa, cos: ca, cosPlus: f.cosPhi * ca - f.sinPhi * sa, cosMinus: f.cosPhi * ca + f.sinPhi * sa };
+  const cosPlus = f.cosPhi * ca - f.sinPhi * sa;
+  return { alpha, sin: sa, cos: ca, cosPlus, cosMinus: f.cosPhi * ca + f.sinPhi * sa };
 }
 
 /**
