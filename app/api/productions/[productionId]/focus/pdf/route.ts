@@ -1,0 +1,39 @@
+import { route, readQuery } from "@/lib/http/respond";
+import { requireMember } from "@/lib/auth/guards";
+import { focusFilterSchema, printOptionsSchema } from "@/lib/focus/filters";
+import { paginate } from "@/lib/focus/pages";
+import { sheetsHtml } from "@/lib/focus/sheets-html";
+import { formatStamp } from "@/lib/focus/words";
+import { loadFocusCharts } from "@/lib/pdf/focus-source";
+import { printDocument, renderPdf } from "@/lib/pdf/focus-pdf";
+import { chromiumMissing, CHROMIUM_PATH } from "@/lib/pdf/browser";
+import { AppError } from "@/lib/errors";
+import { attachmentName } from "../attachment";
+
+type Ctx = { params: Promise<{ productionId: string }> };
+
+/** The focus charts as a PDF: filters and layout (charts per page, paper) from the query string. */
+export const GET = route(async (req, { params }: Ctx) => {
+  const { productionId } = await requireMember((await params).productionId, "production.view");
+  const filter = readQuery(req, focusFilterSchema.and(printOptionsSchema));
+  if (chromiumMissing()) {
+    throw new AppError("unavailable", `PDF printing needs Chromium at ${CHROMIUM_PATH}, which is not installed on this server. Install it (apt-get install chromium; npm start does this), or open the print view and use your browser's "Save as PDF".`);
+  }
+  const { production, charts, landmarks } = await loadFocusCharts({ productionId, filter, timeZone: filter.tz });
+  const printedAt = formatStamp(new Date(), filter.tz);
+  const sheets = paginate(charts, filter.perPage, { newPagePerPosition: filter.newPagePerPosition });
+  const html = printDocument({
+    title: `${production.name} — focus charts`,
+    paper: filter.paper,
+    sheets: sheetsHtml(sheets, { productionName: production.name, printedAt, perPage: filter.perPage, units: production.displayUnits, landmarks }),
+  });
+  const pdf = await renderPdf({ html, paper: filter.paper, footerText: `${production.name} · focus charts · printed ${printedAt}` });
+  return new Response(new Uint8Array(pdf), {
+    headers: {
+      "content-type": "application/pdf",
+      "content-disposition": `attachment; filename="${attachmentName(production.name, "pdf")}"`,
+      "x-sheet-count": String(sheets.length),
+      "cache-control": "no-store",
+    },
+  });
+});

@@ -1,0 +1,139 @@
+// The focus chart of one fixture: every value the crew needs, already in the production's units and in
+// deck words, so the screen, the printed page, the PDF and the Excel sheet all say the same thing.
+import type { FixtureDto } from "@/lib/data/fixtures";
+import {
+  describeBeam, describePoint, edgeWord, formatLength, profileShapeOf, type Family, type PlanePool, type Point, type Units,
+} from "@/lib/optics";
+import { mergeLandmarks, outlineLandmarks, type Landmark, type StageOutline } from "./landmarks";
+import { readCut, type CutReading } from "./shutters";
+import { formatStamp, offsetFromMark } from "./words";
+
+export type ChartProduction = StageOutline & { name: string; displayUnits: Units; headHeight: number };
+/** Fields the data model may not hold yet (accessories come with the rig work); shown as "none recorded". */
+export type ChartExtras = { accessories?: string[]; barnDoors?: string | null; goboOrientation?: string | null };
+
+export type ChartRow = { key: string; label: string; value: string };
+
+export type FocusChart = {
+  id: number;
+  positionId: number;
+  positionName: string;
+  unitNumber: string;
+  channel: number | null;
+  focusPointId: number | null;
+  mark: Point | null;
+  version: number;
+  focused: boolean;
+  focusedLine: string;
+  identity: ChartRow[];
+  focus: ChartRow[];
+  beam: ChartRow[];
+  cuts: CutReading[];
+  notes: string | null;
+  focusNotes: string | null;
+  warnings: string[];
+  fixture: FixtureDto;
+};
+
+const row = (key: string, label: string, value: string | null | undefined): ChartRow => ({ key, label, value: value?.trim() ? value : "—" });
+
+function familyShape(family: string): "flat" | "peaked" | null {
+  try {
+    return profileShapeOf(family as Family);
+  } catch {
+    return null;
+  }
+}
+
+function poolWords(pool: PlanePool | null, mark: Point | null, units: Units): string {
+  if (!pool) return "—";
+  if (pool.status !== "ok" || !pool.outer) return pool.reason ?? "no pool";
+  const size = `${formatLength(pool.lengthAlong!, units)} along × ${formatLength(pool.widthAcross!, units)} across`;
+  return mark ? `${size}; centre ${offsetFromMark(pool.outer.centre, mark, units)}` : size;
+}
+
+function bandWords(pool: PlanePool | null, units: Units): string {
+  if (!pool?.band) return "—";
+  const f = (v: number) => formatLength(v, units);
+  return `near ${f(pool.band.near)}, far ${f(pool.band.far)}, across ${f(pool.band.across)}`;
+}
+
+function hotSpotWords(f: FixtureDto, mark: Point, units: Units, shape: "flat" | "peaked" | null): string {
+  const at = f.aim === "head" ? "at head height" : "on the deck";
+  const lead = shape === "flat" ? `Flat field, even across the core; axis on the mark ${at}` : `Brightest on the mark ${at}`;
+  const hit = f.aim === "head" ? f.computed.deck?.axisHit : null;
+  return hit ? `${lead}; axis reaches the deck ${offsetFromMark(hit, mark, units)}` : lead;
+}
+
+export function buildFocusChart(
+  f: FixtureDto,
+  p: ChartProduction,
+  o: { landmarks?: Landmark[] | null; userNames?: Record<number, string>; timeZone?: string; extras?: ChartExtras } = {},
+): FocusChart {
+  const units = p.displayUnits;
+  const len = (v: number | null | undefined) => (v == null ? null : formatLength(v, units));
+  const g = f.computed;
+  const mark: Point | null = g.focus ? { x: g.focus.x, y: g.focus.y } : null;
+  const shape = familyShape(f.family);
+  const landmarks = mergeLandmarks(o.landmarks, outlineLandmarks(p));
+  const warnings = [...(g.deck?.warnings ?? [])];
+  const deckWords = mark ? describePoint(mark, { units, datumName: p.datumName }) : null;
+
+  const cuts: CutReading[] = [];
+  for (const [i, cut] of (f.shutterCuts ?? []).entries()) {
+    if (!mark) break;
+    try {
+      cuts.push(readCut(cut, { mark, panDeg: g.panDeg, tiltDeg: g.tiltDeg, family: f.family, landmarks, units, datumName: p.datumName }));
+    } catch (err) {
+      warnings.push(`Cut ${i + 1}: ${(err as Error).message}`);
+    }
+  }
+
+  const address = f.address == null ? null : f.universe != null ? `${f.universe}/${f.address}` : String(f.address);
+  const identity = [
+    row("position", "Position", f.positionName),
+    row("unit", "Unit", f.unitNumber + (f.cell != null ? ` cell ${f.cell}` : "")),
+    row("channel", "Channel", f.channel?.toString()),
+    row("address", "Address", address),
+    row("circuit", "Circuit", [f.circuit, f.dimmer && `dimmer ${f.dimmer}`].filter(Boolean).join(", ")),
+    row("type", "Type", f.typeName),
+    row("colour", "Colour", f.colour),
+    row("gobo", "Gobo", f.gobo),
+    row("accessories", "Accessories", o.extras?.accessories?.length ? o.extras.accessories.join(", ") : "none recorded"),
+    row("purpose", "Purpose", f.purpose),
+  ];
+  const focus = [
+    row("mark", "Focus mark", mark ? (f.focusPointName ? `${f.focusPointName}: ${deckWords}` : deckWords) : "no mark set"),
+    row("aimHeight", "Aim height", f.aim === "head" ? `head height (${len(p.headHeight)})` : "deck"),
+    row("hotSpot", "Hot spot", mark ? hotSpotWords(f, mark, units, shape) : null),
+    row("throw", "Throw", len(g.throw)),
+    row("lightFrom", "Light from", g.focus ? describeBeam(g.source, g.focus) : null),
+    row("lens", "Lens at", `${describePoint(g.source, { units, datumName: p.datumName })}, ${len(g.lensHeight)} up`),
+    row("deckPool", "Pool at deck", poolWords(g.deck, mark, units)),
+    row("headPool", "Pool at head height", poolWords(g.head, mark, units)),
+    row("deckBand", "Soft band at deck", bandWords(g.deck, units)),
+    row("headBand", "Soft band at head", bandWords(g.head, units)),
+  ];
+  const beam = [
+    row("edge", "Edge", edgeWord(g.coneDeg, g.softnessDeg)),
+    row("zoom", "Zoom", `${round1(g.coneDeg)}° cone, ${round1(g.softnessDeg)}° soft`),
+    row("field", "Field", shape ? (shape === "flat" ? "flat" : "peaked") : null),
+    row("iris", "Iris", f.irisPercent == null ? "open" : `${round1(f.irisPercent)} %`),
+    row("barnDoors", "Barn doors", o.extras?.barnDoors ?? (cuts.some((c) => c.cutter === "barn door") ? "see cuts" : "none recorded")),
+    row("goboOrientation", "Gobo orientation", f.gobo ? o.extras?.goboOrientation ?? "not recorded" : "no gobo"),
+  ];
+  const who = f.focusedBy != null ? o.userNames?.[f.focusedBy] ?? "a former team member" : null;
+  const focusedLine = f.focused
+    ? `Focused${f.focusedAt ? ` ${formatStamp(f.focusedAt, o.timeZone)}` : ""}${who ? ` by ${who}` : ""}`
+    : "Not focused yet";
+
+  return {
+    id: f.id, positionId: f.positionId, positionName: f.positionName, unitNumber: f.unitNumber, channel: f.channel,
+    focusPointId: f.focusPointId, mark, version: f.version, focused: f.focused, focusedLine,
+    identity, focus, beam, cuts, notes: f.notes, focusNotes: f.focusNotes, warnings, fixture: f,
+  };
+}
+
+function round1(v: number): string {
+  return (Math.round(v * 10) / 10).toString();
+}

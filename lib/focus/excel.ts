@@ -1,0 +1,48 @@
+// The focus data as an Excel workbook, one row a fixture with every value of its chart, for crews that
+// keep their own sheets.
+import ExcelJS from "exceljs";
+import type { FocusChart } from "./chart-model";
+
+/**
+ * OWASP "CSV Injection": a cell that begins with = + - @ tab or carriage return may run as a formula when
+ * opened in a spreadsheet; prefixing a single quote makes it plain text.
+ */
+export function neutraliseCell(value: string): string {
+  return /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
+}
+
+export type SheetColumn = { header: string; key: string; width: number };
+
+export function focusColumns(sample: FocusChart | undefined): SheetColumn[] {
+  const fromRows = sample ? [...sample.identity, ...sample.focus, ...sample.beam].map((r) => ({ header: r.label, key: r.key, width: r.key === "channel" || r.key === "unit" ? 8 : 24 })) : [];
+  return [
+    ...fromRows,
+    { header: "Cuts", key: "cuts", width: 50 },
+    { header: "Designer notes", key: "notes", width: 36 },
+    { header: "As-focused notes", key: "focusNotes", width: 36 },
+    { header: "Status", key: "status", width: 30 },
+  ];
+}
+
+/** One plain object a chart, keyed like focusColumns; every text value neutralised. */
+export function focusRow(c: FocusChart): Record<string, string | number> {
+  const out: Record<string, string | number> = {};
+  for (const r of [...c.identity, ...c.focus, ...c.beam]) out[r.key] = neutraliseCell(r.value);
+  if (c.channel != null) out.channel = c.channel;
+  out.cuts = neutraliseCell(c.cuts.map((x) => `${x.words} (${x.cutterWords})`).join("; "));
+  out.notes = neutraliseCell(c.notes ?? "");
+  out.focusNotes = neutraliseCell(c.focusNotes ?? "");
+  out.status = neutraliseCell(c.focusedLine);
+  return out;
+}
+
+export async function focusWorkbook(charts: FocusChart[], o: { productionName: string }): Promise<Buffer> {
+  const wb = new ExcelJS.Workbook();
+  wb.creator = "Throwline";
+  const ws = wb.addWorksheet("Focus charts", { views: [{ state: "frozen", ySplit: 1 }] });
+  ws.columns = focusColumns(charts[0]);
+  ws.getRow(1).font = { bold: true };
+  for (const c of charts) ws.addRow(focusRow(c));
+  ws.headerFooter.oddHeader = neutraliseCell(o.productionName);
+  return Buffer.from(await wb.xlsx.writeBuffer());
+}
