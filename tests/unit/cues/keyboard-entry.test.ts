@@ -10,7 +10,7 @@ describe("typed level entry", () => {
   it("reads ranges, lists and words", () => {
     expect(parseEntry("1-4 full")).toEqual({ kind: "levels", channels: [1, 2, 3, 4], level: 100 });
     expect(parseEntry("3,5,9-11 out")).toEqual({ kind: "levels", channels: [3, 5, 9, 10, 11], level: 0 });
-    expect(parseEntry("6-4 50").channels).toEqual([4, 5, 6]);
+    expect(parseEntry("6-4 50")).toMatchObject({ channels: [4, 5, 6] });
     expect(parseEntry("7 track")).toEqual({ kind: "levels", channels: [7], level: null });
   });
 

@@ -1,8 +1,46 @@
 import type { Metadata } from "next";
-import { NotYet } from "@/components/not-yet";
+import { HydrationBoundary, dehydrate } from "@tanstack/react-query";
+import { memberForPage } from "@/lib/auth/page-guards";
+import { can } from "@/lib/auth/policy";
+import { makeQueryClient } from "@/lib/query/query-client";
+import { productionKeys } from "@/hooks/query-keys";
+import { getChannelLabels, getCueSheet, getCuesByProduction } from "@/lib/data/cues";
+import { requireProduction } from "@/lib/data/productions";
+import { CueSheetView } from "./_components/cue-sheet";
+import { CueWorkspace } from "./_components/cue-workspace";
 
 export const metadata: Metadata = { title: "Cues" };
 
-export default function Page() {
-  return <NotYet feature="Cues" what="The cue list with tracking levels, and the stage manager's cue summary." />;
+/**
+ * The designer writes cues here; everyone else (the stage manager first of all) reads the cue
+ * sheet. The designer can open the sheet too with ?view=sheet.
+ */
+export default async function CuesPage({ params, searchParams }: { params: Promise<{ productionId: string }>; searchParams: Promise<{ view?: string }> }) {
+  const { productionId, member } = await memberForPage((await params).productionId);
+  const canEdit = can(member, "cues.edit");
+  const showSheet = !canEdit || (await searchParams).view === "sheet";
+  const queryClient = makeQueryClient();
+  const production = await requireProduction(productionId);
+  if (showSheet) {
+    await queryClient.prefetchQuery({ queryKey: productionKeys.cueSheet(productionId), queryFn: () => getCueSheet({ productionId }) });
+  } else {
+    await queryClient.prefetchQuery({
+      queryKey: productionKeys.cues(productionId),
+      queryFn: async () => {
+        const [cues, channels] = await Promise.all([getCuesByProduction({ productionId }), getChannelLabels({ productionId })]);
+        return { cues, channels };
+      },
+    });
+  }
+  return (
+    <main className="px-4 py-4 print:p-0">
+      <HydrationBoundary state={dehydrate(queryClient)}>
+        {showSheet ? (
+          <CueSheetView productionId={productionId} productionName={production.name} canEditNotes={can(member, "cues.editCallNotes")} canWriteCues={canEdit} />
+        ) : (
+          <CueWorkspace productionId={productionId} />
+        )}
+      </HydrationBoundary>
+    </main>
+  );
 }

@@ -1,0 +1,108 @@
+"use client";
+
+import { useMemo, useState } from "react";
+import Link from "next/link";
+import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from "@tanstack/react-table";
+import { useCueSheet, useUpdateCallNote } from "@/hooks/use-cues";
+import { formatCueNumber, formatFadeTime, formatSplitTime } from "@/lib/cues";
+import type { CueSheetRow } from "@/lib/data/cues";
+import { ApiError } from "@/lib/http/api-client";
+import { Button } from "@/components/ui/button";
+import { NoteCell } from "./note-cell";
+
+const col = createColumnHelper<CueSheetRow>();
+
+/** The stage manager's cue sheet: read-only except page and call note; prints on A4 or Letter. */
+export function CueSheetView({ productionId, productionName, canEditNotes, canWriteCues }: { productionId: number; productionName: string; canEditNotes: boolean; canWriteCues: boolean }) {
+  const { data, error } = useCueSheet(productionId);
+  const update = useUpdateCallNote(productionId);
+  const [paper, setPaper] = useState<"A4" | "letter">("A4");
+  const [message, setMessage] = useState<string | null>(null);
+
+  const save = async (row: CueSheetRow, field: "page" | "callNote", value: string) => {
+    const next = value.trim() === "" ? null : value.trim();
+    if (next === row[field]) return;
+    setMessage(null);
+    try {
+      await update.mutateAsync({ id: row.id, version: row.version, changes: { [field]: next } });
+      setMessage(`Cue ${formatCueNumber(row.number)}: ${field === "page" ? "page" : "call note"} saved.`);
+    } catch (e) {
+      setMessage(e instanceof ApiError && e.status === 409 ? `Cue ${formatCueNumber(row.number)} was changed by someone else; showing their version.` : (e as Error).message);
+    }
+  };
+
+  const group = useMemo(() => {
+    const m = new Map<number, { label: string; first: boolean; size: number }>();
+    for (const g of data?.standbys ?? []) g.cueIds.forEach((id, i) => m.set(id, { label: g.label, first: i === 0, size: g.cueIds.length }));
+    return m;
+  }, [data]);
+
+  const columns = useMemo(
+    () => [
+      col.accessor("number", { header: "Cue", cell: (c) => <span className="font-semibold tabular-nums">{formatCueNumber(c.getValue())}</span> }),
+      col.accessor("page", { header: "Page", cell: (c) => <NoteCell label={`Page for cue ${formatCueNumber(c.row.original.number)}`} value={c.getValue()} editable={canEditNotes} narrow onSave={(v) => save(c.row.original, "page", v)} /> }),
+      col.accessor("label", { header: "Label" }),
+      col.display({ id: "time", header: "Time (up/down)", cell: (c) => <span className="tabular-nums">{formatSplitTime(c.row.original.upTime, c.row.original.downTime)}{c.row.original.delay ? ` · wait ${formatFadeTime(c.row.original.delay)}` : ""}</span> }),
+      col.accessor("follow", { header: "Then", cell: (c) => (c.getValue() == null ? "" : `next cue after ${formatFadeTime(c.getValue()!)} s`) }),
+      col.accessor("runningTime", { header: "Runs", cell: (c) => <span className="tabular-nums">{formatFadeTime(c.getValue())}</span> }),
+      col.accessor("summary", { header: "What changes", cell: (c) => <span className="text-muted print:text-black">{c.getValue()}</span> }),
+      col.accessor("callNote", { header: "Call note", cell: (c) => <NoteCell label={`Call note for cue ${formatCueNumber(c.row.original.number)}`} value={c.getValue()} editable={canEditNotes} onSave={(v) => save(c.row.original, "callNote", v)} /> }),
+    ],
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+    [canEditNotes, data],
+  );
+  const table = useReactTable({ data: data?.rows ?? [], columns, getCoreRowModel: getCoreRowModel(), getRowId: (r) => String(r.id) });
+
+  if (error) return <p role="alert" className="text-danger">{(error as Error).message}</p>;
+  return (
+    <section aria-labelledby="cue-sheet-title" className="mx-auto max-w-7xl">
+      <style>{`@page { size: ${paper}; margin: 12mm; }`}</style>
+      <header className="mb-3 flex flex-wrap items-end justify-between gap-3">
+        <div>
+          <h2 id="cue-sheet-title" className="text-xl font-semibold">Cue sheet</h2>
+          <p className="text-sm text-muted print:text-black">
+            <span className="hidden print:inline">{productionName} · </span>
+            {data?.rows.length ?? 0} cues · standbys grouped when a cue follows within 5 s{canEditNotes ? " · you can edit page and call note" : ""}
+          </p>
+        </div>
+        <div className="no-print flex items-center gap-2">
+          {canWriteCues ? <Link href="?" className="text-sm text-accent underline">Back to writing cues</Link> : null}
+          <label className="text-sm">
+            Paper{" "}
+            <select value={paper} onChange={(e) => setPaper(e.target.value as "A4" | "letter")} className="min-h-10 rounded-md border border-line bg-surface px-2">
+              <option value="A4">A4</option>
+              <option value="letter">Letter</option>
+            </select>
+          </label>
+          <Button type="button" variant="secondary" onClick={() => window.print()}>Print cue sheet</Button>
+        </div>
+      </header>
+      <p role="status" aria-live="polite" className="no-print min-h-5 text-sm text-muted">{message}</p>
+      <table className="w-full border-collapse text-sm print:text-[9pt]" data-testid="cue-sheet">
+        <thead>
+          {table.getHeaderGroups().map((hg) => (
+            <tr key={hg.id} className="border-b border-line text-left text-xs uppercase tracking-wide text-muted print:text-black">
+              {hg.headers.map((h) => <th key={h.id} className="px-2 py-2 font-semibold">{flexRender(h.column.columnDef.header, h.getContext())}</th>)}
+            </tr>
+          ))}
+        </thead>
+        <tbody>
+          {table.getRowModel().rows.map((row) => {
+            const g = group.get(row.original.id);
+            return [
+              g?.first && g.size > 1 ? (
+                <tr key={`g${row.id}`} className="break-inside-avoid">
+                  <td colSpan={columns.length} className="px-2 pt-3 text-xs font-semibold uppercase tracking-wide text-accent print:text-black">Standby LX {g.label} — one call</td>
+                </tr>
+              ) : null,
+              <tr key={row.id} data-testid={`sheet-row-${formatCueNumber(row.original.number)}`} className={`break-inside-avoid border-b border-line align-top ${g && g.size > 1 ? "border-l-4 border-l-accent print:border-l-black" : ""}`}>
+                {row.getVisibleCells().map((cell) => <td key={cell.id} className="px-2 py-1.5">{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>)}
+              </tr>,
+            ];
+          })}
+        </tbody>
+      </table>
+      {data && !data.rows.length ? <p className="mt-4 text-muted">No cues yet.</p> : null}
+    </section>
+  );
+}
