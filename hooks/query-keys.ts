@@ -5,4 +5,6 @@ export const productionKeys = {
   list: () => [...productionKeys.all, "list"] as const,
   detail: (id: number) => [...productionKeys.all, id] as const,
   fixtures: (id: number) => [...productionKeys.all, id, "fixtures"] as const,
+  cues: (id: number) => [...productionKeys.all, id, "cues"] as const,
+  cueSheet: (id: number) => [...productionKeys.all, id, "cues", "sheet"] as const,
 };
