@@ -7,4 +7,7 @@ export const productionKeys = {
   fixtures: (id: number) => [...productionKeys.all, id, "fixtures"] as const,
   cues: (id: number) => [...productionKeys.all, id, "cues"] as const,
   cueSheet: (id: number) => [...productionKeys.all, id, "cues", "sheet"] as const,
+  // Everything the plot draws in one read, and the change token it polls for live updates.
+  plot: (id: number) => [...productionKeys.all, id, "plot"] as const,
+  plotStamp: (id: number) => [...productionKeys.all, id, "plot-stamp"] as const,
 };

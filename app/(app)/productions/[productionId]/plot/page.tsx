@@ -1,8 +1,15 @@
 import type { Metadata } from "next";
-import { NotYet } from "@/components/not-yet";
+import { memberForPage } from "@/lib/auth/page-guards";
+import { can } from "@/lib/auth/policy";
+import { requireProduction } from "@/lib/data/productions";
+import { getPlotData, getPlotStamp } from "@/lib/data/plot";
+import { PlotEditor } from "./_components/plot-editor";
 
 export const metadata: Metadata = { title: "Plot" };
 
-export default function Page() {
-  return <NotYet feature="Plot" what="The plan-view editor: hanging positions, fixtures, focus marks and live pools." />;
+export default async function PlotPage({ params }: { params: Promise<{ productionId: string }> }) {
+  const { productionId, member } = await memberForPage((await params).productionId);
+  const stamp = await getPlotStamp({ productionId });
+  const [production, data] = await Promise.all([requireProduction(productionId), getPlotData({ productionId })]);
+  return <PlotEditor production={production} initial={{ stamp, ...data }} canEdit={can(member, "plot.edit")} />;
 }

@@ -1,0 +1,41 @@
+import type { Point } from "@/lib/optics";
+import type { View } from "@/lib/plot/view";
+import type { FixtureDto } from "@/lib/data/fixtures";
+
+export type Tool = "select" | "position-line" | "position-point" | "area" | "landmark" | "cut" | "calibrate" | "align" | "place" | "underlay";
+
+export const LAYERS = ["underlay", "positions", "fixtures", "pools", "marks", "labels", "areas", "landmarks"] as const;
+export type LayerName = (typeof LAYERS)[number];
+export type LayerVisibility = Record<LayerName, boolean>;
+
+export type Selection = { fixtures: ReadonlySet<number>; positionId: number | null; focusPointId: number | null };
+
+/** What the canvas asks the editor to do; the editor owns saving, undo and messages. */
+export type CanvasEvents = {
+  select(sel: Partial<Selection>, additive: boolean): void;
+  moveFixture(f: FixtureDto, to: Point): void;
+  moveMark(f: FixtureDto, to: Point): void;
+  moveFocusPoint(id: number, to: Point): void;
+  moveUnderlay(by: Point): void;
+  drawn(tool: Tool, points: Point[]): void;
+  preview(f: FixtureDto | null): void;
+  place(at: Point): void;
+};
+
+/** Imperative handle for the toolbar. */
+export type CanvasHandle = {
+  fit(): void;
+  zoom(factor: number): void;
+  toDataURL(): string;
+  view(): View;
+};
+
+/** Mutable state of a gesture in progress (kept out of React so a drag never re-renders the page). */
+export type Gesture =
+  | { kind: "pan"; last: Point }
+  | { kind: "box"; from: Point; to: Point }
+  | { kind: "mark"; fixture: FixtureDto; to: Point }
+  | { kind: "fixture"; fixture: FixtureDto; to: Point }
+  | { kind: "focusPoint"; id: number; to: Point }
+  | { kind: "underlay"; from: Point; to: Point }
+  | { kind: "line"; tool: Tool; from: Point; to: Point };

@@ -1,0 +1,135 @@
+"use client";
+// What the editor does when the canvas reports a finished gesture or a drawn shape.
+import { useMemo } from "react";
+import type { Point } from "@/lib/optics";
+import { nearestPosition, numberingOrder, unitNumberForInsert, type NumberingDirection } from "@/lib/plot/along-position";
+import { alignPoint } from "@/lib/plot/underlay";
+import { compareUnitNumbers } from "@/lib/rig/unit-number";
+import type { FixtureDto } from "@/lib/data/fixtures";
+import type { CanvasEvents, Selection, Tool } from "./canvas-types";
+import type { Commands } from "./use-commands";
+import { isVertical } from "./rig-items";
+
+export type Draft =
+  | { kind: "position"; points: Point[]; vertical: boolean }
+  | { kind: "area"; points: Point[] }
+  | { kind: "landmark"; points: Point[] }
+  | { kind: "calibrate"; points: Point[] }
+  | null;
+
+const CUT_LABELS = ["top", "bottom", "left", "right"] as const;
+
+type Args = {
+  cmd: Commands;
+  selection: Selection;
+  setSelection: (s: Selection) => void;
+  setDraft: (d: Draft) => void;
+  setTool: (t: Tool) => void;
+  setPreview: (f: FixtureDto | null) => void;
+  armedTypeId: number | null;
+  direction: NumberingDirection;
+};
+
+/** Hangs one unit of a type at the nearest position, numbered so nobody else is renumbered. */
+export function placeFixture(cmd: Commands, typeId: number, at: Point, direction: NumberingDirection, tolerance: number) {
+  const data = cmd.latest();
+  const hit = nearestPosition(data.positions, at, tolerance);
+  if (!hit) {
+    cmd.setNotice({ tone: "info", text: "Drop the unit on a hanging position (a pipe, bridge or boom)." });
+    return;
+  }
+  const pos = hit.position;
+  const onPos = data.fixtures.filter((f) => f.positionId === pos.id);
+  const existing = onPos.map((f) => f.unitNumber);
+  let before: string | null = null;
+  if (onPos.length && isVertical(pos.kind)) before = existing.slice().sort(compareUnitNumbers).at(-1)!; // booms: the new unit goes below
+  else if (onPos.length) {
+    const order = numberingOrder([...onPos, { id: -1, x: hit.point.x, y: hit.point.y } as FixtureDto], direction);
+    const idx = order.findIndex((f) => f.id === -1);
+    before = idx === 0 ? null : order[idx - 1].unitNumber;
+  }
+  const unitNumber = unitNumberForInsert(existing, before);
+  const lensHeight = isVertical(pos.kind) ? Math.max(0.3, pos.trimHeight - 0.9 * onPos.length) : null;
+  return cmd.run("Hang a unit", async () => {
+    const [created] = await cmd.actions.createFixtures([{ positionId: pos.id, fixtureTypeId: typeId, unitNumber, x: hit.point.x, y: hit.point.y, lensHeight }]);
+    cmd.remember(`Hang unit ${unitNumber}`, () => cmd.run("Undo hang", () => cmd.actions.deleteFixtures([created.id])).then(() => undefined));
+    return created;
+  });
+}
+
+export function useCanvasEvents(a: Args): CanvasEvents {
+  const { cmd, selection, setSelection, setDraft, setTool, setPreview, armedTypeId, direction } = a;
+  return useMemo<CanvasEvents>(() => ({
+    select(sel, additive) {
+      if (additive && sel.fixtures) {
+        const next = new Set(selection.fixtures);
+        for (const id of sel.fixtures) {
+          if (next.has(id)) next.delete(id);
+          else next.add(id);
+        }
+        setSelection({ fixtures: next, positionId: null, focusPointId: null });
+      } else setSelection({ fixtures: sel.fixtures ?? new Set(), positionId: sel.positionId ?? null, focusPointId: sel.focusPointId ?? null });
+    },
+    moveMark(f, to) {
+      void cmd.patchFixture(f.id, `Focus unit ${f.unitNumber}`, () => ({ focusX: round(to.x), focusY: round(to.y), focusPointId: null }));
+    },
+    moveFixture(f, to) {
+      void cmd.patchFixture(f.id, `Move unit ${f.unitNumber}`, () => ({ x: round(to.x), y: round(to.y) }));
+    },
+    moveFocusPoint(id, to) {
+      const run = () =>
+        cmd.run("Move focus point", async () => {
+          const p = cmd.latest().focusPoints.find((q) => q.id === id);
+          if (!p) return;
+          await cmd.actions.patchFocusPoint(id, { x: round(to.x), y: round(to.y), version: p.version });
+          cmd.remember(`Move ${p.name}`, () => cmd.run("Undo move", async () => {
+            const now = cmd.latest().focusPoints.find((q) => q.id === id);
+            if (now) await cmd.actions.patchFocusPoint(id, { x: p.x, y: p.y, version: now.version });
+          }).then(() => undefined));
+        }, () => void run());
+      void run();
+    },
+    moveUnderlay(by) {
+      void cmd.run("Move the underlay", async () => {
+        const u = cmd.latest().underlays[0];
+        if (u) await cmd.actions.patchUnderlay(u.id, { offsetX: round(u.offsetX + by.x), offsetY: round(u.offsetY + by.y), version: u.version });
+      });
+    },
+    preview: setPreview,
+    place(at) {
+      if (armedTypeId) void placeFixture(cmd, armedTypeId, at, direction, 0.8);
+    },
+    drawn(tool, points) {
+      if (tool === "position-line" || tool === "position-point") setDraft({ kind: "position", points, vertical: tool === "position-point" });
+      else if (tool === "area") setDraft({ kind: "area", points });
+      else if (tool === "landmark") setDraft({ kind: "landmark", points });
+      else if (tool === "calibrate") setDraft({ kind: "calibrate", points });
+      else if (tool === "place" && armedTypeId) void placeFixture(cmd, armedTypeId, points[0], direction, 0.8);
+      else if (tool === "align") {
+        void cmd.run("Align the underlay", async () => {
+          const u = cmd.latest().underlays[0];
+          if (!u) return;
+          const next = alignPoint(u, points[0], { x: 0, y: 0 });
+          await cmd.actions.patchUnderlay(u.id, { offsetX: next.offsetX, offsetY: next.offsetY, version: u.version });
+        });
+        setTool("select");
+      } else if (tool === "cut") {
+        const [id] = [...selection.fixtures];
+        if (id == null) return;
+        void cmd.patchFixture(id, "Add a shutter cut", (f) => {
+          const cuts = f.shutterCuts ?? [];
+          const label = CUT_LABELS.find((l) => !cuts.some((c) => c.label === l));
+          if (!label) {
+            cmd.setNotice({ tone: "info", text: "A fixture has at most four shutter cuts; remove one first." });
+            return null;
+          }
+          return { shutterCuts: [...cuts, { label, a: roundPt(points[0]), b: roundPt(points[1]) }] };
+        });
+        setTool("select");
+      }
+    },
+  }), [cmd, selection, setSelection, setDraft, setTool, setPreview, armedTypeId, direction]);
+}
+
+const round = (n: number) => Math.round(n * 1000) / 1000;
+const roundPt = (p: Point) => ({ x: round(p.x), y: round(p.y) });

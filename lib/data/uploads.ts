@@ -1,0 +1,129 @@
+import "server-only";
+import { randomBytes } from "node:crypto";
+import type { z } from "zod";
+import { getDb, type Upload } from "@/models";
+import type { UploadKind } from "@/models/upload";
+import { AppError, notFound } from "@/lib/errors";
+import { fileStore, MAX_UPLOAD_BYTES } from "@/lib/storage";
+import { imageSize, sniffImageType } from "@/lib/storage/sniff";
+import type { updateUploadSchema } from "@/lib/validation/plot";
+import { iso, versionedUpdate } from "./versioned";
+import { recordChange } from "./changes";
+
+export type UploadDto = {
+  id: number;
+  productionId: number;
+  kind: UploadKind;
+  fileName: string;
+  contentType: string;
+  sizeBytes: number;
+  widthPx: number | null;
+  heightPx: number | null;
+  metresPerPixel: number;
+  offsetX: number;
+  offsetY: number;
+  rotationDeg: number;
+  opacity: number;
+  locked: boolean;
+  url: string;
+  version: number;
+  updatedAt: string;
+};
+
+export const toUploadDto = (u: Upload): UploadDto => ({
+  id: u.id,
+  productionId: u.productionId,
+  kind: u.kind,
+  fileName: u.fileName,
+  contentType: u.contentType,
+  sizeBytes: u.sizeBytes,
+  widthPx: u.widthPx,
+  heightPx: u.heightPx,
+  metresPerPixel: u.metresPerPixel,
+  offsetX: u.offsetX,
+  offsetY: u.offsetY,
+  rotationDeg: u.rotationDeg,
+  opacity: u.opacity,
+  locked: Boolean(u.locked),
+  url: `/api/productions/${u.productionId}/uploads/${u.id}/file`,
+  version: u.version,
+  updatedAt: iso(u.updatedAt)!,
+});
+
+export async function getUploadsByProduction({ productionId, kind }: { productionId: number; kind?: UploadKind }): Promise<UploadDto[]> {
+  const rows = await getDb().Upload.findAll({ where: { productionId, ...(kind ? { kind } : {}) }, order: [["createdAt", "DESC"], ["id", "DESC"]] });
+  return rows.map(toUploadDto);
+}
+
+/**
+ * Stores an underlay image. The type comes from the bytes (PNG, JPEG, WebP), never the name; the
+ * first placement puts the image's top-left corner upstage-left-ish so it lands near the stage.
+ */
+export async function createUnderlay({ productionId, userId, fileName, bytes }: { productionId: number; userId: number; fileName: string; bytes: Uint8Array }) {
+  if (bytes.byteLength === 0) throw new AppError("bad_request", "The file is empty.", { fieldErrors: { file: ["the file is empty"] } });
+  if (bytes.byteLength > MAX_UPLOAD_BYTES) {
+    throw new AppError("too_large", `The file is ${(bytes.byteLength / 1048576).toFixed(1)} MB; the limit is ${MAX_UPLOAD_BYTES / 1048576} MB.`, { fieldErrors: { file: ["too large"] } });
+  }
+  const type = sniffImageType(bytes);
+  if (!type) throw new AppError("unsupported", "That file is not a PNG, JPEG or WebP image (checked by its content, not its name).", { fieldErrors: { file: ["not a PNG, JPEG or WebP image"] } });
+  const size = imageSize(bytes, type);
+  const key = `p${productionId}/underlay-${Date.now()}-${randomBytes(6).toString("hex")}`;
+  await fileStore().put(key, bytes, type);
+  const { sequelize, Upload } = getDb();
+  try {
+    return await sequelize.transaction(async (transaction) => {
+      const row = await Upload.create(
+        {
+          productionId, kind: "underlay", fileName: fileName.slice(0, 200) || "groundplan", storageKey: key, contentType: type, sizeBytes: bytes.byteLength,
+          widthPx: size?.width ?? null, heightPx: size?.height ?? null, uploadedBy: userId,
+          // 1 cm a pixel, centred on the centre line with its top edge 12 m upstage: a starting guess to calibrate from.
+          metresPerPixel: 0.01, offsetX: -((size?.width ?? 0) * 0.01) / 2, offsetY: 12,
+        },
+        { transaction },
+      );
+      await recordChange({ productionId, userId, entity: "upload", entityId: row.id, action: "create", after: toUploadDto(row) }, transaction);
+      return toUploadDto(row);
+    });
+  } catch (err) {
+    await fileStore().delete(key); // nothing half-saved: no orphan file without its row
+    throw err;
+  }
+}
+
+export async function readUploadFile({ productionId, uploadId }: { productionId: number; uploadId: number }) {
+  const row = await getDb().Upload.findOne({ where: { productionId, id: uploadId } });
+  if (!row) throw notFound("Upload");
+  const bytes = await fileStore().get(row.storageKey);
+  if (!bytes) throw notFound("The stored file");
+  return { bytes, contentType: row.contentType, fileName: row.fileName };
+}
+
+export async function updateUpload({ productionId, uploadId, userId, patch }: { productionId: number; uploadId: number; userId: number; patch: z.infer<typeof updateUploadSchema> }) {
+  const { sequelize, Upload } = getDb();
+  const { version, ...changes } = patch;
+  if (!Object.keys(changes).length) throw new AppError("bad_request", "Nothing to change: send at least one field.");
+  return sequelize.transaction(async (transaction) => {
+    const current = await Upload.findOne({ where: { productionId, id: uploadId }, transaction });
+    if (!current) throw notFound("Upload");
+    // A locked underlay keeps its place; only unlocking (or opacity) is accepted until then.
+    const moves = ["metresPerPixel", "offsetX", "offsetY", "rotationDeg"].filter((k) => k in changes);
+    if (current.locked && changes.locked !== false && moves.length) {
+      throw new AppError("bad_request", "The underlay is locked; unlock it before moving or rescaling it.", { fieldErrors: Object.fromEntries(moves.map((k) => [k, ["the underlay is locked"]])) });
+    }
+    const { before, after } = await versionedUpdate({ model: Upload, scope: { productionId }, id: uploadId, version, changes, toDto: toUploadDto, what: "Underlay", transaction });
+    await recordChange({ productionId, userId, entity: "upload", entityId: uploadId, action: "update", before: toUploadDto(before), after: toUploadDto(after) }, transaction);
+    return toUploadDto(after);
+  });
+}
+
+export async function deleteUpload({ productionId, uploadId, userId }: { productionId: number; uploadId: number; userId: number }) {
+  const { sequelize, Upload } = getDb();
+  const key = await sequelize.transaction(async (transaction) => {
+    const row = await Upload.findOne({ where: { productionId, id: uploadId }, transaction });
+    if (!row) throw notFound("Upload");
+    await row.destroy({ transaction });
+    await recordChange({ productionId, userId, entity: "upload", entityId: uploadId, action: "delete", before: toUploadDto(row) }, transaction);
+    return row.storageKey;
+  });
+  await fileStore().delete(key);
+}
