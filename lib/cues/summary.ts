@@ -28,6 +28,9 @@ function names(list: string[]): string {
   return `${list.slice(0, MAX_NAMES).join(", ")} +${list.length - MAX_NAMES} more`;
 }
 
+// One collator for all: localeCompare with options builds a new one on every call (slow in a sort).
+const byName = new Intl.Collator(undefined, { numeric: true });
+
 /** Acting areas first (where on stage), then purposes (what kind of light), each once. */
 function lit(cols: number[], show: TrackedShow, info: ChannelInfo): string[] {
   const areas = new Set<string>();
@@ -37,8 +40,7 @@ function lit(cols: number[], show: TrackedShow, info: ChannelInfo): string[] {
     i?.areas.forEach((a) => areas.add(a));
     i?.purposes.forEach((p) => purposes.add(p));
   }
-  const byName = (a: string, b: string) => a.localeCompare(b, undefined, { numeric: true });
-  return [...[...areas].sort(byName), ...[...purposes].sort(byName)];
+  return [...[...areas].sort(byName.compare), ...[...purposes].sort(byName.compare)];
 }
 
 /** One line for the cue at `index`, e.g. "4 up, 2 down · brighter: Area 2, front light · darker: cyc". */

@@ -1,6 +1,6 @@
 "use client";
 
-import { useMemo } from "react";
+import { useEffect, useMemo, useRef } from "react";
 import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from "@tanstack/react-table";
 import { formatCueNumber, formatFadeTime, formatSplitTime } from "@/lib/cues";
 import type { CueDto } from "@/lib/data/cues";
@@ -21,8 +21,12 @@ const columns = [
 export function CueListTable({ cues, selectedId, onSelect }: { cues: CueDto[]; selectedId: number | null; onSelect: (id: number) => void }) {
   const data = useMemo(() => cues, [cues]);
   const table = useReactTable({ data, columns, getCoreRowModel: getCoreRowModel(), getRowId: (r) => String(r.id) });
+  const box = useRef<HTMLDivElement>(null);
+  useEffect(() => {
+    box.current?.querySelector('[aria-selected="true"]')?.scrollIntoView({ block: "nearest" });
+  }, [selectedId, cues.length]);
   return (
-    <div className="max-h-72 overflow-auto rounded-lg border border-line bg-surface">
+    <div ref={box} className="max-h-72 overflow-auto rounded-lg border border-line bg-surface">
       <table className="w-full border-collapse text-sm" aria-label="Cue list">
         <thead className="sticky top-0 bg-raised">
           {table.getHeaderGroups().map((hg) => (

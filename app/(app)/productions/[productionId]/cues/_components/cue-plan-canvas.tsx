@@ -31,9 +31,10 @@ export function CuePlanCanvas({ pools }: { pools: PlanPool[] }) {
     return () => (ro.disconnect(), mo.disconnect());
   }, []);
 
-  const xs = pools.flatMap((p) => [p.pool.centre.x - p.pool.semiMajor, p.pool.centre.x + p.pool.semiMajor]);
-  const ys = pools.flatMap((p) => [p.pool.centre.y - p.pool.semiMajor, p.pool.centre.y + p.pool.semiMajor]);
-  const minX = Math.min(-6, ...xs), maxX = Math.max(6, ...xs), minY = Math.min(-1, ...ys), maxY = Math.max(8, ...ys);
+  // Frame the pool centres (not their full extent: a wide wash would shrink the stage to a dot).
+  const xs = pools.map((p) => p.pool.centre.x);
+  const ys = pools.map((p) => p.pool.centre.y);
+  const minX = Math.min(-6, ...xs) - 1, maxX = Math.max(6, ...xs) + 1, minY = Math.min(-1, ...ys) - 1, maxY = Math.max(8, ...ys) + 1;
   // One scale for both axes, so rotated ellipses keep their true shape.
   const scale = Math.min(width / (maxX - minX), 520 / (maxY - minY));
   const height = (maxY - minY) * scale;
@@ -43,7 +44,7 @@ export function CuePlanCanvas({ pools }: { pools: PlanPool[] }) {
   return (
     <div ref={box} className="w-full" data-testid="cue-plan" aria-label={`Plan with ${pools.filter((p) => p.level > 0).length} lit pools`} role="img">
       <Stage width={width} height={height} listening={false}>
-        <Layer>
+        <Layer clipX={0} clipY={0} clipWidth={width} clipHeight={height}>
           <Line points={[sx(minX), sy(0), sx(maxX), sy(0)]} stroke={colours.line} dash={[6, 4]} strokeWidth={1} />
           <Line points={[sx(0), sy(minY), sx(0), sy(maxY)]} stroke={colours.line} dash={[2, 4]} strokeWidth={1} />
           {[...pools].sort((a, b) => a.level - b.level).map((p) => (
@@ -55,10 +56,10 @@ export function CuePlanCanvas({ pools }: { pools: PlanPool[] }) {
               radiusY={p.pool.semiMinor * scale}
               rotation={-p.pool.rotationDeg}
               fill={colours.accent}
-              opacity={p.level > 0 ? 0.08 + 0.5 * p.level : 1}
+              opacity={p.level > 0 ? 0.04 + 0.22 * p.level : 0.6}
               fillEnabled={p.level > 0}
               stroke={p.level > 0 ? colours.accent : colours.line}
-              strokeWidth={p.level > 0 ? 1 : 0.5}
+              strokeWidth={p.level > 0 ? 0.5 + p.level : 0.5}
             />
           ))}
           {pools.map((p) => <Circle key={`s${p.id}`} x={sx(p.source.x)} y={sy(p.source.y)} radius={2} fill={p.level > 0 ? colours.accent : colours.ink} />)}
