@@ -1,0 +1,77 @@
+import { z } from "zod";
+import { route } from "@/lib/http/respond";
+import { requireMember } from "@/lib/auth/guards";
+import { AppError, fromZodError, toAppError } from "@/lib/errors";
+import { commitImport, getRememberedMapping, previewImport, type ImportRequest } from "@/lib/data/import";
+import { MAX_IMPORT_BYTES } from "@/lib/io/sniff";
+import { IMPORT_FIELDS } from "@/lib/io/fields";
+
+type Ctx = { params: Promise<{ productionId: string }> };
+
+const optionsSchema = z
+  .object({
+    mode: z.enum(["preview", "commit"], { error: "mode must be preview or commit" }),
+    mapping: z.array(z.enum(["ignore", ...IMPORT_FIELDS.map((f) => f.key)], { error: "unknown field in the mapping" })).max(500).optional(),
+    lengthUnit: z.enum(["m", "ft"], { error: "lengthUnit must be m or ft" }).optional(),
+    createMissing: z.boolean().default(false),
+    sheet: z.string().max(100).optional(),
+  })
+  .strict();
+
+/** What the import screen needs before a file is chosen: the fields and the remembered mapping. */
+export const GET = route(async (_req, { params }: Ctx) => {
+  const { productionId } = await requireMember((await params).productionId, "rig.import");
+  return { fields: IMPORT_FIELDS.map((f) => ({ key: f.key, header: f.header })), remembered: await getRememberedMapping(productionId), maxBytes: MAX_IMPORT_BYTES };
+});
+
+async function readUpload(req: Request): Promise<{ request: ImportRequest; mode: "preview" | "commit" }> {
+  const declared = Number(req.headers.get("content-length") ?? 0);
+  // The multipart wrapper adds a little; anything far past the cap is refused before it is read.
+  if (declared > MAX_IMPORT_BYTES + 256 * 1024) throw new AppError("too_large", `The file is larger than the ${MAX_IMPORT_BYTES / 1048576} MB limit.`, { fieldErrors: { file: ["over the size limit"] } });
+  let form: FormData;
+  try {
+    form = await req.formData();
+  } catch {
+    throw new AppError("bad_request", "Send the file as a multipart form with a field called file.", { fieldErrors: { file: ["no file received"] } });
+  }
+  const file = form.get("file");
+  if (!(file instanceof File)) throw new AppError("bad_request", "Choose a file to import.", { fieldErrors: { file: ["no file received"] } });
+  if (file.size > MAX_IMPORT_BYTES) throw new AppError("too_large", `${file.name} is ${(file.size / 1048576).toFixed(1)} MB; the limit is ${MAX_IMPORT_BYTES / 1048576} MB.`, { fieldErrors: { file: ["over the size limit"] } });
+  let raw: unknown = {};
+  try {
+    raw = JSON.parse(String(form.get("options") ?? "{}"));
+  } catch {
+    throw new AppError("bad_request", "The import options are not valid JSON.", { fieldErrors: { options: ["not valid JSON"] } });
+  }
+  const parsed = optionsSchema.safeParse(raw);
+  if (!parsed.success) throw fromZodError(parsed.error);
+  const { mode, ...opts } = parsed.data;
+  return { mode, request: { ...opts, bytes: new Uint8Array(await file.arrayBuffer()), fileName: file.name || "upload" } };
+}
+
+/**
+ * Preview (writes nothing) or commit (all rows in one transaction, or none). With ?stream=1 the
+ * reply is newline-delimited JSON: progress lines, then one line with the result or the error.
+ */
+export const POST = route(async (req, { params }: Ctx) => {
+  const { productionId, member, user } = await requireMember((await params).productionId, "rig.import");
+  const { mode, request } = await readUpload(req);
+  if (mode === "preview") return { preview: await previewImport({ productionId, member, request }) };
+  if (new URL(req.url).searchParams.get("stream") !== "1") return { result: await commitImport({ productionId, member, userId: user.id, request }) };
+
+  const encoder = new TextEncoder();
+  const stream = new ReadableStream({
+    async start(controller) {
+      const send = (line: unknown) => controller.enqueue(encoder.encode(JSON.stringify(line) + "\n"));
+      try {
+        const result = await commitImport({ productionId, member, userId: user.id, request, progress: (stage, done, total) => send({ progress: { stage, done, total } }) });
+        send({ result });
+      } catch (err) {
+        const e = toAppError(err);
+        send({ ...e.toJSON(), status: e.status });
+      }
+      controller.close();
+    },
+  });
+  return new Response(stream, { headers: { "content-type": "application/x-ndjson; charset=utf-8", "cache-control": "no-store" } });
+});

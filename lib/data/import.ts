@@ -1,0 +1,127 @@
+import "server-only";
+import { getDb } from "@/models";
+import { AppError } from "@/lib/errors";
+import type { Member } from "@/lib/auth/policy";
+import { readTable } from "@/lib/io/read-table";
+import { FileProblem } from "@/lib/io/table";
+import { normaliseHeader, suggestMapping, type ColumnTarget } from "@/lib/io/fields";
+import { missingRequiredColumns, validateRows, type LengthUnit, type RowError } from "@/lib/io/rows";
+import { planImport, type ImportPlanResult, type Snapshot } from "@/lib/rig/import-plan";
+import { requireProduction } from "./productions";
+import { writeImport } from "./import-write";
+
+export type ImportRequest = { bytes: Uint8Array; fileName: string; sheet?: string; mapping?: ColumnTarget[]; lengthUnit?: LengthUnit; createMissing: boolean };
+export type Progress = (stage: "reading" | "checking" | "writing", done: number, total: number) => void;
+
+export type ImportPreview = {
+  fileName: string;
+  format: "csv" | "xlsx";
+  sheet: string | null;
+  sheetNames: string[];
+  headers: string[];
+  sample: string[][];
+  mapping: ColumnTarget[];
+  lengthUnit: LengthUnit;
+  notes: string[];
+  rowCount: number;
+  errors: RowError[]; // at most MAX_ERRORS, in row order
+  errorCount: number;
+  counts: ImportPlanResult["counts"];
+  newPositions: string[];
+  newTypes: string[];
+};
+
+const MAX_ERRORS = 500;
+
+async function loadSnapshot(productionId: number): Promise<Snapshot> {
+  const { Position, FixtureType, FocusPoint, Fixture } = getDb();
+  const [positions, types, focusPoints, fixtures] = await Promise.all([
+    Position.findAll({ where: { productionId }, raw: true }),
+    FixtureType.findAll({ where: { productionId }, raw: true }),
+    FocusPoint.findAll({ where: { productionId }, raw: true }),
+    Fixture.findAll({ where: { productionId }, raw: true }),
+  ]);
+  return {
+    positions,
+    types: types.map((t) => ({ ...t, dmxModes: typeof t.dmxModes === "string" ? JSON.parse(t.dmxModes) : t.dmxModes })),
+    focusPoints,
+    fixtures: fixtures.map((f) => ({ ...f, hung: Boolean(f.hung), focused: Boolean(f.focused) })) as unknown as Snapshot["fixtures"],
+  };
+}
+
+export async function getRememberedMapping(productionId: number) {
+  const row = await getDb().ImportMapping.findOne({ where: { productionId } });
+  if (!row) return { columns: {} as Record<string, ColumnTarget>, lengthUnit: null };
+  const columns = typeof row.columns === "string" ? JSON.parse(row.columns) : row.columns;
+  return { columns: columns as Record<string, ColumnTarget>, lengthUnit: row.lengthUnit };
+}
+
+/** Reads, maps and checks a file against the rig; writes nothing. */
+async function prepare(productionId: number, member: Member, req: ImportRequest, progress?: Progress) {
+  const production = await requireProduction(productionId);
+  progress?.("reading", 0, 1);
+  const table = await readTable(req.bytes, req.fileName, { sheet: req.sheet }).catch((err) => {
+    if (err instanceof FileProblem) throw new AppError("bad_request", err.message, { fieldErrors: { file: [err.message] } });
+    throw err;
+  });
+  const remembered = await getRememberedMapping(productionId);
+  if (req.mapping && req.mapping.length !== table.headers.length) {
+    throw new AppError("bad_request", `The mapping has ${req.mapping.length} entries but the file has ${table.headers.length} columns. Check the file again.`, { fieldErrors: { mapping: ["does not match the file's columns"] } });
+  }
+  const mapping = req.mapping ?? suggestMapping(table.headers, remembered.columns);
+  const lengthUnit: LengthUnit = req.lengthUnit ?? remembered.lengthUnit ?? (production.displayUnits === "imperial" ? "ft" : "m");
+  const columnOf = (key: string) => table.headers[mapping.indexOf(key as ColumnTarget)] ?? key;
+
+  let errors: RowError[] = [];
+  let plan: ImportPlanResult = { plans: [], errors: [], newPositions: [], newTypes: [], counts: { create: 0, update: 0, unchanged: 0 } };
+  const missing = missingRequiredColumns(mapping);
+  if (missing.length) {
+    errors = [{ row: table.headerRowNumber, column: "(columns)", message: `No column is mapped to ${missing.join(" or ")}; every row needs them to find its fixture` }];
+  } else {
+    progress?.("checking", 0, table.rows.length);
+    const checked = validateRows(table, mapping, { lengthUnit });
+    plan = planImport(checked.rows, await loadSnapshot(productionId), { member, createMissing: req.createMissing, columnOf });
+    errors = [...checked.errors, ...plan.errors].sort((a, b) => a.row - b.row);
+    progress?.("checking", table.rows.length, table.rows.length);
+  }
+  const preview: ImportPreview = {
+    fileName: req.fileName,
+    format: table.format,
+    sheet: table.sheet ?? null,
+    sheetNames: table.sheetNames ?? [],
+    headers: table.headers,
+    sample: table.rows.slice(0, 8).map((r) => r.cells),
+    mapping,
+    lengthUnit,
+    notes: table.notes,
+    rowCount: table.rows.length,
+    errors: errors.slice(0, MAX_ERRORS),
+    errorCount: errors.length,
+    counts: plan.counts,
+    newPositions: plan.newPositions,
+    newTypes: plan.newTypes,
+  };
+  return { preview, plan, table, mapping, lengthUnit };
+}
+
+export async function previewImport({ productionId, member, request }: { productionId: number; member: Member; request: ImportRequest }): Promise<ImportPreview> {
+  return (await prepare(productionId, member, request)).preview;
+}
+
+/** Checks everything first; writes only when every row is good, all in one transaction. */
+export async function commitImport({ productionId, member, userId, request, progress }: { productionId: number; member: Member; userId: number; request: ImportRequest; progress?: Progress }) {
+  const { preview, plan, table, mapping, lengthUnit } = await prepare(productionId, member, request, progress);
+  if (preview.errorCount) {
+    const first = preview.errors[0];
+    throw new AppError("bad_request", `Nothing was imported: ${preview.errorCount} problem${preview.errorCount === 1 ? "" : "s"} to fix first (row ${first.row}, ${first.column}: ${first.message}).`, {
+      fieldErrors: { rows: preview.errors.map((e) => `Row ${e.row}, ${e.column}: ${e.message}`) },
+    });
+  }
+  await writeImport({ productionId, userId, plan, progress });
+  const columns = Object.fromEntries(table.headers.map((h, i) => [normaliseHeader(h), mapping[i]]));
+  const { ImportMapping } = getDb();
+  const saved = await ImportMapping.findOne({ where: { productionId } });
+  if (saved) await saved.update({ columns, lengthUnit, version: saved.version + 1 });
+  else await ImportMapping.create({ productionId, columns, lengthUnit });
+  return { ...preview, committed: true as const };
+}
