@@ -64,7 +64,7 @@ export const CHART_CSS = `
 .fc-n6 .fc-grid{grid-template:repeat(3,1fr)/repeat(2,1fr)}
 .fc-n1 .fc-card{font-size:10pt}
 .fc-n2 .fc-card{font-size:7.4pt}
-.fc-n4 .fc-card{font-size:6.3pt}
+.fc-n4 .fc-card{font-size:6.8pt}
 .fc-n6 .fc-card{font-size:5.4pt}
 .fc-n2 .fc-body{grid-template-columns:minmax(0,30fr) minmax(0,28fr) minmax(0,42fr);grid-template-areas:"fig id focus"}
 .fc-n2 .fc-focus,.fc-n4 .fc-focus{columns:1}
@@ -81,3 +81,15 @@ export function sheetCss(paper: Paper): string {
 .fc-sheet{width:${p.widthMm - 2 * p.marginMm.side}mm;height:${p.widthMm > 0 ? p.heightMm - p.marginMm.top - p.marginMm.bottom - 0.6 : 0}mm}
 @media screen{.fc-sheet{margin:6mm auto;box-shadow:0 1px 6px rgba(0,0,0,.25);outline:${p.marginMm.side}mm solid #fff}}`;
 }
+
+/** The focus call's small plan (shares the diagram's classes). */
+export const PLAN_CSS = `
+.fc-plan{width:100%;height:auto;border:1px solid var(--line,#d6d0c4);border-radius:6px;--fc-ink:var(--ink,#1f1d1a);--fc-muted:var(--muted,#6b655c);--fc-surface:var(--surface,#fff)}
+.fc-plan line,.fc-plan path,.fc-plan circle{vector-effect:non-scaling-stroke}
+.fc-plan .fc-bg{fill:var(--fc-surface)}
+.fc-plan .fc-lm{stroke:var(--fc-muted);stroke-width:1;stroke-dasharray:5 3}
+.fc-plan .fc-muted{fill:var(--fc-muted)}
+.fc-plan .fc-mark{fill:var(--fc-surface);stroke:var(--fc-ink);stroke-width:1.4}
+.fc-plan-neighbour{fill:rgba(120,140,200,.18);stroke:rgba(120,140,200,.8);stroke-width:1;stroke-dasharray:4 2}
+.fc-plan-current{fill:rgba(236,178,60,.45);stroke:rgba(200,120,20,.95);stroke-width:1.6}
+`;

@@ -1,8 +1,19 @@
 import type { Metadata } from "next";
-import { NotYet } from "@/components/not-yet";
+import { Suspense } from "react";
+import { CHART_CSS } from "@/lib/focus/chart-css";
+import { FocusList } from "./_components/focus-list";
+import { loadFocusPage } from "./load-page";
 
 export const metadata: Metadata = { title: "Focus charts" };
 
-export default function Page() {
-  return <NotYet feature="Focus charts" what="One chart per fixture for the focus call, on a tablet on deck or printed." />;
+export default async function FocusPage({ params }: { params: Promise<{ productionId: string }> }) {
+  const data = await loadFocusPage((await params).productionId);
+  return (
+    <>
+      <style dangerouslySetInnerHTML={{ __html: CHART_CSS }} />
+      <Suspense>
+        <FocusList data={data} />
+      </Suspense>
+    </>
+  );
 }

@@ -1,0 +1,99 @@
+"use client";
+
+import Link from "next/link";
+import { usePathname, useRouter, useSearchParams } from "next/navigation";
+import { useMemo } from "react";
+import { VERTICAL_KINDS } from "@/lib/rig/position-kinds";
+import { useFocusFixtures } from "@/hooks/use-focus";
+import { neighboursOf, poolPlanSvg } from "@/lib/focus/plan-svg";
+import { toQuery } from "@/lib/focus/filters";
+import { ChartCard } from "./chart-card";
+import { FocusControls } from "./focus-controls";
+import { orderForStrip, UnitStrip } from "./unit-strip";
+import { browserTimeZone, useCharts, useInBrowser } from "./use-charts";
+import type { FocusPageData } from "./types";
+
+const idParam = (v: string | null) => (v && /^\d+$/.test(v) ? Number(v) : null);
+
+/** The focus call on a tablet: follow one position unit by unit, mark each focused, keep notes. */
+export function FocusCall({ data }: { data: FocusPageData }) {
+  const router = useRouter();
+  const pathname = usePathname();
+  const params = useSearchParams();
+  const { data: fixtures } = useFocusFixtures(data.production.id, data.fixtures);
+  const inBrowser = useInBrowser();
+
+  const positionId = idParam(params.get("position")) ?? fixtures[0]?.positionId ?? null;
+  const position = data.positions.find((p) => p.id === positionId);
+  const units = useMemo(() => orderForStrip(position?.kind, fixtures.filter((f) => f.positionId === positionId)), [fixtures, positionId, position?.kind]);
+  const current = units.find((f) => f.id === idParam(params.get("unit"))) ?? units.find((f) => !f.focused) ?? units[0] ?? null;
+  const { charts, landmarks } = useCharts(data, current ? [current] : []);
+  const chart = charts[0];
+
+  const go = (next: { position?: number | null; unit?: number | null }) =>
+    router.replace(`${pathname}?${toQuery({ position: next.position ?? positionId, unit: next.unit ?? undefined })}`, { scroll: false });
+  const nextUnit = () => {
+    const i = units.findIndex((f) => f.id === current?.id);
+    const after = [...units.slice(i + 1), ...units.slice(0, i)].find((f) => !f.focused);
+    if (after) go({ unit: after.id });
+  };
+  const step = (d: number) => {
+    const i = units.findIndex((f) => f.id === current?.id);
+    const target = units[i + d];
+    if (target) go({ unit: target.id });
+  };
+
+  const vertical = !!position && VERTICAL_KINDS.has(position.kind);
+  const done = units.filter((f) => f.focused).length;
+  const neighbours = current ? neighboursOf(current, fixtures) : [];
+  const pdf = `/api/productions/${data.production.id}/focus/pdf?${toQuery({ position: positionId, perPage: 4, paper: "A4", tz: inBrowser ? browserTimeZone() : undefined })}`;
+
+  return (
+    <main className="mx-auto flex max-w-5xl flex-col gap-3 px-3 py-3" data-testid="focus-call">
+      <div className="flex flex-wrap items-end gap-3">
+        <label className="flex flex-col text-xs text-muted">
+          Position
+          <select className="min-h-12 rounded-md border border-line bg-surface px-2 text-base text-ink" value={positionId ?? ""} onChange={(e) => go({ position: Number(e.target.value), unit: null })} data-testid="call-position">
+            {data.positions.map((p) => (
+              <option key={p.id} value={p.id}>{p.name}</option>
+            ))}
+          </select>
+        </label>
+        <p className="text-sm text-muted" data-testid="call-progress">{done} of {units.length} focused</p>
+        <div className="ml-auto flex gap-2">
+          <Link href={`/productions/${data.production.id}/focus?${toQuery({ position: positionId })}`} className="inline-flex min-h-12 items-center rounded-md border border-line bg-surface px-3 text-sm text-ink">All charts</Link>
+          <a href={pdf} className="inline-flex min-h-12 items-center rounded-md border border-line bg-surface px-3 text-sm text-ink" data-testid="call-pdf">PDF of this position</a>
+        </div>
+      </div>
+      {!current ? (
+        <p className="rounded-md border border-line bg-surface p-6 text-sm text-muted">No units hang on this position.</p>
+      ) : (
+        <div className={vertical ? "grid grid-cols-[5.5rem_minmax(0,1fr)] gap-3" : "flex flex-col gap-3"}>
+          <UnitStrip kind={position?.kind} units={units} currentId={current.id} onPick={(id) => go({ unit: id })} />
+          <div className="flex min-w-0 flex-col gap-3">
+            <div className="flex gap-2">
+              <button type="button" onClick={() => step(-1)} className="min-h-12 flex-1 rounded-md border border-line bg-surface text-sm text-ink" aria-label="Previous unit">← Previous</button>
+              <button type="button" onClick={() => step(1)} className="min-h-12 flex-1 rounded-md border border-line bg-surface text-sm text-ink" aria-label="Next unit">Next →</button>
+            </div>
+            {inBrowser && chart ? (
+              <>
+                <ChartCard chart={chart} landmarks={landmarks} units={data.production.displayUnits} />
+                <div className="grid gap-3 sm:grid-cols-2">
+                  <figure className="m-0" data-testid="pool-plan">
+                    <div dangerouslySetInnerHTML={{ __html: poolPlanSvg({ current, neighbours, landmarks, stage: data.production }) }} />
+                    <figcaption className="mt-1 text-xs text-muted">
+                      {neighbours.length ? `Also on this mark: ${neighbours.map((n) => `${n.positionName} ${n.unitNumber}`).join(", ")}` : "No other unit aims at this mark."}
+                    </figcaption>
+                  </figure>
+                  <FocusControls fixture={current} chart={chart} data={data} onNext={nextUnit} />
+                </div>
+              </>
+            ) : (
+              <p className="text-sm text-muted">Drawing the chart…</p>
+            )}
+          </div>
+        </div>
+      )}
+    </main>
+  );
+}

@@ -1,0 +1,80 @@
+"use client";
+
+import { useEffect, useState } from "react";
+import { Button } from "@/components/ui/button";
+import { FormMessage } from "@/components/ui/form-message";
+import { useUpdateFocus, type FocusPatch } from "@/hooks/use-focus";
+import type { FixtureDto } from "@/lib/data/fixtures";
+import type { FocusChart } from "@/lib/focus/chart-model";
+import type { FocusPageData } from "./types";
+
+function NoteField({ id, label, value, editable, onSave, busy }: { id: string; label: string; value: string | null; editable: boolean; onSave: (v: string | null) => void; busy: boolean }) {
+  const [text, setText] = useState(value ?? "");
+  useEffect(() => setText(value ?? ""), [value]);
+  if (!editable) {
+    return (
+      <div className="text-sm">
+        <div className="text-xs text-muted">{label}</div>
+        <p className="whitespace-pre-wrap">{value?.trim() ? value : <span className="italic text-muted">none</span>}</p>
+      </div>
+    );
+  }
+  const dirty = text !== (value ?? "");
+  return (
+    <div className="flex flex-col gap-1">
+      <label htmlFor={id} className="text-xs text-muted">{label}</label>
+      <textarea id={id} value={text} onChange={(e) => setText(e.target.value)} rows={3} maxLength={4000} className="rounded-md border border-line bg-surface p-2 text-sm text-ink" />
+      <Button type="button" variant="secondary" disabled={!dirty || busy} onClick={() => onSave(text.trim() ? text : null)} className="self-end">
+        Save {label.toLowerCase()}
+      </Button>
+    </div>
+  );
+}
+
+/** Mark focused (with time and who) and the two kinds of notes, each editable only where the role allows. */
+export function FocusControls({ fixture, chart, data, onNext }: { fixture: FixtureDto; chart: FocusChart; data: FocusPageData; onNext: () => void }) {
+  const update = useUpdateFocus(data.production.id);
+  const [message, setMessage] = useState<{ text: string; tone: "error" | "ok" } | null>(null);
+  useEffect(() => setMessage(null), [fixture.id]);
+
+  const save = (patch: FocusPatch, then?: () => void) =>
+    update.mutate(
+      { id: fixture.id, version: fixture.version, patch },
+      {
+        onSuccess: () => {
+          setMessage({ text: "Saved.", tone: "ok" });
+          then?.();
+        },
+        onError: (err) => setMessage({ text: err.message, tone: "error" }),
+      },
+    );
+
+  return (
+    <section className="flex flex-col gap-3 rounded-md border border-line bg-surface p-3" aria-label="Focus status and notes">
+      <p className={`text-sm ${fixture.focused ? "font-medium text-success" : "text-muted"}`} data-testid="focused-line">{chart.focusedLine}</p>
+      {data.rights.focus ? (
+        <div className="flex flex-wrap gap-2">
+          {fixture.focused ? (
+            <Button type="button" variant="secondary" disabled={update.isPending} onClick={() => save({ focused: false })} data-testid="unmark-focused">
+              Undo focused
+            </Button>
+          ) : (
+            <>
+              <Button type="button" disabled={update.isPending} onClick={() => save({ focused: true }, onNext)} className="min-h-12 px-6 text-base" data-testid="mark-focused">
+                Focused — next unit
+              </Button>
+              <Button type="button" variant="secondary" disabled={update.isPending} onClick={() => save({ focused: true })} className="min-h-12" data-testid="mark-focused-stay">
+                Mark focused
+              </Button>
+            </>
+          )}
+        </div>
+      ) : (
+        <p className="text-xs text-muted">Your role can read these charts; the electricians and the designer mark units focused.</p>
+      )}
+      <NoteField id="as-focused-notes" label="As-focused notes" value={fixture.focusNotes} editable={data.rights.focus} busy={update.isPending} onSave={(v) => save({ focusNotes: v })} />
+      <NoteField id="designer-notes" label="Designer notes" value={fixture.notes} editable={data.rights.designerNotes} busy={update.isPending} onSave={(v) => save({ notes: v })} />
+      <div aria-live="polite">{message && <FormMessage message={message.text} tone={message.tone} />}</div>
+    </section>
+  );
+}

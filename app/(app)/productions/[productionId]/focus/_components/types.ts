@@ -1,0 +1,13 @@
+import type { FixtureDto } from "@/lib/data/fixtures";
+import type { ProductionDto } from "@/lib/data/productions";
+import type { PositionKind } from "@/lib/rig/position-kinds";
+
+export type FocusPageData = {
+  production: ProductionDto;
+  fixtures: FixtureDto[];
+  positions: Array<{ id: number; name: string; kind: PositionKind }>;
+  points: Array<{ id: number; name: string }>;
+  userNames: Record<number, string>;
+  /** From the policy module, decided on the server: the screen only hides what the API would refuse. */
+  rights: { focus: boolean; designerNotes: boolean; export: boolean };
+};

@@ -1,0 +1,44 @@
+"use client";
+
+import { VERTICAL_KINDS, type PositionKind } from "@/lib/rig/position-kinds";
+import type { FixtureDto } from "@/lib/data/fixtures";
+
+/**
+ * The position as a strip of its units, in the order the crew meets them: booms and ladders top to
+ * bottom (by lens height), pipes and trusses along their length as drawn on the plan (stage right first).
+ */
+export function orderForStrip(kind: PositionKind | undefined, units: FixtureDto[]): FixtureDto[] {
+  const list = units.slice();
+  if (kind && VERTICAL_KINDS.has(kind)) return list.sort((a, b) => b.computed.lensHeight - a.computed.lensHeight);
+  return list.sort((a, b) => a.x - b.x);
+}
+
+export function UnitStrip({ kind, units, currentId, onPick }: { kind: PositionKind | undefined; units: FixtureDto[]; currentId: number | null; onPick: (id: number) => void }) {
+  const vertical = !!kind && VERTICAL_KINDS.has(kind);
+  return (
+    <nav
+      aria-label={vertical ? "Units, top to bottom" : "Units along the position, stage right to stage left"}
+      className={`flex gap-1.5 rounded-md border border-line bg-raised p-1.5 ${vertical ? "flex-col" : "overflow-x-auto"}`}
+      data-testid="unit-strip"
+    >
+      {units.map((f) => {
+        const current = f.id === currentId;
+        return (
+          <button
+            key={f.id}
+            type="button"
+            onClick={() => onPick(f.id)}
+            aria-current={current ? "true" : undefined}
+            aria-label={`Unit ${f.unitNumber}, channel ${f.channel ?? "none"}${f.focused ? ", focused" : ""}`}
+            className={`flex min-h-12 min-w-12 flex-col items-center justify-center rounded px-2 text-sm ${
+              current ? "bg-accent text-accent-ink" : f.focused ? "bg-surface text-success" : "bg-surface text-ink"
+            } border ${current ? "border-accent" : "border-line"}`}
+          >
+            <span className="font-semibold">{f.unitNumber}</span>
+            <span className="text-xs opacity-80">{f.focused ? "✓ " : ""}{f.channel ?? "—"}</span>
+          </button>
+        );
+      })}
+    </nav>
+  );
+}

@@ -1,0 +1,19 @@
+import type { Metadata } from "next";
+import { Suspense } from "react";
+import { CHART_CSS, PLAN_CSS } from "@/lib/focus/chart-css";
+import { FocusCall } from "../_components/focus-call";
+import { loadFocusPage } from "../load-page";
+
+export const metadata: Metadata = { title: "Focus call" };
+
+export default async function FocusCallPage({ params }: { params: Promise<{ productionId: string }> }) {
+  const data = await loadFocusPage((await params).productionId);
+  return (
+    <>
+      <style dangerouslySetInnerHTML={{ __html: CHART_CSS + PLAN_CSS }} />
+      <Suspense>
+        <FocusCall data={data} />
+      </Suspense>
+    </>
+  );
+}

@@ -1,0 +1,112 @@
+// Focus charts in Chromium: 120 charts printed to PDF in every layout (page counts checked with pdfinfo,
+// the first page turned into a PNG with pdftoppm), and the electrician's focus call on a tablet.
+import { execFileSync } from "node:child_process";
+import { mkdirSync, writeFileSync } from "node:fs";
+import path from "node:path";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { BrowserContext, Page } from "playwright-core";
+import { DEMO, openBrowser, screenshot, signIn } from "./support/browser";
+
+const RESULTS = path.resolve(process.env.TEST_RESULTS_DIR ?? "test-results");
+const PDF_DIR = path.join(RESULTS, "focus-pdf");
+
+let browser: BrowserContext;
+beforeAll(async () => {
+  browser = await openBrowser();
+  mkdirSync(PDF_DIR, { recursive: true });
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+function pdfPages(file: string): number {
+  const info = execFileSync("pdfinfo", [file], { encoding: "utf8" });
+  return Number(info.match(/^Pages:\s+(\d+)/m)![1]);
+}
+
+/** A fresh production of the designer's with 120 fixtures on two positions of 60, built through the API. */
+async function productionWith120(page: Page): Promise<number> {
+  const api = page.context().request;
+  const post = async (url: string, data: unknown) => {
+    const r = await api.post(url, { data });
+    expect(r.status(), `${url}: ${await r.text()}`).toBe(201);
+    return r.json();
+  };
+  const id = (await post("/api/productions", { name: `Focus print ${Date.now()}` })).production.id as number;
+  const type = (await post(`/api/productions/${id}/fixture-types`, { name: "Profile 26", family: "profile", coneMinDeg: 26, coneMaxDeg: 26, peakCandela: 40000, dmxModes: [{ name: "dimmer", footprint: 1 }] })).fixtureType;
+  const point = (await post(`/api/productions/${id}/focus-points`, { name: "Centre", x: 0, y: 3 })).focusPoint;
+  for (const [n, y] of [[1, -7], [2, 2]] as const) {
+    const pos = (await post(`/api/productions/${id}/positions`, { name: `Pipe ${n}`, kind: y < 0 ? "foh-bridge" : "overhead-pipe", x1: -7, y1: y, x2: 7, y2: y, trimHeight: 7.5 })).position;
+    const fixtures = Array.from({ length: 60 }, (_, i) => ({
+      positionId: pos.id, fixtureTypeId: type.id, unitNumber: String(i + 1), x: -7 + i * (14 / 59), y, channel: (n - 1) * 60 + i + 1,
+      ...(i % 2 ? { focusPointId: point.id } : { focusX: -4 + (i % 9), focusY: 1 + (i % 5) }),
+      ...(i % 3 === 0 ? { shutterCuts: [{ label: "top", a: { x: -6, y: -1.5 }, b: { x: 6, y: -1.5 } }] } : {}),
+    }));
+    await post(`/api/productions/${id}/fixtures`, { fixtures });
+  }
+  return id;
+}
+
+describe("printing 120 focus charts to PDF", () => {
+  it("gives ceil(120/n) pages for 1, 2, 4 and 6 charts a page, and the first page renders", async () => {
+    const page = await browser.newPage();
+    await signIn(page, DEMO.designer);
+    const id = await productionWith120(page);
+    for (const n of [1, 2, 4, 6]) {
+      const r = await page.context().request.get(`/api/productions/${id}/focus/pdf?perPage=${n}&paper=${n === 2 ? "Letter" : "A4"}&tz=UTC`, { timeout: 120_000 });
+      expect(r.status()).toBe(200);
+      expect(r.headers()["content-type"]).toBe("application/pdf");
+      const file = path.join(PDF_DIR, `focus-120-${n}up.pdf`);
+      writeFileSync(file, await r.body());
+      // arithmetic: 120 charts, n a page (each position's 60 divides evenly into 1, 2, 4 and 6)
+      expect(pdfPages(file)).toBe(Math.ceil(120 / n));
+      execFileSync("pdftoppm", ["-png", "-r", "60", "-f", "1", "-l", "1", "-singlefile", file, path.join(RESULTS, "screenshots", `focus-pdf-${n}up-page1`)]);
+    }
+    // The print view shows the same sheets for the browser's own print.
+    await page.goto(`/productions/${id}/focus/print?perPage=6&paper=A4&tz=UTC`);
+    await expect(page.getByTestId("focus-sheet").count()).resolves.toBe(20);
+    await screenshot(page, "focus-print-view-6up");
+    await page.close();
+  });
+});
+
+describe("the electrician's focus call on a tablet", () => {
+  it("opens one position, marks units focused, and prints that position", async () => {
+    const context = await openBrowser({ width: 800, height: 1280 });
+    const page = await context.newPage();
+    await signIn(page, DEMO.electrician);
+    const productionId = new URL(page.url()).pathname.split("/")[2];
+    await page.goto(`/productions/${productionId}/focus`);
+    await page.getByTestId("chart-list").waitFor();
+    const boomId = await page.getByTestId("filter-position").locator("option", { hasText: "Boom SR 2" }).getAttribute("value");
+    await page.getByTestId("filter-position").selectOption(boomId!);
+    await expect.poll(() => page.getByTestId("focus-chart").count()).toBe(4);
+    await screenshot(page, "focus-list-tablet");
+
+    await page.getByTestId("open-focus-call").click();
+    await page.getByTestId("focus-call").waitFor();
+    await page.getByTestId("mark-focused").waitFor();
+    const before = await page.getByTestId("call-progress").textContent();
+    const done = Number(before!.split(" ")[0]);
+    await page.getByTestId("mark-focused").click();
+    await expect.poll(() => page.getByTestId("call-progress").textContent()).toBe(`${done + 1} of 4 focused`);
+    // "Focused — next unit" moved on; mark this one without moving, then check who and when.
+    await page.getByTestId("mark-focused-stay").click();
+    await expect.poll(() => page.getByTestId("focused-line").textContent()).toMatch(/^Focused \d{1,2} \w{3} \d{4}, \d\d:\d\d by Teodor Brask$/);
+    await page.getByLabel("As-focused notes").fill("Top shutter trimmed off the lip.");
+    await page.getByRole("button", { name: "Save as-focused notes" }).click();
+    await expect.poll(() => page.getByRole("status").first().textContent()).toBe("Saved.");
+    await expect(page.getByLabel("Designer notes").count()).resolves.toBe(0); // read-only for the electrician
+    await screenshot(page, "focus-call-tablet-light");
+    await page.getByTestId("theme-toggle").click();
+    await screenshot(page, "focus-call-tablet-dark");
+
+    const href = await page.getByTestId("call-pdf").getAttribute("href");
+    const r = await page.context().request.get(href!, { timeout: 120_000 });
+    expect(r.status()).toBe(200);
+    const file = path.join(PDF_DIR, "boom-sr-2.pdf");
+    writeFileSync(file, await r.body());
+    expect(pdfPages(file)).toBe(1); // 4 units at 4 a page
+    await context.close();
+  });
+});
