@@ -37,7 +37,8 @@ async function main() {
   const settings = { ...fileEnv, ...process.env };
   const useOwnDb = !settings.DATABASE_URL;
 
-  ensurePackages(useOwnDb ? ["mariadb", "mariadbClient"] : []);
+  // Chromium: the server prints focus-chart PDFs with Debian's headless Chromium.
+  ensurePackages(useOwnDb ? ["mariadb", "mariadbClient", "chromium"] : ["chromium"]);
   ensureNodeModules(ROOT);
 
   let databaseUrl = settings.DATABASE_URL;
