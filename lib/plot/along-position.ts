@@ -61,8 +61,8 @@ export function unitNumberForInsert(existing: string[], before: string | null): 
   const maxWhole = Math.max(0, ...wholes);
   if (before === null) {
     const minWhole = Math.min(...wholes);
-    if (minWhole > 1) return String(minWhole - 1);
-    return nextLetter(sorted[0].match(/^\d+/)?.[0] ?? "0", taken, "0");
+    if (minWhole > 0) return String(minWhole - 1);
+    return nextLetter("0", taken, "0");
   }
   const idx = sorted.findIndex((u) => u.toUpperCase() === before.toUpperCase());
   if (idx === -1 || idx === sorted.length - 1) return String(maxWhole + 1);

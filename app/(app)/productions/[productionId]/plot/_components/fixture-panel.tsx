@@ -15,6 +15,12 @@ const numberOrNull = (text: string, what: string, opts: { int?: boolean } = {}):
   return n;
 };
 
+/** The same limits the API enforces, said at the field before the request goes out. */
+const inRange = (n: number | null, what: string, min: number, max: number) => {
+  if (n !== null && !(n > min && n < max)) throw new RangeError(`${what} must be more than ${Math.max(0, min)}° and less than ${max}°.`);
+  return n;
+};
+
 export function FixturePanel(p: PanelProps & { fixture: FixtureDto }) {
   const f = p.fixture;
   const units = p.production.displayUnits;
@@ -84,9 +90,9 @@ export function FixturePanel(p: PanelProps & { fixture: FixtureDto }) {
           <PanelField label="Aim at" value={f.focusPointName ?? "its own mark"} editable={false} commit={() => null} />
         )}
         <PanelField label="Cone (°)" value={g.coneDeg.toFixed(1)} hint={type ? `this type: ${type.coneMinDeg}–${type.coneMaxDeg}°` : undefined} editable={ed} testId="field-cone"
-          commit={save("Change the cone", (t) => ({ coneDeg: numberOrNull(t, "Cone") }))} />
+          commit={save("Change the cone", (t) => ({ coneDeg: inRange(numberOrNull(t, "Cone"), "Cone", 0, 180) }))} />
         <PanelField label="Edge softness (°)" value={g.softnessDeg.toFixed(1)} editable={ed} testId="field-softness"
-          commit={save("Change the softness", (t) => ({ softnessDeg: numberOrNull(t, "Softness") }))} />
+          commit={save("Change the softness", (t) => ({ softnessDeg: inRange(numberOrNull(t, "Softness"), "Softness", -1e-9, 90) }))} />
         <PanelField label="Lens height" value={f.lensHeight == null ? "" : formatLength(f.lensHeight, units)} placeholder={`${formatLength(g.lensHeight, units)} (trim − lens drop)`} hint="Empty: trim less the type's lens drop" editable={ed} testId="field-lens-height"
           commit={save("Change the lens height", (t) => ({ lensHeight: t === "" ? null : parseLength(t, unit) }))} />
         {ed ? (

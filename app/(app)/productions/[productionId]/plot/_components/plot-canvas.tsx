@@ -53,11 +53,11 @@ export default function PlotCanvas(props: PlotCanvasProps) {
   const live = useRef({ props, items, outline, palette, size, underlay });
   live.current = { props, items, outline, palette, size, underlay };
 
-  const redraw = useCallback((which: "all" | "overlay" | "drag" = "all") => {
-    if (which === "overlay") overlayLayer.current?.batchDraw();
-    else if (which === "drag") {
-      overlayLayer.current?.batchDraw();
-    } else stage.current?.batchDraw();
+  const redraw = useCallback((which: "all" | "overlay" = "all") => {
+    if (which === "overlay") return overlayLayer.current?.batchDraw();
+    stage.current?.batchDraw();
+    // The current view, for tests and the benchmark to turn plan metres into screen points.
+    if (container.current) container.current.dataset.view = JSON.stringify(view.current);
   }, []);
 
   // A released drag keeps its preview until the server's row arrives (then the server's numbers show).

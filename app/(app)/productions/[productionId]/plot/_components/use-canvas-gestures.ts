@@ -21,7 +21,7 @@ type Args = {
   draft: RefObject<Point[]>;
   preview: RefObject<FixtureDto | null>;
   live: Live;
-  redraw: (which?: "all" | "overlay" | "drag") => void;
+  redraw: (which?: "all" | "overlay") => void;
 };
 
 const TWO_POINT_TOOLS = new Set(["position-line", "landmark", "cut", "calibrate"]);
@@ -39,11 +39,14 @@ export function useCanvasGestures({ container, view, gesture, draft, preview, li
       const r = el.getBoundingClientRect();
       return { x: e.clientX - r.left, y: e.clientY - r.top };
     };
+    let wantAll = false;
     const schedule = (which: "all" | "overlay") => {
+      wantAll ||= which === "all";
       if (frame) return;
       frame = requestAnimationFrame(() => {
         frame = 0;
-        redraw(which);
+        redraw(wantAll ? "all" : "overlay");
+        wantAll = false;
       });
     };
     const fixtureOf = (id: number) => live.current.props.data.fixtures.find((f) => f.id === id) ?? null;
@@ -134,6 +137,7 @@ export function useCanvasGestures({ container, view, gesture, draft, preview, li
       const v = view.current;
       const plan = screenToPlan(v, s);
       const p = live.current.props;
+      const firstPreview = !preview.current && (g.kind === "mark" || g.kind === "fixture");
       switch (g.kind) {
         case "pan":
           view.current = panBy(v, s.x - g.last.x, s.y - g.last.y);
@@ -161,7 +165,7 @@ export function useCanvasGestures({ container, view, gesture, draft, preview, li
           g.to = plan;
           break;
       }
-      schedule("overlay");
+      schedule(firstPreview ? "all" : "overlay"); // the first frame hides the unit's saved pool under the preview
     }
 
     function onUp(e: PointerEvent) {
