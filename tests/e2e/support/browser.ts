@@ -25,7 +25,9 @@ export async function openBrowser(viewport = { width: 1366, height: 900 }): Prom
   return context;
 }
 
+/** Signs in afresh (any earlier session in this browser context is dropped first). */
 export async function signIn(page: Page, email: string, password = DEMO_PASSWORD) {
+  await page.context().clearCookies();
   await page.goto("/sign-in");
   await page.getByLabel("E-mail").fill(email);
   await page.getByLabel("Password").fill(password);
