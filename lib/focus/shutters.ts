@@ -80,7 +80,7 @@ function footOnLine(p: Point, a: Point, b: Point): Point {
   return { x: a.x + t * dx, y: a.y + t * dy };
 }
 
-/** The landmark a cut runs along: nearly parallel and close to where the cut meets the pool. */
+/** The landmark a cut runs along (nearly parallel, close to where the cut meets the pool), else one whose end it meets. */
 export function matchLandmark(cut: { a: Point; b: Point }, mark: Point, landmarks: Landmark[]): Landmark | null {
   const foot = footOnLine(mark, cut.a, cut.b);
   const d = Math.atan2(cut.b.y - cut.a.y, cut.b.x - cut.a.x);
@@ -92,6 +92,15 @@ export function matchLandmark(cut: { a: Point; b: Point }, mark: Point, landmark
     const onLine = footOnLine(foot, l.a, l.b);
     const dist = Math.hypot(onLine.x - foot.x, onLine.y - foot.y);
     if (dist <= NEAR_M && (!best || dist < best.dist)) best = { l, dist };
+  }
+  if (best) return best.l;
+  // A cut across a line's end: the onstage edge of a leg drawn as a short line across the stage.
+  const len = Math.hypot(cut.b.x - cut.a.x, cut.b.y - cut.a.y);
+  for (const l of landmarks) {
+    for (const end of [l.a, l.b]) {
+      const dist = Math.abs((cut.b.x - cut.a.x) * (cut.a.y - end.y) - (cut.a.x - end.x) * (cut.b.y - cut.a.y)) / len;
+      if (dist <= NEAR_M && (!best || dist < best.dist)) best = { l, dist };
+    }
   }
   return best?.l ?? null;
 }

@@ -20,11 +20,11 @@ export function browserTimeZone(): string | undefined {
   return typeof Intl !== "undefined" ? Intl.DateTimeFormat().resolvedOptions().timeZone : undefined;
 }
 
-export function useCharts(data: Pick<FocusPageData, "production" | "userNames">, fixtures: FixtureDto[]) {
-  const landmarks = useMemo(() => mergeLandmarks(null, outlineLandmarks(data.production)), [data.production]);
+export function useCharts(data: Pick<FocusPageData, "production" | "userNames" | "drawnLandmarks" | "extras">, fixtures: FixtureDto[]) {
+  const landmarks = useMemo(() => mergeLandmarks(data.drawnLandmarks, outlineLandmarks(data.production)), [data.production, data.drawnLandmarks]);
   const charts = useMemo<FocusChart[]>(
-    () => fixtures.map((f) => buildFocusChart(f, data.production, { landmarks, userNames: data.userNames, timeZone: browserTimeZone() })),
-    [fixtures, data.production, data.userNames, landmarks],
+    () => fixtures.map((f) => buildFocusChart(f, data.production, { landmarks, userNames: data.userNames, timeZone: browserTimeZone(), extras: data.extras[f.id] })),
+    [fixtures, data.production, data.userNames, data.extras, landmarks],
   );
   return { charts, landmarks };
 }
