@@ -5,6 +5,8 @@ export const productionKeys = {
   list: () => [...productionKeys.all, "list"] as const,
   detail: (id: number) => [...productionKeys.all, id] as const,
   fixtures: (id: number) => [...productionKeys.all, id, "fixtures"] as const,
+  fixtureTypes: (id: number) => [...productionKeys.all, id, "fixture-types"] as const,
+  accessories: (id: number) => [...productionKeys.all, id, "accessories"] as const,
   cues: (id: number) => [...productionKeys.all, id, "cues"] as const,
   cueSheet: (id: number) => [...productionKeys.all, id, "cues", "sheet"] as const,
   // Everything the plot draws in one read, and the change token it polls for live updates.

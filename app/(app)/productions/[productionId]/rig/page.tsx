@@ -1,8 +1,42 @@
 import type { Metadata } from "next";
-import { NotYet } from "@/components/not-yet";
+import { memberForPage } from "@/lib/auth/page-guards";
+import { can, canEditField } from "@/lib/auth/policy";
+import { requireProduction } from "@/lib/data/productions";
+import { getFixturesByProduction } from "@/lib/data/fixtures";
+import { getFixtureTypesByProduction } from "@/lib/data/fixture-types";
+import { getPositionsByProduction } from "@/lib/data/positions";
+import { getAccessoriesByProduction } from "@/lib/data/accessories";
+import { RIG_COLUMNS } from "@/lib/rig/columns";
+import { isRigViewId } from "@/lib/rig/views";
+import { RigWorkspace } from "./_components/rig-workspace";
 
 export const metadata: Metadata = { title: "Rig" };
 
-export default function Page() {
-  return <NotYet feature="Rig" what="Fixture tables for hanging, patching and programming, with CSV and Excel import and export." />;
+// The model attribute behind each editable column (the policy speaks in attributes).
+const ATTRIBUTE: Record<string, string> = { position: "positionId", type: "fixtureTypeId" };
+
+export default async function RigPage({ params, searchParams }: { params: Promise<{ productionId: string }>; searchParams: Promise<{ view?: string }> }) {
+  const { productionId, member } = await memberForPage((await params).productionId);
+  const [production, fixtures, types, positions, accessories] = await Promise.all([
+    requireProduction(productionId),
+    getFixturesByProduction({ productionId }),
+    getFixtureTypesByProduction({ productionId }),
+    getPositionsByProduction({ productionId }),
+    getAccessoriesByProduction({ productionId }),
+  ]);
+  const editable = RIG_COLUMNS.filter((c) => c.importKey && c.id !== "unitNumber" && c.id !== "focusPoint" && canEditField(member, "fixture", ATTRIBUTE[c.id] ?? c.id)).map((c) => c.id);
+  const view = (await searchParams).view;
+  return (
+    <RigWorkspace
+      productionId={productionId}
+      productionName={production.name}
+      units={production.displayUnits}
+      initialView={view && isRigViewId(view) ? view : "hang"}
+      initialFixtures={fixtures}
+      initialTypes={types}
+      initialAccessories={accessories}
+      positions={positions.map((p) => ({ id: p.id, name: p.name }))}
+      rights={{ editable, canImport: can(member, "rig.import"), canPlot: can(member, "plot.edit"), canElectrics: can(member, "rig.editElectrics") }}
+    />
+  );
 }

@@ -1,0 +1,111 @@
+"use client";
+
+import { useState } from "react";
+import type { FixtureDto } from "@/lib/data/fixtures";
+import { fixtureFieldsSchema } from "@/lib/validation/fixture";
+import type { RigColumn, Units } from "@/lib/rig/columns";
+import { ApiError } from "@/lib/http/api-client";
+import { useUpdateRigFixture } from "@/hooks/use-rig";
+import { editText, readTyped, showValue } from "./cell-value";
+
+export type Choice = { id: number; name: string };
+const ATTRIBUTE: Record<string, string> = { position: "positionId", type: "fixtureTypeId" };
+
+/**
+ * A table cell the signed-in role may edit. Validated as typed (the API's own field schema), saved
+ * with the row's version; a stale version shows the other person's value instead of overwriting it.
+ */
+export function EditableCell({ fixture, column, units, productionId, choices }: { fixture: FixtureDto; column: RigColumn; units: Units; productionId: number; choices?: Choice[] }) {
+  const attr = ATTRIBUTE[column.id] ?? column.id;
+  const update = useUpdateRigFixture(productionId);
+  const [editing, setEditing] = useState(false);
+  const [text, setText] = useState("");
+  const [message, setMessage] = useState<{ tone: "error" | "conflict"; text: string } | null>(null);
+  const value = column.value(fixture);
+  const label = `${column.header} of unit ${fixture.unitNumber} on ${fixture.positionName}`;
+
+  async function save(next: unknown) {
+    const schema = (fixtureFieldsSchema.shape as Record<string, { safeParse: (v: unknown) => { success: boolean; error?: { issues: Array<{ message: string }> } } }>)[attr];
+    const checked = schema.safeParse(next);
+    if (!checked.success) return setMessage({ tone: "error", text: checked.error!.issues[0].message });
+    setEditing(false);
+    try {
+      await update.mutateAsync({ id: fixture.id, patch: { version: fixture.version, [attr]: next } });
+      setMessage(null);
+    } catch (err) {
+      if (err instanceof ApiError && err.status === 409) {
+        const current = (err.current as Record<string, unknown> | undefined)?.[attr];
+        setMessage({ tone: "conflict", text: `Someone else changed this first; it is now ${current === null || current === undefined || current === "" ? "empty" : showValue(column.kind, current, units)}. Your edit was not saved.` });
+      } else setMessage({ tone: "error", text: err instanceof ApiError ? (err.fieldErrors[attr]?.[0] ?? err.message) : "Could not save." });
+    }
+  }
+
+  const note = message ? (
+    <span role={message.tone === "error" ? "alert" : "status"} className={`block max-w-56 whitespace-normal text-xs ${message.tone === "error" ? "text-danger" : "text-caution"}`} data-testid="cell-message">
+      {message.text}
+    </span>
+  ) : null;
+
+  if (column.kind === "bool") {
+    return (
+      <label className="flex items-center gap-1">
+        <input type="checkbox" aria-label={label} checked={Boolean(value)} disabled={update.isPending} onChange={(e) => save(e.target.checked)} />
+        {note}
+      </label>
+    );
+  }
+  if (choices || column.id === "aim") {
+    const options = choices ?? [{ id: 0, name: "deck" }, { id: 1, name: "head" }];
+    const current = choices ? (fixture as unknown as Record<string, number>)[attr] : value;
+    return (
+      <span>
+        <select aria-label={label} className="max-w-44 rounded border border-transparent bg-transparent py-0.5 hover:border-line print:appearance-none" value={String(current)} disabled={update.isPending}
+          onChange={(e) => save(choices ? Number(e.target.value) : e.target.value)}>
+          {options.map((o) => (
+            <option key={o.id} value={choices ? o.id : o.name}>{o.name}</option>
+          ))}
+        </select>
+        {note}
+      </span>
+    );
+  }
+  if (!editing) {
+    return (
+      <span>
+        <button type="button" aria-label={`Edit ${label}`} className="min-h-6 w-full min-w-10 rounded px-1 text-left hover:bg-raised" onClick={() => { setText(editText(column.kind, value, units)); setEditing(true); setMessage(null); }}>
+          {showValue(column.kind, value, units) || <span className="text-muted print:hidden">–</span>}
+        </button>
+        {note}
+      </span>
+    );
+  }
+  return (
+    <span>
+      <input
+        autoFocus
+        aria-label={label}
+        aria-invalid={message?.tone === "error" || undefined}
+        className="w-full min-w-16 rounded border border-accent bg-surface px-1 aria-invalid:border-danger"
+        value={text}
+        onChange={(e) => setText(e.target.value)}
+        onKeyDown={(e) => {
+          if (e.key === "Escape") { setEditing(false); setMessage(null); }
+          if (e.key === "Enter") commit();
+        }}
+        onBlur={() => commit()}
+      />
+      {note}
+    </span>
+  );
+
+  function commit() {
+    let next: unknown;
+    try {
+      next = readTyped(column.kind, text, units);
+    } catch (err) {
+      return setMessage({ tone: "error", text: (err as Error).message });
+    }
+    if (next === value || (next === null && (value === null || value === ""))) return setEditing(false);
+    void save(next);
+  }
+}

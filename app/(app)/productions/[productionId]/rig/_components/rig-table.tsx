@@ -1,0 +1,146 @@
+"use client";
+
+import { useMemo } from "react";
+import {
+  flexRender, getCoreRowModel, getExpandedRowModel, getFilteredRowModel, getGroupedRowModel, getSortedRowModel, useReactTable,
+  type ColumnDef, type GroupingState, type RowSelectionState, type SortingState, type VisibilityState,
+} from "@tanstack/react-table";
+import type { FixtureDto } from "@/lib/data/fixtures";
+import { RIG_COLUMNS, headerWithUnit, type Units } from "@/lib/rig/columns";
+import { compareUnitNumbers } from "@/lib/rig/unit-number";
+import { EditableCell, type Choice } from "./editable-cell";
+import { showValue } from "./cell-value";
+
+export type TableState = {
+  sorting: SortingState;
+  grouping: GroupingState;
+  visibility: VisibilityState;
+  filter: string;
+  selection: RowSelectionState;
+};
+
+type Props = {
+  fixtures: FixtureDto[];
+  units: Units;
+  productionId: number;
+  editable: string[];
+  selectable: boolean;
+  choices: { position: Choice[]; type: Choice[] };
+  state: TableState;
+  onState: (patch: Partial<TableState>) => void;
+};
+
+/** One table of every fixture: stored fields beside computed focus values, sort, filter, group and inline edit. */
+export function RigTable({ fixtures, units, productionId, editable, selectable, choices, state, onState }: Props) {
+  const hangOrder = useMemo(() => {
+    const m = new Map<number, number>();
+    fixtures.forEach((f) => m.has(f.positionId) || m.set(f.positionId, m.size));
+    return m;
+  }, [fixtures]);
+
+  const columns = useMemo<ColumnDef<FixtureDto>[]>(() => {
+    const defs: ColumnDef<FixtureDto>[] = RIG_COLUMNS.map((c) => ({
+      id: c.id,
+      header: headerWithUnit(c, units).replace(/ \((m|ft)\)$/, ""),
+      accessorFn: (f) => c.value(f),
+      sortingFn:
+        c.id === "position"
+          ? (a, b) => hangOrder.get(a.original.positionId)! - hangOrder.get(b.original.positionId)!
+          : c.id === "unitNumber"
+            ? (a, b) => compareUnitNumbers(a.original.unitNumber, b.original.unitNumber)
+            : "auto",
+      sortUndefined: "last",
+      getGroupingValue: (f) => String(c.value(f) ?? "—"),
+      cell: ({ row }) =>
+        editable.includes(c.id) ? (
+          <EditableCell fixture={row.original} column={c} units={units} productionId={productionId} choices={c.id === "position" ? choices.position : c.id === "type" ? choices.type : undefined} />
+        ) : (
+          <span className={c.importKey ? "" : "text-muted"}>{showValue(c.kind, c.value(row.original), units)}</span>
+        ),
+      meta: { computed: !c.importKey },
+    }));
+    if (selectable) {
+      defs.unshift({
+        id: "select",
+        enableSorting: false,
+        enableHiding: false,
+        header: ({ table }) => <input type="checkbox" aria-label="Select every shown fixture" checked={table.getIsAllRowsSelected()} onChange={table.getToggleAllRowsSelectedHandler()} />,
+        cell: ({ row }) => (row.getCanSelect() ? <input type="checkbox" aria-label={`Select unit ${row.original.unitNumber} on ${row.original.positionName}`} checked={row.getIsSelected()} onChange={row.getToggleSelectedHandler()} /> : null),
+      });
+    }
+    return defs;
+  }, [units, editable, productionId, choices, selectable, hangOrder]);
+
+  const table = useReactTable({
+    data: fixtures,
+    columns,
+    getRowId: (f) => String(f.id),
+    state: { sorting: state.sorting, grouping: state.grouping, columnVisibility: state.visibility, globalFilter: state.filter, rowSelection: state.selection, expanded: true },
+    onSortingChange: (u) => onState({ sorting: typeof u === "function" ? u(state.sorting) : u }),
+    onRowSelectionChange: (u) => onState({ selection: typeof u === "function" ? u(state.selection) : u }),
+    onGlobalFilterChange: (v) => onState({ filter: String(v ?? "") }),
+    globalFilterFn: (row, _id, filter: string) => {
+      const needle = filter.toLowerCase();
+      return RIG_COLUMNS.some((c) => state.visibility[c.id] !== false && String(showValue(c.kind, c.value(row.original), units)).toLowerCase().includes(needle));
+    },
+    groupedColumnMode: false,
+    enableMultiSort: true,
+    isMultiSortEvent: (e) => (e as MouseEvent).shiftKey,
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+    getFilteredRowModel: getFilteredRowModel(),
+    getGroupedRowModel: getGroupedRowModel(),
+    getExpandedRowModel: getExpandedRowModel(),
+  });
+
+  const visibleCount = table.getVisibleLeafColumns().length;
+  return (
+    <div className="overflow-x-auto rounded-lg border border-line bg-surface print:overflow-visible print:border-0">
+      <table className="w-full border-collapse text-sm print:text-[9pt]" data-testid="rig-table">
+        <thead className="sticky top-0 bg-raised print:static print:bg-transparent">
+          {table.getHeaderGroups().map((hg) => (
+            <tr key={hg.id}>
+              {hg.headers.map((h) => {
+                const sorted = h.column.getIsSorted();
+                const computed = (h.column.columnDef.meta as { computed?: boolean } | undefined)?.computed;
+                return (
+                  <th key={h.id} scope="col" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}
+                    className={`whitespace-nowrap border-b border-line px-2 py-1.5 text-left text-xs font-semibold ${computed ? "italic text-muted" : ""} ${h.id === "select" ? "print:hidden" : ""}`}>
+                    {h.column.getCanSort() ? (
+                      <button type="button" className="inline-flex items-center gap-1 hover:text-accent" onClick={h.column.getToggleSortingHandler()} title="Click to sort; shift-click to add a second sort">
+                        {flexRender(h.column.columnDef.header, h.getContext())}
+                        <span aria-hidden className="print:hidden">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : ""}</span>
+                      </button>
+                    ) : (
+                      flexRender(h.column.columnDef.header, h.getContext())
+                    )}
+                  </th>
+                );
+              })}
+            </tr>
+          ))}
+        </thead>
+        <tbody>
+          {table.getRowModel().rows.map((row) =>
+            row.getIsGrouped() ? (
+              <tr key={row.id} className="bg-canvas print:break-after-avoid">
+                <th colSpan={visibleCount} scope="colgroup" className="border-b border-line px-2 pb-1 pt-3 text-left text-sm font-semibold">
+                  {String(row.groupingValue)} <span className="font-normal text-muted">· {row.subRows.length} unit{row.subRows.length === 1 ? "" : "s"}</span>
+                </th>
+              </tr>
+            ) : (
+              <tr key={row.id} data-testid="rig-row" className={`border-b border-line/60 align-top hover:bg-raised/50 print:break-inside-avoid ${row.getIsSelected() ? "bg-accent/10" : ""}`}>
+                {row.getVisibleCells().map((cell) => (
+                  <td key={cell.id} className={`whitespace-nowrap px-2 py-1 ${cell.column.id === "select" ? "print:hidden" : ""}`}>
+                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                  </td>
+                ))}
+              </tr>
+            ),
+          )}
+        </tbody>
+      </table>
+      {table.getRowModel().rows.length === 0 ? <p className="p-4 text-sm text-muted">No fixtures match.</p> : null}
+    </div>
+  );
+}

@@ -1,0 +1,121 @@
+"use client";
+
+import { useMemo, useState } from "react";
+import { usePathname, useRouter } from "next/navigation";
+import type { FixtureDto } from "@/lib/data/fixtures";
+import type { FixtureTypeDto } from "@/lib/data/fixture-types";
+import type { AccessoryDto } from "@/lib/data/accessories";
+import { RIG_COLUMNS, type Units } from "@/lib/rig/columns";
+import { RIG_VIEWS, VIEW_BY_ID, type RigViewId } from "@/lib/rig/views";
+import { useRigAccessories, useRigFixtures, useRigTypes } from "@/hooks/use-rig";
+import { Button } from "@/components/ui/button";
+import { RigTable, type TableState } from "./rig-table";
+import { BulkBar } from "./bulk-bar";
+import { ColumnChooser } from "./column-chooser";
+import { ImportPanel } from "./import-panel";
+import { StockPanel } from "./stock-panel";
+import { TypesPanel } from "./types-panel";
+
+type Rights = { editable: string[]; canImport: boolean; canPlot: boolean; canElectrics: boolean };
+type Props = {
+  productionId: number;
+  productionName: string;
+  units: Units;
+  initialView: RigViewId;
+  initialFixtures: FixtureDto[];
+  initialTypes: FixtureTypeDto[];
+  initialAccessories: AccessoryDto[];
+  positions: Array<{ id: number; name: string }>;
+  rights: Rights;
+};
+
+function stateFor(view: RigViewId): TableState {
+  const v = VIEW_BY_ID.get(view)!;
+  return {
+    sorting: v.sort.map((s) => ({ id: s.id, desc: Boolean(s.desc) })),
+    grouping: v.groupBy ? [v.groupBy] : [],
+    visibility: Object.fromEntries(RIG_COLUMNS.map((c) => [c.id, v.columns.includes(c.id)])),
+    filter: "",
+    selection: {},
+  };
+}
+
+export function RigWorkspace(props: Props) {
+  const { productionId, units, rights } = props;
+  const router = useRouter();
+  const pathname = usePathname();
+  const fixtures = useRigFixtures(productionId, props.initialFixtures).data ?? [];
+  const types = useRigTypes(productionId, props.initialTypes).data ?? [];
+  const accessories = useRigAccessories(productionId, props.initialAccessories).data ?? [];
+  const [view, setView] = useState<RigViewId>(props.initialView);
+  const [state, setState] = useState<TableState>(() => stateFor(props.initialView));
+  const [panel, setPanel] = useState<"import" | "types" | null>(null);
+  const choices = useMemo(() => ({ position: props.positions, type: types.map((t) => ({ id: t.id, name: t.name })) }), [props.positions, types]);
+
+  function chooseView(id: RigViewId) {
+    setView(id);
+    setState(stateFor(id));
+    router.replace(`${pathname}?view=${id}`, { scroll: false });
+  }
+
+  const visibleColumns = RIG_COLUMNS.filter((c) => state.visibility[c.id] !== false).map((c) => c.id);
+  const exportHref = (format: "csv" | "xlsx", which: string = view) =>
+    `/api/productions/${productionId}/export?view=${which}&format=${format}${which === view && view !== "stock" ? `&columns=${visibleColumns.join(",")}` : ""}`;
+  const selectedIds = Object.keys(state.selection).filter((k) => state.selection[k]).map(Number);
+  const bulkAllowed = rights.canPlot || rights.canElectrics;
+  const current = VIEW_BY_ID.get(view)!;
+
+  return (
+    <main className="flex flex-col gap-3 px-4 py-4 print:p-0">
+      <h1 className="hidden text-base font-semibold print:block">{props.productionName} — rig, {current.label.toLowerCase()}</h1>
+      <nav aria-label="Rig views" className="flex flex-wrap gap-1 print:hidden">
+        {RIG_VIEWS.map((v) => (
+          <button key={v.id} type="button" aria-pressed={v.id === view} onClick={() => chooseView(v.id)}
+            className={`rounded-md border px-3 py-1.5 text-sm ${v.id === view ? "border-accent bg-accent text-accent-ink" : "border-line bg-surface hover:bg-raised"}`}>
+            {v.label}
+          </button>
+        ))}
+      </nav>
+      <p className="text-sm text-muted print:hidden">{current.description}</p>
+
+      <div className="flex flex-wrap items-center gap-2 print:hidden">
+        {view !== "stock" ? (
+          <>
+            <input type="search" aria-label="Filter fixtures" placeholder="Filter: position, colour, purpose …" value={state.filter}
+              onChange={(e) => setState((s) => ({ ...s, filter: e.target.value }))} className="min-h-10 w-64 rounded-md border border-line bg-surface px-3 text-sm" />
+            <label className="flex items-center gap-1 text-sm">
+              <input type="checkbox" checked={state.grouping.length > 0} onChange={(e) => setState((s) => ({ ...s, grouping: e.target.checked ? ["position"] : [] }))} />
+              Group by position
+            </label>
+            <ColumnChooser visibility={state.visibility} onChange={(visibility) => setState((s) => ({ ...s, visibility }))} />
+          </>
+        ) : null}
+        <span className="grow" />
+        <Button variant="secondary" onClick={() => window.print()}>Print</Button>
+        <a className="inline-flex min-h-10 items-center rounded-md border border-line bg-surface px-3 text-sm hover:bg-raised" href={exportHref("csv")} download>Export CSV</a>
+        <a className="inline-flex min-h-10 items-center rounded-md border border-line bg-surface px-3 text-sm hover:bg-raised" href={exportHref("xlsx")} download data-testid="export-xlsx">Export .xlsx</a>
+        <a className="inline-flex min-h-10 items-center rounded-md border border-line bg-surface px-3 text-sm hover:bg-raised" href={exportHref("xlsx", "workbook")} download>Whole workbook</a>
+        <Button variant="secondary" onClick={() => setPanel(panel === "types" ? null : "types")}>Fixture types</Button>
+        {rights.canImport ? <Button onClick={() => setPanel(panel === "import" ? null : "import")}>Import a file</Button> : null}
+      </div>
+
+      {panel === "import" ? <ImportPanel productionId={productionId} units={units} onClose={() => setPanel(null)} /> : null}
+      {panel === "types" ? <TypesPanel productionId={productionId} types={types} canAdd={rights.canPlot} units={units} onClose={() => setPanel(null)} /> : null}
+
+      {view === "stock" ? (
+        <StockPanel fixtures={fixtures} types={types} accessories={accessories} />
+      ) : (
+        <>
+          {bulkAllowed && selectedIds.length ? (
+            <BulkBar productionId={productionId} fixtures={fixtures} selectedIds={selectedIds} canPlot={rights.canPlot} canElectrics={rights.canElectrics} onDone={() => setState((s) => ({ ...s, selection: {} }))} />
+          ) : null}
+          <p className="text-xs text-muted print:hidden">
+            {fixtures.length} fixtures. Lengths in {units === "metric" ? "metres" : "feet and inches"}; grey italic columns are computed from the beam model.
+            {rights.editable.length ? " Click a value to change it." : " Your role can read the rig but not change it."}
+          </p>
+          <RigTable fixtures={fixtures} units={units} productionId={productionId} editable={rights.editable} selectable={bulkAllowed} choices={choices} state={state} onState={(p) => setState((s) => ({ ...s, ...p }))} />
+        </>
+      )}
+    </main>
+  );
+}

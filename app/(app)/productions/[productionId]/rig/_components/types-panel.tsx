@@ -1,0 +1,51 @@
+"use client";
+
+import { useState } from "react";
+import type { FixtureTypeDto } from "@/lib/data/fixture-types";
+import { STARTER_TYPES } from "@/lib/rig/starter-types";
+import { formatLength } from "@/lib/optics";
+import type { Units } from "@/lib/rig/columns";
+import { ApiError } from "@/lib/http/api-client";
+import { useAddStarterTypes } from "@/hooks/use-rig";
+import { Button } from "@/components/ui/button";
+
+/** The production's fixture types, and the generic starter shelf the designer can add from. */
+export function TypesPanel({ productionId, types, canAdd, units, onClose }: { productionId: number; types: FixtureTypeDto[]; canAdd: boolean; units: Units; onClose: () => void }) {
+  const add = useAddStarterTypes(productionId);
+  const [message, setMessage] = useState<string | null>(null);
+  const have = new Set(types.map((t) => t.name.toLowerCase()));
+  return (
+    <section className="rounded-lg border border-line bg-surface p-4 print:hidden" aria-label="Fixture types">
+      <header className="mb-2 flex items-center justify-between"><h2 className="font-semibold">Fixture types in this production</h2><Button variant="quiet" onClick={onClose}>Close</Button></header>
+      <div className="overflow-x-auto">
+        <table className="w-full text-sm">
+          <thead><tr>{["Name", "Family", "Cone", "Softness", "Peak cd", "W", "kg", "DMX modes", "Frame", "Gobo", "Lens drop", "Cells"].map((h) => <th key={h} scope="col" className="border-b border-line py-1 pr-2 text-left text-xs">{h}</th>)}</tr></thead>
+          <tbody>
+            {types.map((t) => (
+              <tr key={t.id} className="border-b border-line/50">
+                <td className="py-1 pr-2">{t.name}</td><td>{t.family}</td><td>{t.coneMinDeg === t.coneMaxDeg ? `${t.coneMinDeg}°` : `${t.coneMinDeg}–${t.coneMaxDeg}°`}</td><td>{t.defaultSoftnessDeg}°</td>
+                <td>{t.peakCandela.toLocaleString()}</td><td>{t.wattage}</td><td>{t.weightKg}</td><td>{t.dmxModes.map((m) => `${m.name} (${m.footprint})`).join(", ")}</td>
+                <td>{t.frameSize ?? "—"}</td><td>{t.goboSize ?? "—"}</td><td>{formatLength(t.lensDropM, units)}</td><td>{t.cells}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      {canAdd ? (
+        <div className="mt-3">
+          <h3 className="text-sm font-semibold">Starter shelf</h3>
+          <p className="text-xs text-muted">Generic types with typical figures from memory — no brand and not a data sheet. Replace the figures with those of your own units.</p>
+          <div className="mt-2 flex flex-wrap gap-2">
+            {STARTER_TYPES.filter((t) => !have.has(t.name.toLowerCase())).map((t) => (
+              <Button key={t.name} variant="secondary" disabled={add.isPending}
+                onClick={() => add.mutateAsync([t.name]).then(() => setMessage(`Added ${t.name}.`), (e) => setMessage(e instanceof ApiError ? e.message : "Could not add."))}>
+                + {t.name}
+              </Button>
+            ))}
+          </div>
+          {message ? <p role="status" className="mt-2 text-sm">{message}</p> : null}
+        </div>
+      ) : null}
+    </section>
+  );
+}

@@ -1,0 +1,66 @@
+"use client";
+
+import { useState } from "react";
+import { useQueryClient } from "@tanstack/react-query";
+import { ApiError } from "@/lib/http/api-client";
+import type { ImportPreview } from "@/lib/data/import";
+import type { ColumnTarget } from "@/lib/io/fields";
+import { productionKeys } from "./query-keys";
+
+export type ImportOptions = { mapping?: ColumnTarget[]; lengthUnit?: "m" | "ft"; createMissing: boolean; sheet?: string };
+export type ImportProgress = { stage: string; done: number; total: number } | null;
+
+function body(file: File, mode: "preview" | "commit", options: ImportOptions) {
+  const form = new FormData();
+  form.set("file", file);
+  form.set("options", JSON.stringify({ mode, ...options }));
+  return form;
+}
+
+async function failure(res: Response): Promise<never> {
+  const json = await res.json().catch(() => null);
+  const e = json?.error ?? {};
+  throw new ApiError(res.status, e.code ?? "internal", e.message ?? `Import failed (${res.status})`, e.fieldErrors);
+}
+
+/** Preview and commit of a rig file; the commit streams progress lines so thousands of rows show a moving bar. */
+export function useRigImport(productionId: number) {
+  const qc = useQueryClient();
+  const [progress, setProgress] = useState<ImportProgress>(null);
+  const url = `/api/productions/${productionId}/import`;
+
+  async function preview(file: File, options: ImportOptions): Promise<ImportPreview> {
+    const res = await fetch(url, { method: "POST", body: body(file, "preview", options) });
+    if (!res.ok) return failure(res);
+    return (await res.json()).preview;
+  }
+
+  async function commit(file: File, options: ImportOptions): Promise<ImportPreview> {
+    setProgress({ stage: "uploading", done: 0, total: 1 });
+    try {
+      const res = await fetch(`${url}?stream=1`, { method: "POST", body: body(file, "commit", options) });
+      if (!res.ok || !res.body) return await failure(res);
+      const reader = res.body.pipeThrough(new TextDecoderStream()).getReader();
+      let buffer = "";
+      for (;;) {
+        const { value, done } = await reader.read();
+        buffer += value ?? "";
+        const lines = buffer.split("\n");
+        buffer = lines.pop() ?? "";
+        for (const line of lines.filter(Boolean)) {
+          const msg = JSON.parse(line);
+          if (msg.progress) setProgress(msg.progress);
+          if (msg.error) throw new ApiError(msg.status ?? 400, msg.error.code, msg.error.message, msg.error.fieldErrors);
+          if (msg.result) return msg.result;
+        }
+        if (done) throw new ApiError(500, "internal", "The import stopped without an answer. Check the rig before trying again.");
+      }
+    } finally {
+      setProgress(null);
+      await qc.invalidateQueries({ queryKey: productionKeys.fixtures(productionId) });
+      await qc.invalidateQueries({ queryKey: productionKeys.fixtureTypes(productionId) });
+    }
+  }
+
+  return { preview, commit, progress };
+}
