@@ -97,7 +97,7 @@ function typecheck() {
 
 async function main() {
   mkdirSync(RESULTS, { recursive: true });
-  ensurePackages(["mariadb", "mariadbClient", "chromium", "pdftoppm", "fonts"]);
+  ensurePackages(["mariadb", "mariadbClient", "chromium", "pdftoppm", "fonts", "libreoffice"]);
   ensureNodeModules(ROOT);
 
   const dbDir = mkdtempSync(path.join(os.tmpdir(), "throwline-test-db-"));
