@@ -56,7 +56,7 @@ export function CuePlanCanvas({ pools }: { pools: PlanPool[] }) {
               radiusY={p.pool.semiMinor * scale}
               rotation={-p.pool.rotationDeg}
               fill={colours.accent}
-              opacity={p.level > 0 ? 0.04 + 0.22 * p.level : 0.6}
+              opacity={p.level > 0 ? 0.02 + 0.1 * p.level : 0.6}
               fillEnabled={p.level > 0}
               stroke={p.level > 0 ? colours.accent : colours.line}
               strokeWidth={p.level > 0 ? 0.5 + p.level : 0.5}
