@@ -19,7 +19,7 @@ let active = 0;
 const waiting: Array<() => void> = [];
 
 export function chromiumMissing(): boolean {
-  return !existsSync(CHROMIUM_PATH);
+  return !existsSync(/*turbopackIgnore: true*/ CHROMIUM_PATH);
 }
 
 function launch(): Promise<Browser> {
