@@ -20,6 +20,7 @@ describe("production settings", () => {
     await head.fill("tall");
     await page.getByRole("button", { name: "Save settings" }).click();
     await page.locator("#headHeight-error").filter({ hasText: /tall/ }).waitFor();
+    expect(await page.getByLabel("Head height").inputValue()).toBe("tall");
     await screenshot(page, "settings-error");
     await page.reload();
     expect(await page.getByLabel("Head height").inputValue()).toBe(before);

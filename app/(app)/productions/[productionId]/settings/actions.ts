@@ -7,7 +7,14 @@ import { productionSettingsSchema } from "@/lib/validation/production";
 import { parseLength } from "@/lib/optics";
 import { toAppError } from "@/lib/errors";
 
-export type SettingsFormState = { message?: string; ok?: boolean; fieldErrors?: Record<string, string[]>; production?: ProductionDto };
+export type SettingsFormState = {
+  message?: string;
+  ok?: boolean;
+  fieldErrors?: Record<string, string[]>;
+  production?: ProductionDto;
+  /** What the user typed, echoed back on error so the form does not lose it. */
+  values?: Record<string, string>;
+};
 
 const LENGTH_FIELDS = ["headHeight", "backWallY", "prosceniumWidth", "prosceniumHeight", "stageWidth", "stageDepth", "apronDepth"] as const;
 
@@ -36,9 +43,15 @@ export async function updateSettingsAction(productionId: number, _prev: Settings
       numberingRule: form.get("numberingRule"),
     });
     if (!parsed.success) {
-      for (const issue of parsed.error.issues) (fieldErrors[String(issue.path[0])] ??= []).push(issue.message);
+      for (const issue of parsed.error.issues) {
+        const field = String(issue.path[0]);
+        if (!(field in fieldErrors) || !LENGTH_FIELDS.includes(field as never)) (fieldErrors[field] ??= []).push(issue.message);
+      }
     }
-    if (Object.keys(fieldErrors).length || !parsed.success) return { fieldErrors, message: "Some settings need fixing; see the marked fields." };
+    if (Object.keys(fieldErrors).length || !parsed.success) {
+      const values = Object.fromEntries([...form.entries()].map(([k, v]) => [k, String(v)]));
+      return { fieldErrors, values, message: "Some settings need fixing; see the marked fields." };
+    }
     const production = await updateProductionSettings({ productionId, version: Number(form.get("version")), changes: parsed.data, userId: user.id });
     revalidatePath(`/productions/${productionId}`, "layout");
     return { ok: true, message: "Settings saved.", production };

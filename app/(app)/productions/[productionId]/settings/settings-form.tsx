@@ -28,14 +28,16 @@ export function SettingsForm({ production: initial, canEdit }: { production: Pro
   }, {});
   const units = production.displayUnits;
   const err = (f: string) => state.fieldErrors?.[f];
+  // After a refused save, show what was typed rather than the stored value.
+  const typed = (f: string, stored: string | number) => state.values?.[f] ?? String(stored);
   return (
     <form action={action} key={production.version} className="flex flex-col gap-4" noValidate>
       <input type="hidden" name="version" value={production.version} />
       <fieldset disabled={!canEdit || pending} className="flex flex-col gap-4">
         <Card title="Production">
           <div className="grid gap-3 sm:grid-cols-2">
-            <TextField label="Name" name="name" defaultValue={production.name} error={err("name")} />
-            <TextField label="Venue" name="venue" defaultValue={production.venue} error={err("venue")} />
+            <TextField label="Name" name="name" defaultValue={typed("name", production.name)} error={err("name")} />
+            <TextField label="Venue" name="venue" defaultValue={typed("venue", production.venue)} error={err("venue")} />
             <label className="flex flex-col gap-1 text-sm">
               <span className="font-medium">Display units</span>
               <select name="displayUnits" defaultValue={units} className="min-h-10 rounded-md border border-line bg-surface px-3">
@@ -43,21 +45,21 @@ export function SettingsForm({ production: initial, canEdit }: { production: Pro
                 <option value="imperial">Imperial (ft and in)</option>
               </select>
             </label>
-            <TextField label="Datum line name" name="datumName" defaultValue={production.datumName} hint="e.g. setting line, plaster line, stage edge" error={err("datumName")} />
+            <TextField label="Datum line name" name="datumName" defaultValue={typed("datumName", production.datumName)} hint="e.g. setting line, plaster line, stage edge" error={err("datumName")} />
           </div>
         </Card>
         <Card title="Stage outline">
           <p className="mb-3 text-xs text-muted">Type lengths as 3.2, 3.2 m, 320 cm, 10&apos;6&quot;, 10&apos; 6 1/2&quot; or 126&quot;.</p>
           <div className="grid gap-3 sm:grid-cols-3">
             {LENGTHS.map(([field, label, hint]) => (
-              <TextField key={field} label={label} name={field} hint={hint || undefined} defaultValue={formatLength(production[field] as number, units)} error={err(field)} />
+              <TextField key={field} label={label} name={field} hint={hint || undefined} defaultValue={typed(field, formatLength(production[field] as number, units))} error={err(field)} />
             ))}
           </div>
         </Card>
         <Card title="Power and numbering">
           <div className="grid gap-3 sm:grid-cols-3">
-            <TextField label="Supply voltage (V)" name="voltage" inputMode="numeric" defaultValue={production.voltage} error={err("voltage")} />
-            <TextField label="Continuous-load factor" name="derating" inputMode="decimal" defaultValue={production.derating} hint="0.8 = load circuits to 80 % (NEC practice); check your local code" error={err("derating")} />
+            <TextField label="Supply voltage (V)" name="voltage" inputMode="numeric" defaultValue={typed("voltage", production.voltage)} error={err("voltage")} />
+            <TextField label="Continuous-load factor" name="derating" inputMode="decimal" defaultValue={typed("derating", production.derating)} hint="0.8 = load circuits to 80 % (NEC practice); check your local code" error={err("derating")} />
             <label className="flex flex-col gap-1 text-sm">
               <span className="font-medium">Unit numbers on overhead positions run</span>
               <select name="numberingRule" defaultValue={production.numberingRule} className="min-h-10 rounded-md border border-line bg-surface px-3">
