@@ -44,7 +44,13 @@ function median(xs: number[]): number {
   return s[Math.floor(s.length / 2)];
 }
 
-function benchPools(): { perSecond: number; calls: number } {
+// The machine is shared, so both the median and the best run are printed: the best is the code's own cost,
+// the median what a busy machine gives.
+function best(xs: number[]): number {
+  return Math.min(...xs);
+}
+
+function benchPools(): { perSecond: number; bestPerSecond: number; calls: number } {
   // Plain PoolInput literals, as a caller builds them. (Objects spread from bigger rows ran about 2.5× slower
   // in V8 on this machine: property access on their hidden classes, not the geometry.)
   const inputs: PoolInput[] = rig(1024, 7).map((b) => ({
@@ -61,9 +67,9 @@ function benchPools(): { perSecond: number; calls: number } {
   };
   run(200_000); // warm-up: let the JIT settle
   const calls = 2_000_000;
-  const ms = median([run(calls), run(calls), run(calls), run(calls), run(calls)]);
+  const times = [run(calls), run(calls), run(calls), run(calls), run(calls)];
   if (sink === 42) console.log(""); // keeps the loop's result alive
-  return { perSecond: (calls / ms) * 1000, calls };
+  return { perSecond: (calls / median(times)) * 1000, bestPerSecond: (calls / best(times)) * 1000, calls };
 }
 
 function timeGrid(beams: LitBeam[], cull: boolean, runs: number) {
@@ -76,7 +82,7 @@ function timeGrid(beams: LitBeam[], cull: boolean, runs: number) {
     grid = illuminanceGrid(input);
     times.push(performance.now() - t0);
   }
-  return { ms: median(times), grid };
+  return { ms: median(times), bestMs: best(times), grid };
 }
 
 function benchGrid(n: number) {
@@ -91,7 +97,9 @@ function benchGrid(n: number) {
     fixtures: n,
     points: culled.grid.values.length,
     culledMs: culled.ms,
+    culledBestMs: culled.bestMs,
     fullMs: full.ms,
+    fullBestMs: full.bestMs,
     ratio: full.ms / culled.ms,
     evalsCulled: culled.grid.evaluations,
     evalsFull: full.grid.evaluations,
@@ -104,25 +112,30 @@ const day = new Date().toISOString().slice(0, 10);
 console.log(`lib/optics benchmark, ${day}, Node ${process.version}, ${cpu}, ${os.cpus().length} cores (one used)\n`);
 
 const pools = benchPools();
-const poolRate = Math.round(pools.perSecond).toLocaleString("en-GB");
+const rate = (n: number) => Math.round(n).toLocaleString("en-GB");
 const poolGoal = pools.perSecond >= 1_000_000 ? "meets" : "MISSES";
-console.log(`Pool geometry: ${poolRate} poolAtPlane calls/s (${poolGoal} the goal of 1,000,000/s)\n`);
+console.log(
+  `Pool geometry: ${rate(pools.perSecond)} poolAtPlane calls/s median, ${rate(pools.bestPerSecond)} best of 5 ` +
+    `(median ${poolGoal} the goal of 1,000,000/s)\n`,
+);
 
 const rows = [100, 500, 1500].map(benchGrid);
-console.log("Coverage grid, 16 m × 12 m at 0.1 m, deck plane (median of 9 culled and 5 unculled runs)");
+console.log("Coverage grid, 16 m × 12 m at 0.1 m, deck plane (median and best of 9 culled and 5 unculled runs)");
 console.table(rows.map((r) => ({
   fixtures: r.fixtures,
   points: r.points,
   "culled ms": +r.culledMs.toFixed(1),
+  "culled best ms": +r.culledBestMs.toFixed(1),
   "no culling ms": +r.fullMs.toFixed(1),
+  "no culling best ms": +r.fullBestMs.toFixed(1),
   "speed-up": +r.ratio.toFixed(1),
-  "cells evaluated (culled)": r.evalsCulled,
-  "cells evaluated (no culling)": r.evalsFull,
-  "max |difference| lx": r.maxDiff,
+  "cells culled": r.evalsCulled,
+  "cells unculled": r.evalsFull,
+  "max |diff| lx": r.maxDiff,
 })));
 const at500 = rows[1];
 const gridGoal = at500.culledMs < 150 ? "meets" : "MISSES";
 console.log(
-  `500 fixtures: ${at500.culledMs.toFixed(1)} ms with culling (${gridGoal} the goal of < 150 ms), ` +
+  `500 fixtures: ${at500.culledMs.toFixed(1)} ms median with culling (${gridGoal} the goal of < 150 ms), ` +
     `${at500.ratio.toFixed(1)}× the speed of the same grid without culling.`,
 );
