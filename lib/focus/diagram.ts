@@ -56,12 +56,21 @@ function landmarkLines(landmarks: Landmark[], box: Box, text: number): string {
     .join("");
 }
 
+/** The pool the chart draws: at the aim height the designer chose, else the other plane; null if both are open. */
+export function drawnPool(g: FixtureDto["computed"]): { pool: NonNullable<FixtureDto["computed"]["deck"]>; plane: "the deck" | "head height" } | null {
+  const deck = g.deck?.status === "ok" && g.deck.outer ? { pool: g.deck, plane: "the deck" as const } : null;
+  const head = g.head?.status === "ok" && g.head.outer ? { pool: g.head, plane: "head height" as const } : null;
+  return g.focus && g.focus.z > 0 ? head ?? deck : deck ?? head;
+}
+
 export function diagramSvg(i: DiagramInput): string {
   const g = i.fixture.computed;
   if (!g.focus) return `<svg class="fc-diagram" viewBox="0 0 10 4" role="img" aria-label="No focus mark"><text x="5" y="2.2" text-anchor="middle" font-size="0.8" class="fc-muted">No focus mark set</text></svg>`;
   const mark = { x: g.focus.x, y: g.focus.y };
-  const pool = g.deck?.status === "ok" ? g.deck : null;
-  const box = viewBox(mark, pool?.outer ? ellipseBounds(pool.outer) : null);
+  const chosen = drawnPool(g);
+  const pool = chosen?.pool ?? null;
+  const circleR = !pool && g.throw ? g.throw * Math.tan((g.coneDeg * Math.PI) / 360) : 0;
+  const box = viewBox(mark, pool?.outer ? ellipseBounds(pool.outer) : circleR ? { minX: mark.x - circleR, maxX: mark.x + circleR, minY: mark.y - circleR, maxY: mark.y + circleR } : null);
   const span = box.maxX - box.minX;
   const text = span * 0.04;
   const cuts = (i.fixture.shutterCuts ?? []).map((c) => ({ a: c.a, b: c.b }));
@@ -115,11 +124,15 @@ export function diagramSvg(i: DiagramInput): string {
   const by = -(box.minY + text * 1.2);
   const scale = `<line x1="${fmt(bx)}" y1="${fmt(by)}" x2="${fmt(bx + bar)}" y2="${fmt(by)}" class="fc-scale"/>` +
     `<text x="${fmt(bx)}" y="${fmt(by - text * 0.4)}" font-size="${fmt(text)}" class="fc-muted">${escapeHtml(formatLength(bar, i.units).replace(/ 0"$/, ""))}</text>`;
-  const open = g.deck && g.deck.status !== "ok" ? `<text x="${fmt(box.minX + text)}" y="${fmt(-box.maxY + text * 1.4)}" font-size="${fmt(text)}" class="fc-warn">Pool open at the deck</text>` : "";
+  // With no closed pool on either plane, a dashed circle shows the beam's width square to the axis at the mark.
+  const across = !pool && g.throw ? g.throw * Math.tan((g.coneDeg * Math.PI) / 360) : 0;
+  const beamCircle = across > 0 ? `<circle cx="${fmt(mark.x)}" cy="${fmt(-mark.y)}" r="${fmt(across)}" class="fc-outline"/>` : "";
+  const caption = pool ? `pool at ${chosen!.plane}` : "pool open: beam width at the mark";
+  const open = `<text x="${fmt(box.minX + text)}" y="${fmt(-box.maxY + text * 1.4)}" font-size="${fmt(text)}" class="${pool ? "fc-muted" : "fc-warn"}">${caption}</text>`;
 
   const vb = `${fmt(box.minX)} ${fmt(-box.maxY)} ${fmt(span)} ${fmt(box.maxY - box.minY)}`;
   return `<svg class="fc-diagram" viewBox="${vb}" preserveAspectRatio="xMidYMid meet" role="img" aria-label="Pool diagram, to scale, audience at the bottom">` +
     `<defs><marker id="fc-head" viewBox="0 0 10 10" refX="8" refY="5" markerWidth="5" markerHeight="5" orient="auto-start-reverse"><path d="M0,0L10,5L0,10z" class="fc-arrow-head"/></marker></defs>` +
     `<rect x="${fmt(box.minX)}" y="${fmt(-box.maxY)}" width="${fmt(span)}" height="${fmt(box.maxY - box.minY)}" class="fc-bg"/>` +
-    landmarkLines(i.landmarks, box, text * 0.85) + poolSvg + cutSvg + arrow + markSvg + scale + open + `</svg>`;
+    landmarkLines(i.landmarks, box, text * 0.85) + poolSvg + beamCircle + cutSvg + arrow + markSvg + scale + open + `</svg>`;
 }

@@ -5,6 +5,7 @@ import { ellipseToPolygon, type Ellipse, type Point } from "@/lib/optics";
 import type { FixtureDto } from "@/lib/data/fixtures";
 import type { Landmark } from "./landmarks";
 import { escapeHtml } from "./escape";
+import { drawnPool } from "./diagram";
 
 const fmt = (v: number) => (Math.round(v * 1000) / 1000).toString();
 const pathOf = (e: Ellipse) => `M${ellipseToPolygon(e, 48).map((p) => `${fmt(p.x)},${fmt(-p.y)}`).join("L")}Z`;
@@ -31,7 +32,10 @@ export function poolPlanSvg(o: {
   const lines = o.landmarks
     .map((l) => `<line x1="${fmt(l.a.x)}" y1="${fmt(-l.a.y)}" x2="${fmt(l.b.x)}" y2="${fmt(-l.b.y)}" class="fc-lm"/>`)
     .join("");
-  const pool = (f: { computed: FixtureDto["computed"] }, cls: string) => (f.computed.deck?.status === "ok" && f.computed.deck.outer ? `<path d="${pathOf(f.computed.deck.outer)}" class="${cls}"/>` : "");
+  const pool = (f: { computed: FixtureDto["computed"] }, cls: string) => {
+    const outer = drawnPool(f.computed)?.pool.outer;
+    return outer ? `<path d="${pathOf(outer)}" class="${cls}"/>` : "";
+  };
   const neighbours = o.neighbours.map((n) => pool(n, "fc-plan-neighbour")).join("");
   const mark: Point | null = o.current.computed.focus;
   const markSvg = mark ? `<circle cx="${fmt(mark.x)}" cy="${fmt(-mark.y)}" r="${fmt(text * 0.35)}" class="fc-mark"/>` : "";

@@ -14,6 +14,7 @@ let browser: BrowserContext;
 beforeAll(async () => {
   browser = await openBrowser();
   mkdirSync(PDF_DIR, { recursive: true });
+  mkdirSync(path.join(RESULTS, "screenshots"), { recursive: true });
 });
 afterAll(async () => {
   await browser?.close();

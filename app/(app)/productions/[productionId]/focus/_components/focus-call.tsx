@@ -82,7 +82,7 @@ export function FocusCall({ data }: { data: FocusPageData }) {
                   <figure className="m-0" data-testid="pool-plan">
                     <div dangerouslySetInnerHTML={{ __html: poolPlanSvg({ current, neighbours, landmarks, stage: data.production }) }} />
                     <figcaption className="mt-1 text-xs text-muted">
-                      {neighbours.length ? `Also on this mark: ${neighbours.map((n) => `${n.positionName} ${n.unitNumber}`).join(", ")}` : "No other unit aims at this mark."}
+                      {neighbours.length ? `Also on this mark: ${neighbours.map((n) => `${n.positionName} unit ${n.unitNumber}`).join(", ")}` : "No other unit aims at this mark."}
                     </figcaption>
                   </figure>
                   <FocusControls fixture={current} chart={chart} data={data} onNext={nextUnit} />
