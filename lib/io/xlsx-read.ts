@@ -37,10 +37,13 @@ function sheetRecords(sheet: ExcelJS.Worksheet): RawRow[] {
 }
 
 function firstFilledRow(sheet: ExcelJS.Worksheet): string[] | null {
-  for (let r = 1; r <= Math.min(sheet.rowCount, 50); r++) {
+  // rowCount and columnCount walk the whole sheet on every read: take them once.
+  const rows = Math.min(sheet.rowCount, 50);
+  const width = sheet.columnCount;
+  for (let r = 1; r <= rows; r++) {
     const row = sheet.getRow(r);
     const cells: string[] = [];
-    for (let c = 1; c <= sheet.columnCount; c++) cells.push(cellText(row.getCell(c).value).trim());
+    for (let c = 1; c <= width; c++) cells.push(cellText(row.getCell(c).value).trim());
     if (cells.some((c) => c !== "")) return cells;
   }
   return null;

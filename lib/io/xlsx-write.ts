@@ -23,7 +23,7 @@ export async function writeXlsx(sheets: SheetOut[], meta: { title?: string } = {
     const ws = workbook.addWorksheet(sheetName(s.name, used), { views: [{ state: "frozen", ySplit: 1 }] });
     ws.columns = s.columns.map((c) => ({ header: neutraliseCell(c.header), width: c.width }));
     ws.getRow(1).font = { bold: true };
-    for (const r of s.rows) ws.addRow(r.map(cell));
+    ws.addRows(s.rows.map((r) => r.map(cell)));
     if (s.columns.length) ws.autoFilter = { from: { row: 1, column: 1 }, to: { row: 1, column: s.columns.length } };
   }
   return Buffer.from(await workbook.xlsx.writeBuffer());
