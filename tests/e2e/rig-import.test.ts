@@ -6,7 +6,7 @@ import path from "node:path";
 import ExcelJS from "exceljs";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { BrowserContext, Page } from "playwright-core";
-import { DEMO, openBrowser, screenshot, signIn } from "./support/browser";
+import { DEMO, SCREENSHOTS, openBrowser, screenshot, signIn } from "./support/browser";
 
 let browser: BrowserContext;
 beforeAll(async () => {
@@ -37,6 +37,7 @@ describe("rig import and export as the electrician", () => {
     const id = await openRig(page);
     expect(await page.getByTestId("rig-row").count()).toBe(116);
     await screenshot(page, "rig-hanging-electrician");
+    await page.screenshot({ path: path.join(SCREENSHOTS, "rig-hanging-electrician-viewport.png") });
 
     const fixtures: Array<{ positionName: string; unitNumber: string; id: number }> = await page.evaluate(async (pid) => (await (await fetch(`/api/productions/${pid}/fixtures`)).json()).fixtures, id);
     const [a, b] = fixtures;
@@ -49,11 +50,12 @@ describe("rig import and export as the electrician", () => {
     expect(await page.getByTestId("import-errors").textContent()).toContain("Row 3, DMX address: DMX address must be 1–512");
     expect(await page.getByTestId("import-commit").isDisabled()).toBe(true);
     await screenshot(page, "rig-import-preview-error");
+    await page.screenshot({ path: path.join(SCREENSHOTS, "rig-import-preview-error-viewport.png") });
 
     const good = csvFile("patch-fixed.csv", `\ufeff${header}${a.positionName};${a.unitNumber};C-101;1;yes\r\n${b.positionName};${b.unitNumber};C-102;2;yes\r\n`);
     await page.getByTestId("import-file").setInputFiles(good);
-    await page.getByTestId("import-summary").filter({ hasText: "to update" }).waitFor();
-    expect(await page.getByTestId("import-errors").count()).toBe(0);
+    await page.getByTestId("import-errors").waitFor({ state: "detached" });
+    await page.getByTestId("import-summary").filter({ hasText: "2 to update" }).waitFor();
     await screenshot(page, "rig-import-preview-ok");
     await page.getByTestId("import-commit").click();
     await page.getByTestId("import-done").waitFor();

@@ -44,7 +44,7 @@ describe("round trip", () => {
 describe("export files", () => {
   it("neutralises formula-like text (OWASP CSV injection) but leaves negative numbers as numbers", async () => {
     const { s, id } = await seeded("metric");
-    const csv = new TextDecoder().decode((await download(s, id, "view=all&format=csv")).bytes);
+    const csv = new TextDecoder("utf-8", { ignoreBOM: true }).decode((await download(s, id, "view=all&format=csv")).bytes);
     expect(csv.startsWith("\ufeff")).toBe(true);
     expect(csv).toContain(",'=SUM(A1:A2)"); // OWASP CSV injection: prefix a quote
     expect(csv).toContain(",'+1 spare lamp");
