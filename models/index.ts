@@ -10,6 +10,7 @@ import { initFixtureType, FixtureType } from "./fixture-type";
 import { initFocusPoint, FocusPoint } from "./focus-point";
 import { initFixture, Fixture } from "./fixture";
 import { initCue, Cue, CueLevel } from "./cue";
+import { initCuePart, CuePart } from "./cue-part";
 import { initChangeEntry, ChangeEntry } from "./change-entry";
 import { initAreaZone, AreaZone } from "./area-zone";
 import { initLandmark, Landmark } from "./landmark";
@@ -17,7 +18,7 @@ import { initUpload, Upload } from "./upload";
 import { initAccessory, Accessory } from "./accessory";
 import { initImportMapping, ImportMapping } from "./import-mapping";
 
-const models = { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping };
+const models = { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping };
 export type Db = typeof models & { sequelize: Sequelize };
 
 function associate() {
@@ -30,6 +31,7 @@ function associate() {
   Position.hasMany(Fixture, { foreignKey: "positionId", as: "fixtures" });
   Cue.hasMany(CueLevel, { foreignKey: "cueId", as: "levels" });
   CueLevel.belongsTo(Cue, { foreignKey: "cueId", as: "cue" });
+  Cue.hasMany(CuePart, { foreignKey: "cueId", as: "parts" });
   Accessory.belongsTo(Fixture, { foreignKey: "fixtureId", as: "fixture" });
 }
 
@@ -43,7 +45,7 @@ function createDb(): Db {
     pool: { max: 10, min: 0, idle: 10_000, acquire: 10_000 },
     dialectOptions: { timezone: "Z", connectTimeout: 5_000 },
   });
-  for (const init of [initUser, initProduction, initMembership, initPosition, initFixtureType, initFocusPoint, initFixture, initCue, initChangeEntry, initAreaZone, initLandmark, initUpload, initAccessory, initImportMapping]) {
+  for (const init of [initUser, initProduction, initMembership, initPosition, initFixtureType, initFocusPoint, initFixture, initCue, initCuePart, initChangeEntry, initAreaZone, initLandmark, initUpload, initAccessory, initImportMapping]) {
     init(sequelize);
   }
   associate();
@@ -57,4 +59,4 @@ export function getDb(): Db {
   return holder.__throwlineDb;
 }
 
-export { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping };
+export { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping };

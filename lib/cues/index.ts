@@ -5,3 +5,6 @@ export * from "./tracking";
 export * from "./summary";
 export * from "./types";
 export * from "./keyboard-entry";
+export * from "./parts";
+export * from "./running-order";
+export * from "./cue-sheet";

@@ -12,7 +12,8 @@ export type Entry =
 
 export const MAX_CHANNELS_PER_ENTRY = 2000;
 
-function parseChannels(text: string): number[] {
+/** "1-4, 9, 12-14" → [1, 2, 3, 4, 9, 12, 13, 14]; throws a RangeError naming the piece it cannot read. */
+export function parseChannels(text: string): number[] {
   const out = new Set<number>();
   for (const piece of text.split(",").map((p) => p.trim())) {
     const m = /^(\d{1,5})(?:\s*-\s*(\d{1,5}))?$/.exec(piece);
@@ -46,4 +47,17 @@ export function parseEntry(line: string): Entry {
   const m = /^([\d\s,-]+?)\s*(?:=\s*|\s)\s*(\S+)$/.exec(t);
   if (!m) throw new RangeError(`"${t}" is not understood: type a channel and a level, e.g. 12 75 or 1-6 full`);
   return { kind: "levels", channels: parseChannels(m[1]), level: parseLevel(m[2]) };
+}
+
+/** [1, 2, 3, 4, 9] → "1-4, 9": the short form people type and read. */
+export function formatChannels(channels: readonly number[]): string {
+  const sorted = [...new Set(channels)].sort((a, b) => a - b);
+  const out: string[] = [];
+  for (let i = 0; i < sorted.length; ) {
+    let j = i;
+    while (j + 1 < sorted.length && sorted[j + 1] === sorted[j] + 1) j++;
+    out.push(j > i ? `${sorted[i]}-${sorted[j]}` : String(sorted[i]));
+    i = j + 1;
+  }
+  return out.join(", ");
 }

@@ -43,12 +43,15 @@ function lit(cols: number[], show: TrackedShow, info: ChannelInfo): string[] {
   return [...[...areas].sort(byName.compare), ...[...purposes].sort(byName.compare)];
 }
 
-/** One line for the cue at `index`, e.g. "4 up, 2 down · brighter: Area 2, front light · darker: cyc". */
-export function summarizeCue(show: TrackedShow, index: number, info: ChannelInfo): { up: number; down: number; text: string } {
-  const { up, down, changed } = countMoves(show, index);
-  if (!changed.length) return { up, down, text: "no level changes" };
+/**
+ * One line for the cue at `index`, e.g. "4 up, 2 down · brighter: Area 2, front light · darker: cyc".
+ * `from` is the cue that runs before it (-1: from dark); by default the one numbered before.
+ */
+export function summarizeCue(show: TrackedShow, index: number, info: ChannelInfo, from = index - 1): { up: number; down: number; changed: number[]; text: string } {
+  const { up, down, changed } = countMoves(show, index, from);
+  if (!changed.length) return { up, down, changed, text: "no level changes" };
   const now = show.states[index];
-  const before = index > 0 ? show.states[index - 1] : null;
+  const before = from >= 0 ? show.states[from] : null;
   const brighter = changed.filter((col) => now[col] > (before ? before[col] : 0));
   const darker = changed.filter((col) => now[col] < (before ? before[col] : 0));
   const counts = [up ? `${up} up` : "", down ? `${down} down` : ""].filter(Boolean).join(", ");
@@ -61,7 +64,7 @@ export function summarizeCue(show: TrackedShow, index: number, info: ChannelInfo
   const d = lit(darker, show, info);
   if (b.length) parts.push(`brighter: ${names(b)}`);
   if (d.length && !isDark) parts.push(`darker: ${names(d)}`);
-  return { up, down, text: parts.join(" · ") };
+  return { up, down, changed, text: parts.join(" · ") };
 }
 
 /** Cues that start by themselves this soon after the one before are called in the same standby. */
@@ -72,12 +75,14 @@ export type StandbyGroup = { cueIds: number[]; label: string };
 /**
  * Groups cues in running order: a cue whose follow is set and at most `window` seconds joins the
  * cue before it in one standby ("Standby LX 14 and 14.5"); everything else is its own standby.
+ * Give the cues in running order (see running-order.ts); `linked` marks a cue reached by a link,
+ * so a group that jumps is named cue by cue rather than as a range.
  */
 export function groupStandbys(
-  cues: ReadonlyArray<{ id: number; number: number; follow: number | null }>,
+  cues: ReadonlyArray<{ id: number; number: number; follow: number | null; linked?: boolean }>,
   window = STANDBY_WINDOW_SECONDS,
 ): StandbyGroup[] {
-  const groups: Array<{ cues: Array<{ id: number; number: number }> }> = [];
+  const groups: Array<{ cues: Array<{ id: number; number: number; linked?: boolean }> }> = [];
   let joinNext = false;
   for (const cue of cues) {
     if (joinNext && groups.length) groups[groups.length - 1].cues.push(cue);
@@ -86,7 +91,12 @@ export function groupStandbys(
   }
   return groups.map((g) => {
     const nums = g.cues.map((c) => formatCueNumber(c.number));
-    const label = nums.length === 1 ? nums[0] : nums.length === 2 ? `${nums[0]} and ${nums[1]}` : `${nums[0]} to ${nums.at(-1)} (${nums.length} cues)`;
+    const jumps = g.cues.slice(1).some((c) => c.linked);
+    const label =
+      nums.length === 1 ? nums[0]
+      : nums.length === 2 ? `${nums[0]} and ${nums[1]}`
+      : jumps ? `${nums.slice(0, -1).join(", ")} and ${nums.at(-1)}`
+      : `${nums[0]} to ${nums.at(-1)} (${nums.length} cues)`;
     return { cueIds: g.cues.map((c) => c.id), label };
   });
 }

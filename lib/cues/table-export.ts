@@ -2,12 +2,20 @@
 // Text cells are neutralised against spreadsheet formula injection (OWASP "CSV Injection").
 import Papa from "papaparse";
 import { formatCueNumber } from "./cue-number";
-import { formatFadeTime } from "./fade-time";
-import type { CueFields } from "./types";
+import { formatFadeTime, formatSplitTime } from "./fade-time";
+import { formatChannels } from "./keyboard-entry";
+import type { CueFields, CuePart } from "./types";
 
 export type CueTableRow = CueFields & { runningTime: number; summary: string };
 
-export const CUE_TABLE_COLUMNS = ["Cue", "Label", "Page", "Up (s)", "Down (s)", "Delay (s)", "Follow (s)", "Link", "Block", "Running time", "What changes", "Call note"] as const;
+export const CUE_TABLE_COLUMNS = ["Cue", "Label", "Page", "Up (s)", "Down (s)", "Delay (s)", "Follow (s)", "Link", "Block", "Running time", "What changes", "Parts", "Call note"] as const;
+
+/** "part 2 (specials) 3/5 wait 1: ch 1-4, 9" for each part, separated by "; ". */
+export function describeParts(parts: readonly CuePart[]): string {
+  return parts
+    .map((p) => `part ${p.part}${p.label ? ` (${p.label})` : ""} ${formatSplitTime(p.upTime, p.downTime)}${p.delay ? ` wait ${formatFadeTime(p.delay)}` : ""}: ch ${formatChannels(p.channels) || "none"}`)
+    .join("; ");
+}
 
 /** OWASP CSV injection: a cell starting with = + - @ tab or CR is prefixed with ' so no formula runs. */
 export function neutralise(text: string): string {
@@ -27,6 +35,7 @@ export function cueTableRows(rows: ReadonlyArray<CueTableRow>): Array<Array<stri
     r.block ? "yes" : "",
     formatFadeTime(r.runningTime),
     r.summary,
+    neutralise(describeParts(r.parts)),
     neutralise(r.callNote ?? ""),
   ]);
 }

@@ -88,10 +88,13 @@ export function classifyMoves(show: TrackedShow, index: number): ChannelMove[] {
   return out;
 }
 
-/** Counts of each kind in a cue, cheaper than classifyMoves when only the numbers are needed. */
-export function countMoves(show: TrackedShow, index: number): { up: number; down: number; changed: number[] } {
+/**
+ * Counts of each kind in a cue, cheaper than classifyMoves when only the numbers are needed.
+ * `from` is the cue that ran before it (running order, which a link can change); -1 means dark.
+ */
+export function countMoves(show: TrackedShow, index: number, from = index - 1): { up: number; down: number; changed: number[] } {
   const now = show.states[index];
-  const before = index > 0 ? show.states[index - 1] : null;
+  const before = from >= 0 ? show.states[from] : null;
   let up = 0;
   let down = 0;
   const changed: number[] = [];

@@ -1,3 +1,18 @@
+/**
+ * A part: a group of channels inside one cue that fades with its own times. Channels of the cue
+ * that are in no part fade with the cue's own times. Part numbers run 1–20 within a cue.
+ */
+export type CuePart = {
+  part: number;
+  label: string;
+  upTime: number;
+  downTime: number | null;
+  delay: number;
+  channels: number[];
+};
+
+export const MAX_PARTS = 20;
+
 /** The fields of a cue that travel between the database, the API, the screens and the file formats. */
 export type CueFields = {
   number: number;
@@ -10,6 +25,7 @@ export type CueFields = {
   link: number | null;
   block: boolean;
   callNote: string | null;
+  parts: CuePart[];
 };
 
 /** A cue with the levels it records itself (its moves): channel → 0–100. */
@@ -25,4 +41,5 @@ export const CUE_DEFAULTS: Omit<CueFields, "number"> = {
   link: null,
   block: false,
   callNote: null,
+  parts: [],
 };

@@ -4,12 +4,15 @@
 // a comment; IDENT 3:0 first; `$` keywords are manufacturer-specific and ignored when unknown.
 // From memory, not checked against the text: which keywords open a record (CUE, GROUP, SUB, PATCH,
 // SET, CLEAR …) and which belong to it (PART, UP, DOWN, FOLLOW, LINK, TEXT, CHAN); `UP time [delay]`;
-// levels 0–100, FL for full, Hxx as hexadecimal 0–255 of full; TEXT takes the rest of its line.
+// levels 0–100, FL for full, Hxx as hexadecimal 0–255 of full; TEXT takes the rest of its line;
+// `PART n` opens part n of the open cue, and the UP, DOWN, TEXT and CHAN lines after it belong to the
+// part until the next PART or record (FOLLOW and LINK always belong to the cue).
 // A reader must ignore keywords it does not know: unknown ones become notices, never errors.
 import { parseCueNumber, cueKey, formatCueNumber } from "./cue-number";
 import { parseFadeTime } from "./fade-time";
 import { THROWLINE_KEYWORDS, ASCII_MAX_LINE } from "./usitt-ascii-write";
-import { CUE_DEFAULTS, type CueWithMoves } from "./types";
+import { CUE_DEFAULTS, MAX_PARTS, type CuePart, type CueWithMoves } from "./types";
+import { checkParts } from "./parts";
 
 export type AsciiProblem = { line: number; message: string };
 export type AsciiReadResult = {
@@ -40,7 +43,11 @@ export function parseAsciiLevel(token: string): number | null {
   return Number(t);
 }
 
-type Open = { kind: "cue"; cue: CueWithMoves & { line: number }; text: string; fullText: string[]; note: string[]; page: string[] } | { kind: "other" } | null;
+type OpenPart = { part: CuePart; text: string; fullText: string[] };
+type Open =
+  | { kind: "cue"; cue: CueWithMoves & { line: number }; text: string; fullText: string[]; note: string[]; page: string[]; part: OpenPart | null; parts: OpenPart[] }
+  | { kind: "other" }
+  | null;
 
 export function readUsittAscii(source: string): AsciiReadResult {
   const errors: AsciiProblem[] = [];
@@ -66,6 +73,9 @@ export function readUsittAscii(source: string): AsciiReadResult {
     open.cue.label = (open.fullText.length ? unescapeText(open.fullText.join("")) : open.text).slice(0, 160);
     if (open.note.length) open.cue.callNote = unescapeText(open.note.join(""));
     if (open.page.length) open.cue.page = unescapeText(open.page.join("")).slice(0, 20);
+    for (const p of open.parts) p.part.label = (p.fullText.length ? unescapeText(p.fullText.join("")) : p.text).slice(0, 60);
+    open.cue.parts = open.parts.map((p) => ({ ...p.part, channels: [...new Set(p.part.channels)].sort((a, b) => a - b) })).sort((a, b) => a.part - b.part);
+    for (const problem of checkParts(open.cue.parts)) fail(open.cue.line, `cue ${formatCueNumber(open.cue.number)}: ${problem}`);
   };
 
   for (let i = 0; i < lines.length && !ended; i++) {
@@ -84,6 +94,7 @@ export function readUsittAscii(source: string): AsciiReadResult {
 
     if (keyword.startsWith("$")) {
       if (open?.kind === "cue" && keyword === THROWLINE_KEYWORDS.note) open.note.push(restRaw);
+      else if (open?.kind === "cue" && keyword === THROWLINE_KEYWORDS.partText && open.part) open.part.fullText.push(restRaw);
       else if (open?.kind === "cue" && keyword === THROWLINE_KEYWORDS.text) open.fullText.push(restRaw);
       else if (open?.kind === "cue" && keyword === THROWLINE_KEYWORDS.page) open.page.push(restRaw);
       else if (open?.kind === "cue" && keyword === THROWLINE_KEYWORDS.block) open.cue.block = true;
@@ -117,17 +128,17 @@ export function readUsittAscii(source: string): AsciiReadResult {
         const first = seen.get(cueKey(number));
         if (first !== undefined) fail(n, `cue ${formatCueNumber(number)} appears twice (first on line ${first})`);
         seen.set(cueKey(number), n);
-        const cue = { ...CUE_DEFAULTS, number, levels: {}, line: n };
+        const cue = { ...CUE_DEFAULTS, number, levels: {}, parts: [], line: n };
         result.cues.push(cue);
-        open = { kind: "cue", cue, text: "", fullText: [], note: [], page: [] };
+        open = { kind: "cue", cue, text: "", fullText: [], note: [], page: [], part: null, parts: [] };
         break;
       }
       case "TEXT":
-        if (open?.kind === "cue") open.text = restRaw.trim();
+        if (open?.kind === "cue") (open.part ?? open).text = restRaw.trim();
         break;
       case "UP":
       case "DOWN":
-        if (open?.kind === "cue") readTimes(open.cue, keyword, args, n, fail);
+        if (open?.kind === "cue") readTimes(open.part?.part ?? open.cue, keyword, args, n, fail);
         break;
       case "FOLLOW":
         if (open?.kind === "cue") {
@@ -148,10 +159,22 @@ export function readUsittAscii(source: string): AsciiReadResult {
         }
         break;
       case "PART":
-        if (open?.kind === "cue") notices.push({ line: n, message: `PART ${args[0] ?? ""}: parts are read into their cue with the cue's own times` });
+        if (open?.kind === "cue") {
+          const number = Number(args[0]);
+          if (!Number.isInteger(number) || number < 1 || number > MAX_PARTS) {
+            fail(n, `PART "${args[0] ?? ""}": a part number is a whole number from 1 to ${MAX_PARTS}`);
+            break;
+          }
+          // Until the part's own UP and DOWN: the cue's up time, no split, no delay (Throwline's reading).
+          open.part = { part: { part: number, label: "", upTime: open.cue.upTime, downTime: null, delay: 0, channels: [] }, text: "", fullText: [] };
+          open.parts.push(open.part);
+        } else if (!open) notices.push({ line: n, message: "PART outside any cue ignored" });
         break;
       case "CHAN":
-        if (open?.kind === "cue") readLevels(open.cue.levels, args, n, fail);
+        if (open?.kind === "cue") {
+          const listed = readLevels(open.cue.levels, args, n, fail);
+          open.part?.part.channels.push(...listed);
+        }
         else if (!open) notices.push({ line: n, message: "CHAN outside any cue ignored" });
         break;
       default:
@@ -173,7 +196,7 @@ export function readUsittAscii(source: string): AsciiReadResult {
   return result;
 }
 
-function readTimes(cue: CueWithMoves, keyword: "UP" | "DOWN", args: string[], line: number, fail: (l: number, m: string) => void) {
+function readTimes(cue: { upTime: number; downTime: number | null; delay: number }, keyword: "UP" | "DOWN", args: string[], line: number, fail: (l: number, m: string) => void) {
   try {
     const t = parseFadeTime(args[0] ?? "", `${keyword} time`);
     const delay = args[1] !== undefined ? parseFadeTime(args[1], `${keyword} delay`) : null;
@@ -185,7 +208,9 @@ function readTimes(cue: CueWithMoves, keyword: "UP" | "DOWN", args: string[], li
   }
 }
 
-function readLevels(levels: Record<number, number>, args: string[], line: number, fail: (l: number, m: string) => void) {
+/** Reads `ch level` pairs into `levels`; returns the channels it read. */
+function readLevels(levels: Record<number, number>, args: string[], line: number, fail: (l: number, m: string) => void): number[] {
+  const listed: number[] = [];
   if (args.length % 2 === 1) fail(line, `CHAN needs channel and level pairs; channel ${args.at(-1)} has no level`);
   for (let k = 0; k + 1 < args.length; k += 2) {
     const ch = Number(args[k]);
@@ -197,6 +222,10 @@ function readLevels(levels: Record<number, number>, args: string[], line: number
     if (/^-\d/.test(args[k + 1])) fail(line, `level ${args[k + 1]} for channel ${ch} is below 0`);
     else if (level === null) fail(line, `level "${args[k + 1]}" for channel ${ch} is not a level (0–100, FL or H00–HFF)`);
     else if (level > 100) fail(line, `level ${args[k + 1]} for channel ${ch} is above 100`);
-    else levels[ch] = Math.round(level);
+    else {
+      levels[ch] = Math.round(level);
+      listed.push(ch);
+    }
   }
+  return listed;
 }

@@ -2,20 +2,21 @@
 // version 3.0, 1992). Confirmed facts (shared REFERENCE.md): one instruction a line, at most 80
 // characters; `!` starts a comment; IDENT 3:0 comes first; keywords that begin with `$` are
 // manufacturer-specific and other readers ignore them.
-// From memory, not checked against the text: the keyword set CUE, UP, DOWN, FOLLOW, LINK, TEXT, CHAN,
-// MANUFACTURER, CONSOLE, ENDDATA; `UP time [delay]`; times as seconds or m:ss; levels 0–100; CR LF
-// line ends.
+// From memory, not checked against the text: the keyword set CUE, PART, UP, DOWN, FOLLOW, LINK, TEXT,
+// CHAN, MANUFACTURER, CONSOLE, ENDDATA; `UP time [delay]`; times as seconds or m:ss; levels 0–100;
+// CR LF line ends; that `PART n` inside a cue opens a part whose UP, DOWN and CHAN lines follow it
+// until the next PART or the next record, after the cue's own lines.
 //
 // Tracking: whether a cue in the file is a full state or only its changes is not settled (see
 // REFERENCE.md). Throwline writes each cue's FULL tracked state (every channel above 0) and also
 // writes `channel@0` for each channel that goes out in that cue. Read as full states or as changes,
 // such a file gives the same looks, so a console of either kind gets the show right.
-import { computeTracking } from "./tracking";
+import { computeTracking, levelAt } from "./tracking";
 import { formatCueNumber } from "./cue-number";
-import type { CueWithMoves } from "./types";
+import type { CuePart, CueWithMoves } from "./types";
 
 export const ASCII_MAX_LINE = 80;
-export const THROWLINE_KEYWORDS = { page: "$TL-PAGE", note: "$TL-NOTE", text: "$TL-TEXT", block: "$TL-BLOCK" } as const;
+export const THROWLINE_KEYWORDS = { page: "$TL-PAGE", note: "$TL-NOTE", text: "$TL-TEXT", block: "$TL-BLOCK", partText: "$TL-PARTTEXT" } as const;
 
 /** Throwline's own `$` lines may carry any text: `\` and line breaks are escaped, non-ASCII as \u{hex}. */
 export function escapeText(text: string): string {
@@ -71,6 +72,18 @@ function levelLines(pairs: Array<[number, number]>): string[] {
 
 const time = (s: number) => String(Math.round(s * 100) / 100);
 
+/**
+ * One part: its times, its label, and every channel of the part with its level in the cue (even at
+ * 0, so that which channels belong to the part survives the round trip).
+ */
+function partLines(part: CuePart, level: (ch: number) => number): string[] {
+  const out = [`PART ${part.part}`, `UP ${time(part.upTime)}${part.delay ? ` ${time(part.delay)}` : ""}`];
+  if (part.downTime != null) out.push(`DOWN ${time(part.downTime)}${part.delay ? ` ${time(part.delay)}` : ""}`);
+  if (part.label) out.push(...chunked(THROWLINE_KEYWORDS.partText, escapeText(part.label)));
+  out.push(...levelLines(part.channels.map((ch) => [ch, level(ch)])));
+  return out;
+}
+
 export function writeUsittAscii(opts: { title: string; cues: ReadonlyArray<CueWithMoves & { id?: number }> }): string {
   const withIds = opts.cues.map((c, i) => ({ ...c, id: i }));
   const show = computeTracking(withIds);
@@ -93,11 +106,13 @@ export function writeUsittAscii(opts: { title: string; cues: ReadonlyArray<CueWi
     if (cue.block) out.push(THROWLINE_KEYWORDS.block);
     const now = show.states[index];
     const before = index > 0 ? show.states[index - 1] : null;
+    const inPart = new Set(cue.parts.flatMap((p) => p.channels));
     const pairs: Array<[number, number]> = [];
     show.channels.forEach((ch, col) => {
-      if (now[col] > 0 || (before && before[col] > 0)) pairs.push([ch, now[col]]);
+      if (!inPart.has(ch) && (now[col] > 0 || (before && before[col] > 0))) pairs.push([ch, now[col]]);
     });
     out.push(...levelLines(pairs));
+    for (const part of cue.parts) out.push(...partLines(part, (ch) => levelAt(show, index, ch)));
   });
   out.push("", "ENDDATA", "");
   return out.join("\r\n");

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { parseCueNumber, parseFadeTime } from "@/lib/cues/index";
+import { checkParts, MAX_PARTS, parseCueNumber, parseFadeTime } from "@/lib/cues/index";
 import { versionSchema } from "./common";
 
 /** A cue number typed as text ("12.5") or sent as a number. */
@@ -42,6 +42,28 @@ export const levelsSchema = z
   .record(z.string().regex(/^[1-9]\d{0,4}$/, { error: "Channels are whole numbers from 1 to 99999" }), levelSchema.nullable())
   .refine((r) => Object.keys(r).length <= 5000, { error: "At most 5000 channels in one change" });
 
+const channelSchema = z.number({ error: "A channel is a whole number from 1 to 99999" }).int({ error: "A channel is a whole number from 1 to 99999" }).min(1, { error: "Channels start at 1" }).max(99_999, { error: "Channels run up to 99999" });
+
+/** One part of a cue: its number, its own times and its channels. */
+export const partSchema = z
+  .object({
+    part: z.number({ error: `A part number is a whole number from 1 to ${MAX_PARTS}` }).int({ error: `A part number is a whole number from 1 to ${MAX_PARTS}` }).min(1, { error: "Part numbers start at 1" }).max(MAX_PARTS, { error: `At most part ${MAX_PARTS}` }),
+    label: text(60, "Part label").default(""),
+    upTime: timeSchema("Part up time"),
+    downTime: timeSchema("Part down time").nullable().default(null),
+    delay: timeSchema("Part delay").default(0),
+    channels: z.array(channelSchema, { error: "A part's channels must be a list of channel numbers" }).max(5000, { error: "At most 5000 channels in a part" }),
+  })
+  .strict();
+
+/** All the parts of a cue (a PATCH replaces them all); problems name the part and the channel. */
+export const partsSchema = z
+  .array(partSchema, { error: "parts must be a list" })
+  .max(MAX_PARTS, { error: `At most ${MAX_PARTS} parts in a cue` })
+  .superRefine((parts, ctx) => {
+    for (const problem of checkParts(parts)) ctx.addIssue({ code: "custom", message: problem });
+  });
+
 const cueFields = {
   number: cueNumberSchema(),
   label: text(160, "Label"),
@@ -54,6 +76,7 @@ const cueFields = {
   block: z.boolean({ error: "Block must be true or false" }),
   callNote: text(2000, "Call note").nullable(),
   levels: levelsSchema,
+  parts: partsSchema,
 };
 
 export const cueCreateSchema = z.object(cueFields).partial().required({ number: true }).strict();

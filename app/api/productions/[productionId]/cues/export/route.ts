@@ -6,6 +6,7 @@ import { cueExportQuerySchema } from "@/lib/validation/cue";
 import { writeUsittAscii } from "@/lib/cues/usitt-ascii-write";
 import { cuesToCsv } from "@/lib/cues/table-export";
 import { cuesToXlsx } from "@/lib/cues/xlsx-export";
+import { compareCueNumbers } from "@/lib/cues";
 
 type Ctx = { params: Promise<{ productionId: string }> };
 
@@ -19,7 +20,8 @@ export const GET = route(async (req, { params }: Ctx) => {
   const production = await requireProduction(productionId);
   const [cues, sheet] = await Promise.all([getCuesByProduction({ productionId }), getCueSheet({ productionId })]);
   const levels = new Map(cues.map((c) => [c.id, c.levels]));
-  const rows = sheet.rows.map((r) => ({ ...r, levels: levels.get(r.id) ?? {} }));
+  // The sheet comes in running order; files list the cues by number, as the cue list does.
+  const rows = sheet.rows.map((r) => ({ ...r, levels: levels.get(r.id) ?? {} })).sort((a, b) => compareCueNumbers(a.number, b.number));
   const body =
     format === "ascii"
       ? writeUsittAscii({ title: `${production.name} — ${production.venue}`, cues: rows })

@@ -1,0 +1,38 @@
+import "server-only";
+import { getDb } from "@/models";
+import { AppError } from "@/lib/errors";
+import { normaliseParts, type CueWithMoves } from "@/lib/cues";
+import { readUsittAscii } from "@/lib/cues/usitt-ascii-read";
+import { toStoredMoves, type ImportMode } from "@/lib/cues/import-plan";
+import { recordChange } from "./changes";
+
+export type ImportOutcome = { imported: number; notices: Array<{ line: number; message: string }> };
+
+/** Replaces the production's cue list with a USITT ASCII file: all of it, or (on any error) nothing. */
+export async function importCuesFromAscii({ productionId, text, mode, userId }: { productionId: number; text: string; mode: ImportMode; userId: number }): Promise<ImportOutcome> {
+  const parsed = readUsittAscii(text);
+  if (parsed.errors.length) {
+    const fieldErrors = Object.fromEntries(parsed.errors.map((e) => [`line ${e.line}`, [e.message]]));
+    const first = parsed.errors[0];
+    const more = parsed.errors.length > 1 ? ` (and ${parsed.errors.length - 1} more)` : "";
+    throw new AppError("bad_request", `Nothing was imported. Line ${first.line}: ${first.message}${more}.`, { fieldErrors });
+  }
+  const cues = toStoredMoves(parsed.cues, mode);
+  const { sequelize, Cue, CueLevel, CuePart } = getDb();
+  await sequelize.transaction(async (transaction) => {
+    const before = await Cue.count({ where: { productionId }, transaction });
+    await Cue.destroy({ where: { productionId }, transaction });
+    const rows = await Cue.bulkCreate(cues.map((c) => ({ productionId, ...fieldsForRow(c) })), { transaction });
+    const levels = rows.flatMap((row, i) => Object.entries(cues[i].levels).map(([ch, level]) => ({ cueId: row.id, channel: Number(ch), level })));
+    for (let i = 0; i < levels.length; i += 5000) await CueLevel.bulkCreate(levels.slice(i, i + 5000), { transaction });
+    const parts = rows.flatMap((row, i) => normaliseParts(cues[i].parts).map((p) => ({ cueId: row.id, ...p })));
+    if (parts.length) await CuePart.bulkCreate(parts, { transaction });
+    await recordChange({ productionId, userId, entity: "cue", entityId: null, action: "update", before: { cues: before }, after: { imported: rows.length, parts: parts.length, from: "USITT ASCII" } }, transaction);
+  });
+  return { imported: cues.length, notices: parsed.notices };
+}
+
+function fieldsForRow(c: CueWithMoves & { line?: number }) {
+  const { levels: _levels, parts: _parts, line: _line, number, link, ...rest } = c;
+  return { ...rest, number: String(number), link: link == null ? null : String(link) };
+}
