@@ -8,3 +8,4 @@ export * from "./keyboard-entry";
 export * from "./parts";
 export * from "./running-order";
 export * from "./cue-sheet";
+export * from "./part-form";

@@ -31,6 +31,11 @@ function names(list: string[]): string {
 // One collator for all: localeCompare with options builds a new one on every call (slow in a sort).
 const byName = new Intl.Collator(undefined, { numeric: true });
 
+function allZero(levels: Float32Array): boolean {
+  for (let i = 0; i < levels.length; i++) if (levels[i] !== 0) return false;
+  return true;
+}
+
 /** Acting areas first (where on stage), then purposes (what kind of light), each once. */
 function lit(cols: number[], show: TrackedShow, info: ChannelInfo): string[] {
   const areas = new Set<string>();
@@ -56,8 +61,8 @@ export function summarizeCue(show: TrackedShow, index: number, info: ChannelInfo
   const darker = changed.filter((col) => now[col] < (before ? before[col] : 0));
   const counts = [up ? `${up} up` : "", down ? `${down} down` : ""].filter(Boolean).join(", ");
   const parts = [counts];
-  const wasDark = !before || before.every((l) => l === 0);
-  const isDark = now.every((l) => l === 0);
+  const wasDark = !before || allZero(before);
+  const isDark = allZero(now);
   if (isDark) parts.push("to blackout");
   else if (wasDark) parts.push("from dark");
   const b = lit(brighter, show, info);

@@ -33,19 +33,26 @@ export type ChannelMove = { channel: number; from: number; to: number; kind: Mov
 export function computeTracking(cues: ReadonlyArray<CueMoves>, extraChannels: Iterable<number> = []): TrackedShow {
   const ordered = [...cues].sort((a, b) => compareCueNumbers(a.number, b.number));
   const set = new Set<number>(extraChannels);
-  for (const cue of ordered) for (const ch of Object.keys(cue.levels)) set.add(Number(ch));
+  for (const cue of ordered) for (const ch in cue.levels) set.add(Number(ch));
   const channels = [...set].sort((a, b) => a - b);
   const column = new Map(channels.map((ch, i) => [ch, i]));
   const states: Float32Array[] = [];
   const recorded: Uint8Array[] = [];
-  let previous = new Float32Array(channels.length);
-  for (const cue of ordered) {
-    const state = cue.block ? new Float32Array(channels.length) : previous.slice();
-    const marks = new Uint8Array(channels.length);
+  // One buffer for every state (and one for the marks), each cue a view into it: thousands of small
+  // typed arrays each get their own backing store, and their garbage collection cost more than the work.
+  const width = channels.length;
+  const allStates = new Float32Array(width * ordered.length);
+  const allMarks = new Uint8Array(width * ordered.length);
+  let previous: Float32Array | null = null;
+  for (let i = 0; i < ordered.length; i++) {
+    const cue = ordered[i];
+    const state = allStates.subarray(i * width, (i + 1) * width);
+    const marks = allMarks.subarray(i * width, (i + 1) * width);
     if (cue.block) marks.fill(1);
-    for (const [ch, level] of Object.entries(cue.levels)) {
+    else if (previous) state.set(previous);
+    for (const ch in cue.levels) {
       const col = column.get(Number(ch))!;
-      state[col] = level;
+      state[col] = cue.levels[ch];
       marks[col] = 1;
     }
     states.push(state);

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { formatCueNumber, formatFadeTime, formatSplitTime, parseCueNumber, parseFadeTime, parseSplitTime } from "@/lib/cues";
+import { formatCueNumber, formatFadeTime, formatSplitTime, parseCueNumber, parseFadeTime, parseSplitTime, readPartDrafts, sameParts, toPartDrafts, type PartDraft } from "@/lib/cues";
 import type { CueDto } from "@/lib/data/cues";
 import { useUpdateCue, type CueChanges } from "@/hooks/use-cues";
 import { ApiError } from "@/lib/http/api-client";
@@ -9,8 +9,9 @@ import { Card } from "@/components/ui/card";
 import { TextField } from "@/components/ui/text-field";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
+import { PartsEditor } from "./parts-editor";
 
-type Draft = { number: string; label: string; page: string; time: string; delay: string; follow: string; link: string; block: boolean; callNote: string };
+type Draft = { number: string; label: string; page: string; time: string; delay: string; follow: string; link: string; block: boolean; callNote: string; parts: PartDraft[] };
 
 function toDraft(c: CueDto): Draft {
   return {
@@ -23,6 +24,7 @@ function toDraft(c: CueDto): Draft {
     link: c.link == null ? "" : formatCueNumber(c.link),
     block: c.block,
     callNote: c.callNote ?? "",
+    parts: toPartDrafts(c.parts),
   };
 }
 
@@ -56,7 +58,15 @@ function readDraft(d: Draft, cue: CueDto): { changes: CueChanges; errors: Record
   if ((d.page.trim() || null) !== cue.page) changes.page = d.page.trim() || null;
   if ((d.callNote.trim() || null) !== cue.callNote) changes.callNote = d.callNote.trim() || null;
   if (d.block !== cue.block) changes.block = d.block;
+  const parts = readPartDrafts(d.parts);
+  Object.assign(errors, parts.errors);
+  if (!sameParts(parts.parts, cue.parts)) changes.parts = parts.parts;
   return { changes, errors };
+}
+
+/** Server field errors come as lists; the parts editor shows one line each. */
+function flat(errors: Record<string, string | string[]>): Record<string, string> {
+  return Object.fromEntries(Object.entries(errors).map(([k, v]) => [k, Array.isArray(v) ? v.join(" ") : v]));
 }
 
 export function CueForm({ productionId, cue }: { productionId: number; cue: CueDto }) {
@@ -97,6 +107,7 @@ export function CueForm({ productionId, cue }: { productionId: number; cue: CueD
           <input type="checkbox" checked={draft.block} onChange={(e) => setDraft({ ...draft, block: e.target.checked })} className="size-4" />
           <span>Block cue: sets every channel itself, nothing tracks into it (the look stays as it is now)</span>
         </label>
+        <PartsEditor drafts={draft.parts} onChange={(parts) => setDraft({ ...draft, parts })} errors={flat(errors)} cueTime={draft.time} />
         <label className="col-span-2 flex flex-col gap-1 text-sm sm:col-span-4">
           <span className="font-medium">Call note</span>
           <textarea name="callNote" value={draft.callNote} onChange={set("callNote")} rows={2} className="rounded-md border border-line bg-surface px-3 py-2 text-ink" />

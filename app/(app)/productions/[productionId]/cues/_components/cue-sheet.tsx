@@ -4,13 +4,47 @@ import { useMemo, useState } from "react";
 import Link from "next/link";
 import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from "@tanstack/react-table";
 import { useCueSheet, useUpdateCallNote } from "@/hooks/use-cues";
-import { formatCueNumber, formatFadeTime, formatSplitTime } from "@/lib/cues";
+import { formatChannels, formatCueNumber, formatFadeTime, formatSplitTime } from "@/lib/cues";
 import type { CueSheetRow } from "@/lib/data/cues";
 import { ApiError } from "@/lib/http/api-client";
 import { Button } from "@/components/ui/button";
 import { NoteCell } from "./note-cell";
 
 const col = createColumnHelper<CueSheetRow>();
+
+/** The number, and how the running order reaches it when that is not plain GO on the next number. */
+function CueCell({ row }: { row: CueSheetRow }) {
+  return (
+    <span className="flex flex-col">
+      <span className="font-semibold tabular-nums">{formatCueNumber(row.number)}</span>
+      {row.linked && row.after != null ? <span className="text-xs text-muted print:text-black">after {formatCueNumber(row.after)} (link)</span> : null}
+      {!row.reached ? <span className="text-xs text-caution">skipped: a link jumps past it</span> : null}
+    </span>
+  );
+}
+
+function TimeCell({ row }: { row: CueSheetRow }) {
+  return (
+    <span className="flex flex-col tabular-nums">
+      <span>{formatSplitTime(row.upTime, row.downTime)}{row.delay ? ` · wait ${formatFadeTime(row.delay)}` : ""}</span>
+      {row.parts.map((p) => (
+        <span key={p.part} className="text-xs text-muted print:text-black" data-testid={`sheet-part-${formatCueNumber(row.number)}-${p.part}`}>
+          part {p.part}{p.label ? ` ${p.label}` : ""}: {formatSplitTime(p.upTime, p.downTime)}{p.delay ? ` wait ${formatFadeTime(p.delay)}` : ""} · ch {formatChannels(p.channels) || "none"}
+        </span>
+      ))}
+    </span>
+  );
+}
+
+function ThenCell({ row }: { row: CueSheetRow }) {
+  const lines = [
+    row.follow != null ? `next cue after ${formatFadeTime(row.follow)} s` : "",
+    row.link != null && !row.brokenLink && row.loopsTo == null ? `goes on to ${formatCueNumber(row.link)}` : "",
+    row.loopsTo != null ? `back to ${formatCueNumber(row.loopsTo)} (loop)` : "",
+    row.brokenLink ? `link to ${formatCueNumber(row.link!)}: no such cue` : "",
+  ].filter(Boolean);
+  return <span className="flex flex-col">{lines.map((l) => <span key={l} className={l.includes("no such") ? "text-danger" : ""}>{l}</span>)}</span>;
+}
 
 /** The stage manager's cue sheet: read-only except page and call note; prints on A4 or Letter. */
 export function CueSheetView({ productionId, productionName, canEditNotes, canWriteCues }: { productionId: number; productionName: string; canEditNotes: boolean; canWriteCues: boolean }) {
@@ -39,11 +73,11 @@ export function CueSheetView({ productionId, productionName, canEditNotes, canWr
 
   const columns = useMemo(
     () => [
-      col.accessor("number", { header: "Cue", cell: (c) => <span className="font-semibold tabular-nums">{formatCueNumber(c.getValue())}</span> }),
+      col.accessor("number", { header: "Cue", cell: (c) => <CueCell row={c.row.original} /> }),
       col.accessor("page", { header: "Page", cell: (c) => <NoteCell label={`Page for cue ${formatCueNumber(c.row.original.number)}`} value={c.getValue()} editable={canEditNotes} narrow onSave={(v) => save(c.row.original, "page", v)} /> }),
       col.accessor("label", { header: "Label" }),
-      col.display({ id: "time", header: "Time (up/down)", cell: (c) => <span className="tabular-nums">{formatSplitTime(c.row.original.upTime, c.row.original.downTime)}{c.row.original.delay ? ` · wait ${formatFadeTime(c.row.original.delay)}` : ""}</span> }),
-      col.accessor("follow", { header: "Then", cell: (c) => (c.getValue() == null ? "" : `next cue after ${formatFadeTime(c.getValue()!)} s`) }),
+      col.display({ id: "time", header: "Time (up/down)", cell: (c) => <TimeCell row={c.row.original} /> }),
+      col.display({ id: "then", header: "Then", cell: (c) => <ThenCell row={c.row.original} /> }),
       col.accessor("runningTime", { header: "Runs", cell: (c) => <span className="tabular-nums">{formatFadeTime(c.getValue())}</span> }),
       col.accessor("summary", { header: "What changes", cell: (c) => <span className="text-muted print:text-black">{c.getValue()}</span> }),
       col.accessor("callNote", { header: "Call note", cell: (c) => <NoteCell label={`Call note for cue ${formatCueNumber(c.row.original.number)}`} value={c.getValue()} editable={canEditNotes} onSave={(v) => save(c.row.original, "callNote", v)} /> }),
@@ -62,7 +96,7 @@ export function CueSheetView({ productionId, productionName, canEditNotes, canWr
           <h2 id="cue-sheet-title" className="text-xl font-semibold">Cue sheet</h2>
           <p className="text-sm text-muted print:text-black">
             <span className="hidden print:inline">{productionName} · </span>
-            {data?.rows.length ?? 0} cues · standbys grouped when a cue follows within 5 s{canEditNotes ? " · you can edit page and call note" : ""}
+            {data?.rows.length ?? 0} cues in running order (links followed) · standbys grouped when a cue follows within 5 s{canEditNotes ? " · you can edit page and call note" : ""}
           </p>
         </div>
         <div className="no-print flex items-center gap-2">
@@ -95,7 +129,7 @@ export function CueSheetView({ productionId, productionName, canEditNotes, canWr
                   <td colSpan={columns.length} className="px-2 pt-3 text-xs font-semibold uppercase tracking-wide text-accent print:text-black">Standby LX {g.label} — one call</td>
                 </tr>
               ) : null,
-              <tr key={row.id} data-testid={`sheet-row-${formatCueNumber(row.original.number)}`} className={`break-inside-avoid border-b border-line align-top ${g && g.size > 1 ? "border-l-4 border-l-accent print:border-l-black" : ""}`}>
+              <tr key={row.id} data-testid={`sheet-row-${formatCueNumber(row.original.number)}`} className={`break-inside-avoid border-b border-line align-top ${g && g.size > 1 ? "border-l-4 border-l-accent print:border-l-black" : ""} ${row.original.reached ? "" : "opacity-70"}`}>
                 {row.getVisibleCells().map((cell) => <td key={cell.id} className="px-2 py-1.5">{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>)}
               </tr>,
             ];
