@@ -125,7 +125,7 @@ export function ImportPanel({ productionId, units, onClose }: { productionId: nu
               {checked.errorCount > checked.errors.length ? <p className="text-xs text-muted">…and {checked.errorCount - checked.errors.length} more.</p> : null}
             </div>
           ) : null}
-          <div><Button onClick={run} disabled={!ready || busy} data-testid="import-commit">Import {checked.counts.create + checked.counts.update} rows</Button></div>
+          <div><Button onClick={run} disabled={!ready || busy} data-testid="import-commit">Import {checked.counts.create + checked.counts.update} row{checked.counts.create + checked.counts.update === 1 ? "" : "s"}</Button></div>
         </>
       ) : null}
     </section>
