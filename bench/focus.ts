@@ -9,8 +9,8 @@ import { computeFixtureGeometry } from "../lib/rig/fixture-geometry";
 import { buildFocusChart, type ChartProduction } from "../lib/focus/chart-model";
 import { outlineLandmarks } from "../lib/focus/landmarks";
 import { paginate } from "../lib/focus/pages";
-import { sheetsHtml } from "../lib/focus/sheets-html";
-import { printDocument, renderPdf } from "../lib/pdf/focus-pdf";
+import { sheetParts } from "../lib/focus/sheets-html";
+import { renderPdf } from "../lib/pdf/focus-pdf";
 import { closeBrowser } from "../lib/pdf/browser";
 import type { FixtureDto } from "../lib/data/fixtures";
 
@@ -74,10 +74,10 @@ async function run(n: number) {
   const landmarks = outlineLandmarks(PRODUCTION);
   const charts = rig(n).map((f) => buildFocusChart(f, PRODUCTION, { landmarks, userNames: { 1: "Bench Electrician" }, timeZone: "UTC" }));
   const sheets = paginate(charts, 4, { newPagePerPosition: true });
-  const html = printDocument({ title: "bench", paper: "A4", sheets: sheetsHtml(sheets, { productionName: PRODUCTION.name, printedAt: "bench", perPage: 4, units: "metric", landmarks }) });
-  if (process.env.BENCH_HTML_OUT) writeFileSync(process.env.BENCH_HTML_OUT, html);
+  const parts = sheetParts(sheets, { productionName: PRODUCTION.name, printedAt: "bench", perPage: 4, units: "metric", landmarks });
+  const htmlLength = parts.reduce((n, p) => n + p.length, 0);
   const t1 = performance.now();
-  const pdf = await renderPdf({ html, paper: "A4", footerText: "bench" });
+  const pdf = await renderPdf({ title: "bench", sheets: parts, paper: "A4", footerText: "bench" });
   const t2 = performance.now();
   clearInterval(timer);
   nodePeak = Math.max(nodePeak, process.memoryUsage().rss);
@@ -86,7 +86,7 @@ async function run(n: number) {
   console.log(
     `${String(n).padStart(5)} charts: ${((t2 - t0) / 1000).toFixed(1)} s total (model + HTML ${((t1 - t0) / 1000).toFixed(2)} s, ` +
       `Chromium ${((t2 - t1) / 1000).toFixed(1)} s), ${pages} pages (expected ${sheets.length}), ${(pdf.length / MiB).toFixed(1)} MiB PDF, ` +
-      `HTML ${(html.length / MiB).toFixed(1)} MiB, peak RSS Node ${(nodePeak / MiB).toFixed(0)} MiB, browser tree ${(browserPeak / MiB).toFixed(0)} MiB (Pss)`,
+      `HTML ${(htmlLength / MiB).toFixed(1)} MiB, peak RSS Node ${(nodePeak / MiB).toFixed(0)} MiB, browser tree ${(browserPeak / MiB).toFixed(0)} MiB (Pss)`,
   );
 }
 

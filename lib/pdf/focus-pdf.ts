@@ -1,6 +1,8 @@
 import "server-only";
 // Focus charts printed to PDF by the shared headless Chromium: the same sheets and stylesheet as the
-// browser's print view, with a footer that Chromium numbers itself (page x of y).
+// browser's print view. Long prints go to the browser in parts of PART_SHEETS pages and are joined with
+// pdf-lib: Chromium keeps every page of a print in memory, and 375 pages in one go took over 3 GiB.
+import { PDFDocument } from "pdf-lib";
 import { CHART_CSS, sheetCss } from "@/lib/focus/chart-css";
 import { escapeHtml } from "@/lib/focus/escape";
 import { PAPER, type Paper } from "@/lib/focus/pages";
@@ -15,23 +17,52 @@ export function printDocument(o: { title: string; paper: Paper; sheets: string }
 }
 
 const PRINT_TIMEOUT_MS = 120_000;
+export const PART_SHEETS = 40;
 
-export async function renderPdf(o: { html: string; paper: Paper; footerText: string }): Promise<Buffer> {
-  return withPage(async (page) => {
-    page.setDefaultTimeout(PRINT_TIMEOUT_MS);
-    await page.setContent(o.html, { waitUntil: "load" });
-    await page.evaluate(() => document.fonts.ready.then(() => undefined));
-    const m = PAPER[o.paper].marginMm;
-    const pdf = await page.pdf({
-      format: o.paper,
-      printBackground: true,
-      preferCSSPageSize: true,
-      margin: { top: `${m.top}mm`, right: `${m.side}mm`, bottom: `${m.bottom}mm`, left: `${m.side}mm` },
-      displayHeaderFooter: true,
-      headerTemplate: "<span></span>",
-      footerTemplate: `<div style="font-family:sans-serif;font-size:7px;color:#555;width:100%;padding:0 8mm;display:flex;justify-content:space-between">` +
-        `<span>${escapeHtml(o.footerText)}</span><span>page <span class="pageNumber"></span> of <span class="totalPages"></span></span></div>`,
-    });
-    return Buffer.from(pdf);
+function footer(text: string, numbered: boolean): string {
+  // Chromium fills pageNumber/totalPages itself; in a print made of parts they would restart, so then
+  // the sheet's own header (page x of y over the whole print) is the page number.
+  const pages = numbered ? `<span>page <span class="pageNumber"></span> of <span class="totalPages"></span></span>` : "";
+  return `<div style="font-family:sans-serif;font-size:7px;color:#555;width:100%;padding:0 8mm;display:flex;justify-content:space-between">` +
+    `<span>${escapeHtml(text)}</span>${pages}</div>`;
+}
+
+export async function renderPdf(o: { title: string; sheets: string[]; paper: Paper; footerText: string }): Promise<Buffer> {
+  const parts: string[][] = [];
+  for (let i = 0; i < o.sheets.length; i += PART_SHEETS) parts.push(o.sheets.slice(i, i + PART_SHEETS));
+  const m = PAPER[o.paper].marginMm;
+  const pdfs = await withPage(async (first) => {
+    const out: Uint8Array[] = [];
+    let page = first;
+    for (const [k, part] of parts.entries()) {
+      if (k > 0) {
+        // A fresh page per part lets Chromium drop the previous part's layout.
+        const next = await page.context().newPage();
+        await page.close();
+        page = next;
+      }
+      page.setDefaultTimeout(PRINT_TIMEOUT_MS);
+      await page.setContent(printDocument({ title: o.title, paper: o.paper, sheets: part.join("") }), { waitUntil: "load" });
+      await page.evaluate(() => document.fonts.ready.then(() => undefined));
+      out.push(await page.pdf({
+        format: o.paper,
+        printBackground: true,
+        preferCSSPageSize: true,
+        margin: { top: `${m.top}mm`, right: `${m.side}mm`, bottom: `${m.bottom}mm`, left: `${m.side}mm` },
+        displayHeaderFooter: true,
+        headerTemplate: "<span></span>",
+        footerTemplate: footer(o.footerText, parts.length === 1),
+      }));
+    }
+    return out;
   });
+  if (pdfs.length === 1) return Buffer.from(pdfs[0]);
+  const merged = await PDFDocument.create();
+  merged.setTitle(o.title);
+  for (const bytes of pdfs) {
+    const doc = await PDFDocument.load(bytes);
+    for (const p of await merged.copyPages(doc, doc.getPageIndices())) merged.addPage(p);
+  }
+  // Plain (not stream-packed) objects keep the file readable by simple tools that count /Type /Page.
+  return Buffer.from(await merged.save({ useObjectStreams: false }));
 }

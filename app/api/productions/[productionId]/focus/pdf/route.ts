@@ -2,10 +2,10 @@ import { route, readQuery } from "@/lib/http/respond";
 import { requireMember } from "@/lib/auth/guards";
 import { focusFilterSchema, printOptionsSchema } from "@/lib/focus/filters";
 import { paginate } from "@/lib/focus/pages";
-import { sheetsHtml } from "@/lib/focus/sheets-html";
+import { sheetParts } from "@/lib/focus/sheets-html";
 import { formatStamp } from "@/lib/focus/words";
 import { loadFocusCharts } from "@/lib/pdf/focus-source";
-import { printDocument, renderPdf } from "@/lib/pdf/focus-pdf";
+import { renderPdf } from "@/lib/pdf/focus-pdf";
 import { chromiumMissing, CHROMIUM_PATH } from "@/lib/pdf/browser";
 import { AppError } from "@/lib/errors";
 import { attachmentName } from "../attachment";
@@ -22,12 +22,12 @@ export const GET = route(async (req, { params }: Ctx) => {
   const { production, charts, landmarks } = await loadFocusCharts({ productionId, filter, timeZone: filter.tz });
   const printedAt = formatStamp(new Date(), filter.tz);
   const sheets = paginate(charts, filter.perPage, { newPagePerPosition: filter.newPagePerPosition });
-  const html = printDocument({
+  const pdf = await renderPdf({
     title: `${production.name} — focus charts`,
     paper: filter.paper,
-    sheets: sheetsHtml(sheets, { productionName: production.name, printedAt, perPage: filter.perPage, units: production.displayUnits, landmarks }),
+    sheets: sheetParts(sheets, { productionName: production.name, printedAt, perPage: filter.perPage, units: production.displayUnits, landmarks }),
+    footerText: `${production.name} · focus charts · printed ${printedAt}`,
   });
-  const pdf = await renderPdf({ html, paper: filter.paper, footerText: `${production.name} · focus charts · printed ${printedAt}` });
   return new Response(new Uint8Array(pdf), {
     headers: {
       "content-type": "application/pdf",
