@@ -64,21 +64,23 @@ export function drawPool(ctx: Ctx, v: View, item: Pick<RigItem, "pool" | "cuts" 
       if (poly.length) polygonPath(ctx, v, poly);
     } else ellipsePath(ctx, v, e);
   };
-  ctx.fillStyle = pal.poolOuter;
+  ctx.fillStyle = strong ? pal.poolOuterStrong : pal.poolOuter;
   shape(pool.outer);
   ctx.fill();
   if (pool.core) {
-    ctx.fillStyle = pal.poolCore;
+    ctx.fillStyle = strong ? pal.poolCoreStrong : pal.poolCore;
     shape(pool.core);
     ctx.fill();
   }
   if (pool.half) {
     ctx.strokeStyle = pal.poolEdge;
+    ctx.globalAlpha = strong ? 1 : 0.5;
     ctx.lineWidth = strong ? 1.5 : 0.75;
     ctx.setLineDash(strong ? [5, 3] : [3, 3]);
     shape(pool.half);
     ctx.stroke();
     ctx.setLineDash([]);
+    ctx.globalAlpha = 1;
   }
   if (strong) {
     ctx.strokeStyle = pal.poolEdge;

@@ -17,6 +17,8 @@ export type PlotPalette = {
   poolOuter: string;
   poolCore: string;
   poolEdge: string;
+  poolOuterStrong: string;
+  poolCoreStrong: string;
   area: string;
   selection: string;
 };
@@ -39,9 +41,12 @@ export function readPalette(el: Element = document.documentElement): PlotPalette
     deck: dark ? "#1b1815" : "#fbfaf7",
     grid: dark ? "rgba(201,191,178,0.07)" : "rgba(31,29,26,0.06)",
     gridMajor: dark ? "rgba(201,191,178,0.14)" : "rgba(31,29,26,0.13)",
-    poolOuter: dark ? "rgba(222,170,90,0.10)" : "rgba(230,160,40,0.12)",
-    poolCore: dark ? "rgba(232,186,110,0.16)" : "rgba(240,176,50,0.20)",
-    poolEdge: dark ? "rgba(222,170,90,0.55)" : "rgba(190,120,20,0.6)",
+    // Faint on purpose: a hundred pools overlap on a real plot and must still read as a wash, not a blot.
+    poolOuter: dark ? "rgba(222,170,90,0.035)" : "rgba(230,150,30,0.035)",
+    poolCore: dark ? "rgba(232,186,110,0.06)" : "rgba(240,170,40,0.06)",
+    poolEdge: dark ? "rgba(222,170,90,0.45)" : "rgba(170,100,10,0.45)",
+    poolOuterStrong: dark ? "rgba(222,170,90,0.16)" : "rgba(230,150,30,0.18)",
+    poolCoreStrong: dark ? "rgba(232,186,110,0.22)" : "rgba(240,170,40,0.28)",
     area: dark ? "rgba(111,156,106,0.12)" : "rgba(47,107,58,0.08)",
     selection: dark ? "#d9a441" : "#1d6fb8",
   };

@@ -76,8 +76,8 @@ export async function createUnderlay({ productionId, userId, fileName, bytes }: 
         {
           productionId, kind: "underlay", fileName: fileName.slice(0, 200) || "groundplan", storageKey: key, contentType: type, sizeBytes: bytes.byteLength,
           widthPx: size?.width ?? null, heightPx: size?.height ?? null, uploadedBy: userId,
-          // 1 cm a pixel, centred on the centre line with its top edge 12 m upstage: a starting guess to calibrate from.
-          metresPerPixel: 0.01, offsetX: -((size?.width ?? 0) * 0.01) / 2, offsetY: 12,
+          // 1 cm a pixel, centred on the centre line 4 m upstage: a starting guess that lands on the stage, to calibrate from.
+          metresPerPixel: 0.01, offsetX: -((size?.width ?? 0) * 0.01) / 2, offsetY: 4 + ((size?.height ?? 0) * 0.01) / 2,
         },
         { transaction },
       );

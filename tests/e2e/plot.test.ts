@@ -57,7 +57,7 @@ describe("the designer works the plot", () => {
     await page.getByTestId("underlay-info").filter({ hasText: "groundplan.png" }).waitFor();
     const before = (await plotData(page)).underlays[0];
     await page.getByRole("button", { name: "Calibrate scale" }).click();
-    const a = { x: before.offsetX + 0.5, y: before.offsetY - 0.5 };
+    const a = { x: before.offsetX + 0.5, y: before.offsetY - 1 }; // inside the image, on the stage
     const b = { x: a.x + 2, y: a.y }; // 200 px at 1 cm a pixel
     await drag(page, await toPage(page, a), await toPage(page, b));
     await page.getByTestId("draft-distance").fill("10 m");

@@ -49,7 +49,8 @@ export function DraftForm(p: PanelProps) {
         const u = p.data.underlays[0];
         if (!u) throw new RangeError("Upload a groundplan first.");
         const next = calibrate(u, d.points[0], d.points[1], parseLength(distance, unit));
-        await p.cmd.run("Calibrate the groundplan", () => p.cmd.actions.patchUnderlay(u.id, { ...next, version: u.version }));
+        const placement = { metresPerPixel: next.metresPerPixel, offsetX: round(next.offsetX), offsetY: round(next.offsetY) };
+        await p.cmd.run("Calibrate the groundplan", () => p.cmd.actions.patchUnderlay(u.id, { ...placement, version: u.version }));
       }
       done();
     } catch (err) {

@@ -53,9 +53,16 @@ export default function PlotCanvas(props: PlotCanvasProps) {
   const live = useRef({ props, items, outline, palette, size, underlay });
   live.current = { props, items, outline, palette, size, underlay };
 
-  const redraw = useCallback((which: "all" | "overlay" = "all") => {
-    if (which === "overlay") return overlayLayer.current?.batchDraw();
-    stage.current?.batchDraw();
+  /** Redraws now when called from a gesture's animation frame (no extra frame of lag), else on the next frame. */
+  const redraw = useCallback((which: "all" | "overlay" = "all", now = false) => {
+    const t0 = performance.now();
+    const target = which === "overlay" ? overlayLayer.current : stage.current;
+    if (now) target?.draw();
+    else target?.batchDraw();
+    // bench:plot reads the cost of each drawn frame from here (absent in normal use).
+    const perf = (window as unknown as { __plotDrawMs?: number[] }).__plotDrawMs;
+    if (now && perf) perf.push(performance.now() - t0);
+    if (which === "overlay") return;
     // The current view, for tests and the benchmark to turn plan metres into screen points.
     if (container.current) container.current.dataset.view = JSON.stringify(view.current);
   }, []);
@@ -65,7 +72,10 @@ export default function PlotCanvas(props: PlotCanvasProps) {
     const p = preview.current;
     if (p && !gesture.current) {
       const server = data.fixtures.find((f) => f.id === p.id);
-      if (!server || server.version !== p.version || server.updatedAt !== p.updatedAt) preview.current = null;
+      if (!server || server.version !== p.version || server.updatedAt !== p.updatedAt) {
+        preview.current = null;
+        props.events.preview(null); // the panel goes back to the server's numbers too
+      }
     }
     redraw();
   }, [data, layers, selection, palette, size, props.tool, redraw]);

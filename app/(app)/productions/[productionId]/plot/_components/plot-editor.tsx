@@ -68,7 +68,7 @@ export function PlotEditor({ production, initial, canEdit }: { production: Produ
   }
 
   return (
-    <div className="flex h-[calc(100vh-6.5rem)] min-h-[520px] flex-col" data-testid="plot-editor" data-can-edit={canEdit ? "yes" : "no"}>
+    <div className="flex h-[calc(100dvh-8.25rem)] min-h-[520px] flex-col" data-testid="plot-editor" data-can-edit={canEdit ? "yes" : "no"}>
       <Toolbar
         canEdit={canEdit}
         tool={tool}

@@ -21,7 +21,7 @@ type Args = {
   draft: RefObject<Point[]>;
   preview: RefObject<FixtureDto | null>;
   live: Live;
-  redraw: (which?: "all" | "overlay") => void;
+  redraw: (which?: "all" | "overlay", now?: boolean) => void;
 };
 
 const TWO_POINT_TOOLS = new Set(["position-line", "landmark", "cut", "calibrate"]);
@@ -45,7 +45,7 @@ export function useCanvasGestures({ container, view, gesture, draft, preview, li
       if (frame) return;
       frame = requestAnimationFrame(() => {
         frame = 0;
-        redraw(wantAll ? "all" : "overlay");
+        redraw(wantAll ? "all" : "overlay", true);
         wantAll = false;
       });
     };
@@ -99,8 +99,8 @@ export function useCanvasGestures({ container, view, gesture, draft, preview, li
 
     function onDown(e: PointerEvent) {
       if (e.button !== 0 && e.button !== 1) return;
-      el.focus();
       const s = local(e);
+      el.focus({ preventScroll: true }); // a scroll here would shift every later pointer position
       pointers.set(e.pointerId, s);
       el.setPointerCapture(e.pointerId);
       if (pointers.size === 2) {
