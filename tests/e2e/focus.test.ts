@@ -81,7 +81,7 @@ describe("the electrician's focus call on a tablet", () => {
     await page.getByTestId("chart-list").waitFor();
     const boomId = await page.getByTestId("filter-position").locator("option", { hasText: "Boom SR 2" }).getAttribute("value");
     await page.getByTestId("filter-position").selectOption(boomId!);
-    await expect.poll(() => page.getByTestId("focus-chart").count()).toBe(4);
+    await expect.poll(() => page.getByTestId("focus-chart").count(), { timeout: 20_000 }).toBe(4);
     await screenshot(page, "focus-list-tablet");
 
     await page.getByTestId("open-focus-call").click();
@@ -90,13 +90,13 @@ describe("the electrician's focus call on a tablet", () => {
     const before = await page.getByTestId("call-progress").textContent();
     const done = Number(before!.split(" ")[0]);
     await page.getByTestId("mark-focused").click();
-    await expect.poll(() => page.getByTestId("call-progress").textContent()).toBe(`${done + 1} of 4 focused`);
+    await expect.poll(() => page.getByTestId("call-progress").textContent(), { timeout: 20_000 }).toBe(`${done + 1} of 4 focused`);
     // "Focused — next unit" moved on; mark this one without moving, then check who and when.
     await page.getByTestId("mark-focused-stay").click();
-    await expect.poll(() => page.getByTestId("focused-line").textContent()).toMatch(/^Focused \d{1,2} \w{3} \d{4}, \d\d:\d\d by Teodor Brask$/);
+    await expect.poll(() => page.getByTestId("focused-line").textContent(), { timeout: 20_000 }).toMatch(/^Focused \d{1,2} \w{3} \d{4}, \d\d:\d\d by Teodor Brask$/);
     await page.getByLabel("As-focused notes").fill("Top shutter trimmed off the lip.");
     await page.getByRole("button", { name: "Save as-focused notes" }).click();
-    await expect.poll(() => page.getByRole("status").first().textContent()).toBe("Saved.");
+    await expect.poll(() => page.getByRole("status").first().textContent(), { timeout: 20_000 }).toBe("Saved.");
     await expect(page.getByLabel("Designer notes").count()).resolves.toBe(0); // read-only for the electrician
     await screenshot(page, "focus-call-tablet-light");
     await page.getByTestId("theme-toggle").click();
