@@ -38,7 +38,7 @@ export default async function CuesPage({ params, searchParams }: { params: Promi
         {showSheet ? (
           <CueSheetView productionId={productionId} productionName={production.name} canEditNotes={can(member, "cues.editCallNotes")} canWriteCues={canEdit} />
         ) : (
-          <CueWorkspace productionId={productionId} />
+          <CueWorkspace productionId={productionId} stage={{ prosceniumWidth: production.prosceniumWidth, stageWidth: production.stageWidth, stageDepth: production.stageDepth, apronDepth: production.apronDepth, backWallY: production.backWallY, datumName: production.datumName }} />
         )}
       </HydrationBoundary>
     </main>

@@ -7,7 +7,7 @@ import type { CueDto } from "@/lib/data/cues";
 import { ApiError } from "@/lib/http/api-client";
 
 /** Typed level entry in Throwline's own syntax (lib/cues/keyboard-entry.ts): "12 75", "1-6 full", "cue 5". */
-export function CommandLine({ productionId, cues, selected, onSelect }: { productionId: number; cues: CueDto[]; selected: CueDto | null; onSelect: (id: number) => void }) {
+export function CommandLine({ productionId, cues, selected, onSelect, onTyped }: { productionId: number; cues: CueDto[]; selected: CueDto | null; onSelect: (id: number) => void; onTyped?: (channels: number[]) => void }) {
   const [text, setText] = useState("");
   const [feedback, setFeedback] = useState<{ tone: "ok" | "error"; text: string } | null>(null);
   const create = useCreateCue(productionId);
@@ -27,6 +27,7 @@ export function CommandLine({ productionId, cues, selected, onSelect }: { produc
         if (!selected) throw new RangeError("Make a cue first: type cue 1 and press Enter");
         const levels = Object.fromEntries(entry.channels.map((ch) => [ch, entry.level]));
         await update.mutateAsync({ id: selected.id, version: selected.version, changes: { levels } });
+        onTyped?.(entry.channels);
         const chans = entry.channels.length > 3 ? `${entry.channels[0]}–${entry.channels.at(-1)}` : entry.channels.join(", ");
         setFeedback({ tone: "ok", text: `Cue ${formatCueNumber(selected.number)}: channel${entry.channels.length > 1 ? "s" : ""} ${chans} ${entry.level === null ? "now track" : `at ${entry.level} %`}.` });
       }

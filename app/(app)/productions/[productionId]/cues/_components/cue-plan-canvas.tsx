@@ -1,27 +1,74 @@
 "use client";
 
-import { useEffect, useRef, useState } from "react";
-import { Circle, Ellipse, Layer, Line, Stage } from "react-konva";
-import type { Ellipse as PoolEllipse } from "@/lib/optics";
+import { useEffect, useMemo, useRef, useState } from "react";
+import { Layer, Stage } from "react-konva";
+import type { PlanePool, Point } from "@/lib/optics";
+import { PlanShape } from "@/components/plot/plan-shape";
+import { readPalette, type PlotPalette } from "@/components/plot/palette";
+import { drawStageOutline, type Ctx } from "@/components/plot/draw-stage";
+import { drawPool } from "@/components/plot/draw-rig";
+import { extendBounds, stageBounds, stageOutline, type StageSettings } from "@/lib/plot/stage-outline";
+import { fitBounds, planToScreen, type View } from "@/lib/plot/view";
 
-export type PlanPool = { id: number; source: { x: number; y: number }; pool: PoolEllipse; level: number; channel: number | null };
+export type LookPool = { id: number; pool: PlanePool; mark: Point | null; cuts: Array<{ a: Point; b: Point }>; level: number; channel: number | null };
 
-function cssVar(name: string, fallback: string) {
-  if (typeof window === "undefined") return fallback;
-  return getComputedStyle(document.documentElement).getPropertyValue(name).trim() || fallback;
+// The look is drawn as a darkened stage in either theme: light adds up on black, as it does in the room.
+function stagePalette(base: PlotPalette): PlotPalette {
+  return { ...base, dark: true, deck: "#16130f", canvas: "#0c0a08", muted: "#7d7469", ink: "#b9b0a4", surface: "#16130f" };
 }
 
-/** Read-only plan: x to stage left is to the right, upstage is up (plan y is flipped for the screen). */
-export function CuePlanCanvas({ pools }: { pools: PlanPool[] }) {
+/** A pool's fill for a level: warm light whose strength follows the level; the core is brighter. */
+function litPalette(p: PlotPalette, level: number): PlotPalette {
+  return { ...p, poolOuter: `rgba(255,176,92,${(0.1 + 0.32 * level).toFixed(3)})`, poolCore: `rgba(255,214,150,${(0.12 + 0.4 * level).toFixed(3)})`, poolEdge: `rgba(255,200,130,${(0.15 + 0.3 * level).toFixed(3)})` };
+}
+
+function darkPalette(p: PlotPalette): PlotPalette {
+  return { ...p, poolOuter: "rgba(0,0,0,0)", poolCore: "rgba(0,0,0,0)", poolEdge: "rgba(150,140,128,0.55)" };
+}
+
+function drawLook(ctx: Ctx, v: View, pools: LookPool[], pal: PlotPalette) {
+  const asItem = (p: LookPool) => ({ pool: p.pool, cuts: p.cuts, mark: p.mark });
+  const dark = darkPalette(pal);
+  for (const p of pools) if (p.level <= 0) drawPool(ctx, v, asItem(p), dark, true);
+  // "lighter" adds each pool's light to what is under it, so overlaps read brighter, as on stage.
+  ctx.save();
+  ctx.globalCompositeOperation = "lighter";
+  for (const p of pools) if (p.level > 0) drawPool(ctx, v, asItem(p), litPalette(pal, p.level));
+  ctx.restore();
+}
+
+function drawLabels(ctx: Ctx, v: View, pools: LookPool[]) {
+  ctx.font = "600 13px 'IBM Plex Sans', system-ui, sans-serif";
+  ctx.textAlign = "center";
+  ctx.textBaseline = "middle";
+  ctx.lineJoin = "round";
+  const placed: Point[] = [];
+  for (const p of [...pools].sort((a, b) => b.level - a.level)) {
+    if (p.channel == null || !p.pool.outer) continue;
+    const at = planToScreen(v, p.pool.axisHit ?? p.pool.outer.centre);
+    // Several units on one channel, or pools on one mark: one label is enough.
+    if (placed.some((q) => Math.abs(q.x - at.x) < 18 && Math.abs(q.y - at.y) < 14)) continue;
+    placed.push(at);
+    const text = p.level > 0 ? `${p.channel} · ${Math.round(p.level * 100)}` : String(p.channel);
+    ctx.lineWidth = 4;
+    ctx.strokeStyle = "rgba(12,10,8,0.85)";
+    ctx.strokeText(text, at.x, at.y);
+    ctx.fillStyle = p.level > 0 ? "#fff3df" : "#8d857a";
+    ctx.fillText(text, at.x, at.y);
+  }
+}
+
+/** Read-only plan of the cue's look: stage outline, pools added up by level, channel labels. */
+export function CuePlanCanvas({ pools, stage }: { pools: LookPool[]; stage: StageSettings }) {
   const box = useRef<HTMLDivElement>(null);
   const [width, setWidth] = useState(480);
-  const [colours, setColours] = useState({ accent: "#b4561c", line: "#d6d0c4", ink: "#1f1d1a" });
+  const [palette, setPalette] = useState<PlotPalette | null>(null);
   useEffect(() => {
     const el = box.current;
     if (!el) return;
     const read = () => {
-      setWidth(el.clientWidth);
-      setColours({ accent: cssVar("--accent", "#b4561c"), line: cssVar("--line", "#d6d0c4"), ink: cssVar("--muted", "#6b655c") });
+      setWidth(Math.max(200, el.clientWidth));
+      setPalette(stagePalette(readPalette()));
     };
     read();
     const ro = new ResizeObserver(read);
@@ -31,40 +78,33 @@ export function CuePlanCanvas({ pools }: { pools: PlanPool[] }) {
     return () => (ro.disconnect(), mo.disconnect());
   }, []);
 
-  // Frame the pool centres (not their full extent: a wide wash would shrink the stage to a dot).
-  const xs = pools.map((p) => p.pool.centre.x);
-  const ys = pools.map((p) => p.pool.centre.y);
-  const minX = Math.min(-6, ...xs) - 1, maxX = Math.max(6, ...xs) + 1, minY = Math.min(-1, ...ys) - 1, maxY = Math.max(8, ...ys) + 1;
-  // One scale for both axes, so rotated ellipses keep their true shape.
-  const scale = Math.min(width / (maxX - minX), 520 / (maxY - minY));
-  const height = (maxY - minY) * scale;
-  const sx = (x: number) => (x - minX) * scale;
-  const sy = (y: number) => height - (y - minY) * scale;
+  const outline = useMemo(() => stageOutline(stage), [stage]);
+  // Frame the stage and the pools' centres (not their full extent: a wide wash would shrink the stage).
+  const bounds = useMemo(() => extendBounds(stageBounds(stage), pools.map((p) => p.pool.outer!.centre)), [stage, pools]);
+  const height = Math.round(Math.min(560, Math.max(260, (width * (bounds.maxY - bounds.minY)) / (bounds.maxX - bounds.minX) + 40)));
+  const view = useMemo(() => fitBounds(bounds, { width, height }, 20), [bounds, width, height]);
+  const lit = pools.filter((p) => p.level > 0).length;
 
   return (
-    <div ref={box} className="w-full" data-testid="cue-plan" aria-label={`Plan with ${pools.filter((p) => p.level > 0).length} lit pools`} role="img">
-      <Stage width={width} height={height} listening={false}>
-        <Layer clipX={0} clipY={0} clipWidth={width} clipHeight={height}>
-          <Line points={[sx(minX), sy(0), sx(maxX), sy(0)]} stroke={colours.line} dash={[6, 4]} strokeWidth={1} />
-          <Line points={[sx(0), sy(minY), sx(0), sy(maxY)]} stroke={colours.line} dash={[2, 4]} strokeWidth={1} />
-          {[...pools].sort((a, b) => a.level - b.level).map((p) => (
-            <Ellipse
-              key={p.id}
-              x={sx(p.pool.centre.x)}
-              y={sy(p.pool.centre.y)}
-              radiusX={p.pool.semiMajor * scale}
-              radiusY={p.pool.semiMinor * scale}
-              rotation={-p.pool.rotationDeg}
-              fill={colours.accent}
-              opacity={p.level > 0 ? 0.02 + 0.1 * p.level : 0.6}
-              fillEnabled={p.level > 0}
-              stroke={p.level > 0 ? colours.accent : colours.line}
-              strokeWidth={p.level > 0 ? 0.5 + p.level : 0.5}
+    <div ref={box} className="w-full overflow-hidden rounded-md" data-testid="cue-plan" data-lit={lit} aria-label={`Plan of the look: ${lit} of ${pools.length} pools lit`} role="img">
+      {palette ? (
+        <Stage width={width} height={height} listening={false}>
+          <Layer listening={false}>
+            <PlanShape
+              name="look"
+              draw={(ctx) => {
+                ctx.fillStyle = palette.canvas;
+                ctx.fillRect(0, 0, width, height);
+                drawStageOutline(ctx, view, outline, palette, true);
+                drawLook(ctx, view, pools, palette);
+                drawLabels(ctx, view, pools);
+              }}
             />
-          ))}
-          {pools.map((p) => <Circle key={`s${p.id}`} x={sx(p.source.x)} y={sy(p.source.y)} radius={2} fill={p.level > 0 ? colours.accent : colours.ink} />)}
-        </Layer>
-      </Stage>
+          </Layer>
+        </Stage>
+      ) : (
+        <div style={{ height }} className="bg-black" />
+      )}
     </div>
   );
 }

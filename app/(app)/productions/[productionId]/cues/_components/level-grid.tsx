@@ -1,10 +1,12 @@
 "use client";
 
-import { useMemo } from "react";
-import { classifyMoves, formatCueNumber, type MoveKind, type TrackedShow } from "@/lib/cues";
+import { useEffect, useMemo, useState } from "react";
+import { formatCueNumber, type MoveKind, type TrackedShow } from "@/lib/cues";
 import type { ChannelLabel, CueDto } from "@/lib/data/cues";
+import { useVirtualRows } from "./use-virtual-rows";
 
 const WINDOW = 12;
+const ROW = 24; // px; every row the same height so the grid can render only the rows in view
 
 // Up and down are told apart by an arrow and weight, not by colour alone.
 const CELL: Record<MoveKind, string> = {
@@ -15,27 +17,63 @@ const CELL: Record<MoveKind, string> = {
 };
 const MARK: Record<MoveKind, string> = { up: "▲", down: "▼", held: "", tracked: "" };
 
-/** Channels down, cues across: every channel's level in the cues around the selected one. */
-export function LevelGrid({ show, cues, channels, selectedIndex, onSelect }: { show: TrackedShow; cues: CueDto[]; channels: ChannelLabel[]; selectedIndex: number; onSelect: (id: number) => void }) {
+/** What a channel (column `col`) does in the cue at `index`, read straight from the tracked show. */
+function cellAt(show: TrackedShow, index: number, col: number): { level: number; kind: MoveKind } {
+  const level = show.states[index][col];
+  const from = index > 0 ? show.states[index - 1][col] : 0;
+  const kind: MoveKind = level > from ? "up" : level < from ? "down" : show.recorded[index][col] ? "held" : "tracked";
+  return { level, kind };
+}
+
+type Props = { show: TrackedShow; cues: CueDto[]; channels: ChannelLabel[]; selectedIndex: number; onSelect: (id: number) => void; focusChannel: { channel: number } | null };
+
+/** Channels down, cues across: every channel's level in the cues around the selected one. Only rows in view are drawn. */
+export function LevelGrid({ show, cues, channels, selectedIndex, onSelect, focusChannel }: Props) {
   const first = Math.max(0, Math.min(selectedIndex - Math.floor(WINDOW / 3), cues.length - WINDOW));
   const visible = cues.slice(first, first + WINDOW).map((c, k) => ({ cue: c, index: first + k }));
   const label = useMemo(() => new Map(channels.map((c) => [c.channel, c])), [channels]);
-  const moves = useMemo(() => visible.map((v) => classifyMoves(show, v.index)), [show, first, cues.length]); // eslint-disable-line react-hooks/exhaustive-deps
+  const rows = useVirtualRows({ count: show.channels.length, rowHeight: ROW });
+  const [jump, setJump] = useState("");
+  const [jumpError, setJumpError] = useState<string | null>(null);
+  const { scrollToIndex } = rows;
+
+  // After a typed line, the first channel it touched comes into view.
+  useEffect(() => {
+    if (focusChannel) scrollToIndex(show.column.get(focusChannel.channel) ?? -1);
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- only when a line was typed, not on every change of the show
+  }, [focusChannel, scrollToIndex]);
+
   if (!cues.length) return null;
+  const goTo = (e: React.FormEvent) => {
+    e.preventDefault();
+    const ch = Number(jump.trim());
+    const col = show.column.get(ch);
+    if (col === undefined) return setJumpError(`Channel ${jump.trim() || "?"} is not in the rig or the cues`);
+    setJumpError(null);
+    scrollToIndex(col);
+  };
+
   return (
     <section aria-labelledby="grid-title" className="rounded-lg border border-line bg-surface">
-      <header className="flex items-baseline justify-between px-3 pt-2">
+      <header className="flex flex-wrap items-center justify-between gap-2 px-3 pt-2">
         <h3 id="grid-title" className="text-sm font-semibold uppercase tracking-wide text-muted">Levels</h3>
-        <p className="text-xs text-muted">▲ up · ▼ down · bold = recorded in the cue · grey = tracked from before · cues {first + 1}–{first + visible.length} of {cues.length}</p>
+        <form onSubmit={goTo} className="flex items-center gap-1 text-xs">
+          <label htmlFor="grid-jump" className="text-muted">Go to channel</label>
+          <input id="grid-jump" value={jump} onChange={(e) => setJump(e.target.value)} inputMode="numeric" className="min-h-8 w-16 rounded border border-line bg-canvas px-1.5" aria-describedby="grid-jump-error" />
+          <span id="grid-jump-error" role="alert" className="text-danger">{jumpError}</span>
+        </form>
       </header>
-      <div className="max-h-[28rem] overflow-auto">
-        <table className="w-full border-collapse text-xs tabular-nums" aria-label="Levels by channel and cue">
+      <p className="px-3 text-xs text-muted">
+        ▲ up · ▼ down · bold = recorded in the cue · grey = tracked from before · cues {first + 1}–{first + visible.length} of {cues.length} · {show.channels.length} channels
+      </p>
+      <div ref={rows.ref} onScroll={rows.onScroll} className="max-h-[28rem] overflow-auto" data-testid="level-grid-scroll">
+        <table className="w-full border-collapse text-xs tabular-nums" aria-label="Levels by channel and cue" aria-rowcount={show.channels.length + 1}>
           <thead className="sticky top-0 z-10 bg-raised">
-            <tr>
-              <th scope="col" className="sticky left-0 bg-raised px-2 py-1 text-left">Ch</th>
+            <tr style={{ height: ROW }}>
+              <th scope="col" className="sticky left-0 bg-raised px-2 text-left">Ch</th>
               {visible.map(({ cue, index }) => (
-                <th key={cue.id} scope="col" className={`px-1 py-1 text-right ${index === selectedIndex ? "bg-accent/20" : ""}`}>
-                  <button type="button" onClick={() => onSelect(cue.id)} className="min-h-7 w-full text-right" aria-label={`Select cue ${formatCueNumber(cue.number)}`}>
+                <th key={cue.id} scope="col" className={`px-1 text-right ${index === selectedIndex ? "bg-accent/20" : ""}`}>
+                  <button type="button" onClick={() => onSelect(cue.id)} className="h-6 w-full text-right" aria-label={`Select cue ${formatCueNumber(cue.number)}`}>
                     {formatCueNumber(cue.number)}
                     {cue.block ? <span className="ml-0.5 text-[10px] text-muted">B</span> : null}
                   </button>
@@ -44,26 +82,28 @@ export function LevelGrid({ show, cues, channels, selectedIndex, onSelect }: { s
             </tr>
           </thead>
           <tbody>
-            {show.channels.map((ch, col) => {
+            {rows.padTop ? <tr aria-hidden style={{ height: rows.padTop }} /> : null}
+            {show.channels.slice(rows.first, rows.last).map((ch, k) => {
+              const col = rows.first + k;
               const info = label.get(ch);
               return (
-                <tr key={ch} className="border-t border-line/60" data-testid={`grid-ch-${ch}`}>
-                  <th scope="row" className="sticky left-0 bg-surface px-2 py-0.5 text-left font-medium" title={[...(info?.purposes ?? []), ...(info?.areas ?? [])].join(" · ")}>
+                <tr key={ch} style={{ height: ROW }} aria-rowindex={col + 2} className="border-t border-line/60" data-testid={`grid-ch-${ch}`}>
+                  <th scope="row" className="sticky left-0 bg-surface px-2 text-left font-medium" title={[...(info?.purposes ?? []), ...(info?.areas ?? [])].join(" · ")}>
                     {ch}
                   </th>
-                  {visible.map(({ cue, index }, k) => {
-                    const m = moves[k]?.[col];
-                    const level = m?.to ?? 0;
-                    const shown = m && (m.kind !== "tracked" || level > 0);
+                  {visible.map(({ cue, index }) => {
+                    const m = cellAt(show, index, col);
+                    const shown = m.kind !== "tracked" || m.level > 0;
                     return (
-                      <td key={cue.id} data-testid={`cell-${ch}-${formatCueNumber(cue.number)}`} className={`px-1 py-0.5 text-right ${index === selectedIndex ? "bg-accent/10" : ""} ${m ? CELL[m.kind] : ""}`}>
-                        {shown ? `${MARK[m.kind]}${Math.round(level)}` : ""}
+                      <td key={cue.id} data-testid={`cell-${ch}-${formatCueNumber(cue.number)}`} className={`px-1 text-right ${index === selectedIndex ? "bg-accent/10" : ""} ${CELL[m.kind]}`}>
+                        {shown ? `${MARK[m.kind]}${Math.round(m.level)}` : ""}
                       </td>
                     );
                   })}
                 </tr>
               );
             })}
+            {rows.padBottom ? <tr aria-hidden style={{ height: rows.padBottom }} /> : null}
           </tbody>
         </table>
       </div>

@@ -1,0 +1,116 @@
+// A large show in the designer's workspace (600 cues × 400 channels, imported from a USITT ASCII file):
+// the level grid and the cue list draw only the rows in view, typed entry still lands and brings its
+// channel into view, and the list's sort, filter and columns work and are remembered. Then parts in
+// the cue form, shown on the cue sheet; and the look on the plan in light and dark.
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { BrowserContext, Page } from "playwright-core";
+import { DEMO, openBrowser, screenshot, signIn } from "./support/browser";
+
+let browser: BrowserContext;
+beforeAll(async () => {
+  browser = await openBrowser({ width: 1440, height: 1000 });
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+/** Sparse moves as a real show has them; the same file every run (a fixed pseudo-random walk). */
+function bigShowFile(cues = 600, channels = 400): string {
+  let seed = 11;
+  const r = () => ((seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31);
+  const lines = ["IDENT 3:0"];
+  for (let i = 1; i <= cues; i++) {
+    lines.push(`CUE ${i}`, `TEXT Look ${i}`, "UP 3");
+    const pairs: string[] = [];
+    for (let k = 0; k < 2 + Math.floor(r() * 12); k++) pairs.push(`${1 + Math.floor(r() * channels)}@${Math.round(r() * 10) * 10}`);
+    if (i === 1) pairs.push(`${channels}@5`); // so the rig reaches the last channel
+    for (let k = 0; k < pairs.length; k += 8) lines.push(`CHAN ${pairs.slice(k, k + 8).join(" ")}`);
+  }
+  return [...lines, "ENDDATA", ""].join("\r\n");
+}
+
+async function type(page: Page, line: string, feedback: RegExp) {
+  const box = page.getByLabel(/Type levels/);
+  await box.fill(line);
+  await box.press("Enter");
+  await page.locator("#level-entry-feedback").filter({ hasText: feedback }).waitFor();
+}
+
+describe("a show of 600 cues and 400 channels", () => {
+  it("stays a window of rows, takes typed levels, and remembers the list's view", async () => {
+    const page = await browser.newPage();
+    await signIn(page, DEMO.designer);
+    const made = await page.request.post("/api/productions", { data: { name: `Large show ${Date.now()}`, venue: "Test Hall", displayUnits: "metric" } });
+    expect(made.status()).toBe(201);
+    const id = (await made.json()).production.id;
+    const imported = await page.request.post(`/api/productions/${id}/cues/import`, { data: { text: bigShowFile(), mode: "moves" } });
+    expect(imported.status()).toBe(200);
+    expect((await imported.json()).imported).toBe(600);
+
+    await page.goto(`/productions/${id}/cues`);
+    await page.getByTestId("grid-ch-1").waitFor();
+    expect(await page.locator('[data-testid^="grid-ch-"]').count()).toBeLessThan(80); // 400 channels, only a window drawn
+    expect(await page.locator('[data-testid^="cue-row-"]').count()).toBeLessThan(60); // 600 cues, only a window drawn
+
+    await type(page, "cue 600", /Cue 600 selected/);
+    await type(page, "350 75", /Cue 600: channel 350 at 75 %/);
+    await expect(page.getByTestId("cell-350-600").textContent()).resolves.toMatch(/^▲?75$/); // brought into view by the typed line
+    await type(page, "349-351 full", /channels 349, 350, 351 at 100 %/);
+    await expect(page.getByTestId("cell-351-600").textContent()).resolves.toMatch(/100$/);
+    await page.getByLabel("Go to channel").fill("2");
+    await page.getByLabel("Go to channel").press("Enter");
+    await page.getByTestId("grid-ch-2").waitFor();
+
+    // Sort by label descending, filter, and hide a column; then reload: sort and columns are remembered.
+    await page.getByRole("button", { name: /^Label/ }).click();
+    await page.getByRole("button", { name: /^Label/ }).click();
+    expect(await page.locator("th[aria-sort=descending]").textContent()).toMatch(/Label/);
+    await page.getByText(/^Columns \(/).click();
+    await page.getByRole("checkbox", { name: "Wait" }).uncheck();
+    await page.getByLabel("Filter cues").fill("Look 59");
+    await page.getByText("11 of 600 cues").waitFor(); // Look 59 and Look 590–599
+    await screenshot(page, "cues-large-light");
+    await page.reload();
+    await page.getByTestId("grid-ch-1").waitFor();
+    await page.locator("th[aria-sort=descending]").filter({ hasText: "Label" }).waitFor();
+    expect(await page.getByRole("button", { name: /^Wait/ }).count()).toBe(0);
+    expect(await page.locator('[data-testid^="cue-row-"]').first().textContent()).toMatch(/Look 600/); // labels sort as people read numbers: 600 last, so first descending
+    await page.close();
+  });
+});
+
+describe("parts and the look of a cue", () => {
+  it("edits parts in the cue form, shows them on the sheet, and draws the look in both themes", async () => {
+    const page = await browser.newPage();
+    await signIn(page, DEMO.designer);
+    await page.goto(page.url().replace(/\/?$/, "/cues"));
+    await page.getByLabel(/Type levels/).waitFor();
+    await type(page, "cue 5", /Cue 5 (selected|created)/);
+    await page.getByRole("button", { name: "Add a part" }).click();
+    await page.getByLabel("Part 1: label").fill("sky");
+    await page.getByLabel("Part 1: time").fill("12/4");
+    await page.getByLabel("Part 1: wait").fill("2");
+    await page.getByLabel("Part 1: channels").fill("1-3, x");
+    await page.getByRole("button", { name: "Save cue" }).click();
+    await page.getByText(/"x" is not a channel/).waitFor(); // named beside the field, nothing sent
+    await page.getByLabel("Part 1: channels").fill("1-3");
+    const saved = page.waitForResponse((r) => r.request().method() === "PATCH" && r.url().includes("/cues/"));
+    await page.getByRole("button", { name: "Save cue" }).click();
+    expect((await saved).status()).toBe(200);
+    await page.getByLabel("Part 1: channels").waitFor(); // the form comes back with the saved part
+    await page.getByTestId("cue-plan").locator("canvas").first().waitFor();
+    await screenshot(page, "cues-plan-light");
+    await page.getByTestId("cue-plan").screenshot({ path: `${process.env.TEST_RESULTS_DIR ?? "test-results"}/screenshots/cues-plan-only-light.png` });
+    await page.getByTestId("theme-toggle").click();
+    await page.waitForTimeout(200);
+    await page.getByTestId("cue-plan").screenshot({ path: `${process.env.TEST_RESULTS_DIR ?? "test-results"}/screenshots/cues-plan-only-dark.png` });
+    await screenshot(page, "cues-plan-dark");
+    await page.getByTestId("theme-toggle").click();
+    expect(Number(await page.getByTestId("cue-plan").getAttribute("data-lit"))).toBeGreaterThan(0);
+
+    await page.goto(page.url().split("?")[0] + "?view=sheet");
+    await page.getByTestId("sheet-part-5-1").waitFor();
+    await expect(page.getByTestId("sheet-part-5-1").textContent()).resolves.toBe("part 1 sky: 12/4 wait 2 · ch 1-3");
+    await page.close();
+  });
+});
