@@ -44,6 +44,33 @@ function toPart(p: PartRow): CuePart {
   return { part: p.part, label: p.label, upTime: p.up_time, downTime: p.down_time, delay: p.delay, channels };
 }
 
+type MovesRow = { cue_id: number; n: number | bigint; moves: string | null };
+
+/**
+ * "12:50;13:100;" → { 12: 50, 13: 100 }. Null when the text was cut short by GROUP_CONCAT's length
+ * limit: then the last pair has no closing ";" or pairs are missing.
+ */
+function parseMoves(row: MovesRow): Record<number, number> | null {
+  const text = row.moves ?? "";
+  if (!text.endsWith(";")) return null;
+  const out: Record<number, number> = {};
+  let count = 0;
+  for (let start = 0; start < text.length; ) {
+    const colon = text.indexOf(":", start);
+    const end = text.indexOf(";", colon);
+    out[Number(text.slice(start, colon))] = Number(text.slice(colon + 1, end));
+    count++;
+    start = end + 1;
+  }
+  return count === Number(row.n) ? out : null;
+}
+
+/** The slow, sure way for a cue whose moves did not fit in one GROUP_CONCAT (tens of thousands of channels). */
+async function movesOneByOne(cueId: number, transaction?: Transaction): Promise<Record<number, number>> {
+  const rows = await select<{ channel: number; level: number }>("SELECT channel, level FROM cue_levels WHERE cue_id = ?", [cueId], transaction);
+  return Object.fromEntries(rows.map((r) => [r.channel, r.level]));
+}
+
 async function select<T extends object>(sql: string, replacements: unknown[], transaction?: Transaction): Promise<T[]> {
   return getDb().sequelize.query<T>(sql, { replacements, type: QueryTypes.SELECT, transaction, raw: true });
 }
@@ -57,18 +84,15 @@ async function readCues(where: { productionId: number; cueId?: number }, transac
   const args = where.cueId === undefined ? [where.productionId] : [where.productionId, where.cueId];
   const queries = [
     () => select<CueRow>(`SELECT ${CUE_COLUMNS} FROM cues c WHERE c.production_id = ?${byCue} ORDER BY c.number`, args, transaction),
-    () => select<{ cue_id: number; channel: number; level: number }>(`SELECT l.cue_id, l.channel, l.level FROM cue_levels l JOIN cues c ON c.id = l.cue_id WHERE c.production_id = ?${byCue}`, args, transaction),
+    // One row a cue with its moves as "ch:level;…": 2–3× faster than a row a move (measured on 9 600 moves).
+    () => select<MovesRow>(`SELECT l.cue_id, COUNT(*) AS n, GROUP_CONCAT(l.channel, ':', l.level, ';' SEPARATOR '') AS moves FROM cue_levels l JOIN cues c ON c.id = l.cue_id WHERE c.production_id = ?${byCue} GROUP BY l.cue_id`, args, transaction),
     () => select<PartRow>(`SELECT ${PART_COLUMNS} FROM cue_parts p JOIN cues c ON c.id = p.cue_id WHERE c.production_id = ?${byCue}`, args, transaction),
   ] as const;
   const [cues, levels, parts] = transaction
     ? [await queries[0](), await queries[1](), await queries[2]()]
     : await Promise.all([queries[0](), queries[1](), queries[2]()]);
   const levelsBy = new Map<number, Record<number, number>>();
-  for (const l of levels) {
-    let rec = levelsBy.get(l.cue_id);
-    if (!rec) levelsBy.set(l.cue_id, (rec = {}));
-    rec[l.channel] = l.level;
-  }
+  for (const row of levels) levelsBy.set(row.cue_id, parseMoves(row) ?? (await movesOneByOne(row.cue_id, transaction)));
   const partsBy = new Map<number, CuePart[]>();
   for (const p of parts) {
     const list = partsBy.get(p.cue_id) ?? [];

@@ -27,7 +27,8 @@ describe("the designer writes cues with the keyboard", () => {
   it("makes three cues, each from typed lines, and sees tracking in the grid", async () => {
     const page = await freshPage();
     await signIn(page, DEMO.designer);
-    await page.goto(page.url().replace(/\/?$/, "/cues"));
+    const list = await (await page.request.get("/api/productions")).json();
+    await page.goto(`/productions/${list.productions.find((p: { name: string }) => p.name === "Salt and Lantern").id}/cues`);
     await page.getByLabel(/Type levels/).waitFor();
 
     await type(page, "cue 801", /Cue 801 created/);

@@ -2,13 +2,13 @@
 
 import { useEffect, useMemo, useRef, useState } from "react";
 import { Layer, Stage } from "react-konva";
-import type { PlanePool, Point } from "@/lib/optics";
+import type { Ellipse, PlanePool, Point } from "@/lib/optics";
 import { PlanShape } from "@/components/plot/plan-shape";
 import { readPalette, type PlotPalette } from "@/components/plot/palette";
 import { drawStageOutline, type Ctx } from "@/components/plot/draw-stage";
 import { drawPool } from "@/components/plot/draw-rig";
 import { extendBounds, stageBounds, stageOutline, type StageSettings } from "@/lib/plot/stage-outline";
-import { fitBounds, planToScreen, type View } from "@/lib/plot/view";
+import { fitBounds, planToScreen, type Bounds, type View } from "@/lib/plot/view";
 
 export type LookPool = { id: number; pool: PlanePool; mark: Point | null; cuts: Array<{ a: Point; b: Point }>; level: number; channel: number | null };
 
@@ -17,23 +17,53 @@ function stagePalette(base: PlotPalette): PlotPalette {
   return { ...base, dark: true, deck: "#16130f", canvas: "#0c0a08", muted: "#7d7469", ink: "#b9b0a4", surface: "#16130f" };
 }
 
-/** A pool's fill for a level: warm light whose strength follows the level; the core is brighter. */
-function litPalette(p: PlotPalette, level: number): PlotPalette {
-  return { ...p, poolOuter: `rgba(255,176,92,${(0.1 + 0.32 * level).toFixed(3)})`, poolCore: `rgba(255,214,150,${(0.12 + 0.4 * level).toFixed(3)})`, poolEdge: `rgba(255,200,130,${(0.15 + 0.3 * level).toFixed(3)})` };
+/** A pool's fill for a level: warm light whose strength follows the level (times the exposure); the core is brighter. */
+function litPalette(p: PlotPalette, level: number, exposure: number): PlotPalette {
+  const a = (k: number) => Math.min(1, k * level * exposure).toFixed(3);
+  return { ...p, poolOuter: `rgba(255,170,90,${a(0.3)})`, poolCore: `rgba(255,200,130,${a(0.3)})`, poolEdge: `rgba(255,200,130,${a(0.25)})` };
+}
+
+function inside(e: Ellipse, x: number, y: number): boolean {
+  const t = (-e.rotationDeg * Math.PI) / 180;
+  const dx = x - e.centre.x;
+  const dy = y - e.centre.y;
+  const u = dx * Math.cos(t) + dy * Math.sin(t);
+  const w = -dx * Math.sin(t) + dy * Math.cos(t);
+  return (u * u) / (e.semiMajor * e.semiMajor) + (w * w) / (e.semiMinor * e.semiMinor) <= 1;
+}
+
+/**
+ * Added-up light saturates to white where many pools overlap. The exposure scales every pool alike
+ * (so levels stay in proportion within the cue) so that the busiest spot — the largest sum of levels
+ * over a coarse grid of the stage — stays just short of white. Sparse looks are never brightened.
+ */
+function exposureFor(pools: LookPool[], b: Bounds): number {
+  const lit = pools.filter((p) => p.level > 0 && p.pool.outer);
+  let peak = 0;
+  for (let i = 0; i <= 40; i++) {
+    for (let j = 0; j <= 30; j++) {
+      const x = b.minX + ((b.maxX - b.minX) * i) / 40;
+      const y = b.minY + ((b.maxY - b.minY) * j) / 30;
+      let sum = 0;
+      for (const p of lit) if (inside(p.pool.outer!, x, y)) sum += p.level;
+      peak = Math.max(peak, sum);
+    }
+  }
+  return Math.min(1, 1.8 / Math.max(peak, 1e-6));
 }
 
 function darkPalette(p: PlotPalette): PlotPalette {
   return { ...p, poolOuter: "rgba(0,0,0,0)", poolCore: "rgba(0,0,0,0)", poolEdge: "rgba(150,140,128,0.55)" };
 }
 
-function drawLook(ctx: Ctx, v: View, pools: LookPool[], pal: PlotPalette) {
+function drawLook(ctx: Ctx, v: View, pools: LookPool[], pal: PlotPalette, exposure: number) {
   const asItem = (p: LookPool) => ({ pool: p.pool, cuts: p.cuts, mark: p.mark });
   const dark = darkPalette(pal);
   for (const p of pools) if (p.level <= 0) drawPool(ctx, v, asItem(p), dark, true);
   // "lighter" adds each pool's light to what is under it, so overlaps read brighter, as on stage.
   ctx.save();
   ctx.globalCompositeOperation = "lighter";
-  for (const p of pools) if (p.level > 0) drawPool(ctx, v, asItem(p), litPalette(pal, p.level));
+  for (const p of pools) if (p.level > 0) drawPool(ctx, v, asItem(p), litPalette(pal, p.level, exposure));
   ctx.restore();
 }
 
@@ -42,14 +72,15 @@ function drawLabels(ctx: Ctx, v: View, pools: LookPool[]) {
   ctx.textAlign = "center";
   ctx.textBaseline = "middle";
   ctx.lineJoin = "round";
-  const placed: Point[] = [];
+  const placed: Array<{ x: number; y: number; w: number }> = [];
+  // Brightest first, so when labels would overlap the lit channel keeps its label.
   for (const p of [...pools].sort((a, b) => b.level - a.level)) {
     if (p.channel == null || !p.pool.outer) continue;
     const at = planToScreen(v, p.pool.axisHit ?? p.pool.outer.centre);
-    // Several units on one channel, or pools on one mark: one label is enough.
-    if (placed.some((q) => Math.abs(q.x - at.x) < 18 && Math.abs(q.y - at.y) < 14)) continue;
-    placed.push(at);
     const text = p.level > 0 ? `${p.channel} · ${Math.round(p.level * 100)}` : String(p.channel);
+    const w = ctx.measureText(text).width + 6;
+    if (placed.some((q) => Math.abs(q.x - at.x) < (q.w + w) / 2 && Math.abs(q.y - at.y) < 16)) continue;
+    placed.push({ x: at.x, y: at.y, w });
     ctx.lineWidth = 4;
     ctx.strokeStyle = "rgba(12,10,8,0.85)";
     ctx.strokeText(text, at.x, at.y);
@@ -84,9 +115,10 @@ export function CuePlanCanvas({ pools, stage }: { pools: LookPool[]; stage: Stag
   const height = Math.round(Math.min(560, Math.max(260, (width * (bounds.maxY - bounds.minY)) / (bounds.maxX - bounds.minX) + 40)));
   const view = useMemo(() => fitBounds(bounds, { width, height }, 20), [bounds, width, height]);
   const lit = pools.filter((p) => p.level > 0).length;
+  const exposure = useMemo(() => exposureFor(pools, bounds), [pools, bounds]);
 
   return (
-    <div ref={box} className="w-full overflow-hidden rounded-md" data-testid="cue-plan" data-lit={lit} aria-label={`Plan of the look: ${lit} of ${pools.length} pools lit`} role="img">
+    <div ref={box} className="w-full overflow-hidden rounded-md" data-testid="cue-plan" data-lit={lit} data-exposure={exposure.toFixed(2)} aria-label={`Plan of the look: ${lit} of ${pools.length} pools lit`} role="img">
       {palette ? (
         <Stage width={width} height={height} listening={false}>
           <Layer listening={false}>
@@ -96,7 +128,7 @@ export function CuePlanCanvas({ pools, stage }: { pools: LookPool[]; stage: Stag
                 ctx.fillStyle = palette.canvas;
                 ctx.fillRect(0, 0, width, height);
                 drawStageOutline(ctx, view, outline, palette, true);
-                drawLook(ctx, view, pools, palette);
+                drawLook(ctx, view, pools, palette, exposure);
                 drawLabels(ctx, view, pools);
               }}
             />

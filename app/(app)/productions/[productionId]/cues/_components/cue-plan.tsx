@@ -35,7 +35,7 @@ export function CuePlan({ productionId, stage, show, index, cueLabel }: { produc
     <Card title="The look on the plan">
       <p className="mb-2 text-xs text-muted">
         {cueLabel ? `${cueLabel}: ` : ""}
-        {lit} of {pools.length} pools lit. Brighter = higher level, overlaps add up; dashed outlines are at 0. Audience at the bottom.
+        {lit} of {pools.length} pools lit, labelled channel · level. Brighter = higher level and overlaps add up (scaled so the busiest spot stays short of white); dashed outlines are at 0. Audience at the bottom.
       </p>
       <CuePlanCanvas pools={pools} stage={stage} />
     </Card>
