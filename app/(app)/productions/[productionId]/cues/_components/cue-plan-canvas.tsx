@@ -2,13 +2,14 @@
 
 import { useEffect, useMemo, useRef, useState } from "react";
 import { Layer, Stage } from "react-konva";
-import type { Ellipse, PlanePool, Point } from "@/lib/optics";
+import type { PlanePool, Point } from "@/lib/optics";
+import { lookExposure } from "@/lib/cues/look-exposure";
 import { PlanShape } from "@/components/plot/plan-shape";
 import { readPalette, type PlotPalette } from "@/components/plot/palette";
 import { drawStageOutline, type Ctx } from "@/components/plot/draw-stage";
 import { drawPool } from "@/components/plot/draw-rig";
 import { extendBounds, stageBounds, stageOutline, type StageSettings } from "@/lib/plot/stage-outline";
-import { fitBounds, planToScreen, type Bounds, type View } from "@/lib/plot/view";
+import { fitBounds, planToScreen, type View } from "@/lib/plot/view";
 
 export type LookPool = { id: number; pool: PlanePool; mark: Point | null; cuts: Array<{ a: Point; b: Point }>; level: number; channel: number | null };
 
@@ -21,35 +22,6 @@ function stagePalette(base: PlotPalette): PlotPalette {
 function litPalette(p: PlotPalette, level: number, exposure: number): PlotPalette {
   const a = (k: number) => Math.min(1, k * level * exposure).toFixed(3);
   return { ...p, poolOuter: `rgba(255,170,90,${a(0.3)})`, poolCore: `rgba(255,200,130,${a(0.3)})`, poolEdge: `rgba(255,200,130,${a(0.25)})` };
-}
-
-function inside(e: Ellipse, x: number, y: number): boolean {
-  const t = (-e.rotationDeg * Math.PI) / 180;
-  const dx = x - e.centre.x;
-  const dy = y - e.centre.y;
-  const u = dx * Math.cos(t) + dy * Math.sin(t);
-  const w = -dx * Math.sin(t) + dy * Math.cos(t);
-  return (u * u) / (e.semiMajor * e.semiMajor) + (w * w) / (e.semiMinor * e.semiMinor) <= 1;
-}
-
-/**
- * Added-up light saturates to white where many pools overlap. The exposure scales every pool alike
- * (so levels stay in proportion within the cue) so that the busiest spot — the largest sum of levels
- * over a coarse grid of the stage — stays just short of white. Sparse looks are never brightened.
- */
-function exposureFor(pools: LookPool[], b: Bounds): number {
-  const lit = pools.filter((p) => p.level > 0 && p.pool.outer);
-  let peak = 0;
-  for (let i = 0; i <= 40; i++) {
-    for (let j = 0; j <= 30; j++) {
-      const x = b.minX + ((b.maxX - b.minX) * i) / 40;
-      const y = b.minY + ((b.maxY - b.minY) * j) / 30;
-      let sum = 0;
-      for (const p of lit) if (inside(p.pool.outer!, x, y)) sum += p.level;
-      peak = Math.max(peak, sum);
-    }
-  }
-  return Math.min(1, 1.8 / Math.max(peak, 1e-6));
 }
 
 function darkPalette(p: PlotPalette): PlotPalette {
@@ -115,7 +87,7 @@ export function CuePlanCanvas({ pools, stage }: { pools: LookPool[]; stage: Stag
   const height = Math.round(Math.min(560, Math.max(260, (width * (bounds.maxY - bounds.minY)) / (bounds.maxX - bounds.minX) + 40)));
   const view = useMemo(() => fitBounds(bounds, { width, height }, 20), [bounds, width, height]);
   const lit = pools.filter((p) => p.level > 0).length;
-  const exposure = useMemo(() => exposureFor(pools, bounds), [pools, bounds]);
+  const exposure = useMemo(() => lookExposure(pools.map((p) => ({ outer: p.pool.outer!, level: p.level })), bounds), [pools, bounds]);
 
   return (
     <div ref={box} className="w-full overflow-hidden rounded-md" data-testid="cue-plan" data-lit={lit} data-exposure={exposure.toFixed(2)} aria-label={`Plan of the look: ${lit} of ${pools.length} pools lit`} role="img">
