@@ -143,6 +143,10 @@ async function up(qi) {
   });
   const seen = new Set();
   await qi.bulkInsert("cue_levels", levels.filter((l) => { const key = `${l.cue_id}:${l.channel}`; if (seen.has(key)) return false; seen.add(key); return true; }));
+  // Cue 7 (Lightning) flashes three of its channels in a part of their own: snap up, slower fade out.
+  const lightning = cueRows[8];
+  const flash = [...new Set(levels.filter((l) => l.cue_id === lightning.id).map((l) => l.channel))].slice(0, 3);
+  await qi.bulkInsert("cue_parts", [{ cue_id: lightning.id, part: 2, label: "flash", up_time: 0, down_time: 1.5, delay: 0.5, channels: JSON.stringify(flash), ...stamp }]);
 }
 
 async function down(qi) {

@@ -68,7 +68,7 @@ export function CueListTable({ productionId, cues, selectedId, onSelect }: { pro
             ))}
           </fieldset>
         </details>
-        {view.sorting.length ? <button type="button" className="text-sm text-accent underline" onClick={() => table.resetSorting()}>Back to running order</button> : null}
+        {view.sorting.length ? <button type="button" className="text-sm text-accent underline" onClick={() => table.resetSorting()}>Back to cue order</button> : null}
         <span className="text-xs text-muted" role="status">{rows.length === cues.length ? `${cues.length} cues` : `${rows.length} of ${cues.length} cues`}</span>
       </div>
       <div ref={virtual.ref} onScroll={virtual.onScroll} className="max-h-72 overflow-auto rounded-lg border border-line bg-surface" data-testid="cue-list-scroll">
