@@ -15,28 +15,22 @@ const pct = (xs: number[], p: number) => {
 };
 const ms = (n: number) => `${n.toFixed(1)} ms`;
 
+// Page scripts are strings: tsx's name-keeping helper (__name) does not exist inside the page.
+const START_RECORDING = `(() => {
+  window.__plotDrawMs = []; window.__frames = []; window.__stop = false;
+  let last = performance.now();
+  function tick(t) { window.__frames.push(t - last); last = t; if (!window.__stop) requestAnimationFrame(tick); }
+  requestAnimationFrame(tick);
+})()`;
+const STOP_RECORDING = `(() => { window.__stop = true; return { frames: window.__frames.slice(1), draws: window.__plotDrawMs.slice() }; })()`;
+const AFTER_TWO_FRAMES = `new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(() => r(performance.now()))))`;
+
 async function startRecording(page: Page) {
-  await page.evaluate(() => {
-    const w = window as unknown as { __plotDrawMs: number[]; __frames: number[]; __stop: boolean };
-    w.__plotDrawMs = [];
-    w.__frames = [];
-    w.__stop = false;
-    let last = performance.now();
-    const tick = (t: number) => {
-      w.__frames.push(t - last);
-      last = t;
-      if (!w.__stop) requestAnimationFrame(tick);
-    };
-    requestAnimationFrame(tick);
-  });
+  await page.evaluate(START_RECORDING);
 }
 
 async function stopRecording(page: Page) {
-  return page.evaluate(() => {
-    const w = window as unknown as { __plotDrawMs: number[]; __frames: number[]; __stop: boolean };
-    w.__stop = true;
-    return { frames: w.__frames.slice(1), draws: w.__plotDrawMs.slice() };
-  });
+  return (await page.evaluate(STOP_RECORDING)) as { frames: number[]; draws: number[] };
 }
 
 async function canvasBox(page: Page) {
@@ -63,6 +57,8 @@ async function panAndZoom(page: Page, seconds: number) {
 async function dragMark(page: Page, productionId: number, seconds: number) {
   const data = await (await page.request.get(`/api/productions/${productionId}/plot`)).json();
   const f = data.fixtures.find((x: { focusPointId: number | null; positionName: string; computed: { focus: unknown } }) => x.focusPointId === null && x.computed.focus && x.positionName.startsWith("Pipe 2"));
+  await page.getByRole("button", { name: "Fit to stage" }).click(); // the pan may have left the unit off screen
+  await page.evaluate(AFTER_TWO_FRAMES);
   const { box, view } = await canvasBox(page);
   const at = (p: { x: number; y: number }) => ({ x: box.x + view.ox + view.scale * p.x, y: box.y + view.oy - view.scale * p.y });
   const s = at(f);
@@ -101,7 +97,7 @@ async function main() {
       await page.locator("[data-testid=plot-canvas][data-view]").waitFor();
       await page.goto(`/productions/${productionId}/plot`);
       await page.locator("[data-testid=plot-canvas][data-view]").waitFor();
-      const firstDraw = await page.evaluate(() => new Promise<number>((r) => requestAnimationFrame(() => requestAnimationFrame(() => r(performance.now())))));
+      const firstDraw = (await page.evaluate(AFTER_TWO_FRAMES)) as number;
       await startRecording(page);
       await panAndZoom(page, 5);
       const pan = await stopRecording(page);

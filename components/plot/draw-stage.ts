@@ -50,7 +50,9 @@ export function drawStageOutline(ctx: Ctx, v: View, o: StageOutline, pal: PlotPa
     if (!poly.length) continue;
     ctx.beginPath();
     path(ctx, v, poly);
+    ctx.globalAlpha = 0.55; // the groundplan underneath must show through the deck
     ctx.fill();
+    ctx.globalAlpha = 1;
     ctx.stroke();
   }
   ctx.fillStyle = pal.muted;

@@ -65,7 +65,7 @@ describe("the designer works the plot", () => {
     await page.getByTestId("underlay-info").filter({ hasText: "1 px = 0.05 m" }).waitFor();
     const calibrated = (await plotData(page)).underlays[0];
     expect(calibrated.metresPerPixel).toBeCloseTo(0.05, 2); // 10 m over the picked 200 px, within a pixel of picking
-    await page.getByTestId("underlay-lock").check();
+    await page.getByTestId("underlay-lock").click(); // saved first, then shown checked
     await page.getByTestId("underlay-info").filter({ hasText: "locked" }).waitFor();
 
     // A new pipe near the back of the stage.

@@ -138,7 +138,7 @@ export default function PlotCanvas(props: PlotCanvasProps) {
     if (!pal) return;
     ctx.fillStyle = pal.canvas;
     ctx.fillRect(0, 0, sz.width, sz.height);
-    if (p.layers.underlay && u && image.current) drawUnderlay(ctx, view.current, image.current, u);
+    if (p.layers.underlay && u && image.current) drawUnderlay(ctx, view.current, image.current, u, pal.dark);
   }, []);
 
   const drawBase = useCallback((ctx: Ctx) => {
