@@ -1,5 +1,5 @@
-// Benchmark for rig import and export (issue 5). Needs DATABASE_URL (a migrated MariaDB, e.g. from
-// `node scripts/start.mjs --db-only`). For 100, 1,500 and 5,000 rows: the full import (parse, map,
+// Benchmark for rig import and export (issue 5). Uses DATABASE_URL when set; otherwise it starts a
+// throwaway MariaDB (scripts/lib/mariadb.mjs), migrates and seeds it, and removes it afterwards. For 100, 1,500 and 5,000 rows: the full import (parse, map,
 // validate with zod, plan, one-transaction write with change records) from .csv and from .xlsx, against
 // a raw batched INSERT of the same fixture rows through the mariadb driver; and export to .xlsx.
 // Run with `npm run bench:import`; figures go to docs/benchmarks.md under "Import and export".
@@ -7,14 +7,15 @@ import os from "node:os";
 import { performance } from "node:perf_hooks";
 import * as mariadb from "mariadb";
 import { getDb } from "../models";
-import { commitImport } from "../lib/data/import";
+import { commitImport, type Progress } from "../lib/data/import";
 import { exportRig } from "../lib/data/rig-export";
+import { ensureDatabase, stopAll } from "./support/cues-env";
 import { writeCsv } from "../lib/io/csv-write";
 import { writeXlsx } from "../lib/io/xlsx-write";
 import type { SheetOut } from "../lib/io/sheet";
 import { unitSortKey } from "../lib/rig/unit-number";
 
-const SIZES = [100, 1500, 5000];
+const SIZES = process.env.BENCH_SIZES ? process.env.BENCH_SIZES.split(",").map(Number) : [100, 1500, 5000];
 const POSITIONS = 10;
 const designer = { role: "designer" as const, isOwner: true };
 
@@ -53,8 +54,8 @@ async function rawInsert(pool: mariadb.Pool, sheet: SheetOut, target: { producti
 }
 
 async function main() {
-  const url = process.env.DATABASE_URL;
-  if (!url) throw new Error("Set DATABASE_URL (for example from `node scripts/start.mjs --db-only`).");
+  if ((await ensureDatabase()) === "unavailable") return;
+  const url = process.env.DATABASE_URL!;
   const u = new URL(url);
   const pool = mariadb.createPool({ host: u.hostname, port: Number(u.port), user: decodeURIComponent(u.username), password: decodeURIComponent(u.password), database: u.pathname.slice(1), connectionLimit: 2 });
   const { User } = getDb();
@@ -67,6 +68,7 @@ async function main() {
     const t = await freshProduction(user.id, "warm");
     await commitImport({ productionId: t.productionId, member: designer, userId: user.id, request: { bytes: Buffer.from(writeCsv(warm)), fileName: "w.csv", createMissing: false } });
   }
+  const stages: string[] = [];
   for (const n of SIZES) {
     const sheet = rows(n);
     const csv = Buffer.from(writeCsv(sheet));
@@ -75,9 +77,15 @@ async function main() {
     const timeImport = async (bytes: Uint8Array, name: string) => {
       const t = await freshProduction(user.id, `${name} ${n}`);
       const t0 = performance.now();
-      const r = await commitImport({ productionId: t.productionId, member: designer, userId: user.id, request: { bytes, fileName: name, createMissing: false } });
+      // Time of the first report of each stage, so the split read / check / write can be printed.
+      const marks = new Map<string, number>();
+      const progress: Progress = (stage) => void (marks.has(stage) || marks.set(stage, performance.now() - t0));
+      const r = await commitImport({ productionId: t.productionId, member: designer, userId: user.id, request: { bytes, fileName: name, createMissing: false }, progress });
       if (r.counts.create !== n) throw new Error(`expected ${n} creates, got ${JSON.stringify(r.counts)}`);
-      return { ms: performance.now() - t0, productionId: t.productionId };
+      const ms = performance.now() - t0;
+      const at = (s: string) => marks.get(s) ?? ms;
+      stages.push(`  ${name} ${n}: read ${(at("checking") - at("reading")).toFixed(0)} ms, check ${(at("writing") - at("checking")).toFixed(0)} ms, write ${(ms - at("writing")).toFixed(0)} ms`);
+      return { ms, productionId: t.productionId };
     };
     const c = await timeImport(csv, "rig.csv");
     const x = await timeImport(xlsx, "rig.xlsx");
@@ -87,11 +95,15 @@ async function main() {
     const f = (ms: number) => `${ms.toFixed(0)} ms`;
     console.log(`${n} | ${f(raw)} | ${f(c.ms)} (${(c.ms / raw).toFixed(1)}×) | ${f(x.ms)} (${(x.ms / raw).toFixed(1)}×) | ${f(exportMs)} (${(out.body.length / 1024).toFixed(0)} KB)`);
   }
+  console.log("stages (first report of each stage; 'write' includes saving the mapping):");
+  for (const line of stages) console.log(line);
   await pool.end();
   await getDb().sequelize.close();
+  await stopAll();
 }
 
-main().catch((err) => {
+main().catch(async (err) => {
   console.error(err);
+  await stopAll();
   process.exit(1);
 });

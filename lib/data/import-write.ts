@@ -1,5 +1,5 @@
 import "server-only";
-import { literal, type Transaction } from "sequelize";
+import type { Transaction } from "sequelize";
 import { getDb, type Fixture } from "@/models";
 import { AppError } from "@/lib/errors";
 import { unitSortKey } from "@/lib/rig/unit-number";
@@ -7,9 +7,10 @@ import { STARTER_TYPES } from "@/lib/rig/starter-types";
 import type { PositionKind } from "@/lib/rig/position-kinds";
 import type { ImportPlanResult } from "@/lib/rig/import-plan";
 import { toFixtureRecord } from "./fixtures";
+import { batchInsert } from "./batch-insert";
 import type { Progress } from "./import";
 
-const CHUNK = 1000;
+const CHUNK = 500;
 const lower = (s: string) => s.trim().toLowerCase();
 
 // A position named in a file carries no geometry: it is drawn as a 10 m line (or a point for booms and
@@ -57,13 +58,60 @@ const EMPTY = {
   notes: null, focusNotes: null, focusedAt: null, focusedBy: null, aim: "deck" as const, hung: false, focused: false,
 };
 
+type UpdatePlan = Extract<ImportPlanResult["plans"][number], { action: "update" }>;
+
+// Updates of one chunk as a single statement: each changed column is a CASE over the ids, the version
+// goes up by one, and the WHERE keeps optimistic locking (each id only at the version that was checked).
+// Every matched row changes (its version), so affected rows = matched rows; fewer means someone else wrote.
+async function updateChunk(productionId: number, chunk: UpdatePlan[], transaction: Transaction) {
+  const { sequelize } = getDb();
+  const attrs = [...new Set(chunk.flatMap((u) => Object.keys(withSort(u.changes))))];
+  const q = (name: string) => sequelize.getQueryInterface().quoteIdentifier(name);
+  const replacements: unknown[] = [];
+  const sets = attrs.map((attr) => {
+    const whens = chunk.flatMap((u) => {
+      const changes = withSort(u.changes);
+      if (!(attr in changes)) return [];
+      replacements.push(u.fixtureId, changes[attr]);
+      return ["WHEN ? THEN ?"];
+    });
+    return `${q(fieldOf(attr))} = CASE id ${whens.join(" ")} ELSE ${q(fieldOf(attr))} END`;
+  });
+  const versionWhens = chunk.map((u) => (replacements.push(u.fixtureId, u.version), "WHEN ? THEN ?")).join(" ");
+  replacements.push(productionId, ...chunk.map((u) => u.fixtureId));
+  const sql = `UPDATE fixtures SET ${[...sets, "version = version + 1", "updated_at = NOW()"].join(", ")} WHERE version = CASE id ${versionWhens} END AND production_id = ? AND id IN (${chunk.map(() => "?").join(",")})`;
+  const [, meta] = await sequelize.query(sql, { replacements: replacements.map(dbValue), transaction });
+  const affected = (meta as { affectedRows?: number })?.affectedRows ?? Number(meta);
+  if (affected !== chunk.length) {
+    throw new AppError("conflict", `Nothing was imported: a fixture in rows ${chunk[0].rowNumber}–${chunk[chunk.length - 1].rowNumber} was changed by someone else while the file was being checked. Check the file again.`);
+  }
+}
+
+const fieldOf = (attr: string) => (getDb().Fixture.getAttributes() as Record<string, { field?: string }>)[attr]?.field ?? attr;
+
+async function idsByUnit(productionId: number, transaction: Transaction) {
+  const found = await getDb().Fixture.findAll({ where: { productionId }, attributes: ["id", "positionId", "unitNumber"], raw: true, transaction });
+  return new Map(found.map((f) => [`${f.positionId}|${lower(f.unitNumber)}`, f.id]));
+}
+
+// Change records go through the driver's batch too: one per fixture, as recordChange would write them.
+async function insertChanges(changes: Array<Record<string, unknown>>, transaction: Transaction) {
+  const columns = ["production_id", "user_id", "entity", "entity_id", "action", "before", "after"];
+  const rows = changes.map((c) => [c.productionId, c.userId, c.entity, c.entityId, c.action, c.before, c.after]);
+  await batchInsert(transaction, "change_entries", columns, rows, { created_at: "NOW()" });
+}
+
+const withSort = (changes: Record<string, unknown>) => (changes.unitNumber ? { ...changes, unitSort: unitSortKey(String(changes.unitNumber)) } : changes);
+const dbValue = (v: unknown) => (typeof v === "boolean" ? Number(v) : v === undefined ? null : v);
+
 /** Writes a checked plan in one transaction: every row lands, or (on any error) none does. */
 export async function writeImport({ productionId, userId, plan, progress }: { productionId: number; userId: number; plan: ImportPlanResult; progress?: Progress }) {
-  const { sequelize, Fixture, Position, ChangeEntry } = getDb();
+  const { sequelize, Position } = getDb();
   const creates = plan.plans.filter((p) => p.action === "create");
-  const updates = plan.plans.filter((p) => p.action === "update");
+  const updates = plan.plans.filter((p): p is UpdatePlan => p.action === "update");
   const total = creates.length + updates.length;
   let done = 0;
+  progress?.("writing", 0, total);
   await sequelize.transaction(async (transaction) => {
     const newPositions = plan.newPositions.length ? await createPositions(productionId, plan.newPositions, transaction) : new Map();
     const newTypes = plan.newTypes.length ? await createTypes(productionId, plan.newTypes, transaction) : new Map<string, number>();
@@ -81,25 +129,38 @@ export async function writeImport({ productionId, userId, plan, progress }: { pr
       return { ...EMPTY, ...v, positionId, fixtureTypeId, x, y, productionId, unitNumber: String(v.unitNumber), unitSort: unitSortKey(String(v.unitNumber)) };
     });
     const changes: Array<Record<string, unknown>> = [];
+    const writeChanges = () => insertChanges(changes.splice(0), transaction);
+    // Every attribute any new row sets (the rest take their column default); names as in the table.
+    const attrs = [...new Set(rows.flatMap((r) => Object.keys(r)))];
+    const fields = attrs.map(fieldOf);
+    const now = new Date();
     for (let i = 0; i < rows.length; i += CHUNK) {
-      const created = await Fixture.bulkCreate(rows.slice(i, i + CHUNK) as never[], { transaction, returning: false });
-      for (const f of created) changes.push({ productionId, userId, entity: "fixture", entityId: f.id, action: "create", before: null, after: toFixtureRecord(f) });
-      done += created.length;
+      const chunk = rows.slice(i, i + CHUNK);
+      await batchInsert(transaction, "fixtures", fields, chunk.map((r) => attrs.map((a) => (r as Record<string, unknown>)[a])), { version: "1", created_at: "NOW()", updated_at: "NOW()" });
+      done += chunk.length;
       progress?.("writing", done, total);
     }
-
-    for (const u of updates) {
-      if (u.action !== "update") continue;
-      const [count] = await Fixture.update({ ...u.changes, ...(u.changes.unitNumber ? { unitSort: unitSortKey(String(u.changes.unitNumber)) } : {}), version: literal("version + 1") } as never, {
-        where: { productionId, id: u.fixtureId, version: u.version },
-        transaction,
-      });
-      if (count === 0) throw new AppError("conflict", `Nothing was imported: the fixture in row ${u.rowNumber} was changed by someone else while the file was being checked. Check the file again.`);
-      const before = toFixtureRecord(u.before as unknown as Fixture);
-      changes.push({ productionId, userId, entity: "fixture", entityId: u.fixtureId, action: "update", before, after: { ...before, ...u.changes, version: u.version + 1 } });
-      if (++done % 250 === 0) progress?.("writing", done, total);
+    if (rows.length) {
+      // Read back only the ids (position + unit number is unique), not whole fixtures, for the change records.
+      const ids = await idsByUnit(productionId, transaction);
+      for (const r of rows) {
+        const id = ids.get(`${r.positionId}|${lower(r.unitNumber)}`)!;
+        changes.push({ productionId, userId, entity: "fixture", entityId: id, action: "create", before: null, after: toFixtureRecord({ ...r, id, version: 1, updatedAt: now } as unknown as Fixture) });
+        if (changes.length >= CHUNK) await writeChanges();
+      }
+      await writeChanges();
     }
-    for (let i = 0; i < changes.length; i += CHUNK) await ChangeEntry.bulkCreate(changes.slice(i, i + CHUNK) as never[], { transaction });
+    for (let i = 0; i < updates.length; i += CHUNK) {
+      const chunk = updates.slice(i, i + CHUNK);
+      await updateChunk(productionId, chunk, transaction);
+      for (const u of chunk) {
+        const before = toFixtureRecord(u.before as unknown as Fixture);
+        changes.push({ productionId, userId, entity: "fixture", entityId: u.fixtureId, action: "update", before, after: { ...before, ...u.changes, version: u.version + 1 } });
+      }
+      await writeChanges();
+      done += chunk.length;
+      progress?.("writing", done, total);
+    }
   });
   progress?.("writing", total, total);
 }

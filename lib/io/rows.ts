@@ -91,30 +91,50 @@ function cellSchema(key: ImportKey, unit: LengthUnit, decimalComma: boolean): z.
   }
 }
 
+type CellResult = { ok: true; value: unknown } | { ok: false; messages: string[] };
+type Column = { key: ImportKey; index: number; header: string; check: (text: string) => CellResult };
+
+// Each column's zod schema is built once; a cell's result depends only on its text, so results are
+// remembered per column. Real rigs repeat positions, types, colours and yes/no on every row, so most
+// cells are checked once per distinct text (the speed goal of issue 5) with the very same rules.
+const MEMO_LIMIT = 20_000;
+function columnChecker(schema: z.ZodType<unknown, string>): (text: string) => CellResult {
+  const memo = new Map<string, CellResult>();
+  return (text) => {
+    const hit = memo.get(text);
+    if (hit) return hit;
+    const parsed = schema.safeParse(text);
+    const result: CellResult = parsed.success ? { ok: true, value: parsed.data } : { ok: false, messages: parsed.error.issues.map((i) => i.message) };
+    if (memo.size < MEMO_LIMIT) memo.set(text, result);
+    return result;
+  };
+}
+
 /** Validates every data row; errors name the row number and the file's own column header. */
 export function validateRows(table: RawTable, mapping: ColumnTarget[], opts: { lengthUnit: LengthUnit }): { rows: ParsedRow[]; errors: RowError[] } {
-  const columns = mapping.flatMap((key, index) => (key === "ignore" ? [] : [{ key, index, header: table.headers[index] }]));
-  const shape: Record<string, z.ZodType> = {};
-  for (const c of columns) shape[c.key] = cellSchema(c.key, headerUnit(c.header) ?? opts.lengthUnit, table.decimalComma);
-  const rowSchema = z.object(shape);
-  const headerOf = new Map(columns.map((c) => [c.key as string, c.header]));
+  const columns: Column[] = mapping.flatMap((key, index) =>
+    key === "ignore" ? [] : [{ key, index, header: table.headers[index], check: columnChecker(cellSchema(key, headerUnit(table.headers[index]) ?? opts.lengthUnit, table.decimalComma)) }],
+  );
+  const unitHeader = columns.find((c) => c.key === "unitNumber")?.header ?? "Unit";
 
   const rows: ParsedRow[] = [];
   const errors: RowError[] = [];
   const seen = new Map<string, number>();
   for (const raw of table.rows) {
-    const input: Record<string, string> = {};
-    for (const c of columns) input[c.key] = raw.cells[c.index] ?? "";
-    const parsed = rowSchema.safeParse(input);
-    if (!parsed.success) {
-      for (const issue of parsed.error.issues) errors.push({ row: raw.rowNumber, column: headerOf.get(String(issue.path[0])) ?? "(row)", message: issue.message });
-      continue;
+    const values: RowValues = {};
+    let bad = false;
+    for (const c of columns) {
+      const result = c.check(raw.cells[c.index] ?? "");
+      if (!result.ok) {
+        bad = true;
+        for (const message of result.messages) errors.push({ row: raw.rowNumber, column: c.header, message });
+      } else if (result.value !== undefined) values[c.key] = result.value as RowValues[ImportKey];
     }
-    const values = parsed.data as RowValues;
+    if (bad) continue;
     const key = `${String(values.position).toLowerCase()}|${String(values.unitNumber).toLowerCase()}`;
     const first = seen.get(key);
     if (first !== undefined) {
-      errors.push({ row: raw.rowNumber, column: headerOf.get("unitNumber")!, message: `Unit ${values.unitNumber} on ${values.position} is already in row ${first}` });
+      errors.push({ row: raw.rowNumber, column: unitHeader, message: `Unit ${values.unitNumber} on ${values.position} is already in row ${first}` });
       continue;
     }
     seen.set(key, raw.rowNumber);
