@@ -32,24 +32,24 @@ export const CHART_CSS = `
 .fc-none{color:var(--fc-muted);font-style:italic;display:inline;margin:0}
 .fc-warn-text{margin:0;color:var(--caution,#8a6100)}
 .fc-diagram{width:100%;height:auto;max-height:100%;aspect-ratio:1;border:1px solid var(--fc-line);border-radius:4px}
-.fc-diagram line,.fc-diagram path,.fc-diagram circle{vector-effect:non-scaling-stroke}
 .fc-bg{fill:var(--fc-surface)}
-.fc-lm{stroke:var(--fc-muted);stroke-width:1;stroke-dasharray:6 3;opacity:.8}
+.fc-lm{stroke:var(--fc-muted);stroke-width:calc(var(--u) * 1);stroke-dasharray:calc(var(--u) * 12) calc(var(--u) * 6);opacity:.8}
 .fc-lm-label,.fc-muted{fill:var(--fc-muted)}
 .fc-band{fill:rgba(226,160,52,.32);stroke:none}
 .fc-core{fill:rgba(236,178,60,.78);stroke:none}
-.fc-outline{fill:none;stroke:rgba(180,110,20,.9);stroke-width:1.2;stroke-dasharray:3 2}
-.fc-cut{stroke:var(--fc-accent);stroke-width:2}
+.fc-outline{fill:none;stroke:rgba(180,110,20,.9);stroke-width:calc(var(--u) * 1.2);stroke-dasharray:calc(var(--u) * 7) calc(var(--u) * 4)}
+.fc-cut{stroke:var(--fc-accent);stroke-width:calc(var(--u) * 2)}
 .fc-cut-label{fill:var(--fc-accent);font-weight:600}
-.fc-arrow{stroke:var(--fc-ink);stroke-width:1.6}
+.fc-arrow{stroke:var(--fc-ink);stroke-width:calc(var(--u) * 1.6)}
 .fc-arrow-head{fill:var(--fc-ink)}
-.fc-arrow-down{fill:none;stroke:var(--fc-ink);stroke-width:1.4}
-.fc-mark{fill:var(--fc-surface);stroke:var(--fc-ink);stroke-width:1.4}
-.fc-mark-cross{stroke:var(--fc-ink);stroke-width:1}
+.fc-arrow-down{fill:none;stroke:var(--fc-ink);stroke-width:calc(var(--u) * 1.4)}
+.fc-mark{fill:var(--fc-surface);stroke:var(--fc-ink);stroke-width:calc(var(--u) * 1.4)}
+.fc-mark-cross{stroke:var(--fc-ink);stroke-width:calc(var(--u) * 1)}
 .fc-mark-label{fill:var(--fc-ink);font-weight:600}
 .fc-warn{fill:var(--danger,#b3261e)}
 .fc-screen .fc-card{font-size:13px}
 .fc-screen .fc-figure{max-width:340px}
+/* Dashes are long on purpose: the PDF writer draws every dash as its own stroke, and short ones doubled the file. */
 /* Printed sheets: fixed boxes, one grid a page, never a chart across two pages. */
 .fc-sheet{box-sizing:border-box;display:flex;flex-direction:column;overflow:hidden;break-after:page;page-break-after:always;
   font-family:"IBM Plex Sans",system-ui,sans-serif;color:#000;background:#fff}

@@ -2,7 +2,7 @@
 // near the mark, the mark, the deck pool's outer and core edges with the soft band shaded between them, the
 // shutter cuts, an arrow for the direction the light comes from, and a scale bar. One string serves the
 // screen, the browser's print and the server's PDF, so all three show the same drawing.
-import { clipPoolByCuts, ellipseBounds, ellipseToPolygon, formatLength, METRES_PER_FOOT, type Point, type Units } from "@/lib/optics";
+import { clipPoolByCuts, ellipseBounds, ellipseToPolygon, formatLength, METRES_PER_FOOT, type Ellipse, type Point, type Units } from "@/lib/optics";
 import type { FixtureDto } from "@/lib/data/fixtures";
 import type { Landmark } from "./landmarks";
 import { escapeHtml } from "./escape";
@@ -22,6 +22,15 @@ const fmt = (v: number) => (Math.round(v * 1000) / 1000).toString();
 /** Plan to SVG: y upstage is up on the page. */
 const pt = (p: Point) => `${fmt(p.x)},${fmt(-p.y)}`;
 const path = (poly: Point[]) => (poly.length ? `M${poly.map(pt).join("L")}Z` : "");
+const CUT_POINTS = 48;
+
+/** A plan ellipse as an SVG <ellipse>: the page's y runs down, so the plan's rotation turns the other way. */
+function ellipseEl(e: Ellipse, cls: string): string {
+  const cx = fmt(e.centre.x);
+  const cy = fmt(-e.centre.y);
+  const rot = e.rotationDeg ? ` transform="rotate(${fmt(-e.rotationDeg)} ${cx} ${cy})"` : "";
+  return `<ellipse cx="${cx}" cy="${cy}" rx="${fmt(e.semiMajor)}" ry="${fmt(e.semiMinor)}"${rot} class="${cls}"/>`;
+}
 
 function viewBox(mark: Point, outer: { minX: number; minY: number; maxX: number; maxY: number } | null): Box {
   const b = outer ?? { minX: mark.x, minY: mark.y, maxX: mark.x, maxY: mark.y };
@@ -41,8 +50,32 @@ function scaleLength(span: number, units: Units): number {
   return Math.max(step * pow, units === "imperial" ? 1 : 0) * unit;
 }
 
+/** The part of segment a–b inside the box (Liang–Barsky), or null: a stage line drawn past the view
+ * would still be dashed all along its length in the PDF. */
+export function clipSegment(a: Point, b: Point, box: Box): [Point, Point] | null {
+  const d = { x: b.x - a.x, y: b.y - a.y };
+  let t0 = 0;
+  let t1 = 1;
+  const edges: Array<[number, number]> = [[-d.x, a.x - box.minX], [d.x, box.maxX - a.x], [-d.y, a.y - box.minY], [d.y, box.maxY - a.y]];
+  for (const [p, q] of edges) {
+    if (p === 0) {
+      if (q < 0) return null;
+      continue;
+    }
+    const t = q / p;
+    if (p < 0) t0 = Math.max(t0, t);
+    else t1 = Math.min(t1, t);
+    if (t0 > t1) return null;
+  }
+  return [{ x: a.x + d.x * t0, y: a.y + d.y * t0 }, { x: a.x + d.x * t1, y: a.y + d.y * t1 }];
+}
+
 function landmarkLines(landmarks: Landmark[], box: Box, text: number): string {
   return landmarks
+    .flatMap((l) => {
+      const seg = clipSegment(l.a, l.b, box);
+      return seg ? [{ ...l, a: seg[0], b: seg[1] }] : [];
+    })
     .map((l) => {
       const mid = { x: Math.min(Math.max((l.a.x + l.b.x) / 2, box.minX + text * 3), box.maxX - text * 3), y: (l.a.y + l.b.y) / 2 };
       const vertical = Math.abs(l.b.x - l.a.x) < Math.abs(l.b.y - l.a.y);
@@ -77,16 +110,20 @@ export function diagramSvg(i: DiagramInput): string {
 
   let poolSvg = "";
   if (pool?.outer) {
-    let outer: Point[] = ellipseToPolygon(pool.outer);
-    let core: Point[] = pool.core ? ellipseToPolygon(pool.core) : [];
-    try {
-      outer = clipPoolByCuts(outer, cuts, mark);
-      core = core.length ? clipPoolByCuts(core, cuts, mark) : [];
-    } catch {
-      /* a cut through the mark is reported on the chart; draw the uncut pool */
+    // Uncut pools are drawn as <ellipse> elements (a few bytes each, cheap to print); only a pool the
+    // shutters cut becomes polygons, with fewer points than the optics default, which is plenty at this size.
+    let band = ellipseEl(pool.outer, "fc-band");
+    let core = pool.core ? ellipseEl(pool.core, "fc-core") : "";
+    if (cuts.length) {
+      try {
+        band = `<path d="${path(clipPoolByCuts(ellipseToPolygon(pool.outer, CUT_POINTS), cuts, mark))}" class="fc-band"/>`;
+        const clippedCore = pool.core ? clipPoolByCuts(ellipseToPolygon(pool.core, CUT_POINTS), cuts, mark) : [];
+        core = clippedCore.length ? `<path d="${path(clippedCore)}" class="fc-core"/>` : "";
+      } catch {
+        /* a cut through the mark is reported on the chart; draw the uncut pool */
+      }
     }
-    poolSvg = `<path d="${path(outer)}" class="fc-band"/>${core.length ? `<path d="${path(core)}" class="fc-core"/>` : ""}` +
-      `<path d="${path(ellipseToPolygon(pool.outer))}" class="fc-outline"/>`;
+    poolSvg = band + core + ellipseEl(pool.outer, "fc-outline");
   }
 
   const cutSvg = cuts
@@ -131,7 +168,9 @@ export function diagramSvg(i: DiagramInput): string {
   const open = `<text x="${fmt(box.minX + text)}" y="${fmt(-box.maxY + text * 1.4)}" font-size="${fmt(text)}" class="${pool ? "fc-muted" : "fc-warn"}">${caption}</text>`;
 
   const vb = `${fmt(box.minX)} ${fmt(-box.maxY)} ${fmt(span)} ${fmt(box.maxY - box.minY)}`;
-  return `<svg class="fc-diagram" viewBox="${vb}" preserveAspectRatio="xMidYMid meet" role="img" aria-label="Pool diagram, to scale, audience at the bottom">` +
+  // Strokes are in plan metres scaled to the view (--u), not non-scaling strokes: those cost Chromium dearly
+  // when printing hundreds of diagrams, and a line a fixed share of the drawing reads the same at any size.
+  return `<svg class="fc-diagram" style="--u:${fmt(span / 250)}px" viewBox="${vb}" preserveAspectRatio="xMidYMid meet" role="img" aria-label="Pool diagram, to scale, audience at the bottom">` +
     `<defs><marker id="fc-head" viewBox="0 0 10 10" refX="8" refY="5" markerWidth="5" markerHeight="5" orient="auto-start-reverse"><path d="M0,0L10,5L0,10z" class="fc-arrow-head"/></marker></defs>` +
     `<rect x="${fmt(box.minX)}" y="${fmt(-box.maxY)}" width="${fmt(span)}" height="${fmt(box.maxY - box.minY)}" class="fc-bg"/>` +
     landmarkLines(i.landmarks, box, text * 0.85) + poolSvg + beamCircle + cutSvg + arrow + markSvg + scale + open + `</svg>`;

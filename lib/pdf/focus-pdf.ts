@@ -7,6 +7,7 @@ import { CHART_CSS, sheetCss } from "@/lib/focus/chart-css";
 import { escapeHtml } from "@/lib/focus/escape";
 import { PAPER, type Paper } from "@/lib/focus/pages";
 import { plexFontFaces } from "./fonts";
+import type { Page } from "playwright-core";
 import { withPage } from "./browser";
 
 /** The whole printable document: fonts, chart styles, the paper's page rule, and the sheets. */
@@ -18,6 +19,8 @@ export function printDocument(o: { title: string; paper: Paper; sheets: string }
 
 const PRINT_TIMEOUT_MS = 120_000;
 export const PART_SHEETS = 40;
+/** Parts printed at once, each in its own page of the browser. */
+const PARALLEL_PARTS = 2;
 
 function footer(text: string, numbered: boolean): string {
   // Chromium fills pageNumber/totalPages itself; in a print made of parts they would restart, so then
@@ -31,29 +34,37 @@ export async function renderPdf(o: { title: string; sheets: string[]; paper: Pap
   const parts: string[][] = [];
   for (let i = 0; i < o.sheets.length; i += PART_SHEETS) parts.push(o.sheets.slice(i, i + PART_SHEETS));
   const m = PAPER[o.paper].marginMm;
+  const print = async (page: Page, part: string[], numbered: boolean) => {
+    page.setDefaultTimeout(PRINT_TIMEOUT_MS);
+    await page.setContent(printDocument({ title: o.title, paper: o.paper, sheets: part.join("") }), { waitUntil: "load" });
+    await page.evaluate(() => document.fonts.ready.then(() => undefined));
+    return page.pdf({
+      format: o.paper,
+      printBackground: true,
+      preferCSSPageSize: true,
+      margin: { top: `${m.top}mm`, right: `${m.side}mm`, bottom: `${m.bottom}mm`, left: `${m.side}mm` },
+      displayHeaderFooter: true,
+      headerTemplate: "<span></span>",
+      footerTemplate: footer(o.footerText, numbered),
+    });
+  };
   const pdfs = await withPage(async (first) => {
-    const out: Uint8Array[] = [];
-    let page = first;
-    for (const [k, part] of parts.entries()) {
-      if (k > 0) {
-        // A fresh page per part lets Chromium drop the previous part's layout.
-        const next = await page.context().newPage();
-        await page.close();
-        page = next;
+    const out: Uint8Array[] = new Array(parts.length);
+    let next = 0;
+    // Two pages of the one browser print alternate parts side by side (a core each on this machine);
+    // a fresh page per part lets Chromium drop the previous part's layout.
+    const worker = async () => {
+      while (next < parts.length) {
+        const k = next++;
+        const page = k === 0 ? first : await first.context().newPage();
+        try {
+          out[k] = await print(page, parts[k], parts.length === 1);
+        } finally {
+          if (page !== first) await page.close();
+        }
       }
-      page.setDefaultTimeout(PRINT_TIMEOUT_MS);
-      await page.setContent(printDocument({ title: o.title, paper: o.paper, sheets: part.join("") }), { waitUntil: "load" });
-      await page.evaluate(() => document.fonts.ready.then(() => undefined));
-      out.push(await page.pdf({
-        format: o.paper,
-        printBackground: true,
-        preferCSSPageSize: true,
-        margin: { top: `${m.top}mm`, right: `${m.side}mm`, bottom: `${m.bottom}mm`, left: `${m.side}mm` },
-        displayHeaderFooter: true,
-        headerTemplate: "<span></span>",
-        footerTemplate: footer(o.footerText, parts.length === 1),
-      }));
-    }
+    };
+    await Promise.all(Array.from({ length: Math.min(PARALLEL_PARTS, parts.length) }, worker));
     return out;
   });
   if (pdfs.length === 1) return Buffer.from(pdfs[0]);

@@ -1,12 +1,12 @@
 import { describe, expect, it } from "vitest";
-import { diagramSvg } from "@/lib/focus/diagram";
+import { clipSegment, diagramSvg } from "@/lib/focus/diagram";
 import { outlineLandmarks } from "@/lib/focus/landmarks";
 import { makeFixture, PRODUCTION } from "./fixture-builder";
 
-/** The x coordinates of the dashed outer outline, in plan metres (the SVG draws 1 unit = 1 m). */
+/** The x extent of the dashed outer outline (an unrotated <ellipse>), in plan metres (1 SVG unit = 1 m). */
 function outlineXs(svg: string): number[] {
-  const d = svg.match(/<path d="M([^"]+)Z" class="fc-outline"\/>/)![1];
-  return d.split("L").map((p) => Number(p.split(",")[0]));
+  const [, cx, rx] = svg.match(/<ellipse cx="([^"]+)" cy="[^"]+" rx="([^"]+)" ry="[^"]+" class="fc-outline"\/>/)!.map(Number);
+  return [cx - rx, cx + rx];
 }
 
 describe("the chart diagram is drawn to scale", () => {
@@ -36,5 +36,19 @@ describe("the chart diagram is drawn to scale", () => {
     const r = Number(svg.match(/<circle cx="[^"]+" cy="[^"]+" r="([^"]+)" class="fc-outline"/)![1]);
     // trigonometry: radius = throw · tan(θ/2), throw = hypot(9.1, 0.7)
     expect(r).toBeCloseTo(Math.hypot(9.1, 0.7) * Math.tan((18 * Math.PI) / 180), 2);
+  });
+});
+
+describe("stage lines are cut to the diagram's view", () => {
+  const box = { minX: 0, minY: 0, maxX: 4, maxY: 4 };
+  it("keeps the part of a long line inside the box", () => {
+    // plane geometry (Liang–Barsky clipping): y = 2 from x −10 to 10 meets the box at x 0 and 4
+    expect(clipSegment({ x: -10, y: 2 }, { x: 10, y: 2 }, box)).toEqual([{ x: 0, y: 2 }, { x: 4, y: 2 }]);
+    // the diagonal y = x from (−2,−2) to (6,6) enters at (0,0) and leaves at (4,4)
+    expect(clipSegment({ x: -2, y: -2 }, { x: 6, y: 6 }, box)).toEqual([{ x: 0, y: 0 }, { x: 4, y: 4 }]);
+  });
+  it("drops a line that misses the box and keeps one wholly inside", () => {
+    expect(clipSegment({ x: -5, y: 5 }, { x: 10, y: 5 }, box)).toBeNull(); // plane geometry: y = 5 is above the box
+    expect(clipSegment({ x: 1, y: 1 }, { x: 3, y: 2 }, box)).toEqual([{ x: 1, y: 1 }, { x: 3, y: 2 }]);
   });
 });
