@@ -59,3 +59,15 @@ export function useAddStarterTypes(productionId: number) {
     onSettled: () => qc.invalidateQueries({ queryKey: productionKeys.fixtureTypes(productionId) }),
   });
 }
+
+/** One type's figures; every fixture's computed values depend on its type, so the fixtures refresh too. */
+export function useUpdateFixtureType(productionId: number) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: async ({ id, patch }: { id: number; patch: Record<string, unknown> }) =>
+      (await apiFetch<{ fixtureType: FixtureTypeDto }>(`/api/productions/${productionId}/fixture-types/${id}`, { method: "PATCH", json: patch })).fixtureType,
+    onSuccess: (type) => qc.setQueryData<FixtureTypeDto[]>(productionKeys.fixtureTypes(productionId), (all) => all?.map((t) => (t.id === type.id ? type : t))),
+    onError: () => qc.invalidateQueries({ queryKey: productionKeys.fixtureTypes(productionId) }),
+    onSettled: () => qc.invalidateQueries({ queryKey: productionKeys.fixtures(productionId) }),
+  });
+}

@@ -1,5 +1,5 @@
 import "server-only";
-import type { Transaction } from "sequelize";
+import { QueryTypes, type Transaction } from "sequelize";
 import { getDb, type Fixture } from "@/models";
 import { AppError } from "@/lib/errors";
 import { unitSortKey } from "@/lib/rig/unit-number";
@@ -80,8 +80,8 @@ async function updateChunk(productionId: number, chunk: UpdatePlan[], transactio
   const versionWhens = chunk.map((u) => (replacements.push(u.fixtureId, u.version), "WHEN ? THEN ?")).join(" ");
   replacements.push(productionId, ...chunk.map((u) => u.fixtureId));
   const sql = `UPDATE fixtures SET ${[...sets, "version = version + 1", "updated_at = NOW()"].join(", ")} WHERE version = CASE id ${versionWhens} END AND production_id = ? AND id IN (${chunk.map(() => "?").join(",")})`;
-  const [, meta] = await sequelize.query(sql, { replacements: replacements.map(dbValue), transaction });
-  const affected = (meta as { affectedRows?: number })?.affectedRows ?? Number(meta);
+  // BULKUPDATE makes Sequelize answer with the number of affected rows.
+  const affected = (await sequelize.query(sql, { replacements: replacements.map(dbValue), transaction, type: QueryTypes.BULKUPDATE })) as unknown as number;
   if (affected !== chunk.length) {
     throw new AppError("conflict", `Nothing was imported: a fixture in rows ${chunk[0].rowNumber}–${chunk[chunk.length - 1].rowNumber} was changed by someone else while the file was being checked. Check the file again.`);
   }

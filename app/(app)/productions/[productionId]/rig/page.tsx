@@ -1,3 +1,4 @@
+import { TYPE_COLUMNS } from "@/lib/rig/type-fields";
 import type { Metadata } from "next";
 import { memberForPage } from "@/lib/auth/page-guards";
 import { can, canEditField } from "@/lib/auth/policy";
@@ -11,6 +12,8 @@ import { isRigViewId } from "@/lib/rig/views";
 import { RigWorkspace } from "./_components/rig-workspace";
 
 export const metadata: Metadata = { title: "Rig" };
+
+const TYPE_FIELDS = TYPE_COLUMNS.flatMap((c) => c.fields as string[]);
 
 // The model attribute behind each editable column (the policy speaks in attributes).
 const ATTRIBUTE: Record<string, string> = { position: "positionId", type: "fixtureTypeId" };
@@ -36,7 +39,7 @@ export default async function RigPage({ params, searchParams }: { params: Promis
       initialTypes={types}
       initialAccessories={accessories}
       positions={positions.map((p) => ({ id: p.id, name: p.name }))}
-      rights={{ editable, canImport: can(member, "rig.import"), canPlot: can(member, "plot.edit"), canElectrics: can(member, "rig.editElectrics") }}
+      rights={{ editable, typeFields: TYPE_FIELDS.filter((f) => canEditField(member, "fixtureType", f)), canImport: can(member, "rig.import"), canPlot: can(member, "plot.edit"), canElectrics: can(member, "rig.editElectrics") }}
     />
   );
 }

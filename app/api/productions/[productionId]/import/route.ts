@@ -5,6 +5,7 @@ import { AppError, fromZodError, toAppError } from "@/lib/errors";
 import { commitImport, getRememberedMapping, previewImport, type ImportRequest } from "@/lib/data/import";
 import { MAX_IMPORT_BYTES } from "@/lib/io/sniff";
 import { IMPORT_FIELDS } from "@/lib/io/fields";
+import { BodyTooLarge, readBoundedBody } from "@/lib/io/bounded-body";
 
 type Ctx = { params: Promise<{ productionId: string }> };
 
@@ -28,10 +29,14 @@ async function readUpload(req: Request): Promise<{ request: ImportRequest; mode:
   const declared = Number(req.headers.get("content-length") ?? 0);
   // The multipart wrapper adds a little; anything far past the cap is refused before it is read.
   if (declared > MAX_IMPORT_BYTES + 256 * 1024) throw new AppError("too_large", `The file is larger than the ${MAX_IMPORT_BYTES / 1048576} MB limit.`, { fieldErrors: { file: ["over the size limit"] } });
+  // Without (or with a false) Content-Length the body is counted as it arrives and cut off at the cap.
+  const tooLarge = () => new AppError("too_large", `The file is larger than the ${MAX_IMPORT_BYTES / 1048576} MB limit.`, { fieldErrors: { file: ["over the size limit"] } });
   let form: FormData;
   try {
-    form = await req.formData();
-  } catch {
+    const body = await readBoundedBody(req, MAX_IMPORT_BYTES + 256 * 1024);
+    form = await new Response(body as BlobPart, { headers: { "content-type": req.headers.get("content-type") ?? "" } }).formData();
+  } catch (err) {
+    if (err instanceof BodyTooLarge) throw tooLarge();
     throw new AppError("bad_request", "Send the file as a multipart form with a field called file.", { fieldErrors: { file: ["no file received"] } });
   }
   const file = form.get("file");

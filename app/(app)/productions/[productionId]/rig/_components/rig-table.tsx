@@ -1,9 +1,9 @@
 "use client";
 
-import { useMemo } from "react";
+import { Fragment, useMemo, useState } from "react";
 import {
   flexRender, getCoreRowModel, getExpandedRowModel, getFilteredRowModel, getGroupedRowModel, getSortedRowModel, useReactTable,
-  type ColumnDef, type GroupingState, type RowSelectionState, type SortingState, type VisibilityState,
+  type ColumnDef, type GroupingState, type Row, type RowSelectionState, type SortingState, type VisibilityState,
 } from "@tanstack/react-table";
 import type { FixtureDto } from "@/lib/data/fixtures";
 import { RIG_COLUMNS, headerWithUnit, type Units } from "@/lib/rig/columns";
@@ -26,12 +26,16 @@ type Props = {
   editable: string[];
   selectable: boolean;
   choices: { position: Choice[]; type: Choice[] };
+  /** Weight of one body by type id: a multi-cell unit is one body to hang, however many cells it has. */
+  typeWeights: Map<number, number>;
   state: TableState;
   onState: (patch: Partial<TableState>) => void;
 };
 
 /** One table of every fixture: stored fields beside computed focus values, sort, filter, group and inline edit. */
-export function RigTable({ fixtures, units, productionId, editable, selectable, choices, state, onState }: Props) {
+export function RigTable({ fixtures, units, productionId, editable, selectable, choices, typeWeights, state, onState }: Props) {
+  const [collapsed, setCollapsed] = useState<Set<string>>(new Set());
+  const bodies = useMemo(() => cellCounts(fixtures), [fixtures]);
   const hangOrder = useMemo(() => {
     const m = new Map<number, number>();
     fixtures.forEach((f) => m.has(f.positionId) || m.set(f.positionId, m.size));
@@ -94,6 +98,17 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
   });
 
   const visibleCount = table.getVisibleLeafColumns().length;
+  const shownBodies = new Set<string>(); // bodies whose heading row is already drawn in this render
+  const renderRow = (row: Row<FixtureDto>, isCell = false) => (
+    <tr key={row.id} data-testid="rig-row" data-cell={isCell ? row.original.cell ?? "" : undefined}
+      className={`border-b border-line/60 align-top hover:bg-raised/50 print:break-inside-avoid ${row.getIsSelected() ? "bg-accent/10" : ""}`}>
+      {row.getVisibleCells().map((cell, i) => (
+        <td key={cell.id} className={`whitespace-nowrap px-2 py-1 ${cell.column.id === "select" ? "print:hidden" : ""} ${isCell && i === 0 ? "border-l-4 border-l-accent/40" : ""}`}>
+          {flexRender(cell.column.columnDef.cell, cell.getContext())}
+        </td>
+      ))}
+    </tr>
+  );
   return (
     <div className="overflow-x-auto rounded-lg border border-line bg-surface print:overflow-visible print:border-0">
       <table className="w-full border-collapse text-sm print:text-[9pt]" data-testid="rig-table">
@@ -129,13 +144,33 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
                 </th>
               </tr>
             ) : (
-              <tr key={row.id} data-testid="rig-row" className={`border-b border-line/60 align-top hover:bg-raised/50 print:break-inside-avoid ${row.getIsSelected() ? "bg-accent/10" : ""}`}>
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className={`whitespace-nowrap px-2 py-1 ${cell.column.id === "select" ? "print:hidden" : ""}`}>
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </td>
-                ))}
-              </tr>
+              <Fragment key={row.id}>
+                {(() => {
+                  const key = bodyOf(row.original);
+                  const cells = key ? (bodies.get(key) ?? 1) : 1;
+                  if (cells < 2) return renderRow(row);
+                  const first = !shownBodies.has(key!);
+                  shownBodies.add(key!);
+                  const open = !collapsed.has(key!);
+                  const toggle = () => setCollapsed((c) => { const n = new Set(c); if (n.has(key!)) n.delete(key!); else n.add(key!); return n; });
+                  return (
+                    <>
+                      {first ? (
+                        <tr className="border-b border-line/60 bg-raised/40" data-testid="rig-body">
+                          <td colSpan={visibleCount} className="px-2 py-1 text-sm">
+                            <button type="button" aria-expanded={open} onClick={toggle} className="inline-flex items-center gap-1 font-semibold hover:text-accent print:pointer-events-none">
+                              <span aria-hidden className="inline-block w-3 print:hidden">{open ? "▾" : "▸"}</span>
+                              Unit {row.original.unitNumber} on {row.original.positionName} · {row.original.typeName}
+                            </button>{" "}
+                            <span className="text-muted">— one body of {cells} cells, {formatKg(typeWeights.get(row.original.fixtureTypeId))} to hang (each cell has its own channel and circuit below)</span>
+                          </td>
+                        </tr>
+                      ) : null}
+                      {open ? renderRow(row, true) : null}
+                    </>
+                  );
+                })()}
+              </Fragment>
             ),
           )}
         </tbody>
@@ -143,4 +178,17 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
       {table.getRowModel().rows.length === 0 ? <p className="p-4 text-sm text-muted">No fixtures match.</p> : null}
     </div>
   );
+}
+
+const bodyOf = (f: FixtureDto) => (f.bodyKey ? `${f.positionId}|${f.bodyKey}` : null);
+const formatKg = (kg: number | undefined) => (kg === undefined ? "weight unknown" : `${kg} kg`);
+
+/** How many cells share each body (position + body key). */
+function cellCounts(fixtures: FixtureDto[]) {
+  const m = new Map<string, number>();
+  for (const f of fixtures) {
+    const key = bodyOf(f);
+    if (key) m.set(key, (m.get(key) ?? 0) + 1);
+  }
+  return m;
 }

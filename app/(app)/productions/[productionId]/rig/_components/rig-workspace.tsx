@@ -16,7 +16,7 @@ import { ImportPanel } from "./import-panel";
 import { StockPanel } from "./stock-panel";
 import { TypesPanel } from "./types-panel";
 
-type Rights = { editable: string[]; canImport: boolean; canPlot: boolean; canElectrics: boolean };
+type Rights = { editable: string[]; typeFields: string[]; canImport: boolean; canPlot: boolean; canElectrics: boolean };
 type Props = {
   productionId: number;
   productionName: string;
@@ -46,6 +46,7 @@ export function RigWorkspace(props: Props) {
   const pathname = usePathname();
   const fixtures = useRigFixtures(productionId, props.initialFixtures).data ?? [];
   const types = useRigTypes(productionId, props.initialTypes).data ?? [];
+  const typeWeights = useMemo(() => new Map(types.map((t) => [t.id, t.weightKg])), [types]);
   const accessories = useRigAccessories(productionId, props.initialAccessories).data ?? [];
   const [view, setView] = useState<RigViewId>(props.initialView);
   const [state, setState] = useState<TableState>(() => stateFor(props.initialView));
@@ -100,7 +101,7 @@ export function RigWorkspace(props: Props) {
       </div>
 
       {panel === "import" ? <ImportPanel productionId={productionId} units={units} onClose={() => setPanel(null)} /> : null}
-      {panel === "types" ? <TypesPanel productionId={productionId} types={types} canAdd={rights.canPlot} units={units} onClose={() => setPanel(null)} /> : null}
+      {panel === "types" ? <TypesPanel productionId={productionId} types={types} canAdd={rights.canPlot} editableFields={rights.typeFields} units={units} onClose={() => setPanel(null)} /> : null}
 
       {view === "stock" ? (
         <StockPanel fixtures={fixtures} types={types} accessories={accessories} />
@@ -113,7 +114,7 @@ export function RigWorkspace(props: Props) {
             {fixtures.length} fixtures. Lengths in {units === "metric" ? "metres" : "feet and inches"}; grey italic columns are computed from the beam model.
             {rights.editable.length ? " Click a value to change it." : " Your role can read the rig but not change it."}
           </p>
-          <RigTable fixtures={fixtures} units={units} productionId={productionId} editable={rights.editable} selectable={bulkAllowed} choices={choices} state={state} onState={(p) => setState((s) => ({ ...s, ...p }))} />
+          <RigTable fixtures={fixtures} units={units} typeWeights={typeWeights} productionId={productionId} editable={rights.editable} selectable={bulkAllowed} choices={choices} state={state} onState={(p) => setState((s) => ({ ...s, ...p }))} />
         </>
       )}
     </main>

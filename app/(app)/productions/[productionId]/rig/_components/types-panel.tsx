@@ -3,29 +3,36 @@
 import { useState } from "react";
 import type { FixtureTypeDto } from "@/lib/data/fixture-types";
 import { STARTER_TYPES } from "@/lib/rig/starter-types";
-import { formatLength } from "@/lib/optics";
+import { TYPE_COLUMNS } from "@/lib/rig/type-fields";
+import { TypeCell } from "./type-cell";
 import type { Units } from "@/lib/rig/columns";
 import { ApiError } from "@/lib/http/api-client";
 import { useAddStarterTypes } from "@/hooks/use-rig";
 import { Button } from "@/components/ui/button";
 
-/** The production's fixture types, and the generic starter shelf the designer can add from. */
-export function TypesPanel({ productionId, types, canAdd, units, onClose }: { productionId: number; types: FixtureTypeDto[]; canAdd: boolean; units: Units; onClose: () => void }) {
+/** The production's fixture types (figures editable per the role table), and the generic starter shelf the designer can add from. */
+export function TypesPanel({ productionId, types, canAdd, editableFields, units, onClose }: { productionId: number; types: FixtureTypeDto[]; canAdd: boolean; editableFields: string[]; units: Units; onClose: () => void }) {
+  const editable = new Set(editableFields);
   const add = useAddStarterTypes(productionId);
   const [message, setMessage] = useState<string | null>(null);
   const have = new Set(types.map((t) => t.name.toLowerCase()));
   return (
     <section className="rounded-lg border border-line bg-surface p-4 print:hidden" aria-label="Fixture types">
       <header className="mb-2 flex items-center justify-between"><h2 className="font-semibold">Fixture types in this production</h2><Button variant="quiet" onClick={onClose}>Close</Button></header>
+      <p className="mb-2 text-xs text-muted" data-testid="types-from-memory">
+        Starter figures are typical values from memory for generic units, not a maker&apos;s data sheet. Check them against your own units; every fixture&apos;s pool and throw follow its type as soon as a figure changes.
+      </p>
       <div className="overflow-x-auto">
         <table className="w-full text-sm">
-          <thead><tr>{["Name", "Family", "Cone", "Softness", "Peak cd", "W", "kg", "DMX modes", "Frame", "Gobo", "Lens drop", "Cells"].map((h) => <th key={h} scope="col" className="border-b border-line py-1 pr-2 text-left text-xs">{h}</th>)}</tr></thead>
+          <thead><tr>{TYPE_COLUMNS.map((c) => <th key={c.key} scope="col" className="border-b border-line py-1 pr-2 text-left text-xs">{c.header}</th>)}</tr></thead>
           <tbody>
             {types.map((t) => (
-              <tr key={t.id} className="border-b border-line/50">
-                <td className="py-1 pr-2">{t.name}</td><td>{t.family}</td><td>{t.coneMinDeg === t.coneMaxDeg ? `${t.coneMinDeg}°` : `${t.coneMinDeg}–${t.coneMaxDeg}°`}</td><td>{t.defaultSoftnessDeg}°</td>
-                <td>{t.peakCandela.toLocaleString()}</td><td>{t.wattage}</td><td>{t.weightKg}</td><td>{t.dmxModes.map((m) => `${m.name} (${m.footprint})`).join(", ")}</td>
-                <td>{t.frameSize ?? "—"}</td><td>{t.goboSize ?? "—"}</td><td>{formatLength(t.lensDropM, units)}</td><td>{t.cells}</td>
+              <tr key={t.id} className="border-b border-line/50 align-top">
+                {TYPE_COLUMNS.map((c) => (
+                  <td key={c.key} className="py-1 pr-2">
+                    <TypeCell productionId={productionId} type={t} column={c} units={units} editable={c.kind !== "readOnly" && c.fields.every((f) => editable.has(f))} />
+                  </td>
+                ))}
               </tr>
             ))}
           </tbody>

@@ -1,0 +1,47 @@
+// The electrician edits a fixture type's wattage in the types table; the cone stays read-only for them.
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { BrowserContext } from "playwright-core";
+import { DEMO, openBrowser, screenshot, signIn } from "./support/browser";
+
+let browser: BrowserContext;
+beforeAll(async () => {
+  browser = await openBrowser({ width: 1440, height: 900 });
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe("fixture types as the electrician", () => {
+  it("edits a wattage, sees a bad figure refused, and cannot edit the cone", async () => {
+    const page = await browser.newPage();
+    await signIn(page, DEMO.electrician);
+    const id = Number(new URL(page.url()).pathname.split("/")[2]);
+    await page.goto(`/productions/${id}/rig`);
+    await page.getByTestId("rig-table").waitFor();
+    await page.getByRole("button", { name: /fixture types/i }).first().click();
+    const panel = page.getByRole("region", { name: "Fixture types" });
+    await panel.waitFor();
+    await expect(panel.getByTestId("types-from-memory").textContent()).resolves.toMatch(/from memory/);
+
+    const wattButton = panel.getByRole("button", { name: /^Edit Power \(W\) of / }).first();
+    const typeName = ((await wattButton.getAttribute("aria-label")) ?? "").replace(/^Edit Power \(W\) of /, "");
+    const old = (await wattButton.textContent())?.trim() ?? "";
+    await wattButton.click();
+    const input = panel.getByLabel(`Power (W) of ${typeName}`);
+    await input.fill("lots");
+    await input.press("Enter");
+    await expect(panel.getByTestId("type-cell-message").first().textContent()).resolves.toMatch(/not a number/);
+    await input.fill("777");
+    await input.press("Enter");
+    await panel.getByRole("button", { name: `Edit Power (W) of ${typeName}` }).filter({ hasText: "777" }).waitFor();
+    expect(await panel.getByRole("button", { name: `Edit Cone (°) of ${typeName}` }).count()).toBe(0);
+    await screenshot(page, "rig-types-electrician");
+
+    // put the demo back as it was
+    await panel.getByRole("button", { name: `Edit Power (W) of ${typeName}` }).click();
+    await panel.getByLabel(`Power (W) of ${typeName}`).fill(old);
+    await panel.getByLabel(`Power (W) of ${typeName}`).press("Enter");
+    await panel.getByRole("button", { name: `Edit Power (W) of ${typeName}` }).filter({ hasText: old }).waitFor();
+    await page.close();
+  });
+});
