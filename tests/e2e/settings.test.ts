@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { BrowserContext } from "playwright-core";
-import { DEMO, openBrowser, screenshot, signIn } from "./support/browser";
+import { DEMO, openBrowser, openDemoProduction, screenshot, signIn } from "./support/browser";
 
 let browser: BrowserContext;
 beforeAll(async () => {
@@ -14,7 +14,7 @@ describe("production settings", () => {
   it("the designer gets a message naming the field for a length that is not a length, and nothing is saved", async () => {
     const page = await browser.newPage();
     await signIn(page, DEMO.designer);
-    await page.goto(page.url().replace(/\/?$/, "/settings"));
+    await page.goto(`${await openDemoProduction(page)}/settings`);
     const head = page.getByLabel("Head height");
     const before = await head.inputValue();
     await head.fill("tall");
@@ -30,7 +30,7 @@ describe("production settings", () => {
   it("the designer saves a length typed in feet and inches; the viewer sees the form read-only", async () => {
     const page = await browser.newPage();
     await signIn(page, DEMO.designer);
-    const settingsUrl = page.url().replace(/\/?$/, "/settings");
+    const settingsUrl = `${await openDemoProduction(page)}/settings`;
     await page.goto(settingsUrl);
     await page.getByLabel("Head height").fill(`5' 6"`);
     await page.getByRole("button", { name: "Save settings" }).click();

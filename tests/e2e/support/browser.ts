@@ -41,3 +41,17 @@ export async function screenshot(page: Page, name: string) {
   await page.screenshot({ path: file, fullPage: true });
   return file;
 }
+
+/**
+ * Opens the demo production's overview and returns its URL. A member of several productions lands on
+ * the list after signing in; a member of one lands inside it.
+ */
+export async function openDemoProduction(page: Page): Promise<string> {
+  if (!/\/productions\/\d+/.test(new URL(page.url()).pathname)) {
+    await page.goto("/productions");
+    await page.getByRole("link", { name: /Salt and Lantern/ }).first().click();
+    await page.waitForURL(/\/productions\/\d+/);
+  }
+  const match = new URL(page.url()).pathname.match(/^\/productions\/\d+/);
+  return new URL(match![0], page.url()).toString();
+}

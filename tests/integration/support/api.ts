@@ -2,11 +2,25 @@
 export const BASE_URL = process.env.APP_URL ?? "http://127.0.0.1:3000";
 export const DEMO_PASSWORD = "lantern-demo-2026";
 
+/**
+ * fetch, retried once when a kept-alive socket was closed by the server just as it was reused
+ * (the server's keep-alive timeout racing a slow test step); the request never reached the app.
+ */
+async function fetchOnce(url: string, init: RequestInit): Promise<Response> {
+  try {
+    return await fetch(url, init);
+  } catch (err) {
+    const cause = (err as { cause?: { code?: string; message?: string } }).cause;
+    if (cause?.code === "UND_ERR_SOCKET" || /other side closed/.test(cause?.message ?? "")) return fetch(url, init);
+    throw err;
+  }
+}
+
 export class ApiSession {
   private cookie = "";
 
   async request(method: string, path: string, body?: unknown, rawBody?: string) {
-    const res = await fetch(BASE_URL + path, {
+    const res = await fetchOnce(BASE_URL + path, {
       method,
       redirect: "manual",
       headers: {
