@@ -21,7 +21,7 @@ describe("each demo user lands on the right page", () => {
   const cases: Array<[string, string, RegExp, string]> = [
     ["designer", DEMO.designer, /^\/productions(\/\d+)?$/, "Where things stand"],
     ["electrician", DEMO.electrician, /^\/productions(\/\d+)?$/, "Where things stand"],
-    ["stage-manager", DEMO.stageManager, /^\/productions\/\d+\/cues$/, "Cues"],
+    ["stage-manager", DEMO.stageManager, /^\/productions\/\d+\/cues$/, "Cue sheet"],
     ["viewer", DEMO.viewer, /^\/productions(\/\d+)?$/, "Where things stand"],
   ];
   for (const [name, email, path, text] of cases) {
