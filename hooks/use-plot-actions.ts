@@ -5,6 +5,7 @@ import { useQueryClient } from "@tanstack/react-query";
 import { apiFetch } from "@/lib/http/api-client";
 import { productionKeys } from "./query-keys";
 import type { PlotPayload } from "./use-plot";
+import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import type { FixtureDto } from "@/lib/data/fixtures";
 import type { PositionDto } from "@/lib/data/positions";
 import type { FocusPointDto } from "@/lib/data/focus-points";
@@ -32,13 +33,23 @@ export function usePlotActions(productionId: number) {
     const refresh = () => qc.invalidateQueries({ queryKey: key, exact: true });
     return {
       refresh,
+      /** Every field of some fixtures (the plot holds only what it draws): for copies and undo of a delete. */
+      async fullFixtures(ids: number[]): Promise<FixtureDto[]> {
+        if (ids.length <= 20) {
+          const rows = await Promise.all(ids.map((id) => apiFetch<{ fixture: FixtureDto }>(`${base}/fixtures/${id}`)));
+          return rows.map((r) => r.fixture);
+        }
+        const wanted = new Set(ids);
+        const { fixtures } = await apiFetch<{ fixtures: FixtureDto[] }>(`${base}/fixtures`);
+        return fixtures.filter((f) => wanted.has(f.id));
+      },
       async patchFixture(id: number, patch: Record<string, unknown>) {
-        const { fixture } = await apiFetch<{ fixture: FixtureDto }>(`${base}/fixtures/${id}`, { method: "PATCH", json: patch });
+        const { fixture } = await apiFetch<{ fixture: PlotFixture }>(`${base}/fixtures/${id}`, { method: "PATCH", json: patch });
         edit((d) => ({ ...d, fixtures: replace(d.fixtures, fixture) }));
         return fixture;
       },
       async createFixtures(fixtures: Array<Record<string, unknown>>) {
-        const res = await apiFetch<{ fixtures: FixtureDto[] }>(`${base}/fixtures`, { method: "POST", json: { fixtures } });
+        const res = await apiFetch<{ fixtures: PlotFixture[] }>(`${base}/fixtures`, { method: "POST", json: { fixtures } });
         edit((d) => ({ ...d, fixtures: upsert(d.fixtures, res.fixtures) }));
         return res.fixtures;
       },

@@ -1,26 +1,42 @@
 "use client";
 
+import { useState } from "react";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { apiFetch } from "@/lib/http/api-client";
 import { productionKeys } from "./query-keys";
-import type { PlotData } from "@/lib/data/plot";
+import type { PlotData, PlotWireData } from "@/lib/data/plot";
+import { expandPlotFixtures, fromPlotFixtureWire, type PlotFixture } from "@/lib/plot/slim-fixtures";
 
-export type PlotPayload = PlotData & { stamp: string };
+/** What the editor works with: fixtures with names and geometry rebuilt in the browser. */
+export type PlotPayload = Omit<PlotData, "fixtures"> & { stamp: string; fixtures: PlotFixture[] };
+/** What the page and `?shape=slim` send. */
+export type PlotWirePayload = PlotWireData & { stamp: string };
 
 /** Polling period of the change token: another user's edit shows up within this time. */
 export const PLOT_POLL_MS = 3000;
 
+export function expandPlot(wire: PlotWirePayload, headHeight: number): PlotPayload {
+  return { ...wire, fixtures: expandPlotFixtures(wire.fixtures.map(fromPlotFixtureWire), wire, headHeight) };
+}
+
 /**
- * The plot's data, seeded by the server page. Live updates: a tiny change token is polled every few
- * seconds and the full read runs only when it moved (1,500 fixtures are ~2 MB of JSON; the token is bytes).
+ * The plot's data, seeded by the server page in the slim shape. Live updates: a tiny change token is
+ * polled every few seconds and the full (slim) read runs only when it moved.
  */
-export function usePlot(productionId: number, initial: PlotPayload, { paused = false }: { paused?: boolean } = {}) {
+export function usePlot(
+  productionId: number,
+  initial: PlotWirePayload,
+  headHeight: number,
+  { paused = false }: { paused?: boolean } = {},
+) {
   const qc = useQueryClient();
   const key = productionKeys.plot(productionId);
+  // Expanded once on mount; later reads go through the query function.
+  const [initialData] = useState(() => expandPlot(initial, headHeight));
   const plot = useQuery({
     queryKey: key,
-    queryFn: () => apiFetch<PlotPayload>(`/api/productions/${productionId}/plot`),
-    initialData: initial,
+    queryFn: async () => expandPlot(await apiFetch<PlotWirePayload>(`/api/productions/${productionId}/plot?shape=slim`), headHeight),
+    initialData,
     staleTime: Infinity,
   });
   useQuery({

@@ -7,6 +7,7 @@ import { getFocusPointsByProduction, type FocusPointDto } from "./focus-points";
 import { getAreaZonesByProduction, type AreaZoneDto } from "./area-zones";
 import { getLandmarksByProduction, type LandmarkDto } from "./landmarks";
 import { getUploadsByProduction, type UploadDto } from "./uploads";
+import { PLOT_FIXTURE_FIELDS, toPlotFixtureWire, type PlotFixtureRecord, type PlotFixtureWire } from "@/lib/plot/slim-fixtures";
 
 export type PlotData = {
   positions: PositionDto[];
@@ -30,6 +31,43 @@ export async function getPlotData({ productionId }: { productionId: number }): P
     getUploadsByProduction({ productionId, kind: "underlay" }),
   ]);
   return { positions, fixtures, fixtureTypes, focusPoints, areaZones, landmarks, underlays };
+}
+
+export type PlotWireData = Omit<PlotData, "fixtures"> & { fixtures: PlotFixtureWire[] };
+
+/**
+ * The editor's read: fixtures as short arrays of what the plot draws (lib/plot/slim-fixtures), no
+ * server-computed pools; the browser computes those with the same module.
+ */
+export async function getPlotWireData({ productionId }: { productionId: number }): Promise<PlotWireData> {
+  const [positions, records, fixtureTypes, focusPoints, areaZones, landmarks, underlays] = await Promise.all([
+    getPositionsByProduction({ productionId }),
+    getPlotFixtureRecords(productionId),
+    getFixtureTypesByProduction({ productionId }),
+    getFocusPointsByProduction({ productionId }),
+    getAreaZonesByProduction({ productionId }),
+    getLandmarksByProduction({ productionId }),
+    getUploadsByProduction({ productionId, kind: "underlay" }),
+  ]);
+  // Hanging order, as getFixturesByProduction: position order, then position name, then unit order.
+  const pos = new Map(positions.map((p) => [p.id, p]));
+  const rank = (id: number) => pos.get(id)?.sortOrder ?? 0;
+  const name = (id: number) => pos.get(id)?.name ?? "";
+  records.sort((a, b) => rank(a.positionId) - rank(b.positionId) || name(a.positionId).localeCompare(name(b.positionId)));
+  return { positions, fixtures: records.map(toPlotFixtureWire), fixtureTypes, focusPoints, areaZones, landmarks, underlays };
+}
+
+async function getPlotFixtureRecords(productionId: number): Promise<PlotFixtureRecord[]> {
+  const rows = await getDb().Fixture.findAll({
+    where: { productionId },
+    attributes: [...PLOT_FIXTURE_FIELDS],
+    order: [["positionId", "ASC"], ["unitSort", "ASC"], ["cell", "ASC"]],
+  });
+  return rows.map((f) => {
+    const out: Record<string, unknown> = {};
+    for (const k of PLOT_FIXTURE_FIELDS) out[k] = f.get(k);
+    return out as PlotFixtureRecord;
+  });
 }
 
 /**

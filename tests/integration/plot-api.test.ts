@@ -2,6 +2,7 @@
 import { describe, expect, it } from "vitest";
 import { ApiSession, BASE_URL, demoProductionId, freshUser } from "./support/api";
 import { makePng } from "./plot-png";
+import { fromPlotFixtureWire } from "@/lib/plot/slim-fixtures";
 
 async function ownProduction() {
   const { session } = await freshUser("plot");
@@ -126,5 +127,24 @@ describe("roles on the plot", () => {
     const after = (await s.get(`/api/productions/${id}/plot?only=stamp`)).json.stamp;
     expect(after).not.toBe(before);
     expect((await s.get(`/api/productions/${id}/plot?only=nonsense`)).status).toBe(400);
+  });
+
+  it("answers the editor's slim read: the same units, in the same order, with the same kept values", async () => {
+    const viewer = await new ApiSession().signIn("rafe.lindqvist@quillmere.test");
+    const id = await demoProductionId(viewer);
+    const full = (await viewer.get(`/api/productions/${id}/plot`)).json;
+    const slim = await viewer.get(`/api/productions/${id}/plot?shape=slim`);
+    expect(slim.status).toBe(200);
+    const rows = slim.json.fixtures.map(fromPlotFixtureWire);
+    expect(rows.map((r: { id: number }) => r.id)).toEqual(full.fixtures.map((f: { id: number }) => f.id));
+    const i = full.fixtures.findIndex((f: { focusX: number | null }) => f.focusX !== null);
+    expect(rows[i].unitNumber).toBe(full.fixtures[i].unitNumber);
+    expect(rows[i].focusX).toBeCloseTo(full.fixtures[i].focusX, 3); // rounded to the millimetre, common practice
+    expect(rows[i].version).toBe(full.fixtures[i].version);
+    // a fraction of the full read's size
+    expect(JSON.stringify(slim.json.fixtures).length).toBeLessThan(JSON.stringify(full.fixtures).length / 4);
+    const bad = await viewer.get(`/api/productions/${id}/plot?shape=tiny`);
+    expect(bad.status).toBe(400);
+    expect(JSON.stringify(bad.json)).toMatch(/shape/);
   });
 });

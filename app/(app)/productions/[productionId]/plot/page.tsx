@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { memberForPage } from "@/lib/auth/page-guards";
 import { can } from "@/lib/auth/policy";
 import { requireProduction } from "@/lib/data/productions";
-import { getPlotData, getPlotStamp } from "@/lib/data/plot";
+import { getPlotWireData, getPlotStamp } from "@/lib/data/plot";
 import { PlotEditor } from "./_components/plot-editor";
 
 export const metadata: Metadata = { title: "Plot" };
@@ -10,6 +10,6 @@ export const metadata: Metadata = { title: "Plot" };
 export default async function PlotPage({ params }: { params: Promise<{ productionId: string }> }) {
   const { productionId, member } = await memberForPage((await params).productionId);
   const stamp = await getPlotStamp({ productionId });
-  const [production, data] = await Promise.all([requireProduction(productionId), getPlotData({ productionId })]);
+  const [production, data] = await Promise.all([requireProduction(productionId), getPlotWireData({ productionId })]);
   return <PlotEditor production={production} initial={{ stamp, ...data }} canEdit={can(member, "plot.edit")} />;
 }

@@ -1,6 +1,6 @@
 import type { Point } from "@/lib/optics";
 import type { View } from "@/lib/plot/view";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 
 export type Tool = "select" | "position-line" | "position-point" | "area" | "landmark" | "cut" | "calibrate" | "align" | "place" | "underlay";
 
@@ -13,12 +13,12 @@ export type Selection = { fixtures: ReadonlySet<number>; positionId: number | nu
 /** What the canvas asks the editor to do; the editor owns saving, undo and messages. */
 export type CanvasEvents = {
   select(sel: Partial<Selection>, additive: boolean): void;
-  moveFixture(f: FixtureDto, to: Point): void;
-  moveMark(f: FixtureDto, to: Point): void;
+  moveFixture(f: PlotFixture, to: Point): void;
+  moveMark(f: PlotFixture, to: Point): void;
   moveFocusPoint(id: number, to: Point): void;
   moveUnderlay(by: Point): void;
   drawn(tool: Tool, points: Point[]): void;
-  preview(f: FixtureDto | null): void;
+  preview(f: PlotFixture | null): void;
   place(at: Point): void;
 };
 
@@ -34,8 +34,8 @@ export type CanvasHandle = {
 export type Gesture =
   | { kind: "pan"; last: Point }
   | { kind: "box"; from: Point; to: Point }
-  | { kind: "mark"; fixture: FixtureDto; to: Point }
-  | { kind: "fixture"; fixture: FixtureDto; to: Point }
+  | { kind: "mark"; fixture: PlotFixture; to: Point }
+  | { kind: "fixture"; fixture: PlotFixture; to: Point }
   | { kind: "focusPoint"; id: number; to: Point }
   | { kind: "underlay"; from: Point; to: Point }
   | { kind: "line"; tool: Tool; from: Point; to: Point };

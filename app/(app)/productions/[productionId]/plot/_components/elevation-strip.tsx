@@ -2,10 +2,10 @@
 
 import { formatLength, type Units } from "@/lib/optics";
 import type { PositionDto } from "@/lib/data/positions";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 
 /** Side view of a boom or ladder: the deck, the top (trim) and each unit at its lens height. */
-export function ElevationStrip({ position, fixtures, units }: { position: PositionDto; fixtures: FixtureDto[]; units: Units }) {
+export function ElevationStrip({ position, fixtures, units }: { position: PositionDto; fixtures: PlotFixture[]; units: Units }) {
   const top = Math.max(position.trimHeight, ...fixtures.map((f) => f.computed.lensHeight), 1);
   const H = 180;
   const y = (m: number) => 10 + (H - 20) * (1 - m / top);

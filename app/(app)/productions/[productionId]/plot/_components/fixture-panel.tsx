@@ -3,7 +3,7 @@
 import { useState } from "react";
 import { describePoint, formatLength, parseLength } from "@/lib/optics";
 import { markForThrow } from "@/lib/plot/throw-to-mark";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import { BeamNumbers } from "./beam-numbers";
 import { PanelField, PanelSection } from "./panel-field";
 import type { PanelProps } from "./side-panel";
@@ -21,7 +21,7 @@ const inRange = (n: number | null, what: string, min: number, max: number) => {
   return n;
 };
 
-export function FixturePanel(p: PanelProps & { fixture: FixtureDto }) {
+export function FixturePanel(p: PanelProps & { fixture: PlotFixture }) {
   const f = p.fixture;
   const units = p.production.displayUnits;
   const unit = units === "metric" ? "m" : "ft";

@@ -1,6 +1,6 @@
 "use client";
 
-import { useCallback, useEffect, useImperativeHandle, useMemo, useRef, useState } from "react";
+import { memo, useCallback, useEffect, useImperativeHandle, useMemo, useRef, useState } from "react";
 import { Layer, Stage } from "react-konva";
 import type Konva from "konva";
 import { PlanShape } from "@/components/plot/plan-shape";
@@ -12,7 +12,7 @@ import { drawOverlay } from "./draw-overlay";
 import { stageBounds, stageOutline, extendBounds } from "@/lib/plot/stage-outline";
 import { fitBounds, visiblePlanBounds, zoomAbout, type View } from "@/lib/plot/view";
 import type { ProductionDto } from "@/lib/data/productions";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import type { PlotPayload } from "@/hooks/use-plot";
 import { buildRigItems, toRigItem } from "./rig-items";
 import { useCanvasGestures } from "./use-canvas-gestures";
@@ -29,7 +29,11 @@ export type PlotCanvasProps = {
   handleRef: React.RefObject<CanvasHandle | null>;
 };
 
-export default function PlotCanvas(props: PlotCanvasProps) {
+// Memoised: the side panel follows a drag once a frame through the editor's state; the canvas draws
+// the drag itself from refs, so those re-renders must not reach it (and its 1,500-unit props).
+export default memo(PlotCanvas);
+
+function PlotCanvas(props: PlotCanvasProps) {
   const { data, production, layers, selection } = props;
   const container = useRef<HTMLDivElement>(null);
   const stage = useRef<Konva.Stage>(null);
@@ -41,7 +45,7 @@ export default function PlotCanvas(props: PlotCanvasProps) {
   const view = useRef<View>({ scale: 40, ox: 400, oy: 400 });
   const gesture = useRef<Gesture | null>(null);
   const draft = useRef<Array<{ x: number; y: number }>>([]);
-  const preview = useRef<FixtureDto | null>(null);
+  const preview = useRef<PlotFixture | null>(null);
   const image = useRef<HTMLImageElement | null>(null);
   const fitted = useRef(false);
 
@@ -72,7 +76,7 @@ export default function PlotCanvas(props: PlotCanvasProps) {
     const p = preview.current;
     if (p && !gesture.current) {
       const server = data.fixtures.find((f) => f.id === p.id);
-      if (!server || server.version !== p.version || server.updatedAt !== p.updatedAt) {
+      if (!server || server.version !== p.version) {
         preview.current = null;
         props.events.preview(null); // the panel goes back to the server's numbers too
       }

@@ -2,9 +2,9 @@
 
 import dynamic from "next/dynamic";
 import { useCallback, useEffect, useRef, useState } from "react";
-import { usePlot, type PlotPayload } from "@/hooks/use-plot";
+import { usePlot, type PlotWirePayload } from "@/hooks/use-plot";
 import type { ProductionDto } from "@/lib/data/productions";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import type { NumberingDirection } from "@/lib/plot/along-position";
 import { screenToPlan } from "@/lib/plot/view";
 import { LAYERS, type CanvasHandle, type LayerVisibility, type Selection, type Tool } from "./canvas-types";
@@ -21,23 +21,23 @@ const PlotCanvas = dynamic(() => import("./plot-canvas"), { ssr: false, loading:
 const ALL_ON = Object.fromEntries(LAYERS.map((l) => [l, true])) as LayerVisibility;
 const NONE: Selection = { fixtures: new Set(), positionId: null, focusPointId: null };
 
-export function PlotEditor({ production, initial, canEdit }: { production: ProductionDto; initial: PlotPayload; canEdit: boolean }) {
+export function PlotEditor({ production, initial, canEdit }: { production: ProductionDto; initial: PlotWirePayload; canEdit: boolean }) {
   const [dragging, setDragging] = useState(false);
-  const data = usePlot(production.id, initial, { paused: dragging });
+  const data = usePlot(production.id, initial, production.headHeight, { paused: dragging });
   const cmd = useCommands(production.id);
   const [tool, setTool] = useState<Tool>("select");
   const [layers, setLayers] = useState<LayerVisibility>(ALL_ON);
   const [selection, setSelection] = useState<Selection>(NONE);
   const [draft, setDraft] = useState<Draft>(null);
-  const [preview, setPreviewState] = useState<FixtureDto | null>(null);
+  const [preview, setPreviewState] = useState<PlotFixture | null>(null);
   const [armedTypeId, setArmedTypeId] = useState<number | null>(null);
   const [direction, setDirection] = useState<NumberingDirection>(production.numberingRule);
   const handle = useRef<CanvasHandle | null>(null);
   const canvasBox = useRef<HTMLDivElement>(null);
 
   // The panel follows a drag at most once a frame.
-  const pending = useRef<{ f: FixtureDto | null; frame: number }>({ f: null, frame: 0 });
-  const setPreview = useCallback((f: FixtureDto | null) => {
+  const pending = useRef<{ f: PlotFixture | null; frame: number }>({ f: null, frame: 0 });
+  const setPreview = useCallback((f: PlotFixture | null) => {
     pending.current.f = f;
     setDragging(f !== null);
     if (pending.current.frame) return;

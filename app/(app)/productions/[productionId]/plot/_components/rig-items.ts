@@ -5,7 +5,7 @@ import { symbolShape } from "@/lib/plot/symbol";
 import { VERTICAL_KINDS, type PositionKind } from "@/lib/rig/position-kinds";
 import type { Point } from "@/lib/optics";
 import type { RigItem } from "@/components/plot/draw-rig";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import type { PlotPayload } from "@/hooks/use-plot";
 
 export function isVertical(kind: string) {
@@ -15,7 +15,7 @@ export function isVertical(kind: string) {
 export function buildRigItems(data: PlotPayload): RigItem[] {
   const kinds = new Map(data.positions.map((p) => [p.id, p.kind]));
   // Units hanging at one point (a boom) fan out on screen, top unit nearest the boom.
-  const stacks = new Map<number, FixtureDto[]>();
+  const stacks = new Map<number, PlotFixture[]>();
   for (const f of data.fixtures) {
     if (!isVertical(kinds.get(f.positionId) ?? "")) continue;
     const list = stacks.get(f.positionId) ?? [];
@@ -30,7 +30,7 @@ export function buildRigItems(data: PlotPayload): RigItem[] {
   return data.fixtures.map((f) => toRigItem(f, stackIndex.get(f.id) ?? 0));
 }
 
-export function toRigItem(f: FixtureDto, stackIndex = 0): RigItem {
+export function toRigItem(f: PlotFixture, stackIndex = 0): RigItem {
   const c = f.computed;
   return {
     id: f.id,
@@ -48,7 +48,7 @@ export function toRigItem(f: FixtureDto, stackIndex = 0): RigItem {
 }
 
 /** The fixture as it would be with a new mark (and/or a new plan point), computed in the browser. */
-export function previewFixture(data: PlotPayload, f: FixtureDto, change: { mark?: Point; at?: Point }, headHeight: number): FixtureDto {
+export function previewFixture(data: PlotPayload, f: PlotFixture, change: { mark?: Point; at?: Point }, headHeight: number): PlotFixture {
   const position = data.positions.find((p) => p.id === f.positionId);
   const type = data.fixtureTypes.find((t) => t.id === f.fixtureTypeId);
   if (!position || !type) return f;

@@ -2,7 +2,7 @@
 
 import type { PlotPayload } from "@/hooks/use-plot";
 import type { ProductionDto } from "@/lib/data/productions";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import { formatLength } from "@/lib/optics";
 import type { Selection, Tool } from "./canvas-types";
 import type { Commands } from "./use-commands";
@@ -20,7 +20,7 @@ export type PanelProps = {
   canEdit: boolean;
   selection: Selection;
   setSelection: (s: Selection) => void;
-  preview: FixtureDto | null;
+  preview: PlotFixture | null;
   draft: Draft;
   setDraft: (d: Draft) => void;
   cmd: Commands;

@@ -8,7 +8,7 @@ import { projectOntoPosition } from "@/lib/plot/along-position";
 import { symbolPixels } from "@/lib/plot/symbol";
 import { panBy, planToScreen, screenToPlan, wheelZoomFactor, zoomAbout, type View } from "@/lib/plot/view";
 import { symbolScreenPoint, type RigItem } from "@/components/plot/draw-rig";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import type { PlotCanvasProps } from "./plot-canvas";
 import type { Gesture } from "./canvas-types";
 import { isVertical, previewFixture } from "./rig-items";
@@ -19,7 +19,7 @@ type Args = {
   view: RefObject<View>;
   gesture: RefObject<Gesture | null>;
   draft: RefObject<Point[]>;
-  preview: RefObject<FixtureDto | null>;
+  preview: RefObject<PlotFixture | null>;
   live: Live;
   redraw: (which?: "all" | "overlay", now?: boolean) => void;
 };

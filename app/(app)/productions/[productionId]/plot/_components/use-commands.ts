@@ -10,6 +10,7 @@ import { productionKeys } from "@/hooks/query-keys";
 import { usePlotActions } from "@/hooks/use-plot-actions";
 import type { PlotPayload } from "@/hooks/use-plot";
 import type { FixtureDto } from "@/lib/data/fixtures";
+import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 
 export type Notice = { tone: "info" | "error" | "conflict"; text: string; retry?: () => void } | null;
 
@@ -66,14 +67,14 @@ export function useCommands(productionId: number) {
 
   return useMemo(() => {
     /** Patches a fixture with its latest version; `patchFor` may read the latest row (for nudges). */
-    function patchFixture(id: number, label: string, patchFor: (f: FixtureDto) => Record<string, unknown> | null, opts: { undoable?: boolean } = {}) {
+    function patchFixture(id: number, label: string, patchFor: (f: PlotFixture) => Record<string, unknown> | null, opts: { undoable?: boolean } = {}) {
       const attempt = () =>
         run(label, async () => {
           const f = fixture(id);
           if (!f) return;
           const patch = patchFor(f);
           if (!patch) return;
-          const before = Object.fromEntries(Object.keys(patch).map((k) => [k, f[k as keyof FixtureDto] ?? null]));
+          const before = Object.fromEntries(Object.keys(patch).map((k) => [k, f[k as keyof PlotFixture] ?? null]));
           await actions.patchFixture(id, { ...patch, version: f.version });
           if (opts.undoable !== false) remember(label, () => run(`Undo ${label.toLowerCase()}`, async () => {
             const now = fixture(id);

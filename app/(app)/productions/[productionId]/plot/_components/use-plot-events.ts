@@ -5,7 +5,7 @@ import type { Point } from "@/lib/optics";
 import { nearestPosition, numberingOrder, unitNumberForInsert, type NumberingDirection } from "@/lib/plot/along-position";
 import { alignPoint } from "@/lib/plot/underlay";
 import { compareUnitNumbers } from "@/lib/rig/unit-number";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import type { CanvasEvents, Selection, Tool } from "./canvas-types";
 import type { Commands } from "./use-commands";
 import { isVertical } from "./rig-items";
@@ -25,7 +25,7 @@ type Args = {
   setSelection: (s: Selection) => void;
   setDraft: (d: Draft) => void;
   setTool: (t: Tool) => void;
-  setPreview: (f: FixtureDto | null) => void;
+  setPreview: (f: PlotFixture | null) => void;
   armedTypeId: number | null;
   direction: NumberingDirection;
 };
@@ -44,7 +44,7 @@ export function placeFixture(cmd: Commands, typeId: number, at: Point, direction
   let before: string | null = null;
   if (onPos.length && isVertical(pos.kind)) before = existing.slice().sort(compareUnitNumbers).at(-1)!; // booms: the new unit goes below
   else if (onPos.length) {
-    const order = numberingOrder([...onPos, { id: -1, x: hit.point.x, y: hit.point.y } as FixtureDto], direction);
+    const order = numberingOrder([...onPos, { id: -1, x: hit.point.x, y: hit.point.y } as PlotFixture], direction);
     const idx = order.findIndex((f) => f.id === -1);
     before = idx === 0 ? null : order[idx - 1].unitNumber;
   }

@@ -1,7 +1,7 @@
 "use client";
 // Keyboard: nudges for the selected unit's focus, cone and softness; delete, duplicate, undo, fit.
 import { useEffect, type RefObject } from "react";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import type { CanvasHandle, Selection, Tool } from "./canvas-types";
 import { creationFields, type Commands } from "./use-commands";
 import { unitNumberForInsert } from "@/lib/plot/along-position";
@@ -69,12 +69,13 @@ export function usePlotKeys({ cmd, canEdit, selection, setSelection, handle, set
 const r3 = (n: number) => Math.round(n * 1000) / 1000;
 
 export function deleteFixtures(cmd: Commands, ids: number[], done: () => void) {
-  const rows = ids.map((id) => cmd.fixture(id)).filter((f): f is FixtureDto => f !== null);
+  const rows = ids.map((id) => cmd.fixture(id)).filter((f): f is PlotFixture => f !== null);
   return cmd.run(`Delete ${rows.length} unit${rows.length === 1 ? "" : "s"}`, async () => {
+    const full = await cmd.actions.fullFixtures(rows.map((f) => f.id)); // kept whole for undo
     await cmd.actions.deleteFixtures(rows.map((f) => f.id));
     done();
     cmd.remember(`Delete ${rows.length} unit${rows.length === 1 ? "" : "s"}`, () =>
-      cmd.run("Undo delete", () => cmd.actions.createFixtures(rows.map(creationFields))).then(() => undefined),
+      cmd.run("Undo delete", () => cmd.actions.createFixtures(full.map(creationFields))).then(() => undefined),
     );
   });
 }
@@ -82,19 +83,22 @@ export function deleteFixtures(cmd: Commands, ids: number[], done: () => void) {
 /** Copies sit a little along their position, with unit numbers slotted in after the originals. */
 export function duplicateFixtures(cmd: Commands, ids: number[]) {
   const data = cmd.latest();
-  const taken = new Map<number, string[]>();
-  const copies = ids.flatMap((id) => {
-    const f = cmd.fixture(id);
-    const pos = f && data.positions.find((p) => p.id === f.positionId);
-    if (!f || !pos) return [];
-    const list = taken.get(pos.id) ?? data.fixtures.filter((x) => x.positionId === pos.id).map((x) => x.unitNumber);
-    const unitNumber = unitNumberForInsert(list, f.unitNumber);
-    taken.set(pos.id, [...list, unitNumber]);
-    const at = projectOntoPosition(pos, { x: f.x + 0.3 * Math.sign(f.x || 1), y: f.y }).point;
-    return [{ ...creationFields(f), unitNumber, x: at.x, y: at.y, channel: null }];
-  });
-  if (!copies.length) return;
+  const known = ids.filter((id) => cmd.fixture(id) !== null);
+  if (!known.length) return;
   return cmd.run("Duplicate", async () => {
+    const full = new Map((await cmd.actions.fullFixtures(known)).map((f) => [f.id, f]));
+    const taken = new Map<number, string[]>();
+    const copies = known.flatMap((id) => {
+      const f = full.get(id);
+      const pos = f && data.positions.find((p) => p.id === f.positionId);
+      if (!f || !pos) return [];
+      const list = taken.get(pos.id) ?? data.fixtures.filter((x) => x.positionId === pos.id).map((x) => x.unitNumber);
+      const unitNumber = unitNumberForInsert(list, f.unitNumber);
+      taken.set(pos.id, [...list, unitNumber]);
+      const at = projectOntoPosition(pos, { x: f.x + 0.3 * Math.sign(f.x || 1), y: f.y }).point;
+      return [{ ...creationFields(f), unitNumber, x: at.x, y: at.y, channel: null }];
+    });
+    if (!copies.length) return;
     const created = await cmd.actions.createFixtures(copies);
     cmd.remember(`Duplicate ${created.length}`, () => cmd.run("Undo duplicate", () => cmd.actions.deleteFixtures(created.map((c) => c.id))).then(() => undefined));
   });
