@@ -29,16 +29,12 @@ export function useRigImport(productionId: number) {
   const [progress, setProgress] = useState<ImportProgress>(null);
   const url = `/api/productions/${productionId}/import`;
 
-  async function preview(file: File, options: ImportOptions): Promise<ImportPreview> {
-    const res = await fetch(url, { method: "POST", body: body(file, "preview", options) });
-    if (!res.ok) return failure(res);
-    return (await res.json()).preview;
-  }
-
-  async function commit(file: File, options: ImportOptions): Promise<ImportPreview> {
+  // Both steps stream newline-delimited JSON: progress lines while the server reads, checks (and writes),
+  // then one line with the answer, so a file of thousands of rows shows a moving bar from the start.
+  async function streamed<T>(file: File, mode: "preview" | "commit", options: ImportOptions, answer: "preview" | "result"): Promise<T> {
     setProgress({ stage: "uploading", done: 0, total: 1 });
     try {
-      const res = await fetch(`${url}?stream=1`, { method: "POST", body: body(file, "commit", options) });
+      const res = await fetch(`${url}?stream=1`, { method: "POST", body: body(file, mode, options) });
       if (!res.ok || !res.body) return await failure(res);
       const reader = res.body.pipeThrough(new TextDecoderStream()).getReader();
       let buffer = "";
@@ -51,12 +47,21 @@ export function useRigImport(productionId: number) {
           const msg = JSON.parse(line);
           if (msg.progress) setProgress(msg.progress);
           if (msg.error) throw new ApiError(msg.status ?? 400, msg.error.code, msg.error.message, msg.error.fieldErrors);
-          if (msg.result) return msg.result;
+          if (msg[answer]) return msg[answer] as T;
         }
-        if (done) throw new ApiError(500, "internal", "The import stopped without an answer. Check the rig before trying again.");
+        if (done) throw new ApiError(500, "internal", mode === "commit" ? "The import stopped without an answer. Check the rig before trying again." : "The check stopped without an answer. Try again.");
       }
     } finally {
       setProgress(null);
+    }
+  }
+
+  const preview = (file: File, options: ImportOptions) => streamed<ImportPreview>(file, "preview", options, "preview");
+
+  async function commit(file: File, options: ImportOptions): Promise<ImportPreview> {
+    try {
+      return await streamed<ImportPreview>(file, "commit", options, "result");
+    } finally {
       await qc.invalidateQueries({ queryKey: productionKeys.fixtures(productionId) });
       await qc.invalidateQueries({ queryKey: productionKeys.fixtureTypes(productionId) });
     }

@@ -5,7 +5,8 @@ import type { Member } from "@/lib/auth/policy";
 import { readTable } from "@/lib/io/read-table";
 import { FileProblem } from "@/lib/io/table";
 import { normaliseHeader, suggestMapping, type ColumnTarget } from "@/lib/io/fields";
-import { missingRequiredColumns, validateRows, type LengthUnit, type RowError } from "@/lib/io/rows";
+import { missingRequiredColumns, rowChecker, type LengthUnit, type RowError } from "@/lib/io/rows";
+import type { RawTable } from "@/lib/io/table";
 import { planImport, type ImportPlanResult, type Snapshot } from "@/lib/rig/import-plan";
 import { requireProduction } from "./productions";
 import { writeImport } from "./import-write";
@@ -56,6 +57,23 @@ export async function getRememberedMapping(productionId: number) {
   return { columns: columns as Record<string, ColumnTarget>, lengthUnit: row.lengthUnit };
 }
 
+const SLICE = 2000;
+
+// With a progress listener (the streamed reply) rows are checked a slice at a time, yielding between
+// slices so each progress line goes out while the rest is checked; without one, in one go.
+async function checkInSlices(table: RawTable, mapping: ColumnTarget[], lengthUnit: LengthUnit, progress?: Progress) {
+  const checker = rowChecker(table, mapping, { lengthUnit });
+  const total = table.rows.length;
+  for (let from = 0; from < total; from += progress ? SLICE : total) {
+    checker.check(from, progress ? from + SLICE : total);
+    if (progress && from + SLICE < total) {
+      progress("checking", from + SLICE, total);
+      await new Promise((resolve) => setImmediate(resolve));
+    }
+  }
+  return checker.result;
+}
+
 /** Reads, maps and checks a file against the rig; writes nothing. */
 async function prepare(productionId: number, member: Member, req: ImportRequest, progress?: Progress) {
   const production = await requireProduction(productionId);
@@ -79,7 +97,7 @@ async function prepare(productionId: number, member: Member, req: ImportRequest,
     errors = [{ row: table.headerRowNumber, column: "(columns)", message: `No column is mapped to ${missing.join(" or ")}; every row needs them to find its fixture` }];
   } else {
     progress?.("checking", 0, table.rows.length);
-    const checked = validateRows(table, mapping, { lengthUnit });
+    const checked = await checkInSlices(table, mapping, lengthUnit, progress);
     plan = planImport(checked.rows, await loadSnapshot(productionId), { member, createMissing: req.createMissing, columnOf });
     errors = [...checked.errors, ...plan.errors].sort((a, b) => a.row - b.row);
     progress?.("checking", table.rows.length, table.rows.length);
@@ -104,8 +122,8 @@ async function prepare(productionId: number, member: Member, req: ImportRequest,
   return { preview, plan, table, mapping, lengthUnit };
 }
 
-export async function previewImport({ productionId, member, request }: { productionId: number; member: Member; request: ImportRequest }): Promise<ImportPreview> {
-  return (await prepare(productionId, member, request)).preview;
+export async function previewImport({ productionId, member, request, progress }: { productionId: number; member: Member; request: ImportRequest; progress?: Progress }): Promise<ImportPreview> {
+  return (await prepare(productionId, member, request, progress)).preview;
 }
 
 /** Checks everything first; writes only when every row is good, all in one transaction. */

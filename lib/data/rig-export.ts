@@ -28,7 +28,7 @@ export async function exportRig({ productionId, view, format, columns }: { produ
   if (view === "workbook" || view === "stock") {
     if (format === "csv" && view === "workbook") throw new AppError("bad_request", "The full workbook has one sheet per view, so it is .xlsx only. Export a single view as CSV.", { fieldErrors: { format: ["xlsx only for the workbook"] } });
     const stock = await getStockCounts({ productionId });
-    const sheets = view === "workbook" ? workbookSheets(fixtures, units, stock) : stockSheets(stock);
+    const sheets = view === "workbook" ? workbookSheets(fixtures, units, stock, await getAccessoriesByProduction({ productionId })) : stockSheets(stock);
     if (format === "csv") return { body: Buffer.from("\ufeff" + sheets.map((s) => `${s.name}\r\n${writeCsv(s).replace(/^\ufeff/, "")}`).join("\r\n")), contentType: "text/csv; charset=utf-8", fileName: `${base}.csv` };
     return { body: await writeXlsx(sheets, { title: production.name }), contentType: XLSX, fileName: `${base}.xlsx` };
   }

@@ -112,6 +112,13 @@ function columnChecker(schema: z.ZodType<unknown, string>): (text: string) => Ce
 
 /** Validates every data row; errors name the row number and the file's own column header. */
 export function validateRows(table: RawTable, mapping: ColumnTarget[], opts: { lengthUnit: LengthUnit }): { rows: ParsedRow[]; errors: RowError[] } {
+  const checker = rowChecker(table, mapping, opts);
+  checker.check(0, table.rows.length);
+  return checker.result;
+}
+
+/** The same checks a slice at a time, so a caller can report progress (and let the event loop breathe) between slices. */
+export function rowChecker(table: RawTable, mapping: ColumnTarget[], opts: { lengthUnit: LengthUnit }) {
   const columns: Column[] = mapping.flatMap((key, index) =>
     key === "ignore" ? [] : [{ key, index, header: table.headers[index], check: columnChecker(cellSchema(key, headerUnit(table.headers[index]) ?? opts.lengthUnit, table.decimalComma)) }],
   );
@@ -120,7 +127,7 @@ export function validateRows(table: RawTable, mapping: ColumnTarget[], opts: { l
   const rows: ParsedRow[] = [];
   const errors: RowError[] = [];
   const seen = new Map<string, number>();
-  for (const raw of table.rows) {
+  const checkRow = (raw: RawTable["rows"][number]) => {
     const values: RowValues = {};
     let bad = false;
     for (const c of columns) {
@@ -130,17 +137,22 @@ export function validateRows(table: RawTable, mapping: ColumnTarget[], opts: { l
         for (const message of result.messages) errors.push({ row: raw.rowNumber, column: c.header, message });
       } else if (result.value !== undefined) values[c.key] = result.value as RowValues[ImportKey];
     }
-    if (bad) continue;
+    if (bad) return;
     const key = `${String(values.position).toLowerCase()}|${String(values.unitNumber).toLowerCase()}`;
     const first = seen.get(key);
     if (first !== undefined) {
       errors.push({ row: raw.rowNumber, column: unitHeader, message: `Unit ${values.unitNumber} on ${values.position} is already in row ${first}` });
-      continue;
+      return;
     }
     seen.set(key, raw.rowNumber);
     rows.push({ rowNumber: raw.rowNumber, values });
-  }
-  return { rows, errors };
+  };
+  return {
+    check(from: number, to: number) {
+      for (let i = from; i < Math.min(to, table.rows.length); i++) checkRow(table.rows[i]);
+    },
+    result: { rows, errors },
+  };
 }
 
 /** The columns a file must map before any row can be read. */

@@ -52,6 +52,23 @@ export function stockSheets(stock: StockCounts): SheetOut[] {
   ];
 }
 
-export function workbookSheets(fixtures: FixtureDto[], units: Units, stock: StockCounts): SheetOut[] {
-  return [...RIG_VIEWS.filter((v) => v.id !== "stock").map((v) => viewSheet(fixtures, v, units)), ...stockSheets(stock)];
+export type SheetAccessory = { fixtureId: number; kind: string; universe: number | null; address: number | null; footprint: number | null; wattage: number; weightKg: number; notes: string | null };
+
+/** Every accessory on its own row, in hanging order of the fixture it is on. */
+export function accessorySheet(accessories: SheetAccessory[], fixtures: FixtureDto[]): SheetOut {
+  const order = new Map(fixtures.map((f, i) => [f.id, i])); // the API returns fixtures in hanging order
+  const byId = new Map(fixtures.map((f) => [f.id, f]));
+  const w = (header: string, width = 12) => ({ header, width: Math.max(width, header.length + 2) });
+  const rows = [...accessories]
+    .filter((a) => byId.has(a.fixtureId))
+    .sort((a, b) => order.get(a.fixtureId)! - order.get(b.fixtureId)! || a.kind.localeCompare(b.kind))
+    .map((a) => {
+      const f = byId.get(a.fixtureId)!;
+      return [f.positionName, f.unitNumber, a.kind, a.universe, a.address, a.footprint, a.wattage, a.weightKg, a.notes];
+    });
+  return { name: "Accessories", columns: [w("Position", 18), w("Unit", 8), w("Kind", 16), w("Universe"), w("Address"), w("Slots"), w("Power (W)"), w("Weight (kg)"), w("Notes", 24)], rows };
+}
+
+export function workbookSheets(fixtures: FixtureDto[], units: Units, stock: StockCounts, accessories: SheetAccessory[] = []): SheetOut[] {
+  return [...RIG_VIEWS.filter((v) => v.id !== "stock").map((v) => viewSheet(fixtures, v, units)), accessorySheet(accessories, fixtures), ...stockSheets(stock)];
 }

@@ -58,7 +58,7 @@ describe("export files", () => {
     expect(file.type).toContain("spreadsheetml");
     const wb = new ExcelJS.Workbook();
     await wb.xlsx.load(file.bytes as unknown as ArrayBuffer);
-    expect(wb.worksheets.map((w) => w.name)).toEqual(["Hanging", "Patching", "Programming", "Focus values", "Every column", "Stock - units", "Stock - colour", "Stock - gobos", "Stock - accessories", "Stock - Y-cables"]);
+    expect(wb.worksheets.map((w) => w.name)).toEqual(["Hanging", "Patching", "Programming", "Focus values", "Every column", "Accessories", "Stock - units", "Stock - colour", "Stock - gobos", "Stock - accessories", "Stock - Y-cables"]);
     const all = wb.getWorksheet("Every column")!;
     expect(all.views[0]).toMatchObject({ state: "frozen", ySplit: 1 });
     expect(all.getRow(1).values).toEqual(expect.arrayContaining(["X (ft)", "Lens height (ft)", "Cone (°)", "Throw (ft)"]));
@@ -66,6 +66,19 @@ describe("export files", () => {
     const colour = wb.getWorksheet("Stock - colour")!;
     // common practice, from memory: 6.25 in cuts from a 20 × 24 in sheet → 3 × 3 = 9 per sheet
     expect(colour.getRow(2).values).toEqual([undefined, "#132", "6.25 in", 1, 9, 1]);
+  });
+
+  it("lists each accessory on its own sheet and counts it in the stock", async () => {
+    const { s, id } = await seeded("metric");
+    const f = (await s.get(`/api/productions/${id}/fixtures`)).json.fixtures[0];
+    const made = await s.post(`/api/productions/${id}/accessories`, { fixtureId: f.id, kind: "scroller", universe: 2, address: 101, footprint: 2, wattage: 40, weightKg: 2.5 });
+    expect(made.status).toBe(201);
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.load((await download(s, id, "view=workbook&format=xlsx")).bytes as unknown as ArrayBuffer);
+    const sheet = wb.getWorksheet("Accessories")!;
+    expect(sheet.getRow(2).values).toEqual([undefined, f.positionName, f.unitNumber, "scroller", 2, 101, 2, 40, 2.5]);
+    const stock = wb.getWorksheet("Stock - accessories")!;
+    expect(stock.getRow(2).values).toEqual([undefined, "scroller", 1]);
   });
 
   it("lets every role export, and refuses the workbook as CSV", async () => {

@@ -56,21 +56,23 @@ async function readUpload(req: Request): Promise<{ request: ImportRequest; mode:
 
 /**
  * Preview (writes nothing) or commit (all rows in one transaction, or none). With ?stream=1 the
- * reply is newline-delimited JSON: progress lines, then one line with the result or the error.
+ * reply is newline-delimited JSON: progress lines (stage, done, total) while the file is read, checked
+ * and written, then one line with the preview or result, or the error.
  */
 export const POST = route(async (req, { params }: Ctx) => {
   const { productionId, member, user } = await requireMember((await params).productionId, "rig.import");
   const { mode, request } = await readUpload(req);
-  if (mode === "preview") return { preview: await previewImport({ productionId, member, request }) };
-  if (new URL(req.url).searchParams.get("stream") !== "1") return { result: await commitImport({ productionId, member, userId: user.id, request }) };
+  const streamed = new URL(req.url).searchParams.get("stream") === "1";
+  if (!streamed) return mode === "preview" ? { preview: await previewImport({ productionId, member, request }) } : { result: await commitImport({ productionId, member, userId: user.id, request }) };
 
   const encoder = new TextEncoder();
   const stream = new ReadableStream({
     async start(controller) {
       const send = (line: unknown) => controller.enqueue(encoder.encode(JSON.stringify(line) + "\n"));
       try {
-        const result = await commitImport({ productionId, member, userId: user.id, request, progress: (stage, done, total) => send({ progress: { stage, done, total } }) });
-        send({ result });
+        const progress = (stage: string, done: number, total: number) => send({ progress: { stage, done, total } });
+        if (mode === "preview") send({ preview: await previewImport({ productionId, member, request, progress }) });
+        else send({ result: await commitImport({ productionId, member, userId: user.id, request, progress }) });
       } catch (err) {
         const e = toAppError(err);
         send({ ...e.toJSON(), status: e.status });

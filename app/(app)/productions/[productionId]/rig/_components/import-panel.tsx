@@ -84,7 +84,7 @@ export function ImportPanel({ productionId, units, onClose }: { productionId: nu
       {done ? <p role="status" className="rounded-md border border-success p-2 text-sm text-success" data-testid="import-done">{done}</p> : null}
       {progress ? (
         <div className="flex flex-col gap-1 text-sm">
-          <span>{progress.stage === "writing" ? `Writing ${progress.done} of ${progress.total} rows…` : progress.stage === "uploading" ? "Sending the file…" : `${progress.stage[0].toUpperCase()}${progress.stage.slice(1)} the file…`}</span>
+          <span data-testid="import-stage">{progress.stage === "writing" ? `Writing ${progress.done} of ${progress.total} rows…` : progress.stage === "checking" ? `Checking rows: ${progress.done} of ${progress.total}…` : progress.stage === "uploading" ? "Sending the file…" : "Reading the file…"}</span>
           <progress className="h-2 w-full accent-[var(--accent)]" max={Math.max(progress.total, 1)} value={progress.done} aria-label="Import progress" />
         </div>
       ) : null}

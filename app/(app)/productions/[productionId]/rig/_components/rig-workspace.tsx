@@ -15,6 +15,7 @@ import { ColumnChooser } from "./column-chooser";
 import { ImportPanel } from "./import-panel";
 import { StockPanel } from "./stock-panel";
 import { TypesPanel } from "./types-panel";
+import { AccessoriesPanel } from "./accessories-panel";
 
 type Rights = { editable: string[]; typeFields: string[]; canImport: boolean; canPlot: boolean; canElectrics: boolean };
 type Props = {
@@ -50,7 +51,7 @@ export function RigWorkspace(props: Props) {
   const accessories = useRigAccessories(productionId, props.initialAccessories).data ?? [];
   const [view, setView] = useState<RigViewId>(props.initialView);
   const [state, setState] = useState<TableState>(() => stateFor(props.initialView));
-  const [panel, setPanel] = useState<"import" | "types" | null>(null);
+  const [panel, setPanel] = useState<"import" | "types" | "accessories" | null>(null);
   const choices = useMemo(() => ({ position: props.positions, type: types.map((t) => ({ id: t.id, name: t.name })) }), [props.positions, types]);
 
   function chooseView(id: RigViewId) {
@@ -97,10 +98,12 @@ export function RigWorkspace(props: Props) {
         <a className="inline-flex min-h-10 items-center rounded-md border border-line bg-surface px-3 text-sm hover:bg-raised" href={exportHref("xlsx")} download data-testid="export-xlsx">Export .xlsx</a>
         <a className="inline-flex min-h-10 items-center rounded-md border border-line bg-surface px-3 text-sm hover:bg-raised" href={exportHref("xlsx", "workbook")} download>Whole workbook</a>
         <Button variant="secondary" onClick={() => setPanel(panel === "types" ? null : "types")}>Fixture types</Button>
+        <Button variant="secondary" onClick={() => setPanel(panel === "accessories" ? null : "accessories")}>Accessories</Button>
         {rights.canImport ? <Button onClick={() => setPanel(panel === "import" ? null : "import")}>Import a file</Button> : null}
       </div>
 
       {panel === "import" ? <ImportPanel productionId={productionId} units={units} onClose={() => setPanel(null)} /> : null}
+      {panel === "accessories" ? <AccessoriesPanel productionId={productionId} fixtures={fixtures} accessories={accessories} canEdit={rights.canElectrics} onClose={() => setPanel(null)} /> : null}
       {panel === "types" ? <TypesPanel productionId={productionId} types={types} canAdd={rights.canPlot} editableFields={rights.typeFields} units={units} onClose={() => setPanel(null)} /> : null}
 
       {view === "stock" ? (

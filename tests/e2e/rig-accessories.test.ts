@@ -1,0 +1,53 @@
+// The electrician adds an accessory to a fixture, sees a bad address refused, edits it and removes it.
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { BrowserContext } from "playwright-core";
+import { DEMO, openBrowser, screenshot, signIn } from "./support/browser";
+
+let browser: BrowserContext;
+beforeAll(async () => {
+  browser = await openBrowser({ width: 1440, height: 900 });
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe("accessories as the electrician", () => {
+  it("adds, checks, edits and removes a scroller", async () => {
+    const page = await browser.newPage();
+    await signIn(page, DEMO.electrician);
+    const id = Number(new URL(page.url()).pathname.split("/")[2]);
+    await page.goto(`/productions/${id}/rig`);
+    await page.getByTestId("rig-table").waitFor();
+    await page.getByRole("button", { name: "Accessories", exact: true }).click();
+    const panel = page.getByRole("region", { name: "Accessories" });
+    await panel.waitFor();
+    const before = await panel.getByTestId("accessory-row").count();
+
+    const select = panel.getByLabel("Fixture for the new accessory");
+    const fixtureName = (await select.locator("option").nth(1).textContent())!.trim();
+    await select.selectOption({ index: 1 });
+    await panel.getByLabel("Kind of the new accessory").fill("scroller");
+    await panel.getByLabel("Address of the new accessory").fill("512");
+    await panel.getByLabel("Slots of the new accessory").fill("2");
+    await panel.getByRole("button", { name: "Add accessory" }).click();
+    // ANSI E1.11: two slots from 512 run past the end of the universe
+    await expect(panel.getByRole("alert").first().textContent()).resolves.toMatch(/512/);
+    await panel.getByLabel("Address of the new accessory").fill("101");
+    await panel.getByLabel("Universe of the new accessory").fill("2");
+    await panel.getByLabel("Power (W) of the new accessory").fill("40");
+    await panel.getByRole("button", { name: "Add accessory" }).click();
+    await panel.getByRole("status").filter({ hasText: "Added a scroller" }).waitFor();
+    await expect.poll(() => panel.getByTestId("accessory-row").count()).toBe(before + 1);
+    await screenshot(page, "rig-accessories-electrician");
+
+    await panel.getByRole("button", { name: `Edit the scroller on ${fixtureName}` }).click();
+    await panel.getByLabel(`Weight (kg) of the scroller on ${fixtureName}`).fill("3.5");
+    await panel.getByRole("button", { name: "Save" }).click();
+    await panel.getByRole("status").filter({ hasText: "Saved the scroller" }).waitFor();
+    await panel.getByTestId("accessory-row").filter({ hasText: "3.5" }).waitFor();
+
+    await panel.getByRole("button", { name: `Remove the scroller on ${fixtureName}` }).click();
+    await expect.poll(() => panel.getByTestId("accessory-row").count()).toBe(before);
+    await page.close();
+  });
+});
