@@ -6,6 +6,8 @@ import type { Point } from "@/lib/optics";
 import { nearestOnScreen, boundsOf, inBounds, distanceToSegment } from "@/lib/plot/pick";
 import { projectOntoPosition } from "@/lib/plot/along-position";
 import { symbolPixels } from "@/lib/plot/symbol";
+import { gridStep } from "@/lib/plot/grid";
+import { snapPoint } from "@/lib/plot/snap";
 import { panBy, planToScreen, screenToPlan, wheelZoomFactor, zoomAbout, type View } from "@/lib/plot/view";
 import { symbolScreenPoint, type RigItem } from "@/components/plot/draw-rig";
 import type { PlotFixture } from "@/lib/plot/slim-fixtures";
@@ -25,6 +27,8 @@ type Args = {
 };
 
 const TWO_POINT_TOOLS = new Set(["position-line", "landmark", "cut", "calibrate"]);
+// Drawing tools whose points land on the visible grid (hold Alt to place freely).
+const SNAP_TOOLS = new Set(["position-line", "position-point", "area", "landmark"]);
 
 export function useCanvasGestures({ container, view, gesture, draft, preview, live, redraw }: Args) {
   useEffect(() => {
@@ -97,6 +101,11 @@ export function useCanvasGestures({ container, view, gesture, draft, preview, li
       return { kind: "pan", last: s };
     }
 
+    function snapFor(tool: string, plan: Point, e: PointerEvent): Point {
+      if (!SNAP_TOOLS.has(tool) || e.altKey) return plan;
+      return snapPoint(plan, gridStep(view.current.scale, live.current.props.production.displayUnits));
+    }
+
     function onDown(e: PointerEvent) {
       if (e.button !== 0 && e.button !== 1) return;
       const s = local(e);
@@ -111,7 +120,7 @@ export function useCanvasGestures({ container, view, gesture, draft, preview, li
       }
       downAt = s;
       const { props: p } = live.current;
-      const plan = screenToPlan(view.current, s);
+      const plan = snapFor(p.tool, screenToPlan(view.current, s), e);
       if (spaceDown || e.button === 1) gesture.current = { kind: "pan", last: s };
       else if (p.tool === "select") gesture.current = pick(s, e);
       else if (p.tool === "underlay") gesture.current = { kind: "underlay", from: plan, to: plan };
@@ -156,9 +165,11 @@ export function useCanvasGestures({ container, view, gesture, draft, preview, li
           p.events.preview(preview.current);
           break;
         }
+        case "line":
+          g.to = snapFor(g.tool, plan, e);
+          break;
         case "focusPoint":
         case "box":
-        case "line":
           g.to = plan;
           break;
         case "underlay":
@@ -179,8 +190,8 @@ export function useCanvasGestures({ container, view, gesture, draft, preview, li
       gesture.current = null;
       const s = local(e);
       const moved = downAt ? Math.hypot(s.x - downAt.x, s.y - downAt.y) > 3 : true;
-      const plan = screenToPlan(view.current, s);
       const { props: p, items } = live.current;
+      const plan = snapFor(p.tool, screenToPlan(view.current, s), e);
       if (!g) return redraw("all");
       if (g.kind === "pan" && !moved) {
         if (p.tool === "select") p.events.select({ fixtures: new Set(), positionId: null, focusPointId: null }, false);
