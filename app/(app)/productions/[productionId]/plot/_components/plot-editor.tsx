@@ -133,9 +133,9 @@ export function PlotEditor({ production, initial, canEdit }: { production: Produ
 function hintFor(tool: Tool, canEdit: boolean): string {
   if (!canEdit) return "View only · drag to pan · wheel to zoom";
   switch (tool) {
-    case "position-line": return "Drag to draw a pipe, bridge or rail";
-    case "position-point": return "Click where the boom or ladder stands";
-    case "area": return "Click the corners; double-click or Enter to close";
+    case "position-line": return "Drag to draw a pipe, bridge or rail · snaps to the grid (Alt: free)";
+    case "position-point": return "Click where the boom or ladder stands · snaps to the grid (Alt: free)";
+    case "area": return "Click the corners (snapped to the grid; Alt: free); double-click or Enter to close";
     case "landmark": return "Drag along the line to name (lip, leg, header)";
     case "cut": return "Drag a line across the pool to cut it";
     case "calibrate": return "Drag between two points whose real distance you know";
