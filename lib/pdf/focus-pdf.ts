@@ -1,7 +1,9 @@
 import "server-only";
 // Focus charts printed to PDF by the shared headless Chromium: the same sheets and stylesheet as the
 // browser's print view. Long prints go to the browser in parts of PART_SHEETS pages and are joined with
-// pdf-lib: Chromium keeps every page of a print in memory, and 375 pages in one go took over 3 GiB.
+// pdf-lib: Chromium keeps every page of a print in memory, and 375 pages in one go took over 3 GiB. Two
+// parts print at once in two pages of the one browser; parts are small so both together stay near the
+// memory one part of 40 pages took.
 import { PDFDocument } from "pdf-lib";
 import { CHART_CSS, sheetCss } from "@/lib/focus/chart-css";
 import { escapeHtml } from "@/lib/focus/escape";
@@ -18,7 +20,7 @@ export function printDocument(o: { title: string; paper: Paper; sheets: string }
 }
 
 const PRINT_TIMEOUT_MS = 120_000;
-export const PART_SHEETS = 40;
+export const PART_SHEETS = 20;
 /** Parts printed at once, each in its own page of the browser. */
 const PARALLEL_PARTS = 2;
 
