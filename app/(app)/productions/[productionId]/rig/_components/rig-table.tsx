@@ -101,7 +101,7 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
   const shownBodies = new Set<string>(); // bodies whose heading row is already drawn in this render
   const renderRow = (row: Row<FixtureDto>, isCell = false) => (
     <tr key={row.id} data-testid="rig-row" data-cell={isCell ? row.original.cell ?? "" : undefined}
-      className={`border-b border-line/60 align-top hover:bg-raised/50 print:break-inside-avoid ${row.getIsSelected() ? "bg-accent/10" : ""}`}>
+      className={`border-b border-line/60 align-middle hover:bg-raised/50 print:break-inside-avoid ${row.getIsSelected() ? "bg-accent/10" : ""}`}>
       {row.getVisibleCells().map((cell, i) => (
         <td key={cell.id} className={`whitespace-nowrap px-2 py-1 ${cell.column.id === "select" ? "print:hidden" : ""} ${isCell && i === 0 ? "border-l-4 border-l-accent/40" : ""}`}>
           {flexRender(cell.column.columnDef.cell, cell.getContext())}

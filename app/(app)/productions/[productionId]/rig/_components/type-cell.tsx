@@ -43,7 +43,7 @@ export function TypeCell({ productionId, type, column, units, editable }: { prod
     }
   }
 
-  if (!editable) return <span>{shown || "—"}</span>;
+  if (!editable) return <span className="px-1">{shown || "—"}</span>;
   if (!editing) {
     return (
       <span>

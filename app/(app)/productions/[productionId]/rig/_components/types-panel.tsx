@@ -27,7 +27,7 @@ export function TypesPanel({ productionId, types, canAdd, editableFields, units,
           <thead><tr>{TYPE_COLUMNS.map((c) => <th key={c.key} scope="col" className="border-b border-line py-1 pr-2 text-left text-xs">{c.header}</th>)}</tr></thead>
           <tbody>
             {types.map((t) => (
-              <tr key={t.id} className="border-b border-line/50 align-top">
+              <tr key={t.id} className="border-b border-line/50 align-middle">
                 {TYPE_COLUMNS.map((c) => (
                   <td key={c.key} className="py-1 pr-2">
                     <TypeCell productionId={productionId} type={t} column={c} units={units} editable={c.kind !== "readOnly" && c.fields.every((f) => editable.has(f))} />
