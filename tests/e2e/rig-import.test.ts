@@ -35,7 +35,10 @@ describe("rig import and export as the electrician", () => {
   it("imports a CSV, fixes a reported error, imports again and exports .xlsx", async () => {
     const page = await browser.newPage();
     const id = await openRig(page);
-    expect(await page.getByTestId("rig-row").count()).toBe(116);
+    // One row per fixture the server holds (other test files may have hung units in the demo).
+    const held = (await (await page.request.get(`/api/productions/${id}/fixtures`)).json()).fixtures.length;
+    expect(held).toBeGreaterThanOrEqual(116);
+    expect(await page.getByTestId("rig-row").count()).toBe(held);
     await screenshot(page, "rig-hanging-electrician");
     await page.screenshot({ path: path.join(SCREENSHOTS, "rig-hanging-electrician-viewport.png") });
 
