@@ -1,3 +1,4 @@
+import { Readable } from "node:stream";
 import ExcelJS from "exceljs";
 import { FileProblem, toRawTable, type RawRow, type RawTable } from "./table";
 
@@ -19,57 +20,115 @@ export function cellText(value: CellValue): string {
   return String(value);
 }
 
-function sheetRecords(sheet: ExcelJS.Worksheet): RawRow[] {
-  const records: RawRow[] = [];
-  const width = sheet.columnCount;
-  sheet.eachRow({ includeEmpty: false }, (row) => {
-    const cells: string[] = [];
-    for (let c = 1; c <= width; c++) {
-      const cell = row.getCell(c);
-      // A merged block holds its value in the top-left cell; every cell of the block reads that value
-      // (a position name merged down a column applies to each row).
-      const source = cell.isMerged && cell.master ? cell.master : cell;
-      cells.push(cellText(source.value).trim());
+type SheetRead = { name: string; records: RawRow[]; merges: string[] };
+// What the streaming reader gives per sheet; `name` and `iterator` are set by ExcelJS but not in its types.
+type StreamSheet = ExcelJS.stream.xlsx.WorksheetReader & { name: string; iterator: AsyncIterable<Buffer> } & AsyncIterable<ExcelJS.Row>;
+
+// ExcelJS's streaming reader skips <mergeCell>; the sheet's XML passes through here on its way to the
+// parser, and the merge ranges (they follow the cell data) are picked out of it. What is carried from
+// one chunk to the next is an unfinished <mergeCell …> or the last 10 characters (shorter than
+// "<mergeCell ", so nothing is counted twice). Read as latin1: the refs are ASCII.
+const MERGE = /<mergeCell\b[^>]*?\bref="([A-Z]+[0-9]+:[A-Z]+[0-9]+)"[^>]*>/g;
+async function* collectMerges(chunks: AsyncIterable<Buffer>, merges: string[]): AsyncGenerator<Buffer> {
+  let tail = "";
+  for await (const chunk of chunks) {
+    const text = tail + chunk.toString("latin1");
+    let end = 0;
+    if (text.includes("<mergeCell")) {
+      MERGE.lastIndex = 0;
+      for (let m = MERGE.exec(text); m; m = MERGE.exec(text)) {
+        merges.push(m[1]);
+        end = MERGE.lastIndex;
+      }
     }
-    records.push({ rowNumber: row.number, cells });
-  });
-  return records;
+    const open = text.lastIndexOf("<mergeCell");
+    tail = open >= end && !text.includes(">", open) ? text.slice(open) : text.slice(Math.max(end, text.length - 10));
+    yield chunk;
+  }
 }
 
-function firstFilledRow(sheet: ExcelJS.Worksheet): string[] | null {
-  // rowCount and columnCount walk the whole sheet on every read: take them once.
-  const rows = Math.min(sheet.rowCount, 50);
-  const width = sheet.columnCount;
-  for (let r = 1; r <= rows; r++) {
-    const row = sheet.getRow(r);
-    const cells: string[] = [];
-    for (let c = 1; c <= width; c++) cells.push(cellText(row.getCell(c).value).trim());
-    if (cells.some((c) => c !== "")) return cells;
-  }
-  return null;
+function decode(ref: string) {
+  const m = /^([A-Z]+)(\d+)$/.exec(ref)!;
+  let col = 0;
+  for (const ch of m[1]) col = col * 26 + ch.charCodeAt(0) - 64;
+  return { row: Number(m[2]), col };
 }
+
+// A merged block holds its value in the top-left cell; every cell of the block reads that value
+// (a position name merged down a column applies to each row).
+function fillMerges(records: RawRow[], merges: string[]) {
+  if (!merges.length) return;
+  const byNumber = new Map(records.map((r) => [r.rowNumber, r]));
+  for (const range of merges) {
+    const [a, b] = range.split(":").map(decode);
+    const value = byNumber.get(a.row)?.cells[a.col - 1] ?? "";
+    if (!value) continue;
+    for (let r = a.row; r <= b.row; r++) {
+      let record = byNumber.get(r);
+      if (!record) {
+        record = { rowNumber: r, cells: [] };
+        byNumber.set(r, record);
+        records.push(record);
+      }
+      for (let c = a.col; c <= b.col; c++) {
+        while (record.cells.length < c) record.cells.push("");
+        record.cells[c - 1] = value;
+      }
+    }
+  }
+  records.sort((x, y) => x.rowNumber - y.rowNumber);
+}
+
+async function readSheet(sheet: StreamSheet): Promise<SheetRead> {
+  const merges: string[] = [];
+  sheet.iterator = collectMerges(sheet.iterator, merges);
+  const records: RawRow[] = [];
+  for await (const row of sheet) {
+    const values = row.values as CellValue[];
+    const cells: string[] = [];
+    for (let c = 1; c < values.length; c++) cells.push(cellText(values[c] ?? null).trim());
+    if (cells.some((c) => c !== "")) records.push({ rowNumber: row.number, cells });
+  }
+  fillMerges(records, merges);
+  const width = Math.max(0, ...records.map((r) => r.cells.length));
+  for (const r of records) while (r.cells.length < width) r.cells.push("");
+  return { name: sheet.name, records, merges };
+}
+
+const firstFilledRow = (s: SheetRead) => s.records.find((r) => r.cells.some((c) => c !== ""))?.cells ?? null;
 
 /**
- * Reads an .xlsx workbook. Without a sheet name it takes the first sheet whose header row looks like
- * a fixture list (per `looksLikeHeader`), else the first sheet with data; the sheet names go back to
- * the caller so a person can pick another.
+ * Reads an .xlsx workbook with ExcelJS's streaming reader (values only: no styles, no workbook model).
+ * Without a sheet name it takes the first sheet whose header row looks like a fixture list (per
+ * `looksLikeHeader`), else the first sheet with data; the sheet names go back to the caller so a
+ * person can pick another.
  */
 export async function readXlsx(bytes: Uint8Array, opts: { sheet?: string; looksLikeHeader?: (cells: string[]) => boolean } = {}): Promise<RawTable> {
-  const workbook = new ExcelJS.Workbook();
+  const input = Readable.from([Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength)]);
+  // Styles are read so that date cells come back as dates (their format says so), not day numbers.
+  const reader = new ExcelJS.stream.xlsx.WorkbookReader(input, { worksheets: "emit", sharedStrings: "cache", hyperlinks: "ignore", styles: "cache", entries: "ignore" });
+  const read: SheetRead[] = [];
   try {
-    await workbook.xlsx.load(bytes as unknown as ArrayBuffer);
+    for await (const sheet of reader as unknown as AsyncIterable<StreamSheet>) {
+      // With a sheet asked for, the others pass by unread (ExcelJS drains them).
+      if (opts.sheet && sheet.name !== opts.sheet) continue;
+      read.push(await readSheet(sheet));
+    }
   } catch {
     throw new FileProblem("This file looks like a zipped Office file but is not a readable .xlsx workbook. Save it again as .xlsx or CSV.");
   }
-  const sheets = workbook.worksheets;
-  const sheetNames = sheets.map((s) => s.name);
-  if (!sheets.length) throw new FileProblem("The workbook has no sheets.");
-  let chosen: ExcelJS.Worksheet | undefined;
+  // Workbook order, which is what a person sees in the tabs (the zip's order can differ).
+  const model = (reader as unknown as { model?: { sheets?: Array<{ name: string }> } }).model;
+  const sheetNames = model?.sheets?.map((s) => s.name) ?? read.map((s) => s.name);
+  if (!sheetNames.length) throw new FileProblem("The workbook has no sheets.");
+  const order = (s: SheetRead) => sheetNames.indexOf(s.name);
+  read.sort((a, b) => order(a) - order(b));
+  let chosen: SheetRead | undefined;
   if (opts.sheet) {
-    chosen = sheets.find((s) => s.name === opts.sheet);
+    chosen = read[0];
     if (!chosen) throw new FileProblem(`The workbook has no sheet called "${opts.sheet}". Its sheets: ${sheetNames.join(", ")}.`);
   } else {
-    const withData = sheets.filter((s) => s.actualRowCount > 0);
+    const withData = read.filter((s) => s.records.length > 0);
     chosen =
       withData.find((s) => {
         const first = firstFilledRow(s);
@@ -77,5 +136,5 @@ export async function readXlsx(bytes: Uint8Array, opts: { sheet?: string; looksL
       }) ?? withData[0];
     if (!chosen) throw new FileProblem("Every sheet in the workbook is empty.");
   }
-  return toRawTable(sheetRecords(chosen), { decimalComma: false, sheetNames, sheet: chosen.name });
+  return toRawTable(chosen.records, { decimalComma: false, sheetNames, sheet: chosen.name });
 }

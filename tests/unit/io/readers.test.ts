@@ -75,6 +75,44 @@ describe("readXlsx", () => {
     ]);
   });
 
+  it("fills merged blocks anywhere in a large sheet the way ExcelJS's full workbook model reads them", async () => {
+    // Reference: ExcelJS's full (non-streaming) reader, whose cell.master gives each merged cell's value.
+    // 2,000 rows of long text put the <mergeCell> list far into the sheet's XML, across many chunks.
+    const file = await workbook((wb) => {
+      wb.addWorksheet("Cover").addRow(["notes"]);
+      const s = wb.addWorksheet("Rig");
+      s.addRow(["Position", "Unit", "Purpose", "Colour"]);
+      for (let i = 0; i < 2000; i++) s.addRow([i % 7 ? null : `Pipe ${i}`, i + 1, `wash ${"x".repeat(60)} ${i}`, i % 5 ? null : "L201"]);
+      for (let i = 0; i < 2000; i += 7) s.mergeCells(`A${i + 2}:A${Math.min(i + 8, 2001)}`);
+      for (let i = 0; i < 2000; i += 5) s.mergeCells(`D${i + 2}:D${i + 3}`);
+    });
+    const reference = new ExcelJS.Workbook();
+    await reference.xlsx.load(file as unknown as ArrayBuffer);
+    const expected: string[][] = [];
+    reference.getWorksheet("Rig")!.eachRow((row, n) => {
+      if (n > 1) expected.push([1, 2, 3, 4].map((c) => String((row.getCell(c).isMerged ? row.getCell(c).master : row.getCell(c)).value ?? "")));
+    });
+    const t = await readXlsx(file, { looksLikeHeader: looksLikeFixtureHeader });
+    expect(t.sheet).toBe("Rig");
+    expect(t.rows.map((r) => r.cells)).toEqual(expected);
+    expect(t.rows[1].cells[0]).toBe("Pipe 0");
+    expect(t.rows[1999].cells[3]).toBe("");
+  });
+
+  it("reads the sheet asked for by name, dates as dates and booleans as yes/no", async () => {
+    const file = await workbook((wb) => {
+      wb.addWorksheet("Rig").addRow(["Position", "Unit"]);
+      const s = wb.addWorksheet("Second");
+      s.addRow(["Position", "Unit", "Checked", "Hung"]);
+      s.addRow(["Boom SL", "3", new Date(Date.UTC(2026, 11, 2)), true]);
+      s.getCell("C2").numFmt = "dd/mm/yyyy";
+    });
+    const t = await readXlsx(file, { sheet: "Second" });
+    expect(t.sheet).toBe("Second");
+    expect(t.sheetNames).toEqual(["Rig", "Second"]);
+    expect(t.rows).toEqual([{ rowNumber: 2, cells: ["Boom SL", "3", "2026-12-02", "yes"] }]);
+  });
+
   it("names the sheets when asked for one that does not exist, and refuses a broken zip", async () => {
     const file = await workbook((wb) => wb.addWorksheet("Rig").addRow(["Position", "Unit"]));
     await expect(readXlsx(file, { sheet: "Nope" })).rejects.toThrow(/Rig/);
