@@ -28,6 +28,10 @@ export const CHART_CSS = `
 .fc-cutlist li{display:inline}
 .fc-cutlist li+li::before{content:" · "}
 .fc-notes{display:flex;flex-direction:column;gap:.15em}
+.fc-foot{display:flex;gap:.6em;align-items:flex-start;min-height:0}
+.fc-foot .fc-notes{flex:1;min-width:0}
+.fc-photo{flex:0 0 auto;display:block;line-height:0}
+.fc-photo img{display:block;height:6em;width:auto;max-width:9em;object-fit:cover;border:1px solid var(--fc-line);border-radius:3px}
 .fc-note-label{color:var(--fc-muted)}
 .fc-none{color:var(--fc-muted);font-style:italic;display:inline;margin:0}
 .fc-warn-text{margin:0;color:var(--caution,#8a6100)}

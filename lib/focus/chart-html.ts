@@ -26,6 +26,13 @@ function notesHtml(label: string, text: string | null, cls: string): string {
   return `<div class="fc-note ${cls}"><span class="fc-note-label">${label}</span> ${text?.trim() ? escapeHtml(text) : `<span class="fc-none">none</span>`}</div>`;
 }
 
+// The deck photo beside the notes: a small copy (a data: URL in the server's PDF), linked to the full one on screen.
+function photoHtml(chart: FocusChart): string {
+  if (!chart.photo) return "";
+  const img = `<img src="${escapeHtml(chart.photo.thumbSrc)}" alt="Focus photo of ${escapeHtml(chart.positionName)} unit ${escapeHtml(chart.unitNumber)}" data-testid="focus-photo-thumb">`;
+  return chart.photo.href ? `<a class="fc-photo" href="${escapeHtml(chart.photo.href)}" target="_blank" rel="noopener">${img}</a>` : `<span class="fc-photo">${img}</span>`;
+}
+
 export function chartHtml(chart: FocusChart, o: { landmarks: Landmark[]; units: Units }): string {
   const svg = diagramSvg({
     fixture: chart.fixture,
@@ -42,6 +49,6 @@ export function chartHtml(chart: FocusChart, o: { landmarks: Landmark[]; units: 
     `<dl class="fc-fields fc-identity">${rows(chart.identity, ["position", "unit", "channel"])}</dl>` +
     `<dl class="fc-fields fc-focus">${rows(chart.focus)}${rows(chart.beam)}</dl></div>` +
     `<section class="fc-cuts"><h4>Cuts</h4>${cutsHtml(chart)}</section>` +
-    `<section class="fc-notes">${notesHtml("Designer:", chart.notes, "fc-designer")}${notesHtml("As focused:", chart.focusNotes, "fc-electrician")}</section>` +
+    `<div class="fc-foot"><section class="fc-notes">${notesHtml("Designer:", chart.notes, "fc-designer")}${notesHtml("As focused:", chart.focusNotes, "fc-electrician")}</section>${photoHtml(chart)}</div>` +
     warn + `</article>`;
 }

@@ -6,13 +6,15 @@ import {
 } from "@/lib/optics";
 import { mergeLandmarks, outlineLandmarks, type Landmark, type StageOutline } from "./landmarks";
 import { readCut, type CutReading } from "./shutters";
-import { formatStamp, offsetFromMark } from "./words";
+import { barnDoorWords, formatStamp, goboRotationWords, offsetFromMark } from "./words";
 
 export type ChartProduction = StageOutline & { name: string; displayUnits: Units; headHeight: number };
 /** Fields the data model may not hold yet (accessories come with the rig work); shown as "none recorded". */
 export type ChartExtras = { accessories?: string[]; barnDoors?: string | null; goboOrientation?: string | null };
 
 export type ChartRow = { key: string; label: string; value: string };
+/** The focus photo taken on the deck: a small copy for the chart, the full copy behind a link. */
+export type ChartPhoto = { uploadId: number; thumbSrc: string; href: string };
 
 export type FocusChart = {
   id: number;
@@ -31,6 +33,7 @@ export type FocusChart = {
   cuts: CutReading[];
   notes: string | null;
   focusNotes: string | null;
+  photo: ChartPhoto | null;
   warnings: string[];
   fixture: FixtureDto;
 };
@@ -119,8 +122,8 @@ export function buildFocusChart(
     row("zoom", "Zoom", `${round1(g.coneDeg)}° cone, ${round1(g.softnessDeg)}° soft`),
     row("field", "Field", shape ? (shape === "flat" ? "flat" : "peaked") : null),
     row("iris", "Iris", f.irisPercent == null ? "open" : `${round1(f.irisPercent)} %`),
-    row("barnDoors", "Barn doors", o.extras?.barnDoors ?? (cuts.some((c) => c.cutter === "barn door") ? "see cuts" : "none recorded")),
-    row("goboOrientation", "Gobo orientation", f.gobo ? o.extras?.goboOrientation ?? "not recorded" : "no gobo"),
+    row("barnDoors", "Barn doors", barnDoorsValue(f, o.extras, cuts)),
+    row("goboOrientation", "Gobo rotation", goboValue(f, o.extras)),
   ];
   const who = f.focusedBy != null ? o.userNames?.[f.focusedBy] ?? "a former team member" : null;
   const focusedLine = f.focused
@@ -130,8 +133,27 @@ export function buildFocusChart(
   return {
     id: f.id, positionId: f.positionId, positionName: f.positionName, unitNumber: f.unitNumber, channel: f.channel,
     focusPointId: f.focusPointId, mark, version: f.version, focused: f.focused, focusedLine,
-    identity, focus, beam, cuts, notes: f.notes, focusNotes: f.focusNotes, warnings, fixture: f,
+    identity, focus, beam, cuts, notes: f.notes, focusNotes: f.focusNotes, photo: photoOf(f), warnings, fixture: f,
   };
+}
+
+/** Where the photo is served (members only); the upload id in the address changes when the photo does. */
+export function photoOf(f: Pick<FixtureDto, "id" | "productionId" | "focusPhotoUploadId">): ChartPhoto | null {
+  if (f.focusPhotoUploadId == null) return null;
+  const base = `/api/productions/${f.productionId}/fixtures/${f.id}/photo?u=${f.focusPhotoUploadId}`;
+  return { uploadId: f.focusPhotoUploadId, thumbSrc: `${base}&size=thumb`, href: base };
+}
+
+// The fixture's own fields first; an accessory's note or a barn-door cut drawn on the plot otherwise.
+function barnDoorsValue(f: FixtureDto, extras: ChartExtras | undefined, cuts: CutReading[]): string {
+  const own = barnDoorWords({ top: f.barnDoorTop, bottom: f.barnDoorBottom, left: f.barnDoorLeft, right: f.barnDoorRight });
+  if (own) return own;
+  return extras?.barnDoors ?? (cuts.some((c) => c.cutter === "barn door") ? "see cuts" : "none recorded");
+}
+
+function goboValue(f: FixtureDto, extras: ChartExtras | undefined): string {
+  if (f.goboRotationDeg != null) return f.gobo ? goboRotationWords(f.goboRotationDeg) : `${goboRotationWords(f.goboRotationDeg)} (no gobo named)`;
+  return f.gobo ? extras?.goboOrientation ?? "not recorded" : "no gobo";
 }
 
 function round1(v: number): string {

@@ -30,3 +30,32 @@ export function isTimeZone(tz: string): boolean {
     return false;
   }
 }
+
+const deg1 = (v: number) => `${Math.round(v * 10) / 10}°`;
+
+/**
+ * A gobo's rotation in the crew's words. Degrees are clockwise, looking along the beam from behind the
+ * fixture, 0 = the gobo as drawn. A lens turns the image by 180° (a point inversion), which commutes with a
+ * rotation, so turning the gobo clockwise turns the projected image clockwise by the same angle — the
+ * words hold for the gobo in the gate and for its image. Past 180° the shorter way round is named.
+ */
+export function goboRotationWords(deg: number): string {
+  const d = Math.round((((deg % 360) + 360) % 360) * 10) / 10 % 360;
+  if (d === 0) return "upright, as drawn (0°)";
+  if (d === 180) return "upside down (180°)";
+  if (d < 180) return `${deg1(d)} clockwise, looking along the beam`;
+  return `${deg1(360 - d)} anticlockwise (${deg1(d)}), looking along the beam`;
+}
+
+export type BarnDoorNotes = { top?: string | null; bottom?: string | null; left?: string | null; right?: string | null };
+const LEAVES = ["top", "bottom", "left", "right"] as const;
+
+/**
+ * The barn doors as focused, leaf by leaf: "top in halfway · left to the leg". Leaves are named as seen
+ * from behind the fixture; the doors sit after the lens, so each leaf cuts its own side of the beam (the
+ * top door cuts the top of the beam), unlike a profile's shutters. Null when no leaf has a note.
+ */
+export function barnDoorWords(d: BarnDoorNotes): string | null {
+  const parts = LEAVES.flatMap((leaf) => (d[leaf]?.trim() ? [`${leaf} ${d[leaf]!.trim()}`] : []));
+  return parts.length ? parts.join(" · ") : null;
+}
