@@ -29,7 +29,8 @@ function rig(n: number): FixtureDto[] {
       colour: "L201", gobo: i % 7 === 0 ? "breakup" : null, purpose: foh ? "front light" : "top light", x: lens.x, y: lens.y, lensHeight: lens.z,
       focusX: mark.x, focusY: mark.y, aim: (i % 2 ? "deck" : "head") as "deck" | "head", coneDeg: 26, softnessDeg: 3,
       shutterCuts: i % 4 === 0 ? [{ label: "top" as const, a: { x: -6, y: -1.5 }, b: { x: 6, y: -1.5 } }] : null, irisPercent: null,
-      notes: i % 5 === 0 ? "Keep off the set edge." : null, focusNotes: null, hung: true, focused: i % 3 === 0,
+      notes: i % 5 === 0 ? "Keep off the set edge." : null, focusNotes: null, focusPhotoUploadId: null, goboRotationDeg: i % 7 === 0 ? 45 : null,
+      barnDoorTop: null, barnDoorBottom: null, barnDoorLeft: null, barnDoorRight: null, hung: true, focused: i % 3 === 0,
       focusedAt: i % 3 === 0 ? "2026-12-02T10:00:00.000Z" : null, focusedBy: i % 3 === 0 ? 1 : null, version: 1, updatedAt: "2026-12-02T10:00:00.000Z",
     };
     const computed = computeFixtureGeometry({ ...record, focusPoint: null, position: { trimHeight: 8 }, type: { coneMinDeg: 19, coneMaxDeg: 50, defaultSoftnessDeg: 2, lensDropM: 0.4 } }, 1.7);

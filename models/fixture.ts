@@ -36,6 +36,12 @@ export class Fixture extends Model<InferAttributes<Fixture>, InferCreationAttrib
   declare irisPercent: number | null;
   declare notes: string | null;
   declare focusNotes: string | null;
+  declare focusPhotoUploadId: number | null;
+  declare goboRotationDeg: number | null;
+  declare barnDoorTop: string | null;
+  declare barnDoorBottom: string | null;
+  declare barnDoorLeft: string | null;
+  declare barnDoorRight: string | null;
   declare hung: CreationOptional<boolean>;
   declare focused: CreationOptional<boolean>;
   declare focusedAt: Date | null;
@@ -83,6 +89,12 @@ export function initFixture(sequelize: Sequelize) {
       irisPercent: dbl(),
       notes: { type: DataTypes.TEXT, allowNull: true },
       focusNotes: { type: DataTypes.TEXT, allowNull: true },
+      focusPhotoUploadId: int(),
+      goboRotationDeg: dbl(),
+      barnDoorTop: str(60),
+      barnDoorBottom: str(60),
+      barnDoorLeft: str(60),
+      barnDoorRight: str(60),
       hung: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
       focused: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
       focusedAt: { type: DataTypes.DATE, allowNull: true },

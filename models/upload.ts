@@ -1,6 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
 
-export type UploadKind = "underlay" | "import";
+export type UploadKind = "underlay" | "import" | "focus-photo";
 
 /** A stored file. Underlays carry their calibration: metres per image pixel, plan offset, rotation, opacity, lock. */
 export class Upload extends Model<InferAttributes<Upload>, InferCreationAttributes<Upload>> {
@@ -30,7 +30,7 @@ export function initUpload(sequelize: Sequelize) {
     {
       id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
       productionId: { type: DataTypes.INTEGER, allowNull: false },
-      kind: { type: DataTypes.ENUM("underlay", "import"), allowNull: false },
+      kind: { type: DataTypes.ENUM("underlay", "import", "focus-photo"), allowNull: false },
       fileName: { type: DataTypes.STRING(200), allowNull: false },
       storageKey: { type: DataTypes.STRING(200), allowNull: false },
       contentType: { type: DataTypes.STRING(60), allowNull: false },

@@ -86,6 +86,14 @@ const FIXTURE_FIELDS: Record<string, Permission> = {
   hung: "rig.editElectrics",
   focused: "rig.editElectrics",
   focusNotes: "rig.editElectrics",
+  // Issue 6: the designer chooses the gobo's orientation; the crew records the barn doors as focused and
+  // takes the focus photo on the deck (the designer holds the electrics right too).
+  goboRotationDeg: "plot.edit",
+  barnDoorTop: "rig.editElectrics",
+  barnDoorBottom: "rig.editElectrics",
+  barnDoorLeft: "rig.editElectrics",
+  barnDoorRight: "rig.editElectrics",
+  focusPhotoUploadId: "rig.editElectrics",
 };
 
 const FIXTURE_TYPE_FIELDS: Record<string, Permission> = {

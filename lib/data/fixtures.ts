@@ -39,6 +39,12 @@ export type FixtureRecord = {
   irisPercent: number | null;
   notes: string | null;
   focusNotes: string | null;
+  focusPhotoUploadId: number | null;
+  goboRotationDeg: number | null;
+  barnDoorTop: string | null;
+  barnDoorBottom: string | null;
+  barnDoorLeft: string | null;
+  barnDoorRight: string | null;
   hung: boolean;
   focused: boolean;
   focusedAt: string | null;
@@ -87,6 +93,12 @@ export function toFixtureRecord(f: Fixture): FixtureRecord {
     irisPercent: f.irisPercent,
     notes: f.notes,
     focusNotes: f.focusNotes,
+    focusPhotoUploadId: f.focusPhotoUploadId ?? null,
+    goboRotationDeg: f.goboRotationDeg ?? null,
+    barnDoorTop: f.barnDoorTop ?? null,
+    barnDoorBottom: f.barnDoorBottom ?? null,
+    barnDoorLeft: f.barnDoorLeft ?? null,
+    barnDoorRight: f.barnDoorRight ?? null,
     hung: Boolean(f.hung),
     focused: Boolean(f.focused),
     focusedAt: iso(f.focusedAt),
@@ -235,6 +247,7 @@ function emptyFixture() {
     focusPointId: null, bodyKey: null, cell: null, channel: null, universe: null, address: null, dmxMode: null, footprint: null,
     circuit: null, dimmer: null, colour: null, gobo: null, purpose: null, lensHeight: null, focusX: null, focusY: null,
     coneDeg: null, softnessDeg: null, shutterCuts: null, irisPercent: null, notes: null, focusNotes: null, focusedAt: null, focusedBy: null,
+    focusPhotoUploadId: null, goboRotationDeg: null, barnDoorTop: null, barnDoorBottom: null, barnDoorLeft: null, barnDoorRight: null,
   };
 }
 

@@ -4,6 +4,8 @@ import { versionSchema } from "./common";
 const optionalText = (max: number) => z.string().trim().max(max, { error: `at most ${max} characters` }).nullable();
 const planCoord = (what: string) =>
   z.number({ error: `${what} must be a number of metres` }).min(-200, { error: `${what} is far outside any venue (more than 200 m from the datum)` }).max(200, { error: `${what} is far outside any venue (more than 200 m from the datum)` });
+const barnDoorLeaf = (leaf: string) =>
+  z.string({ error: `Barn door (${leaf}) must be text, e.g. "in halfway"` }).trim().max(60, { error: `Barn door (${leaf}) is at most 60 characters` }).nullable();
 const point = z.object({ x: planCoord("x"), y: planCoord("y") });
 
 export const shutterCutSchema = z.object({
@@ -40,6 +42,16 @@ export const fixtureFieldsSchema = z.object({
     irisPercent: z.number().min(0).max(100).nullable(),
     notes: optionalText(4000),
     focusNotes: optionalText(4000),
+    // Degrees turned clockwise, looking along the beam from behind the fixture; 0 = as the gobo is drawn.
+    goboRotationDeg: z
+      .number({ error: "Gobo rotation must be a number of degrees (0 to 359.9)" })
+      .min(0, { error: "Gobo rotation must be 0° or more (use 0–359.9°, clockwise looking along the beam)" })
+      .lt(360, { error: "Gobo rotation must be less than 360° (use 0–359.9°, clockwise looking along the beam)" })
+      .nullable(),
+    barnDoorTop: barnDoorLeaf("top"),
+    barnDoorBottom: barnDoorLeaf("bottom"),
+    barnDoorLeft: barnDoorLeaf("left"),
+    barnDoorRight: barnDoorLeaf("right"),
     bodyKey: optionalText(40),
     cell: z.number().int().min(1).max(64).nullable(),
     hung: z.boolean(),
