@@ -8,20 +8,12 @@ import os from "node:os";
 import { performance } from "node:perf_hooks";
 import { buildCueSheet, computeTracking, type CueMoves, type SheetCue } from "../lib/cues";
 import { ensureDatabase, ensureServer, stopAll } from "./support/cues-env";
+import { seededRandom, summarise } from "./support/numbers";
 
-/** Deterministic pseudo-random numbers (mulberry32), so every run times the same show. */
-function rng(seed: number) {
-  return () => {
-    seed = (seed + 0x6d2b79f5) | 0;
-    let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /** Sparse moves as in real shows: most cues move 2–20 channels, a few a third of the rig; some follow, some have parts or links. */
 function show(cues: number, channels: number, seed = 7): SheetCue[] {
-  const r = rng(seed);
+  const r = seededRandom(seed);
   return Array.from({ length: cues }, (_, i) => {
     const big = r() < 0.05;
     const count = big ? Math.floor(channels / 3) : 2 + Math.floor(r() * 19);
@@ -34,11 +26,6 @@ function show(cues: number, channels: number, seed = 7): SheetCue[] {
   });
 }
 
-function stats(samples: number[]) {
-  const t = [...samples].sort((a, b) => a - b);
-  return { median: t[Math.floor(t.length / 2)], p95: t[Math.min(t.length - 1, Math.ceil(t.length * 0.95) - 1)], max: t[t.length - 1] };
-}
-
 async function time(fn: () => unknown, runs = 21) {
   await fn(); // warm-up
   const t: number[] = [];
@@ -47,7 +34,7 @@ async function time(fn: () => unknown, runs = 21) {
     await fn();
     t.push(performance.now() - s);
   }
-  return stats(t);
+  return summarise(t);
 }
 
 const fmt = (ms: number) => `${ms.toFixed(ms < 10 ? 2 : 1)} ms`;

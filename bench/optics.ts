@@ -3,23 +3,15 @@
 import os from "node:os";
 import { performance } from "node:perf_hooks";
 import { illuminanceGrid, poolAtPlane, type Family, type LitBeam, type PoolInput } from "../lib/optics";
+import { seededRandom, summarise } from "./support/numbers";
 
-/** Deterministic pseudo-random numbers (mulberry32), so every run times the same rig. */
-function rng(seed: number) {
-  return () => {
-    seed = (seed + 0x6d2b79f5) | 0;
-    let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 const FAMILIES: Family[] = ["profile", "profile", "fresnel", "wash", "par", "led-wash", "followspot"];
 const STAGE = { minX: -8, minY: 0, maxX: 8, maxY: 12 }; // 16 m × 12 m, setting line at y = 0
 
 /** A plausible rig: overhead pipes, front of house, booms; focus marks on the stage at deck or head height. */
 function rig(n: number, seed = 42): LitBeam[] {
-  const r = rng(seed);
+  const r = seededRandom(seed);
   const beams: LitBeam[] = [];
   for (let k = 0; k < n; k++) {
     const kind = r();
@@ -39,17 +31,6 @@ function rig(n: number, seed = 42): LitBeam[] {
   return beams;
 }
 
-function median(xs: number[]): number {
-  const s = xs.slice().sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)];
-}
-
-// The machine is shared, so both the median and the best run are printed: the best is the code's own cost,
-// the median what a busy machine gives.
-function best(xs: number[]): number {
-  return Math.min(...xs);
-}
-
 function benchPools(): { perSecond: number; bestPerSecond: number; calls: number } {
   // Plain PoolInput literals, as a caller builds them. (Objects spread from bigger rows ran about 2.5× slower
   // in V8 on this machine: property access on their hidden classes, not the geometry.)
@@ -67,9 +48,11 @@ function benchPools(): { perSecond: number; bestPerSecond: number; calls: number
   };
   run(200_000); // warm-up: let the JIT settle
   const calls = 2_000_000;
-  const times = [run(calls), run(calls), run(calls), run(calls), run(calls)];
+  // The machine is shared, so both the median and the best run are printed: the best is the code's own cost,
+  // the median what a busy machine gives.
+  const { median, best } = summarise([run(calls), run(calls), run(calls), run(calls), run(calls)]);
   if (sink === 42) console.log(""); // keeps the loop's result alive
-  return { perSecond: (calls / median(times)) * 1000, bestPerSecond: (calls / best(times)) * 1000, calls };
+  return { perSecond: (calls / median) * 1000, bestPerSecond: (calls / best) * 1000, calls };
 }
 
 function timeGrid(beams: LitBeam[], cull: boolean, runs: number) {
@@ -82,7 +65,8 @@ function timeGrid(beams: LitBeam[], cull: boolean, runs: number) {
     grid = illuminanceGrid(input);
     times.push(performance.now() - t0);
   }
-  return { ms: median(times), bestMs: best(times), grid };
+  const { median, best } = summarise(times);
+  return { ms: median, bestMs: best, grid };
 }
 
 function benchGrid(n: number) {

@@ -3,21 +3,13 @@ import { describe, expect, it } from "vitest";
 import {
   gridPoint, illuminanceAt, illuminanceGrid, zoneStats, type Family, type GridCells, type LitBeam,
 } from "@/lib/optics";
+import { seededRandom } from "@/bench/support/numbers";
 
-/** Deterministic pseudo-random numbers (mulberry32) so the rig is the same on every run. */
-function rng(seed: number) {
-  return () => {
-    seed = (seed + 0x6d2b79f5) | 0;
-    let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 const FAMILIES: Family[] = ["profile", "fresnel", "wash", "par", "led-wash", "cyc", "followspot"];
 
 function rig(n: number, seed: number): LitBeam[] {
-  const r = rng(seed);
+  const r = seededRandom(seed);
   const beams: LitBeam[] = [];
   for (let k = 0; k < n; k++) {
     beams.push({
