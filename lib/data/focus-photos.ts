@@ -11,6 +11,7 @@ import { getDb } from "@/models";
 import { AppError, notFound } from "@/lib/errors";
 import { fileStore, MAX_UPLOAD_BYTES } from "@/lib/storage";
 import { sniffImageType } from "@/lib/storage/sniff";
+import type { ChartPhoto } from "@/lib/focus/chart-model";
 import { getFixtureById, toFixtureRecord, type FixtureDto } from "./fixtures";
 import { toUploadDto } from "./uploads";
 import { versionedUpdate } from "./versioned";
@@ -148,4 +149,16 @@ export async function focusPhotoThumbs({ productionId, uploadIds }: { production
     );
   }
   return out;
+}
+
+/** Charts ready for the server's PDF: each photo as its small copy inline, without a link (the PDF has no session). */
+export async function withEmbeddedPhotos<C extends { photo: ChartPhoto | null }>(productionId: number, charts: C[]): Promise<C[]> {
+  const ids = charts.flatMap((c) => (c.photo ? [c.photo.uploadId] : []));
+  if (!ids.length) return charts;
+  const thumbs = await focusPhotoThumbs({ productionId, uploadIds: ids });
+  return charts.map((c) => {
+    if (!c.photo) return c;
+    const src = thumbs.get(c.photo.uploadId);
+    return { ...c, photo: src ? { ...c.photo, thumbSrc: src, href: "" } : null };
+  });
 }

@@ -5,6 +5,7 @@ import { paginate } from "@/lib/focus/pages";
 import { sheetParts } from "@/lib/focus/sheets-html";
 import { formatStamp } from "@/lib/focus/words";
 import { loadFocusCharts } from "@/lib/pdf/focus-source";
+import { withEmbeddedPhotos } from "@/lib/data/focus-photos";
 import { renderPdf } from "@/lib/pdf/focus-pdf";
 import { chromiumMissing, CHROMIUM_PATH } from "@/lib/pdf/browser";
 import { AppError } from "@/lib/errors";
@@ -19,7 +20,9 @@ export const GET = route(async (req, { params }: Ctx) => {
   if (chromiumMissing()) {
     throw new AppError("unavailable", `PDF printing needs Chromium at ${CHROMIUM_PATH}, which is not installed on this server. Install it (apt-get install chromium; npm start does this), or open the print view and use your browser's "Save as PDF".`);
   }
-  const { production, charts, landmarks } = await loadFocusCharts({ productionId, filter, timeZone: filter.tz });
+  const loaded = await loadFocusCharts({ productionId, filter, timeZone: filter.tz });
+  const { production, landmarks } = loaded;
+  const charts = await withEmbeddedPhotos(productionId, loaded.charts);
   const printedAt = formatStamp(new Date(), filter.tz);
   const sheets = paginate(charts, filter.perPage, { newPagePerPosition: filter.newPagePerPosition });
   const pdf = await renderPdf({
