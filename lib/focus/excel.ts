@@ -21,6 +21,7 @@ export function focusColumns(sample: FocusChart | undefined): SheetColumn[] {
     { header: "Designer notes", key: "notes", width: 36 },
     { header: "As-focused notes", key: "focusNotes", width: 36 },
     { header: "Status", key: "status", width: 30 },
+    { header: "Focus photo", key: "photo", width: 14 },
   ];
 }
 
@@ -33,6 +34,8 @@ export function focusRow(c: FocusChart): Record<string, string | number> {
   out.notes = neutraliseCell(c.notes ?? "");
   out.focusNotes = neutraliseCell(c.focusNotes ?? "");
   out.status = neutraliseCell(c.focusedLine);
+  // The picture stays in Throwline (a sheet a row per fixture has no room for it); the cell says one exists.
+  out.photo = c.photo ? "taken" : "";
   return out;
 }
 

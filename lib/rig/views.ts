@@ -13,8 +13,8 @@ export type RigView = {
 
 const ALL = [
   "position", "unitNumber", "type", "channel", "universe", "address", "dmxMode", "footprint", "circuit", "dimmer", "colour", "gobo", "purpose",
-  "x", "y", "lensHeight", "focusPoint", "focusX", "focusY", "aim", "coneDeg", "softnessDeg", "irisPercent", "hung", "focused", "notes", "focusNotes",
-  "bodyKey", "cell", "throw", "deckLength", "deckWidth", "headLength", "headWidth", "softBandFar",
+  "x", "y", "lensHeight", "focusPoint", "focusX", "focusY", "aim", "coneDeg", "softnessDeg", "irisPercent", "goboRotationDeg", "barnDoorTop", "barnDoorBottom", "barnDoorLeft", "barnDoorRight",
+  "hung", "focused", "notes", "focusNotes", "bodyKey", "cell", "throw", "deckLength", "deckWidth", "headLength", "headWidth", "softBandFar",
 ];
 
 export const RIG_VIEWS: RigView[] = [
@@ -44,7 +44,7 @@ export const RIG_VIEWS: RigView[] = [
     id: "focus",
     label: "Focus values",
     description: "Marks, cones and the computed throw and pools at the deck and at head height.",
-    columns: ["position", "unitNumber", "type", "focusPoint", "focusX", "focusY", "aim", "coneDeg", "softnessDeg", "throw", "deckLength", "deckWidth", "headLength", "headWidth", "softBandFar", "focused", "focusNotes"],
+    columns: ["position", "unitNumber", "type", "focusPoint", "focusX", "focusY", "aim", "coneDeg", "softnessDeg", "goboRotationDeg", "throw", "deckLength", "deckWidth", "headLength", "headWidth", "softBandFar", "focused", "focusNotes"],
     sort: [{ id: "position" }, { id: "unitNumber" }],
   },
   { id: "all", label: "Every column", description: "Every stored field and every computed value.", columns: ALL, sort: [{ id: "position" }, { id: "unitNumber" }] },

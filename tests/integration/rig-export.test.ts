@@ -12,10 +12,10 @@ import { download, fixturesOf, rigProduction, upload } from "./rig-upload";
 async function seeded(units: "metric" | "imperial") {
   const p = await rigProduction(units);
   const csv = [
-    "Position,Unit,Type,Channel,Universe,Address,Colour,Purpose,X (m),Y (m),Lens height (m),Focus X (m),Focus Y (m),Cone,Hung,Notes",
-    "LX1,1,Profile 26,1,1,1,L201 + #132,Area 1,-3.3333333,1,6.55,-2,3.1,24.5,yes,=SUM(A1:A2)",
-    "LX1,2,Profile 26,2,1,2,N/C,Area 2,3.14159,1,,2,3,,no,\"comma, and \"\"quote\"\"\"",
-    "Boom SL,1,Wash 13,3,1,10,,side,7,2,2.2,0,4,30,no,+1 spare lamp",
+    "Position,Unit,Type,Channel,Universe,Address,Colour,Purpose,X (m),Y (m),Lens height (m),Focus X (m),Focus Y (m),Cone,Hung,Notes,Gobo rotation,Barn door top",
+    "LX1,1,Profile 26,1,1,1,L201 + #132,Area 1,-3.3333333,1,6.55,-2,3.1,24.5,yes,=SUM(A1:A2),112.5,",
+    "LX1,2,Profile 26,2,1,2,N/C,Area 2,3.14159,1,,2,3,,no,\"comma, and \"\"quote\"\"\",,",
+    "Boom SL,1,Wash 13,3,1,10,,side,7,2,2.2,0,4,30,no,+1 spare lamp,,in halfway",
   ].join("\n");
   const r = await upload(p.s, p.id, { name: "seed.csv", body: csv }, { mode: "commit" });
   expect(r.status).toBe(200);
@@ -32,7 +32,7 @@ describe("round trip", () => {
         expect(file.status).toBe(200);
         const p = await upload(s, id, { name: `rig.${format}`, body: file.bytes }, { mode: "preview" });
         expect(p.json.preview).toMatchObject({ errorCount: 0, counts: { create: 0, update: 0, unchanged: 3 } });
-        expect(p.json.preview.mapping.filter((m: string) => m !== "ignore")).toHaveLength(29);
+        expect(p.json.preview.mapping.filter((m: string) => m !== "ignore")).toHaveLength(34); // 29 stored fields before issue 6's gobo rotation and four barn-door leaves
         const c = await upload(s, id, { name: `rig.${format}`, body: file.bytes }, { mode: "commit" });
         expect(c.status).toBe(200);
         expect(await fixturesOf(s, id)).toEqual(before);
