@@ -14,7 +14,10 @@ export function useFocusFixtures(productionId: number, initial: FixtureDto[]) {
   });
 }
 
-export type FocusPatch = { focused?: boolean; focusNotes?: string | null; notes?: string | null };
+export type FocusPatch = {
+  focused?: boolean; focusNotes?: string | null; notes?: string | null; goboRotationDeg?: number | null;
+  barnDoorTop?: string | null; barnDoorBottom?: string | null; barnDoorLeft?: string | null; barnDoorRight?: string | null;
+};
 
 /**
  * Marks a fixture focused or edits its notes. The cache takes the server's row on success; a 409 (someone

@@ -8,7 +8,9 @@ import { useFocusFixtures } from "@/hooks/use-focus";
 import { neighboursOf, poolPlanSvg } from "@/lib/focus/plan-svg";
 import { toQuery } from "@/lib/focus/filters";
 import { ChartCard } from "./chart-card";
+import { BeamFields } from "./beam-fields";
 import { FocusControls } from "./focus-controls";
+import { FocusPhoto } from "./focus-photo";
 import { orderForStrip, UnitStrip } from "./unit-strip";
 import { browserTimeZone, useCharts, useInBrowser } from "./use-charts";
 import type { FocusPageData } from "./types";
@@ -86,6 +88,10 @@ export function FocusCall({ data }: { data: FocusPageData }) {
                     </figcaption>
                   </figure>
                   <FocusControls fixture={current} chart={chart} data={data} onNext={nextUnit} />
+                </div>
+                <div className="grid gap-3 sm:grid-cols-2">
+                  <FocusPhoto fixture={current} chart={chart} data={data} />
+                  <BeamFields fixture={current} data={data} />
                 </div>
               </>
             ) : (

@@ -1,0 +1,87 @@
+"use client";
+
+import { useEffect, useId, useState } from "react";
+import { Button } from "@/components/ui/button";
+import { FormMessage } from "@/components/ui/form-message";
+import { useFocusPhoto } from "@/hooks/use-focus-photo";
+import type { FixtureDto } from "@/lib/data/fixtures";
+import type { FocusChart } from "@/lib/focus/chart-model";
+import type { FocusPageData } from "./types";
+
+// The server's cap (lib/data/focus-photos.ts); checked here too so a huge file is not sent over the venue's wifi.
+const MAX_BYTES = 15 * 1024 * 1024;
+const pick = "inline-flex min-h-12 cursor-pointer items-center justify-center rounded-md px-4 text-sm font-medium";
+
+/** The deck photo of the current unit: take or choose one, replace it, remove it (electricians and the designer). */
+export function FocusPhoto({ fixture, chart, data }: { fixture: FixtureDto; chart: FocusChart; data: FocusPageData }) {
+  const { upload, remove } = useFocusPhoto(data.production.id);
+  const inputId = useId();
+  const [message, setMessage] = useState<{ text: string; tone: "error" | "ok" } | null>(null);
+  const [confirming, setConfirming] = useState(false);
+  useEffect(() => {
+    setMessage(null);
+    setConfirming(false);
+  }, [fixture.id]);
+  const busy = upload.isPending || remove.isPending;
+  const done = (text: string) => ({ onSuccess: () => setMessage({ text, tone: "ok" as const }), onError: (err: Error) => setMessage({ text: err.message, tone: "error" as const }) });
+
+  const onFile = (file: File | undefined) => {
+    if (!file) return;
+    if (file.size > MAX_BYTES) {
+      setMessage({ text: `The photo is ${(file.size / 1048576).toFixed(1)} MB; the limit is 15 MB. Nothing was saved.`, tone: "error" });
+      return;
+    }
+    setMessage({ text: "Uploading…", tone: "ok" });
+    upload.mutate({ id: fixture.id, version: fixture.version, file }, done(chart.photo ? "Photo replaced." : "Photo saved."));
+  };
+  const label = `unit ${fixture.unitNumber} on ${fixture.positionName}`;
+
+  return (
+    <section className="flex flex-col gap-2 rounded-md border border-line bg-surface p-3" aria-label="Focus photo" data-testid="focus-photo">
+      <h3 className="text-sm font-medium text-ink">Focus photo</h3>
+      {chart.photo ? (
+        <a href={chart.photo.href} target="_blank" rel="noopener" className="self-start">
+          {/* eslint-disable-next-line @next/next/no-img-element -- our own route serves a small re-encoded copy */}
+          <img src={chart.photo.thumbSrc} alt={`Focus photo of ${label}`} className="max-h-48 w-auto rounded border border-line" data-testid="focus-photo-preview" />
+        </a>
+      ) : (
+        <p className="text-sm text-muted">{data.rights.focus ? "No photo yet. Take one of the pool on the deck once the unit is focused." : "No photo taken."}</p>
+      )}
+      {data.rights.focus && (
+        <div className="flex flex-wrap gap-2">
+          <input
+            id={inputId}
+            type="file"
+            accept="image/*"
+            capture="environment"
+            className="peer sr-only"
+            disabled={busy}
+            data-testid="focus-photo-input"
+            onChange={(e) => {
+              onFile(e.target.files?.[0]);
+              e.target.value = "";
+            }}
+          />
+          <label htmlFor={inputId} aria-disabled={busy} className={`${pick} ${chart.photo ? "border border-line bg-surface text-ink" : "bg-accent text-accent-ink"} ${busy ? "pointer-events-none opacity-50" : ""} peer-focus-visible:outline-2 peer-focus-visible:outline-accent`}>
+            {upload.isPending ? "Uploading…" : chart.photo ? "Replace photo" : "Add photo"}
+          </label>
+          {chart.photo &&
+            (confirming ? (
+              <Button type="button" variant="danger" className="min-h-12" disabled={busy} data-testid="focus-photo-remove-confirm"
+                onClick={() => {
+                  setConfirming(false);
+                  remove.mutate({ id: fixture.id, version: fixture.version }, done("Photo removed."));
+                }}>
+                Tap again to remove
+              </Button>
+            ) : (
+              <Button type="button" variant="secondary" className="min-h-12" disabled={busy} onClick={() => setConfirming(true)} data-testid="focus-photo-remove">
+                Remove photo
+              </Button>
+            ))}
+        </div>
+      )}
+      <div aria-live="polite">{message && <FormMessage message={message.text} tone={message.tone} />}</div>
+    </section>
+  );
+}
