@@ -56,6 +56,16 @@ describe("field-level rules for fixtures", () => {
       expect(forbiddenFields(m, "fixture", [...designerFields, ...electricsFields])).toHaveLength(designerFields.length + electricsFields.length);
     }
   });
+  // Issue 6: the gobo's orientation is part of the design (like the gobo); barn doors as focused and the
+  // focus photo are the crew's record of the focus call (like the as-focused notes).
+  it("gobo rotation is the designer's; barn doors and the focus photo are the crew's and the designer's", () => {
+    const crew = ["barnDoorTop", "barnDoorBottom", "barnDoorLeft", "barnDoorRight", "focusPhotoUploadId"];
+    expect(forbiddenFields(designer, "fixture", ["goboRotationDeg", ...crew])).toEqual([]);
+    expect(forbiddenFields(electrician, "fixture", ["goboRotationDeg", ...crew])).toEqual(["goboRotationDeg"]);
+    for (const m of [stageManager, { role: "viewer", isOwner: true } as Member]) {
+      expect(forbiddenFields(m, "fixture", ["goboRotationDeg", ...crew])).toEqual(["goboRotationDeg", ...crew]);
+    }
+  });
   it("an unknown field is refused for everyone", () => {
     expect(canEditField(designer, "fixture", "productionId")).toBe(false);
     expect(canEditField(designer, "fixture", "version")).toBe(false);
