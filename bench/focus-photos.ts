@@ -1,0 +1,74 @@
+// Benchmark for focus photos (issue 6): what a deck photo costs on upload (checking, turning upright and
+// shrinking a 12-megapixel camera JPEG with sharp) and what the photos add to the focus-chart PDF (the
+// same chart model → sheets → Chromium path as the PDF route, with and without a small copy on every chart).
+// Run with `npm run bench:focus-photos [charts]` (default 100 charts; the machine is shared, so say the load).
+import os from "node:os";
+import { performance } from "node:perf_hooks";
+import sharp from "sharp";
+import { preparePhoto } from "../lib/data/focus-photos";
+import { buildFocusChart, type FocusChart } from "../lib/focus/chart-model";
+import { outlineLandmarks } from "../lib/focus/landmarks";
+import { paginate } from "../lib/focus/pages";
+import { sheetParts } from "../lib/focus/sheets-html";
+import { renderPdf } from "../lib/pdf/focus-pdf";
+import { closeBrowser } from "../lib/pdf/browser";
+import { makeFixture, PRODUCTION } from "../tests/unit/focus/fixture-builder";
+
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+
+/** A 4000 × 3000 JPEG with fine noise (photos do not compress like flat colour). */
+async function cameraJpeg(): Promise<Buffer> {
+  const w = 4000, h = 3000;
+  const raw = Buffer.alloc(w * h * 3);
+  let seed = 42;
+  for (let i = 0; i < raw.length; i++) {
+    seed = (seed * 1103515245 + 12345) & 0x7fffffff; // a fixed LCG: the same picture every run
+    raw[i] = 60 + ((seed >> 16) % 120) + (i % (w * 3) < w * 1.5 ? 60 : 0);
+  }
+  return sharp(raw, { raw: { width: w, height: h, channels: 3 } }).jpeg({ quality: 90 }).withMetadata({ orientation: 6 }).toBuffer();
+}
+
+async function pdfOf(charts: FocusChart[]) {
+  const landmarks = outlineLandmarks(PRODUCTION);
+  const sheets = paginate(charts, 4, { newPagePerPosition: false });
+  const t = performance.now();
+  const pdf = await renderPdf({ title: "bench", paper: "A4", footerText: "bench", sheets: sheetParts(sheets, { productionName: "Bench", printedAt: "now", perPage: 4, units: "metric", landmarks }) });
+  return { ms: performance.now() - t, bytes: pdf.byteLength, pages: sheets.length };
+}
+
+async function main() {
+  const n = Number(process.argv[2] ?? 100);
+  const photo = await cameraJpeg();
+  const times: number[] = [];
+  let prepared = await preparePhoto(photo);
+  for (let i = 0; i < 5; i++) {
+    const t = performance.now();
+    prepared = await preparePhoto(photo);
+    times.push(performance.now() - t);
+  }
+  const dataUrl = `data:image/jpeg;base64,${prepared.thumb.toString("base64")}`;
+
+  const charts = Array.from({ length: n }, (_, i) =>
+    buildFocusChart(makeFixture({ id: i + 1, unitNumber: String((i % 20) + 1), positionId: 1 + Math.floor(i / 20), positionName: `Pipe ${1 + Math.floor(i / 20)}`, channel: i + 1, focusPhotoUploadId: i + 1 }), PRODUCTION),
+  );
+  const withPhotos = charts.map((c) => ({ ...c, photo: { ...c.photo!, thumbSrc: dataUrl, href: "" } }));
+  const without = charts.map((c) => ({ ...c, photo: null }));
+  await pdfOf(without.slice(0, 4)); // start the browser outside the timings
+  const plain = await pdfOf(without);
+  const photos = await pdfOf(withPhotos);
+  await closeBrowser();
+
+  console.log(`focus photos — ${new Date().toISOString()}, load ${os.loadavg().map((l) => l.toFixed(2)).join(" ")}, ${os.cpus().length} cores`);
+  console.log(`| measure | value |\n|---|---|`);
+  console.log(`| camera JPEG in | ${(photo.byteLength / 1048576).toFixed(1)} MB, 4000 × 3000, EXIF orientation 6 |`);
+  console.log(`| check + upright + shrink (median of 5) | ${median(times).toFixed(0)} ms |`);
+  console.log(`| kept copy / chart copy | ${prepared.width} × ${prepared.height}, ${(prepared.full.byteLength / 1024).toFixed(0)} KB / ${(prepared.thumb.byteLength / 1024).toFixed(1)} KB |`);
+  console.log(`| PDF, ${n} charts at 4 a page, no photos | ${(plain.ms / 1000).toFixed(1)} s, ${plain.pages} pages, ${(plain.bytes / 1048576).toFixed(2)} MB |`);
+  console.log(`| PDF, ${n} charts at 4 a page, a photo on every chart | ${(photos.ms / 1000).toFixed(1)} s, ${(photos.bytes / 1048576).toFixed(2)} MB (${((photos.ms / plain.ms - 1) * 100).toFixed(0)} % time) |`);
+}
+
+main().catch(async (err) => {
+  console.error(err);
+  await closeBrowser().catch(() => undefined);
+  process.exit(1);
+});
