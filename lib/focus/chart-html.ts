@@ -29,7 +29,9 @@ function notesHtml(label: string, text: string | null, cls: string): string {
 // The deck photo beside the notes: a small copy (a data: URL in the server's PDF), linked to the full one on screen.
 function photoHtml(chart: FocusChart): string {
   if (!chart.photo) return "";
-  const img = `<img src="${escapeHtml(chart.photo.thumbSrc)}" alt="Focus photo of ${escapeHtml(chart.positionName)} unit ${escapeHtml(chart.unitNumber)}" data-testid="focus-photo-thumb">`;
+  // Lazy on screen, where a long list may hold hundreds; the PDF's inline copies load with the page.
+  const lazy = chart.photo.href ? ` loading="lazy"` : "";
+  const img = `<img src="${escapeHtml(chart.photo.thumbSrc)}"${lazy} alt="Focus photo of ${escapeHtml(chart.positionName)} unit ${escapeHtml(chart.unitNumber)}" data-testid="focus-photo-thumb">`;
   return chart.photo.href ? `<a class="fc-photo" href="${escapeHtml(chart.photo.href)}" target="_blank" rel="noopener">${img}</a>` : `<span class="fc-photo">${img}</span>`;
 }
 
