@@ -1,11 +1,10 @@
 import "server-only";
 import { getDb, type FixtureType } from "@/models";
-import { AppError, notFound } from "@/lib/errors";
+import { AppError } from "@/lib/errors";
 import type { z } from "zod";
 import type { createFixtureTypeSchema, updateFixtureTypeSchema } from "@/lib/validation/rig";
-import { iso, versionedUpdate } from "./versioned";
-import { recordChange } from "./changes";
-import { uniqueNameError } from "./unique";
+import { iso } from "./versioned";
+import { productionCrud } from "./production-crud";
 
 export type FixtureTypeDto = {
   id: number;
@@ -49,40 +48,21 @@ export const toFixtureTypeDto = (t: FixtureType): FixtureTypeDto => ({
   updatedAt: iso(t.updatedAt)!,
 });
 
-export async function getFixtureTypesByProduction({ productionId }: { productionId: number }): Promise<FixtureTypeDto[]> {
-  const rows = await getDb().FixtureType.findAll({ where: { productionId }, order: [["name", "ASC"]] });
-  return rows.map(toFixtureTypeDto);
-}
-
-export async function createFixtureType({ productionId, userId, input }: { productionId: number; userId: number; input: z.infer<typeof createFixtureTypeSchema> }) {
-  const { sequelize, FixtureType } = getDb();
-  return sequelize.transaction(async (transaction) => {
-    const row = await FixtureType.create({ frameSize: null, goboSize: null, ...input, productionId }, { transaction }).catch(uniqueNameError("fixture type"));
-    await recordChange({ productionId, userId, entity: "fixtureType", entityId: row.id, action: "create", after: toFixtureTypeDto(row) }, transaction);
-    return toFixtureTypeDto(row);
-  });
-}
-
-/** Fixtures read their type's figures live, so every fixture's computed values follow a change here. */
-export async function updateFixtureType({ productionId, fixtureTypeId, userId, patch }: { productionId: number; fixtureTypeId: number; userId: number; patch: z.infer<typeof updateFixtureTypeSchema> }) {
-  const { sequelize, FixtureType } = getDb();
-  const { version, ...changes } = patch;
-  if (!Object.keys(changes).length) throw new AppError("bad_request", "Nothing to change: send at least one field.");
-  return sequelize.transaction(async (transaction) => {
-    const { before, after } = await versionedUpdate({ model: FixtureType, scope: { productionId }, id: fixtureTypeId, version, changes, toDto: toFixtureTypeDto, what: "Fixture type", transaction }).catch(uniqueNameError("fixture type"));
-    await recordChange({ productionId, userId, entity: "fixtureType", entityId: fixtureTypeId, action: "update", before: toFixtureTypeDto(before), after: toFixtureTypeDto(after) }, transaction);
-    return toFixtureTypeDto(after);
-  });
-}
-
-export async function deleteFixtureType({ productionId, fixtureTypeId, userId }: { productionId: number; fixtureTypeId: number; userId: number }) {
-  const { sequelize, FixtureType, Fixture } = getDb();
-  await sequelize.transaction(async (transaction) => {
-    const row = await FixtureType.findOne({ where: { productionId, id: fixtureTypeId }, transaction });
-    if (!row) throw notFound("Fixture type");
-    const inUse = await Fixture.count({ where: { productionId, fixtureTypeId }, transaction });
+const fixtureTypes = productionCrud<FixtureType, FixtureTypeDto, z.infer<typeof createFixtureTypeSchema>, z.infer<typeof updateFixtureTypeSchema>>({
+  model: () => getDb().FixtureType,
+  entity: "fixtureType",
+  what: "Fixture type",
+  toDto: toFixtureTypeDto,
+  order: [["name", "ASC"]],
+  prepareCreate: (input) => ({ frameSize: null, goboSize: null, ...input }),
+  beforeDelete: async (row, { productionId, transaction }) => {
+    const inUse = await getDb().Fixture.count({ where: { productionId, fixtureTypeId: row.id }, transaction });
     if (inUse) throw new AppError("bad_request", `${inUse} fixture${inUse === 1 ? " uses" : "s use"} this type; swap them to another type first.`);
-    await row.destroy({ transaction });
-    await recordChange({ productionId, userId, entity: "fixtureType", entityId: fixtureTypeId, action: "delete", before: toFixtureTypeDto(row) }, transaction);
-  });
-}
+  },
+});
+
+export const getFixtureTypesByProduction = fixtureTypes.list;
+export const createFixtureType = fixtureTypes.create;
+/** Fixtures read their type's figures live, so every fixture's computed values follow a change here. */
+export const updateFixtureType = fixtureTypes.update;
+export const deleteFixtureType = fixtureTypes.remove;

@@ -1,11 +1,9 @@
 import "server-only";
 import { getDb, type Position } from "@/models";
-import { AppError, notFound } from "@/lib/errors";
 import type { z } from "zod";
 import type { createPositionSchema, updatePositionSchema } from "@/lib/validation/rig";
-import { iso, versionedUpdate } from "./versioned";
-import { recordChange } from "./changes";
-import { uniqueNameError } from "./unique";
+import { iso } from "./versioned";
+import { productionCrud } from "./production-crud";
 
 export type PositionDto = {
   id: number;
@@ -41,40 +39,24 @@ export function toPositionDto(p: Position): PositionDto {
   };
 }
 
-export async function getPositionsByProduction({ productionId }: { productionId: number }): Promise<PositionDto[]> {
-  const rows = await getDb().Position.findAll({ where: { productionId }, order: [["sortOrder", "ASC"], ["name", "ASC"]] });
-  return rows.map(toPositionDto);
-}
+const positions = productionCrud<Position, PositionDto, z.infer<typeof createPositionSchema>, z.infer<typeof updatePositionSchema>>({
+  model: () => getDb().Position,
+  entity: "position",
+  what: "Position",
+  toDto: toPositionDto,
+  order: [["sortOrder", "ASC"], ["name", "ASC"]],
+  // A new position goes after the last one unless the caller places it.
+  prepareCreate: async (input, { productionId, transaction }) => {
+    const last = (await getDb().Position.max("sortOrder", { where: { productionId }, transaction })) as number | null;
+    return { x2: null, y2: null, ratedLoadKg: null, ...input, sortOrder: input.sortOrder ?? (last ?? -1) + 1 };
+  },
+  // Deleting a position takes the fixtures hung on it (the screen confirms with the user first).
+  beforeDelete: async (row, { productionId, transaction }) => ({
+    fixturesRemoved: await getDb().Fixture.destroy({ where: { productionId, positionId: row.id }, transaction }),
+  }),
+});
 
-export async function createPosition({ productionId, userId, input }: { productionId: number; userId: number; input: z.infer<typeof createPositionSchema> }) {
-  const { sequelize, Position } = getDb();
-  return sequelize.transaction(async (transaction) => {
-    const sortOrder = input.sortOrder ?? (((await Position.max("sortOrder", { where: { productionId }, transaction })) as number | null) ?? -1) + 1;
-    const row = await Position.create({ x2: null, y2: null, ratedLoadKg: null, ...input, sortOrder, productionId }, { transaction }).catch(uniqueNameError("position"));
-    await recordChange({ productionId, userId, entity: "position", entityId: row.id, action: "create", after: toPositionDto(row) }, transaction);
-    return toPositionDto(row);
-  });
-}
-
-export async function updatePosition({ productionId, positionId, userId, patch }: { productionId: number; positionId: number; userId: number; patch: z.infer<typeof updatePositionSchema> }) {
-  const { sequelize, Position } = getDb();
-  const { version, ...changes } = patch;
-  if (!Object.keys(changes).length) throw new AppError("bad_request", "Nothing to change: send at least one field.");
-  return sequelize.transaction(async (transaction) => {
-    const { before, after } = await versionedUpdate({ model: Position, scope: { productionId }, id: positionId, version, changes, toDto: toPositionDto, what: "Position", transaction }).catch(uniqueNameError("position"));
-    await recordChange({ productionId, userId, entity: "position", entityId: positionId, action: "update", before: toPositionDto(before), after: toPositionDto(after) }, transaction);
-    return toPositionDto(after);
-  });
-}
-
-/** Deletes a position and the fixtures hung on it (the caller confirms with the user first). */
-export async function deletePosition({ productionId, positionId, userId }: { productionId: number; positionId: number; userId: number }) {
-  const { sequelize, Position, Fixture } = getDb();
-  await sequelize.transaction(async (transaction) => {
-    const row = await Position.findOne({ where: { productionId, id: positionId }, transaction });
-    if (!row) throw notFound("Position");
-    const removed = await Fixture.destroy({ where: { productionId, positionId }, transaction });
-    await row.destroy({ transaction });
-    await recordChange({ productionId, userId, entity: "position", entityId: positionId, action: "delete", before: { ...toPositionDto(row), fixturesRemoved: removed } }, transaction);
-  });
-}
+export const getPositionsByProduction = positions.list;
+export const createPosition = positions.create;
+export const updatePosition = positions.update;
+export const deletePosition = positions.remove;

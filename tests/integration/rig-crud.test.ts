@@ -88,3 +88,42 @@ describe("fixtures on a position", () => {
     expect(r.json.error.fieldErrors).toHaveProperty("coneMinDeg");
   });
 });
+
+describe("deleting plan objects", () => {
+  async function smallRig() {
+    const { s, id } = await ownProduction();
+    const pos = (await s.post(`/api/productions/${id}/positions`, { name: "LX3", kind: "overhead-pipe", x1: -4, y1: 5, x2: 4, y2: 5, trimHeight: 7 })).json.position;
+    const type = (await s.post(`/api/productions/${id}/fixture-types`, { name: "Par", family: "par", coneMinDeg: 30, coneMaxDeg: 30, peakCandela: 9000, dmxModes: [{ name: "dimmer", footprint: 1 }] })).json.fixtureType;
+    const point = (await s.post(`/api/productions/${id}/focus-points`, { name: "Area 9", x: 1.5, y: 3 })).json.focusPoint;
+    await s.post(`/api/productions/${id}/fixtures`, { fixtures: [{ positionId: pos.id, fixtureTypeId: type.id, unitNumber: "1", x: 0, y: 5, focusPointId: point.id }] });
+    return { s, id, pos, type, point };
+  }
+
+  it("leaves a fixture's mark where its deleted focus point was", async () => {
+    const { s, id, point } = await smallRig();
+    expect((await s.request("DELETE", `/api/productions/${id}/focus-points/${point.id}`)).status).toBe(200);
+    const [f] = (await s.get(`/api/productions/${id}/fixtures`)).json.fixtures;
+    expect(f.focusPointId).toBeNull();
+    expect(f.computed.focus).toMatchObject({ x: 1.5, y: 3 });
+  });
+
+  it("refuses to delete a type still in use, and deletes it once nothing uses it", async () => {
+    const { s, id, pos, type } = await smallRig();
+    const refused = await s.request("DELETE", `/api/productions/${id}/fixture-types/${type.id}`);
+    expect(refused.status).toBe(400);
+    expect(refused.json.error.message).toMatch(/1 fixture uses this type/);
+    expect((await s.request("DELETE", `/api/productions/${id}/positions/${pos.id}`)).status).toBe(200);
+    expect((await s.get(`/api/productions/${id}/fixtures`)).json.fixtures).toHaveLength(0);
+    expect((await s.request("DELETE", `/api/productions/${id}/fixture-types/${type.id}`)).status).toBe(200);
+    expect((await s.request("DELETE", `/api/productions/${id}/fixture-types/${type.id}`)).status).toBe(404);
+  });
+
+  it("words a duplicate name with the right article", async () => {
+    const { s, id } = await ownProduction();
+    const polygon = [{ x: 0, y: 0 }, { x: 1, y: 0 }, { x: 1, y: 1 }];
+    expect((await s.post(`/api/productions/${id}/area-zones`, { name: "DSC", polygon })).status).toBe(201);
+    const again = await s.post(`/api/productions/${id}/area-zones`, { name: "DSC", polygon });
+    expect(again.status).toBe(400);
+    expect(again.json.error.message).toBe("This production already has an acting area with that name.");
+  });
+});

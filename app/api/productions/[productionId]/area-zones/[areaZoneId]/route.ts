@@ -9,12 +9,12 @@ export const PATCH = route(async (req, { params }: Ctx) => {
   const p = await params;
   const { productionId, user } = await requireMember(p.productionId, "plot.edit");
   const patch = await readJson(req, updateAreaZoneSchema);
-  return { areaZone: await updateAreaZone({ productionId, areaZoneId: parseId(p.areaZoneId, "Acting area"), userId: user.id, patch }) };
+  return { areaZone: await updateAreaZone({ productionId, id: parseId(p.areaZoneId, "Acting area"), userId: user.id, patch }) };
 });
 
 export const DELETE = route(async (_req, { params }: Ctx) => {
   const p = await params;
   const { productionId, user } = await requireMember(p.productionId, "plot.edit");
-  await deleteAreaZone({ productionId, areaZoneId: parseId(p.areaZoneId, "Acting area"), userId: user.id });
+  await deleteAreaZone({ productionId, id: parseId(p.areaZoneId, "Acting area"), userId: user.id });
   return { ok: true };
 });

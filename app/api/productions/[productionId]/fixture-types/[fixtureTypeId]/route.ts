@@ -13,12 +13,12 @@ export const PATCH = route(async (req, { params }: Ctx) => {
   const patch = await readJson(req, updateFixtureTypeSchema);
   const denied = forbiddenFields(member, "fixtureType", Object.keys(patch).filter((k) => k !== "version"));
   if (denied.length) throw new AppError("forbidden", `Your role cannot change: ${denied.join(", ")}.`);
-  return { fixtureType: await updateFixtureType({ productionId, fixtureTypeId: parseId(p.fixtureTypeId, "Fixture type"), userId: user.id, patch }) };
+  return { fixtureType: await updateFixtureType({ productionId, id: parseId(p.fixtureTypeId, "Fixture type"), userId: user.id, patch }) };
 });
 
 export const DELETE = route(async (_req, { params }: Ctx) => {
   const p = await params;
   const { productionId, user } = await requireMember(p.productionId, "plot.edit");
-  await deleteFixtureType({ productionId, fixtureTypeId: parseId(p.fixtureTypeId, "Fixture type"), userId: user.id });
+  await deleteFixtureType({ productionId, id: parseId(p.fixtureTypeId, "Fixture type"), userId: user.id });
   return { ok: true };
 });

@@ -9,12 +9,12 @@ export const PATCH = route(async (req, { params }: Ctx) => {
   const p = await params;
   const { productionId, user } = await requireMember(p.productionId, "plot.edit");
   const patch = await readJson(req, updateFocusPointSchema);
-  return { focusPoint: await updateFocusPoint({ productionId, focusPointId: parseId(p.focusPointId, "Focus point"), userId: user.id, patch }) };
+  return { focusPoint: await updateFocusPoint({ productionId, id: parseId(p.focusPointId, "Focus point"), userId: user.id, patch }) };
 });
 
 export const DELETE = route(async (_req, { params }: Ctx) => {
   const p = await params;
   const { productionId, user } = await requireMember(p.productionId, "plot.edit");
-  await deleteFocusPoint({ productionId, focusPointId: parseId(p.focusPointId, "Focus point"), userId: user.id });
+  await deleteFocusPoint({ productionId, id: parseId(p.focusPointId, "Focus point"), userId: user.id });
   return { ok: true };
 });

@@ -9,12 +9,12 @@ export const PATCH = route(async (req, { params }: Ctx) => {
   const p = await params;
   const { productionId, user } = await requireMember(p.productionId, "plot.edit");
   const patch = await readJson(req, updateLandmarkSchema);
-  return { landmark: await updateLandmark({ productionId, landmarkId: parseId(p.landmarkId, "Landmark"), userId: user.id, patch }) };
+  return { landmark: await updateLandmark({ productionId, id: parseId(p.landmarkId, "Landmark"), userId: user.id, patch }) };
 });
 
 export const DELETE = route(async (_req, { params }: Ctx) => {
   const p = await params;
   const { productionId, user } = await requireMember(p.productionId, "plot.edit");
-  await deleteLandmark({ productionId, landmarkId: parseId(p.landmarkId, "Landmark"), userId: user.id });
+  await deleteLandmark({ productionId, id: parseId(p.landmarkId, "Landmark"), userId: user.id });
   return { ok: true };
 });

@@ -9,12 +9,12 @@ export const PATCH = route(async (req, { params }: Ctx) => {
   const p = await params;
   const { productionId, user } = await requireMember(p.productionId, "plot.edit");
   const patch = await readJson(req, updatePositionSchema);
-  return { position: await updatePosition({ productionId, positionId: parseId(p.positionId, "Position"), userId: user.id, patch }) };
+  return { position: await updatePosition({ productionId, id: parseId(p.positionId, "Position"), userId: user.id, patch }) };
 });
 
 export const DELETE = route(async (_req, { params }: Ctx) => {
   const p = await params;
   const { productionId, user } = await requireMember(p.productionId, "plot.edit");
-  await deletePosition({ productionId, positionId: parseId(p.positionId, "Position"), userId: user.id });
+  await deletePosition({ productionId, id: parseId(p.positionId, "Position"), userId: user.id });
   return { ok: true };
 });
