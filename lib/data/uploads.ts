@@ -103,7 +103,8 @@ export async function updateUpload({ productionId, uploadId, userId, patch }: { 
   const { version, ...changes } = patch;
   if (!Object.keys(changes).length) throw new AppError("bad_request", "Nothing to change: send at least one field.");
   return sequelize.transaction(async (transaction) => {
-    const current = await Upload.findOne({ where: { productionId, id: uploadId }, transaction });
+    // Only underlays are calibrated here; a focus photo changes through its fixture (lib/data/focus-photos.ts).
+    const current = await Upload.findOne({ where: { productionId, id: uploadId, kind: "underlay" }, transaction });
     if (!current) throw notFound("Upload");
     // A locked underlay keeps its place; only unlocking (or opacity) is accepted until then.
     const moves = ["metresPerPixel", "offsetX", "offsetY", "rotationDeg"].filter((k) => k in changes);
@@ -119,7 +120,8 @@ export async function updateUpload({ productionId, uploadId, userId, patch }: { 
 export async function deleteUpload({ productionId, uploadId, userId }: { productionId: number; uploadId: number; userId: number }) {
   const { sequelize, Upload } = getDb();
   const key = await sequelize.transaction(async (transaction) => {
-    const row = await Upload.findOne({ where: { productionId, id: uploadId }, transaction });
+    // A focus photo is removed through its fixture, under the fixture's version.
+    const row = await Upload.findOne({ where: { productionId, id: uploadId, kind: ["underlay", "import"] }, transaction });
     if (!row) throw notFound("Upload");
     await row.destroy({ transaction });
     await recordChange({ productionId, userId, entity: "upload", entityId: uploadId, action: "delete", before: toUploadDto(row) }, transaction);
