@@ -78,7 +78,7 @@ export function BeamFields({ fixture, data }: { fixture: FixtureDto; data: Focus
             </Button>
           </div>
         ) : (
-          <p className="text-sm">{fixture.goboRotationDeg != null ? goboRotationWords(fixture.goboRotationDeg) : <span className="italic text-muted">not recorded</span>}</p>
+          <p className="text-sm">{fixture.goboRotationDeg != null ? goboRotationWords(fixture.goboRotationDeg) : <span className="italic text-muted">{fixture.gobo ? "not recorded" : "no gobo"}</span>}</p>
         )}
         <p id="gobo-rotation-error" className="text-sm text-danger" aria-live="polite">{errors.goboRotationDeg ?? ""}</p>
       </div>
