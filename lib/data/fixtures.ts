@@ -2,7 +2,7 @@ import "server-only";
 import { getDb, type Fixture, type FixtureType, type FocusPoint, type Position } from "@/models";
 import { AppError, notFound } from "@/lib/errors";
 import type { FixtureCreate, FixturePatch } from "@/lib/validation/fixture";
-import { computeFixtureGeometry, type FixtureGeometry } from "@/lib/rig/fixture-geometry";
+import { computeFixtureGeometry, type FixtureAim, type FixtureGeometry } from "@/lib/rig/fixture-geometry";
 import { unitSortKey } from "@/lib/rig/unit-number";
 import { iso, versionedUpdate } from "./versioned";
 import { recordChange } from "./changes";
@@ -27,14 +27,6 @@ export type FixtureRecord = {
   colour: string | null;
   gobo: string | null;
   purpose: string | null;
-  x: number;
-  y: number;
-  lensHeight: number | null;
-  focusX: number | null;
-  focusY: number | null;
-  aim: "deck" | "head";
-  coneDeg: number | null;
-  softnessDeg: number | null;
   shutterCuts: Fixture["shutterCuts"];
   irisPercent: number | null;
   notes: string | null;
@@ -51,7 +43,7 @@ export type FixtureRecord = {
   focusedBy: number | null;
   version: number;
   updatedAt: string;
-};
+} & FixtureAim;
 
 export type FixtureDto = FixtureRecord & {
   positionName: string;

@@ -2,7 +2,8 @@
 // and its pools at the deck and at head height. The API is the authority for these numbers.
 import { beamAim, poolAtPlane, type PlanePool, type Vec3 } from "@/lib/optics";
 
-export type GeometryInput = {
+/** A fixture's own stored aim: where it hangs, where it points, how big and soft its beam is (null = the default). */
+export type FixtureAim = {
   x: number;
   y: number;
   lensHeight: number | null;
@@ -11,6 +12,9 @@ export type GeometryInput = {
   aim: "deck" | "head";
   coneDeg: number | null;
   softnessDeg: number | null;
+};
+
+export type GeometryInput = FixtureAim & {
   focusPoint: { x: number; y: number } | null;
   position: { trimHeight: number };
   type: { coneMinDeg: number; coneMaxDeg: number; defaultSoftnessDeg: number; lensDropM: number };
