@@ -32,7 +32,13 @@ export function usePlot(
   const qc = useQueryClient();
   const key = productionKeys.plot(productionId);
   // Expanded once on mount; later reads go through the query function.
-  const [initialData] = useState(() => expandPlot(initial, headHeight));
+  const [initialData] = useState(() => {
+    // bench:plot reads these marks to split the first draw into its parts.
+    performance.mark("plot:rebuild-start");
+    const d = expandPlot(initial, headHeight);
+    performance.mark("plot:rebuild-end");
+    return d;
+  });
   const plot = useQuery({
     queryKey: key,
     queryFn: async () => expandPlot(await apiFetch<PlotWirePayload>(`/api/productions/${productionId}/plot?shape=slim`), headHeight),

@@ -42,27 +42,37 @@ function polygonPath(ctx: Ctx, v: View, pts: Point[]) {
   ctx.closePath();
 }
 
-function intersects(b: Bounds, e: Ellipse) {
+export function intersects(b: Bounds, e: Ellipse) {
   const r = e.semiMajor;
   return e.centre.x + r >= b.minX && e.centre.x - r <= b.maxX && e.centre.y + r >= b.minY && e.centre.y - r <= b.maxY;
 }
 
 /** One pool: outer and core filled (their overlap reads as the bright core, the ring as the soft band), 50 % edge dashed. */
+/** Adds one pool ellipse to the current path: as an ellipse, or as the polygon its shutter cuts leave. */
+export function addPoolPath(ctx: Ctx, v: View, e: Ellipse, cuts: RigItem["cuts"] | null, mark: Point | null) {
+  if (cuts && mark) {
+    let poly: Point[] = [];
+    try {
+      poly = clipPoolByCuts(e, cuts, mark);
+    } catch {
+      poly = ellipseToPolygon(e, 48); // a mark on a cut line: draw the uncut pool rather than nothing
+    }
+    if (poly.length) polygonPath(ctx, v, poly);
+  } else {
+    const c = planToScreen(v, e.centre);
+    ctx.moveTo(c.x + Math.max(0.5, e.semiMajor * v.scale) * Math.cos((-e.rotationDeg * Math.PI) / 180), c.y + Math.max(0.5, e.semiMajor * v.scale) * Math.sin((-e.rotationDeg * Math.PI) / 180));
+    ellipsePath(ctx, v, e);
+    ctx.closePath();
+  }
+}
+
 export function drawPool(ctx: Ctx, v: View, item: Pick<RigItem, "pool" | "cuts" | "mark">, pal: PlotPalette, strong = false) {
   const pool = item.pool;
   if (!pool || pool.status !== "ok" || !pool.outer) return;
   const cuts = item.cuts.length && item.mark ? item.cuts : null;
   const shape = (e: Ellipse) => {
     ctx.beginPath();
-    if (cuts) {
-      let poly: Point[] = [];
-      try {
-        poly = clipPoolByCuts(e, cuts, item.mark!);
-      } catch {
-        poly = ellipseToPolygon(e, 48); // a mark on a cut line: draw the uncut pool rather than nothing
-      }
-      if (poly.length) polygonPath(ctx, v, poly);
-    } else ellipsePath(ctx, v, e);
+    addPoolPath(ctx, v, e, cuts, item.mark);
   };
   ctx.fillStyle = strong ? pal.poolOuterStrong : pal.poolOuter;
   shape(pool.outer);
@@ -99,13 +109,6 @@ export function drawPool(ctx: Ctx, v: View, item: Pick<RigItem, "pool" | "cuts" 
       ctx.lineTo(b.x, b.y);
       ctx.stroke();
     }
-  }
-}
-
-export function drawPools(ctx: Ctx, v: View, items: RigItem[], pal: PlotPalette, visible: Bounds, skip: ReadonlySet<number>) {
-  for (const it of items) {
-    if (skip.has(it.id) || !it.pool?.outer || !intersects(visible, it.pool.outer)) continue;
-    drawPool(ctx, v, it, pal);
   }
 }
 
@@ -170,31 +173,40 @@ export function drawFixtures(ctx: Ctx, v: View, items: RigItem[], pal: PlotPalet
 /** Focus marks: a small cross on the deck for each aimed unit; selected units get a line to their mark. */
 export function drawMarks(ctx: Ctx, v: View, items: RigItem[], pal: PlotPalette, selected: ReadonlySet<number>) {
   ctx.lineWidth = 1;
+  // All unselected crosses as one path: one stroke instead of 1,500 (ten times cheaper to draw).
+  ctx.strokeStyle = pal.accent;
+  ctx.beginPath();
   for (const it of items) {
-    if (!it.mark) continue;
+    if (!it.mark || selected.has(it.id)) continue;
     const m = planToScreen(v, it.mark);
-    const sel = selected.has(it.id);
-    ctx.strokeStyle = sel ? pal.selection : pal.accent;
-    const r = sel ? 6 : 3.5;
-    ctx.beginPath();
-    ctx.moveTo(m.x - r, m.y - r);
-    ctx.lineTo(m.x + r, m.y + r);
-    ctx.moveTo(m.x - r, m.y + r);
-    ctx.lineTo(m.x + r, m.y - r);
-    ctx.stroke();
-    if (sel) {
-      const s = symbolScreenPoint(v, it);
-      ctx.setLineDash([4, 3]);
-      ctx.beginPath();
-      ctx.moveTo(s.x, s.y);
-      ctx.lineTo(m.x, m.y);
-      ctx.stroke();
-      ctx.setLineDash([]);
-      ctx.beginPath();
-      ctx.arc(m.x, m.y, 9, 0, Math.PI * 2);
-      ctx.stroke();
-    }
+    cross(ctx, m, 3.5);
   }
+  ctx.stroke();
+  for (const it of items) {
+    if (!it.mark || !selected.has(it.id)) continue;
+    const m = planToScreen(v, it.mark);
+    ctx.strokeStyle = pal.selection;
+    ctx.beginPath();
+    cross(ctx, m, 6);
+    ctx.stroke();
+    const s = symbolScreenPoint(v, it);
+    ctx.setLineDash([4, 3]);
+    ctx.beginPath();
+    ctx.moveTo(s.x, s.y);
+    ctx.lineTo(m.x, m.y);
+    ctx.stroke();
+    ctx.setLineDash([]);
+    ctx.beginPath();
+    ctx.arc(m.x, m.y, 9, 0, Math.PI * 2);
+    ctx.stroke();
+  }
+}
+
+function cross(ctx: Ctx, m: Point, r: number) {
+  ctx.moveTo(m.x - r, m.y - r);
+  ctx.lineTo(m.x + r, m.y + r);
+  ctx.moveTo(m.x - r, m.y + r);
+  ctx.lineTo(m.x + r, m.y - r);
 }
 
 export function drawFocusPoints(ctx: Ctx, v: View, points: Array<{ id: number; name: string; x: number; y: number }>, pal: PlotPalette, labels: boolean, selected: number | null) {

@@ -51,3 +51,22 @@ export function readPalette(el: Element = document.documentElement): PlotPalette
     selection: dark ? "#d9a441" : "#1d6fb8",
   };
 }
+
+/**
+ * The colour of `top` painted over `bottom` (both "rgba(r, g, b, a)"), as one colour: lets a layer fill a
+ * pixel once where it would otherwise fill it twice. Source-over compositing (W3C Compositing Level 1).
+ */
+export function over(top: string, bottom: string): string {
+  const [r1, g1, b1, a1] = rgba(top);
+  const [r0, g0, b0, a0] = rgba(bottom);
+  const a = a1 + a0 * (1 - a1);
+  if (a === 0) return "rgba(0, 0, 0, 0)";
+  const mix = (c1: number, c0: number) => Math.round((c1 * a1 + c0 * a0 * (1 - a1)) / a);
+  return `rgba(${mix(r1, r0)}, ${mix(g1, g0)}, ${mix(b1, b0)}, ${+a.toFixed(4)})`;
+}
+
+function rgba(c: string): [number, number, number, number] {
+  const m = /^rgba?\(\s*([\d.]+)\s*,\s*([\d.]+)\s*,\s*([\d.]+)\s*(?:,\s*([\d.]+)\s*)?\)$/.exec(c.trim());
+  if (!m) throw new Error(`Not an rgb/rgba colour: ${c}`);
+  return [Number(m[1]), Number(m[2]), Number(m[3]), m[4] === undefined ? 1 : Number(m[4])];
+}

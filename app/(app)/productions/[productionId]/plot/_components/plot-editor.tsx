@@ -15,8 +15,11 @@ import { Toolbar } from "./toolbar";
 import { TypeShelf } from "./type-shelf";
 import { SidePanel } from "./side-panel";
 
-// Konva needs the browser's canvas: load the canvas only on the client.
-const PlotCanvas = dynamic(() => import("./plot-canvas"), { ssr: false, loading: () => <p className="p-4 text-sm text-muted">Drawing the plot…</p> });
+// Konva needs the browser's canvas: load the canvas only on the client. Its code is requested as soon
+// as this module runs in the browser, not after hydration reaches the canvas (one round trip less).
+const loadCanvas = () => import("./plot-canvas");
+if (typeof window !== "undefined") void loadCanvas();
+const PlotCanvas = dynamic(loadCanvas, { ssr: false, loading: () => <p className="p-4 text-sm text-muted">Drawing the plot…</p> });
 
 const ALL_ON = Object.fromEntries(LAYERS.map((l) => [l, true])) as LayerVisibility;
 const NONE: Selection = { fixtures: new Set(), positionId: null, focusPointId: null };

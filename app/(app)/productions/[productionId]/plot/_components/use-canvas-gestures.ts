@@ -24,17 +24,31 @@ type Args = {
   preview: RefObject<PlotFixture | null>;
   live: Live;
   redraw: (which?: "all" | "overlay", now?: boolean) => void;
+  /** Set while the view moves; the costly layers then reuse their bitmaps until it rests. */
+  moving: RefObject<boolean>;
 };
+
+/** How long the view must rest before the costly layers are drawn afresh at the new view. */
+const REST_MS = 150;
 
 const TWO_POINT_TOOLS = new Set(["position-line", "landmark", "cut", "calibrate"]);
 // Drawing tools whose points land on the visible grid (hold Alt to place freely).
 const SNAP_TOOLS = new Set(["position-line", "position-point", "area", "landmark"]);
 
-export function useCanvasGestures({ container, view, gesture, draft, preview, live, redraw }: Args) {
+export function useCanvasGestures({ container, view, gesture, draft, preview, live, redraw, moving }: Args) {
   useEffect(() => {
     const el = container.current!;
     let spaceDown = false;
     let frame = 0;
+    let rest = 0;
+    const viewMoved = () => {
+      moving.current = true;
+      clearTimeout(rest);
+      rest = window.setTimeout(() => {
+        moving.current = false;
+        redraw("all");
+      }, REST_MS);
+    };
     let downAt: Point | null = null;
     const pointers = new Map<number, Point>();
     let pinch: { dist: number } | null = null;
@@ -138,6 +152,7 @@ export function useCanvasGestures({ container, view, gesture, draft, preview, li
         const d = Math.hypot(a.x - b.x, a.y - b.y);
         view.current = zoomAbout(view.current, { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 }, d / pinch.dist);
         pinch.dist = d;
+        viewMoved();
         schedule("all");
         return;
       }
@@ -151,6 +166,7 @@ export function useCanvasGestures({ container, view, gesture, draft, preview, li
         case "pan":
           view.current = panBy(v, s.x - g.last.x, s.y - g.last.y);
           g.last = s;
+          viewMoved();
           schedule("all");
           return;
         case "mark":
@@ -217,6 +233,7 @@ export function useCanvasGestures({ container, view, gesture, draft, preview, li
     function onWheel(e: WheelEvent) {
       e.preventDefault();
       view.current = zoomAbout(view.current, local(e), wheelZoomFactor(e.deltaY, e.ctrlKey));
+      viewMoved();
       schedule("all");
     }
 
@@ -253,6 +270,8 @@ export function useCanvasGestures({ container, view, gesture, draft, preview, li
     window.addEventListener("keyup", onKey);
     return () => {
       cancelAnimationFrame(frame);
+      clearTimeout(rest);
+      moving.current = false;
       el.removeEventListener("pointerdown", onDown);
       el.removeEventListener("pointermove", onMove);
       el.removeEventListener("pointerup", onUp);
@@ -262,5 +281,5 @@ export function useCanvasGestures({ container, view, gesture, draft, preview, li
       window.removeEventListener("keydown", onKey);
       window.removeEventListener("keyup", onKey);
     };
-  }, [container, view, gesture, draft, preview, live, redraw]);
+  }, [container, view, gesture, draft, preview, live, redraw, moving]);
 }
