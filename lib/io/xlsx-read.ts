@@ -1,6 +1,7 @@
 import { Readable } from "node:stream";
 import ExcelJS from "exceljs";
 import { FileProblem, toRawTable, type RawRow, type RawTable } from "./table";
+import { openXmlWorkbook, type XmlSheet, type XmlWorkbook } from "./xlsx-sheet-xml";
 
 type CellValue = ExcelJS.CellValue;
 
@@ -90,20 +91,67 @@ async function readSheet(sheet: StreamSheet): Promise<SheetRead> {
     if (cells.some((c) => c !== "")) records.push({ rowNumber: row.number, cells });
   }
   fillMerges(records, merges);
-  const width = Math.max(0, ...records.map((r) => r.cells.length));
-  for (const r of records) while (r.cells.length < width) r.cells.push("");
+  padRows(records);
   return { name: sheet.name, records, merges };
+}
+
+function padRows(records: RawRow[]) {
+  let width = 0;
+  for (const r of records) width = Math.max(width, r.cells.length);
+  for (const r of records) while (r.cells.length < width) r.cells.push("");
 }
 
 const firstFilledRow = (s: SheetRead) => s.records.find((r) => r.cells.some((c) => c !== ""))?.cells ?? null;
 
+const BROKEN = "This file looks like a zipped Office file but is not a readable .xlsx workbook. Save it again as .xlsx or CSV.";
+
 /**
- * Reads an .xlsx workbook with ExcelJS's streaming reader (values only: no styles, no workbook model).
+ * Reads an .xlsx workbook: values only, straight from its XML (xlsx-sheet-xml.ts), or with ExcelJS's
+ * streaming reader when the workbook is laid out in a way that reader does not take.
  * Without a sheet name it takes the first sheet whose header row looks like a fixture list (per
  * `looksLikeHeader`), else the first sheet with data; the sheet names go back to the caller so a
  * person can pick another.
  */
 export async function readXlsx(bytes: Uint8Array, opts: { sheet?: string; looksLikeHeader?: (cells: string[]) => boolean } = {}): Promise<RawTable> {
+  let workbook: XmlWorkbook | null;
+  try {
+    workbook = openXmlWorkbook(bytes);
+  } catch {
+    throw new FileProblem(BROKEN);
+  }
+  if (!workbook) return readXlsxWithExcelJs(bytes, opts);
+  const sheetNames = workbook.sheets.map((s) => s.name);
+  const read = (s: XmlSheet): SheetRead => {
+    const { records, merges } = s.read();
+    fillMerges(records, merges);
+    padRows(records);
+    return { name: s.name, records, merges };
+  };
+  let chosen: SheetRead | undefined;
+  if (opts.sheet) {
+    const sheet = workbook.sheets.find((s) => s.name === opts.sheet);
+    if (!sheet) throw new FileProblem(`The workbook has no sheet called "${opts.sheet}". Its sheets: ${sheetNames.join(", ")}.`);
+    chosen = read(sheet);
+  } else {
+    let firstWithData: SheetRead | undefined;
+    for (const sheet of workbook.sheets) {
+      const s = read(sheet);
+      if (!s.records.length) continue;
+      firstWithData ??= s;
+      const first = firstFilledRow(s);
+      if (first && opts.looksLikeHeader?.(first)) {
+        chosen = s;
+        break;
+      }
+    }
+    chosen ??= firstWithData;
+    if (!chosen) throw new FileProblem("Every sheet in the workbook is empty.");
+  }
+  return toRawTable(chosen.records, { decimalComma: false, sheetNames, sheet: chosen.name });
+}
+
+/** The same with ExcelJS's streaming reader (values only: no workbook model); exported for its tests. */
+export async function readXlsxWithExcelJs(bytes: Uint8Array, opts: { sheet?: string; looksLikeHeader?: (cells: string[]) => boolean }): Promise<RawTable> {
   const input = Readable.from([Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength)]);
   // Styles are read so that date cells come back as dates (their format says so), not day numbers.
   const reader = new ExcelJS.stream.xlsx.WorkbookReader(input, { worksheets: "emit", sharedStrings: "cache", hyperlinks: "ignore", styles: "cache", entries: "ignore" });
@@ -115,7 +163,7 @@ export async function readXlsx(bytes: Uint8Array, opts: { sheet?: string; looksL
       read.push(await readSheet(sheet));
     }
   } catch {
-    throw new FileProblem("This file looks like a zipped Office file but is not a readable .xlsx workbook. Save it again as .xlsx or CSV.");
+    throw new FileProblem(BROKEN);
   }
   // Workbook order, which is what a person sees in the tabs (the zip's order can differ).
   const model = (reader as unknown as { model?: { sheets?: Array<{ name: string }> } }).model;

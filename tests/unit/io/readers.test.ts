@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import ExcelJS from "exceljs";
+import { strToU8, zipSync } from "fflate";
 import { readCsv } from "@/lib/io/csv-read";
-import { readXlsx } from "@/lib/io/xlsx-read";
+import { readXlsx, readXlsxWithExcelJs } from "@/lib/io/xlsx-read";
 import { sniffFile } from "@/lib/io/sniff";
 import { looksLikeFixtureHeader } from "@/lib/io/fields";
 import { FileProblem } from "@/lib/io/table";
@@ -75,7 +76,10 @@ describe("readXlsx", () => {
     ]);
   });
 
-  it("fills merged blocks anywhere in a large sheet the way ExcelJS's full workbook model reads them", async () => {
+  it.each([
+    ["from the sheet XML", readXlsx],
+    ["with ExcelJS's streaming reader (the fallback)", readXlsxWithExcelJs],
+  ])("fills merged blocks anywhere in a large sheet the way ExcelJS's full workbook model reads them (%s)", async (_, read) => {
     // Reference: ExcelJS's full (non-streaming) reader, whose cell.master gives each merged cell's value.
     // 2,000 rows of long text put the <mergeCell> list far into the sheet's XML, across many chunks.
     const file = await workbook((wb) => {
@@ -92,7 +96,7 @@ describe("readXlsx", () => {
     reference.getWorksheet("Rig")!.eachRow((row, n) => {
       if (n > 1) expected.push([1, 2, 3, 4].map((c) => String((row.getCell(c).isMerged ? row.getCell(c).master : row.getCell(c)).value ?? "")));
     });
-    const t = await readXlsx(file, { looksLikeHeader: looksLikeFixtureHeader });
+    const t = await read(file, { looksLikeHeader: looksLikeFixtureHeader });
     expect(t.sheet).toBe("Rig");
     expect(t.rows.map((r) => r.cells)).toEqual(expected);
     expect(t.rows[1].cells[0]).toBe("Pipe 0");
@@ -111,6 +115,38 @@ describe("readXlsx", () => {
     expect(t.sheet).toBe("Second");
     expect(t.sheetNames).toEqual(["Rig", "Second"]);
     expect(t.rows).toEqual([{ rowNumber: 2, cells: ["Boom SL", "3", "2026-12-02", "yes"] }]);
+  });
+
+  it("reads SpreadsheetML as other programs write it: tab order, rich and inline text, no cell refs, booleans, errors, dates", async () => {
+    // Hand-written parts per ECMA-376 Part 1 (SpreadsheetML); the expected text follows from the markup.
+    const ns = 'xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main" xmlns:r="http://schemas.openxmlformats.org/officeDocument/2006/relationships"';
+    const rel = "http://schemas.openxmlformats.org/officeDocument/2006/relationships";
+    const file = zipSync({
+      "[Content_Types].xml": strToU8("<Types/>"),
+      "xl/workbook.xml": strToU8(`<workbook ${ns}><workbookPr date1904="1"/><sheets><sheet name="Notes &amp; cover" sheetId="2" r:id="rId2"/><sheet name="Rig" sheetId="1" r:id="rId1"/></sheets></workbook>`),
+      "xl/_rels/workbook.xml.rels": strToU8(
+        `<Relationships xmlns="http://schemas.openxmlformats.org/package/2006/relationships"><Relationship Id="rId1" Type="${rel}/worksheet" Target="worksheets/sheet1.xml"/><Relationship Id="rId2" Type="${rel}/worksheet" Target="/xl/worksheets/sheet2.xml"/><Relationship Id="rId3" Type="${rel}/sharedStrings" Target="sharedStrings.xml"/><Relationship Id="rId4" Type="${rel}/styles" Target="styles.xml"/></Relationships>`,
+      ),
+      "xl/sharedStrings.xml": strToU8(`<sst ${ns}><si><t>Position</t></si><si><t xml:space="preserve">Unit </t></si><si><r><rPr><b/></rPr><t>1st </t></r><r><t>Electric</t></r><rPh sb="0" eb="1"><t>x</t></rPh></si><si><t>a_x000D_b &lt;c&gt;</t></si></sst>`),
+      "xl/styles.xml": strToU8(`<styleSheet ${ns}><numFmts count="1"><numFmt numFmtId="164" formatCode="&quot;on&quot; d mmm yyyy"/></numFmts><cellXfs count="3"><xf numFmtId="0"/><xf numFmtId="14"/><xf numFmtId="164"/></cellXfs></styleSheet>`),
+      "xl/worksheets/sheet2.xml": strToU8(`<worksheet ${ns}><sheetData><row r="1"><c r="A1" t="inlineStr"><is><t>Cover</t></is></c></row></sheetData></worksheet>`),
+      "xl/worksheets/sheet1.xml": strToU8(
+        `<worksheet ${ns}><sheetData>` +
+          `<row r="1"><c r="A1" t="s"><v>0</v></c><c r="B1" t="s"><v>1</v></c><c r="C1" t="inlineStr"><is><t>Hung</t></is></c><c r="D1" t="inlineStr"><is><t>Notes</t></is></c><c r="E1" t="inlineStr"><is><t>Date</t></is></c></row>` +
+          `<row><c t="s"><v>2</v></c><c><v>007</v></c><c t="b"><v>1</v></c><c t="s"><v>3</v></c><c s="1"><v>0</v></c></row>` +
+          `<row r="4"><c r="A4" t="str"><f>A2</f><v>Boom &amp; ladder</v></c><c r="B4"><v>2.50</v></c><c r="C4" t="b"><v>0</v></c><c r="D4" t="e"><v>#N/A</v></c><c r="E4" s="2"><v>1</v></c></row>` +
+          `<row r="5"/></sheetData></worksheet>`,
+      ),
+    });
+    const t = await readXlsx(file, { looksLikeHeader: looksLikeFixtureHeader });
+    expect(t.sheetNames).toEqual(["Notes & cover", "Rig"]);
+    expect(t.sheet).toBe("Rig");
+    expect(t.headers).toEqual(["Position", "Unit", "Hung", "Notes", "Date"]);
+    // 1904 date system: day 0 is 1904-01-01 (ECMA-376 Part 1, 18.17.4.1).
+    expect(t.rows).toEqual([
+      { rowNumber: 2, cells: ["1st Electric", "7", "yes", "a\rb <c>", "1904-01-01"] },
+      { rowNumber: 4, cells: ["Boom & ladder", "2.5", "no", "", "1904-01-02"] },
+    ]);
   });
 
   it("names the sheets when asked for one that does not exist, and refuses a broken zip", async () => {
