@@ -111,7 +111,7 @@ const med = (ts: Timing[]): Timing => ({ wall: median(ts.map((t) => t.wall)), cp
 const both = (t: Timing) => `${f0(t.wall)} / ${f0(t.cpu)}`;
 const ratio = (t: Timing, raw: Timing) => `${both(t)} (${(t.wall / raw.wall).toFixed(1)}× / ${(t.cpu / raw.cpu).toFixed(1)}×)`;
 
-type Stages = { read: number; check: number; write: number };
+type Stages = { read: Timing; check: Timing; write: Timing };
 
 async function main() {
   if ((await ensureDatabase()) === "unavailable") return;
@@ -130,14 +130,19 @@ async function main() {
     await commitImport({ productionId: t.productionId, member: designer, userId: user.id, request: { bytes: await writeXlsx([rows(50, " w")]), fileName: "w.xlsx", createMissing: false } });
   }
   const timeImport = async (bytes: Uint8Array, name: string, productionId: number, expect: "create" | "update", n: number) => {
-    const t0 = performance.now();
-    // Time of the first report of each stage, so the split read / check / write can be printed.
-    const marks = new Map<string, number>();
-    const progress: Progress = (stage) => void (marks.has(stage) || marks.set(stage, performance.now() - t0));
+    // Wall and CPU at the first report of each stage, so the split read / check / write can be printed.
+    const now = (): Timing => {
+      const c = process.cpuUsage();
+      return { wall: performance.now(), cpu: (c.user + c.system) / 1000 + serverCpuMs(dbPid) };
+    };
+    const marks = new Map<string, Timing>();
+    const progress: Progress = (stage) => void (marks.has(stage) || marks.set(stage, now()));
     const t = await timed(() => commitImport({ productionId, member: designer, userId: user.id, request: { bytes, fileName: name, createMissing: false }, progress }));
+    const end = now();
     if (t.value.counts[expect] !== n) throw new Error(`${name}: expected ${n} ${expect}s, got ${JSON.stringify(t.value.counts)}`);
-    const at = (s: string) => marks.get(s) ?? t.wall;
-    return { wall: t.wall, cpu: t.cpu, stages: { read: at("checking") - at("reading"), check: at("writing") - at("checking"), write: t.wall - at("writing") } };
+    const at = (s: string) => marks.get(s) ?? end;
+    const span = (a: Timing, b: Timing): Timing => ({ wall: b.wall - a.wall, cpu: b.cpu - a.cpu });
+    return { wall: t.wall, cpu: t.cpu, stages: { read: span(at("reading"), at("checking")), check: span(at("checking"), at("writing")), write: span(at("writing"), end) } };
   };
   const summary: string[] = [];
   const stageLines: string[] = [];
@@ -176,7 +181,7 @@ async function main() {
     console.log(line);
     summary.push(line);
     for (const [name, list] of Object.entries(st)) {
-      const m = (k: keyof Stages) => f0(median(list.map((s) => s[k])));
+      const m = (k: keyof Stages) => both(med(list.map((s) => s[k])));
       stageLines.push(`| ${n.toLocaleString("en-GB")} | ${name === "upd" ? "re-import .csv (updates)" : `.${name}`} | ${m("read")} | ${m("check")} | ${m("write")} |`);
     }
   }
@@ -184,7 +189,7 @@ async function main() {
   console.log("| rows | load avg (1 min) | raw batched INSERT | import .csv (× raw) | import .xlsx (× raw) | raw batched UPDATE | re-import .csv, all updates (× raw UPDATE) | export .xlsx, every column |");
   console.log("|---|---|---|---|---|---|---|---|");
   for (const line of summary) console.log(line);
-  console.log("\nStages (first progress report of each; 'write' includes saving the mapping):");
+  console.log("\nStages, wall / CPU (from the first progress report of each; 'write' includes saving the mapping):");
   console.log("| rows | file | read | check | write |");
   console.log("|---|---|---|---|---|");
   for (const line of stageLines) console.log(line);
