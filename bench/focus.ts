@@ -1,7 +1,9 @@
 // Benchmark for focus-chart PDFs (issue 6): N charts at 4 a page through the same code as the PDF route
-// (chart model → sheets → Debian's headless Chromium → page.pdf). Reports wall time, pages, PDF size, and
-// the peak resident memory of Node and of the browser's process tree (sampled from /proc every 100 ms).
-// Run with `npm run bench:focus` (it runs tsx with the react-server condition so 'server-only' loads).
+// (chart model → sheets → Debian's headless Chromium → page.pdf). Reports wall time, pages, PDF size, the
+// peak resident memory of Node and of the browser's process tree, and the CPU seconds both spent (sampled
+// from /proc every 300 ms; CPU time varies far less than wall time on a shared machine).
+// Run with `npm run bench:focus [sizes…]` (tsx with the react-server condition so 'server-only' loads);
+// BENCH_PDF_OUT=/tmp/focus-{n}.pdf keeps each PDF.
 import { readdirSync, readFileSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import { performance } from "node:perf_hooks";
@@ -38,8 +40,8 @@ function rig(n: number): FixtureDto[] {
   });
 }
 
-/** Proportional resident memory (Pss) of every descendant of this process (the browser's tree), in bytes. */
-function childTreeRss(): number {
+/** This process's descendants (the browser's tree), found by walking /proc's parent links. */
+function descendants(): number[] {
   const parents = new Map<number, number>();
   for (const d of readdirSync("/proc")) {
     if (!/^\d+$/.test(d)) continue;
@@ -48,29 +50,77 @@ function childTreeRss(): number {
       parents.set(Number(d), Number(stat.slice(stat.lastIndexOf(")") + 2).split(" ")[1]));
     } catch { /* process ended */ }
   }
-  let total = 0;
-  for (const [pid] of parents) {
+  return [...parents.keys()].filter((pid) => {
     let p = parents.get(pid);
     while (p && p !== process.pid && p > 1) p = parents.get(p);
-    if (p !== process.pid) continue;
-    try {
-      // Pss shares each shared page among the processes mapping it, so the tree's total is not overcounted.
-      const m = readFileSync(`/proc/${pid}/smaps_rollup`, "utf8").match(/Pss:\s+(\d+) kB/);
-      total += m ? Number(m[1]) * 1024 : 0;
-    } catch { /* gone */ }
+    return p === process.pid;
+  });
+}
+
+/** Pss of a process (shared pages divided among the processes mapping them, so a tree's sum is not
+ * overcounted) and its CPU time so far (user + system, all threads), or null once it has ended. */
+function sample(pid: number): { pss: number; cpu: number } | null {
+  try {
+    const raw = readFileSync(`/proc/${pid}/stat`, "utf8");
+    const stat = raw.slice(raw.lastIndexOf(")") + 2).split(" ");
+    const m = readFileSync(`/proc/${pid}/smaps_rollup`, "utf8").match(/Pss:\s+(\d+) kB/);
+    return { pss: m ? Number(m[1]) * 1024 : 0, cpu: (Number(stat[11]) + Number(stat[12])) / CLOCK_TICKS };
+  } catch {
+    return null;
   }
-  return total;
 }
 
 const MiB = 1024 * 1024;
+const CLOCK_TICKS = 100; // USER_HZ on Linux
+const load1 = () => os.loadavg()[0];
 
-async function run(n: number) {
+type Result = { n: number; pages: number; expected: number; total: number; prep: number; chromium: number; pdfMiB: number; htmlMiB: number; nodePeak: number; browserPeak: number; browserCpu: number; nodeCpu: number; samplerCpu: number; load: [number, number] };
+
+/** Every 300 ms: the browser tree's Pss and CPU time (its process list about once a second). Reading
+ * smaps_rollup makes the kernel walk the browser's page tables, so sampling every 100 ms cost 15 % of a core. */
+const SAMPLE_MS = 300;
+function watch() {
+  let pids = descendants();
+  const cpuStart = new Map(pids.map((p) => [p, sample(p)?.cpu ?? 0]));
+  const cpuLast = new Map<number, number>();
   let browserPeak = 0;
   let nodePeak = 0;
-  const timer = setInterval(() => {
-    browserPeak = Math.max(browserPeak, childTreeRss());
+  let ticks = 0;
+  const nodeCpu0 = process.cpuUsage();
+  let own = 0;
+  const tick = () => {
+    const c0 = process.cpuUsage();
+    if (++ticks % 3 === 0) pids = descendants();
+    let pss = 0;
+    for (const p of pids) {
+      const s = sample(p);
+      if (!s) continue;
+      pss += s.pss;
+      cpuLast.set(p, s.cpu);
+    }
+    browserPeak = Math.max(browserPeak, pss);
     nodePeak = Math.max(nodePeak, process.memoryUsage().rss);
-  }, 100);
+    const c = process.cpuUsage(c0);
+    own += (c.user + c.system) / 1e6;
+  };
+  const timer = setInterval(tick, SAMPLE_MS);
+  return {
+    stop() {
+      clearInterval(timer);
+      pids = descendants();
+      tick();
+      let browserCpu = 0;
+      for (const [p, c] of cpuLast) browserCpu += c - (cpuStart.get(p) ?? 0);
+      const u = process.cpuUsage(nodeCpu0);
+      // The sampler's own reads (smaps_rollup walks the browser's page tables) are not the print's work.
+      return { browserPeak, nodePeak, browserCpu, nodeCpu: (u.user + u.system) / 1e6 - own, samplerCpu: own };
+    },
+  };
+}
+
+async function run(n: number): Promise<Result> {
+  const load0 = load1();
+  const w = watch();
   const t0 = performance.now();
   const landmarks = outlineLandmarks(PRODUCTION);
   const charts = rig(n).map((f) => buildFocusChart(f, PRODUCTION, { landmarks, userNames: { 1: "Bench Electrician" }, timeZone: "UTC" }));
@@ -80,22 +130,43 @@ async function run(n: number) {
   const t1 = performance.now();
   const pdf = await renderPdf({ title: "bench", sheets: parts, paper: "A4", footerText: "bench" });
   const t2 = performance.now();
-  clearInterval(timer);
-  nodePeak = Math.max(nodePeak, process.memoryUsage().rss);
-  if (process.env.BENCH_PDF_OUT) writeFileSync(process.env.BENCH_PDF_OUT, pdf);
+  const m = w.stop();
+  if (process.env.BENCH_PDF_OUT) writeFileSync(process.env.BENCH_PDF_OUT.replace("{n}", String(n)), pdf);
   const pages = (pdf.toString("latin1").match(/\/Type\s*\/Page(?!s)/g) ?? []).length;
+  const r: Result = {
+    n, pages, expected: sheets.length, total: (t2 - t0) / 1000, prep: (t1 - t0) / 1000, chromium: (t2 - t1) / 1000, pdfMiB: pdf.length / MiB,
+    htmlMiB: htmlLength / MiB, ...m, load: [load0, load1()],
+  };
   console.log(
-    `${String(n).padStart(5)} charts: ${((t2 - t0) / 1000).toFixed(1)} s total (model + HTML ${((t1 - t0) / 1000).toFixed(2)} s, ` +
-      `Chromium ${((t2 - t1) / 1000).toFixed(1)} s), ${pages} pages (expected ${sheets.length}), ${(pdf.length / MiB).toFixed(1)} MiB PDF, ` +
-      `HTML ${(htmlLength / MiB).toFixed(1)} MiB, peak RSS Node ${(nodePeak / MiB).toFixed(0)} MiB, browser tree ${(browserPeak / MiB).toFixed(0)} MiB (Pss)`,
+    `${String(n).padStart(5)} charts: ${r.total.toFixed(1)} s total (model + HTML ${r.prep.toFixed(2)} s, Chromium ${r.chromium.toFixed(1)} s), ` +
+      `${pages} pages (expected ${sheets.length}), ${r.pdfMiB.toFixed(1)} MiB PDF, HTML ${r.htmlMiB.toFixed(1)} MiB, ` +
+      `peak RSS Node ${(r.nodePeak / MiB).toFixed(0)} MiB, browser tree ${(r.browserPeak / MiB).toFixed(0)} MiB (Pss), ` +
+      `CPU browser ${r.browserCpu.toFixed(1)} s + Node ${r.nodeCpu.toFixed(1)} s (sampler ${r.samplerCpu.toFixed(1)} s more), load ${r.load[0].toFixed(1)}→${r.load[1].toFixed(1)}`,
   );
+  return r;
+}
+
+/** One line a size, for the lead to compare runs; CPU seconds say more than wall time on a busy machine. */
+function summary(results: Result[]) {
+  const head = "charts | pages | wall s | CPU s (browser + Node) | Node peak MiB | browser Pss MiB | together MiB | load 1-min";
+  console.log(`\n${head}\n${head.replace(/[^|]/g, "-")}`);
+  for (const r of results) {
+    console.log([
+      r.n, r.pages === r.expected ? r.pages : `${r.pages} (expected ${r.expected})`, r.total.toFixed(1),
+      `${(r.browserCpu + r.nodeCpu).toFixed(1)} (${r.browserCpu.toFixed(1)} + ${r.nodeCpu.toFixed(1)})`,
+      (r.nodePeak / MiB).toFixed(0), (r.browserPeak / MiB).toFixed(0), ((r.nodePeak + r.browserPeak) / MiB).toFixed(0),
+      `${r.load[0].toFixed(1)}–${r.load[1].toFixed(1)}`,
+    ].join(" | "));
+  }
 }
 
 async function main() {
   console.log(`Focus-chart PDF at 4 a page, A4 — ${os.cpus().length} cores, Node ${process.version}, ${new Date().toISOString().slice(0, 10)}`);
   const sizes = process.argv.slice(2).map(Number).filter((x) => x > 0);
-  for (const n of sizes.length ? sizes : [100, 500, 1500]) await run(n);
+  const results: Result[] = [];
+  for (const n of sizes.length ? sizes : [100, 500, 1500]) results.push(await run(n));
   await closeBrowser();
+  summary(results);
 }
 
 void main();
