@@ -34,19 +34,30 @@ export type ImportPreview = {
 
 const MAX_ERRORS = 500;
 
-async function loadSnapshot(productionId: number): Promise<Snapshot> {
+// What planning reads of each existing fixture: its identity, version and DMX fields, and the fields
+// the file's columns map to (the only ones it can compare or change); a rig of thousands of units
+// then costs a fraction of reading every column.
+const SNAPSHOT_BASE = ["id", "version", "positionId", "fixtureTypeId", "unitNumber", "address", "footprint"];
+const ATTRIBUTE_OF: Partial<Record<ColumnTarget, string>> = { position: "positionId", type: "fixtureTypeId", focusPoint: "focusPointId" };
+
+async function loadSnapshot(productionId: number, mapping: ColumnTarget[]): Promise<Snapshot> {
   const { Position, FixtureType, FocusPoint, Fixture } = getDb();
+  const known = Fixture.getAttributes() as Record<string, unknown>;
+  const mapped = mapping.filter((k) => k !== "ignore").map((k) => ATTRIBUTE_OF[k] ?? k);
+  const attributes = [...new Set([...SNAPSHOT_BASE, ...mapped])].filter((a) => a in known);
   const [positions, types, focusPoints, fixtures] = await Promise.all([
     Position.findAll({ where: { productionId }, raw: true }),
     FixtureType.findAll({ where: { productionId }, raw: true }),
     FocusPoint.findAll({ where: { productionId }, raw: true }),
-    Fixture.findAll({ where: { productionId }, raw: true }),
+    Fixture.findAll({ where: { productionId }, attributes, raw: true }),
   ]);
+  const bools = ["hung", "focused"].filter((a) => attributes.includes(a));
+  if (bools.length) for (const f of fixtures as unknown as Array<Record<string, unknown>>) for (const b of bools) f[b] = Boolean(f[b]);
   return {
     positions,
     types: types.map((t) => ({ ...t, dmxModes: typeof t.dmxModes === "string" ? JSON.parse(t.dmxModes) : t.dmxModes })),
     focusPoints,
-    fixtures: fixtures.map((f) => ({ ...f, hung: Boolean(f.hung), focused: Boolean(f.focused) })) as unknown as Snapshot["fixtures"],
+    fixtures: fixtures as unknown as Snapshot["fixtures"],
   };
 }
 
@@ -98,7 +109,7 @@ async function prepare(productionId: number, member: Member, req: ImportRequest,
   } else {
     progress?.("checking", 0, table.rows.length);
     const checked = await checkInSlices(table, mapping, lengthUnit, progress);
-    plan = planImport(checked.rows, await loadSnapshot(productionId), { member, createMissing: req.createMissing, columnOf });
+    plan = planImport(checked.rows, await loadSnapshot(productionId, mapping), { member, createMissing: req.createMissing, columnOf });
     errors = [...checked.errors, ...plan.errors].sort((a, b) => a.row - b.row);
     progress?.("checking", table.rows.length, table.rows.length);
   }
