@@ -13,6 +13,20 @@ afterAll(async () => {
   await context?.close();
 });
 
+/** A camera-sized JPEG (3000 × 2250, about 3–4 MB): 10-pixel blocks of colour over a little noise. */
+async function cameraJpeg(): Promise<Buffer> {
+  const w = 3000, h = 2250;
+  const raw = Buffer.alloc(w * h * 3);
+  let seed = 7;
+  const next = () => (seed = (seed * 1103515245 + 12345) & 0x7fffffff) >> 16;
+  const blocks = Array.from({ length: (w / 10) * (h / 10) * 3 }, () => next() % 200);
+  for (let i = 0; i < raw.length; i++) {
+    const px = Math.floor(i / 3);
+    raw[i] = blocks[(Math.floor(Math.floor(px / w) / 10) * (w / 10) + Math.floor((px % w) / 10)) * 3 + (i % 3)] + (next() % 30);
+  }
+  return sharp(raw, { raw: { width: w, height: h, channels: 3 } }).jpeg({ quality: 90 }).toBuffer();
+}
+
 /** A stand-in for a phone photo of a focused pool: a warm ellipse on a dark deck, drawn as SVG and turned into a PNG. */
 async function deckPhoto(): Promise<Buffer> {
   const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="640" height="480">
@@ -52,6 +66,21 @@ describe("focus photo from the deck", () => {
     await expect.poll(() => preview.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth), { timeout: 20_000 }).toBe(320);
     const onChart = page.getByTestId("focus-chart").getByTestId("focus-photo-thumb");
     await expect.poll(() => onChart.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth), { timeout: 20_000 }).toBe(320);
+
+    // A camera-sized photo is shrunk in the browser before it is sent over the venue's wifi.
+    const big = await cameraJpeg();
+    const sent = page.waitForRequest((r) => r.url().includes(`/fixtures/${unit.id}/photo`) && r.method() === "POST");
+    await page.getByTestId("focus-photo-input").setInputFiles({ name: "IMG_2232.jpg", mimeType: "image/jpeg", buffer: big });
+    const bodyBytes = (await sent).postDataBuffer()?.byteLength ?? Infinity;
+    expect(big.byteLength).toBeGreaterThan(2 * 1024 * 1024);
+    expect(bodyBytes).toBeLessThan(big.byteLength * 0.7);
+    await expect.poll(() => page.getByTestId("focus-photo").getByRole("status").textContent(), { timeout: 30_000 }).toBe("Photo replaced.");
+    await expect.poll(() => preview.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth), { timeout: 20_000 }).toBe(320);
+    // Back to the picture of the pool for the screenshots.
+    const replaced = page.waitForResponse((r) => r.url().includes(`/fixtures/${unit.id}/photo`) && r.request().method() === "POST");
+    await page.getByTestId("focus-photo-input").setInputFiles({ name: "IMG_2231.png", mimeType: "image/png", buffer: await deckPhoto() });
+    expect((await replaced).status()).toBe(201);
+    await expect.poll(() => page.getByTestId("focus-photo").getByRole("status").textContent(), { timeout: 20_000 }).toBe("Photo replaced.");
 
     // Barn doors as focused, leaf by leaf; the chart words them.
     await page.getByTestId("barn-door-top").fill("in halfway");

@@ -10,6 +10,31 @@ import type { FocusPageData } from "./types";
 
 // The server's cap (lib/data/focus-photos.ts); checked here too so a huge file is not sent over the venue's wifi.
 const MAX_BYTES = 15 * 1024 * 1024;
+/** Above this the browser shrinks the photo before sending it (a phone photo is 3–12 MB; the server keeps 1600 px anyway). */
+const SHRINK_ABOVE = 2 * 1024 * 1024;
+const SEND_PX = 2048;
+
+/**
+ * A smaller JPEG of the photo, drawn upright from its orientation tag, for the venue's slow wifi; the
+ * original when the browser cannot decode it (the server then checks it and answers with its message).
+ */
+async function shrinkForUpload(file: File): Promise<File> {
+  if (file.size <= SHRINK_ABOVE || typeof createImageBitmap !== "function") return file;
+  try {
+    const bitmap = await createImageBitmap(file, { imageOrientation: "from-image" });
+    const scale = Math.min(1, SEND_PX / Math.max(bitmap.width, bitmap.height));
+    const canvas = document.createElement("canvas");
+    canvas.width = Math.round(bitmap.width * scale);
+    canvas.height = Math.round(bitmap.height * scale);
+    canvas.getContext("2d")!.drawImage(bitmap, 0, 0, canvas.width, canvas.height);
+    bitmap.close();
+    const blob = await new Promise<Blob | null>((resolve) => canvas.toBlob(resolve, "image/jpeg", 0.88));
+    return blob && blob.size < file.size ? new File([blob], file.name.replace(/\.\w+$/, "") + ".jpg", { type: "image/jpeg" }) : file;
+  } catch {
+    return file;
+  }
+}
+
 const pick = "inline-flex min-h-12 cursor-pointer items-center justify-center rounded-md px-4 text-sm font-medium";
 
 /** The deck photo of the current unit: take or choose one, replace it, remove it (electricians and the designer). */
@@ -18,15 +43,19 @@ export function FocusPhoto({ fixture, chart, data }: { fixture: FixtureDto; char
   const inputId = useId();
   const [message, setMessage] = useState<{ text: string; tone: "error" | "ok" } | null>(null);
   const [confirming, setConfirming] = useState(false);
+  const [preparing, setPreparing] = useState(false);
   useEffect(() => {
     setMessage(null);
     setConfirming(false);
   }, [fixture.id]);
-  const busy = upload.isPending || remove.isPending;
+  const busy = upload.isPending || remove.isPending || preparing;
   const done = (text: string) => ({ onSuccess: () => setMessage({ text, tone: "ok" as const }), onError: (err: Error) => setMessage({ text: err.message, tone: "error" as const }) });
 
-  const onFile = (file: File | undefined) => {
-    if (!file) return;
+  const onFile = async (picked: File | undefined) => {
+    if (!picked) return;
+    setMessage({ text: "Preparing the photo…", tone: "ok" });
+    setPreparing(true);
+    const file = await shrinkForUpload(picked).finally(() => setPreparing(false));
     if (file.size > MAX_BYTES) {
       setMessage({ text: `The photo is ${(file.size / 1048576).toFixed(1)} MB; the limit is 15 MB. Nothing was saved.`, tone: "error" });
       return;
@@ -58,7 +87,7 @@ export function FocusPhoto({ fixture, chart, data }: { fixture: FixtureDto; char
             disabled={busy}
             data-testid="focus-photo-input"
             onChange={(e) => {
-              onFile(e.target.files?.[0]);
+              void onFile(e.target.files?.[0]);
               e.target.value = "";
             }}
           />
