@@ -2,27 +2,47 @@ import "server-only";
 // Focus charts printed to PDF by the shared headless Chromium: the same sheets and stylesheet as the
 // browser's print view. Long prints go to the browser in parts of PART_SHEETS pages and are joined with
 // pdf-lib: Chromium keeps every page of a print in memory, and 375 pages in one go took over 3 GiB. Two
-// parts print at once in two pages of the one browser; parts are small so both together stay near the
-// memory one part of 40 pages took.
+// parts print at once in two pages of the one browser (a core each).
+//
+// What makes it fast (docs/benchmarks.md, "Focus charts, third pass"):
+// - Each page loads the print shell (fonts, styles) once and keeps it; a part only replaces the body.
+// - The fonts sit in a <style> of their own. In the same sheet as an @media rule, switching to print
+//   media made Chromium drop every web font's shaped text and lay the whole part out again with it,
+//   which cost 1.5 s of each part's 2.3 s.
+// - On screen the body is not displayed, so Chromium lays the sheets out only for print (it also lays
+//   the page out again for the screen after printing).
 import { PDFDocument } from "pdf-lib";
 import { CHART_CSS, sheetCss } from "@/lib/focus/chart-css";
 import { escapeHtml } from "@/lib/focus/escape";
 import { PAPER, type Paper } from "@/lib/focus/pages";
-import { plexFontFaces } from "./fonts";
+import { plexFontFaces, PLEX_WEIGHTS } from "./fonts";
 import type { Page } from "playwright-core";
-import { withPage } from "./browser";
+import { withPages } from "./browser";
 
-/** The whole printable document: fonts, chart styles, the paper's page rule, and the sheets. */
-export function printDocument(o: { title: string; paper: Paper; sheets: string }): string {
-  return `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>${escapeHtml(o.title)}</title>` +
-    `<style>${plexFontFaces()}\nhtml,body{margin:0;background:#fff}${CHART_CSS}${sheetCss(o.paper)}</style></head>` +
-    `<body>${o.sheets}</body></html>`;
+/** The document a print page holds between parts: everything but the title and the sheets. */
+function printShell(paper: Paper): string {
+  return `<!doctype html><html lang="en"><head><meta charset="utf-8"><title></title>` +
+    `<style>${plexFontFaces()}</style>` +
+    `<style>html,body{margin:0;background:#fff}@media screen{body{display:none}}${CHART_CSS}${sheetCss(paper)}</style></head>` +
+    `<body></body></html>`;
 }
 
 const PRINT_TIMEOUT_MS = 120_000;
 export const PART_SHEETS = 20;
 /** Parts printed at once, each in its own page of the browser. */
 const PARALLEL_PARTS = 2;
+
+/** Which shell each page of the pool holds (pages outlive a print). */
+const shellOf = new WeakMap<Page, Paper>();
+
+async function loadShell(page: Page, paper: Paper) {
+  if (shellOf.get(page) === paper) return;
+  shellOf.delete(page);
+  await page.setContent(printShell(paper), { waitUntil: "load" });
+  // Fonts load when text first needs them; loading them now means no part waits for them.
+  await page.evaluate((weights) => Promise.all(weights.map((w) => document.fonts.load(`${w} 10px "IBM Plex Sans"`))).then(() => undefined), [...PLEX_WEIGHTS]);
+  shellOf.set(page, paper);
+}
 
 function footer(text: string, numbered: boolean): string {
   // Chromium fills pageNumber/totalPages itself; in a print made of parts they would restart, so then
@@ -38,35 +58,38 @@ export async function renderPdf(o: { title: string; sheets: string[]; paper: Pap
   const m = PAPER[o.paper].marginMm;
   const print = async (page: Page, part: string[], numbered: boolean) => {
     page.setDefaultTimeout(PRINT_TIMEOUT_MS);
-    await page.setContent(printDocument({ title: o.title, paper: o.paper, sheets: part.join("") }), { waitUntil: "load" });
-    await page.evaluate(() => document.fonts.ready.then(() => undefined));
-    return page.pdf({
-      format: o.paper,
-      printBackground: true,
-      preferCSSPageSize: true,
-      margin: { top: `${m.top}mm`, right: `${m.side}mm`, bottom: `${m.bottom}mm`, left: `${m.side}mm` },
-      displayHeaderFooter: true,
-      headerTemplate: "<span></span>",
-      footerTemplate: footer(o.footerText, numbered),
-    });
+    await loadShell(page, o.paper);
+    await page.evaluate(({ title, html }) => {
+      document.title = title;
+      document.body.innerHTML = html;
+      // Pictures (if a chart has any) must be decoded before printing, as the load event used to ensure.
+      return Promise.all([document.fonts.ready, ...Array.from(document.images, (img) => img.decode().catch(() => undefined))]).then(() => undefined);
+    }, { title: o.title, html: part.join("") });
+    try {
+      return await page.pdf({
+        format: o.paper,
+        printBackground: true,
+        preferCSSPageSize: true,
+        margin: { top: `${m.top}mm`, right: `${m.side}mm`, bottom: `${m.bottom}mm`, left: `${m.side}mm` },
+        displayHeaderFooter: true,
+        headerTemplate: "<span></span>",
+        footerTemplate: footer(o.footerText, numbered),
+      });
+    } finally {
+      // The page goes back to the pool: it must not keep this print's charts (or their memory).
+      await page.evaluate(() => { document.body.textContent = ""; });
+    }
   };
-  const pdfs = await withPage(async (first) => {
+  const pdfs = await withPages(Math.min(PARALLEL_PARTS, parts.length), async (pages) => {
     const out: Uint8Array[] = new Array(parts.length);
     let next = 0;
-    // Two pages of the one browser print alternate parts side by side (a core each on this machine);
-    // a fresh page per part lets Chromium drop the previous part's layout.
-    const worker = async () => {
+    const worker = async (page: Page) => {
       while (next < parts.length) {
         const k = next++;
-        const page = k === 0 ? first : await first.context().newPage();
-        try {
-          out[k] = await print(page, parts[k], parts.length === 1);
-        } finally {
-          if (page !== first) await page.close();
-        }
+        out[k] = await print(page, parts[k], parts.length === 1);
       }
     };
-    await Promise.all(Array.from({ length: Math.min(PARALLEL_PARTS, parts.length) }, worker));
+    await Promise.all(pages.map(worker));
     return out;
   });
   if (pdfs.length === 1) return Buffer.from(pdfs[0]);
