@@ -105,37 +105,19 @@ const firstFilledRow = (s: SheetRead) => s.records.find((r) => r.cells.some((c) 
 
 const BROKEN = "This file looks like a zipped Office file but is not a readable .xlsx workbook. Save it again as .xlsx or CSV.";
 
-/**
- * Reads an .xlsx workbook: values only, straight from its XML (xlsx-sheet-xml.ts), or with ExcelJS's
- * streaming reader when the workbook is laid out in a way that reader does not take.
- * Without a sheet name it takes the first sheet whose header row looks like a fixture list (per
- * `looksLikeHeader`), else the first sheet with data; the sheet names go back to the caller so a
- * person can pick another.
- */
-export async function readXlsx(bytes: Uint8Array, opts: { sheet?: string; looksLikeHeader?: (cells: string[]) => boolean } = {}): Promise<RawTable> {
-  let workbook: XmlWorkbook | null;
-  try {
-    workbook = openXmlWorkbook(bytes);
-  } catch {
-    throw new FileProblem(BROKEN);
-  }
-  if (!workbook) return readXlsxWithExcelJs(bytes, opts);
-  const sheetNames = workbook.sheets.map((s) => s.name);
-  const read = (s: XmlSheet): SheetRead => {
-    const { records, merges } = s.read();
-    fillMerges(records, merges);
-    padRows(records);
-    return { name: s.name, records, merges };
-  };
+type ReadOptions = { sheet?: string; looksLikeHeader?: (cells: string[]) => boolean };
+
+// The sheet asked for by name; else the first sheet whose header row looks like a fixture list (per
+// `looksLikeHeader`), else the first sheet with data. Sheets are read (`read`) only as far as needed.
+function chooseSheet(sheets: Array<{ name: string; read: () => SheetRead }>, sheetNames: string[], opts: ReadOptions): RawTable {
   let chosen: SheetRead | undefined;
   if (opts.sheet) {
-    const sheet = workbook.sheets.find((s) => s.name === opts.sheet);
-    if (!sheet) throw new FileProblem(`The workbook has no sheet called "${opts.sheet}". Its sheets: ${sheetNames.join(", ")}.`);
-    chosen = read(sheet);
+    chosen = sheets.find((s) => s.name === opts.sheet)?.read();
+    if (!chosen) throw new FileProblem(`The workbook has no sheet called "${opts.sheet}". Its sheets: ${sheetNames.join(", ")}.`);
   } else {
     let firstWithData: SheetRead | undefined;
-    for (const sheet of workbook.sheets) {
-      const s = read(sheet);
+    for (const sheet of sheets) {
+      const s = sheet.read();
       if (!s.records.length) continue;
       firstWithData ??= s;
       const first = firstFilledRow(s);
@@ -150,8 +132,34 @@ export async function readXlsx(bytes: Uint8Array, opts: { sheet?: string; looksL
   return toRawTable(chosen.records, { decimalComma: false, sheetNames, sheet: chosen.name });
 }
 
+/**
+ * Reads an .xlsx workbook: values only, straight from its XML (xlsx-sheet-xml.ts), or with ExcelJS's
+ * streaming reader when the workbook is laid out in a way that reader does not take. The sheet names
+ * go back to the caller (in tab order) so a person can pick another sheet.
+ */
+export async function readXlsx(bytes: Uint8Array, opts: ReadOptions = {}): Promise<RawTable> {
+  let workbook: XmlWorkbook | null;
+  try {
+    workbook = openXmlWorkbook(bytes);
+  } catch {
+    throw new FileProblem(BROKEN);
+  }
+  if (!workbook) return readXlsxWithExcelJs(bytes, opts);
+  const read = (s: XmlSheet): SheetRead => {
+    const { records, merges } = s.read();
+    fillMerges(records, merges);
+    padRows(records);
+    return { name: s.name, records, merges };
+  };
+  return chooseSheet(
+    workbook.sheets.map((s) => ({ name: s.name, read: () => read(s) })),
+    workbook.sheets.map((s) => s.name),
+    opts,
+  );
+}
+
 /** The same with ExcelJS's streaming reader (values only: no workbook model); exported for its tests. */
-export async function readXlsxWithExcelJs(bytes: Uint8Array, opts: { sheet?: string; looksLikeHeader?: (cells: string[]) => boolean }): Promise<RawTable> {
+export async function readXlsxWithExcelJs(bytes: Uint8Array, opts: ReadOptions): Promise<RawTable> {
   const input = Readable.from([Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength)]);
   // Styles are read so that date cells come back as dates (their format says so), not day numbers.
   const reader = new ExcelJS.stream.xlsx.WorkbookReader(input, { worksheets: "emit", sharedStrings: "cache", hyperlinks: "ignore", styles: "cache", entries: "ignore" });
@@ -171,18 +179,9 @@ export async function readXlsxWithExcelJs(bytes: Uint8Array, opts: { sheet?: str
   if (!sheetNames.length) throw new FileProblem("The workbook has no sheets.");
   const order = (s: SheetRead) => sheetNames.indexOf(s.name);
   read.sort((a, b) => order(a) - order(b));
-  let chosen: SheetRead | undefined;
-  if (opts.sheet) {
-    chosen = read[0];
-    if (!chosen) throw new FileProblem(`The workbook has no sheet called "${opts.sheet}". Its sheets: ${sheetNames.join(", ")}.`);
-  } else {
-    const withData = read.filter((s) => s.records.length > 0);
-    chosen =
-      withData.find((s) => {
-        const first = firstFilledRow(s);
-        return first ? (opts.looksLikeHeader?.(first) ?? false) : false;
-      }) ?? withData[0];
-    if (!chosen) throw new FileProblem("Every sheet in the workbook is empty.");
-  }
-  return toRawTable(chosen.records, { decimalComma: false, sheetNames, sheet: chosen.name });
+  return chooseSheet(
+    read.map((s) => ({ name: s.name, read: () => s })),
+    sheetNames,
+    opts,
+  );
 }
