@@ -88,6 +88,16 @@ export function usePlotActions(productionId: number) {
         edit((d) => ({ ...d, areaZones: upsert(d.areaZones, [areaZone]) }));
         return areaZone;
       },
+      async patchAreaZone(id: number, patch: { polygon: Array<{ x: number; y: number }>; version: number }) {
+        const { areaZone } = await apiFetch<{ areaZone: AreaZoneDto }>(`${base}/area-zones/${id}`, { method: "PATCH", json: patch });
+        edit((d) => ({ ...d, areaZones: replace(d.areaZones, areaZone) }));
+        return areaZone;
+      },
+      async patchLandmark(id: number, patch: { x1: number; y1: number; x2: number; y2: number; version: number }) {
+        const { landmark } = await apiFetch<{ landmark: LandmarkDto }>(`${base}/landmarks/${id}`, { method: "PATCH", json: patch });
+        edit((d) => ({ ...d, landmarks: replace(d.landmarks, landmark) }));
+        return landmark;
+      },
       async deleteAreaZone(id: number) {
         await apiFetch(`${base}/area-zones/${id}`, { method: "DELETE" });
         edit((d) => ({ ...d, areaZones: d.areaZones.filter((z) => z.id !== id) }));

@@ -96,9 +96,19 @@ export function drawStageOutline(ctx: Ctx, v: View, o: StageOutline, pal: PlotPa
   ctx.fillText("AUDIENCE", aud.x, aud.y + 22);
 }
 
-export function drawAreas(ctx: Ctx, v: View, zones: Array<{ name: string; polygon: Point[] }>, pal: PlotPalette, labels: boolean) {
+/** Small squares on the points a designer can drag (acting-area corners, landmark ends). */
+function handles(ctx: Ctx, v: View, pts: Point[], colour: string) {
+  ctx.fillStyle = colour;
+  for (const p of pts) {
+    const s = planToScreen(v, p);
+    ctx.fillRect(s.x - 2.5, s.y - 2.5, 5, 5);
+  }
+}
+
+export function drawAreas(ctx: Ctx, v: View, zones: Array<{ name: string; polygon: Point[] }>, pal: PlotPalette, labels: boolean, editable = false) {
   ctx.lineWidth = 1;
   for (const z of zones) {
+    if (editable) handles(ctx, v, z.polygon, pal.success);
     ctx.beginPath();
     path(ctx, v, z.polygon);
     ctx.fillStyle = pal.area;
@@ -119,7 +129,7 @@ export function drawAreas(ctx: Ctx, v: View, zones: Array<{ name: string; polygo
   }
 }
 
-export function drawLandmarks(ctx: Ctx, v: View, marks: Array<{ name: string; x1: number; y1: number; x2: number; y2: number }>, pal: PlotPalette, labels: boolean) {
+export function drawLandmarks(ctx: Ctx, v: View, marks: Array<{ name: string; x1: number; y1: number; x2: number; y2: number }>, pal: PlotPalette, labels: boolean, editable = false) {
   ctx.strokeStyle = pal.caution;
   ctx.fillStyle = pal.caution;
   ctx.lineWidth = 1.25;
@@ -133,6 +143,7 @@ export function drawLandmarks(ctx: Ctx, v: View, marks: Array<{ name: string; x1
     ctx.lineTo(b.x, b.y);
     ctx.stroke();
     ctx.setLineDash([]);
+    if (editable) handles(ctx, v, [{ x: l.x1, y: l.y1 }, { x: l.x2, y: l.y2 }], pal.caution);
     if (labels) {
       ctx.textAlign = "left";
       ctx.textBaseline = "bottom";

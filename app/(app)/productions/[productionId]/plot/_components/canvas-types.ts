@@ -17,10 +17,15 @@ export type CanvasEvents = {
   moveMark(f: PlotFixture, to: Point): void;
   moveFocusPoint(id: number, to: Point): void;
   moveUnderlay(by: Point): void;
+  /** A corner of an acting area or an end of a landmark line was dragged to `to`. */
+  moveVertex(target: VertexTarget, to: Point): void;
   drawn(tool: Tool, points: Point[]): void;
   preview(f: PlotFixture | null): void;
   place(at: Point): void;
 };
+
+/** One editable point of the plan: an acting area's corner or a landmark line's end (0 or 1). */
+export type VertexTarget = { kind: "area" | "landmark"; id: number; index: number; points: Point[] };
 
 /** Imperative handle for the toolbar. */
 export type CanvasHandle = {
@@ -37,5 +42,6 @@ export type Gesture =
   | { kind: "mark"; fixture: PlotFixture; to: Point }
   | { kind: "fixture"; fixture: PlotFixture; to: Point }
   | { kind: "focusPoint"; id: number; to: Point }
+  | { kind: "vertex"; target: VertexTarget; to: Point }
   | { kind: "underlay"; from: Point; to: Point }
   | { kind: "line"; tool: Tool; from: Point; to: Point };

@@ -51,6 +51,24 @@ export function drawOverlay(ctx: Ctx, v: View, size: Size, pal: PlotPalette, o: 
     ctx.closePath();
     ctx.stroke();
   }
+  if (g?.kind === "vertex") {
+    // The edited shape as it will be, with the dragged point ringed.
+    const pts = g.target.points.map((p, i) => (i === g.target.index ? g.to : p));
+    ctx.setLineDash([5, 3]);
+    ctx.beginPath();
+    pts.forEach((p, i) => {
+      const s = planToScreen(v, p);
+      if (i === 0) ctx.moveTo(s.x, s.y);
+      else ctx.lineTo(s.x, s.y);
+    });
+    if (g.target.kind === "area") ctx.closePath();
+    ctx.stroke();
+    ctx.setLineDash([]);
+    const s = planToScreen(v, g.to);
+    ctx.beginPath();
+    ctx.arc(s.x, s.y, 5, 0, Math.PI * 2);
+    ctx.stroke();
+  }
   if (o.draft.length) {
     ctx.beginPath();
     o.draft.forEach((p, i) => {

@@ -182,8 +182,9 @@ function PlotCanvas(props: PlotCanvasProps) {
     const v = view.current;
     drawGrid(ctx, v, sz, p.production.displayUnits, pal);
     drawStageOutline(ctx, v, o, pal, p.layers.labels);
-    if (p.layers.areas) drawAreas(ctx, v, p.data.areaZones, pal, p.layers.labels);
-    if (p.layers.landmarks) drawLandmarks(ctx, v, p.data.landmarks, pal, p.layers.labels);
+    const handles = p.canEdit && p.tool === "select";
+    if (p.layers.areas) drawAreas(ctx, v, p.data.areaZones, pal, p.layers.labels, handles);
+    if (p.layers.landmarks) drawLandmarks(ctx, v, p.data.landmarks, pal, p.layers.labels, handles);
     if (p.layers.positions) drawPositions(ctx, v, p.data.positions, pal, p.layers.labels, new Set(p.selection.positionId ? [p.selection.positionId] : []));
   }, []);
 

@@ -100,7 +100,7 @@ function Overview(p: PanelProps) {
         ) : <p className="text-xs text-muted">None yet. Focus charts word shutter cuts against these (“cut to the lip”).</p>}
       </PanelSection>
       <PanelSection title="Keys">
-        <p className="text-xs text-muted">Space-drag pans · F fits · arrows nudge focus (shift: more) · [ ] cone · , . softness · H deck/head · Delete · Ctrl+D duplicate · Ctrl+Z undo</p>
+        <p className="text-xs text-muted">Space-drag pans · F fits · arrows nudge focus (shift: more) · [ ] cone · , . softness · H deck/head · Delete · Ctrl+D duplicate · Ctrl+Z undo{p.canEdit ? " · drag an area's corner or a landmark's end (the small squares) to reshape it" : ""}</p>
       </PanelSection>
     </>
   );

@@ -12,7 +12,7 @@ import { panBy, planToScreen, screenToPlan, wheelZoomFactor, zoomAbout, type Vie
 import { symbolScreenPoint, type RigItem } from "@/components/plot/draw-rig";
 import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import type { PlotCanvasProps } from "./plot-canvas";
-import type { Gesture } from "./canvas-types";
+import type { Gesture, VertexTarget } from "./canvas-types";
 import { isVertical, previewFixture } from "./rig-items";
 
 type Live = RefObject<{ props: PlotCanvasProps; items: RigItem[] }>;
@@ -34,6 +34,19 @@ const REST_MS = 150;
 const TWO_POINT_TOOLS = new Set(["position-line", "landmark", "cut", "calibrate"]);
 // Drawing tools whose points land on the visible grid (hold Alt to place freely).
 const SNAP_TOOLS = new Set(["position-line", "position-point", "area", "landmark"]);
+
+/** The acting-area corner or landmark end within a few pixels of screen point `s`, if any. */
+function pickVertex(p: PlotCanvasProps, toScreen: (q: Point) => Point, s: Point): VertexTarget | null {
+  const candidates: VertexTarget[] = [];
+  if (p.layers.areas) for (const z of p.data.areaZones) z.polygon.forEach((_, index) => candidates.push({ kind: "area", id: z.id, index, points: z.polygon }));
+  if (p.layers.landmarks) {
+    for (const l of p.data.landmarks) {
+      const points = [{ x: l.x1, y: l.y1 }, { x: l.x2, y: l.y2 }];
+      candidates.push({ kind: "landmark", id: l.id, index: 0, points }, { kind: "landmark", id: l.id, index: 1, points });
+    }
+  }
+  return nearestOnScreen(candidates, (c) => toScreen(c.points[c.index]), s, 7);
+}
 
 export function useCanvasGestures({ container, view, gesture, draft, preview, live, redraw, moving }: Args) {
   useEffect(() => {
@@ -82,6 +95,10 @@ export function useCanvasGestures({ container, view, gesture, draft, preview, li
         }
         const mark = nearestOnScreen(items.filter((i) => sel.has(i.id)), (i) => (i.mark ? planToScreen(v, i.mark) : null), s, 10);
         if (mark) return { kind: "mark", fixture: fixtureOf(mark.id)!, to: plan };
+      }
+      if (p.canEdit) {
+        const vertex = pickVertex(p, (q) => planToScreen(v, q), s);
+        if (vertex) return { kind: "vertex", target: vertex, to: vertex.points[vertex.index] };
       }
       if (p.layers.fixtures) {
         const hit = nearestOnScreen(items, (i) => symbolScreenPoint(v, i), s, symbolPixels(v.scale) * 0.6);
@@ -184,6 +201,9 @@ export function useCanvasGestures({ container, view, gesture, draft, preview, li
         case "line":
           g.to = snapFor(g.tool, plan, e);
           break;
+        case "vertex":
+          g.to = snapFor("area", plan, e);
+          break;
         case "focusPoint":
         case "box":
           g.to = plan;
@@ -219,6 +239,7 @@ export function useCanvasGestures({ container, view, gesture, draft, preview, li
       else if (g.kind === "mark" || g.kind === "fixture") preview.current = null;
       if (g.kind === "fixture" && moved) p.events.moveFixture(g.fixture, g.to);
       if (g.kind === "focusPoint" && moved) p.events.moveFocusPoint(g.id, g.to);
+      if (g.kind === "vertex" && moved) p.events.moveVertex(g.target, g.to);
       if (g.kind === "underlay" && moved) p.events.moveUnderlay({ x: g.to.x - g.from.x, y: g.to.y - g.from.y });
       if (g.kind === "line" && moved) p.events.drawn(g.tool, [g.from, g.to]);
       if (g.kind === "box") {

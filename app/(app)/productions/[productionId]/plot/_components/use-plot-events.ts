@@ -89,6 +89,33 @@ export function useCanvasEvents(a: Args): CanvasEvents {
         }, () => void run());
       void run();
     },
+    moveVertex(target, to) {
+      const at = roundPt(to);
+      const label = target.kind === "area" ? "Move an area's corner" : "Move a landmark's end";
+      // Applied to the row as it is now (a 409 shows the other person's shape and offers to apply ours again).
+      const apply = (point: Point) => {
+        const run = (): Promise<unknown> =>
+          cmd.run(label, async () => {
+            const d = cmd.latest();
+            if (target.kind === "area") {
+              const z = d.areaZones.find((q) => q.id === target.id);
+              if (!z) return null;
+              const polygon = z.polygon.map((p, i) => (i === target.index ? point : p));
+              return { before: z.polygon[target.index], saved: await cmd.actions.patchAreaZone(z.id, { polygon, version: z.version }) };
+            }
+            const l = d.landmarks.find((q) => q.id === target.id);
+            if (!l) return null;
+            const ends = target.index === 0 ? { x1: point.x, y1: point.y, x2: l.x2, y2: l.y2 } : { x1: l.x1, y1: l.y1, x2: point.x, y2: point.y };
+            const before = target.index === 0 ? { x: l.x1, y: l.y1 } : { x: l.x2, y: l.y2 };
+            return { before, saved: await cmd.actions.patchLandmark(l.id, { ...ends, version: l.version }) };
+          }, () => void run());
+        return run();
+      };
+      void apply(at).then((r) => {
+        const done = r as { before: Point } | null | undefined;
+        if (done) cmd.remember(label, () => apply(done.before).then(() => undefined));
+      });
+    },
     moveUnderlay(by) {
       void cmd.run("Move the underlay", async () => {
         const u = cmd.latest().underlays[0];
