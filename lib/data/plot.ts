@@ -58,14 +58,18 @@ export async function getPlotWireData({ productionId }: { productionId: number }
 }
 
 async function getPlotFixtureRecords(productionId: number): Promise<PlotFixtureRecord[]> {
-  const rows = await getDb().Fixture.findAll({
+  // Plain rows, no model instances: building 1,500 instances was a visible part of the page's time.
+  const rows = (await getDb().Fixture.findAll({
     where: { productionId },
     attributes: [...PLOT_FIXTURE_FIELDS],
     order: [["positionId", "ASC"], ["unitSort", "ASC"], ["cell", "ASC"]],
-  });
+    raw: true,
+  })) as unknown as Array<Record<string, unknown>>;
   return rows.map((f) => {
     const out: Record<string, unknown> = {};
-    for (const k of PLOT_FIXTURE_FIELDS) out[k] = f.get(k);
+    for (const k of PLOT_FIXTURE_FIELDS) out[k] = f[k];
+    // Without the model's getter a JSON column may arrive as its text.
+    if (typeof out.shutterCuts === "string") out.shutterCuts = JSON.parse(out.shutterCuts);
     return out as PlotFixtureRecord;
   });
 }
