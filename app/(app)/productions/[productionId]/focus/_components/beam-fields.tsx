@@ -32,12 +32,15 @@ export function BeamFields({ fixture, data }: { fixture: FixtureDto; data: Focus
   const [leaves, setLeaves] = useState(leavesOf(fixture));
   const [errors, setErrors] = useState<Errors>({});
   const [message, setMessage] = useState<{ text: string; tone: "error" | "ok" } | null>(null);
+  // Reset when the unit or these fields change, not on every new copy of the row (marking focused or a new
+  // photo would otherwise wipe what is being typed).
+  const { id, goboRotationDeg, barnDoorTop, barnDoorBottom, barnDoorLeft, barnDoorRight } = fixture;
   useEffect(() => {
-    setRotation(fixture.goboRotationDeg?.toString() ?? "");
-    setLeaves(leavesOf(fixture));
+    setRotation(goboRotationDeg?.toString() ?? "");
+    setLeaves({ barnDoorTop: barnDoorTop ?? "", barnDoorBottom: barnDoorBottom ?? "", barnDoorLeft: barnDoorLeft ?? "", barnDoorRight: barnDoorRight ?? "" });
     setErrors({});
-    setMessage(null);
-  }, [fixture]);
+  }, [id, goboRotationDeg, barnDoorTop, barnDoorBottom, barnDoorLeft, barnDoorRight]);
+  useEffect(() => setMessage(null), [id]);
 
   const save = (patch: FocusPatch) => {
     const checked = fixtureFieldsSchema.partial().safeParse(patch);
