@@ -12,7 +12,7 @@ import { buildFocusChart, type ChartProduction } from "../lib/focus/chart-model"
 import { outlineLandmarks } from "../lib/focus/landmarks";
 import { paginate } from "../lib/focus/pages";
 import { sheetParts } from "../lib/focus/sheets-html";
-import { renderPdf } from "../lib/pdf/focus-pdf";
+import { PART_SHEETS, renderPdf } from "../lib/pdf/focus-pdf";
 import { closeBrowser } from "../lib/pdf/browser";
 import type { FixtureDto } from "../lib/data/fixtures";
 
@@ -40,7 +40,16 @@ function rig(n: number): FixtureDto[] {
   });
 }
 
-/** This process's descendants (the browser's tree), found by walking /proc's parent links. */
+/** Chromium's processes only: tsx keeps an esbuild service among this process's children too. */
+function isBrowser(pid: number): boolean {
+  try {
+    return readFileSync(`/proc/${pid}/cmdline`, "utf8").includes("chromium");
+  } catch {
+    return false;
+  }
+}
+
+/** The browser's processes among this process's descendants, found by walking /proc's parent links. */
 function descendants(): number[] {
   const parents = new Map<number, number>();
   for (const d of readdirSync("/proc")) {
@@ -53,7 +62,7 @@ function descendants(): number[] {
   return [...parents.keys()].filter((pid) => {
     let p = parents.get(pid);
     while (p && p !== process.pid && p > 1) p = parents.get(p);
-    return p === process.pid;
+    return p === process.pid && isBrowser(pid);
   });
 }
 
@@ -71,10 +80,12 @@ function sample(pid: number): { pss: number; cpu: number } | null {
 }
 
 const MiB = 1024 * 1024;
+// BENCH_PART_SHEETS / BENCH_PARALLEL try other part sizes and parallelism than the route's defaults.
+const TUNING = { partSheets: Number(process.env.BENCH_PART_SHEETS) || undefined, parallel: Number(process.env.BENCH_PARALLEL) || undefined };
 const CLOCK_TICKS = 100; // USER_HZ on Linux
 const load1 = () => os.loadavg()[0];
 
-type Result = { n: number; pages: number; expected: number; total: number; prep: number; chromium: number; pdfMiB: number; htmlMiB: number; nodePeak: number; browserPeak: number; browserCpu: number; nodeCpu: number; samplerCpu: number; load: [number, number] };
+type Result = { n: number; pages: number; expected: number; total: number; prep: number; chromium: number; pdfMiB: number; htmlMiB: number; nodePeak: number; browserPeak: number; browserCpu: number; nodeCpu: number; samplerCpu: number; nodeStart: number; nodeBuilt: number; load: [number, number] };
 
 /** Every 300 ms: the browser tree's Pss and CPU time (its process list about once a second). Reading
  * smaps_rollup makes the kernel walk the browser's page tables, so sampling every 100 ms cost 15 % of a core. */
@@ -120,6 +131,7 @@ function watch() {
 
 async function run(n: number): Promise<Result> {
   const load0 = load1();
+  const nodeStart = process.memoryUsage().rss;
   const w = watch();
   const t0 = performance.now();
   const landmarks = outlineLandmarks(PRODUCTION);
@@ -128,19 +140,20 @@ async function run(n: number): Promise<Result> {
   const parts = sheetParts(sheets, { productionName: PRODUCTION.name, printedAt: "bench", perPage: 4, units: "metric", landmarks });
   const htmlLength = parts.reduce((n, p) => n + p.length, 0);
   const t1 = performance.now();
-  const pdf = await renderPdf({ title: "bench", sheets: parts, paper: "A4", footerText: "bench" });
+  const nodeBuilt = process.memoryUsage().rss;
+  const pdf = await renderPdf({ title: "bench", sheets: parts, paper: "A4", footerText: "bench", tuning: TUNING });
   const t2 = performance.now();
   const m = w.stop();
   if (process.env.BENCH_PDF_OUT) writeFileSync(process.env.BENCH_PDF_OUT.replace("{n}", String(n)), pdf);
   const pages = (pdf.toString("latin1").match(/\/Type\s*\/Page(?!s)/g) ?? []).length;
   const r: Result = {
     n, pages, expected: sheets.length, total: (t2 - t0) / 1000, prep: (t1 - t0) / 1000, chromium: (t2 - t1) / 1000, pdfMiB: pdf.length / MiB,
-    htmlMiB: htmlLength / MiB, ...m, load: [load0, load1()],
+    htmlMiB: htmlLength / MiB, nodeStart, nodeBuilt, ...m, load: [load0, load1()],
   };
   console.log(
     `${String(n).padStart(5)} charts: ${r.total.toFixed(1)} s total (model + HTML ${r.prep.toFixed(2)} s, Chromium ${r.chromium.toFixed(1)} s), ` +
       `${pages} pages (expected ${sheets.length}), ${r.pdfMiB.toFixed(1)} MiB PDF, HTML ${r.htmlMiB.toFixed(1)} MiB, ` +
-      `peak RSS Node ${(r.nodePeak / MiB).toFixed(0)} MiB, browser tree ${(r.browserPeak / MiB).toFixed(0)} MiB (Pss), ` +
+      `RSS Node ${(r.nodeStart / MiB).toFixed(0)} MiB at start, ${(r.nodeBuilt / MiB).toFixed(0)} with the HTML, ${(r.nodePeak / MiB).toFixed(0)} at peak, browser tree ${(r.browserPeak / MiB).toFixed(0)} MiB (Pss), ` +
       `CPU browser ${r.browserCpu.toFixed(1)} s + Node ${r.nodeCpu.toFixed(1)} s (sampler ${r.samplerCpu.toFixed(1)} s more), load ${r.load[0].toFixed(1)}→${r.load[1].toFixed(1)}`,
   );
   return r;
@@ -161,7 +174,8 @@ function summary(results: Result[]) {
 }
 
 async function main() {
-  console.log(`Focus-chart PDF at 4 a page, A4 — ${os.cpus().length} cores, Node ${process.version}, ${new Date().toISOString().slice(0, 10)}`);
+  console.log(`Focus-chart PDF at 4 a page, A4 — ${os.cpus().length} cores, Node ${process.version}, ${new Date().toISOString().slice(0, 10)}, ` +
+    `parts of ${TUNING.partSheets ?? PART_SHEETS} pages, ${TUNING.parallel ?? 2} at once`);
   const sizes = process.argv.slice(2).map(Number).filter((x) => x > 0);
   const results: Result[] = [];
   for (const n of sizes.length ? sizes : [100, 500, 1500]) results.push(await run(n));
