@@ -5,7 +5,7 @@ import { AppError, fromZodError, toAppError } from "@/lib/errors";
 import { commitImport, getRememberedMapping, previewImport, type ImportRequest } from "@/lib/data/import";
 import { MAX_IMPORT_BYTES } from "@/lib/io/sniff";
 import { IMPORT_FIELDS } from "@/lib/io/fields";
-import { BodyTooLarge, readBoundedBody } from "@/lib/io/bounded-body";
+import { readUploadForm } from "@/lib/http/upload-form";
 
 type Ctx = { params: Promise<{ productionId: string }> };
 
@@ -26,22 +26,7 @@ export const GET = route(async (_req, { params }: Ctx) => {
 });
 
 async function readUpload(req: Request): Promise<{ request: ImportRequest; mode: "preview" | "commit" }> {
-  const declared = Number(req.headers.get("content-length") ?? 0);
-  // The multipart wrapper adds a little; anything far past the cap is refused before it is read.
-  if (declared > MAX_IMPORT_BYTES + 256 * 1024) throw new AppError("too_large", `The file is larger than the ${MAX_IMPORT_BYTES / 1048576} MB limit.`, { fieldErrors: { file: ["over the size limit"] } });
-  // Without (or with a false) Content-Length the body is counted as it arrives and cut off at the cap.
-  const tooLarge = () => new AppError("too_large", `The file is larger than the ${MAX_IMPORT_BYTES / 1048576} MB limit.`, { fieldErrors: { file: ["over the size limit"] } });
-  let form: FormData;
-  try {
-    const body = await readBoundedBody(req, MAX_IMPORT_BYTES + 256 * 1024);
-    form = await new Response(body as BlobPart, { headers: { "content-type": req.headers.get("content-type") ?? "" } }).formData();
-  } catch (err) {
-    if (err instanceof BodyTooLarge) throw tooLarge();
-    throw new AppError("bad_request", "Send the file as a multipart form with a field called file.", { fieldErrors: { file: ["no file received"] } });
-  }
-  const file = form.get("file");
-  if (!(file instanceof File)) throw new AppError("bad_request", "Choose a file to import.", { fieldErrors: { file: ["no file received"] } });
-  if (file.size > MAX_IMPORT_BYTES) throw new AppError("too_large", `${file.name} is ${(file.size / 1048576).toFixed(1)} MB; the limit is ${MAX_IMPORT_BYTES / 1048576} MB.`, { fieldErrors: { file: ["over the size limit"] } });
+  const { form, file } = await readUploadForm(req, { maxBytes: MAX_IMPORT_BYTES, what: "file", choose: "Choose a file to import." });
   let raw: unknown = {};
   try {
     raw = JSON.parse(String(form.get("options") ?? "{}"));
