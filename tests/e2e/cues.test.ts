@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import path from "node:path";
 import type { BrowserContext, Page } from "playwright-core";
-import { DEMO, SCREENSHOTS, openBrowser, screenshot, signIn, openDemoProduction } from "./support/browser";
+import { DEMO, SCREENSHOTS, openBrowser, screenshot, signIn, demoProductionId } from "./support/browser";
 
 let browser: BrowserContext;
 beforeAll(async () => {
@@ -73,7 +73,7 @@ describe("the stage manager calls the show from the cue sheet", () => {
     await expect(page.getByLabel("Call note for cue 1", { exact: true }).inputValue()).resolves.toBe("GO as the lantern is lifted");
 
     // Even straight at the API, with the stage manager's own session, a level is refused.
-    const productionId = new URL(await openDemoProduction(page)).pathname.split("/")[2];
+    const productionId = await demoProductionId(page);
     const cues = await (await page.request.get(`/api/productions/${productionId}/cues`)).json();
     const first = cues.cues[0];
     const denied = await page.request.patch(`/api/productions/${productionId}/cues/${first.id}`, { data: { version: first.version, levels: { 1: 90 } } });

@@ -3,7 +3,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import sharp from "sharp";
 import type { BrowserContext } from "playwright-core";
-import { DEMO, openBrowser, screenshot, signIn, openDemoProduction } from "./support/browser";
+import { DEMO, openBrowser, screenshot, signIn, demoProductionId } from "./support/browser";
 
 let context: BrowserContext;
 beforeAll(async () => {
@@ -41,7 +41,7 @@ describe("focus photo from the deck", () => {
   it("the electrician adds a photo on a tablet, sees the thumbnail on the chart and in print, and removes it", async () => {
     const page = await context.newPage();
     await signIn(page, DEMO.electrician);
-    const productionId = new URL(await openDemoProduction(page)).pathname.split("/")[2];
+    const productionId = await demoProductionId(page);
     const fixtures = (await (await page.context().request.get(`/api/productions/${productionId}/fixtures`)).json()).fixtures as Array<{ id: number; positionId: number; positionName: string; unitNumber: string; focusPhotoUploadId: number | null }>;
     const unit = fixtures.find((f) => f.positionName === "Boom SL 2" && f.unitNumber === "1")!;
     await page.goto(`/productions/${productionId}/focus/call?position=${unit.positionId}&unit=${unit.id}`);

@@ -5,7 +5,7 @@ import { mkdirSync, writeFileSync } from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { BrowserContext, Page } from "playwright-core";
-import { DEMO, openBrowser, screenshot, signIn, openDemoProduction } from "./support/browser";
+import { DEMO, openBrowser, screenshot, signIn, demoProductionId } from "./support/browser";
 
 const RESULTS = path.resolve(process.env.TEST_RESULTS_DIR ?? "test-results");
 const PDF_DIR = path.join(RESULTS, "focus-pdf");
@@ -76,7 +76,7 @@ describe("the electrician's focus call on a tablet", () => {
     const context = await openBrowser({ width: 800, height: 1280 });
     const page = await context.newPage();
     await signIn(page, DEMO.electrician);
-    const productionId = new URL(await openDemoProduction(page)).pathname.split("/")[2];
+    const productionId = await demoProductionId(page);
     await page.goto(`/productions/${productionId}/focus`);
     await page.getByTestId("chart-list").waitFor();
     const boomId = await page.getByTestId("filter-position").locator("option", { hasText: "Boom SR 2" }).getAttribute("value");

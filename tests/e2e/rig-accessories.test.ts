@@ -1,7 +1,7 @@
 // The electrician adds an accessory to a fixture, sees a bad address refused, edits it and removes it.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { BrowserContext } from "playwright-core";
-import { DEMO, openBrowser, screenshot, signIn, openDemoProduction } from "./support/browser";
+import { DEMO, openBrowser, screenshot, signIn, demoProductionId } from "./support/browser";
 
 let browser: BrowserContext;
 beforeAll(async () => {
@@ -15,7 +15,7 @@ describe("accessories as the electrician", () => {
   it("adds, checks, edits and removes a scroller", async () => {
     const page = await browser.newPage();
     await signIn(page, DEMO.electrician);
-    const id = Number(new URL(await openDemoProduction(page)).pathname.split("/")[2]);
+    const id = await demoProductionId(page);
     await page.goto(`/productions/${id}/rig`);
     await page.getByTestId("rig-table").waitFor();
     await page.getByRole("button", { name: "Accessories", exact: true }).click();

@@ -6,7 +6,7 @@ import path from "node:path";
 import ExcelJS from "exceljs";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { BrowserContext, Page } from "playwright-core";
-import { DEMO, SCREENSHOTS, openBrowser, screenshot, signIn, openDemoProduction } from "./support/browser";
+import { DEMO, SCREENSHOTS, openBrowser, screenshot, signIn, demoProductionId } from "./support/browser";
 
 let browser: BrowserContext;
 beforeAll(async () => {
@@ -25,7 +25,7 @@ const csvFile = (name: string, text: string) => {
 
 async function openRig(page: Page) {
   await signIn(page, DEMO.electrician);
-  const id = Number(new URL(await openDemoProduction(page)).pathname.split("/")[2]);
+  const id = await demoProductionId(page);
   await page.goto(`/productions/${id}/rig`);
   await page.getByTestId("rig-table").waitFor();
   return id;

@@ -2,7 +2,7 @@
 // printed hanging view and of the types and accessories panels in the dark theme, to look at.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { BrowserContext } from "playwright-core";
-import { DEMO, openBrowser, screenshot, signIn, openDemoProduction } from "./support/browser";
+import { DEMO, openBrowser, screenshot, signIn, demoProductionId } from "./support/browser";
 
 let browser: BrowserContext;
 beforeAll(async () => {
@@ -16,7 +16,7 @@ describe("rig print and dark theme", () => {
   it("prints the table without the controls, and shows the panels in the dark theme", async () => {
     const page = await browser.newPage();
     await signIn(page, DEMO.designer);
-    const id = Number(new URL(await openDemoProduction(page)).pathname.split("/")[2]);
+    const id = await demoProductionId(page);
     await page.goto(`/productions/${id}/rig`);
     await page.getByTestId("rig-table").waitFor();
     await page.emulateMedia({ media: "print" });

@@ -1,7 +1,7 @@
 // The electrician edits a fixture type's wattage in the types table; the cone stays read-only for them.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { BrowserContext } from "playwright-core";
-import { DEMO, openBrowser, screenshot, signIn, openDemoProduction } from "./support/browser";
+import { DEMO, openBrowser, screenshot, signIn, demoProductionId } from "./support/browser";
 
 let browser: BrowserContext;
 beforeAll(async () => {
@@ -15,7 +15,7 @@ describe("fixture types as the electrician", () => {
   it("edits a wattage, sees a bad figure refused, and cannot edit the cone", async () => {
     const page = await browser.newPage();
     await signIn(page, DEMO.electrician);
-    const id = Number(new URL(await openDemoProduction(page)).pathname.split("/")[2]);
+    const id = await demoProductionId(page);
     await page.goto(`/productions/${id}/rig`);
     await page.getByTestId("rig-table").waitFor();
     await page.getByRole("button", { name: /fixture types/i }).first().click();

@@ -55,3 +55,8 @@ export async function openDemoProduction(page: Page): Promise<string> {
   const match = new URL(page.url()).pathname.match(/^\/productions\/\d+/);
   return new URL(match![0], page.url()).toString();
 }
+
+/** The demo production's id, opening it first (see openDemoProduction). */
+export async function demoProductionId(page: Page): Promise<number> {
+  return Number(new URL(await openDemoProduction(page)).pathname.split("/")[2]);
+}
