@@ -141,7 +141,8 @@ export async function readXlsx(bytes: Uint8Array, opts: ReadOptions = {}): Promi
   let workbook: XmlWorkbook | null;
   try {
     workbook = openXmlWorkbook(bytes);
-  } catch {
+  } catch (err) {
+    if (err instanceof FileProblem) throw err;
     throw new FileProblem(BROKEN);
   }
   if (!workbook) return readXlsxWithExcelJs(bytes, opts);

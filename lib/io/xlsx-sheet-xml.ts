@@ -5,7 +5,7 @@
 // needs only each cell's text. Unzipped with fflate. Anything laid out in a way this reader does not
 // expect (prefixed XML names, a missing part) returns null, and the caller reads the file with ExcelJS.
 import { unzipSync } from "fflate";
-import type { RawRow } from "./table";
+import { FileProblem, type RawRow } from "./table";
 
 export type XmlSheet = { name: string; read: () => { records: RawRow[]; merges: string[] } };
 export type XmlWorkbook = { sheets: XmlSheet[] };
@@ -117,14 +117,27 @@ function readSheetXml(xml: string, ctx: Context) {
 }
 
 // A relationship target is relative to the part that names it (xl/), or absolute from the package root.
+/** More sheet XML than 20,000 rows of every column would need (about 40 MB); a workbook past it is refused. */
+export const MAX_UNZIPPED_BYTES = 256 * 1024 * 1024;
+
 const resolveTarget = (target: string) => (target.startsWith("/") ? target.slice(1) : `xl/${target.replace(/^\.\//, "")}`);
 
 /**
  * The sheets of a workbook in tab order, each read only when asked. Throws when the bytes are not a
  * zip; null when the zip does not hold a workbook laid out as this reader expects.
  */
-export function openXmlWorkbook(bytes: Uint8Array): XmlWorkbook | null {
-  const files = unzipSync(bytes, { filter: (f) => f.name.startsWith("xl/") && (f.name.endsWith(".xml") || f.name.endsWith(".rels")) });
+export function openXmlWorkbook(bytes: Uint8Array, { maxUnzippedBytes = MAX_UNZIPPED_BYTES } = {}): XmlWorkbook | null {
+  // A few megabytes of zip can unpack to gigabytes (a "zip bomb"); the parts' declared sizes are added up
+  // before anything is inflated, and the file is refused past the cap instead of exhausting the server.
+  let unzipped = 0;
+  const files = unzipSync(bytes, {
+    filter: (f) => {
+      if (!f.name.startsWith("xl/") || !(f.name.endsWith(".xml") || f.name.endsWith(".rels"))) return false;
+      unzipped += f.originalSize;
+      if (unzipped > maxUnzippedBytes) throw new FileProblem(`This workbook unpacks to more than ${Math.round(maxUnzippedBytes / 1048576)} MB of sheet data, more than a rig needs. Save the rig's sheet on its own, or as CSV.`);
+      return true;
+    },
+  });
   // Node's own UTF-8 decoding is several times faster than fflate's strFromU8 on a sheet of megabytes.
   const text = (name: string) => (files[name] ? Buffer.from(files[name].buffer, files[name].byteOffset, files[name].byteLength).toString("utf8") : null);
   const workbook = text("xl/workbook.xml");

@@ -3,6 +3,7 @@ import ExcelJS from "exceljs";
 import { strToU8, zipSync } from "fflate";
 import { readCsv } from "@/lib/io/csv-read";
 import { readXlsx, readXlsxWithExcelJs } from "@/lib/io/xlsx-read";
+import { openXmlWorkbook } from "@/lib/io/xlsx-sheet-xml";
 import { sniffFile } from "@/lib/io/sniff";
 import { looksLikeFixtureHeader } from "@/lib/io/fields";
 import { FileProblem } from "@/lib/io/table";
@@ -153,5 +154,18 @@ describe("readXlsx", () => {
     const file = await workbook((wb) => wb.addWorksheet("Rig").addRow(["Position", "Unit"]));
     await expect(readXlsx(file, { sheet: "Nope" })).rejects.toThrow(/Rig/);
     await expect(readXlsx(new Uint8Array([0x50, 0x4b, 0x03, 0x04, 1, 2, 3]))).rejects.toThrow(FileProblem);
+  });
+});
+
+describe("a workbook that unpacks to far more than it weighs", () => {
+  it("is refused from the parts' declared sizes, before they are inflated", () => {
+    // 3 MB of one repeated character deflates to a few kilobytes: the shape of a zip bomb, in small.
+    const sheet = `<worksheet><sheetData>${" ".repeat(3 * 1024 * 1024)}</sheetData></worksheet>`;
+    const bytes = zipSync({ "xl/workbook.xml": strToU8('<workbook><sheets><sheet name="Rig" r:id="rId1"/></sheets></workbook>'), "xl/worksheets/sheet1.xml": strToU8(sheet) });
+    expect(bytes.length).toBeLessThan(64 * 1024);
+    expect(() => openXmlWorkbook(bytes, { maxUnzippedBytes: 1024 * 1024 })).toThrow(FileProblem);
+    expect(() => openXmlWorkbook(bytes, { maxUnzippedBytes: 1024 * 1024 })).toThrow(/unpacks to more than 1 MB/);
+    // Under the cap the same file is simply read on (and, lacking its relationships, left to ExcelJS).
+    expect(openXmlWorkbook(bytes, { maxUnzippedBytes: 8 * 1024 * 1024 })).toBeNull();
   });
 });
