@@ -81,6 +81,20 @@ function count(name, report, code) {
   log(`${name}: ${r.numPassedTests} passed, ${r.numFailedTests + brokenFiles} failed`);
 }
 
+/** Biome (format + lint, one config in biome.json) over the whole tree counts as one test; it runs first. */
+function lint() {
+  log("Format and lint (biome check) …");
+  const r = spawnSync(process.execPath, [path.join(ROOT, "node_modules/@biomejs/biome/bin/biome"), "check", "--colors=off", "."], { cwd: ROOT, encoding: "utf8" });
+  if (r.status === 0) {
+    totals.passed += 1;
+    log("biome: passed");
+  } else {
+    totals.failed += 1;
+    process.stdout.write(r.stdout + r.stderr);
+    log("biome: failed (run `npx biome check --write .` to apply the safe fixes)");
+  }
+}
+
 /** `tsc --noEmit` over the whole tree counts as one test. */
 function typecheck() {
   log("Type-checking (tsc --noEmit) …");
@@ -118,6 +132,7 @@ async function main() {
   migrate(env);
   await seedWhenEmpty(env);
 
+  if (!FILTERS.length) lint();
   await runVitest("unit", "vitest.config.mts", "tests/unit", env);
   if (!FILTERS.length) typecheck();
 
