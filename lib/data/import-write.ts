@@ -7,7 +7,7 @@ import { STARTER_TYPES } from "@/lib/rig/starter-types";
 import type { PositionKind } from "@/lib/rig/position-kinds";
 import type { ImportPlanResult } from "@/lib/rig/import-plan";
 import { batchInsert } from "./batch-insert";
-import type { Progress } from "./import";
+import type { Progress } from "./import-progress";
 
 const CHUNK = 500;
 const lower = (s: string) => s.trim().toLowerCase();

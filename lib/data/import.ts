@@ -10,9 +10,10 @@ import type { RawTable } from "@/lib/io/table";
 import { planImport, type ImportPlanResult, type Snapshot } from "@/lib/rig/import-plan";
 import { requireProduction } from "./productions";
 import { writeImport } from "./import-write";
+import type { Progress } from "./import-progress";
 
 export type ImportRequest = { bytes: Uint8Array; fileName: string; sheet?: string; mapping?: ColumnTarget[]; lengthUnit?: LengthUnit; createMissing: boolean };
-export type Progress = (stage: "reading" | "checking" | "writing", done: number, total: number) => void;
+export type { Progress };
 
 export type ImportPreview = {
   fileName: string;
