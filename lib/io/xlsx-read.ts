@@ -1,6 +1,7 @@
 import { Readable } from "node:stream";
 import ExcelJS from "exceljs";
 import { FileProblem, toRawTable, type RawRow, type RawTable } from "./table";
+import { checkColumn, fillMerges } from "./sheet-limits";
 import { openXmlWorkbook, type XmlSheet, type XmlWorkbook } from "./xlsx-sheet-xml";
 
 type CellValue = ExcelJS.CellValue;
@@ -48,44 +49,13 @@ async function* collectMerges(chunks: AsyncIterable<Buffer>, merges: string[]): 
   }
 }
 
-function decode(ref: string) {
-  const m = /^([A-Z]+)(\d+)$/.exec(ref)!;
-  let col = 0;
-  for (const ch of m[1]) col = col * 26 + ch.charCodeAt(0) - 64;
-  return { row: Number(m[2]), col };
-}
-
-// A merged block holds its value in the top-left cell; every cell of the block reads that value
-// (a position name merged down a column applies to each row).
-function fillMerges(records: RawRow[], merges: string[]) {
-  if (!merges.length) return;
-  const byNumber = new Map(records.map((r) => [r.rowNumber, r]));
-  for (const range of merges) {
-    const [a, b] = range.split(":").map(decode);
-    const value = byNumber.get(a.row)?.cells[a.col - 1] ?? "";
-    if (!value) continue;
-    for (let r = a.row; r <= b.row; r++) {
-      let record = byNumber.get(r);
-      if (!record) {
-        record = { rowNumber: r, cells: [] };
-        byNumber.set(r, record);
-        records.push(record);
-      }
-      for (let c = a.col; c <= b.col; c++) {
-        while (record.cells.length < c) record.cells.push("");
-        record.cells[c - 1] = value;
-      }
-    }
-  }
-  records.sort((x, y) => x.rowNumber - y.rowNumber);
-}
-
 async function readSheet(sheet: StreamSheet): Promise<SheetRead> {
   const merges: string[] = [];
   sheet.iterator = collectMerges(sheet.iterator, merges);
   const records: RawRow[] = [];
   for await (const row of sheet) {
     const values = row.values as CellValue[];
+    checkColumn(values.length - 1, row.number);
     const cells: string[] = [];
     for (let c = 1; c < values.length; c++) cells.push(cellText(values[c] ?? null).trim());
     if (cells.some((c) => c !== "")) records.push({ rowNumber: row.number, cells });
@@ -171,7 +141,8 @@ export async function readXlsxWithExcelJs(bytes: Uint8Array, opts: ReadOptions):
       if (opts.sheet && sheet.name !== opts.sheet) continue;
       read.push(await readSheet(sheet));
     }
-  } catch {
+  } catch (err) {
+    if (err instanceof FileProblem) throw err;
     throw new FileProblem(BROKEN);
   }
   // Workbook order, which is what a person sees in the tabs (the zip's order can differ).

@@ -5,6 +5,7 @@
 // needs only each cell's text. Unzipped with fflate. Anything laid out in a way this reader does not
 // expect (prefixed XML names, a missing part) returns null, and the caller reads the file with ExcelJS.
 import { unzipSync } from "fflate";
+import { checkColumn, checkDeclaredDimension } from "./sheet-limits";
 import { FileProblem, type RawRow } from "./table";
 
 export type XmlSheet = { name: string; read: () => { records: RawRow[]; merges: string[] } };
@@ -95,6 +96,7 @@ function cellText(attrs: string, body: string, ctx: Context): string {
 }
 
 function readSheetXml(xml: string, ctx: Context) {
+  checkDeclaredDimension(/<dimension\b[^>]*?\bref="([^"]*)"/.exec(xml.slice(0, 4096))?.[1]);
   const records: RawRow[] = [];
   let rowNumber = 0;
   for (const row of xml.matchAll(/<row\b([^>]*?)(?:\/>|>([\s\S]*?)<\/row>)/g)) {
@@ -106,6 +108,7 @@ function readSheetXml(xml: string, ctx: Context) {
     for (const c of row[2].matchAll(/<c\b([^>]*?)(?:\/>|>([\s\S]*?)<\/c>)/g)) {
       const ref = attr(c[1], "r");
       col = ref ? columnNumber(/^[A-Z]+/.exec(ref)?.[0] ?? "") : col + 1;
+      checkColumn(col, rowNumber);
       const text = c[2] ? cellText(c[1], c[2], ctx).trim() : "";
       while (cells.length < col - 1) cells.push("");
       cells[col - 1] = text;
