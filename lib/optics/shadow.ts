@@ -32,30 +32,46 @@ export function umbraWidth(w: number, d: number, a: number, b: number): number {
   return Math.max(0, (w * (a + b)) / a - (d * b) / a);
 }
 
-/** The occluding edge the tip comes from: the top of the far side, its foot, and the width seen from the lens. */
+/**
+ * The point of the occluder's top outline that casts the shadow's tip, its foot, and the occluder's width seen
+ * from the lens. Which point that is depends on where the shadow lands:
+ * - on the deck (lens above the top): the top point whose shadow lies farthest from the lens's foot in plan;
+ * - on the back wall with the lens above the top: the most upstage top point (its ray falls least steeply);
+ * - on the back wall with the lens at or below the top: the most downstage top point (its ray climbs most).
+ */
 export type Edge = { top: Vec3; foot: Point; width: number; insideReason: string | null };
 
-export function occludingEdge(source: Vec3, o: Occluder): Edge {
-  assertFinite("Occluder height", o.height);
-  if (o.height <= 0) throw new RangeError(`Occluder height must be above 0 m (got ${o.height}).`);
-  if (o.kind === "performer") {
-    assertFinite("Performer x", o.x);
-    assertFinite("Performer y", o.y);
-    assertFinite("Performer radius", o.radius);
-    if (o.radius < 0) throw new RangeError(`Performer radius cannot be negative (got ${o.radius}).`);
-    const wx = o.x - source.x;
-    const wy = o.y - source.y;
-    const r0 = Math.hypot(wx, wy);
-    // Directly overhead the shadow pools all round; upstage is an arbitrary but stable choice of tip.
-    const ux = r0 > 1e-9 ? wx / r0 : 0;
-    const uy = r0 > 1e-9 ? wy / r0 : 1;
-    const foot = { x: o.x + o.radius * ux, y: o.y + o.radius * uy };
-    const inside = r0 <= o.radius && source.z <= o.height;
-    return {
-      top: { ...foot, z: o.height }, foot, width: 2 * o.radius,
-      insideReason: inside ? "The lens is inside the performer's outline." : null,
-    };
-  }
+type Outline = {
+  /** Top point farthest from the lens's foot in plan (its shadow on the deck is the farthest too). */
+  farthest: Point;
+  mostUpstage: Point;
+  mostDownstage: Point;
+  width: number;
+  insideReason: string | null;
+};
+
+function performerOutline(source: Vec3, o: Extract<Occluder, { kind: "performer" }>): Outline {
+  assertFinite("Performer x", o.x);
+  assertFinite("Performer y", o.y);
+  assertFinite("Performer radius", o.radius);
+  if (o.radius < 0) throw new RangeError(`Performer radius cannot be negative (got ${o.radius}).`);
+  const wx = o.x - source.x;
+  const wy = o.y - source.y;
+  const r0 = Math.hypot(wx, wy);
+  // Directly overhead the shadow pools all round; upstage is an arbitrary but stable choice of tip.
+  const ux = r0 > 1e-9 ? wx / r0 : 0;
+  const uy = r0 > 1e-9 ? wy / r0 : 1;
+  const inside = r0 <= o.radius && source.z <= o.height;
+  return {
+    farthest: { x: o.x + o.radius * ux, y: o.y + o.radius * uy },
+    mostUpstage: { x: o.x, y: o.y + o.radius },
+    mostDownstage: { x: o.x, y: o.y - o.radius },
+    width: 2 * o.radius,
+    insideReason: inside ? "The lens is inside the performer's outline." : null,
+  };
+}
+
+function panelOutline(source: Vec3, o: Extract<Occluder, { kind: "panel" }>): Outline {
   for (const [k, p] of [["a", o.a], ["b", o.b]] as const) {
     assertFinite(`Panel point ${k}.x`, p.x);
     assertFinite(`Panel point ${k}.y`, p.y);
@@ -64,19 +80,47 @@ export function occludingEdge(source: Vec3, o: Occluder): Edge {
   const ly = o.b.y - o.a.y;
   const len = Math.hypot(lx, ly);
   if (!(len > 1e-9)) throw new RangeError("A scenery panel needs two different end points.");
-  const foot = { x: (o.a.x + o.b.x) / 2, y: (o.a.y + o.b.y) / 2 };
-  const wx = foot.x - source.x;
-  const wy = foot.y - source.y;
-  const r0 = Math.hypot(wx, wy);
+  const mx = (o.a.x + o.b.x) / 2 - source.x;
+  const my = (o.a.y + o.b.y) / 2 - source.y;
+  const r0 = Math.hypot(mx, my);
   // Width seen from the lens: the panel's extent square to the line of sight in plan.
-  const width = r0 > 1e-9 ? Math.abs((lx * -wy + ly * wx) / r0) : len;
+  const width = r0 > 1e-9 ? Math.abs((lx * -my + ly * mx) / r0) : len;
   const onLine = Math.abs(lx * (source.y - o.a.y) - ly * (source.x - o.a.x)) / len < 1e-9;
   const t = ((source.x - o.a.x) * lx + (source.y - o.a.y) * ly) / (len * len);
   const inside = onLine && t >= 0 && t <= 1 && source.z <= o.height;
+  // Shadows of the top edge scale from the lens's foot, so the farther end in plan casts the farther corner.
+  const da = Math.hypot(o.a.x - source.x, o.a.y - source.y);
+  const db = Math.hypot(o.b.x - source.x, o.b.y - source.y);
+  const [down, up] = o.a.y <= o.b.y ? [o.a, o.b] : [o.b, o.a];
   return {
-    top: { ...foot, z: o.height }, foot, width,
+    farthest: db > da ? o.b : o.a, mostUpstage: up, mostDownstage: down, width,
     insideReason: inside ? "The lens is inside the scenery panel." : null,
   };
+}
+
+function outlineOf(source: Vec3, o: Occluder): Outline {
+  assertFinite("Occluder height", o.height);
+  if (o.height <= 0) throw new RangeError(`Occluder height must be above 0 m (got ${o.height}).`);
+  return o.kind === "performer" ? performerOutline(source, o) : panelOutline(source, o);
+}
+
+function edgeAt(p: Point, o: Occluder, outline: Outline): Edge {
+  return { top: { x: p.x, y: p.y, z: o.height }, foot: p, width: outline.width, insideReason: outline.insideReason };
+}
+
+/** The edge that casts the tip (see Edge). `backWallY` Infinity for no wall. */
+export function occludingEdge(source: Vec3, o: Occluder, backWallY = Infinity): Edge {
+  const outline = outlineOf(source, o);
+  if (source.z <= o.height) return edgeAt(outline.mostDownstage, o, outline);
+  const up = outline.mostUpstage;
+  // The most upstage top point's ray is the one that reaches farthest up the wall; if even it meets the deck
+  // first, no part of the shadow reaches the wall.
+  const dy = up.y - source.y;
+  if (dy > 0 && Number.isFinite(backWallY)) {
+    const zAtWall = source.z + ((o.height - source.z) * (backWallY - source.y)) / dy;
+    if (zAtWall >= 0) return edgeAt(up, o, outline);
+  }
+  return edgeAt(outline.farthest, o, outline);
 }
 
 const NONE = { tip: null, length: null, wallHeight: null, penumbraWidth: null, umbraWidth: null, incidenceDeg: null };
@@ -89,9 +133,17 @@ export function shadowOf(i: ShadowInput): Shadow {
   if (i.apertureDiameter < 0) throw new RangeError(`Lens aperture cannot be negative (got ${i.apertureDiameter}).`);
   if (Number.isNaN(i.backWallY)) throw new RangeError("Back-wall depth must be a number (Infinity for none).");
   if (s.y >= i.backWallY) throw new RangeError("The lens is behind the back wall.");
-  const e = occludingEdge(s, i.occluder);
-  if (e.top.y >= i.backWallY) throw new RangeError("The occluder is at or behind the back wall.");
+  const e = occludingEdge(s, i.occluder, i.backWallY);
+  if (outlineOf(s, i.occluder).mostUpstage.y >= i.backWallY) {
+    throw new RangeError("The occluder is at or behind the back wall.");
+  }
   if (e.insideReason) return { lands: "none", reason: e.insideReason, ...NONE };
+  if (s.z < e.top.z && e.top.y <= s.y + 1e-12 && outlineOf(s, i.occluder).mostUpstage.y > s.y) {
+    // Beside the occluder and below its top: rays over points just upstage of the lens climb the wall without
+    // end, so there is no highest point to report.
+    const reason = "The lens is beside the occluder and below its top, so the shadow runs to the horizon.";
+    return { lands: "unbounded", reason, ...NONE };
+  }
 
   const dx = e.top.x - s.x;
   const dy = e.top.y - s.y;

@@ -4,7 +4,6 @@ import {
 } from "@/lib/optics";
 import { D2R, numbersIn } from "./helpers";
 
-const INCH = 0.0254;
 const performer = { kind: "performer" as const, x: 0, y: 0, height: 1.75, radius: 0.25 };
 const front: ShadowInput = { source: { x: 0, y: -8, z: 6 }, apertureDiameter: 0.15, backWallY: 8, occluder: performer };
 
@@ -22,26 +21,26 @@ describe("umbra and penumbra widths (similar triangles)", () => {
     expect(penumbraWidth(0.15, 8, 1.7)).toBeCloseTo(0.031875, 12);
   });
 
-  it("the Sun's 0.533° disc gives the ~1 % rule: an edge 108 in up casts a penumbra of about 1 in", () => {
-    // REFERENCE.md: Sun's mean angular diameter ≈ 0.533° (NASA Sun fact sheet, from memory: 1919″);
-    // "about 1 %" rule of thumb (common practice)
+  it("the Sun's 0.533° disc: an edge 2.5 m up casts a penumbra of about 23 mm", () => {
+    // REFERENCE.md: Sun's mean angular diameter ≈ 0.533° (NASA Sun fact sheet, from memory: 1919″), so the
+    // penumbra is 2·tan(0.2665°) ≈ 0.93 % of the distance from edge to shadow; worked: 2.5 m × 0.0093 ≈ 23 mm.
     const a = 1.496e11;
     const d = 2 * a * Math.tan((0.533 / 2) * D2R);
-    const p = penumbraWidth(d, a, 108 * INCH);
-    expect(Math.abs(p / INCH - 1.0)).toBeLessThan(0.05);
-    expect(p / (108 * INCH)).toBeCloseTo(0.0093, 4);
+    const p = penumbraWidth(d, a, 2.5);
+    expect(p / 2.5).toBeCloseTo(0.0093, 4);
+    expect(Math.abs(p - 0.023)).toBeLessThan(0.0005);
   });
 
-  it("the Sun overhead through shadowOf: a 9 ft panel edge gives about an inch of penumbra", () => {
-    // REFERENCE.md: Sun rule of thumb (NASA Sun fact sheet, from memory; common practice)
+  it("the Sun overhead through shadowOf: a 2.5 m panel edge gives about 23 mm of penumbra", () => {
+    // REFERENCE.md: Sun's angular diameter 0.533° (NASA Sun fact sheet, from memory) → 0.93 % of 2.5 m ≈ 23 mm
     const a = 1.496e11;
     const sun: ShadowInput = {
       source: { x: 0, y: 0, z: a }, apertureDiameter: 2 * a * Math.tan((0.533 / 2) * D2R), backWallY: Infinity,
-      occluder: { kind: "panel", a: { x: -1, y: 0 }, b: { x: 1, y: 0 }, height: 108 * INCH },
+      occluder: { kind: "panel", a: { x: -1, y: 0 }, b: { x: 1, y: 0 }, height: 2.5 },
     };
     const s = shadowOf(sun);
     expect(s.lands).toBe("deck");
-    expect(Math.abs(s.penumbraWidth! / INCH - 1.0)).toBeLessThan(0.05);
+    expect(Math.abs(s.penumbraWidth! - 0.023)).toBeLessThan(0.0005);
     expect(s.incidenceDeg).toBeCloseTo(0, 6);
   });
 
@@ -85,7 +84,8 @@ describe("shadowOf", () => {
     const wall = shadowOf(low);
     expect(wall.lands).toBe("wall");
     expect(wall.wallHeight!).toBeGreaterThan(1.75);
-    expect(wall.wallHeight).toBeCloseTo(0.5 + (1.25 / 8.25) * 16, 12);
+    // similar triangles: the near side of the head (y −0.25, 7.75 m from the lens) casts the top of the shadow
+    expect(wall.wallHeight).toBeCloseTo(0.5 + (1.25 / 7.75) * 16, 12);
     const level = shadowOf({ ...front, source: { x: 0, y: -8, z: 1.75 } });
     expect(level.wallHeight).toBeCloseTo(1.75, 12);
     const open = shadowOf({ ...low, backWallY: Infinity });
