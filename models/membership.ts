@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
-import type { Role } from "@/lib/auth/roles";
+import { ROLES, type Role } from "./roles";
 
 export class Membership extends Model<InferAttributes<Membership>, InferCreationAttributes<Membership>> {
   declare id: CreationOptional<number>;
@@ -18,7 +18,7 @@ export function initMembership(sequelize: Sequelize) {
       id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
       userId: { type: DataTypes.INTEGER, allowNull: false },
       productionId: { type: DataTypes.INTEGER, allowNull: false },
-      role: { type: DataTypes.ENUM("designer", "electrician", "stage_manager", "viewer"), allowNull: false },
+      role: { type: DataTypes.ENUM(...ROLES), allowNull: false },
       isOwner: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
       version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
       createdAt: DataTypes.DATE,

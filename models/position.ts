@@ -1,9 +1,9 @@
-import { POSITION_KINDS, type PositionKind } from "@/lib/rig/position-kinds";
+import { POSITION_KINDS, type PositionKind } from "./position-kinds";
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
 
 export { POSITION_KINDS, type PositionKind };
 
-/** A hanging position. Lines (pipes, trusses, rails) have both ends; booms, ladders and floor spots a single point. */
+/** A hanging position. Line kinds have both ends; point-hung kinds (see POINT_HUNG_KINDS) have x2, y2 null. */
 export class Position extends Model<InferAttributes<Position>, InferCreationAttributes<Position>> {
   declare id: CreationOptional<number>;
   declare productionId: number;

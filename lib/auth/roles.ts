@@ -1,6 +1,7 @@
-/** The four roles a member of a production can hold. */
-export const ROLES = ["designer", "electrician", "stage_manager", "viewer"] as const;
-export type Role = (typeof ROLES)[number];
+import type { Role } from "@/models/roles";
+
+// The list lives with the models (the database's enum is built from it); this module adds labels and landings.
+export { ROLES, type Role } from "@/models/roles";
 
 export const ROLE_LABELS: Record<Role, string> = {
   designer: "Lighting designer",

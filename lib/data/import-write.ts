@@ -4,7 +4,7 @@ import { getDb } from "@/models";
 import { AppError } from "@/lib/errors";
 import { unitSortKey } from "@/lib/rig/unit-number";
 import { STARTER_TYPES } from "@/lib/rig/starter-types";
-import type { PositionKind } from "@/lib/rig/position-kinds";
+import { isPointHung, type PositionKind } from "@/lib/rig/position-kinds";
 import type { ImportPlanResult } from "@/lib/rig/import-plan";
 import { batchInsert } from "./batch-insert";
 import type { Progress } from "./import-progress";
@@ -12,11 +12,13 @@ import type { Progress } from "./import-progress";
 const CHUNK = 500;
 const lower = (s: string) => s.trim().toLowerCase();
 
-// A position named in a file carries no geometry: it is drawn as a 10 m line (or a point for booms and
-// floor units) at the centre line and a 6 m trim, for the designer to move on the plot.
+// A position named in a file carries no geometry: it is drawn as a 10 m line (or a point for point-hung
+// kinds such as booms) at the centre line and a 6 m trim, for the designer to move on the plot.
 function guessKind(name: string): PositionKind {
   const n = name.toLowerCase();
+  if (/box.?boom/.test(n)) return "box-boom";
   if (/boom/.test(n)) return "boom";
+  if (/pipe.?end/.test(n)) return "pipe-end";
   if (/ladder/.test(n)) return "ladder";
   if (/truss/.test(n)) return "truss";
   if (/bridge|foh|front of house|catwalk/.test(n)) return "foh-bridge";
@@ -30,7 +32,7 @@ async function createPositions(productionId: number, names: string[], transactio
   const top = ((await Position.max("sortOrder", { where: { productionId }, transaction })) as number | null) ?? -1;
   const rows = names.map((name, i) => {
     const kind = guessKind(name);
-    const line = !["boom", "ladder", "floor"].includes(kind);
+    const line = !isPointHung(kind);
     return { productionId, name, kind, x1: line ? -5 : 0, y1: 0, x2: line ? 5 : null, y2: line ? 0 : null, trimHeight: kind === "floor" ? 0 : 6, ratedLoadKg: null, sortOrder: top + 1 + i };
   });
   const created = await Position.bulkCreate(rows, { transaction });

@@ -1,17 +1,7 @@
-/** Kinds of hanging position. Lines (pipes, trusses, rails) have two ends; the rest stand at a point. */
-export const POSITION_KINDS = [
-  "overhead-pipe",
-  "truss",
-  "boom",
-  "ladder",
-  "box-boom",
-  "foh-bridge",
-  "foh-rail",
-  "pipe-end",
-  "floor",
-  "flying-electric",
-] as const;
-export type PositionKind = (typeof POSITION_KINDS)[number];
+import type { PositionKind } from "@/models/position-kinds";
+
+// The list lives with the models (the database's enum is built from it); this module adds the words people see.
+export { POINT_HUNG_KINDS, POSITION_KINDS, isPointHung, type PositionKind } from "@/models/position-kinds";
 
 export const POSITION_KIND_LABELS: Record<PositionKind, string> = {
   "overhead-pipe": "Overhead pipe",
@@ -25,6 +15,3 @@ export const POSITION_KIND_LABELS: Record<PositionKind, string> = {
   floor: "Floor",
   "flying-electric": "Flying electric",
 };
-
-/** Booms, ladders and similar stand at a point and carry units at several heights. */
-export const VERTICAL_KINDS: ReadonlySet<PositionKind> = new Set(["boom", "ladder", "box-boom", "pipe-end", "floor"]);

@@ -3,7 +3,7 @@
 import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useMemo } from "react";
-import { VERTICAL_KINDS } from "@/lib/rig/position-kinds";
+import { POINT_HUNG_KINDS } from "@/lib/rig/position-kinds";
 import { useFocusFixtures } from "@/hooks/use-focus";
 import { neighboursOf, poolPlanSvg } from "@/lib/focus/plan-svg";
 import { toQuery } from "@/lib/focus/filters";
@@ -45,7 +45,7 @@ export function FocusCall({ data }: { data: FocusPageData }) {
     if (target) go({ unit: target.id });
   };
 
-  const vertical = !!position && VERTICAL_KINDS.has(position.kind);
+  const vertical = !!position && POINT_HUNG_KINDS.has(position.kind);
   const done = units.filter((f) => f.focused).length;
   const neighbours = current ? neighboursOf(current, fixtures) : [];
   const pdf = `/api/productions/${data.production.id}/focus/pdf?${toQuery({ position: positionId, perPage: 4, paper: "A4", tz: inBrowser ? browserTimeZone() : undefined })}`;

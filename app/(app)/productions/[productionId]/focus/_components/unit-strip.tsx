@@ -1,6 +1,6 @@
 "use client";
 
-import { VERTICAL_KINDS, type PositionKind } from "@/lib/rig/position-kinds";
+import { POINT_HUNG_KINDS, type PositionKind } from "@/lib/rig/position-kinds";
 import type { FixtureDto } from "@/lib/data/fixtures";
 
 /**
@@ -9,12 +9,12 @@ import type { FixtureDto } from "@/lib/data/fixtures";
  */
 export function orderForStrip(kind: PositionKind | undefined, units: FixtureDto[]): FixtureDto[] {
   const list = units.slice();
-  if (kind && VERTICAL_KINDS.has(kind)) return list.sort((a, b) => b.computed.lensHeight - a.computed.lensHeight);
+  if (kind && POINT_HUNG_KINDS.has(kind)) return list.sort((a, b) => b.computed.lensHeight - a.computed.lensHeight);
   return list.sort((a, b) => a.x - b.x);
 }
 
 export function UnitStrip({ kind, units, currentId, onPick }: { kind: PositionKind | undefined; units: FixtureDto[]; currentId: number | null; onPick: (id: number) => void }) {
-  const vertical = !!kind && VERTICAL_KINDS.has(kind);
+  const vertical = !!kind && POINT_HUNG_KINDS.has(kind);
   return (
     <nav
       aria-label={vertical ? "Units, top to bottom" : "Units along the position, stage right to stage left"}

@@ -3,7 +3,7 @@
 import { useState } from "react";
 import { formatLength, parseLength } from "@/lib/optics";
 import { calibrate } from "@/lib/plot/underlay";
-import { POSITION_KINDS, POSITION_KIND_LABELS, VERTICAL_KINDS, type PositionKind } from "@/lib/rig/position-kinds";
+import { POSITION_KINDS, POSITION_KIND_LABELS, POINT_HUNG_KINDS, type PositionKind } from "@/lib/rig/position-kinds";
 import { PanelSection } from "./panel-field";
 import type { PanelProps } from "./side-panel";
 
@@ -32,7 +32,7 @@ export function DraftForm(p: PanelProps) {
     try {
       if (d.kind === "position") {
         const [a, b] = d.points;
-        const ends = VERTICAL_KINDS.has(kind) || !b ? { x2: null, y2: null } : { x2: round(b.x), y2: round(b.y) };
+        const ends = POINT_HUNG_KINDS.has(kind) || !b ? { x2: null, y2: null } : { x2: round(b.x), y2: round(b.y) };
         const rated = load.trim() === "" ? null : Number(load);
         if (rated !== null && !Number.isFinite(rated)) throw new RangeError("Rated load must be a number of kilograms.");
         const r = await p.cmd.run("Add the position", () => p.cmd.actions.createPosition({ name, kind, x1: round(a.x), y1: round(a.y), ...ends, trimHeight: parseLength(trim, unit), ratedLoadKg: rated }));
@@ -75,7 +75,7 @@ export function DraftForm(p: PanelProps) {
           <>
             <label className="flex flex-col gap-0.5"><span className="text-muted">Kind</span>
               <select className={field} value={kind} onChange={(e) => setKind(e.target.value as PositionKind)} data-testid="draft-kind">
-                {POSITION_KINDS.filter((k) => VERTICAL_KINDS.has(k) === vertical).map((k) => <option key={k} value={k}>{POSITION_KIND_LABELS[k]}</option>)}
+                {POSITION_KINDS.filter((k) => POINT_HUNG_KINDS.has(k) === vertical).map((k) => <option key={k} value={k}>{POSITION_KIND_LABELS[k]}</option>)}
               </select>
             </label>
             <label className="flex flex-col gap-0.5"><span className="text-muted">Trim height{vertical ? " (top of the boom)" : ""}</span><input className={field} value={trim} onChange={(e) => setTrim(e.target.value)} data-testid="draft-trim" /></label>

@@ -2,14 +2,14 @@
 // for the live preview while its mark is dragged (the same module the server uses).
 import { computeFixtureGeometry } from "@/lib/rig/fixture-geometry";
 import { symbolShape } from "@/lib/plot/symbol";
-import { VERTICAL_KINDS, type PositionKind } from "@/lib/rig/position-kinds";
+import { POINT_HUNG_KINDS, type PositionKind } from "@/lib/rig/position-kinds";
 import type { Point } from "@/lib/optics";
 import type { RigItem } from "@/components/plot/draw-rig";
 import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import type { PlotPayload } from "@/hooks/use-plot";
 
 export function isVertical(kind: string) {
-  return VERTICAL_KINDS.has(kind as PositionKind);
+  return POINT_HUNG_KINDS.has(kind as PositionKind);
 }
 
 export function buildRigItems(data: PlotPayload): RigItem[] {
