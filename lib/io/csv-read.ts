@@ -1,5 +1,5 @@
 import Papa from "papaparse";
-import { FileProblem, toRawTable, type RawRow, type RawTable } from "./table";
+import { FileProblem, toRawTable, type RawRow, type RawTable } from "./raw-table";
 
 /**
  * Reads CSV text: comma, semicolon or tab delimited (detected), CRLF or LF, quoted fields with

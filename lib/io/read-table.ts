@@ -1,8 +1,8 @@
 import { readCsv } from "./csv-read";
 import { readXlsx } from "./xlsx-read";
-import { sniffFile } from "./sniff";
+import { sniffFile } from "./file-kind";
 import { looksLikeFixtureHeader } from "./fields";
-import { FileProblem, type RawTable } from "./table";
+import { FileProblem, type RawTable } from "./raw-table";
 
 /** Bytes of an uploaded file → a table, whatever the file's name says; problems are FileProblems. */
 export async function readTable(bytes: Uint8Array, fileName: string, opts: { sheet?: string } = {}): Promise<RawTable & { format: "csv" | "xlsx" }> {

@@ -6,7 +6,7 @@ import { fixtureFieldsSchema } from "@/lib/validation/fixture";
 import { parseAngle, parseLength } from "@/lib/optics";
 import { FIELD_BY_KEY, headerUnit, type ColumnTarget, type ImportKey } from "./fields";
 import { restoreCell } from "./neutralise";
-import type { RawTable } from "./table";
+import type { RawTable } from "./raw-table";
 
 export type LengthUnit = "m" | "ft";
 export type RowValues = Partial<Record<ImportKey, string | number | boolean | null>>;

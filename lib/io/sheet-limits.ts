@@ -1,7 +1,7 @@
 // Bounds on what a spreadsheet may make the server hold. A few hundred bytes of sheet XML can name a cell in
 // column XFD or a merged block a million rows tall; expanding either before the import's own limits are
 // checked would take gigabytes. Everything a reader builds is kept within these bounds first.
-import { FileProblem, MAX_IMPORT_ROWS, type RawRow } from "./table";
+import { FileProblem, MAX_IMPORT_ROWS, type RawRow } from "./raw-table";
 
 /** A rig sheet needs a few dozen columns; 256 (A … IV) leaves room for anyone's extra notes. */
 export const MAX_IMPORT_COLUMNS = 256;

@@ -1,6 +1,6 @@
 import { Readable } from "node:stream";
 import ExcelJS from "exceljs";
-import { FileProblem, toRawTable, type RawRow, type RawTable } from "./table";
+import { FileProblem, toRawTable, type RawRow, type RawTable } from "./raw-table";
 import { checkColumn, fillMerges } from "./sheet-limits";
 import { openXmlWorkbook, type XmlSheet, type XmlWorkbook } from "./xlsx-sheet-xml";
 

@@ -6,7 +6,7 @@
 // expect (prefixed XML names, a missing part) returns null, and the caller reads the file with ExcelJS.
 import { unzipSync } from "fflate";
 import { checkColumn, checkDeclaredDimension } from "./sheet-limits";
-import { FileProblem, type RawRow } from "./table";
+import { FileProblem, type RawRow } from "./raw-table";
 
 export type XmlSheet = { name: string; read: () => { records: RawRow[]; merges: string[] } };
 export type XmlWorkbook = { sheets: XmlSheet[] };

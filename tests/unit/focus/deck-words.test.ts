@@ -50,7 +50,7 @@ describe("focus chart: the mark in deck words", () => {
     const chart = buildFocusChart(makeFixture({ lens: { x: -4, y: -6, z: 8 }, mark: { x: 0, y: 0 }, coneDeg: 20, softnessDeg: 1 }), PRODUCTION);
     // atan2(4, 6) = 33.7° off the centre line; elevation atan(8 / 7.211) = 47.97° → 48° down (trigonometry)
     expect(value(chart.focus, "lightFrom")).toBe("from DSR, 34° off the centre line, 48° down");
-    // house convention in lib/optics/words.ts: softness under 10 % of the cone reads "sharp"
+    // house convention in lib/optics/beam-words.ts: softness under 10 % of the cone reads "sharp"
     expect(value(chart.beam, "edge")).toBe("sharp");
   });
 });

@@ -4,9 +4,9 @@ import { strToU8, zipSync } from "fflate";
 import { readCsv } from "@/lib/io/csv-read";
 import { readXlsx, readXlsxWithExcelJs } from "@/lib/io/xlsx-read";
 import { openXmlWorkbook } from "@/lib/io/xlsx-sheet-xml";
-import { sniffFile } from "@/lib/io/sniff";
+import { sniffFile } from "@/lib/io/file-kind";
 import { looksLikeFixtureHeader } from "@/lib/io/fields";
-import { FileProblem } from "@/lib/io/table";
+import { FileProblem } from "@/lib/io/raw-table";
 
 const bytes = (s: string) => new TextEncoder().encode(s);
 

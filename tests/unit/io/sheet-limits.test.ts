@@ -1,7 +1,7 @@
 import { strToU8, zipSync } from "fflate";
 import { describe, expect, it } from "vitest";
 import { columnLetters, fillMerges, MAX_IMPORT_COLUMNS } from "@/lib/io/sheet-limits";
-import { MAX_IMPORT_ROWS } from "@/lib/io/table";
+import { MAX_IMPORT_ROWS } from "@/lib/io/raw-table";
 import { readXlsx } from "@/lib/io/xlsx-read";
 
 // A minimal SpreadsheetML package (ECMA-376 Part 1): workbook, its relationships and one sheet.

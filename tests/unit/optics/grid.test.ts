@@ -59,7 +59,7 @@ describe("illuminance grid", () => {
   });
 
   it("agrees with the exact illuminanceAt at every cell within the profile table's 2e-4 of peak", () => {
-    // DESIGN.md: the grid is the same law evaluated at many points; lib/optics/table.ts states the bound
+    // DESIGN.md: the grid is the same law evaluated at many points; lib/optics/profile-table.ts states the bound
     const beams = rig(25, 11);
     const g = illuminanceGrid({ bounds, resolution: 0.25, planeZ: 1.7, beams });
     let worst = 0;

@@ -1,7 +1,7 @@
-// The grid's profile table (lib/optics/table.ts) against the exact curves.
+// The grid's profile table (lib/optics/profile-table.ts) against the exact curves.
 import { describe, expect, it } from "vitest";
 import { makeProfile, profileAt } from "@/lib/optics/profile";
-import { profileTable, tableAt } from "@/lib/optics/table";
+import { profileTable, tableAt } from "@/lib/optics/profile-table";
 import { beamAngles } from "@/lib/optics/validate";
 
 describe("profile table", () => {

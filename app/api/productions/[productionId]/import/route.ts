@@ -3,7 +3,7 @@ import { route } from "@/lib/http/respond";
 import { requireMember } from "@/lib/auth/guards";
 import { AppError, fromZodError, toAppError } from "@/lib/errors";
 import { commitImport, getRememberedMapping, previewImport, type ImportRequest } from "@/lib/data/import";
-import { MAX_IMPORT_BYTES } from "@/lib/io/sniff";
+import { MAX_IMPORT_BYTES } from "@/lib/io/file-kind";
 import { IMPORT_FIELDS } from "@/lib/io/fields";
 import { readUploadForm } from "@/lib/http/upload-form";
 

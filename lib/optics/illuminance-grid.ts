@@ -2,7 +2,7 @@ import { prepareBeam, type LitBeam, type PreparedBeam } from "./illuminance";
 import { ellipseBounds, poolAtPlane } from "./pool";
 import { pointInPolygon } from "./polygon";
 import { coneRowSpan } from "./span";
-import { profileTable, TABLE_STEPS } from "./table";
+import { profileTable, TABLE_STEPS } from "./profile-table";
 import { assertFinite } from "./validate";
 import type { Point } from "./vector";
 
