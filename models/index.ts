@@ -17,8 +17,11 @@ import { initLandmark, Landmark } from "./landmark";
 import { initUpload, Upload } from "./upload";
 import { initAccessory, Accessory } from "./accessory";
 import { initImportMapping, ImportMapping } from "./import-mapping";
+import { initPerformerMark, PerformerMark } from "./performer-mark";
+import { initScenicPanel, ScenicPanel } from "./scenic-panel";
+import { initColourTransmission, ColourTransmission } from "./colour-transmission";
 
-const models = { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping };
+const models = { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission };
 export type Db = typeof models & { sequelize: Sequelize };
 
 function associate() {
@@ -45,7 +48,7 @@ function createDb(): Db {
     pool: { max: 10, min: 0, idle: 10_000, acquire: 10_000 },
     dialectOptions: { timezone: "Z", connectTimeout: 5_000 },
   });
-  for (const init of [initUser, initProduction, initMembership, initPosition, initFixtureType, initFocusPoint, initFixture, initCue, initCuePart, initChangeEntry, initAreaZone, initLandmark, initUpload, initAccessory, initImportMapping]) {
+  for (const init of [initUser, initProduction, initMembership, initPosition, initFixtureType, initFocusPoint, initFixture, initCue, initCuePart, initChangeEntry, initAreaZone, initLandmark, initUpload, initAccessory, initImportMapping, initPerformerMark, initScenicPanel, initColourTransmission]) {
     init(sequelize);
   }
   associate();
@@ -59,4 +62,4 @@ export function getDb(): Db {
   return holder.__throwlineDb;
 }
 
-export { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping };
+export { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission };

@@ -10,6 +10,8 @@ export class Production extends Model<InferAttributes<Production>, InferCreation
   declare displayUnits: CreationOptional<DisplayUnits>;
   declare datumName: CreationOptional<string>;
   declare headHeight: CreationOptional<number>;
+  declare faceHeight: CreationOptional<number>;
+  declare showDeckHeight: CreationOptional<number>;
   declare backWallY: CreationOptional<number>;
   declare prosceniumWidth: CreationOptional<number>;
   declare prosceniumHeight: CreationOptional<number>;
@@ -34,6 +36,8 @@ export function initProduction(sequelize: Sequelize) {
       displayUnits: { type: DataTypes.ENUM("metric", "imperial"), allowNull: false, defaultValue: "metric" },
       datumName: { type: DataTypes.STRING(60), allowNull: false, defaultValue: "setting line" },
       headHeight: metres(1.7),
+      faceHeight: metres(1.55),
+      showDeckHeight: metres(0),
       backWallY: metres(10),
       prosceniumWidth: metres(10),
       prosceniumHeight: metres(6),
