@@ -29,21 +29,31 @@ const AREAS = [
   ["Area 7", -3, 6.5], ["Area 8", 0, 6.5], ["Area 9", 3, 6.5],
 ];
 
+// Colours are plain words of our own (users type whatever their shop uses; a shop pulls stock by that text).
 // name, kind, x1, y1, x2, y2, trim, rated load (kg), units: [typeName, count, purpose, colour, gobo]
 const POSITIONS = [
-  ["FOH Bridge 2", "foh-bridge", -6, -12, 6, -12, 8.5, 400, [["Profile 19°", 10, "front light", "L201", null], ["Profile 19°", 4, "specials", "N/C", "leaf breakup"]]],
-  ["FOH Bridge 1", "foh-bridge", -5, -7, 5, -7, 7.5, 400, [["Profile 26°", 14, "front light", "L202", null]]],
-  ["Box Boom SL", "box-boom", 7.5, -4, null, null, 6, 150, [["Profile 36°", 4, "box-boom wash", "L152", null]]],
-  ["Box Boom SR", "box-boom", -7.5, -4, null, null, 6, 150, [["Profile 36°", 4, "box-boom wash", "L161", null]]],
-  ["1st Electric", "overhead-pipe", -7, 1.0, 7, 1.0, 7, 250, [["Fresnel 150 mm", 8, "top light", "L711", null], ["LED wash, zoom", 8, "colour wash", "N/C", null], ["Zoom profile 25–50°", 4, "texture", "N/C", "breakup"]]],
-  ["2nd Electric", "overhead-pipe", -7, 3.5, 7, 3.5, 7.5, 250, [["Fresnel 150 mm", 8, "top light", "L711", null], ["LED wash, zoom", 6, "colour wash", "N/C", null], ["Profile 26°", 2, "specials", "L201 + L132", null]]],
-  ["3rd Electric", "overhead-pipe", -7, 6.0, 7, 6.0, 7.5, 250, [["Fresnel 150 mm", 8, "back light", "L181", null], ["LED wash, zoom", 6, "colour wash", "N/C", null], ["Profile 26°", 2, "specials", "L201", null]]],
+  ["FOH Bridge 2", "foh-bridge", -6, -12, 6, -12, 8.5, 400, [["Profile 19°", 10, "front light", "½ CTO", null], ["Profile 19°", 4, "specials", "N/C", "leaf breakup"]]],
+  ["FOH Bridge 1", "foh-bridge", -5, -7, 5, -7, 7.5, 400, [["Profile 26°", 14, "front light", "¼ CTB", null]]],
+  ["Box Boom SL", "box-boom", 7.5, -4, null, null, 6, 150, [["Profile 36°", 4, "box-boom wash", "pale amber", null]]],
+  ["Box Boom SR", "box-boom", -7.5, -4, null, null, 6, 150, [["Profile 36°", 4, "box-boom wash", "pale blue", null]]],
+  ["1st Electric", "overhead-pipe", -7, 1.0, 7, 1.0, 7, 250, [["Fresnel 150 mm", 8, "top light", "straw + light frost", null], ["LED wash, zoom", 8, "colour wash", "N/C", null], ["Zoom profile 25–50°", 4, "texture", "N/C", "breakup"]]],
+  ["2nd Electric", "overhead-pipe", -7, 3.5, 7, 3.5, 7.5, 250, [["Fresnel 150 mm", 8, "top light", "straw + light frost", null], ["LED wash, zoom", 6, "colour wash", "N/C", null], ["Profile 26°", 2, "specials", "full CTB + light frost", null]]],
+  ["3rd Electric", "overhead-pipe", -7, 6.0, 7, 6.0, 7.5, 250, [["Fresnel 150 mm", 8, "back light", "deep indigo", null], ["LED wash, zoom", 6, "colour wash", "N/C", null], ["Profile 26°", 2, "specials", "½ CTO", null]]],
   ["4th Electric", "flying-electric", -7, 8.5, 7, 8.5, 7, 300, [["LED cyc light", 10, "cyc wash", "N/C", null]]],
-  ["Boom SL 1", "boom", 6.5, 2, null, null, 4.5, 60, [["Profile 36°", 5, "side light", "L136", null]]],
-  ["Boom SR 1", "boom", -6.5, 2, null, null, 4.5, 60, [["Profile 36°", 5, "side light", "L136", null]]],
-  ["Boom SL 2", "boom", 6.5, 5, null, null, 4, 60, [["Profile 36°", 4, "side light", "L136", null]]],
-  ["Boom SR 2", "boom", -6.5, 5, null, null, 4, 60, [["Profile 36°", 4, "side light", "L136", null]]],
+  ["Boom SL 1", "boom", 6.5, 2, null, null, 4.5, 60, [["Profile 36°", 5, "side light", "pale lavender", null]]],
+  ["Boom SR 1", "boom", -6.5, 2, null, null, 4.5, 60, [["Profile 36°", 5, "side light", "pale lavender", null]]],
+  ["Boom SL 2", "boom", 6.5, 5, null, null, 4, 60, [["Profile 36°", 4, "side light", "pale lavender", null]]],
+  ["Boom SR 2", "boom", -6.5, 5, null, null, 4, 60, [["Profile 36°", 4, "side light", "pale lavender", null]]],
 ];
+
+// Shutter cuts in plan (label, two points), by position and purpose: the front light kept off the lip, the
+// upstage specials cut short of the cyc, the texture kept behind the setting line.
+const CUTS = {
+  "FOH Bridge 2/front light": [{ label: "bottom", a: { x: -7, y: -1.45 }, b: { x: 7, y: -1.45 } }],
+  "FOH Bridge 1/front light": [{ label: "bottom", a: { x: -7, y: -1.45 }, b: { x: 7, y: -1.45 } }],
+  "3rd Electric/specials": [{ label: "top", a: { x: -4, y: 8.2 }, b: { x: 4, y: 8.2 } }],
+  "1st Electric/texture": [{ label: "top", a: { x: -6, y: 0.3 }, b: { x: 6, y: 0.3 } }],
+};
 
 const pad = (s) => s.replace(/\d+/g, (d) => d.padStart(6, "0"));
 const round = (n, k = 3) => Math.round(n * 10 ** k) / 10 ** k;
@@ -88,7 +98,7 @@ async function up(qi) {
   let address = 1;
   let universe = 1;
   let circuit = 1;
-  for (const [name, kind, x1, y1, x2, y2, trim, , groups] of POSITIONS) {
+  for (const [positionIndex, [name, kind, x1, y1, x2, y2, , , groups]] of POSITIONS.entries()) {
     const units = groups.flatMap(([typeName, count, purpose, colour, gobo]) => Array.from({ length: count }, () => ({ typeName, purpose, colour, gobo })));
     units.forEach((u, i) => {
       const t = TYPES.find((tt) => tt.name === u.typeName);
@@ -107,12 +117,13 @@ async function up(qi) {
         production_id: productionId, position_id: positionId.get(name), fixture_type_id: typeByName.get(u.typeName),
         focus_point_id: isCyc || isSide ? null : nearest.id,
         unit_number: String(i + 1), unit_sort: pad(String(i + 1)), channel: channel++, universe, address,
-        dmx_mode: t.modes[0].name, footprint, circuit: String(100 + circuit++), dimmer: footprint === 1 ? String(channel + 100) : null,
+        // Dimmers as a rack would number them (each position starts a new block of 24), not circuit + 1.
+        dmx_mode: t.modes[0].name, footprint, circuit: String(100 + circuit++), dimmer: footprint === 1 ? String(1 + positionIndex * 24 + i) : null,
         colour: u.colour, gobo: u.gobo, purpose: u.purpose, x, y, lens_height: lensHeight,
         focus_x: isCyc ? x : isSide ? round(-x * 0.4, 2) : null, focus_y: isCyc ? 9.3 : isSide ? y : null,
         aim: isSide || (!isCyc && y < 0) ? "head" : "deck",
         cone_deg: t.cone[0] === t.cone[1] ? null : round(t.cone[0] + (t.cone[1] - t.cone[0]) * 0.4, 1),
-        softness_deg: null, shutter_cuts: null, iris_percent: null, notes: null, focus_notes: null,
+        softness_deg: null, shutter_cuts: CUTS[`${name}/${u.purpose}`] ? JSON.stringify(CUTS[`${name}/${u.purpose}`]) : null, iris_percent: null, notes: null, focus_notes: null,
         hung: i % 3 !== 0, focused: i % 5 === 0, version: 1, ...stamp,
       });
       address += footprint;

@@ -55,6 +55,13 @@ function poolWords(pool: PlanePool | null, mark: Point | null, units: Units): st
   return mark ? `${size}; centre ${offsetFromMark(pool.outer.centre, mark, units)}` : size;
 }
 
+/** Distance from the mark to the outer pool's farthest edge on the deck; undefined without a closed pool. */
+function poolReach(pool: PlanePool | null, mark: Point): number | undefined {
+  if (pool?.status !== "ok" || !pool.outer) return undefined;
+  const c = pool.outer.centre;
+  return Math.hypot(c.x - mark.x, c.y - mark.y) + pool.outer.semiMajor;
+}
+
 function bandWords(pool: PlanePool | null, units: Units): string {
   if (!pool?.band) return "—";
   const f = (v: number) => formatLength(v, units);
@@ -86,7 +93,7 @@ export function buildFocusChart(
   for (const [i, cut] of (f.shutterCuts ?? []).entries()) {
     if (!mark) break;
     try {
-      cuts.push(readCut(cut, { mark, panDeg: g.panDeg, tiltDeg: g.tiltDeg, family: f.family, landmarks, units, datumName: p.datumName }));
+      cuts.push(readCut(cut, { mark, panDeg: g.panDeg, tiltDeg: g.tiltDeg, family: f.family, landmarks, units, datumName: p.datumName, poolReach: poolReach(g.deck, mark) }));
     } catch (err) {
       warnings.push(`Cut ${i + 1}: ${(err as Error).message}`);
     }
@@ -110,7 +117,7 @@ export function buildFocusChart(
     row("aimHeight", "Aim height", f.aim === "head" ? `head height (${len(p.headHeight)})` : "deck"),
     row("hotSpot", "Hot spot", mark ? hotSpotWords(f, mark, units, shape) : null),
     row("throw", "Throw", len(g.throw)),
-    row("lightFrom", "Light from", g.focus ? describeBeam(g.source, g.focus) : null),
+    row("lightFrom", "Direction", g.focus ? describeBeam(g.source, g.focus) : null),
     row("lens", "Lens at", `${describePoint(g.source, { units, datumName: p.datumName })}, ${len(g.lensHeight)} up`),
     row("deckPool", "Pool at deck", poolWords(g.deck, mark, units)),
     row("headPool", "Pool at head height", poolWords(g.head, mark, units)),

@@ -2,6 +2,10 @@
 // The plot (issue 4) may store its own landmarks; until then, and in addition, the production's stage
 // outline gives the lines every venue has. Both arrive in the same plain shape.
 import type { Point } from "@/lib/optics";
+import { withArticle } from "@/lib/optics/beam-words";
+
+// The article rule lives with the deck words in lib/optics; re-exported for the cut wording.
+export { withArticle };
 
 export type Landmark = { name: string; a: Point; b: Point };
 
@@ -43,11 +47,6 @@ export function mergeLandmarks(drawn: Landmark[] | null | undefined, outline: La
  */
 export function cutPreposition(name: string): "off" | "to" {
   return /\b(lip|edge|apron|wall|border|pit|cyc|drop|house)\b/i.test(name) ? "off" : "to";
-}
-
-/** The name with "the" in front, unless it already starts with an article or a number. */
-export function withArticle(name: string): string {
-  return /^(the|a|an)\s/i.test(name) || /^\d/.test(name) ? name : `the ${name}`;
 }
 
 /** The plot's stored landmarks (x1, y1, x2, y2 rows) in the shape cut wording uses. */

@@ -20,6 +20,12 @@ export function neighboursOf<F extends Pick<FixtureDto, "id" | "focusPointId" | 
   });
 }
 
+/** "unit 14 and 21 others on this mark": the count is of the other units, so it says so. */
+export function sharedMarkWords(unitNumber: string, others: number): string {
+  if (others === 0) return `unit ${unitNumber}, alone on this mark`;
+  return `unit ${unitNumber} and ${others} ${others === 1 ? "other" : "others"} on this mark`;
+}
+
 export function poolPlanSvg(o: {
   current: Pick<FixtureDto, "computed" | "unitNumber">;
   neighbours: Array<Pick<FixtureDto, "computed" | "positionName" | "unitNumber">>;
@@ -40,7 +46,7 @@ export function poolPlanSvg(o: {
   const mark: Point | null = o.current.computed.focus;
   const markSvg = mark ? `<circle cx="${fmt(mark.x)}" cy="${fmt(-mark.y)}" r="${fmt(text * 0.35)}" class="fc-mark"/>` : "";
   const legend = `<text x="${fmt(box.minX + text * 0.5)}" y="${fmt(-box.minY - text * 0.5)}" font-size="${fmt(text)}" class="fc-muted">audience</text>` +
-    `<text x="${fmt(box.maxX - text * 0.5)}" y="${fmt(-box.minY - text * 0.5)}" font-size="${fmt(text)}" text-anchor="end" class="fc-muted">${escapeHtml(`unit ${o.current.unitNumber} and ${o.neighbours.length} on the same mark`)}</text>`;
+    `<text x="${fmt(box.maxX - text * 0.5)}" y="${fmt(-box.minY - text * 0.5)}" font-size="${fmt(text)}" text-anchor="end" class="fc-muted">${escapeHtml(sharedMarkWords(o.current.unitNumber, o.neighbours.length))}</text>`;
   return `<svg class="fc-plan" viewBox="${fmt(box.minX)} ${fmt(-box.maxY)} ${fmt(box.maxX - box.minX)} ${fmt(box.maxY - box.minY)}" role="img" aria-label="Stage plan with this unit's pool and its neighbours'">` +
     `<rect x="${fmt(box.minX)}" y="${fmt(-box.maxY)}" width="${fmt(box.maxX - box.minX)}" height="${fmt(box.maxY - box.minY)}" class="fc-bg"/>` +
     lines + neighbours + pool(o.current, "fc-plan-current") + markSvg + legend + `</svg>`;

@@ -80,24 +80,48 @@ function footOnLine(p: Point, a: Point, b: Point): Point {
   return { x: a.x + t * dx, y: a.y + t * dy };
 }
 
-/** The landmark a cut runs along (nearly parallel, close to where the cut meets the pool), else one whose end it meets. */
-export function matchLandmark(cut: { a: Point; b: Point }, mark: Point, landmarks: Landmark[]): Landmark | null {
+/** Nearest point of the segment a–b to p (a landmark is a drawn line with ends, not an endless one). */
+function nearestOnSegment(p: Point, a: Point, b: Point): Point {
+  const dx = b.x - a.x;
+  const dy = b.y - a.y;
+  const len2 = dx * dx + dy * dy;
+  const t = len2 > 0 ? Math.min(1, Math.max(0, ((p.x - a.x) * dx + (p.y - a.y) * dy) / len2)) : 0;
+  return { x: a.x + t * dx, y: a.y + t * dy };
+}
+
+/**
+ * How far from the mark a landmark may be and still be what a cut is worded against, when the chart does not
+ * pass the pool's own reach (house tolerance: about the radius of a typical area pool).
+ */
+export const DEFAULT_POOL_REACH_M = 3;
+
+/**
+ * The landmark a cut runs along (nearly parallel, close to where the cut meets the pool), else one whose end it
+ * meets. Only landmarks near the pool count: `reach` is the distance from the mark to the pool's farthest edge,
+ * and the point where the cut meets the landmark must lie within it (plus the house tolerance), never somewhere
+ * along the cut line's endless extension.
+ */
+export function matchLandmark(cut: { a: Point; b: Point }, mark: Point, landmarks: Landmark[], reach = DEFAULT_POOL_REACH_M): Landmark | null {
   const foot = footOnLine(mark, cut.a, cut.b);
+  const nearPool = (p: Point) => Math.hypot(p.x - mark.x, p.y - mark.y) <= reach + NEAR_M;
   const d = Math.atan2(cut.b.y - cut.a.y, cut.b.x - cut.a.x);
   let best: { l: Landmark; dist: number } | null = null;
   for (const l of landmarks) {
     const e = Math.atan2(l.b.y - l.a.y, l.b.x - l.a.x);
     const skew = Math.abs(Math.sin(d - e));
     if (!Number.isFinite(skew) || skew > Math.sin((PARALLEL_DEG * Math.PI) / 180)) continue;
-    const onLine = footOnLine(foot, l.a, l.b);
+    const onLine = nearestOnSegment(foot, l.a, l.b);
     const dist = Math.hypot(onLine.x - foot.x, onLine.y - foot.y);
-    if (dist <= NEAR_M && (!best || dist < best.dist)) best = { l, dist };
+    if (dist <= NEAR_M && nearPool(onLine) && (!best || dist < best.dist)) best = { l, dist };
   }
   if (best) return best.l;
-  // A cut across a line's end: the onstage edge of a leg drawn as a short line across the stage.
+  // A cut across a line's end: the onstage edge of a leg drawn as a short line across the stage. A line
+  // parallel to the cut is not crossed by it (its end near the cut line is only the cut's extension).
   const len = Math.hypot(cut.b.x - cut.a.x, cut.b.y - cut.a.y);
   for (const l of landmarks) {
+    if (Math.abs(Math.sin(d - Math.atan2(l.b.y - l.a.y, l.b.x - l.a.x))) <= Math.sin((PARALLEL_DEG * Math.PI) / 180)) continue;
     for (const end of [l.a, l.b]) {
+      if (!nearPool(end)) continue;
       const dist = Math.abs((cut.b.x - cut.a.x) * (cut.a.y - end.y) - (cut.a.x - end.x) * (cut.b.y - cut.a.y)) / len;
       if (dist <= NEAR_M && (!best || dist < best.dist)) best = { l, dist };
     }
@@ -105,26 +129,31 @@ export function matchLandmark(cut: { a: Point; b: Point }, mark: Point, landmark
   return best?.l ?? null;
 }
 
-/** Where an unmatched cut line lies, along the axis that matters for its edge. */
+/** Where an unmatched cut line lies, with its own preposition: "at 3.20 m US of the setting line", "on the centre line". */
 function lineWords(edge: DeckEdge, foot: Point, o: { units: Units; datumName: string }): string {
   if (edge === "downstage" || edge === "upstage") {
+    const datum = withArticle(o.datumName || "setting line");
     const s = formatLength(Math.abs(foot.y), o.units);
-    return Math.abs(foot.y) < 0.005 ? `on the ${o.datumName}` : `${s} ${foot.y > 0 ? "US" : "DS"} of the ${o.datumName}`;
+    return Math.abs(foot.y) < 0.005 ? `on ${datum}` : `at ${s} ${foot.y > 0 ? "US" : "DS"} of ${datum}`;
   }
   const s = formatLength(Math.abs(foot.x), o.units);
-  return Math.abs(foot.x) < 0.005 ? "on the centre line" : `${s} ${foot.x > 0 ? "SL" : "SR"} of CL`;
+  return Math.abs(foot.x) < 0.005 ? "on the centre line" : `at ${s} ${foot.x > 0 ? "SL" : "SR"} of CL`;
 }
 
 export function readCut(
   cut: CutInput,
-  o: { mark: Point; panDeg: number | null; tiltDeg: number | null; family: string; landmarks: Landmark[]; units: Units; datumName: string },
+  o: {
+    mark: Point; panDeg: number | null; tiltDeg: number | null; family: string; landmarks: Landmark[]; units: Units; datumName: string;
+    /** Distance from the mark to the pool's farthest edge, so only landmarks near the pool are named. */
+    poolReach?: number;
+  },
 ): CutReading {
   const n = removedNormal(cut, o.mark);
   const deckEdge = deckEdgeOf(n);
-  const landmark = matchLandmark(cut, o.mark, o.landmarks);
+  const landmark = matchLandmark(cut, o.mark, o.landmarks, o.poolReach);
   const words = landmark
     ? `${deckEdge} edge ${cutPreposition(landmark.name)} ${withArticle(landmark.name)}`
-    : `${deckEdge} edge cut at ${lineWords(deckEdge, footOnLine(o.mark, cut.a, cut.b), o)}`;
+    : `${deckEdge} edge cut ${lineWords(deckEdge, footOnLine(o.mark, cut.a, cut.b), o)}`;
   const cutter = GATE_FAMILIES.has(o.family) ? "shutter" : "barn door";
   const straightDown = o.panDeg == null || o.tiltDeg == null || o.tiltDeg >= STRAIGHT_DOWN_DEG;
   const beamSide = straightDown ? null : beamSideOf(n, o.panDeg!);

@@ -10,12 +10,21 @@ function shown(v: number, units: Units): string | null {
 }
 
 /**
- * A plan point in deck words: "1.20 m SL of CL, 2.50 m US of setting line". x > 0 is stage left, y > 0
- * upstage. The datum's name is used as given (pass "the setting line" if the article is wanted).
+ * A line's name with "the" in front ("the setting line"), unless it already starts with an article or a
+ * number. One wording for the datum everywhere on a chart, as the design's example: "US of the setting line".
+ */
+export function withArticle(name: string): string {
+  const n = name.trim();
+  return /^(the|a|an)\s/i.test(n) || /^\d/.test(n) ? n : `the ${n}`;
+}
+
+/**
+ * A plan point in deck words: "1.20 m SL of CL, 2.50 m US of the setting line". x > 0 is stage left, y > 0
+ * upstage. The datum's name takes "the" unless it already has an article.
  */
 export function describePoint(p: Point, o: { units: Units; datumName?: string }): string {
   if (!Number.isFinite(p.x) || !Number.isFinite(p.y)) throw new RangeError("A point needs finite x and y.");
-  const datum = o.datumName?.trim() || "setting line";
+  const datum = withArticle(o.datumName?.trim() || "setting line");
   const sx = shown(p.x, o.units);
   const sy = shown(p.y, o.units);
   const across = sx ? `${sx} ${p.x > 0 ? "SL" : "SR"} of CL` : "on CL";

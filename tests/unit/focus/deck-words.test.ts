@@ -6,27 +6,40 @@ import { makeFixture, PRODUCTION } from "./fixture-builder";
 const value = (rows: { key: string; value: string }[], key: string) => rows.find((r) => r.key === key)?.value;
 
 describe("focus chart: the mark in deck words", () => {
-  it("metric: 1.20 m SL of CL, 2.50 m US of setting line", () => {
+  it("one wording for the datum on the whole chart: mark, lens and cuts all say \"of the setting line\"", () => {
+    // DESIGN.md, coordinates: "1.50 m US of the setting line" (the design's example wording)
+    const f = makeFixture({
+      mark: { x: 1.2, y: 2.5 }, shutterCuts: [{ label: "top", a: { x: -3, y: 3.4 }, b: { x: 3, y: 3.4 } }],
+    });
+    const chart = buildFocusChart(f, PRODUCTION);
+    const text = [...chart.focus.map((r) => r.value), ...chart.cuts.map((c) => c.words)].join(" | ");
+    expect(text).toContain("2.50 m US of the setting line");
+    expect(text).toContain("8.00 m DS of the setting line");
+    expect(text).toContain("upstage edge cut at 3.40 m US of the setting line");
+    expect(text).not.toMatch(/of setting line|on setting line/);
+  });
+
+  it("metric: 1.20 m SL of CL, 2.50 m US of the setting line", () => {
     const chart = buildFocusChart(makeFixture({ mark: { x: 1.2, y: 2.5 } }), PRODUCTION);
     // common practice, no source: deck words as the design states them (x > 0 stage left, y > 0 upstage)
-    expect(value(chart.focus, "mark")).toBe("1.20 m SL of CL, 2.50 m US of setting line");
+    expect(value(chart.focus, "mark")).toBe("1.20 m SL of CL, 2.50 m US of the setting line");
   });
 
   it("stage right and downstage of the datum, with a named focus point", () => {
     const chart = buildFocusChart(makeFixture({ mark: { x: -3, y: -0.75 }, focusPointName: "Area 1" }), PRODUCTION);
-    expect(value(chart.focus, "mark")).toBe("Area 1: 3.00 m SR of CL, 0.75 m DS of setting line");
+    expect(value(chart.focus, "mark")).toBe("Area 1: 3.00 m SR of CL, 0.75 m DS of the setting line");
   });
 
   it("imperial, to the half inch: 1.20 m = 3' 11 1/2\", 2.50 m = 8' 2 1/2\"", () => {
     const chart = buildFocusChart(makeFixture({ mark: { x: 1.2, y: 2.5 } }), { ...PRODUCTION, displayUnits: "imperial", datumName: "plaster line" });
     // NIST SP 811: 1 in = 25.4 mm exactly. 1.2 m = 47.244 in, nearest half inch 47.0 → 3' 11"
     // 2.5 m = 98.425 in → 98.5 in → 8' 2 1/2"
-    expect(value(chart.focus, "mark")).toBe(`3' 11" SL of CL, 8' 2 1/2" US of plaster line`);
+    expect(value(chart.focus, "mark")).toBe(`3' 11" SL of CL, 8' 2 1/2" US of the plaster line`);
   });
 
   it("on the centre line and on the datum", () => {
     const chart = buildFocusChart(makeFixture({ mark: { x: 0, y: 0 } }), PRODUCTION);
-    expect(value(chart.focus, "mark")).toBe("on CL, on setting line");
+    expect(value(chart.focus, "mark")).toBe("on CL, on the setting line");
   });
 
   it("pool centre relative to the mark sits beyond it, away from the lens", () => {

@@ -58,6 +58,6 @@ describe("Excel export", () => {
     for (const h of ["Channel", "Focus mark", "Hot spot", "Pool at deck", "Soft band at deck", "Edge", "Iris", "Cuts", "As-focused notes"]) expect(headers).toContain(h);
     const notesCol = headers.indexOf("Designer notes") + 1;
     expect(ws.getRow(2).getCell(notesCol).value).toBe(`'=HYPERLINK("http://x")`);
-    expect(ws.getRow(2).getCell(headers.indexOf("Focus mark") + 1).value).toBe("1.20 m SL of CL, 2.50 m US of setting line");
+    expect(ws.getRow(2).getCell(headers.indexOf("Focus mark") + 1).value).toBe("1.20 m SL of CL, 2.50 m US of the setting line");
   });
 });

@@ -54,6 +54,41 @@ describe("shutter inversion", () => {
     expect(r.words).toBe("upstage edge cut at 3.20 m US of the setting line");
   });
 
+  it("a cut whose nearest point to the mark lies on the datum reads \"cut on the setting line\"", () => {
+    // plan geometry, worked by hand: the cut runs (0.5, 0)→(2.5, 1), direction (2, 1); the mark (0, 1) projects
+    // onto it at t = ((−0.5)·2 + 1·1)/5 = 0, i.e. at (0.5, 0), which lies on the setting line (y = 0). The mark
+    // is on the (−1, 2) side of the line, so the cut removes the (1, −2) side: mostly downstage.
+    const r = readCut({ label: "top", a: { x: 0.5, y: 0 }, b: { x: 2.5, y: 1 } }, { ...base, mark: { x: 0, y: 1 }, panDeg: 90, tiltDeg: 40, family: "profile" });
+    expect(r.words).toBe("downstage edge cut on the setting line");
+  });
+
+  it("a cut is worded against a landmark only when the landmark is near the pool", () => {
+    // plan geometry, worked by hand: the cut (0, 0.5)→(1, 2.5) runs along x = (y − 0.5)/2. With a 9 m
+    // proscenium the SL proscenium's upstage end (4.5, 9.5) lies exactly on that line's extension, but it is
+    // √(5.5² + 8.5²) = 10.1 m from the mark (−1, 1), far outside a pool reaching 2.5 m. The mark projects onto
+    // the cut at t = ((−1)·1 + 0.5·2)/5 = 0, i.e. (0, 0.5), on the centre line; the removed side is (2, −1),
+    // mostly stage left.
+    const narrow = outlineLandmarks({ ...PRODUCTION, prosceniumWidth: 9 });
+    const cut = { label: "left" as const, a: { x: 0, y: 0.5 }, b: { x: 1, y: 2.5 } };
+    const o = { ...base, landmarks: narrow, mark: { x: -1, y: 1 }, panDeg: 90, tiltDeg: 40, family: "profile" };
+    expect(readCut(cut, { ...o, poolReach: 2.5 }).words).toBe("stage-left edge cut on the centre line");
+    // Without a pool size the house reach (3 m) applies, and the far wall is still not named.
+    expect(readCut(cut, o).words).toBe("stage-left edge cut on the centre line");
+    // A pool big enough to reach that corner does take the proscenium's end as the landmark.
+    expect(readCut(cut, { ...o, poolReach: 11 }).words).toBe("stage-left edge to the SL proscenium");
+  });
+
+  it("a parallel landmark counts only along its drawn length, not its endless extension", () => {
+    // plan geometry: a leg drawn from (3, 4) to (3, 6) is parallel to the cut x = 3.1 but ends 3 m upstage of
+    // the cut's foot (3.1, 1) nearest the mark (2, 1), so it is not what this cut runs along.
+    const leg = { name: "SL leg 2", a: { x: 3, y: 4 }, b: { x: 3, y: 6 } };
+    const cut = { label: "left" as const, a: { x: 3.1, y: -1 }, b: { x: 3.1, y: 3 } };
+    const o = { ...base, landmarks: [leg], mark: { x: 2, y: 1 }, panDeg: 90, tiltDeg: 40, family: "profile" };
+    expect(readCut(cut, o).words).toBe("stage-left edge cut at 3.10 m SL of CL");
+    const near = { ...leg, a: { x: 3, y: 0 }, b: { x: 3, y: 2 } };
+    expect(readCut(cut, { ...o, landmarks: [near] }).words).toBe("stage-left edge to the SL leg 2");
+  });
+
   it("a fresnel's barn door cuts its own side", () => {
     const r = readCut({ label: "top", a: { x: -3, y: -1.5 }, b: { x: 3, y: -1.5 } }, { ...base, mark: { x: 0, y: 1 }, panDeg: 90, tiltDeg: 35, family: "fresnel" });
     expect(r.cutterWords).toBe("bottom barn door");
