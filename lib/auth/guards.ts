@@ -2,7 +2,7 @@ import "server-only";
 import { AppError, forbidden } from "@/lib/errors";
 import { parseId } from "@/lib/http/respond";
 import { getCurrentUser } from "./session";
-import { can, type Member, type Permission } from "./policy";
+import { can, forbiddenFields, type Entity, type Member, type Permission } from "./policy";
 import { getMembership } from "@/lib/data/memberships";
 
 export type CurrentUser = { id: number; name: string; email: string };
@@ -13,7 +13,6 @@ export async function requireUser(): Promise<CurrentUser> {
   if (!user) throw new AppError("unauthorized", "Please sign in.");
   return user;
 }
-
 
 /**
  * The signed-in member of a production, checked against the role table. Outsiders get 404 (the
@@ -27,4 +26,19 @@ export async function requireMember(rawProductionId: string | number, permission
   const member: Member = { role: membership.role, isOwner: membership.isOwner };
   if (!can(member, permission)) throw forbidden();
   return { user, member, productionId };
+}
+
+/**
+ * Field-level rights: refuses (403) a write that touches any field this member's role may not write,
+ * naming each such field in `fieldErrors`. `fields` is the patch itself (its `version` is the lock,
+ * not a field) or the list of field names an edit will write; `message` replaces the list of names
+ * where one plain sentence says it better.
+ */
+export function requireFields(member: Member, entity: Entity, fields: object | readonly string[], message?: string): void {
+  const names = Array.isArray(fields) ? [...fields] : Object.keys(fields).filter((k) => k !== "version");
+  const denied = forbiddenFields(member, entity, names);
+  if (!denied.length) return;
+  throw new AppError("forbidden", message ?? `Your role cannot change: ${denied.join(", ")}.`, {
+    fieldErrors: Object.fromEntries(denied.map((f) => [f, ["not editable by your role"]])),
+  });
 }

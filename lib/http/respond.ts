@@ -2,6 +2,7 @@ import "server-only";
 import { NextResponse } from "next/server";
 import type { z } from "zod";
 import { AppError, fromZodError, toAppError } from "@/lib/errors";
+import { toId } from "./id";
 
 /** Wraps a route handler: its result becomes JSON, its errors a JSON error with the right status. */
 export function route<Ctx>(fn: (req: Request, ctx: Ctx) => Promise<unknown>) {
@@ -37,9 +38,9 @@ export function readQuery<S extends z.ZodType>(req: Request, schema: S): z.infer
   return parsed.data;
 }
 
-/** Parses a numeric id from a URL segment; anything else is simply not found. */
+/** Parses an id from a URL segment (see lib/http/id.ts); anything else is simply not found. */
 export function parseId(raw: string, what: string): number {
-  const id = /^\d{1,10}$/.test(raw) ? Number(raw) : NaN;
-  if (!Number.isSafeInteger(id) || id <= 0) throw new AppError("not_found", `${what} was not found.`);
+  const id = toId(raw);
+  if (id === null) throw new AppError("not_found", `${what} was not found.`);
   return id;
 }

@@ -9,5 +9,3 @@ export const metres = (min: number, max: number, what: string) =>
     .max(max, { error: `${what} must be at most ${max} m` });
 
 export const versionSchema = z.number({ error: "version is required (the version you last read)" }).int().positive();
-
-export const idSchema = z.coerce.number({ error: "must be a number" }).int().positive();

@@ -1,20 +1,16 @@
-import { route } from "@/lib/http/respond";
-import { requireMember } from "@/lib/auth/guards";
+import { collectionRoutes } from "@/lib/http/crud-routes";
 import { readUploadForm } from "@/lib/http/upload-form";
 import { createUnderlay, getUploadsByProduction } from "@/lib/data/uploads";
 import { MAX_UPLOAD_BYTES } from "@/lib/storage";
 
-type Ctx = { params: Promise<{ productionId: string }> };
-
-export const GET = route(async (_req, { params }: Ctx) => {
-  const { productionId } = await requireMember((await params).productionId);
-  return { uploads: await getUploadsByProduction({ productionId, kind: "underlay" }) };
-});
-
-/** A groundplan underlay as multipart form data: field `file`. */
-export const POST = route(async (req, { params }: Ctx) => {
-  const { productionId, user } = await requireMember((await params).productionId, "plot.edit");
+/** A groundplan underlay arrives as multipart form data with the image in the field `file`. */
+async function readUnderlay(req: Request) {
   const { file } = await readUploadForm(req, { maxBytes: MAX_UPLOAD_BYTES, what: "image", choose: "Choose an image file to upload." });
-  const bytes = new Uint8Array(await file.arrayBuffer());
-  return Response.json({ upload: await createUnderlay({ productionId, userId: user.id, fileName: file.name, bytes }) }, { status: 201 });
+  return { fileName: file.name, bytes: new Uint8Array(await file.arrayBuffer()) };
+}
+
+export const { GET, POST } = collectionRoutes({
+  key: "uploads", itemKey: "upload",
+  list: ({ productionId }) => getUploadsByProduction({ productionId, kind: "underlay" }),
+  create: { permission: "plot.edit", read: readUnderlay, run: ({ input, ...who }) => createUnderlay({ ...who, ...input }) },
 });

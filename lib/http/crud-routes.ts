@@ -1,0 +1,134 @@
+import "server-only";
+import type { z } from "zod";
+import { requireFields, requireMember } from "@/lib/auth/guards";
+import type { Entity, Permission } from "@/lib/auth/policy";
+import { notFound } from "@/lib/errors";
+import { parseId, readJson, readQuery, route } from "./respond";
+
+/**
+ * Route handlers for a production-owned entity from one declaration, the HTTP side of
+ * `productionCrud` (lib/data/production-crud.ts). Every handler checks membership and role first
+ * (outsiders 404, members without the right 403), then the id (plain digits only, else 404), then
+ * the body (400 naming each field), and only then calls the data layer.
+ *
+ *   // app/api/productions/[productionId]/focus-points/route.ts
+ *   export const { GET, POST } = collectionRoutes({
+ *     key: "focusPoints", itemKey: "focusPoint",
+ *     list: getFocusPointsByProduction,
+ *     create: { permission: "plot.edit", schema: createFocusPointSchema, run: createFocusPoint },
+ *   });
+ *
+ *   // app/api/productions/[productionId]/focus-points/[focusPointId]/route.ts
+ *   export const { PATCH, DELETE } = itemRoutes({
+ *     param: "focusPointId", what: "Focus point", key: "focusPoint",
+ *     update: { permission: "plot.edit", schema: updateFocusPointSchema, run: updateFocusPoint },
+ *     remove: { permission: "plot.edit", run: deleteFocusPoint },
+ *   });
+ *
+ * Only the methods given are returned (the types say which), so exporting one that was not
+ * declared fails the typecheck. Reads need only membership; writes need `permission`, or, with
+ * `fields: "cue"` on an update, each written field's own right from the role table
+ * (lib/auth/policy.ts), refused with a 403 whose fieldErrors name the fields. The id reaches the
+ * data layer as `id` and under the URL's name (`cueId`), so either kind of data function fits.
+ */
+
+type Ctx = { params: Promise<Record<string, string>> };
+type Handler = (req: Request, ctx: Ctx) => Promise<Response>;
+type Who = { productionId: number; userId: number };
+/** The row's id goes to the data layer both as `id` and under the URL's own name (`cueId`). */
+type Target<P extends string> = { productionId: number; id: number } & Record<P, number>;
+/** A write needs one right of the role table, or, with `fields`, each written field's own right. */
+type WriteRight = { permission: Permission; fields?: never } | { fields: Entity; permission?: never };
+
+export type ItemRouteSpec<P extends string, S extends z.ZodType, Q extends z.ZodType, G, U, R> = {
+  /** The id's folder name in the URL, without brackets: "focusPointId". */
+  param: P;
+  /** What a user calls one of them, capitalised, for "… was not found.": "Focus point". */
+  what: string;
+  /** The key the row is sent under: { focusPoint: … }. */
+  key: string;
+  /** GET (members): one row, or null for a 404. */
+  get?: (args: Target<P>) => Promise<G | null>;
+  /** PATCH: a JSON body read with `schema`, a 400 naming each bad field, before any write. */
+  update?: WriteRight & { schema: S; run: (args: Who & Target<P> & { patch: z.output<S> }) => Promise<U> };
+  /** DELETE: with `query`, the query string is read with it (e.g. the version the user last saw). */
+  remove?: { permission: Permission; query?: Q; run: (args: Who & Target<P> & { query: z.output<Q> }) => Promise<R> };
+};
+
+type Given<T, Method extends string> = [T] extends [never] ? unknown : { [M in Method]: Handler };
+
+export function itemRoutes<P extends string, S extends z.ZodType = never, Q extends z.ZodType = never, G = never, U = never, R = never>(
+  spec: ItemRouteSpec<P, S, Q, G, U, R>,
+): Given<G, "GET"> & Given<U, "PATCH"> & Given<R, "DELETE"> {
+  async function target(ctx: Ctx, permission: Permission) {
+    const params = await ctx.params;
+    const { user, member, productionId } = await requireMember(params.productionId, permission);
+    const id = parseId(params[spec.param] ?? "", spec.what);
+    return { user, member, target: { productionId, id, [spec.param]: id } as Target<P> };
+  }
+  const handlers: Partial<Record<"GET" | "PATCH" | "DELETE", Handler>> = {};
+  const { get, update, remove } = spec;
+  if (get) {
+    handlers.GET = route(async (_req, ctx: Ctx) => {
+      const row = await get((await target(ctx, "production.view")).target);
+      if (row === null || row === undefined) throw notFound(spec.what);
+      return { [spec.key]: row };
+    });
+  }
+  if (update) {
+    handlers.PATCH = route(async (req, ctx: Ctx) => {
+      const { user, member, target: t } = await target(ctx, update.permission ?? "production.view");
+      const patch = await readJson(req, update.schema);
+      if (update.fields) requireFields(member, update.fields, patch as object);
+      return { [spec.key]: await update.run({ ...t, userId: user.id, patch }) };
+    });
+  }
+  if (remove) {
+    handlers.DELETE = route(async (req, ctx: Ctx) => {
+      const { user, target: t } = await target(ctx, remove.permission);
+      const query = (remove.query ? readQuery(req, remove.query) : undefined) as z.output<Q>;
+      await remove.run({ ...t, userId: user.id, query });
+      return { ok: true };
+    });
+  }
+  return handlers as Given<G, "GET"> & Given<U, "PATCH"> & Given<R, "DELETE">;
+}
+
+export type CollectionRouteSpec<S extends z.ZodType, I, L, C> = {
+  /** The key the list is sent under: { focusPoints: [...] }. */
+  key: string;
+  /** The key a created row is sent under: { focusPoint: … }. */
+  itemKey: string;
+  /** GET (members): every row of the production, in the entity's order. */
+  list?: (args: { productionId: number }) => Promise<L>;
+  /**
+   * POST (201): a JSON body read with `schema`, or, for a body that is not JSON (a file upload), the
+   * input `read` returns; either way the whole input is checked before `run` writes anything.
+   */
+  create?: ({ schema: S; read?: never } | { read: (req: Request) => Promise<I>; schema?: never }) & {
+    permission: Permission;
+    run: (args: Who & { input: [S] extends [never] ? I : z.output<S> }) => Promise<C>;
+  };
+};
+
+export function collectionRoutes<S extends z.ZodType = never, I = never, L = never, C = never>(
+  spec: CollectionRouteSpec<S, I, L, C>,
+): Given<L, "GET"> & Given<C, "POST"> {
+  const handlers: Partial<Record<"GET" | "POST", Handler>> = {};
+  const { list, create } = spec;
+  if (list) {
+    handlers.GET = route(async (_req, ctx: Ctx) => {
+      const { productionId } = await requireMember((await ctx.params).productionId);
+      return { [spec.key]: await list({ productionId }) };
+    });
+  }
+  if (create) {
+    handlers.POST = route(async (req, ctx: Ctx) => {
+      const { productionId, user } = await requireMember((await ctx.params).productionId, create.permission);
+      const input = create.schema ? await readJson(req, create.schema) : await create.read!(req);
+      const row = await create.run({ productionId, userId: user.id, input: input as never });
+      return Response.json({ [spec.itemKey]: row }, { status: 201 });
+    });
+  }
+  return handlers as Given<L, "GET"> & Given<C, "POST">;
+}
