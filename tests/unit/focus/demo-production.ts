@@ -2,10 +2,11 @@
 // stand-in for sequelize-cli's queryInterface that keeps the inserted rows and answers its few SELECTs.
 import { createRequire } from "node:module";
 import path from "node:path";
-import type { FixtureDto } from "@/lib/data/fixtures";
-import type { ChartProduction } from "@/lib/focus/chart-model";
+import type { ChartProduction, FocusChart } from "@/lib/focus/chart-model";
 import { computeFixtureGeometry } from "@/lib/rig/fixture-geometry";
 
+// The chart's own fixture type, so this file follows wherever the DTO type lives.
+type FixtureDto = FocusChart["fixture"];
 type Row = Record<string, unknown> & { id: number };
 export type DemoTables = Record<string, Row[]>;
 
