@@ -4,11 +4,11 @@ import type { FixtureDto } from "@/lib/data/fixtures";
 import {
   describeBeam, describePoint, edgeWord, formatLength, profileShapeOf, type Family, type PlanePool, type Point, type Units,
 } from "@/lib/optics";
-import { mergeLandmarks, outlineLandmarks, type Landmark, type StageOutline } from "./landmarks";
+import { mergeLandmarks, outlineLandmarks, type Landmark, type StageDimensions } from "./landmarks";
 import { readCut, type CutReading } from "./shutters";
 import { barnDoorWords, formatStamp, goboRotationWords, offsetFromMark } from "./words";
 
-export type ChartProduction = StageOutline & { name: string; displayUnits: Units; headHeight: number };
+export type ChartProduction = StageDimensions & { name: string; displayUnits: Units; headHeight: number };
 /** Fields the data model may not hold yet (accessories come with the rig work); shown as "none recorded". */
 export type ChartExtras = { accessories?: string[]; barnDoors?: string | null; goboOrientation?: string | null };
 

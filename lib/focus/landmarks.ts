@@ -1,6 +1,6 @@
 // Named lines on the stage that shutter cuts are worded against ("off the lip", "to the leg").
-// The plot (issue 4) may store its own landmarks; until then, and in addition, the production's stage
-// outline gives the lines every venue has. Both arrive in the same plain shape.
+// Landmarks drawn on the plot are stored with the production; in addition, the production's stage
+// dimensions give the lines every venue has. Both arrive in the same plain shape.
 import type { Point } from "@/lib/optics";
 import { withArticle } from "@/lib/optics/beam-words";
 
@@ -9,7 +9,8 @@ export { withArticle };
 
 export type Landmark = { name: string; a: Point; b: Point };
 
-export type StageOutline = {
+/** The production's stage dimensions (plan metres) that the standard lines are derived from. */
+export type StageDimensions = {
   datumName: string;
   prosceniumWidth: number;
   apronDepth: number;
@@ -18,7 +19,7 @@ export type StageOutline = {
 };
 
 /** Lines derived from the stage outline: datum, lip, proscenium walls, centre line, back wall. */
-export function outlineLandmarks(s: StageOutline): Landmark[] {
+export function outlineLandmarks(s: StageDimensions): Landmark[] {
   const half = s.prosceniumWidth / 2;
   const wide = Math.max(s.stageWidth, s.prosceniumWidth) / 2;
   return [
