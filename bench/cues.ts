@@ -1,4 +1,4 @@
-// Benchmark for the cues (issue 7): the tracked state of every cue in a large show, the cue sheet
+// Benchmark for the cues: the tracked state of every cue in a large show, the cue sheet
 // (summaries, running times with parts, links, standbys), and the summary route's work from the
 // database and over HTTP.
 // Run: `npm run bench:cues`. Nothing needs setting: without DATABASE_URL a throwaway MariaDB is

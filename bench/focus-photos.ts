@@ -1,4 +1,4 @@
-// Benchmark for focus photos (issue 6): what a deck photo costs on upload (checking, turning upright and
+// Benchmark for focus photos: what a deck photo costs on upload (checking, turning upright and
 // shrinking a 12-megapixel camera JPEG with sharp) and what the photos add to the focus-chart PDF (the
 // same chart model → sheets → Chromium path as the PDF route, with and without a small copy on every chart).
 // Run with `npm run bench:focus-photos [charts]` (default 100 charts; the machine is shared, so say the load).

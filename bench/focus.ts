@@ -1,4 +1,4 @@
-// Benchmark for focus-chart PDFs (issue 6): N charts at 4 a page through the same code as the PDF route
+// Benchmark for focus-chart PDFs: N charts at 4 a page through the same code as the PDF route
 // (chart model → sheets → Debian's headless Chromium → page.pdf). Reports wall time, pages, PDF size, the
 // peak resident memory of Node and of the browser's process tree, and the CPU seconds both spent (sampled
 // from /proc every 300 ms; CPU time varies far less than wall time on a shared machine).

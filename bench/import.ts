@@ -1,4 +1,4 @@
-// Benchmark for rig import and export (issue 5). Uses DATABASE_URL when set; otherwise it starts a
+// Benchmark for rig import and export. Uses DATABASE_URL when set; otherwise it starts a
 // throwaway MariaDB (scripts/lib/mariadb.mjs), migrates and seeds it, and removes it afterwards. For 100, 1,500 and 5,000 rows: the full import (parse, map,
 // validate with zod, plan, one-transaction write with change records) from .csv and from .xlsx, against
 // a raw batched INSERT of the same fixture rows through the mariadb driver; and export to .xlsx.

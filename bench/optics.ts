@@ -1,4 +1,4 @@
-// Benchmark for lib/optics (issue 3): pool geometry throughput and the coverage grid, culled and not.
+// Benchmark for lib/optics: pool geometry throughput and the coverage grid, culled and not.
 // Run with `npm run bench:optics`; figures go to docs/benchmarks.md under "Optics".
 import os from "node:os";
 import { performance } from "node:perf_hooks";

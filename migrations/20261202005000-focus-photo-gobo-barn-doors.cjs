@@ -1,5 +1,5 @@
 "use strict";
-// Focus charts, remaining fields of issue 6: an optional focus photo taken on the deck (an upload of its
+// Focus charts, remaining fields: an optional focus photo taken on the deck (an upload of its
 // own kind, linked from the fixture), the gobo's rotation in degrees, and the barn doors as focused —
 // one short note a leaf (top, bottom, left, right as seen from behind the fixture), e.g. "in halfway".
 

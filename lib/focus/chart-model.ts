@@ -9,7 +9,7 @@ import { readCut, type CutReading } from "./shutters";
 import { barnDoorWords, formatStamp, goboRotationWords, offsetFromMark } from "./words";
 
 export type ChartProduction = StageDimensions & { name: string; displayUnits: Units; headHeight: number };
-/** Fields the data model may not hold yet (accessories come with the rig work); shown as "none recorded". */
+/** What a unit's accessories add to its chart (their names, a barn-door or gobo note) where its own fields are empty. */
 export type ChartExtras = { accessories?: string[]; barnDoors?: string | null; goboOrientation?: string | null };
 
 export type ChartRow = { key: string; label: string; value: string };

@@ -96,7 +96,7 @@ type Column = { key: ImportKey; index: number; header: string; check: (text: str
 
 // Each column's zod schema is built once; a cell's result depends only on its text, so results are
 // remembered per column. Real rigs repeat positions, types, colours and yes/no on every row, so most
-// cells are checked once per distinct text (the speed goal of issue 5) with the very same rules.
+// cells are checked once per distinct text (the import's speed goal) with the very same rules.
 const MEMO_LIMIT = 20_000;
 function columnChecker(schema: z.ZodType<unknown, string>): (text: string) => CellResult {
   const memo = new Map<string, CellResult>();

@@ -1,4 +1,4 @@
-// Focus photos (issue 6) through the real route handlers: accepted and refused files, roles, versions,
+// Focus photos through the real route handlers: accepted and refused files, roles, versions,
 // and the gobo-rotation and barn-door fields' validation.
 import { describe, expect, it } from "vitest";
 import sharp from "sharp";

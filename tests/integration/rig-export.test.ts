@@ -32,7 +32,7 @@ describe("round trip", () => {
         expect(file.status).toBe(200);
         const p = await upload(s, id, { name: `rig.${format}`, body: file.bytes }, { mode: "preview" });
         expect(p.json.preview).toMatchObject({ errorCount: 0, counts: { create: 0, update: 0, unchanged: 3 } });
-        expect(p.json.preview.mapping.filter((m: string) => m !== "ignore")).toHaveLength(34); // 29 stored fields before issue 6's gobo rotation and four barn-door leaves
+        expect(p.json.preview.mapping.filter((m: string) => m !== "ignore")).toHaveLength(34); // 29 fields, gobo rotation and four barn-door leaves
         const c = await upload(s, id, { name: `rig.${format}`, body: file.bytes }, { mode: "commit" });
         expect(c.status).toBe(200);
         expect(await fixturesOf(s, id)).toEqual(before);

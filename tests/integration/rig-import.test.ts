@@ -1,4 +1,4 @@
-// The import matrix of issue 5 against the real MariaDB, through the route handler.
+// The import matrix against the real MariaDB, through the route handler.
 import { describe, expect, it } from "vitest";
 import { ApiSession, demoProductionId, freshUser } from "./support/api";
 import { fixturesOf, rigProduction, upload, xlsxBytes } from "./rig-upload";

@@ -56,7 +56,7 @@ describe("field-level rules for fixtures", () => {
       expect(forbiddenFields(m, "fixture", [...designerFields, ...electricsFields])).toHaveLength(designerFields.length + electricsFields.length);
     }
   });
-  // Issue 6: the gobo's orientation is part of the design (like the gobo); barn doors as focused and the
+  // The gobo's orientation is part of the design (like the gobo); barn doors as focused and the
   // focus photo are the crew's record of the focus call (like the as-focused notes).
   it("gobo rotation is the designer's; barn doors and the focus photo are the crew's and the designer's", () => {
     const crew = ["barnDoorTop", "barnDoorBottom", "barnDoorLeft", "barnDoorRight", "focusPhotoUploadId"];

@@ -7,7 +7,7 @@ const none = { cableKgPerM: 0, hardwareKgPerUnit: 0 };
 
 describe("rated load", () => {
   it("a batten at 79 % is fine, at 80 % warned, at 101 % flagged", () => {
-    // Thresholds of issue 15 (warn from 80 %, flag over 100 %; common practice, no source)
+    // Thresholds (warn from 80 %, flag over 100 %; common practice, no source)
     expect(loadStatus(79, 100)).toBe("ok");
     expect(loadStatus(80, 100)).toBe("near");
     expect(loadStatus(100, 100)).toBe("near");

@@ -1,4 +1,4 @@
-// The chart's wording of a gobo's rotation and of barn doors as focused (issue 6), from the fixture's own
+// The chart's wording of a gobo's rotation and of barn doors as focused, from the fixture's own
 // fields, and the focus photo's place on the chart.
 import { describe, expect, it } from "vitest";
 import { buildFocusChart } from "@/lib/focus/chart-model";

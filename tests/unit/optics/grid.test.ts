@@ -30,14 +30,14 @@ const bounds = { minX: -8, minY: -6, maxX: 8, maxY: 6 };
 
 describe("illuminance grid", () => {
   it("has 160 × 120 cells for 16 m × 12 m at 0.1 m", () => {
-    // issue 3: ≈19,000 points for the benchmark stage (cell centres)
+    // the benchmark stage's size: ≈19,000 points (cell centres)
     const g = illuminanceGrid({ bounds, resolution: 0.1, planeZ: 0, beams: [] });
     expect([g.cols, g.rows, g.values.length]).toEqual([160, 120, 19_200]);
     expect(gridPoint(g, 0, 0)).toEqual({ x: -7.95, y: -5.95 });
   });
 
   it("culling gives the same grid as no culling, with fewer evaluations", () => {
-    // issue 3: bounding-box culling must not change the result (float32 precision)
+    // house rule: bounding-box culling must not change the result (float32 precision)
     const beams = rig(60, 7);
     const culled = illuminanceGrid({ bounds, resolution: 0.1, planeZ: 0, beams });
     const full = illuminanceGrid({ bounds, resolution: 0.1, planeZ: 0, beams, cull: false });
@@ -81,7 +81,7 @@ describe("illuminance grid", () => {
   });
 
   it("rejects a zero resolution or an empty area", () => {
-    // issue 3: readable RangeError for invalid input
+    // house rule: readable RangeError for invalid input
     expect(() => illuminanceGrid({ bounds, resolution: 0, planeZ: 0, beams: [] })).toThrow(/resolution/);
     expect(() => illuminanceGrid({ bounds: { ...bounds, maxX: -8 }, resolution: 0.1, planeZ: 0, beams: [] })).toThrow(/empty/);
   });
@@ -89,7 +89,7 @@ describe("illuminance grid", () => {
 
 describe("culling is exact for any beam", () => {
   it("culled and unculled grids match for random beams, including open pools and upward spill", () => {
-    // issue 3: culling must not change the grid (float32 precision)
+    // house rule: culling must not change the grid (float32 precision)
     const coord = fc.double({ min: -12, max: 12, noNaN: true });
     fc.assert(
       fc.property(
@@ -126,7 +126,7 @@ describe("zone statistics", () => {
   });
 
   it("counts only cells whose centres are in the polygon", () => {
-    // issue 3: statistics for any polygon zone
+    // house rule: statistics for any polygon zone
     const bottomRow = [{ x: 0, y: 0 }, { x: 2, y: 0 }, { x: 2, y: 1 }, { x: 0, y: 1 }];
     expect(zoneStats(cells, bottomRow)).toEqual({ count: 2, min: 100, mean: 150, max: 200, uniformity: 100 / 150, diversity: 0.5 });
     const none = zoneStats(cells, [{ x: 5, y: 5 }, { x: 6, y: 5 }, { x: 6, y: 6 }]);

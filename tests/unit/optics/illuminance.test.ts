@@ -116,14 +116,14 @@ describe("intensity profiles", () => {
   });
 
   it("a datasheet with a beam under half the field is flagged; a wider beam than field is rejected", () => {
-    // DESIGN.md: softness above half the cone is clamped (issue 3: clamp or report)
+    // DESIGN.md: softness above half the cone is clamped (house rule: clamp or report)
     expect(fromDatasheet({ beamDeg: 10, fieldDeg: 40 }).warning).toMatch(/20° beam/);
     expect(() => fromDatasheet({ beamDeg: 50, fieldDeg: 40 })).toThrow(RangeError);
     expect(() => fromDatasheet({ beamDeg: 0, fieldDeg: 40 })).toThrow(RangeError);
   });
 
   it("lists every family with a plain label", () => {
-    // issue 3: Family union and FIXTURE_FAMILIES list
+    // house rule: Family union and FIXTURE_FAMILIES list
     expect(FIXTURE_FAMILIES.map((f) => f.value).sort()).toEqual(
       ["cyc", "followspot", "fresnel", "led-wash", "par", "profile", "wash"],
     );

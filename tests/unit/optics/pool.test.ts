@@ -155,12 +155,12 @@ describe("edge cases", () => {
   });
 
   it.each([0, -5, 180, 200, Number.NaN, Number.POSITIVE_INFINITY])("rejects a cone of %f°", (cone) => {
-    // issue 3: cone must be > 0 and < 180
+    // house rule: cone must be > 0 and < 180
     expect(() => poolAtPlane({ ...aimed(6, 20), coneDeg: cone, softnessDeg: 0, planeZ: 0 })).toThrow(RangeError);
   });
 
   it("rejects negative softness and non-finite positions", () => {
-    // issue 3: softness ≥ 0; never NaN in output
+    // house rule: softness ≥ 0; never NaN in output
     expect(() => poolAtPlane({ ...aimed(6, 20), coneDeg: 20, softnessDeg: -1, planeZ: 0 })).toThrow(/softness/);
     const nan = { x: Number.NaN, y: 0, z: 6 };
     expect(() => poolAtPlane({ source: nan, focus: { x: 0, y: 0, z: 0 }, coneDeg: 20, softnessDeg: 1, planeZ: 0 }))

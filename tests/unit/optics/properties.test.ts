@@ -1,4 +1,4 @@
-// Property tests (fast-check) for the invariants issue 3 lists.
+// Property tests (fast-check) for the beam model's invariants.
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import {
@@ -73,7 +73,7 @@ describe("pool invariants", () => {
   });
 
   it("never puts NaN or Infinity in a pool, an illuminance or a shadow", () => {
-    // issue 3: never NaN/Infinity in output
+    // house rule: never NaN/Infinity in output
     const coord = fc.double({ min: -50, max: 50, noNaN: true });
     const point = fc.record({ x: coord, y: coord, z: coord });
     fc.assert(

@@ -115,7 +115,7 @@ describe("shadowOf", () => {
   });
 
   it("reports no shadow from a lens inside the occluder, and rejects bad input", () => {
-    // DESIGN.md: lands "none"; issue 3: RangeError with a readable message for invalid input
+    // DESIGN.md: lands "none"; house rule: RangeError with a readable message for invalid input
     expect(shadowOf({ ...front, source: { x: 0.1, y: 0, z: 1 } }).lands).toBe("none");
     expect(() => shadowOf({ ...front, apertureDiameter: -0.1 })).toThrow(/aperture/);
     expect(() => shadowOf({ ...front, occluder: { ...performer, height: 0 } })).toThrow(/height/);

@@ -61,7 +61,7 @@ describe("parseLength", () => {
   it.each(["abc", "", "   ", "3..2", `10' 13"`, `1/0"`, "5 furlongs", "3 m m", `10.5' 6"`, `6 3/2"`, "-", "1e3"])(
     "rejects %j with a RangeError that quotes the text",
     (text) => {
-      // issue 3: invalid text gets a clear error, not a silent 0
+      // house rule: invalid text gets a clear error, not a silent 0
       expect(() => parseLength(text, "m")).toThrow(RangeError);
       expect(() => parseLength(text, "m")).toThrow(`"${text}"`);
     },
@@ -96,7 +96,7 @@ describe("formatLength", () => {
 
 describe("angles and illuminance text", () => {
   it("parses degrees", () => {
-    // issue 3: angles in degrees
+    // DESIGN.md: angles in degrees at the API boundary
     expect(parseAngle("25")).toBe(25);
     expect(parseAngle("25°")).toBe(25);
     expect(parseAngle(" 12.5 deg")).toBe(12.5);

@@ -21,7 +21,7 @@ describe("describePoint", () => {
   });
 
   it("says 'on' when the value shows as zero", () => {
-    // issue 3: on the line say "on CL"; the datum always with its article (DESIGN.md's example)
+    // house rule: on the line say "on CL"; the datum always with its article (DESIGN.md's example)
     expect(describePoint({ x: 0.004, y: 0 }, { units: "metric", datumName: "setting line" }))
       .toBe("on CL, on the setting line");
     expect(describePoint({ x: 0.006, y: 0 }, { units: "metric" })).toBe("0.01 m SL of CL, on the setting line");
