@@ -14,8 +14,9 @@ const METRIC: Record<string, number> = {
   cm: 0.01, centimetre: 0.01, centimetres: 0.01, centimeter: 0.01, centimeters: 0.01,
   mm: 0.001, millimetre: 0.001, millimetres: 0.001, millimeter: 0.001, millimeters: 0.001,
 };
-// Inches: a whole or decimal number, optionally with a fraction ("6 1/2"), or a fraction alone ("1/2").
-const INCHES = String.raw`(?:${NUM}(?:\s+(\d+)\/(\d+))?|(\d+)\/(\d+))`;
+// Inches: a whole or decimal number, optionally with a fraction ("6 1/2", or "6-1/2" as paperwork often
+// writes it), or a fraction alone ("1/2").
+const INCHES = String.raw`(?:${NUM}(?:(?:\s+|\s*-\s*)(\d+)\/(\d+))?|(\d+)\/(\d+))`;
 const RE_PLAIN = new RegExp(String.raw`^${NUM}$`);
 const RE_METRIC = new RegExp(String.raw`^${NUM}\s*([a-z]+)$`);
 const RE_FEET = new RegExp(String.raw`^${NUM}\s*${FEET}$`);
@@ -33,6 +34,8 @@ function inchesOf(text: string, g: (string | undefined)[]): number {
   const [whole, n, d, fn, fd] = g;
   if (fn !== undefined && fd !== undefined) {
     if (Number(fd) === 0) fail(text, `the fraction ${fn}/${fd} divides by zero`);
+    // 3/2" is most likely a slip for 1 1/2" or 3 1/2": refuse it rather than guess, as in a mixed number.
+    if (Number(fn) >= Number(fd)) fail(text, `the fraction ${fn}/${fd} of an inch must be less than one (write 1 1/2", not 3/2")`);
     return Number(fn) / Number(fd);
   }
   let v = Number(whole);

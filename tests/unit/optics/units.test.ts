@@ -53,6 +53,10 @@ describe("parseLength", () => {
     [`-10' 6 1/2"`, "m", -add(unit(10, "ft"), unit(6.5, "inch")).toNumber("m")],
     ["  3.2 M ", "m", 3.2],
     ["10′ 6″", "m", add(unit(10, "ft"), unit(6, "inch")).toNumber("m")],
+    // A dash before the fraction, as paperwork often writes it (common practice, no source)
+    [`6'-3-1/2"`, "m", add(unit(6, "ft"), unit(3.5, "inch")).toNumber("m")],
+    [`6' 3-1/2"`, "m", add(unit(6, "ft"), unit(3.5, "inch")).toNumber("m")],
+    [`3-1/2"`, "m", m(3.5, "inch")],
   ];
   it.each(cases)("reads %s (bare numbers in %s)", (text, def, metres) => {
     expect(Math.abs(parseLength(text, def) - metres)).toBeLessThanOrEqual(1e-12 * Math.max(1, Math.abs(metres)));
@@ -66,6 +70,17 @@ describe("parseLength", () => {
       expect(() => parseLength(text, "m")).toThrow(`"${text}"`);
     },
   );
+
+  it("refuses an improper fraction of an inch with the same clear message, with or without feet", () => {
+    // common practice, no source: a fraction of an inch is written proper (1 1/2", not 3/2")
+    for (const text of [`6' 3/2"`, `10' 6 3/2"`, `3/2"`, `6'-3-3/2"`]) {
+      expect(() => parseLength(text, "m")).toThrow(RangeError);
+      expect(() => parseLength(text, "m")).toThrow(`"${text}"`);
+      expect(() => parseLength(text, "m")).toThrow(/must be less than one/);
+    }
+    // A proper fraction after feet still reads: 6' 1/2" = 72.5 in (NIST SP 811: 1 in = 25.4 mm)
+    expect(parseLength(`6' 1/2"`, "m")).toBeCloseTo(72.5 * 0.0254, 12);
+  });
 
   it("explains the 12-inch rule and the empty case", () => {
     // common practice, no source: inches after feet run 0–11

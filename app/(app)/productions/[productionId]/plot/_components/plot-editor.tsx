@@ -7,9 +7,10 @@ import type { ProductionDto } from "@/lib/data/productions";
 import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import type { NumberingDirection } from "@/lib/plot/along-position";
 import { screenToPlan } from "@/lib/plot/view";
-import { LAYERS, type CanvasHandle, type LayerVisibility, type Selection, type Tool } from "./canvas-types";
+import { EMPTY_SELECTION, LAYERS, type CanvasHandle, type LayerVisibility, type Selection, type Tool } from "./canvas-types";
 import { useCommands } from "./use-commands";
-import { useCanvasEvents, placeFixture, type Draft } from "./use-plot-events";
+import { useCanvasEvents, type Draft } from "./use-plot-events";
+import { placeFixture } from "./plot-commands";
 import { usePlotKeys } from "./use-plot-keys";
 import { Toolbar } from "./toolbar";
 import { TypeShelf } from "./type-shelf";
@@ -22,7 +23,6 @@ if (typeof window !== "undefined") void loadCanvas();
 const PlotCanvas = dynamic(loadCanvas, { ssr: false, loading: () => <p className="p-4 text-sm text-muted">Drawing the plot…</p> });
 
 const ALL_ON = Object.fromEntries(LAYERS.map((l) => [l, true])) as LayerVisibility;
-const NONE: Selection = { fixtures: new Set(), positionId: null, focusPointId: null };
 
 export function PlotEditor({ production, initial, canEdit }: { production: ProductionDto; initial: PlotWirePayload; canEdit: boolean }) {
   const [dragging, setDragging] = useState(false);
@@ -30,7 +30,7 @@ export function PlotEditor({ production, initial, canEdit }: { production: Produ
   const cmd = useCommands(production.id);
   const [tool, setTool] = useState<Tool>("select");
   const [layers, setLayers] = useState<LayerVisibility>(ALL_ON);
-  const [selection, setSelection] = useState<Selection>(NONE);
+  const [selection, setSelection] = useState<Selection>(EMPTY_SELECTION);
   const [draft, setDraft] = useState<Draft>(null);
   const [preview, setPreviewState] = useState<PlotFixture | null>(null);
   const [armedTypeId, setArmedTypeId] = useState<number | null>(null);
