@@ -1,7 +1,7 @@
 // Canvas drawing of the rig: pools (outer, 50 % and core, with the soft band shaded and shutter cuts
 // clipping them), fixture symbols of Throwline's own design, focus marks and named focus points.
 import { clipPoolByCuts, ellipseToPolygon, type Ellipse, type PlanePool, type Point } from "@/lib/optics";
-import { symbolOutline, symbolPixels, labelsFit, type SymbolShape } from "@/lib/plot/symbol";
+import { symbolOutline, symbolPixels, symbolScreenPoint, labelsFit, type SymbolShape } from "@/lib/plot/symbol";
 import { planToScreen, type Bounds, type View } from "@/lib/plot/view";
 import type { PlotPalette } from "./palette";
 import type { Ctx } from "./draw-stage";
@@ -20,13 +20,6 @@ export type RigItem = {
   /** Units sharing one plan point (a boom) are fanned out on screen: index and direction (±1 in x). */
   stack: { index: number; dir: number };
 };
-
-/** Where a fixture's symbol is drawn on screen (its plan point plus the fan-out of a boom). */
-export function symbolScreenPoint(v: View, f: Pick<RigItem, "x" | "y" | "stack">): Point {
-  const s = planToScreen(v, f);
-  const px = symbolPixels(v.scale);
-  return { x: s.x + f.stack.dir * f.stack.index * px * 1.15, y: s.y };
-}
 
 function ellipsePath(ctx: Ctx, v: View, e: Ellipse) {
   const c = planToScreen(v, e.centre);

@@ -1,5 +1,7 @@
 // Throwline's own fixture symbol, described as data so the canvas and the printed plan agree:
 // a body shape by family, a nose showing the beam direction, the channel in a tag.
+import type { Point } from "@/lib/optics";
+import { planToScreen, type View } from "./view";
 export type SymbolShape = "lozenge" | "round" | "square" | "hexagon" | "wide" | "diamond";
 
 const SHAPES: Record<string, SymbolShape> = {
@@ -19,6 +21,13 @@ export function symbolShape(family: string): SymbolShape {
 /** Symbol size in pixels: the real-world size (≈ 0.45 m) when zoomed in, never smaller than readable. */
 export function symbolPixels(pxPerMetre: number, minPx = 14, maxPx = 64): number {
   return Math.min(maxPx, Math.max(minPx, 0.45 * pxPerMetre));
+}
+
+/** Where a unit's symbol is drawn on screen: its plan point plus the fan-out of a boom (±x, by stack index). */
+export function symbolScreenPoint(v: View, f: { x: number; y: number; stack: { index: number; dir: number } }): Point {
+  const s = planToScreen(v, f);
+  const px = symbolPixels(v.scale);
+  return { x: s.x + f.stack.dir * f.stack.index * px * 1.15, y: s.y };
 }
 
 /** Whether labels (channel numbers) fit inside the symbols at this zoom. */

@@ -54,3 +54,20 @@ export function wheelZoomFactor(deltaY: number, ctrlKey: boolean): number {
   const k = ctrlKey ? 0.01 : 0.0015;
   return Math.exp(-deltaY * k);
 }
+
+/**
+ * One step of a two-finger pinch: the plan point under the fingers' old midpoint moves to their new
+ * midpoint (the plan follows the hand), and the scale changes by how far the fingers spread.
+ */
+export function pinchStep(v: View, before: readonly [Point, Point], after: readonly [Point, Point]): View {
+  const m0 = midpoint(before[0], before[1]);
+  const m1 = midpoint(after[0], after[1]);
+  const d0 = Math.hypot(before[1].x - before[0].x, before[1].y - before[0].y);
+  const d1 = Math.hypot(after[1].x - after[0].x, after[1].y - after[0].y);
+  const factor = d0 > 0 && d1 > 0 ? d1 / d0 : 1; // fingers on one pixel: follow the hand, keep the scale
+  return zoomAbout(panBy(v, m1.x - m0.x, m1.y - m0.y), m1, factor);
+}
+
+function midpoint(a: Point, b: Point): Point {
+  return { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 };
+}

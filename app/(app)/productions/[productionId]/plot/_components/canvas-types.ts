@@ -1,6 +1,9 @@
 import type { Point } from "@/lib/optics";
 import type { View } from "@/lib/plot/view";
 import type { PlotFixture } from "@/lib/plot/slim-fixtures";
+import type { VertexTarget } from "@/lib/plot/pick-target";
+
+export type { VertexTarget };
 
 export type Tool = "select" | "position-line" | "position-point" | "area" | "landmark" | "cut" | "calibrate" | "align" | "place" | "underlay";
 
@@ -9,6 +12,9 @@ export type LayerName = (typeof LAYERS)[number];
 export type LayerVisibility = Record<LayerName, boolean>;
 
 export type Selection = { fixtures: ReadonlySet<number>; positionId: number | null; focusPointId: number | null };
+
+/** Nothing selected. One shared value: a selection is always replaced, never changed in place. */
+export const EMPTY_SELECTION: Selection = Object.freeze({ fixtures: new Set<number>(), positionId: null, focusPointId: null });
 
 /** What the canvas asks the editor to do; the editor owns saving, undo and messages. */
 export type CanvasEvents = {
@@ -24,9 +30,6 @@ export type CanvasEvents = {
   place(at: Point): void;
 };
 
-/** One editable point of the plan: an acting area's corner or a landmark line's end (0 or 1). */
-export type VertexTarget = { kind: "area" | "landmark"; id: number; index: number; points: Point[] };
-
 /** Imperative handle for the toolbar. */
 export type CanvasHandle = {
   fit(): void;
@@ -35,9 +38,8 @@ export type CanvasHandle = {
   view(): View;
 };
 
-/** Mutable state of a gesture in progress (kept out of React so a drag never re-renders the page). */
+/** Mutable state of a tool's drag in progress (kept out of React so a drag never re-renders the page). Panning is the view's, not a gesture. */
 export type Gesture =
-  | { kind: "pan"; last: Point }
   | { kind: "box"; from: Point; to: Point }
   | { kind: "mark"; fixture: PlotFixture; to: Point }
   | { kind: "fixture"; fixture: PlotFixture; to: Point }

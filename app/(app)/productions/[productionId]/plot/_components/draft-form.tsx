@@ -5,7 +5,8 @@ import { formatLength, parseLength } from "@/lib/optics";
 import { calibrate } from "@/lib/plot/underlay";
 import { POSITION_KINDS, POSITION_KIND_LABELS, POINT_HUNG_KINDS, type PositionKind } from "@/lib/rig/position-kinds";
 import { PanelSection } from "./panel-field";
-import type { PanelProps } from "./side-panel";
+import { EMPTY_SELECTION } from "./canvas-types";
+import type { PanelProps } from "./panel-props";
 
 const round = (n: number) => Math.round(n * 1000) / 1000;
 
@@ -38,7 +39,7 @@ export function DraftForm(p: PanelProps) {
         const r = await p.cmd.run("Add the position", () => p.cmd.actions.createPosition({ name, kind, x1: round(a.x), y1: round(a.y), ...ends, trimHeight: parseLength(trim, unit), ratedLoadKg: rated }));
         if (r) {
           p.cmd.remember(`Add ${r.name}`, () => p.cmd.run("Undo add position", () => p.cmd.actions.deletePosition(r.id)).then(() => undefined));
-          p.setSelection({ fixtures: new Set(), positionId: r.id, focusPointId: null });
+          p.setSelection({ ...EMPTY_SELECTION, positionId: r.id });
         }
       } else if (d.kind === "area") {
         await p.cmd.run("Add the acting area", () => p.cmd.actions.createAreaZone({ name, polygon: d.points.map((q) => ({ x: round(q.x), y: round(q.y) })) }));

@@ -6,7 +6,7 @@ import { markForThrow } from "@/lib/plot/throw-to-mark";
 import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import { BeamNumbers } from "./beam-numbers";
 import { PanelField, PanelSection } from "./panel-field";
-import type { PanelProps } from "./side-panel";
+import type { PanelProps } from "./panel-props";
 
 const numberOrNull = (text: string, what: string, opts: { int?: boolean } = {}): number | null => {
   if (text === "") return null;

@@ -13,23 +13,12 @@ import { LayerSnapshot } from "@/components/plot/snapshot";
 import { drawOverlay } from "./draw-overlay";
 import { stageBounds, stageOutline, extendBounds } from "@/lib/plot/stage-outline";
 import { fitBounds, visiblePlanBounds, zoomAbout, type View } from "@/lib/plot/view";
-import type { ProductionDto } from "@/lib/data/productions";
+import { useViewNavigation } from "@/components/plot/use-view-navigation";
 import type { PlotFixture } from "@/lib/plot/slim-fixtures";
-import type { PlotPayload } from "@/hooks/use-plot";
 import { buildRigItems, toRigItem } from "./rig-items";
 import { useCanvasGestures } from "./use-canvas-gestures";
-import type { CanvasEvents, CanvasHandle, Gesture, LayerVisibility, Selection, Tool } from "./canvas-types";
-
-export type PlotCanvasProps = {
-  data: PlotPayload;
-  production: ProductionDto;
-  layers: LayerVisibility;
-  selection: Selection;
-  tool: Tool;
-  canEdit: boolean;
-  events: CanvasEvents;
-  handleRef: React.RefObject<CanvasHandle | null>;
-};
+import type { Gesture } from "./canvas-types";
+import type { PlotCanvasProps } from "./plot-canvas-props";
 
 // Memoised: the side panel follows a drag once a frame through the editor's state; the canvas draws
 // the drag itself from refs, so those re-renders must not reach it (and its 1,500-unit props).
@@ -53,8 +42,6 @@ function PlotCanvas(props: PlotCanvasProps) {
   const drawnOnce = useRef(false);
   // Bitmaps of the costly layers, reused while the view moves (components/plot/snapshot.ts).
   const snaps = useRef({ washes: new LayerSnapshot(0.5), edges: new LayerSnapshot(), rig: new LayerSnapshot(), chosen: new LayerSnapshot() });
-  /** True while a pan, pinch or wheel zoom is under way: the snapshots are moved, not redrawn. */
-  const moving = useRef(false);
   /** True while the PNG export draws at its own pixel ratio: every layer is drawn directly. */
   const exporting = useRef(false);
 
@@ -156,7 +143,16 @@ function PlotCanvas(props: PlotCanvasProps) {
     view: () => view.current,
   }), [fit, redraw]);
 
-  useCanvasGestures({ container, view, gesture, draft, preview, live, redraw, moving });
+  const press = useCanvasGestures({ container, view, gesture, draft, preview, live, redraw });
+  /** `moving` is true while a pan, pinch or wheel zoom is under way: the snapshots are moved, not redrawn. */
+  const { moving } = useViewNavigation({
+    element: container,
+    view,
+    press,
+    spacePans: true,
+    onFrame: () => redraw("all", true),
+    onRest: () => redraw("all"),
+  });
 
   /** Draws a costly layer through its snapshot (or directly for the PNG export) and notes fresh drawings for the bench. */
   const throughSnapshot = useCallback((ctx: Ctx, which: keyof typeof snaps.current, stamp: unknown[], paint: (g: Ctx, v: View, s: { width: number; height: number }) => void) => {

@@ -7,7 +7,8 @@ import type { PositionDto } from "@/lib/data/positions";
 import { PanelField, PanelSection } from "./panel-field";
 import { ElevationStrip } from "./elevation-strip";
 import { isVertical } from "./rig-items";
-import type { PanelProps } from "./side-panel";
+import { EMPTY_SELECTION } from "./canvas-types";
+import type { PanelProps } from "./panel-props";
 
 export function PositionPanel(p: PanelProps & { position: PositionDto }) {
   const pos = p.position;
@@ -80,7 +81,7 @@ export function PositionPanel(p: PanelProps & { position: PositionDto }) {
             onClick={() => {
               if (!confirm(`Delete ${pos.name} and the ${fixtures.length} units on it?`)) return;
               void p.cmd.run("Delete the position", () => p.cmd.actions.deletePosition(pos.id));
-              p.setSelection({ fixtures: new Set(), positionId: null, focusPointId: null });
+              p.setSelection(EMPTY_SELECTION);
             }}>Delete position</button>
         </div>
       ) : null}

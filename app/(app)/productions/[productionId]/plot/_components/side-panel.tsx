@@ -1,32 +1,14 @@
 "use client";
 
-import type { PlotPayload } from "@/hooks/use-plot";
-import type { ProductionDto } from "@/lib/data/productions";
-import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import { formatLength } from "@/lib/optics";
-import type { Selection, Tool } from "./canvas-types";
-import type { Commands } from "./use-commands";
-import type { Draft } from "./use-plot-events";
+import { EMPTY_SELECTION } from "./canvas-types";
+import type { PanelProps } from "./panel-props";
 import { FixturePanel } from "./fixture-panel";
 import { PositionPanel } from "./position-panel";
 import { UnderlayPanel } from "./underlay-panel";
 import { DraftForm } from "./draft-form";
 import { PanelSection } from "./panel-field";
-import { deleteFixtures, duplicateFixtures } from "./use-plot-keys";
-
-export type PanelProps = {
-  data: PlotPayload;
-  production: ProductionDto;
-  canEdit: boolean;
-  selection: Selection;
-  setSelection: (s: Selection) => void;
-  preview: PlotFixture | null;
-  draft: Draft;
-  setDraft: (d: Draft) => void;
-  cmd: Commands;
-  setTool: (t: Tool) => void;
-  tool: Tool;
-};
+import { deleteFixtures, duplicateFixtures } from "./plot-commands";
 
 export function SidePanel(p: PanelProps) {
   const ids = [...p.selection.fixtures];
@@ -42,7 +24,7 @@ export function SidePanel(p: PanelProps) {
           {p.canEdit ? (
             <div className="flex gap-2">
               <button type="button" className="rounded-md border border-line px-2 py-1 text-sm" onClick={() => void duplicateFixtures(p.cmd, ids)}>Duplicate</button>
-              <button type="button" className="rounded-md border border-line px-2 py-1 text-sm text-danger" onClick={() => void deleteFixtures(p.cmd, ids, () => p.setSelection({ fixtures: new Set(), positionId: null, focusPointId: null }))}>Delete</button>
+              <button type="button" className="rounded-md border border-line px-2 py-1 text-sm text-danger" onClick={() => void deleteFixtures(p.cmd, ids, () => p.setSelection(EMPTY_SELECTION))}>Delete</button>
             </div>
           ) : <p className="text-sm text-muted">Select one unit to see its beam.</p>}
         </PanelSection>

@@ -3,7 +3,7 @@
 import { useState } from "react";
 import { formatLength } from "@/lib/optics";
 import { PanelField, PanelSection } from "./panel-field";
-import type { PanelProps } from "./side-panel";
+import type { PanelProps } from "./panel-props";
 
 /** The groundplan underlay: upload, two-point calibration, align to the datum, move, rotate, opacity, lock. */
 export function UnderlayPanel(p: PanelProps) {

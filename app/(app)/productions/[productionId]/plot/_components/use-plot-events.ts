@@ -2,13 +2,12 @@
 // What the editor does when the canvas reports a finished gesture or a drawn shape.
 import { useMemo } from "react";
 import type { Point } from "@/lib/optics";
-import { nearestPosition, numberingOrder, unitNumberForInsert, type NumberingDirection } from "@/lib/plot/along-position";
+import type { NumberingDirection } from "@/lib/plot/along-position";
 import { alignPoint } from "@/lib/plot/underlay";
-import { compareUnitNumbers } from "@/lib/rig/unit-number";
 import type { PlotFixture } from "@/lib/plot/slim-fixtures";
-import type { CanvasEvents, Selection, Tool } from "./canvas-types";
+import { EMPTY_SELECTION, type CanvasEvents, type Selection, type Tool } from "./canvas-types";
 import type { Commands } from "./use-commands";
-import { isVertical } from "./rig-items";
+import { placeFixture } from "./plot-commands";
 
 export type Draft =
   | { kind: "position"; points: Point[]; vertical: boolean }
@@ -30,33 +29,6 @@ type Args = {
   direction: NumberingDirection;
 };
 
-/** Hangs one unit of a type at the nearest position, numbered so nobody else is renumbered. */
-export function placeFixture(cmd: Commands, typeId: number, at: Point, direction: NumberingDirection, tolerance: number) {
-  const data = cmd.latest();
-  const hit = nearestPosition(data.positions, at, tolerance);
-  if (!hit) {
-    cmd.setNotice({ tone: "info", text: "Drop the unit on a hanging position (a pipe, bridge or boom)." });
-    return;
-  }
-  const pos = hit.position;
-  const onPos = data.fixtures.filter((f) => f.positionId === pos.id);
-  const existing = onPos.map((f) => f.unitNumber);
-  let before: string | null = null;
-  if (onPos.length && isVertical(pos.kind)) before = existing.slice().sort(compareUnitNumbers).at(-1)!; // booms: the new unit goes below
-  else if (onPos.length) {
-    const order = numberingOrder([...onPos, { id: -1, x: hit.point.x, y: hit.point.y } as PlotFixture], direction);
-    const idx = order.findIndex((f) => f.id === -1);
-    before = idx === 0 ? null : order[idx - 1].unitNumber;
-  }
-  const unitNumber = unitNumberForInsert(existing, before);
-  const lensHeight = isVertical(pos.kind) ? Math.max(0.3, pos.trimHeight - 0.9 * onPos.length) : null;
-  return cmd.run("Hang a unit", async () => {
-    const [created] = await cmd.actions.createFixtures([{ positionId: pos.id, fixtureTypeId: typeId, unitNumber, x: hit.point.x, y: hit.point.y, lensHeight }]);
-    cmd.remember(`Hang unit ${unitNumber}`, () => cmd.run("Undo hang", () => cmd.actions.deleteFixtures([created.id])).then(() => undefined));
-    return created;
-  });
-}
-
 export function useCanvasEvents(a: Args): CanvasEvents {
   const { cmd, selection, setSelection, setDraft, setTool, setPreview, armedTypeId, direction } = a;
   return useMemo<CanvasEvents>(() => ({
@@ -67,8 +39,8 @@ export function useCanvasEvents(a: Args): CanvasEvents {
           if (next.has(id)) next.delete(id);
           else next.add(id);
         }
-        setSelection({ fixtures: next, positionId: null, focusPointId: null });
-      } else setSelection({ fixtures: sel.fixtures ?? new Set(), positionId: sel.positionId ?? null, focusPointId: sel.focusPointId ?? null });
+        setSelection({ ...EMPTY_SELECTION, fixtures: next });
+      } else setSelection({ fixtures: sel.fixtures ?? EMPTY_SELECTION.fixtures, positionId: sel.positionId ?? null, focusPointId: sel.focusPointId ?? null });
     },
     moveMark(f, to) {
       void cmd.patchFixture(f.id, `Focus unit ${f.unitNumber}`, () => ({ focusX: round(to.x), focusY: round(to.y), focusPointId: null }));

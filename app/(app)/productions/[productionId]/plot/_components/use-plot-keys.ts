@@ -1,11 +1,9 @@
 "use client";
 // Keyboard: nudges for the selected unit's focus, cone and softness; delete, duplicate, undo, fit.
 import { useEffect, type RefObject } from "react";
-import type { PlotFixture } from "@/lib/plot/slim-fixtures";
-import type { CanvasHandle, Selection, Tool } from "./canvas-types";
-import { creationFields, type Commands } from "./use-commands";
-import { unitNumberForInsert } from "@/lib/plot/along-position";
-import { projectOntoPosition } from "@/lib/plot/along-position";
+import { EMPTY_SELECTION, type CanvasHandle, type Selection, type Tool } from "./canvas-types";
+import type { Commands } from "./use-commands";
+import { deleteFixtures, duplicateFixtures } from "./plot-commands";
 
 const NUDGE_M = 0.05;
 const BIG_NUDGE_M = 0.25;
@@ -26,7 +24,7 @@ export function usePlotKeys({ cmd, canEdit, selection, setSelection, handle, set
       if (e.key === "f" && !mod) return handle.current?.fit();
       if (e.key === "Escape") {
         setTool("select");
-        return setSelection({ fixtures: new Set(), positionId: null, focusPointId: null });
+        return setSelection(EMPTY_SELECTION);
       }
       if (!canEdit) return;
       if (mod && e.key.toLowerCase() === "z") {
@@ -37,7 +35,7 @@ export function usePlotKeys({ cmd, canEdit, selection, setSelection, handle, set
       if (!ids.length) return;
       if (e.key === "Delete" || e.key === "Backspace") {
         e.preventDefault();
-        return void deleteFixtures(cmd, ids, () => setSelection({ fixtures: new Set(), positionId: null, focusPointId: null }));
+        return void deleteFixtures(cmd, ids, () => setSelection(EMPTY_SELECTION));
       }
       if (mod && e.key.toLowerCase() === "d") {
         e.preventDefault();
@@ -67,39 +65,3 @@ export function usePlotKeys({ cmd, canEdit, selection, setSelection, handle, set
 }
 
 const r3 = (n: number) => Math.round(n * 1000) / 1000;
-
-export function deleteFixtures(cmd: Commands, ids: number[], done: () => void) {
-  const rows = ids.map((id) => cmd.fixture(id)).filter((f): f is PlotFixture => f !== null);
-  return cmd.run(`Delete ${rows.length} unit${rows.length === 1 ? "" : "s"}`, async () => {
-    const full = await cmd.actions.fullFixtures(rows.map((f) => f.id)); // kept whole for undo
-    await cmd.actions.deleteFixtures(rows.map((f) => f.id));
-    done();
-    cmd.remember(`Delete ${rows.length} unit${rows.length === 1 ? "" : "s"}`, () =>
-      cmd.run("Undo delete", () => cmd.actions.createFixtures(full.map(creationFields))).then(() => undefined),
-    );
-  });
-}
-
-/** Copies sit a little along their position, with unit numbers slotted in after the originals. */
-export function duplicateFixtures(cmd: Commands, ids: number[]) {
-  const data = cmd.latest();
-  const known = ids.filter((id) => cmd.fixture(id) !== null);
-  if (!known.length) return;
-  return cmd.run("Duplicate", async () => {
-    const full = new Map((await cmd.actions.fullFixtures(known)).map((f) => [f.id, f]));
-    const taken = new Map<number, string[]>();
-    const copies = known.flatMap((id) => {
-      const f = full.get(id);
-      const pos = f && data.positions.find((p) => p.id === f.positionId);
-      if (!f || !pos) return [];
-      const list = taken.get(pos.id) ?? data.fixtures.filter((x) => x.positionId === pos.id).map((x) => x.unitNumber);
-      const unitNumber = unitNumberForInsert(list, f.unitNumber);
-      taken.set(pos.id, [...list, unitNumber]);
-      const at = projectOntoPosition(pos, { x: f.x + 0.3 * Math.sign(f.x || 1), y: f.y }).point;
-      return [{ ...creationFields(f), unitNumber, x: at.x, y: at.y, channel: null }];
-    });
-    if (!copies.length) return;
-    const created = await cmd.actions.createFixtures(copies);
-    cmd.remember(`Duplicate ${created.length}`, () => cmd.run("Undo duplicate", () => cmd.actions.deleteFixtures(created.map((c) => c.id))).then(() => undefined));
-  });
-}
