@@ -3,22 +3,23 @@
 import { countMoves, type TrackedShow } from "./tracking";
 import { formatCueNumber } from "./cue-number";
 
-export type CueTiming = { upTime: number; downTime: number | null; delay: number };
+export type CueTiming = { upTime: number; downTime: number | null; delay: number; downDelay?: number | null };
 
 /** What a channel lights: the purposes and focus points (acting areas) of its fixtures. */
 export type ChannelInfo = ReadonlyMap<number, { purposes: readonly string[]; areas: readonly string[] }>;
 
 /**
- * How long the fade runs from GO until the last channel arrives: the delay plus the up time when
- * something goes up and the down time when something goes down (the longer of the two). A cue
- * that moves nothing still takes its time on the console, so then the longer time counts.
+ * How long the fade runs from GO until the last channel arrives: the up delay plus the up time when
+ * something goes up and the down delay plus the down time when something goes down (the later of the
+ * two). A cue that moves nothing still takes its time on the console, so then the later end counts.
  */
 export function runningTime(cue: CueTiming, moves?: { up: number; down: number }): number {
   const down = cue.downTime ?? cue.upTime;
+  const downDelay = cue.downDelay ?? cue.delay;
   const none = !moves || (moves.up === 0 && moves.down === 0);
-  const up = none || moves!.up > 0 ? cue.upTime : 0;
-  const dn = none || moves!.down > 0 ? down : 0;
-  return cue.delay + Math.max(up, dn);
+  const up = none || moves!.up > 0 ? cue.delay + cue.upTime : 0;
+  const dn = none || moves!.down > 0 ? downDelay + down : 0;
+  return Math.max(up, dn);
 }
 
 const MAX_NAMES = 3;

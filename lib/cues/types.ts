@@ -20,7 +20,10 @@ export type CueFields = {
   page: string | null;
   upTime: number;
   downTime: number | null;
+  /** Wait before the up fade (and the down fade too, unless downDelay says otherwise). */
   delay: number;
+  /** Wait before the down fade when it differs from `delay` (a file's `DOWN time delay`); null: as `delay`. */
+  downDelay?: number | null;
   follow: number | null;
   link: number | null;
   block: boolean;
@@ -37,6 +40,7 @@ export const CUE_DEFAULTS: Omit<CueFields, "number"> = {
   upTime: 5,
   downTime: null,
   delay: 0,
+  downDelay: null,
   follow: null,
   link: null,
   block: false,

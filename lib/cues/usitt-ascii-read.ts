@@ -3,16 +3,21 @@
 // case; space , / < > = @ are interchangeable delimiters and a run of them counts as one; `!` starts
 // a comment; IDENT 3:0 first; `$` keywords are manufacturer-specific and ignored when unknown.
 // From memory, not checked against the text: which keywords open a record (CUE, GROUP, SUB, PATCH,
-// SET, CLEAR …) and which belong to it (PART, UP, DOWN, FOLLOW, LINK, TEXT, CHAN); `UP time [delay]`;
+// SET, CLEAR …) and which belong to it (PART, UP, DOWN, FOLLOWON, LINK, TEXT, CHAN); the follow time's
+// keyword is FOLLOWON (FOLLOW, from tools that use the shorter word, is read as the same);
+// `UP time [delay]` and `DOWN time [delay]`, a delay on DOWN only being the down fade's own wait;
 // levels 0–100, FL for full, Hxx as hexadecimal 0–255 of full; TEXT takes the rest of its line;
 // `PART n` opens part n of the open cue, and the UP, DOWN, TEXT and CHAN lines after it belong to the
-// part until the next PART or record (FOLLOW and LINK always belong to the cue).
+// part until the next PART or record (FOLLOWON and LINK always belong to the cue). PATCH: see
+// usitt-ascii-patch.ts.
+// Throwline keeps whole percentages, so a level such as 33.5 or H80 (50.2 %) is rounded, with a notice.
 // A reader must ignore keywords it does not know: unknown ones become notices, never errors.
 import { parseCueNumber, cueKey, formatCueNumber } from "./cue-number";
 import { parseFadeTime } from "./fade-time";
 import { THROWLINE_KEYWORDS, ASCII_MAX_LINE } from "./usitt-ascii-write";
 import { CUE_DEFAULTS, MAX_PARTS, type CuePart, type CueWithMoves } from "./types";
 import { checkParts } from "./parts";
+import { readPatchArgs, type PatchEntry } from "./usitt-ascii-patch";
 
 export type AsciiProblem = { line: number; message: string };
 export type AsciiReadResult = {
@@ -21,10 +26,14 @@ export type AsciiReadResult = {
   notices: AsciiProblem[];
   manufacturer: string | null;
   console: string | null;
+  /** Channel → universe/address entries from PATCH records, in file order. */
+  patch: PatchEntry[];
 };
 
 const DELIMITERS = /[\s,/<>=@]+/;
 const RECORD_KEYWORDS = new Set(["CUE", "GROUP", "SUB", "PATCH", "SET", "CLEAR", "EFFECT", "MACRO"]); // from memory
+/** The follow time's keyword as remembered (FOLLOWON), and the shorter spelling some tools write. */
+const FOLLOW_KEYWORDS = new Set(["FOLLOWON", "FOLLOW"]);
 const MAX_CHANNEL = 99_999;
 const MAX_ERRORS = 25;
 
@@ -34,16 +43,18 @@ export function unescapeText(text: string): string {
   );
 }
 
-/** A level as written in the file: 0–100, FL (full) or Hxx (hexadecimal of 255). */
+/** A level as written in the file, exactly: 0–100, FL (full) or Hxx (hexadecimal of 255, so H80 = 50.196). */
 export function parseAsciiLevel(token: string): number | null {
   const t = token.toUpperCase();
   if (t === "FL") return 100;
-  if (/^H[0-9A-F]{1,2}$/.test(t)) return Math.round((parseInt(t.slice(1), 16) / 255) * 100);
+  if (/^H[0-9A-F]{1,2}$/.test(t)) return (parseInt(t.slice(1), 16) / 255) * 100;
   if (!/^\d+(\.\d+)?$/.test(t)) return null;
   return Number(t);
 }
 
-type OpenPart = { part: CuePart; text: string; fullText: string[] };
+type OpenPart = { part: CuePart; text: string; fullText: string[]; downDelay: { value: number; line: number } | null; upDelaySet: boolean };
+/** Levels rounded to whole percentages while reading: how many, and the first. */
+type Rounding = { count: number; first: { line: number; token: string; stored: number } | null };
 type Open =
   | { kind: "cue"; cue: CueWithMoves & { line: number }; text: string; fullText: string[]; note: string[]; page: string[]; part: OpenPart | null; parts: OpenPart[] }
   | { kind: "other" }
@@ -52,7 +63,8 @@ type Open =
 export function readUsittAscii(source: string): AsciiReadResult {
   const errors: AsciiProblem[] = [];
   const notices: AsciiProblem[] = [];
-  const result: AsciiReadResult = { cues: [], errors, notices, manufacturer: null, console: null };
+  const result: AsciiReadResult = { cues: [], errors, notices, manufacturer: null, console: null, patch: [] };
+  const rounding: Rounding = { count: 0, first: null };
   const bareCr = source.search(/\r(?!\n)/);
   if (bareCr >= 0) {
     const line = source.slice(0, bareCr).split("\n").length;
@@ -74,6 +86,14 @@ export function readUsittAscii(source: string): AsciiReadResult {
     if (open.note.length) open.cue.callNote = unescapeText(open.note.join(""));
     if (open.page.length) open.cue.page = unescapeText(open.page.join("")).slice(0, 20);
     for (const p of open.parts) p.part.label = (p.fullText.length ? unescapeText(p.fullText.join("")) : p.text).slice(0, 60);
+    // The same wait on both lines is the one delay of the cue; only a different down wait is its own.
+    if (open.cue.downDelay === open.cue.delay) open.cue.downDelay = null;
+    const cueName = formatCueNumber(open.cue.number);
+    for (const p of open.parts) {
+      if (p.downDelay && p.downDelay.value !== p.part.delay) {
+        notices.push({ line: p.downDelay.line, message: `part ${p.part.part} of cue ${cueName}: its down delay (${p.downDelay.value} s) differs from its up delay (${p.part.delay} s); a part keeps one wait, so it waits ${p.part.delay} s` });
+      }
+    }
     open.cue.parts = open.parts.map((p) => ({ ...p.part, channels: [...new Set(p.part.channels)].sort((a, b) => a - b) })).sort((a, b) => a.part - b.part);
     for (const problem of checkParts(open.cue.parts)) fail(open.cue.line, `cue ${formatCueNumber(open.cue.number)}: ${problem}`);
   };
@@ -138,12 +158,14 @@ export function readUsittAscii(source: string): AsciiReadResult {
         break;
       case "UP":
       case "DOWN":
-        if (open?.kind === "cue") readTimes(open.part?.part ?? open.cue, keyword, args, n, fail);
+        if (open?.kind === "cue" && open.part) readPartTimes(open.part, keyword, args, n, fail);
+        else if (open?.kind === "cue") readTimes(open.cue, keyword, args, n, fail);
         break;
+      case "FOLLOWON":
       case "FOLLOW":
         if (open?.kind === "cue") {
           try {
-            open.cue.follow = parseFadeTime(args[0] ?? "", "FOLLOW time");
+            open.cue.follow = parseFadeTime(args[0] ?? "", `${keyword} time`);
           } catch (e) {
             fail(n, (e as Error).message);
           }
@@ -166,17 +188,25 @@ export function readUsittAscii(source: string): AsciiReadResult {
             break;
           }
           // Until the part's own UP and DOWN: the cue's up time, no split, no delay (Throwline's reading).
-          open.part = { part: { part: number, label: "", upTime: open.cue.upTime, downTime: null, delay: 0, channels: [] }, text: "", fullText: [] };
+          open.part = { part: { part: number, label: "", upTime: open.cue.upTime, downTime: null, delay: 0, channels: [] }, text: "", fullText: [], downDelay: null, upDelaySet: false };
           open.parts.push(open.part);
         } else if (!open) notices.push({ line: n, message: "PART outside any cue ignored" });
         break;
       case "CHAN":
         if (open?.kind === "cue") {
-          const listed = readLevels(open.cue.levels, args, n, fail);
+          const listed = readLevels(open.cue.levels, args, n, fail, rounding);
           open.part?.part.channels.push(...listed);
         }
         else if (!open) notices.push({ line: n, message: "CHAN outside any cue ignored" });
         break;
+      case "PATCH": {
+        close();
+        open = { kind: "other" };
+        const read = readPatchArgs(args);
+        if ("error" in read) fail(n, read.error);
+        else result.patch.push(...read.entries);
+        break;
+      }
       default:
         if (RECORD_KEYWORDS.has(keyword)) {
           close();
@@ -189,6 +219,11 @@ export function readUsittAscii(source: string): AsciiReadResult {
   }
   close();
   if (ignoredManufacturer) notices.push({ line: 0, message: `${ignoredManufacturer} manufacturer-specific ($) lines ignored` });
+  if (rounding.first) {
+    const { line, token, stored } = rounding.first;
+    const what = rounding.count === 1 ? "1 level was" : `${rounding.count} levels were`;
+    notices.push({ line, message: `${what} rounded to whole percentages (Throwline keeps whole percentages), the first on line ${line}: ${token} → ${stored}` });
+  }
   if (!ended && !errors.length) {
     const last = lines.length - (lines.at(-1) === "" ? 1 : 0);
     fail(last, `the file ends at line ${last} without ENDDATA, so it may have been cut short; nothing was imported`);
@@ -196,20 +231,44 @@ export function readUsittAscii(source: string): AsciiReadResult {
   return result;
 }
 
-function readTimes(cue: { upTime: number; downTime: number | null; delay: number }, keyword: "UP" | "DOWN", args: string[], line: number, fail: (l: number, m: string) => void) {
+function readTimes(cue: { upTime: number; downTime: number | null; delay: number; downDelay?: number | null }, keyword: "UP" | "DOWN", args: string[], line: number, fail: (l: number, m: string) => void) {
   try {
     const t = parseFadeTime(args[0] ?? "", `${keyword} time`);
     const delay = args[1] !== undefined ? parseFadeTime(args[1], `${keyword} delay`) : null;
-    if (keyword === "UP") cue.upTime = t;
-    else cue.downTime = t;
-    if (delay !== null && (keyword === "UP" || cue.delay === 0)) cue.delay = delay;
+    if (keyword === "UP") {
+      cue.upTime = t;
+      if (delay !== null) cue.delay = delay;
+    } else {
+      cue.downTime = t;
+      // The down fade's own wait; close() folds it into the one delay when both lines agree.
+      if (delay !== null) cue.downDelay = delay;
+    }
   } catch (e) {
     fail(line, (e as Error).message);
   }
 }
 
+/**
+ * A part has one wait: UP's delay, else DOWN's. A DOWN delay is remembered so that close() can report one
+ * that differs from the part's wait rather than drop it silently.
+ */
+function readPartTimes(p: OpenPart, keyword: "UP" | "DOWN", args: string[], line: number, fail: (l: number, m: string) => void) {
+  const times: { upTime: number; downTime: number | null; delay: number; downDelay?: number | null } = { ...p.part, delay: Number.NaN, downDelay: null };
+  readTimes(times, keyword, args, line, fail);
+  p.part.upTime = times.upTime;
+  p.part.downTime = times.downTime;
+  if (!Number.isNaN(times.delay)) {
+    p.part.delay = times.delay;
+    p.upDelaySet = true;
+  }
+  if (times.downDelay != null) {
+    p.downDelay = { value: times.downDelay, line };
+    if (!p.upDelaySet) p.part.delay = times.downDelay;
+  }
+}
+
 /** Reads `ch level` pairs into `levels`; returns the channels it read. */
-function readLevels(levels: Record<number, number>, args: string[], line: number, fail: (l: number, m: string) => void): number[] {
+function readLevels(levels: Record<number, number>, args: string[], line: number, fail: (l: number, m: string) => void, rounding: Rounding): number[] {
   const listed: number[] = [];
   if (args.length % 2 === 1) fail(line, `CHAN needs channel and level pairs; channel ${args.at(-1)} has no level`);
   for (let k = 0; k + 1 < args.length; k += 2) {
@@ -223,7 +282,12 @@ function readLevels(levels: Record<number, number>, args: string[], line: number
     else if (level === null) fail(line, `level "${args[k + 1]}" for channel ${ch} is not a level (0–100, FL or H00–HFF)`);
     else if (level > 100) fail(line, `level ${args[k + 1]} for channel ${ch} is above 100`);
     else {
-      levels[ch] = Math.round(level);
+      const stored = Math.round(level);
+      if (stored !== level) {
+        rounding.count++;
+        rounding.first ??= { line, token: args[k + 1], stored };
+      }
+      levels[ch] = stored;
       listed.push(ch);
     }
   }

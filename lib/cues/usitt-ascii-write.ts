@@ -2,10 +2,12 @@
 // version 3.0, 1992). Confirmed facts (shared REFERENCE.md): one instruction a line, at most 80
 // characters; `!` starts a comment; IDENT 3:0 comes first; keywords that begin with `$` are
 // manufacturer-specific and other readers ignore them.
-// From memory, not checked against the text: the keyword set CUE, PART, UP, DOWN, FOLLOW, LINK, TEXT,
-// CHAN, MANUFACTURER, CONSOLE, ENDDATA; `UP time [delay]`; times as seconds or m:ss; levels 0–100;
-// CR LF line ends; that `PART n` inside a cue opens a part whose UP, DOWN and CHAN lines follow it
-// until the next PART or the next record, after the cue's own lines.
+// From memory, not checked against the text: the keyword set CUE, PART, UP, DOWN, FOLLOWON (the follow
+// time; some tools write FOLLOW, which the reader also takes), LINK, TEXT, CHAN, PATCH, MANUFACTURER,
+// CONSOLE, ENDDATA; `UP time [delay]` and `DOWN time [delay]` (delays ride inside UP and DOWN: WAIT and
+// DELAY are dialect keywords, never written); times as seconds or m:ss; levels 0–100; CR LF line ends;
+// that `PART n` inside a cue opens a part whose UP, DOWN and CHAN lines follow it until the next PART or
+// the next record, after the cue's own lines. The PATCH layout is in usitt-ascii-patch.ts.
 //
 // Tracking: whether a cue in the file is a full state or only its changes is not settled (see
 // REFERENCE.md). Throwline writes each cue's FULL tracked state (every channel above 0) and also
@@ -14,6 +16,7 @@
 import { computeTracking, levelAt } from "./tracking";
 import { formatCueNumber } from "./cue-number";
 import type { CuePart, CueWithMoves } from "./types";
+import { patchItems, type PatchEntry } from "./usitt-ascii-patch";
 
 export const ASCII_MAX_LINE = 80;
 export const THROWLINE_KEYWORDS = { page: "$TL-PAGE", note: "$TL-NOTE", text: "$TL-TEXT", block: "$TL-BLOCK", partText: "$TL-PARTTEXT" } as const;
@@ -55,19 +58,36 @@ function chunked(keyword: string, escaped: string): string[] {
   return lines;
 }
 
-function levelLines(pairs: Array<[number, number]>): string[] {
+/** `head item item …` lines of at most 80 characters. */
+function packed(head: string, items: string[]): string[] {
   const lines: string[] = [];
-  let line = "CHAN";
-  for (const [ch, level] of pairs) {
-    const item = ` ${ch}@${Math.round(level)}`;
-    if (line.length + item.length > ASCII_MAX_LINE) {
+  let line = head;
+  for (const it of items) {
+    const item = ` ${it}`;
+    if (line.length + item.length > ASCII_MAX_LINE && line !== head) {
       lines.push(line);
-      line = "CHAN";
+      line = head;
     }
     line += item;
   }
-  if (line !== "CHAN") lines.push(line);
+  if (line !== head) lines.push(line);
   return lines;
+}
+
+function levelLines(pairs: Array<[number, number]>): string[] {
+  return packed("CHAN", pairs.map(([ch, level]) => `${ch}@${Math.round(level)}`));
+}
+
+/** `UP time [delay]` and `DOWN time [delay]`: the standard's only place for waits (from memory). */
+function timeLines(t: { upTime: number; downTime: number | null; delay: number; downDelay?: number | null }): string[] {
+  const out = [`UP ${time(t.upTime)}${t.delay ? ` ${time(t.delay)}` : ""}`];
+  const downDelay = t.downDelay ?? t.delay;
+  // A down delay of its own needs a DOWN line even when the down fade takes the up time.
+  const ownDown = t.downDelay != null && t.downDelay !== t.delay;
+  if (t.downTime != null || ownDown) {
+    out.push(`DOWN ${time(t.downTime ?? t.upTime)}${downDelay || ownDown ? ` ${time(downDelay)}` : ""}`);
+  }
+  return out;
 }
 
 const time = (s: number) => String(Math.round(s * 100) / 100);
@@ -77,18 +97,19 @@ const time = (s: number) => String(Math.round(s * 100) / 100);
  * 0, so that which channels belong to the part survives the round trip).
  */
 function partLines(part: CuePart, level: (ch: number) => number): string[] {
-  const out = [`PART ${part.part}`, `UP ${time(part.upTime)}${part.delay ? ` ${time(part.delay)}` : ""}`];
-  if (part.downTime != null) out.push(`DOWN ${time(part.downTime)}${part.delay ? ` ${time(part.delay)}` : ""}`);
+  const out = [`PART ${part.part}`, ...timeLines(part)];
   if (part.label) out.push(...chunked(THROWLINE_KEYWORDS.partText, escapeText(part.label)));
   out.push(...levelLines(part.channels.map((ch) => [ch, level(ch)])));
   return out;
 }
 
-export function writeUsittAscii(opts: { title: string; cues: ReadonlyArray<CueWithMoves & { id?: number }> }): string {
+/** The cue list (and, when given, the patch) as one USITT ASCII file. */
+export function writeUsittAscii(opts: { title: string; cues: ReadonlyArray<CueWithMoves & { id?: number }>; patch?: readonly PatchEntry[] }): string {
   const withIds = opts.cues.map((c, i) => ({ ...c, id: i }));
   const show = computeTracking(withIds);
   const byId = new Map(withIds.map((c) => [c.id, c]));
   const out = ["IDENT 3:0", "MANUFACTURER Throwline", "CONSOLE Throwline", `! ${asciiOnly(opts.title)}`.slice(0, ASCII_MAX_LINE), `! cues: ${withIds.length}; each cue is written as its full state`];
+  if (opts.patch?.length) out.push("", "! patch: channel<absolute DMX address ((universe - 1) * 512 + address)", ...packed("PATCH 1", patchItems(opts.patch)));
   show.cueIds.forEach((id, index) => {
     const cue = byId.get(id)!;
     out.push("", `CUE ${formatCueNumber(cue.number)}`);
@@ -97,9 +118,8 @@ export function writeUsittAscii(opts: { title: string; cues: ReadonlyArray<CueWi
       out.push(`TEXT ${plain}`.slice(0, ASCII_MAX_LINE));
       if (plain !== cue.label || plain.length > ASCII_MAX_LINE - 5) out.push(...chunked(THROWLINE_KEYWORDS.text, escapeText(cue.label)));
     }
-    out.push(`UP ${time(cue.upTime)}${cue.delay ? ` ${time(cue.delay)}` : ""}`);
-    if (cue.downTime != null) out.push(`DOWN ${time(cue.downTime)}${cue.delay ? ` ${time(cue.delay)}` : ""}`);
-    if (cue.follow != null) out.push(`FOLLOW ${time(cue.follow)}`);
+    out.push(...timeLines(cue));
+    if (cue.follow != null) out.push(`FOLLOWON ${time(cue.follow)}`);
     if (cue.link != null) out.push(`LINK ${formatCueNumber(cue.link)}`);
     if (cue.page) out.push(...chunked(THROWLINE_KEYWORDS.page, escapeText(cue.page)));
     if (cue.callNote) out.push(...chunked(THROWLINE_KEYWORDS.note, escapeText(cue.callNote)));

@@ -44,7 +44,9 @@ describe("reading a hand-written file", () => {
     expect(r.cues.map((c) => c.number)).toEqual([1, 1.5, 2]);
     const [c1, c15, c2] = r.cues;
     expect(c1).toMatchObject({ label: "House to half", upTime: 5, downTime: null, levels: { 1: 50, 2: 100 } }); // FL = full (from memory)
-    expect(c15).toMatchObject({ upTime: 3, delay: 2, downTime: 90, follow: 4, levels: { 1: 50, 3: 30 } }); // H80 = 128/255 → 50 % (from memory)
+    // H80 = 128/255 of full = 50.196 % (from memory), stored as the whole percentage 50 with a notice;
+    // FOLLOW (the shorter spelling some tools write) is read as FOLLOWON (from memory)
+    expect(c15).toMatchObject({ upTime: 3, delay: 2, downTime: 90, follow: 4, levels: { 1: 50, 3: 30 } });
     expect(c2).toMatchObject({ label: "Storm! builds", link: 1, levels: { 3: 0 } });
     expect(Object.keys(c1.levels)).not.toContain("9"); // the GROUP's channel stayed out of the cues
   });
@@ -56,6 +58,7 @@ describe("reading a hand-written file", () => {
     expect(text).toMatch(/7: GROUP ignored/);
     expect(text).toMatch(/18: unknown keyword WOBBLE ignored/);
     expect(text).toMatch(/1 manufacturer-specific/);
+    expect(text).toMatch(/17: 1 level was rounded to whole percentages .* line 17: H80 → 50/);
   });
 });
 
@@ -100,7 +103,10 @@ describe("bad files", () => {
     expect(parseAsciiLevel("FL")).toBe(100); // from memory
     expect(parseAsciiLevel("HFF")).toBe(100); // from memory: FF = full
     expect(parseAsciiLevel("h00")).toBe(0);
-    expect(parseAsciiLevel("H80")).toBe(50); // from memory: 128/255 = 50.2 %
+    // from memory: Hxx is hexadecimal of 255. Read exactly (0x80 = 128, 128/255 = 50.196 %); the import then
+    // stores whole percentages (50) and says so in a notice (usitt-ascii-standard.test.ts).
+    expect(parseAsciiLevel("H80")).toBeCloseTo((128 / 255) * 100, 12);
+    expect(parseAsciiLevel("H80")).not.toBe(50);
     expect(parseAsciiLevel("42")).toBe(42);
     expect(parseAsciiLevel("x")).toBeNull();
   });
