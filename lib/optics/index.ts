@@ -5,6 +5,7 @@ export { poolAtPlane, ellipseBounds, type Ellipse, type PlanePool, type PoolInpu
 export {
   FIXTURE_FAMILIES, fromDatasheet, profileShapeOf, relativeIntensity, type Family, type ProfileShape,
 } from "./profile";
+export { irisedConeDeg, peakCandelaAt, zoomedBeam, type ZoomPeakType } from "./zoom-peak";
 export { illuminanceAt, type LitBeam } from "./illuminance";
 export {
   gridPoint, illuminanceGrid, zoneStats, type Bounds, type Grid, type GridCells, type GridInput, type ZoneStats,

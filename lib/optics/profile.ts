@@ -75,22 +75,42 @@ export function relativeIntensity(
 }
 
 /**
- * A datasheet's beam (50 %) and field (10 %) angles as the design's cone and softness: cone = field,
- * softness = field − beam. A beam angle under half the field gives a softness that will be clamped.
+ * Where the flat profile's cosine fade reaches 10 %, as a share of the soft band from the core's edge:
+ * ½(1 + cos πx) = 0.1 gives x = acos(−0.8)/π = 0.7952. So the model's 10 % full angle is θ − 2(1 − x)·s
+ * = θ − 0.4097·s, and its 50 % full angle θ − s (x = ½).
  */
-export function fromDatasheet(d: { beamDeg: number; fieldDeg: number }): {
+export const FLAT_TENTH_ACROSS_BAND = Math.acos(-0.8) / Math.PI;
+/** (F − B)/s for the flat profile: 1 − 2(1 − x) = 0.5903 (the design's "0.59"). */
+const FLAT_FIELD_MINUS_BEAM_PER_SOFTNESS = 1 - 2 * (1 - FLAT_TENTH_ACROSS_BAND);
+
+/**
+ * A datasheet's beam (50 %) and field (10 %) angles as the model's cone and softness, so that the model's
+ * own 50 % and 10 % points land on them (IES definitions of beam and field angle).
+ * - Flat families (profile spots, followspots): the cosine fade reaches 10 % 0.4097·s inside the cone, so
+ *   s = (F − B)/0.5903 and θ = B + s (taking θ = F would put the 10 % point about 0.4·s inside the field).
+ * - Peaked families: the curve is ½ at (θ − s)/2 and 1/10 at θ/2 by construction, so θ = F and s = F − B.
+ * A softness above half the cone leaves no core and is clamped by the beam model: a warning says so, and then
+ * the 50 % point no longer lands exactly.
+ */
+export function fromDatasheet(d: { beamDeg: number; fieldDeg: number; family?: Family }): {
   coneDeg: number; softnessDeg: number; warning?: string;
 } {
   const { beamDeg, fieldDeg } = d;
+  const family = d.family ?? "profile";
   if (!Number.isFinite(beamDeg) || !Number.isFinite(fieldDeg) || beamDeg <= 0 || fieldDeg >= 180) {
     throw new RangeError(`Datasheet angles must be above 0° and under 180° (beam ${beamDeg}°, field ${fieldDeg}°).`);
   }
   if (beamDeg > fieldDeg) {
     throw new RangeError(`The beam angle (${beamDeg}°) cannot be wider than the field angle (${fieldDeg}°).`);
   }
-  const out = { coneDeg: fieldDeg, softnessDeg: fieldDeg - beamDeg };
-  if (out.softnessDeg > fieldDeg / 2) {
-    return { ...out, warning: `A beam angle under half the field angle is modelled with a ${fieldDeg / 2}° beam.` };
+  const flat = profileShapeOf(family) === "flat";
+  const softnessDeg = flat ? (fieldDeg - beamDeg) / FLAT_FIELD_MINUS_BEAM_PER_SOFTNESS : fieldDeg - beamDeg;
+  const out = { coneDeg: flat ? beamDeg + softnessDeg : fieldDeg, softnessDeg };
+  if (out.coneDeg >= 180) {
+    throw new RangeError(`A ${beamDeg}° beam with a ${fieldDeg}° field needs a cone of ${out.coneDeg.toFixed(1)}°, past the model's 180°.`);
+  }
+  if (out.softnessDeg > out.coneDeg / 2) {
+    return { ...out, warning: `A beam angle this far under the field angle leaves no even core; modelled with a ${+(out.coneDeg / 2).toFixed(2)}° softness, so the 50 % point falls wider than the datasheet's beam.` };
   }
   return out;
 }
