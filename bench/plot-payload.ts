@@ -4,8 +4,8 @@
 import { performance } from "node:perf_hooks";
 import { computeFixtureGeometry } from "@/lib/rig/fixture-geometry";
 import { expandPlotFixtures, fromPlotFixtureWire, toPlotFixtureWire, type PlotFixtureRecord } from "@/lib/plot/slim-fixtures";
-import type { PositionDto } from "@/lib/data/positions";
-import type { FixtureTypeDto } from "@/lib/data/fixture-types";
+import type { PositionDto } from "@/lib/dto/plan";
+import type { FixtureTypeDto } from "@/lib/dto/fixture-type";
 
 const positions = Array.from({ length: 40 }, (_, i) => ({ id: i + 1, name: `Pipe ${i + 1}`, kind: "pipe", trimHeight: 6 + (i % 5) * 0.5 }) as unknown as PositionDto);
 const fixtureTypes = [10, 19, 26, 36].map((cone, i) => ({ id: 100 + i, name: `Type ${cone}`, family: "profile", coneMinDeg: cone, coneMaxDeg: cone, defaultSoftnessDeg: 3, lensDropM: 0.4 }) as unknown as FixtureTypeDto);

@@ -3,7 +3,7 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { apiFetch, ApiError } from "@/lib/http/api-client";
 import { compareCueNumbers } from "@/lib/cues";
-import type { ChannelLabel, CueDto, CueSheetRow, ImportOutcome } from "@/lib/data/cues";
+import type { ChannelLabel, CueDto, CueSheetRow, ImportOutcome } from "@/lib/dto/cue";
 import type { StandbyGroup } from "@/lib/cues";
 import { productionKeys } from "./query-keys";
 

@@ -6,12 +6,9 @@ import { apiFetch } from "@/lib/http/api-client";
 import { productionKeys } from "./query-keys";
 import type { PlotPayload } from "./use-plot";
 import type { PlotFixture } from "@/lib/plot/slim-fixtures";
-import type { FixtureDto } from "@/lib/data/fixtures";
-import type { PositionDto } from "@/lib/data/positions";
-import type { FocusPointDto } from "@/lib/data/focus-points";
-import type { AreaZoneDto } from "@/lib/data/area-zones";
-import type { LandmarkDto } from "@/lib/data/landmarks";
-import type { UploadDto } from "@/lib/data/uploads";
+import type { FixtureDto } from "@/lib/dto/fixture";
+import type { AreaZoneDto, FocusPointDto, LandmarkDto, PositionDto } from "@/lib/dto/plan";
+import type { UploadDto } from "@/lib/dto/upload";
 
 type Row = { id: number };
 const replace = <T extends Row>(list: T[], row: T) => list.map((r) => (r.id === row.id ? row : r));

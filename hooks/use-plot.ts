@@ -4,7 +4,7 @@ import { useState } from "react";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { apiFetch } from "@/lib/http/api-client";
 import { productionKeys } from "./query-keys";
-import type { PlotData, PlotWireData } from "@/lib/data/plot";
+import type { PlotData, PlotWireData } from "@/lib/dto/plot";
 import { expandPlotFixtures, fromPlotFixtureWire, type PlotFixture } from "@/lib/plot/slim-fixtures";
 
 /** What the editor works with: fixtures with names and geometry rebuilt in the browser. */

@@ -3,7 +3,7 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { apiFetch } from "@/lib/http/api-client";
 import { productionKeys } from "./query-keys";
-import type { ProductionDto, ProductionListItem } from "@/lib/data/productions";
+import type { ProductionDto, ProductionListItem } from "@/lib/dto/production";
 
 
 export function useProductions() {

@@ -2,7 +2,7 @@
 
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { apiFetch } from "@/lib/http/api-client";
-import type { AccessoryDto } from "@/lib/data/accessories";
+import type { AccessoryDto } from "@/lib/dto/accessory";
 import { productionKeys } from "./query-keys";
 
 /** Add, change and remove a fixture's accessories; the list (and so the stock counts) refreshes after each. */

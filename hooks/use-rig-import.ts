@@ -3,7 +3,7 @@
 import { useState } from "react";
 import { useQueryClient } from "@tanstack/react-query";
 import { ApiError } from "@/lib/http/api-client";
-import type { ImportPreview } from "@/lib/data/import";
+import type { ImportPreview } from "@/lib/dto/import";
 import type { ColumnTarget } from "@/lib/io/fields";
 import { productionKeys } from "./query-keys";
 

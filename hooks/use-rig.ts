@@ -2,9 +2,9 @@
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { apiFetch } from "@/lib/http/api-client";
-import type { FixtureDto } from "@/lib/data/fixtures";
-import type { FixtureTypeDto } from "@/lib/data/fixture-types";
-import type { AccessoryDto } from "@/lib/data/accessories";
+import type { FixtureDto } from "@/lib/dto/fixture";
+import type { FixtureTypeDto } from "@/lib/dto/fixture-type";
+import type { AccessoryDto } from "@/lib/dto/accessory";
 import type { FixturePatch } from "@/lib/validation/fixture";
 import type { BulkEdit } from "@/lib/validation/rig-bulk";
 import { productionKeys } from "./query-keys";

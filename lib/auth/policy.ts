@@ -1,24 +1,12 @@
 // The role table of the design, in one place. Every route handler, server action and screen asks
 // here; nothing else decides who may do what.
 import type { Role } from "./roles";
+import type { Permission } from "./permissions";
+import { FIXTURE_FIELDS } from "@/lib/rig/fixture-fields";
 
 export type Member = { role: Role; isOwner: boolean };
 
-export const PERMISSIONS = [
-  "production.view",
-  "settings.edit",
-  "plot.edit", // positions, focus points, acting areas, the designer's fixture fields
-  "rig.editElectrics", // circuit, dimmer, DMX, accessories, type swaps, hung/focused, as-focused notes
-  "rig.import",
-  "rig.export",
-  "cues.edit", // numbers, levels, times, follows, labels
-  "cues.editCallNotes", // page and call note
-  "studies.view",
-  "studies.run", // studies and checks
-  "revisions.issue", // issue a revision, e-mail the team
-  "team.manage",
-] as const;
-export type Permission = (typeof PERMISSIONS)[number];
+export { PERMISSIONS, type Permission } from "./permissions";
 
 const TABLE: Record<Role, ReadonlySet<Permission>> = {
   designer: new Set<Permission>([
@@ -54,47 +42,9 @@ export function can(member: Member | null | undefined, permission: Permission): 
   return TABLE[member.role].has(permission);
 }
 
-// Field-level rules. A field not listed here cannot be written through the API at all.
-const FIXTURE_FIELDS: Record<string, Permission> = {
-  positionId: "plot.edit",
-  unitNumber: "plot.edit",
-  channel: "plot.edit",
-  colour: "plot.edit",
-  gobo: "plot.edit",
-  purpose: "plot.edit",
-  x: "plot.edit",
-  y: "plot.edit",
-  lensHeight: "plot.edit",
-  focusX: "plot.edit",
-  focusY: "plot.edit",
-  focusPointId: "plot.edit",
-  aim: "plot.edit",
-  coneDeg: "plot.edit",
-  softnessDeg: "plot.edit",
-  shutterCuts: "plot.edit",
-  irisPercent: "plot.edit",
-  notes: "plot.edit",
-  bodyKey: "plot.edit",
-  cell: "plot.edit",
-  circuit: "rig.editElectrics",
-  dimmer: "rig.editElectrics",
-  universe: "rig.editElectrics",
-  address: "rig.editElectrics",
-  dmxMode: "rig.editElectrics",
-  footprint: "rig.editElectrics",
-  fixtureTypeId: "rig.editElectrics", // a swap of type; recorded in the change log
-  hung: "rig.editElectrics",
-  focused: "rig.editElectrics",
-  focusNotes: "rig.editElectrics",
-  // Issue 6: the designer chooses the gobo's orientation; the crew records the barn doors as focused and
-  // takes the focus photo on the deck (the designer holds the electrics right too).
-  goboRotationDeg: "plot.edit",
-  barnDoorTop: "rig.editElectrics",
-  barnDoorBottom: "rig.editElectrics",
-  barnDoorLeft: "rig.editElectrics",
-  barnDoorRight: "rig.editElectrics",
-  focusPhotoUploadId: "rig.editElectrics",
-};
+// Field-level rules. A field not listed here cannot be written through the API at all. A fixture's
+// fields and the right each needs come from the field registry (lib/rig/fixture-fields.ts).
+const FIXTURE_FIELD_RIGHTS: ReadonlyMap<string, Permission> = new Map(FIXTURE_FIELDS.map((f) => [f.attribute, f.edit]));
 
 const FIXTURE_TYPE_FIELDS: Record<string, Permission> = {
   wattage: "rig.editElectrics",
@@ -113,7 +63,7 @@ export type Entity = "fixture" | "fixtureType" | "cue";
 export function permissionForField(entity: Entity, field: string): Permission | null {
   switch (entity) {
     case "fixture":
-      return FIXTURE_FIELDS[field] ?? null;
+      return FIXTURE_FIELD_RIGHTS.get(field) ?? null;
     case "fixtureType":
       return FIXTURE_TYPE_FIELDS[field] ?? "plot.edit";
     case "cue":

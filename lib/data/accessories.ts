@@ -2,38 +2,14 @@ import "server-only";
 import { getDb, type Accessory } from "@/models";
 import { AppError, notFound } from "@/lib/errors";
 import type { AccessoryCreate, AccessoryPatch } from "@/lib/validation/accessory";
-import { iso, versionedUpdate } from "./versioned";
+import type { AccessoryDto } from "@/lib/dto/accessory";
+import { plain } from "./plain";
+import { versionedUpdate } from "./versioned";
 import { recordChange } from "./changes";
 
-export type AccessoryDto = {
-  id: number;
-  productionId: number;
-  fixtureId: number;
-  kind: string;
-  universe: number | null;
-  address: number | null;
-  footprint: number | null;
-  wattage: number;
-  weightKg: number;
-  notes: string | null;
-  version: number;
-  updatedAt: string;
-};
 
-export const toAccessoryDto = (a: Accessory): AccessoryDto => ({
-  id: a.id,
-  productionId: a.productionId,
-  fixtureId: a.fixtureId,
-  kind: a.kind,
-  universe: a.universe,
-  address: a.address,
-  footprint: a.footprint,
-  wattage: a.wattage,
-  weightKg: a.weightKg,
-  notes: a.notes,
-  version: a.version,
-  updatedAt: iso(a.updatedAt)!,
-});
+export const toAccessoryDto = (a: Accessory): AccessoryDto =>
+  plain(a, ["id", "productionId", "fixtureId", "kind", "universe", "address", "footprint", "wattage", "weightKg", "notes", "version", "updatedAt"]);
 
 export async function getAccessoriesByProduction({ productionId }: { productionId: number }): Promise<AccessoryDto[]> {
   const rows = await getDb().Accessory.findAll({ where: { productionId }, order: [["fixtureId", "ASC"], ["id", "ASC"]] });

@@ -2,20 +2,12 @@ import "server-only";
 import type { z } from "zod";
 import { getDb, type AreaZone } from "@/models";
 import type { createAreaZoneSchema, updateAreaZoneSchema } from "@/lib/validation/plot";
-import { iso } from "./versioned";
+import type { AreaZoneDto } from "@/lib/dto/plan";
+import { plain } from "./plain";
 import { productionCrud } from "./production-crud";
 
-/** A named acting area drawn on the plan as a polygon; the coverage study reads it. */
-export type AreaZoneDto = { id: number; productionId: number; name: string; polygon: Array<{ x: number; y: number }>; version: number; updatedAt: string };
 
-export const toAreaZoneDto = (z: AreaZone): AreaZoneDto => ({
-  id: z.id,
-  productionId: z.productionId,
-  name: z.name,
-  polygon: z.polygon,
-  version: z.version,
-  updatedAt: iso(z.updatedAt)!,
-});
+export const toAreaZoneDto = (z: AreaZone): AreaZoneDto => plain(z, ["id", "productionId", "name", "polygon", "version", "updatedAt"]);
 
 const areaZones = productionCrud<AreaZone, AreaZoneDto, z.infer<typeof createAreaZoneSchema>, z.infer<typeof updateAreaZoneSchema>>({
   model: () => getDb().AreaZone,

@@ -4,9 +4,9 @@ import { AppError } from "@/lib/errors";
 import { normaliseParts, type CueWithMoves } from "@/lib/cues";
 import { readUsittAscii } from "@/lib/cues/usitt-ascii-read";
 import { toStoredMoves, type ImportMode } from "@/lib/cues/import-plan";
+import type { ImportOutcome } from "@/lib/dto/cue";
 import { recordChange } from "./changes";
 
-export type ImportOutcome = { imported: number; notices: Array<{ line: number; message: string }> };
 
 /** Replaces the production's cue list with a USITT ASCII file: all of it, or (on any error) nothing. */
 export async function importCuesFromAscii({ productionId, text, mode, userId }: { productionId: number; text: string; mode: ImportMode; userId: number }): Promise<ImportOutcome> {

@@ -2,13 +2,12 @@ import "server-only";
 import { Op, QueryTypes, type Transaction } from "sequelize";
 import { getDb } from "@/models";
 import { notFound } from "@/lib/errors";
-import { buildCueSheet, normaliseParts, type ChannelInfo, type CueFields, type CuePart, type SheetFacts, type StandbyGroup } from "@/lib/cues";
-import { iso } from "./versioned";
+import { buildCueSheet, normaliseParts, type ChannelInfo, type CuePart, type StandbyGroup } from "@/lib/cues";
+import type { ChannelLabel, CueDto, CueSheetRow } from "@/lib/dto/cue";
+import { iso } from "./plain";
+import { jsonColumn } from "./json-column";
 import { requireProduction } from "./productions";
 
-export type CueDto = CueFields & { id: number; version: number; levels: Record<number, number>; updatedAt: string };
-export type CueSheetRow = CueDto & SheetFacts;
-export type ChannelLabel = { channel: number; purposes: string[]; areas: string[]; units: string[] };
 
 type CueRow = {
   id: number; number: string | number; label: string; page: string | null; up_time: number; down_time: number | null; delay: number;
@@ -40,7 +39,7 @@ export function toCueDto(c: CueRow, levels: Record<number, number> = {}, parts: 
 }
 
 function toPart(p: PartRow): CuePart {
-  const channels = typeof p.channels === "string" ? (JSON.parse(p.channels) as number[]) : p.channels;
+  const channels = jsonColumn<number[]>(p.channels);
   return { part: p.part, label: p.label, upTime: p.up_time, downTime: p.down_time, delay: p.delay, channels };
 }
 

@@ -6,7 +6,8 @@ import type { CueCreate, CuePatch } from "@/lib/validation/cue";
 import { computeTracking, formatCueNumber, normaliseParts, planRenumber, stateOf, type CuePart } from "@/lib/cues";
 import { versionedUpdate } from "./versioned";
 import { recordChange } from "./changes";
-import { getCueById, getCuesByProduction, type CueDto } from "./cue-reads";
+import type { CueDto } from "@/lib/dto/cue";
+import { getCueById, getCuesByProduction } from "./cue-reads";
 
 function duplicateNumber(err: unknown, number: number | undefined): never {
   if ((err as { name?: string }).name === "SequelizeUniqueConstraintError") {

@@ -3,50 +3,15 @@ import { getDb, type FixtureType } from "@/models";
 import { AppError } from "@/lib/errors";
 import type { z } from "zod";
 import type { createFixtureTypeSchema, updateFixtureTypeSchema } from "@/lib/validation/rig";
-import { iso } from "./versioned";
+import type { DmxMode, FixtureTypeDto } from "@/lib/dto/fixture-type";
+import { plain } from "./plain";
+import { jsonColumn } from "./json-column";
 import { productionCrud } from "./production-crud";
 
-export type FixtureTypeDto = {
-  id: number;
-  productionId: number;
-  name: string;
-  family: string;
-  coneMinDeg: number;
-  coneMaxDeg: number;
-  defaultSoftnessDeg: number;
-  peakCandela: number;
-  wattage: number;
-  weightKg: number;
-  dmxModes: Array<{ name: string; footprint: number }>;
-  lensApertureM: number;
-  frameSize: string | null;
-  goboSize: string | null;
-  lensDropM: number;
-  cells: number;
-  version: number;
-  updatedAt: string;
-};
 
-export const toFixtureTypeDto = (t: FixtureType): FixtureTypeDto => ({
-  id: t.id,
-  productionId: t.productionId,
-  name: t.name,
-  family: t.family,
-  coneMinDeg: t.coneMinDeg,
-  coneMaxDeg: t.coneMaxDeg,
-  defaultSoftnessDeg: t.defaultSoftnessDeg,
-  peakCandela: t.peakCandela,
-  wattage: t.wattage,
-  weightKg: t.weightKg,
-  dmxModes: typeof t.dmxModes === "string" ? JSON.parse(t.dmxModes) : t.dmxModes,
-  lensApertureM: t.lensApertureM,
-  frameSize: t.frameSize,
-  goboSize: t.goboSize,
-  lensDropM: t.lensDropM,
-  cells: t.cells,
-  version: t.version,
-  updatedAt: iso(t.updatedAt)!,
-});
+const TYPE_KEYS = ["id", "productionId", "name", "family", "coneMinDeg", "coneMaxDeg", "defaultSoftnessDeg", "peakCandela", "wattage", "weightKg", "dmxModes", "lensApertureM", "frameSize", "goboSize", "lensDropM", "cells", "version", "updatedAt"] as const;
+
+export const toFixtureTypeDto = (t: FixtureType): FixtureTypeDto => ({ ...plain(t, TYPE_KEYS), dmxModes: jsonColumn<DmxMode[]>(t.dmxModes) });
 
 const fixtureTypes = productionCrud<FixtureType, FixtureTypeDto, z.infer<typeof createFixtureTypeSchema>, z.infer<typeof updateFixtureTypeSchema>>({
   model: () => getDb().FixtureType,

@@ -1,154 +1,55 @@
 import "server-only";
-import { getDb, type Fixture, type FixtureType, type FocusPoint, type Position } from "@/models";
+import { getDb, type Fixture } from "@/models";
 import { AppError, notFound } from "@/lib/errors";
 import type { FixtureCreate, FixturePatch } from "@/lib/validation/fixture";
-import { computeFixtureGeometry, type FixtureAim, type FixtureGeometry } from "@/lib/rig/fixture-geometry";
+import type { FixtureDto, FixtureRecord } from "@/lib/dto/fixture";
+import { emptyFixture, FIXTURE_FIELDS } from "@/lib/rig/fixture-fields";
+import { fixtureJoiner, joinFixtures } from "@/lib/rig/fixture-join";
 import { unitSortKey } from "@/lib/rig/unit-number";
-import { iso, versionedUpdate } from "./versioned";
+import { plain } from "./plain";
+import { jsonColumn } from "./json-column";
+import { versionedUpdate } from "./versioned";
 import { recordChange } from "./changes";
 import { requireProduction } from "./productions";
 
-export type FixtureRecord = {
-  id: number;
-  productionId: number;
-  positionId: number;
-  fixtureTypeId: number;
-  focusPointId: number | null;
-  unitNumber: string;
-  bodyKey: string | null;
-  cell: number | null;
-  channel: number | null;
-  universe: number | null;
-  address: number | null;
-  dmxMode: string | null;
-  footprint: number | null;
-  circuit: string | null;
-  dimmer: string | null;
-  colour: string | null;
-  gobo: string | null;
-  purpose: string | null;
-  shutterCuts: Fixture["shutterCuts"];
-  irisPercent: number | null;
-  notes: string | null;
-  focusNotes: string | null;
-  focusPhotoUploadId: number | null;
-  goboRotationDeg: number | null;
-  barnDoorTop: string | null;
-  barnDoorBottom: string | null;
-  barnDoorLeft: string | null;
-  barnDoorRight: string | null;
-  hung: boolean;
-  focused: boolean;
-  focusedAt: string | null;
-  focusedBy: number | null;
-  version: number;
-  updatedAt: string;
-} & FixtureAim;
-
-export type FixtureDto = FixtureRecord & {
-  positionName: string;
-  typeName: string;
-  family: string;
-  focusPointName: string | null;
-  computed: FixtureGeometry;
-};
+// Every registry field, then identity and bookkeeping: the keys of FixtureRecord.
+const RECORD_KEYS = ["id", "productionId", ...FIXTURE_FIELDS.map((f) => f.attribute), "focusedAt", "focusedBy", "version", "updatedAt"] as const;
 
 export function toFixtureRecord(f: Fixture): FixtureRecord {
-  return {
-    id: f.id,
-    productionId: f.productionId,
-    positionId: f.positionId,
-    fixtureTypeId: f.fixtureTypeId,
-    focusPointId: f.focusPointId,
-    unitNumber: f.unitNumber,
-    bodyKey: f.bodyKey,
-    cell: f.cell,
-    channel: f.channel,
-    universe: f.universe,
-    address: f.address,
-    dmxMode: f.dmxMode,
-    footprint: f.footprint,
-    circuit: f.circuit,
-    dimmer: f.dimmer,
-    colour: f.colour,
-    gobo: f.gobo,
-    purpose: f.purpose,
-    x: f.x,
-    y: f.y,
-    lensHeight: f.lensHeight,
-    focusX: f.focusX,
-    focusY: f.focusY,
-    aim: f.aim,
-    coneDeg: f.coneDeg,
-    softnessDeg: f.softnessDeg,
-    shutterCuts: f.shutterCuts,
-    irisPercent: f.irisPercent,
-    notes: f.notes,
-    focusNotes: f.focusNotes,
-    focusPhotoUploadId: f.focusPhotoUploadId ?? null,
-    goboRotationDeg: f.goboRotationDeg ?? null,
-    barnDoorTop: f.barnDoorTop ?? null,
-    barnDoorBottom: f.barnDoorBottom ?? null,
-    barnDoorLeft: f.barnDoorLeft ?? null,
-    barnDoorRight: f.barnDoorRight ?? null,
-    hung: Boolean(f.hung),
-    focused: Boolean(f.focused),
-    focusedAt: iso(f.focusedAt),
-    focusedBy: f.focusedBy,
-    version: f.version,
-    updatedAt: iso(f.updatedAt)!,
-  };
+  const record = plain(f as unknown as Record<string, unknown>, RECORD_KEYS) as unknown as FixtureRecord;
+  // Booleans are TINYINT in MariaDB and a JSON column can arrive as text on a raw read.
+  record.hung = Boolean(record.hung);
+  record.focused = Boolean(record.focused);
+  record.shutterCuts = jsonColumn(record.shutterCuts);
+  return record;
 }
 
-type Related = { positions: Map<number, Position>; types: Map<number, FixtureType>; points: Map<number, FocusPoint> };
-
-async function loadRelated(productionId: number): Promise<Related> {
+async function joinerFor(productionId: number, headHeight: number) {
   const { Position, FixtureType, FocusPoint } = getDb();
   const [positions, types, points] = await Promise.all([
     Position.findAll({ where: { productionId } }),
     FixtureType.findAll({ where: { productionId } }),
     FocusPoint.findAll({ where: { productionId } }),
   ]);
-  return {
-    positions: new Map(positions.map((p) => [p.id, p])),
-    types: new Map(types.map((t) => [t.id, t])),
-    points: new Map(points.map((p) => [p.id, p])),
-  };
-}
-
-function toFixtureDto(f: Fixture, rel: Related, headHeight: number): FixtureDto {
-  const position = rel.positions.get(f.positionId)!;
-  const type = rel.types.get(f.fixtureTypeId)!;
-  const point = f.focusPointId ? rel.points.get(f.focusPointId) ?? null : null;
-  const record = toFixtureRecord(f);
-  return {
-    ...record,
-    positionName: position.name,
-    typeName: type.name,
-    family: type.family,
-    focusPointName: point?.name ?? null,
-    computed: computeFixtureGeometry({ ...record, focusPoint: point, position, type }, headHeight),
-  };
+  return { join: fixtureJoiner({ positions, types, points }, headHeight), positions: new Map(positions.map((p) => [p.id, p])) };
 }
 
 /** Every fixture of a production in hanging order (position order, then unit number), with computed geometry. */
 export async function getFixturesByProduction({ productionId }: { productionId: number }): Promise<FixtureDto[]> {
   const production = await requireProduction(productionId);
-  const [rows, rel] = await Promise.all([
+  const [rows, { join, positions }] = await Promise.all([
     getDb().Fixture.findAll({ where: { productionId }, order: [["positionId", "ASC"], ["unitSort", "ASC"], ["cell", "ASC"]] }),
-    loadRelated(productionId),
+    joinerFor(productionId, production.headHeight),
   ]);
-  const order = (id: number) => rel.positions.get(id)?.sortOrder ?? 0;
-  return rows
-    .map((f) => toFixtureDto(f, rel, production.headHeight))
-    .sort((a, b) => order(a.positionId) - order(b.positionId) || a.positionName.localeCompare(b.positionName) || 0);
+  const order = (id: number) => positions.get(id)?.sortOrder ?? 0;
+  return joinFixtures(rows.map(toFixtureRecord), join).sort((a, b) => order(a.positionId) - order(b.positionId) || a.positionName.localeCompare(b.positionName) || 0);
 }
 
 export async function getFixtureById({ productionId, fixtureId }: { productionId: number; fixtureId: number }): Promise<FixtureDto | null> {
   const production = await requireProduction(productionId);
   const row = await getDb().Fixture.findOne({ where: { productionId, id: fixtureId } });
   if (!row) return null;
-  return toFixtureDto(row, await loadRelated(productionId), production.headHeight);
+  return (await joinerFor(productionId, production.headHeight)).join(toFixtureRecord(row));
 }
 
 /** Checks that referenced rows belong to the same production and that the DMX range fits the universe. */
@@ -214,7 +115,7 @@ export async function createFixtures({ productionId, userId, inputs }: { product
   const ids = await sequelize.transaction(async (transaction) => {
     const created: number[] = [];
     for (const [i, input] of inputs.entries()) {
-      const merged = { focusPointId: null, address: null, footprint: null, ...input } as FixtureRecord;
+      const merged = { ...emptyFixture(), ...input } as unknown as FixtureRecord;
       await checkReferences(productionId, merged).catch((err) => {
         if (err instanceof AppError && inputs.length > 1) err.message = `Fixture ${i + 1}: ${err.message}`;
         throw err;
@@ -232,15 +133,6 @@ export async function createFixtures({ productionId, userId, inputs }: { product
   });
   const all = await getFixturesByProduction({ productionId });
   return all.filter((f) => ids.includes(f.id));
-}
-
-function emptyFixture() {
-  return {
-    focusPointId: null, bodyKey: null, cell: null, channel: null, universe: null, address: null, dmxMode: null, footprint: null,
-    circuit: null, dimmer: null, colour: null, gobo: null, purpose: null, lensHeight: null, focusX: null, focusY: null,
-    coneDeg: null, softnessDeg: null, shutterCuts: null, irisPercent: null, notes: null, focusNotes: null, focusedAt: null, focusedBy: null,
-    focusPhotoUploadId: null, goboRotationDeg: null, barnDoorTop: null, barnDoorBottom: null, barnDoorLeft: null, barnDoorRight: null,
-  };
 }
 
 /** Deletes fixtures of this production by id, recording each; unknown ids are a 404 and nothing is deleted. */

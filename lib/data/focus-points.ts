@@ -3,20 +3,12 @@ import { literal } from "sequelize";
 import { getDb, type FocusPoint } from "@/models";
 import type { z } from "zod";
 import type { createFocusPointSchema, updateFocusPointSchema } from "@/lib/validation/rig";
-import { iso } from "./versioned";
+import type { FocusPointDto } from "@/lib/dto/plan";
+import { plain } from "./plain";
 import { productionCrud } from "./production-crud";
 
-export type FocusPointDto = { id: number; productionId: number; name: string; x: number; y: number; version: number; updatedAt: string };
 
-export const toFocusPointDto = (p: FocusPoint): FocusPointDto => ({
-  id: p.id,
-  productionId: p.productionId,
-  name: p.name,
-  x: p.x,
-  y: p.y,
-  version: p.version,
-  updatedAt: iso(p.updatedAt)!,
-});
+export const toFocusPointDto = (p: FocusPoint): FocusPointDto => plain(p, ["id", "productionId", "name", "x", "y", "version", "updatedAt"]);
 
 const focusPoints = productionCrud<FocusPoint, FocusPointDto, z.infer<typeof createFocusPointSchema>, z.infer<typeof updateFocusPointSchema>>({
   model: () => getDb().FocusPoint,

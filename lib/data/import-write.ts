@@ -3,6 +3,7 @@ import { QueryTypes, type Transaction } from "sequelize";
 import { getDb } from "@/models";
 import { AppError } from "@/lib/errors";
 import { unitSortKey } from "@/lib/rig/unit-number";
+import { emptyFixture } from "@/lib/rig/fixture-fields";
 import { STARTER_TYPES } from "@/lib/rig/starter-types";
 import { isPointHung, type PositionKind } from "@/lib/rig/position-kinds";
 import type { ImportPlanResult } from "@/lib/rig/import-plan";
@@ -53,11 +54,8 @@ async function createTypes(productionId: number, names: string[], transaction: T
   return new Map(created.map((t) => [lower(t.name), t.id]));
 }
 
-const EMPTY = {
-  focusPointId: null, bodyKey: null, cell: null, channel: null, universe: null, address: null, dmxMode: null, footprint: null, circuit: null, dimmer: null,
-  colour: null, gobo: null, purpose: null, lensHeight: null, focusX: null, focusY: null, coneDeg: null, softnessDeg: null, shutterCuts: null, irisPercent: null,
-  notes: null, focusNotes: null, focusedAt: null, focusedBy: null, aim: "deck" as const, hung: false, focused: false,
-};
+// Every column a new row may leave out, with the value the table gives it (the registry's defaults).
+const EMPTY: Record<string, unknown> = emptyFixture();
 
 type UpdatePlan = Extract<ImportPlanResult["plans"][number], { action: "update" }>;
 
@@ -111,7 +109,7 @@ function createdRecord(attrs: string[], row: unknown[], id: number) {
   for (let i = 0; i < attrs.length; i++) {
     const a = attrs[i];
     const v = row[i];
-    if (a !== "productionId" && a !== "unitSort" && v != null && v !== (EMPTY as Record<string, unknown>)[a]) after[a] = v;
+    if (a !== "productionId" && a !== "unitSort" && v != null && v !== EMPTY[a]) after[a] = v;
   }
   after.version = 1;
   return after;
@@ -142,7 +140,7 @@ export async function writeImport({ productionId, userId, plan, progress }: { pr
       const v = c.values as Record<string, unknown>;
       const positionId = (v.positionId as number | null) ?? newPositions.get(lower(c.positionName))!.id;
       const pos = positions.get(positionId)!;
-      const row = attrs.map((a) => (a in v ? v[a] : ((EMPTY as Record<string, unknown>)[a] ?? null)));
+      const row = attrs.map((a) => (a in v ? v[a] : (EMPTY[a] ?? null)));
       row[at.get("positionId")!] = positionId;
       row[at.get("fixtureTypeId")!] = (v.fixtureTypeId as number | null) ?? newTypes.get(lower(c.typeName))!;
       // Without X/Y a new unit sits at the middle of its position until someone places it on the plot.

@@ -8,30 +8,17 @@ import { normaliseHeader, suggestMapping, type ColumnTarget } from "@/lib/io/fie
 import { missingRequiredColumns, rowChecker, type LengthUnit, type RowError } from "@/lib/io/rows";
 import type { RawTable } from "@/lib/io/raw-table";
 import { planImport, type ImportPlanResult, type Snapshot } from "@/lib/rig/import-plan";
+import type { ImportPreview } from "@/lib/dto/import";
+import type { DmxMode } from "@/lib/dto/fixture-type";
+import { attributeOf } from "@/lib/rig/fixture-fields";
 import { requireProduction } from "./productions";
+import { jsonColumn } from "./json-column";
 import { writeImport } from "./import-write";
 import type { Progress } from "./import-progress";
 
 export type ImportRequest = { bytes: Uint8Array; fileName: string; sheet?: string; mapping?: ColumnTarget[]; lengthUnit?: LengthUnit; createMissing: boolean };
 export type { Progress };
 
-export type ImportPreview = {
-  fileName: string;
-  format: "csv" | "xlsx";
-  sheet: string | null;
-  sheetNames: string[];
-  headers: string[];
-  sample: string[][];
-  mapping: ColumnTarget[];
-  lengthUnit: LengthUnit;
-  notes: string[];
-  rowCount: number;
-  errors: RowError[]; // at most MAX_ERRORS, in row order
-  errorCount: number;
-  counts: ImportPlanResult["counts"];
-  newPositions: string[];
-  newTypes: string[];
-};
 
 const MAX_ERRORS = 500;
 
@@ -39,12 +26,11 @@ const MAX_ERRORS = 500;
 // the file's columns map to (the only ones it can compare or change); a rig of thousands of units
 // then costs a fraction of reading every column.
 const SNAPSHOT_BASE = ["id", "version", "positionId", "fixtureTypeId", "unitNumber", "address", "footprint"];
-const ATTRIBUTE_OF: Partial<Record<ColumnTarget, string>> = { position: "positionId", type: "fixtureTypeId", focusPoint: "focusPointId" };
 
 async function loadSnapshot(productionId: number, mapping: ColumnTarget[]): Promise<Snapshot> {
   const { Position, FixtureType, FocusPoint, Fixture } = getDb();
   const known = Fixture.getAttributes() as Record<string, unknown>;
-  const mapped = mapping.filter((k) => k !== "ignore").map((k) => ATTRIBUTE_OF[k] ?? k);
+  const mapped = mapping.filter((k) => k !== "ignore").map(attributeOf);
   const attributes = [...new Set([...SNAPSHOT_BASE, ...mapped])].filter((a) => a in known);
   const [positions, types, focusPoints, fixtures] = await Promise.all([
     Position.findAll({ where: { productionId }, raw: true }),
@@ -56,7 +42,7 @@ async function loadSnapshot(productionId: number, mapping: ColumnTarget[]): Prom
   if (bools.length) for (const f of fixtures as unknown as Array<Record<string, unknown>>) for (const b of bools) f[b] = Boolean(f[b]);
   return {
     positions,
-    types: types.map((t) => ({ ...t, dmxModes: typeof t.dmxModes === "string" ? JSON.parse(t.dmxModes) : t.dmxModes })),
+    types: types.map((t) => ({ ...t, dmxModes: jsonColumn<DmxMode[]>(t.dmxModes) })),
     focusPoints,
     fixtures: fixtures as unknown as Snapshot["fixtures"],
   };
@@ -65,7 +51,7 @@ async function loadSnapshot(productionId: number, mapping: ColumnTarget[]): Prom
 export async function getRememberedMapping(productionId: number) {
   const row = await getDb().ImportMapping.findOne({ where: { productionId } });
   if (!row) return { columns: {} as Record<string, ColumnTarget>, lengthUnit: null };
-  const columns = typeof row.columns === "string" ? JSON.parse(row.columns) : row.columns;
+  const columns = jsonColumn<Record<string, ColumnTarget>>(row.columns);
   return { columns: columns as Record<string, ColumnTarget>, lengthUnit: row.lengthUnit };
 }
 

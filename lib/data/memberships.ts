@@ -1,13 +1,13 @@
 import "server-only";
 import { getDb } from "@/models";
-import type { Role } from "@/lib/auth/roles";
+import type { MembershipDto, TeamMemberDto } from "@/lib/dto/people";
+import { plain } from "./plain";
 
-export type MembershipDto = { userId: number; productionId: number; role: Role; isOwner: boolean };
-export type TeamMemberDto = MembershipDto & { name: string; email: string };
+const MEMBERSHIP_KEYS = ["userId", "productionId", "role", "isOwner"] as const;
 
 export async function getMembership({ userId, productionId }: { userId: number; productionId: number }): Promise<MembershipDto | null> {
   const row = await getDb().Membership.findOne({ where: { userId, productionId } });
-  return row ? { userId: row.userId, productionId: row.productionId, role: row.role, isOwner: row.isOwner } : null;
+  return row ? plain(row, MEMBERSHIP_KEYS) : null;
 }
 
 export async function getTeamByProduction({ productionId }: { productionId: number }): Promise<TeamMemberDto[]> {
@@ -19,6 +19,6 @@ export async function getTeamByProduction({ productionId }: { productionId: numb
   });
   return rows.map((m) => {
     const user = (m as unknown as { user: { name: string; email: string } }).user;
-    return { userId: m.userId, productionId: m.productionId, role: m.role, isOwner: m.isOwner, name: user.name, email: user.email };
+    return { ...plain(m, MEMBERSHIP_KEYS), name: user.name, email: user.email };
   });
 }

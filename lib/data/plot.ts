@@ -1,23 +1,16 @@
 import "server-only";
 import { getDb } from "@/models";
-import { getPositionsByProduction, type PositionDto } from "./positions";
-import { getFixturesByProduction, type FixtureDto } from "./fixtures";
-import { getFixtureTypesByProduction, type FixtureTypeDto } from "./fixture-types";
-import { getFocusPointsByProduction, type FocusPointDto } from "./focus-points";
-import { getAreaZonesByProduction, type AreaZoneDto } from "./area-zones";
-import { getLandmarksByProduction, type LandmarkDto } from "./landmarks";
-import { getUploadsByProduction, type UploadDto } from "./uploads";
-import { PLOT_FIXTURE_FIELDS, toPlotFixtureWire, type PlotFixtureRecord, type PlotFixtureWire } from "@/lib/plot/slim-fixtures";
-
-export type PlotData = {
-  positions: PositionDto[];
-  fixtures: FixtureDto[];
-  fixtureTypes: FixtureTypeDto[];
-  focusPoints: FocusPointDto[];
-  areaZones: AreaZoneDto[];
-  landmarks: LandmarkDto[];
-  underlays: UploadDto[];
-};
+import type { PlotData, PlotWireData } from "@/lib/dto/plot";
+import { PLOT_FIXTURE_FIELDS, toPlotFixtureWire, type PlotFixtureRecord } from "@/lib/plot/slim-fixtures";
+import { getPositionsByProduction } from "./positions";
+import { getFixturesByProduction } from "./fixtures";
+import { getFixtureTypesByProduction } from "./fixture-types";
+import { getFocusPointsByProduction } from "./focus-points";
+import { getAreaZonesByProduction } from "./area-zones";
+import { getLandmarksByProduction } from "./landmarks";
+import { getUploadsByProduction } from "./uploads";
+import { plain } from "./plain";
+import { jsonColumn } from "./json-column";
 
 /** Everything the plot draws, read in parallel for the first paint. */
 export async function getPlotData({ productionId }: { productionId: number }): Promise<PlotData> {
@@ -32,8 +25,6 @@ export async function getPlotData({ productionId }: { productionId: number }): P
   ]);
   return { positions, fixtures, fixtureTypes, focusPoints, areaZones, landmarks, underlays };
 }
-
-export type PlotWireData = Omit<PlotData, "fixtures"> & { fixtures: PlotFixtureWire[] };
 
 /**
  * The editor's read: fixtures as short arrays of what the plot draws (lib/plot/slim-fixtures), no
@@ -66,11 +57,9 @@ async function getPlotFixtureRecords(productionId: number): Promise<PlotFixtureR
     raw: true,
   })) as unknown as Array<Record<string, unknown>>;
   return rows.map((f) => {
-    const out: Record<string, unknown> = {};
-    for (const k of PLOT_FIXTURE_FIELDS) out[k] = f[k];
-    // Without the model's getter a JSON column may arrive as its text.
-    if (typeof out.shutterCuts === "string") out.shutterCuts = JSON.parse(out.shutterCuts);
-    return out as PlotFixtureRecord;
+    const out = plain(f, PLOT_FIXTURE_FIELDS) as PlotFixtureRecord;
+    out.shutterCuts = jsonColumn(out.shutterCuts);
+    return out;
   });
 }
 

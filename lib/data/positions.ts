@@ -2,42 +2,14 @@ import "server-only";
 import { getDb, type Position } from "@/models";
 import type { z } from "zod";
 import type { createPositionSchema, updatePositionSchema } from "@/lib/validation/rig";
-import { iso } from "./versioned";
+import type { PositionDto } from "@/lib/dto/plan";
+import { plain } from "./plain";
 import { productionCrud } from "./production-crud";
 
-export type PositionDto = {
-  id: number;
-  productionId: number;
-  name: string;
-  kind: Position["kind"];
-  x1: number;
-  y1: number;
-  x2: number | null;
-  y2: number | null;
-  trimHeight: number;
-  ratedLoadKg: number | null;
-  sortOrder: number;
-  version: number;
-  updatedAt: string;
-};
 
-export function toPositionDto(p: Position): PositionDto {
-  return {
-    id: p.id,
-    productionId: p.productionId,
-    name: p.name,
-    kind: p.kind,
-    x1: p.x1,
-    y1: p.y1,
-    x2: p.x2,
-    y2: p.y2,
-    trimHeight: p.trimHeight,
-    ratedLoadKg: p.ratedLoadKg,
-    sortOrder: p.sortOrder,
-    version: p.version,
-    updatedAt: iso(p.updatedAt)!,
-  };
-}
+const POSITION_KEYS = ["id", "productionId", "name", "kind", "x1", "y1", "x2", "y2", "trimHeight", "ratedLoadKg", "sortOrder", "version", "updatedAt"] as const;
+
+export const toPositionDto = (p: Position): PositionDto => plain(p, POSITION_KEYS);
 
 const positions = productionCrud<Position, PositionDto, z.infer<typeof createPositionSchema>, z.infer<typeof updatePositionSchema>>({
   model: () => getDb().Position,

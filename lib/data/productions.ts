@@ -1,36 +1,18 @@
 import "server-only";
 import { getDb, type Production } from "@/models";
 import { AppError, notFound } from "@/lib/errors";
-import type { Role } from "@/lib/auth/roles";
 import type { ProductionSettings } from "@/lib/validation/production";
-import { iso, versionedUpdate } from "./versioned";
+import type { ProductionDto, ProductionListItem, ProductionOverview } from "@/lib/dto/production";
+import { plain } from "./plain";
+import { versionedUpdate } from "./versioned";
 import { recordChange } from "./changes";
 
-export type ProductionDto = ProductionSettings & { id: number; version: number; createdAt: string; updatedAt: string };
-export type ProductionListItem = ProductionDto & { role: Role; isOwner: boolean; fixtureCount: number };
+const PRODUCTION_KEYS = [
+  "id", "name", "venue", "displayUnits", "datumName", "headHeight", "backWallY", "prosceniumWidth", "prosceniumHeight", "stageWidth", "stageDepth",
+  "apronDepth", "voltage", "derating", "numberingRule", "version", "createdAt", "updatedAt",
+] as const;
 
-export function toProductionDto(p: Production): ProductionDto {
-  return {
-    id: p.id,
-    name: p.name,
-    venue: p.venue,
-    displayUnits: p.displayUnits,
-    datumName: p.datumName,
-    headHeight: p.headHeight,
-    backWallY: p.backWallY,
-    prosceniumWidth: p.prosceniumWidth,
-    prosceniumHeight: p.prosceniumHeight,
-    stageWidth: p.stageWidth,
-    stageDepth: p.stageDepth,
-    apronDepth: p.apronDepth,
-    voltage: p.voltage,
-    derating: p.derating,
-    numberingRule: p.numberingRule,
-    version: p.version,
-    createdAt: iso(p.createdAt)!,
-    updatedAt: iso(p.updatedAt)!,
-  };
-}
+export const toProductionDto = (p: Production): ProductionDto => plain(p, PRODUCTION_KEYS);
 
 export async function getProductionsByUser({ userId }: { userId: number }): Promise<ProductionListItem[]> {
   const { Membership, Production, Fixture } = getDb();
@@ -92,10 +74,6 @@ export async function updateProductionSettings({ productionId, version, changes,
   });
 }
 
-export type ProductionOverview = {
-  counts: { positions: number; fixtures: number; cues: number; focusPoints: number; hung: number; focused: number };
-  warnings: string[];
-};
 
 export async function getProductionOverview({ productionId }: { productionId: number }): Promise<ProductionOverview> {
   const { Position, Fixture, Cue, FocusPoint } = getDb();

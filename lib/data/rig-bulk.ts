@@ -3,7 +3,9 @@ import { getDb } from "@/models";
 import { AppError } from "@/lib/errors";
 import { addressRun, channelRun } from "@/lib/rig/dmx-ranges";
 import type { BulkEdit } from "@/lib/validation/rig-bulk";
+import type { DmxMode } from "@/lib/dto/fixture-type";
 import { toFixtureRecord } from "./fixtures";
+import { jsonColumn } from "./json-column";
 import { versionedUpdate } from "./versioned";
 import { recordChange } from "./changes";
 
@@ -29,9 +31,8 @@ export async function bulkEditFixtures({ productionId, userId, edit }: { product
       const types = new Map((await FixtureType.findAll({ where: { productionId }, transaction })).map((t) => [t.id, t]));
       const footprints = ids.map((id) => {
         const f = byId.get(id)!;
-        const modes = types.get(f.fixtureTypeId)?.dmxModes;
-        const parsed = typeof modes === "string" ? JSON.parse(modes) : modes;
-        return f.footprint ?? parsed?.find((m: { name: string }) => m.name === f.dmxMode)?.footprint ?? parsed?.[0]?.footprint ?? 1;
+        const modes = jsonColumn<DmxMode[] | null>(types.get(f.fixtureTypeId)?.dmxModes ?? null);
+        return f.footprint ?? modes?.find((m) => m.name === f.dmxMode)?.footprint ?? modes?.[0]?.footprint ?? 1;
       });
       try {
         values = addressRun(footprints, { universe: edit.action.universe, address: edit.action.address });

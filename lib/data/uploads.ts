@@ -7,47 +7,18 @@ import { AppError, notFound } from "@/lib/errors";
 import { fileStore, MAX_UPLOAD_BYTES } from "@/lib/storage";
 import { imageSize, sniffImageType } from "@/lib/storage/sniff";
 import type { updateUploadSchema } from "@/lib/validation/plot";
-import { iso, versionedUpdate } from "./versioned";
+import type { UploadDto } from "@/lib/dto/upload";
+import { plain } from "./plain";
+import { versionedUpdate } from "./versioned";
 import { recordChange } from "./changes";
 
-export type UploadDto = {
-  id: number;
-  productionId: number;
-  kind: UploadKind;
-  fileName: string;
-  contentType: string;
-  sizeBytes: number;
-  widthPx: number | null;
-  heightPx: number | null;
-  metresPerPixel: number;
-  offsetX: number;
-  offsetY: number;
-  rotationDeg: number;
-  opacity: number;
-  locked: boolean;
-  url: string;
-  version: number;
-  updatedAt: string;
-};
+
+const UPLOAD_KEYS = ["id", "productionId", "kind", "fileName", "contentType", "sizeBytes", "widthPx", "heightPx", "metresPerPixel", "offsetX", "offsetY", "rotationDeg", "opacity", "version", "updatedAt"] as const;
 
 export const toUploadDto = (u: Upload): UploadDto => ({
-  id: u.id,
-  productionId: u.productionId,
-  kind: u.kind,
-  fileName: u.fileName,
-  contentType: u.contentType,
-  sizeBytes: u.sizeBytes,
-  widthPx: u.widthPx,
-  heightPx: u.heightPx,
-  metresPerPixel: u.metresPerPixel,
-  offsetX: u.offsetX,
-  offsetY: u.offsetY,
-  rotationDeg: u.rotationDeg,
-  opacity: u.opacity,
-  locked: Boolean(u.locked),
+  ...plain(u, UPLOAD_KEYS),
+  locked: Boolean(u.locked), // TINYINT in MariaDB
   url: `/api/productions/${u.productionId}/uploads/${u.id}/file`,
-  version: u.version,
-  updatedAt: iso(u.updatedAt)!,
 });
 
 export async function getUploadsByProduction({ productionId, kind }: { productionId: number; kind?: UploadKind }): Promise<UploadDto[]> {

@@ -3,8 +3,9 @@ import { UniqueConstraintError } from "sequelize";
 import { getDb } from "@/models";
 import { AppError } from "@/lib/errors";
 import { DUMMY_HASH, hashPassword, verifyPassword } from "@/lib/auth/password";
+import type { UserDto } from "@/lib/dto/people";
 
-export type UserDto = { id: number; email: string; name: string };
+const toUserDto = (u: { id: number; email: string; name: string }): UserDto => ({ id: u.id, email: u.email, name: u.name });
 
 const normalise = (email: string) => email.trim().toLowerCase();
 
@@ -14,14 +15,14 @@ export async function authenticate({ email, password }: { email: string; passwor
   const user = await User.findOne({ where: { email: normalise(email) } });
   const ok = await verifyPassword(password, user?.passwordHash ?? DUMMY_HASH);
   if (!user || !ok) return null;
-  return { id: user.id, email: user.email, name: user.name };
+  return toUserDto(user);
 }
 
 export async function createUser({ email, name, password }: { email: string; name: string; password: string }): Promise<UserDto> {
   const { User } = getDb();
   try {
     const user = await User.create({ email: normalise(email), name: name.trim(), passwordHash: await hashPassword(password) });
-    return { id: user.id, email: user.email, name: user.name };
+    return toUserDto(user);
   } catch (err) {
     if (err instanceof UniqueConstraintError) {
       throw new AppError("conflict", "An account with that e-mail already exists. Sign in instead.", {
@@ -34,5 +35,5 @@ export async function createUser({ email, name, password }: { email: string; nam
 
 export async function getUserByEmail(email: string): Promise<UserDto | null> {
   const user = await getDb().User.findOne({ where: { email: normalise(email) } });
-  return user ? { id: user.id, email: user.email, name: user.name } : null;
+  return user ? toUserDto(user) : null;
 }

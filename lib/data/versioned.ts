@@ -34,5 +34,3 @@ export async function versionedUpdate<M extends Model, Dto>(opts: {
   const after = await model.findOne({ where, transaction });
   return { before, after: after! };
 }
-
-export const iso = (d: Date | string | null | undefined) => (d == null ? null : new Date(d).toISOString());

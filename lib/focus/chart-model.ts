@@ -1,6 +1,6 @@
 // The focus chart of one fixture: every value the crew needs, already in the production's units and in
 // deck words, so the screen, the printed page, the PDF and the Excel sheet all say the same thing.
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { FixtureDto } from "@/lib/dto/fixture";
 import {
   describeBeam, describePoint, edgeWord, formatLength, profileShapeOf, type Family, type PlanePool, type Point, type Units,
 } from "@/lib/optics";

@@ -1,6 +1,6 @@
 // Filters and print options, read from the URL (bookmarkable) by the page, the print view and the PDF route.
 import { z } from "zod";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { FixtureDto } from "@/lib/dto/fixture";
 import { CHARTS_PER_PAGE, type ChartsPerPage } from "./pages";
 import { isTimeZone } from "./words";
 

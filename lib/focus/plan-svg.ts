@@ -2,7 +2,7 @@
 // (strong) and the pools of its neighbours on the same focus point (faint), so the crew can see the
 // overlap they are matching. Plan to scale, audience at the bottom.
 import { ellipseToPolygon, type Ellipse, type Point } from "@/lib/optics";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { FixtureDto } from "@/lib/dto/fixture";
 import type { Landmark } from "./landmarks";
 import { escapeHtml } from "./escape";
 import { drawnPool } from "./diagram";

@@ -1,51 +1,25 @@
-// The fixture fields a file's columns can map to, with the header words we recognise for each.
-// Export writes exactly these headers (plus units), so an exported file maps itself on re-import.
+// The fixture fields a file's columns can map to, with the header words we recognise for each: the
+// registry's fields that have a column (lib/rig/fixture-fields.ts). Export writes exactly these headers
+// (plus units), so an exported file maps itself on re-import.
+import { FIXTURE_FIELDS, type FileField } from "@/lib/rig/fixture-fields";
 
-export const IMPORT_FIELDS = [
-  { key: "position", header: "Position", kind: "name", aliases: ["hanging position", "pipe", "location", "pos"] },
-  { key: "unitNumber", header: "Unit", kind: "unit", aliases: ["unit number", "unit no", "unit #", "unit no."] },
-  { key: "type", header: "Type", kind: "name", aliases: ["fixture type", "instrument type", "fixture", "instrument"] },
-  { key: "channel", header: "Channel", kind: "int", aliases: ["chan", "ch"] },
-  { key: "universe", header: "Universe", kind: "int", aliases: ["univ", "dmx universe"] },
-  { key: "address", header: "Address", kind: "int", aliases: ["dmx address", "addr", "start address", "dmx"] },
-  { key: "dmxMode", header: "Mode", kind: "text", aliases: ["dmx mode", "personality"] },
-  { key: "footprint", header: "Footprint", kind: "int", aliases: ["slots", "channels used", "dmx footprint"] },
-  { key: "circuit", header: "Circuit", kind: "text", aliases: ["circ", "circuit number"] },
-  { key: "dimmer", header: "Dimmer", kind: "text", aliases: ["dim", "dimmer number"] },
-  { key: "colour", header: "Colour", kind: "text", aliases: ["color", "gel", "colour and diffusion", "color and diffusion"] },
-  { key: "gobo", header: "Gobo", kind: "text", aliases: ["pattern", "template"] },
-  { key: "purpose", header: "Purpose", kind: "text", aliases: ["use", "function", "focus purpose"] },
-  { key: "x", header: "X", kind: "length", aliases: ["x position", "across"] },
-  { key: "y", header: "Y", kind: "length", aliases: ["y position", "depth"] },
-  { key: "lensHeight", header: "Lens height", kind: "length", aliases: ["height", "z"] },
-  { key: "focusPoint", header: "Focus point", kind: "optionalName", aliases: ["focus mark", "area"] },
-  { key: "focusX", header: "Focus X", kind: "length", aliases: [] },
-  { key: "focusY", header: "Focus Y", kind: "length", aliases: [] },
-  { key: "aim", header: "Aim at", kind: "aim", aliases: ["aim", "aim height", "focus height"] },
-  { key: "coneDeg", header: "Cone", kind: "angle", aliases: ["cone angle", "beam", "field angle", "zoom"] },
-  { key: "softnessDeg", header: "Softness", kind: "angle", aliases: ["edge", "edge softness"] },
-  { key: "irisPercent", header: "Iris", kind: "number", aliases: ["iris %"] },
-  { key: "goboRotationDeg", header: "Gobo rotation", kind: "angle", aliases: ["gobo angle", "gobo orientation", "gobo rot"] },
-  { key: "barnDoorTop", header: "Barn door top", kind: "text", aliases: ["barn doors top", "top barn door", "top door"] },
-  { key: "barnDoorBottom", header: "Barn door bottom", kind: "text", aliases: ["barn doors bottom", "bottom barn door", "bottom door"] },
-  { key: "barnDoorLeft", header: "Barn door left", kind: "text", aliases: ["barn doors left", "left barn door", "left door"] },
-  { key: "barnDoorRight", header: "Barn door right", kind: "text", aliases: ["barn doors right", "right barn door", "right door"] },
-  { key: "hung", header: "Hung", kind: "bool", aliases: [] },
-  { key: "focused", header: "Focused", kind: "bool", aliases: [] },
-  { key: "notes", header: "Notes", kind: "text", aliases: ["note", "comments"] },
-  { key: "focusNotes", header: "As-focused notes", kind: "text", aliases: ["focus notes", "as focused"] },
-  { key: "bodyKey", header: "Body", kind: "text", aliases: ["body key", "multicell body"] },
-  { key: "cell", header: "Cell", kind: "int", aliases: ["cell number"] },
-] as const;
-
-export type ImportKey = (typeof IMPORT_FIELDS)[number]["key"];
-export type FieldKind = (typeof IMPORT_FIELDS)[number]["kind"];
+export type ImportKey = FileField["key"];
+export type FieldKind = FileField["kind"];
 export type ColumnTarget = ImportKey | "ignore";
+export type ImportField = { key: ImportKey; attribute: string; header: string; kind: FieldKind; aliases: readonly string[] };
+
+export const IMPORT_FIELDS: readonly ImportField[] = FIXTURE_FIELDS.filter((f): f is FileField => f.width !== null).map((f) => ({
+  key: f.key,
+  attribute: f.attribute,
+  header: f.header,
+  kind: f.kind,
+  aliases: f.aliases,
+}));
 
 /** Computed values that exports carry; recognised on the way back in and left alone. */
 export const COMPUTED_HEADERS = ["Throw", "Tilt", "Deck pool length", "Deck pool width", "Head pool length", "Head pool width", "Soft band far", "Soft band near"];
 
-export const FIELD_BY_KEY = new Map(IMPORT_FIELDS.map((f) => [f.key as ImportKey, f]));
+export const FIELD_BY_KEY: ReadonlyMap<ImportKey, ImportField> = new Map(IMPORT_FIELDS.map((f) => [f.key, f]));
 
 /** "X (m)" → "x"; "Unit #" → "unit #"; case and spacing do not matter. */
 export function normaliseHeader(header: string): string {

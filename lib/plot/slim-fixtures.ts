@@ -1,11 +1,10 @@
 // The plot's fixtures on the wire: one short array per fixture with only what the editor draws and
 // edits, positions rounded to millimetres. The browser rebuilds each fixture's geometry with the same
 // pure module the server uses, so the page no longer embeds ~2 MB of precomputed pools at 1,500 units.
-import { computeFixtureGeometry } from "@/lib/rig/fixture-geometry";
-import type { FixtureDto, FixtureRecord } from "@/lib/data/fixtures";
-import type { PositionDto } from "@/lib/data/positions";
-import type { FixtureTypeDto } from "@/lib/data/fixture-types";
-import type { FocusPointDto } from "@/lib/data/focus-points";
+import { fixtureJoiner, joinFixtures } from "@/lib/rig/fixture-join";
+import type { FixtureJoined, FixtureRecord } from "@/lib/dto/fixture";
+import type { FixtureTypeDto } from "@/lib/dto/fixture-type";
+import type { FocusPointDto, PositionDto } from "@/lib/dto/plan";
 
 /** The fields the plot keeps; everything else (notes, DMX, circuit …) is read from the fixture route. */
 export const PLOT_FIXTURE_FIELDS = [
@@ -15,7 +14,7 @@ export const PLOT_FIXTURE_FIELDS = [
 type Field = (typeof PLOT_FIXTURE_FIELDS)[number];
 
 export type PlotFixtureRecord = Pick<FixtureRecord, Field>;
-export type PlotFixture = PlotFixtureRecord & Pick<FixtureDto, "positionName" | "typeName" | "family" | "focusPointName" | "computed">;
+export type PlotFixture = PlotFixtureRecord & FixtureJoined;
 export type PlotFixtureWire = unknown[];
 
 const LENGTHS = new Set<Field>(["x", "y", "lensHeight", "focusX", "focusY"]);
@@ -36,25 +35,7 @@ export function fromPlotFixtureWire(w: PlotFixtureWire): PlotFixtureRecord {
 
 type Related = { positions: PositionDto[]; fixtureTypes: FixtureTypeDto[]; focusPoints: FocusPointDto[] };
 
-/** Names and geometry for every record; fixtures whose position or type is missing are left out. */
+/** Names and geometry for every record (the API's own join); fixtures whose position or type is missing are left out. */
 export function expandPlotFixtures(records: PlotFixtureRecord[], rel: Related, headHeight: number): PlotFixture[] {
-  const positions = new Map(rel.positions.map((p) => [p.id, p]));
-  const types = new Map(rel.fixtureTypes.map((t) => [t.id, t]));
-  const points = new Map(rel.focusPoints.map((p) => [p.id, p]));
-  const out: PlotFixture[] = [];
-  for (const r of records) {
-    const position = positions.get(r.positionId);
-    const type = types.get(r.fixtureTypeId);
-    if (!position || !type) continue;
-    const point = r.focusPointId ? points.get(r.focusPointId) ?? null : null;
-    out.push({
-      ...r,
-      positionName: position.name,
-      typeName: type.name,
-      family: type.family,
-      focusPointName: point?.name ?? null,
-      computed: computeFixtureGeometry({ ...r, focusPoint: point, position, type }, headHeight),
-    });
-  }
-  return out;
+  return joinFixtures(records, fixtureJoiner({ positions: rel.positions, types: rel.fixtureTypes, points: rel.focusPoints }, headHeight));
 }

@@ -1,8 +1,10 @@
 // The rig's columns, shared by the table on screen and the exports, so a file written from any view
-// maps itself back on import. Values are SI; `exportValue` converts lengths to the production's unit
-// and says so in the header.
-import type { FixtureDto } from "@/lib/data/fixtures";
+// maps itself back on import. The stored columns are the field registry's (lib/rig/fixture-fields.ts),
+// in its order; the computed ones follow. Values are SI; `exportValue` converts lengths to the
+// production's unit and says so in the header.
+import type { FixtureDto } from "@/lib/dto/fixture";
 import type { ImportKey } from "@/lib/io/fields";
+import { FIXTURE_FIELDS, type FileField } from "@/lib/rig/fixture-fields";
 import { METRES_PER_FOOT } from "@/lib/optics";
 
 export type Units = "metric" | "imperial";
@@ -12,50 +14,48 @@ export type RigColumn = {
   header: string;
   kind: ColumnKind;
   importKey?: ImportKey; // absent: computed, never read back
+  /** The model attribute an edit of this column writes; absent: computed. */
+  attribute?: string;
+  /** Shown after the header in files: "%" for the iris; lengths and angles get theirs from `kind`. */
+  unit?: string;
   width: number;
   value: (f: FixtureDto) => string | number | boolean | null;
 };
 
-const col = (id: string, header: string, kind: ColumnKind, value: RigColumn["value"], width = 10, importKey?: ImportKey): RigColumn => ({ id, header, kind, value, width, importKey });
-const stored = <K extends keyof FixtureDto>(key: K & ImportKey, header: string, kind: ColumnKind, width = 10) =>
-  col(key, header, kind, (f) => f[key] as string | number | boolean | null, width, key);
+// Names, unit numbers and deck/head read and edit as text.
+const COLUMN_KIND: Record<FileField["kind"], ColumnKind> = {
+  name: "text",
+  optionalName: "text",
+  unit: "text",
+  text: "text",
+  aim: "text",
+  int: "int",
+  number: "number",
+  length: "length",
+  angle: "angle",
+  bool: "bool",
+};
+
+function storedColumn(f: FileField): RigColumn {
+  // A row named by its name shows the name (the DTO's positionName …), not the stored id.
+  const read = "shows" in f ? f.shows : f.attribute;
+  return {
+    id: f.key,
+    header: f.header,
+    kind: COLUMN_KIND[f.kind],
+    importKey: f.key,
+    attribute: f.attribute,
+    unit: f.unit === "%" ? "%" : undefined,
+    width: f.width,
+    value: (fx) => (fx as unknown as Record<string, string | number | boolean | null>)[read] ?? null,
+  };
+}
+
+const col = (id: string, header: string, kind: ColumnKind, value: RigColumn["value"], width = 10): RigColumn => ({ id, header, kind, value, width });
 const pool = (f: FixtureDto, plane: "deck" | "head") => (f.computed[plane]?.status === "ok" ? f.computed[plane] : null);
 
 export const RIG_COLUMNS: RigColumn[] = [
-  col("position", "Position", "text", (f) => f.positionName, 18, "position"),
-  col("unitNumber", "Unit", "text", (f) => f.unitNumber, 7, "unitNumber"),
-  col("type", "Type", "text", (f) => f.typeName, 22, "type"),
-  stored("channel", "Channel", "int", 9),
-  stored("universe", "Universe", "int", 9),
-  stored("address", "Address", "int", 9),
-  stored("dmxMode", "Mode", "text", 10),
-  stored("footprint", "Footprint", "int", 10),
-  stored("circuit", "Circuit", "text", 9),
-  stored("dimmer", "Dimmer", "text", 9),
-  stored("colour", "Colour", "text", 14),
-  stored("gobo", "Gobo", "text", 12),
-  stored("purpose", "Purpose", "text", 18),
-  stored("x", "X", "length", 9),
-  stored("y", "Y", "length", 9),
-  stored("lensHeight", "Lens height", "length", 12),
-  col("focusPoint", "Focus point", "text", (f) => f.focusPointName, 12, "focusPoint"),
-  stored("focusX", "Focus X", "length", 10),
-  stored("focusY", "Focus Y", "length", 10),
-  stored("aim", "Aim at", "text", 8),
-  stored("coneDeg", "Cone", "angle", 8),
-  stored("softnessDeg", "Softness", "angle", 9),
-  stored("irisPercent", "Iris", "number", 7),
-  stored("goboRotationDeg", "Gobo rotation", "angle", 10),
-  stored("barnDoorTop", "Barn door top", "text", 14),
-  stored("barnDoorBottom", "Barn door bottom", "text", 14),
-  stored("barnDoorLeft", "Barn door left", "text", 14),
-  stored("barnDoorRight", "Barn door right", "text", 14),
-  stored("hung", "Hung", "bool", 7),
-  stored("focused", "Focused", "bool", 8),
-  stored("notes", "Notes", "text", 24),
-  stored("focusNotes", "As-focused notes", "text", 24),
-  stored("bodyKey", "Body", "text", 8),
-  stored("cell", "Cell", "int", 6),
+  ...FIXTURE_FIELDS.filter((f): f is FileField => f.width !== null).map(storedColumn),
   col("throw", "Throw", "length", (f) => f.computed.throw, 9),
   col("deckLength", "Deck pool length", "length", (f) => pool(f, "deck")?.lengthAlong ?? null, 12),
   col("deckWidth", "Deck pool width", "length", (f) => pool(f, "deck")?.widthAcross ?? null, 12),
@@ -70,7 +70,7 @@ export const COLUMN_BY_ID = new Map(RIG_COLUMNS.map((c) => [c.id, c]));
 export function headerWithUnit(c: RigColumn, units: Units): string {
   if (c.kind === "length") return `${c.header} (${units === "metric" ? "m" : "ft"})`;
   if (c.kind === "angle") return `${c.header} (°)`;
-  if (c.id === "irisPercent") return `${c.header} (%)`;
+  if (c.unit) return `${c.header} (${c.unit})`;
   return c.header;
 }
 

@@ -10,6 +10,7 @@
 // add a fixture, or need a new position or type is refused, naming what it would change.
 import { forbiddenFields, can, type Member } from "@/lib/auth/policy";
 import { FIELD_BY_KEY, type ImportKey } from "@/lib/io/fields";
+import { attributeOf, keyOfAttribute } from "@/lib/rig/fixture-fields";
 import type { ParsedRow, RowError } from "@/lib/io/rows";
 
 export type SnapshotFixture = Record<string, unknown> & { id: number; version: number; positionId: number; fixtureTypeId: number; unitNumber: string; address: number | null; footprint: number | null };
@@ -33,9 +34,6 @@ export type ImportPlanResult = {
   counts: { create: number; update: number; unchanged: number };
 };
 
-// The model attribute each import key writes.
-const ATTRIBUTE: Partial<Record<ImportKey, string>> = { position: "positionId", type: "fixtureTypeId", focusPoint: "focusPointId" };
-const attributeOf = (key: ImportKey) => ATTRIBUTE[key] ?? key;
 
 function same(kind: string, a: unknown, b: unknown): boolean {
   const na = a === "" || a === undefined ? null : a;
@@ -117,7 +115,7 @@ export function planImport(rows: ParsedRow[], snap: Snapshot, opts: { member: Me
     }
     const denied = forbiddenFields(opts.member, "fixture", Object.keys(changes));
     if (denied.length) {
-      const keyOf = (attr: string) => (Object.entries(ATTRIBUTE).find(([, a]) => a === attr)?.[0] ?? attr) as ImportKey;
+      const keyOf = (attr: string) => keyOfAttribute(attr) as ImportKey;
       for (const attr of denied) err(rowNumber, keyOf(attr), `Your role cannot change ${FIELD_BY_KEY.get(keyOf(attr))?.header ?? attr} (it would go from ${show(existing[attr])} to ${show(changes[attr])})`);
       continue;
     }

@@ -1,6 +1,6 @@
 // Turns the rig into sheets for export: one view → one sheet, or the full workbook with a sheet per
 // view and the stock counts. Rows follow each view's sort so the paper matches the screen.
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { FixtureDto } from "@/lib/dto/fixture";
 import type { SheetOut } from "@/lib/io/sheet";
 import { COLUMN_BY_ID, exportValue, headerWithUnit, type Units } from "./columns";
 import { RIG_VIEWS, type RigView } from "./views";

@@ -3,7 +3,7 @@
 // cell becomes a patch checked by the API's own schema, so the table cannot send what the API refuses.
 import { fixtureTypeFieldsSchema } from "@/lib/validation/rig";
 import { formatLength, parseLength } from "@/lib/optics";
-import type { FixtureTypeDto } from "@/lib/data/fixture-types";
+import type { FixtureTypeDto } from "@/lib/dto/fixture-type";
 
 export type TypeColumn = { key: string; header: string; fields: Array<keyof FixtureTypeDto>; kind: "text" | "cone" | "number" | "modes" | "length" | "optionalText" | "readOnly" };
 

@@ -1,5 +1,5 @@
 // Test fixtures for focus charts: a FixtureDto built through the same geometry code the server uses.
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { FixtureDto } from "@/lib/dto/fixture";
 import { computeFixtureGeometry } from "@/lib/rig/fixture-geometry";
 import type { ChartProduction } from "@/lib/focus/chart-model";
 

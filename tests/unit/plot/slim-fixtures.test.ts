@@ -1,9 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { beamAim } from "@/lib/optics";
 import { expandPlotFixtures, fromPlotFixtureWire, toPlotFixtureWire, type PlotFixtureRecord } from "@/lib/plot/slim-fixtures";
-import type { PositionDto } from "@/lib/data/positions";
-import type { FixtureTypeDto } from "@/lib/data/fixture-types";
-import type { FocusPointDto } from "@/lib/data/focus-points";
+import type { PositionDto } from "@/lib/dto/plan";
+import type { FixtureTypeDto } from "@/lib/dto/fixture-type";
+import type { FocusPointDto } from "@/lib/dto/plan";
 
 // Invented example rig: one pipe at 7.5 m trim, one profile type with a 0.3 m lens drop.
 const position = { id: 1, name: "Pipe 1", kind: "pipe", trimHeight: 7.5 } as unknown as PositionDto;

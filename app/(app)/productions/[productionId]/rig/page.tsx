@@ -15,8 +15,6 @@ export const metadata: Metadata = { title: "Rig" };
 
 const TYPE_FIELDS = TYPE_COLUMNS.flatMap((c) => c.fields as string[]);
 
-// The model attribute behind each editable column (the policy speaks in attributes).
-const ATTRIBUTE: Record<string, string> = { position: "positionId", type: "fixtureTypeId" };
 
 export default async function RigPage({ params, searchParams }: { params: Promise<{ productionId: string }>; searchParams: Promise<{ view?: string }> }) {
   const { productionId, member } = await memberForPage((await params).productionId);
@@ -27,7 +25,7 @@ export default async function RigPage({ params, searchParams }: { params: Promis
     getPositionsByProduction({ productionId }),
     getAccessoriesByProduction({ productionId }),
   ]);
-  const editable = RIG_COLUMNS.filter((c) => c.importKey && c.id !== "unitNumber" && c.id !== "focusPoint" && canEditField(member, "fixture", ATTRIBUTE[c.id] ?? c.id)).map((c) => c.id);
+  const editable = RIG_COLUMNS.filter((c) => c.importKey && c.id !== "unitNumber" && c.id !== "focusPoint" && canEditField(member, "fixture", c.attribute ?? c.id)).map((c) => c.id);
   const view = (await searchParams).view;
   return (
     <RigWorkspace

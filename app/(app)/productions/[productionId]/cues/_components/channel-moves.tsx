@@ -2,7 +2,7 @@
 
 import { useMemo } from "react";
 import { classifyMoves, type TrackedShow } from "@/lib/cues";
-import type { ChannelLabel } from "@/lib/data/cues";
+import type { ChannelLabel } from "@/lib/dto/cue";
 import { Card } from "@/components/ui/card";
 
 function Group({ title, items, describe, testId }: { title: string; items: Array<{ channel: number; from: number; to: number }>; describe: (ch: number) => string; testId: string }) {

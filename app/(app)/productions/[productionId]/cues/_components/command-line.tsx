@@ -3,7 +3,7 @@
 import { useRef, useState } from "react";
 import { parseEntry, formatCueNumber, cueKey } from "@/lib/cues";
 import { useCreateCue, useUpdateCue } from "@/hooks/use-cues";
-import type { CueDto } from "@/lib/data/cues";
+import type { CueDto } from "@/lib/dto/cue";
 import { ApiError } from "@/lib/http/api-client";
 
 /** Typed level entry in Throwline's own syntax (lib/cues/keyboard-entry.ts): "12 75", "1-6 full", "cue 5". */

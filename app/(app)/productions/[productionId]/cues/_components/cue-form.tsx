@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 import { formatCueNumber, formatFadeTime, formatSplitTime, parseCueNumber, parseFadeTime, parseSplitTime, readPartDrafts, sameParts, toPartDrafts, type PartDraft } from "@/lib/cues";
-import type { CueDto } from "@/lib/data/cues";
+import type { CueDto } from "@/lib/dto/cue";
 import { useUpdateCue, type CueChanges } from "@/hooks/use-cues";
 import { ApiError } from "@/lib/http/api-client";
 import { Card } from "@/components/ui/card";

@@ -3,7 +3,7 @@
 import { useEffect, useMemo, useState } from "react";
 import { createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState, type VisibilityState } from "@tanstack/react-table";
 import { compareCueNumbers, formatCueNumber, formatFadeTime, formatSplitTime } from "@/lib/cues";
-import type { CueDto } from "@/lib/data/cues";
+import type { CueDto } from "@/lib/dto/cue";
 import { useVirtualRows } from "./use-virtual-rows";
 import { useSavedTableView } from "./use-saved-table-view";
 

@@ -6,7 +6,7 @@ import { useQuery } from "@tanstack/react-query";
 import { apiFetch } from "@/lib/http/api-client";
 import { productionKeys } from "@/hooks/query-keys";
 import { levelAt, type TrackedShow } from "@/lib/cues";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { FixtureDto } from "@/lib/dto/fixture";
 import type { StageSettings } from "@/lib/plot/stage-outline";
 import { Card } from "@/components/ui/card";
 import type { LookPool } from "./cue-plan-canvas";

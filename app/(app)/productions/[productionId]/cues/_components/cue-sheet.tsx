@@ -5,7 +5,7 @@ import Link from "next/link";
 import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from "@tanstack/react-table";
 import { useCueSheet, useUpdateCallNote } from "@/hooks/use-cues";
 import { formatChannels, formatCueNumber, formatFadeTime, formatSplitTime } from "@/lib/cues";
-import type { CueSheetRow } from "@/lib/data/cues";
+import type { CueSheetRow } from "@/lib/dto/cue";
 import { ApiError } from "@/lib/http/api-client";
 import { Button } from "@/components/ui/button";
 import { NoteCell } from "./note-cell";

@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 import { formatCueNumber, movesToReach, numberBetween, stateOf, type TrackedShow } from "@/lib/cues";
-import type { CueDto } from "@/lib/data/cues";
+import type { CueDto } from "@/lib/dto/cue";
 import { useCreateCue, useDeleteCue, useRenumberCues, useUpdateCue } from "@/hooks/use-cues";
 import { Card } from "@/components/ui/card";
 import { Button } from "@/components/ui/button";

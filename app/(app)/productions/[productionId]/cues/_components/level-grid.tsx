@@ -2,7 +2,7 @@
 
 import { useEffect, useMemo, useState } from "react";
 import { formatCueNumber, type MoveKind, type TrackedShow } from "@/lib/cues";
-import type { ChannelLabel, CueDto } from "@/lib/data/cues";
+import type { ChannelLabel, CueDto } from "@/lib/dto/cue";
 import { useVirtualRows } from "./use-virtual-rows";
 
 const WINDOW = 12;

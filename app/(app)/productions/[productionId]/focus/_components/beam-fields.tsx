@@ -5,7 +5,7 @@ import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
 import { useUpdateFocus, type FocusPatch } from "@/hooks/use-focus";
 import { ApiError } from "@/lib/http/api-client";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { FixtureDto } from "@/lib/dto/fixture";
 import { fixtureFieldsSchema } from "@/lib/validation/fixture";
 import { barnDoorWords, goboRotationWords } from "@/lib/focus/words";
 import type { FocusPageData } from "./types";

@@ -4,7 +4,7 @@ import { useEffect, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
 import { useUpdateFocus, type FocusPatch } from "@/hooks/use-focus";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { FixtureDto } from "@/lib/dto/fixture";
 import type { FocusChart } from "@/lib/focus/chart-model";
 import type { FocusPageData } from "./types";
 

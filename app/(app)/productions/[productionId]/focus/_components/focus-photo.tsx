@@ -4,7 +4,7 @@ import { useEffect, useId, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
 import { useFocusPhoto } from "@/hooks/use-focus-photo";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { FixtureDto } from "@/lib/dto/fixture";
 import type { FocusChart } from "@/lib/focus/chart-model";
 import type { FocusPageData } from "./types";
 

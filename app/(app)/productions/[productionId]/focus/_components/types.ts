@@ -1,5 +1,5 @@
-import type { FixtureDto } from "@/lib/data/fixtures";
-import type { ProductionDto } from "@/lib/data/productions";
+import type { FixtureDto } from "@/lib/dto/fixture";
+import type { ProductionDto } from "@/lib/dto/production";
 import type { PositionKind } from "@/lib/rig/position-kinds";
 import type { ChartExtras } from "@/lib/focus/chart-model";
 import type { Landmark } from "@/lib/focus/landmarks";

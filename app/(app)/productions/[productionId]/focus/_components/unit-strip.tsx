@@ -1,7 +1,7 @@
 "use client";
 
 import { POINT_HUNG_KINDS, type PositionKind } from "@/lib/rig/position-kinds";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { FixtureDto } from "@/lib/dto/fixture";
 
 /**
  * The position as a strip of its units, in the order the crew meets them: booms and ladders top to

@@ -1,7 +1,7 @@
 "use client";
 
 import { useMemo, useSyncExternalStore } from "react";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { FixtureDto } from "@/lib/dto/fixture";
 import { buildFocusChart, type FocusChart } from "@/lib/focus/chart-model";
 import { mergeLandmarks, outlineLandmarks } from "@/lib/focus/landmarks";
 import type { FocusPageData } from "./types";

@@ -1,7 +1,7 @@
 "use client";
 
 import { formatLength, type Units } from "@/lib/optics";
-import type { PositionDto } from "@/lib/data/positions";
+import type { PositionDto } from "@/lib/dto/plan";
 import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 
 /** Side view of a boom or ladder: the deck, the top (trim) and each unit at its lens height. */

@@ -3,7 +3,7 @@
 import dynamic from "next/dynamic";
 import { useCallback, useEffect, useRef, useState } from "react";
 import { usePlot, type PlotWirePayload } from "@/hooks/use-plot";
-import type { ProductionDto } from "@/lib/data/productions";
+import type { ProductionDto } from "@/lib/dto/production";
 import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import type { NumberingDirection } from "@/lib/plot/along-position";
 import { screenToPlan } from "@/lib/plot/view";

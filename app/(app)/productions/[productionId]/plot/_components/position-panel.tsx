@@ -3,7 +3,7 @@
 import { formatLength, parseLength } from "@/lib/optics";
 import { POSITION_KINDS, POSITION_KIND_LABELS } from "@/lib/rig/position-kinds";
 import { numberingOrder, numberingOrderVertical, renumber, type NumberingDirection } from "@/lib/plot/along-position";
-import type { PositionDto } from "@/lib/data/positions";
+import type { PositionDto } from "@/lib/dto/plan";
 import { PanelField, PanelSection } from "./panel-field";
 import { ElevationStrip } from "./elevation-strip";
 import { isVertical } from "./rig-items";

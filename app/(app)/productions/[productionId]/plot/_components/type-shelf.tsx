@@ -1,6 +1,6 @@
 "use client";
 
-import type { FixtureTypeDto } from "@/lib/data/fixture-types";
+import type { FixtureTypeDto } from "@/lib/dto/fixture-type";
 import type { NumberingDirection } from "@/lib/plot/along-position";
 import { symbolOutline, symbolShape } from "@/lib/plot/symbol";
 

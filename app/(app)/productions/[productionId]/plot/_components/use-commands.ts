@@ -9,20 +9,14 @@ import { UndoStack } from "@/lib/plot/undo";
 import { productionKeys } from "@/hooks/query-keys";
 import { usePlotActions } from "@/hooks/use-plot-actions";
 import type { PlotPayload } from "@/hooks/use-plot";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { FixtureDto } from "@/lib/dto/fixture";
 import type { PlotFixture } from "@/lib/plot/slim-fixtures";
+import { copyOfFixture } from "@/lib/rig/fixture-fields";
 
 export type Notice = { tone: "info" | "error" | "conflict"; text: string; retry?: () => void } | null;
 
-const FIXTURE_CREATE_FIELDS = [
-  "positionId", "unitNumber", "fixtureTypeId", "focusPointId", "channel", "universe", "address", "dmxMode", "footprint", "circuit", "dimmer",
-  "colour", "gobo", "purpose", "x", "y", "lensHeight", "focusX", "focusY", "aim", "coneDeg", "softnessDeg", "shutterCuts", "irisPercent", "notes",
-] as const;
-
-/** The fields needed to hang a copy of a fixture (what undo of a delete and duplicate send). */
-export function creationFields(f: FixtureDto): Record<string, unknown> {
-  return Object.fromEntries(FIXTURE_CREATE_FIELDS.map((k) => [k, f[k]]).filter(([, v]) => v !== null));
-}
+/** The fields needed to hang a copy of a fixture (what undo of a delete and duplicate send): the registry's. */
+export const creationFields = (f: FixtureDto): Record<string, unknown> => copyOfFixture(f);
 
 export function useCommands(productionId: number) {
   const qc = useQueryClient();

@@ -1,5 +1,5 @@
-import type { ProductionDto } from "@/lib/data/productions";
-import type { PlotData } from "@/lib/data/plot";
+import type { ProductionDto } from "@/lib/dto/production";
+import type { PlotData } from "@/lib/dto/plot";
 import { stageOutline } from "@/lib/plot/stage-outline";
 import { symbolOutline, symbolShape } from "@/lib/plot/symbol";
 import type { Bounds } from "@/lib/plot/view";

@@ -1,8 +1,8 @@
 "use client";
 
 import { useState } from "react";
-import type { AccessoryDto } from "@/lib/data/accessories";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { AccessoryDto } from "@/lib/dto/accessory";
+import type { FixtureDto } from "@/lib/dto/fixture";
 import { ACCESSORY_KINDS } from "@/lib/validation/accessory";
 import { ACCESSORY_FIELDS, EMPTY_ACCESSORY, accessoryText, readAccessory, type AccessoryKey, type AccessoryText } from "@/lib/rig/accessory-form";
 import { ApiError } from "@/lib/http/api-client";

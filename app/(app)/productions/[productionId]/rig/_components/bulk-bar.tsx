@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { FixtureDto } from "@/lib/dto/fixture";
 import { ApiError } from "@/lib/http/api-client";
 import { useBulkEditRig } from "@/hooks/use-rig";
 import { Button } from "@/components/ui/button";

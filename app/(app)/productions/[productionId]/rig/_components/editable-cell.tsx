@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { FixtureDto } from "@/lib/dto/fixture";
 import { fixtureFieldsSchema } from "@/lib/validation/fixture";
 import type { RigColumn, Units } from "@/lib/rig/columns";
 import { ApiError } from "@/lib/http/api-client";
@@ -9,14 +9,13 @@ import { useUpdateRigFixture } from "@/hooks/use-rig";
 import { editText, readTyped, showValue } from "./cell-value";
 
 export type Choice = { id: number; name: string };
-const ATTRIBUTE: Record<string, string> = { position: "positionId", type: "fixtureTypeId" };
 
 /**
  * A table cell the signed-in role may edit. Validated as typed (the API's own field schema), saved
  * with the row's version; a stale version shows the other person's value instead of overwriting it.
  */
 export function EditableCell({ fixture, column, units, productionId, choices }: { fixture: FixtureDto; column: RigColumn; units: Units; productionId: number; choices?: Choice[] }) {
-  const attr = ATTRIBUTE[column.id] ?? column.id;
+  const attr = column.attribute ?? column.id;
   const update = useUpdateRigFixture(productionId);
   const [editing, setEditing] = useState(false);
   const [text, setText] = useState("");

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import type { ImportPreview } from "@/lib/data/import";
+import type { ImportPreview } from "@/lib/dto/import";
 import { IMPORT_FIELDS, type ColumnTarget } from "@/lib/io/fields";
 import type { Units } from "@/lib/rig/columns";
 import { ApiError } from "@/lib/http/api-client";

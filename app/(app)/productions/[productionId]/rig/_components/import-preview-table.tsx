@@ -1,6 +1,6 @@
 "use client";
 
-import type { ImportPreview } from "@/lib/data/import";
+import type { ImportPreview } from "@/lib/dto/import";
 import type { ColumnTarget, IMPORT_FIELDS } from "@/lib/io/fields";
 
 /** The file's first rows under its own headers, with a field chooser above each column. */

@@ -5,7 +5,7 @@ import {
   flexRender, getCoreRowModel, getExpandedRowModel, getFilteredRowModel, getGroupedRowModel, getSortedRowModel, useReactTable,
   type ColumnDef, type GroupingState, type Row, type RowSelectionState, type SortingState, type VisibilityState,
 } from "@tanstack/react-table";
-import type { FixtureDto } from "@/lib/data/fixtures";
+import type { FixtureDto } from "@/lib/dto/fixture";
 import { RIG_COLUMNS, headerWithUnit, type Units } from "@/lib/rig/columns";
 import { compareUnitNumbers } from "@/lib/rig/unit-number";
 import { EditableCell, type Choice } from "./editable-cell";

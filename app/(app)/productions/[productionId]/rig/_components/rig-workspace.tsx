@@ -2,9 +2,9 @@
 
 import { useMemo, useState } from "react";
 import { usePathname, useRouter } from "next/navigation";
-import type { FixtureDto } from "@/lib/data/fixtures";
-import type { FixtureTypeDto } from "@/lib/data/fixture-types";
-import type { AccessoryDto } from "@/lib/data/accessories";
+import type { FixtureDto } from "@/lib/dto/fixture";
+import type { FixtureTypeDto } from "@/lib/dto/fixture-type";
+import type { AccessoryDto } from "@/lib/dto/accessory";
 import { RIG_COLUMNS, type Units } from "@/lib/rig/columns";
 import { RIG_VIEWS, VIEW_BY_ID, type RigViewId } from "@/lib/rig/views";
 import { useRigAccessories, useRigFixtures, useRigTypes } from "@/hooks/use-rig";

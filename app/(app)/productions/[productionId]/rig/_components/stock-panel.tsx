@@ -1,8 +1,8 @@
 "use client";
 
-import type { FixtureDto } from "@/lib/data/fixtures";
-import type { FixtureTypeDto } from "@/lib/data/fixture-types";
-import type { AccessoryDto } from "@/lib/data/accessories";
+import type { FixtureDto } from "@/lib/dto/fixture";
+import type { FixtureTypeDto } from "@/lib/dto/fixture-type";
+import type { AccessoryDto } from "@/lib/dto/accessory";
 import { SHEET_INCHES, stockCounts } from "@/lib/rig/stock";
 
 function Block({ title, head, rows, note }: { title: string; head: string[]; rows: Array<Array<string | number | null>>; note?: string }) {

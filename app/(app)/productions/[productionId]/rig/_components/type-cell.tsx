@@ -1,7 +1,7 @@
 "use client";
 
 import { useRef, useState } from "react";
-import type { FixtureTypeDto } from "@/lib/data/fixture-types";
+import type { FixtureTypeDto } from "@/lib/dto/fixture-type";
 import { parseTypeCell, typeCellText, type TypeColumn } from "@/lib/rig/type-fields";
 import type { Units } from "@/lib/rig/columns";
 import { ApiError } from "@/lib/http/api-client";

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import type { FixtureTypeDto } from "@/lib/data/fixture-types";
+import type { FixtureTypeDto } from "@/lib/dto/fixture-type";
 import { STARTER_TYPES } from "@/lib/rig/starter-types";
 import { TYPE_COLUMNS } from "@/lib/rig/type-fields";
 import { TypeCell } from "./type-cell";
