@@ -5,6 +5,7 @@ import { symbolOutline, symbolPixels, symbolScreenPoint, labelsFit, type SymbolS
 import { planToScreen, type Bounds, type View } from "@/lib/plot/view";
 import type { PlotPalette } from "./palette";
 import type { Ctx } from "./draw-stage";
+import { diamondPath, planPath, strokeSegment } from "./plan-paths";
 
 export type RigItem = {
   id: number;
@@ -26,15 +27,6 @@ function ellipsePath(ctx: Ctx, v: View, e: Ellipse) {
   ctx.ellipse(c.x, c.y, Math.max(0.5, e.semiMajor * v.scale), Math.max(0.5, e.semiMinor * v.scale), (-e.rotationDeg * Math.PI) / 180, 0, Math.PI * 2);
 }
 
-function polygonPath(ctx: Ctx, v: View, pts: Point[]) {
-  pts.forEach((p, i) => {
-    const s = planToScreen(v, p);
-    if (i === 0) ctx.moveTo(s.x, s.y);
-    else ctx.lineTo(s.x, s.y);
-  });
-  ctx.closePath();
-}
-
 export function intersects(b: Bounds, e: Ellipse) {
   const r = e.semiMajor;
   return e.centre.x + r >= b.minX && e.centre.x - r <= b.maxX && e.centre.y + r >= b.minY && e.centre.y - r <= b.maxY;
@@ -50,7 +42,7 @@ export function addPoolPath(ctx: Ctx, v: View, e: Ellipse, cuts: RigItem["cuts"]
     } catch {
       poly = ellipseToPolygon(e, 48); // a mark on a cut line: draw the uncut pool rather than nothing
     }
-    if (poly.length) polygonPath(ctx, v, poly);
+    if (poly.length) planPath(ctx, v, poly);
   } else {
     const c = planToScreen(v, e.centre);
     ctx.moveTo(c.x + Math.max(0.5, e.semiMajor * v.scale) * Math.cos((-e.rotationDeg * Math.PI) / 180), c.y + Math.max(0.5, e.semiMajor * v.scale) * Math.sin((-e.rotationDeg * Math.PI) / 180));
@@ -94,14 +86,7 @@ export function drawPool(ctx: Ctx, v: View, item: Pick<RigItem, "pool" | "cuts" 
   if (cuts) {
     ctx.strokeStyle = pal.danger;
     ctx.lineWidth = 1.25;
-    for (const c of cuts) {
-      const a = planToScreen(v, c.a);
-      const b = planToScreen(v, c.b);
-      ctx.beginPath();
-      ctx.moveTo(a.x, a.y);
-      ctx.lineTo(b.x, b.y);
-      ctx.stroke();
-    }
+    for (const c of cuts) strokeSegment(ctx, planToScreen(v, c.a), planToScreen(v, c.b));
   }
 }
 
@@ -184,10 +169,7 @@ export function drawMarks(ctx: Ctx, v: View, items: RigItem[], pal: PlotPalette,
     ctx.stroke();
     const s = symbolScreenPoint(v, it);
     ctx.setLineDash([4, 3]);
-    ctx.beginPath();
-    ctx.moveTo(s.x, s.y);
-    ctx.lineTo(m.x, m.y);
-    ctx.stroke();
+    strokeSegment(ctx, s, m);
     ctx.setLineDash([]);
     ctx.beginPath();
     ctx.arc(m.x, m.y, 9, 0, Math.PI * 2);
@@ -211,11 +193,7 @@ export function drawFocusPoints(ctx: Ctx, v: View, points: Array<{ id: number; n
     const sel = p.id === selected;
     ctx.fillStyle = sel ? pal.selection : pal.accent;
     ctx.beginPath();
-    ctx.moveTo(s.x, s.y - 7);
-    ctx.lineTo(s.x + 7, s.y);
-    ctx.lineTo(s.x, s.y + 7);
-    ctx.lineTo(s.x - 7, s.y);
-    ctx.closePath();
+    diamondPath(ctx, s, 7);
     ctx.globalAlpha = 0.85;
     ctx.fill();
     ctx.globalAlpha = 1;

@@ -5,18 +5,11 @@ import { gridLines, gridStep } from "@/lib/plot/grid";
 import type { StageOutline } from "@/lib/plot/stage-outline";
 import { planToScreen, visiblePlanBounds, type View } from "@/lib/plot/view";
 import type { PlotPalette } from "./palette";
+import { planPath } from "./plan-paths";
 
 export type Ctx = CanvasRenderingContext2D;
 export type Size = { width: number; height: number };
 
-function path(ctx: Ctx, v: View, pts: Point[], close = true) {
-  pts.forEach((p, i) => {
-    const s = planToScreen(v, p);
-    if (i === 0) ctx.moveTo(s.x, s.y);
-    else ctx.lineTo(s.x, s.y);
-  });
-  if (close) ctx.closePath();
-}
 
 export function drawGrid(ctx: Ctx, v: View, size: Size, units: "metric" | "imperial", pal: PlotPalette) {
   const step = gridStep(v.scale, units);
@@ -49,7 +42,7 @@ export function drawStageOutline(ctx: Ctx, v: View, o: StageOutline, pal: PlotPa
   for (const poly of [o.deck, o.apron]) {
     if (!poly.length) continue;
     ctx.beginPath();
-    path(ctx, v, poly);
+    planPath(ctx, v, poly);
     ctx.globalAlpha = 0.55; // the groundplan underneath must show through the deck
     ctx.fill();
     ctx.globalAlpha = 1;
@@ -58,23 +51,23 @@ export function drawStageOutline(ctx: Ctx, v: View, o: StageOutline, pal: PlotPa
   ctx.fillStyle = pal.muted;
   for (const wall of [o.prosceniumLeft, o.prosceniumRight]) {
     ctx.beginPath();
-    path(ctx, v, wall);
+    planPath(ctx, v, wall);
     ctx.fill();
   }
   ctx.strokeStyle = pal.ink;
   ctx.lineWidth = 3;
   ctx.beginPath();
-  path(ctx, v, o.backWall, false);
+  planPath(ctx, v, o.backWall, false);
   ctx.stroke();
   ctx.lineWidth = 1;
   ctx.setLineDash([10, 4, 2, 4]); // centre line: long dash, dot
   ctx.strokeStyle = pal.muted;
   ctx.beginPath();
-  path(ctx, v, o.centreLine, false);
+  planPath(ctx, v, o.centreLine, false);
   ctx.stroke();
   ctx.setLineDash([6, 4]);
   ctx.beginPath();
-  path(ctx, v, o.datumLine, false);
+  planPath(ctx, v, o.datumLine, false);
   ctx.stroke();
   ctx.setLineDash([]);
   if (!labels) return;
@@ -110,7 +103,7 @@ export function drawAreas(ctx: Ctx, v: View, zones: Array<{ name: string; polygo
   for (const z of zones) {
     if (editable) handles(ctx, v, z.polygon, pal.success);
     ctx.beginPath();
-    path(ctx, v, z.polygon);
+    planPath(ctx, v, z.polygon);
     ctx.fillStyle = pal.area;
     ctx.fill();
     ctx.strokeStyle = pal.success;

@@ -5,6 +5,7 @@ import { scaleBar } from "@/lib/plot/grid";
 import { planToScreen, type View } from "@/lib/plot/view";
 import type { PlotPalette } from "@/components/plot/palette";
 import type { Ctx, Size } from "@/components/plot/draw-stage";
+import { diamondPath, planPath, strokeSegment } from "@/components/plot/plan-paths";
 import type { Gesture, Tool } from "./canvas-types";
 
 export function drawOverlay(ctx: Ctx, v: View, size: Size, pal: PlotPalette, o: { gesture: Gesture | null; draft: Point[]; tool: Tool; units: "metric" | "imperial" }) {
@@ -20,12 +21,8 @@ export function drawOverlay(ctx: Ctx, v: View, size: Size, pal: PlotPalette, o: 
     ctx.setLineDash([]);
   }
   if (g?.kind === "line") {
-    const a = planToScreen(v, g.from);
     const b = planToScreen(v, g.to);
-    ctx.beginPath();
-    ctx.moveTo(a.x, a.y);
-    ctx.lineTo(b.x, b.y);
-    ctx.stroke();
+    strokeSegment(ctx, planToScreen(v, g.from), b);
     const len = Math.hypot(g.to.x - g.from.x, g.to.y - g.from.y);
     ctx.font = "12px 'IBM Plex Sans', system-ui, sans-serif";
     ctx.textAlign = "left";
@@ -35,20 +32,12 @@ export function drawOverlay(ctx: Ctx, v: View, size: Size, pal: PlotPalette, o: 
   if (g?.kind === "focusPoint" || g?.kind === "underlay") {
     const b = planToScreen(v, g.to);
     if (g.kind === "underlay") {
-      const a = planToScreen(v, g.from);
       ctx.setLineDash([6, 4]);
-      ctx.beginPath();
-      ctx.moveTo(a.x, a.y);
-      ctx.lineTo(b.x, b.y);
-      ctx.stroke();
+      strokeSegment(ctx, planToScreen(v, g.from), b);
       ctx.setLineDash([]);
     }
     ctx.beginPath();
-    ctx.moveTo(b.x, b.y - 8);
-    ctx.lineTo(b.x + 8, b.y);
-    ctx.lineTo(b.x, b.y + 8);
-    ctx.lineTo(b.x - 8, b.y);
-    ctx.closePath();
+    diamondPath(ctx, b, 8);
     ctx.stroke();
   }
   if (g?.kind === "vertex") {
@@ -56,12 +45,7 @@ export function drawOverlay(ctx: Ctx, v: View, size: Size, pal: PlotPalette, o: 
     const pts = g.target.points.map((p, i) => (i === g.target.index ? g.to : p));
     ctx.setLineDash([5, 3]);
     ctx.beginPath();
-    pts.forEach((p, i) => {
-      const s = planToScreen(v, p);
-      if (i === 0) ctx.moveTo(s.x, s.y);
-      else ctx.lineTo(s.x, s.y);
-    });
-    if (g.target.kind === "area") ctx.closePath();
+    planPath(ctx, v, pts, g.target.kind === "area");
     ctx.stroke();
     ctx.setLineDash([]);
     const s = planToScreen(v, g.to);
@@ -71,11 +55,7 @@ export function drawOverlay(ctx: Ctx, v: View, size: Size, pal: PlotPalette, o: 
   }
   if (o.draft.length) {
     ctx.beginPath();
-    o.draft.forEach((p, i) => {
-      const s = planToScreen(v, p);
-      if (i === 0) ctx.moveTo(s.x, s.y);
-      else ctx.lineTo(s.x, s.y);
-    });
+    planPath(ctx, v, o.draft, false);
     ctx.stroke();
     for (const p of o.draft) {
       const s = planToScreen(v, p);
