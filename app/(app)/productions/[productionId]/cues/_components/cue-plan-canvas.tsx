@@ -2,6 +2,7 @@
 
 import { useEffect, useMemo, useRef, useState } from "react";
 import { Layer, Stage } from "react-konva";
+import type Konva from "konva";
 import type { PlanePool, Point } from "@/lib/optics";
 import { lookExposure } from "@/lib/cues/look-exposure";
 import { PlanShape } from "@/components/plot/plan-shape";
@@ -10,6 +11,7 @@ import { drawStageOutline, type Ctx } from "@/components/plot/draw-stage";
 import { drawPool } from "@/components/plot/draw-rig";
 import { extendBounds, stageBounds, stageOutline, type StageSettings } from "@/lib/plot/stage-outline";
 import { fitBounds, planToScreen, type View } from "@/lib/plot/view";
+import { useViewNavigation } from "@/components/plot/use-view-navigation";
 
 export type LookPool = { id: number; pool: PlanePool; mark: Point | null; cuts: Array<{ a: Point; b: Point }>; level: number; channel: number | null };
 
@@ -61,7 +63,7 @@ function drawLabels(ctx: Ctx, v: View, pools: LookPool[]) {
   }
 }
 
-/** Read-only plan of the cue's look: stage outline, pools added up by level, channel labels. */
+/** Read-only plan of the cue's look: stage outline, pools added up by level, channel labels. Drag pans, Ctrl+wheel or a pinch zooms, a double-click frames the stage again. */
 export function CuePlanCanvas({ pools, stage }: { pools: LookPool[]; stage: StageSettings }) {
   const box = useRef<HTMLDivElement>(null);
   const [width, setWidth] = useState(480);
@@ -85,23 +87,42 @@ export function CuePlanCanvas({ pools, stage }: { pools: LookPool[]; stage: Stag
   // Frame the stage and the pools' centres (not their full extent: a wide wash would shrink the stage).
   const bounds = useMemo(() => extendBounds(stageBounds(stage), pools.map((p) => p.pool.outer!.centre)), [stage, pools]);
   const height = Math.round(Math.min(560, Math.max(260, (width * (bounds.maxY - bounds.minY)) / (bounds.maxX - bounds.minX) + 40)));
-  const view = useMemo(() => fitBounds(bounds, { width, height }, 20), [bounds, width, height]);
+  const fitted = useMemo(() => fitBounds(bounds, { width, height }, 20), [bounds, width, height]);
+  // The view moves with the hand (use-view-navigation). Stepping through cues keeps it; a new frame (the
+  // plan resized, the stage changed) puts the framed stage back.
+  const view = useRef<View>(fitted);
+  const layer = useRef<Konva.Layer>(null);
+  const frame = useRef(fitted);
+  if (frame.current.scale !== fitted.scale || frame.current.ox !== fitted.ox || frame.current.oy !== fitted.oy) {
+    frame.current = fitted; // set while rendering, so this render's drawing already uses it
+    view.current = fitted;
+  }
+  // The plan sits in a scrolling page: a plain wheel scrolls the page, Ctrl/⌘ + wheel (or a trackpad pinch) zooms.
+  useViewNavigation({ element: box, view, wheelNeedsModifier: true, onFrame: () => layer.current?.draw() });
   const lit = pools.filter((p) => p.level > 0).length;
   const exposure = useMemo(() => lookExposure(pools.map((p) => ({ outer: p.pool.outer!, level: p.level })), bounds), [pools, bounds]);
 
   return (
-    <div ref={box} className="w-full overflow-hidden rounded-md" data-testid="cue-plan" data-lit={lit} data-exposure={exposure.toFixed(2)} aria-label={`Plan of the look: ${lit} of ${pools.length} pools lit`} role="img">
+    <div
+      ref={box}
+      className="relative w-full cursor-grab touch-none select-none overflow-hidden rounded-md"
+      onDoubleClick={() => {
+        view.current = frame.current;
+        layer.current?.batchDraw();
+      }}
+      data-testid="cue-plan" data-lit={lit} data-exposure={exposure.toFixed(2)} aria-label={`Plan of the look: ${lit} of ${pools.length} pools lit`} role="img">
       {palette ? (
         <Stage width={width} height={height} listening={false}>
-          <Layer listening={false}>
+          <Layer ref={layer} listening={false}>
             <PlanShape
               name="look"
               draw={(ctx) => {
+                const v = view.current;
                 ctx.fillStyle = palette.canvas;
                 ctx.fillRect(0, 0, width, height);
-                drawStageOutline(ctx, view, outline, palette, true);
-                drawLook(ctx, view, pools, palette, exposure);
-                drawLabels(ctx, view, pools);
+                drawStageOutline(ctx, v, outline, palette, true);
+                drawLook(ctx, v, pools, palette, exposure);
+                drawLabels(ctx, v, pools);
               }}
             />
           </Layer>
@@ -109,6 +130,7 @@ export function CuePlanCanvas({ pools, stage }: { pools: LookPool[]; stage: Stag
       ) : (
         <div style={{ height }} className="bg-black" />
       )}
+      <p className="pointer-events-none absolute bottom-1 right-2 text-[11px] text-[#8d857a]">Drag to pan · Ctrl + wheel or pinch to zoom · double-click to frame</p>
     </div>
   );
 }
