@@ -10,6 +10,8 @@ export class Cue extends Model<InferAttributes<Cue>, InferCreationAttributes<Cue
   declare upTime: CreationOptional<number>;
   declare downTime: number | null;
   declare delay: CreationOptional<number>;
+  /** The down fade's own wait; null: it waits as long as the up fade (`delay`). */
+  declare downDelay: CreationOptional<number | null>;
   declare follow: number | null;
   declare link: string | null;
   declare block: CreationOptional<boolean>;
@@ -39,6 +41,7 @@ export function initCue(sequelize: Sequelize) {
       upTime: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 5 },
       downTime: { type: DataTypes.DOUBLE, allowNull: true },
       delay: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0 },
+      downDelay: { type: DataTypes.DOUBLE, allowNull: true },
       follow: { type: DataTypes.DOUBLE, allowNull: true },
       link: { type: DataTypes.DECIMAL(10, 3), allowNull: true },
       block: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },

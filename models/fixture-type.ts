@@ -11,6 +11,8 @@ export class FixtureType extends Model<InferAttributes<FixtureType>, InferCreati
   declare coneMaxDeg: number;
   declare defaultSoftnessDeg: CreationOptional<number>;
   declare peakCandela: number;
+  /** A zoom's peak at its narrowest cone (peakCandela is at the widest); null: one figure only. */
+  declare peakCandelaNarrow: CreationOptional<number | null>;
   declare wattage: CreationOptional<number>;
   declare weightKg: CreationOptional<number>;
   declare dmxModes: DmxMode[];
@@ -35,6 +37,7 @@ export function initFixtureType(sequelize: Sequelize) {
       coneMaxDeg: { type: DataTypes.DOUBLE, allowNull: false },
       defaultSoftnessDeg: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 2 },
       peakCandela: { type: DataTypes.DOUBLE, allowNull: false },
+      peakCandelaNarrow: { type: DataTypes.DOUBLE, allowNull: true },
       wattage: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0 },
       weightKg: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0 },
       dmxModes: { type: DataTypes.JSON, allowNull: false },

@@ -12,14 +12,15 @@ const PEOPLE = [
   ["rafe.lindqvist@quillmere.test", "Rafe Lindqvist", "viewer", false],
 ];
 
-// Typical values from memory (generic units, no brand).
+// Typical values from memory (generic units, no brand). cd is the peak at the widest cone; a zoom's cdNarrow
+// is its peak at the narrowest (it brightens as it narrows).
 const TYPES = [
   { name: "Profile 19°", family: "profile", cone: [19, 19], soft: 2, cd: 70000, w: 750, kg: 8, modes: [{ name: "dimmer", footprint: 1 }], ap: 0.15, frame: "7.5 in", gobo: "B", drop: 0.45 },
   { name: "Profile 26°", family: "profile", cone: [26, 26], soft: 2, cd: 46000, w: 750, kg: 7.5, modes: [{ name: "dimmer", footprint: 1 }], ap: 0.13, frame: "6.25 in", gobo: "B", drop: 0.45 },
   { name: "Profile 36°", family: "profile", cone: [36, 36], soft: 2.5, cd: 28000, w: 750, kg: 7.3, modes: [{ name: "dimmer", footprint: 1 }], ap: 0.11, frame: "6.25 in", gobo: "B", drop: 0.45 },
-  { name: "Zoom profile 25–50°", family: "profile", cone: [25, 50], soft: 3, cd: 22000, w: 750, kg: 9.5, modes: [{ name: "dimmer", footprint: 1 }], ap: 0.12, frame: "6.25 in", gobo: "B", drop: 0.5 },
-  { name: "Fresnel 150 mm", family: "fresnel", cone: [15, 60], soft: 8, cd: 30000, w: 1000, kg: 6, modes: [{ name: "dimmer", footprint: 1 }], ap: 0.15, frame: "7.5 in", gobo: null, drop: 0.35 },
-  { name: "LED wash, zoom", family: "led-wash", cone: [15, 45], soft: 10, cd: 14000, w: 300, kg: 9, modes: [{ name: "standard", footprint: 8 }, { name: "compact", footprint: 4 }], ap: 0.2, frame: null, gobo: null, drop: 0.55 },
+  { name: "Zoom profile 25–50°", family: "profile", cone: [25, 50], soft: 3, cd: 22000, cdNarrow: 55000, w: 750, kg: 9.5, modes: [{ name: "dimmer", footprint: 1 }], ap: 0.12, frame: "6.25 in", gobo: "B", drop: 0.5 },
+  { name: "Fresnel 150 mm", family: "fresnel", cone: [15, 60], soft: 8, cd: 30000, cdNarrow: 110000, w: 1000, kg: 6, modes: [{ name: "dimmer", footprint: 1 }], ap: 0.15, frame: "7.5 in", gobo: null, drop: 0.35 },
+  { name: "LED wash, zoom", family: "led-wash", cone: [15, 45], soft: 10, cd: 14000, cdNarrow: 50000, w: 300, kg: 9, modes: [{ name: "standard", footprint: 8 }, { name: "compact", footprint: 4 }], ap: 0.2, frame: null, gobo: null, drop: 0.55 },
   { name: "LED cyc light", family: "cyc", cone: [100, 100], soft: 30, cd: 3500, w: 200, kg: 8, modes: [{ name: "5-slot", footprint: 5 }], ap: 0.3, frame: null, gobo: null, drop: 0.4 },
 ];
 
@@ -78,7 +79,7 @@ async function up(qi) {
 
   await qi.bulkInsert("fixture_types", TYPES.map((t) => ({
     production_id: productionId, name: t.name, family: t.family, cone_min_deg: t.cone[0], cone_max_deg: t.cone[1],
-    default_softness_deg: t.soft, peak_candela: t.cd, wattage: t.w, weight_kg: t.kg, dmx_modes: JSON.stringify(t.modes),
+    default_softness_deg: t.soft, peak_candela: t.cd, peak_candela_narrow: t.cdNarrow ?? null, wattage: t.w, weight_kg: t.kg, dmx_modes: JSON.stringify(t.modes),
     lens_aperture_m: t.ap, frame_size: t.frame, gobo_size: t.gobo, lens_drop_m: t.drop, cells: 1, version: 1, ...stamp,
   })));
   const types = await qi.sequelize.query(`SELECT id, name FROM fixture_types WHERE production_id = ${productionId}`, { type: "SELECT" });

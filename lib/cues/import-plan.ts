@@ -26,3 +26,13 @@ export function toStoredMoves<C extends CueWithMoves>(cues: ReadonlyArray<C>, mo
     return { ...cue, levels: moves };
   });
 }
+
+/**
+ * Why a file cannot replace the cue list, or null when it can. A file with no CUE record (only IDENT and
+ * ENDDATA, only `$` lines, only a patch) would delete every cue and put nothing back: refuse it by name.
+ */
+export function emptyFileReason(read: { cues: readonly unknown[]; patch?: readonly unknown[] }): string | null {
+  if (read.cues.length) return null;
+  const patchOnly = read.patch?.length ? " (it holds a patch only)" : "";
+  return `The file holds no cues${patchOnly}, so importing it would delete every cue in the list. Nothing was changed; check that this is the cue file you meant.`;
+}

@@ -10,12 +10,12 @@ import { requireProduction } from "./productions";
 
 
 type CueRow = {
-  id: number; number: string | number; label: string; page: string | null; up_time: number; down_time: number | null; delay: number;
+  id: number; number: string | number; label: string; page: string | null; up_time: number; down_time: number | null; delay: number; down_delay: number | null;
   follow: number | null; link: string | number | null; block: number | boolean; call_note: string | null; version: number; updated_at: Date | string;
 };
 type PartRow = { cue_id: number; part: number; label: string; up_time: number; down_time: number | null; delay: number; channels: string | number[] };
 
-const CUE_COLUMNS = "id, number, label, page, up_time, down_time, delay, follow, link, block, call_note, version, updated_at";
+const CUE_COLUMNS = "id, number, label, page, up_time, down_time, delay, down_delay, follow, link, block, call_note, version, updated_at";
 const PART_COLUMNS = "p.cue_id, p.part, p.label, p.up_time, p.down_time, p.delay, p.channels";
 
 export function toCueDto(c: CueRow, levels: Record<number, number> = {}, parts: CuePart[] = []): CueDto {
@@ -27,6 +27,7 @@ export function toCueDto(c: CueRow, levels: Record<number, number> = {}, parts: 
     upTime: c.up_time,
     downTime: c.down_time,
     delay: c.delay,
+    downDelay: c.down_delay ?? null,
     follow: c.follow,
     link: c.link == null ? null : Number(c.link),
     block: Boolean(c.block),

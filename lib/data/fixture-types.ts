@@ -9,7 +9,7 @@ import { jsonColumn } from "./json-column";
 import { productionCrud } from "./production-crud";
 
 
-const TYPE_KEYS = ["id", "productionId", "name", "family", "coneMinDeg", "coneMaxDeg", "defaultSoftnessDeg", "peakCandela", "wattage", "weightKg", "dmxModes", "lensApertureM", "frameSize", "goboSize", "lensDropM", "cells", "version", "updatedAt"] as const;
+const TYPE_KEYS = ["id", "productionId", "name", "family", "coneMinDeg", "coneMaxDeg", "defaultSoftnessDeg", "peakCandela", "peakCandelaNarrow", "wattage", "weightKg", "dmxModes", "lensApertureM", "frameSize", "goboSize", "lensDropM", "cells", "version", "updatedAt"] as const;
 
 export const toFixtureTypeDto = (t: FixtureType): FixtureTypeDto => ({ ...plain(t, TYPE_KEYS), dmxModes: jsonColumn<DmxMode[]>(t.dmxModes) });
 

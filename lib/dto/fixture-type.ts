@@ -8,7 +8,10 @@ export type FixtureTypeDto = {
   coneMinDeg: number;
   coneMaxDeg: number;
   defaultSoftnessDeg: number;
+  /** Peak candela at the widest cone (the only figure for a fixed-angle type). */
   peakCandela: number;
+  /** A zoom's peak at its narrowest cone; null when only one figure is known. */
+  peakCandelaNarrow: number | null;
   wattage: number;
   weightKg: number;
   dmxModes: DmxMode[];

@@ -5,14 +5,16 @@ import { fixtureTypeFieldsSchema } from "@/lib/validation/rig";
 import { formatLength, parseLength } from "@/lib/optics";
 import type { FixtureTypeDto } from "@/lib/dto/fixture-type";
 
-export type TypeColumn = { key: string; header: string; fields: Array<keyof FixtureTypeDto>; kind: "text" | "cone" | "number" | "modes" | "length" | "optionalText" | "readOnly" };
+export type TypeColumn = { key: string; header: string; fields: Array<keyof FixtureTypeDto>; kind: "text" | "cone" | "number" | "optionalNumber" | "modes" | "length" | "optionalText" | "readOnly" };
 
 export const TYPE_COLUMNS: TypeColumn[] = [
   { key: "name", header: "Name", fields: ["name"], kind: "text" },
   { key: "family", header: "Family", fields: ["family"], kind: "readOnly" },
   { key: "cone", header: "Cone (°)", fields: ["coneMinDeg", "coneMaxDeg"], kind: "cone" },
   { key: "defaultSoftnessDeg", header: "Softness (°)", fields: ["defaultSoftnessDeg"], kind: "number" },
-  { key: "peakCandela", header: "Peak (cd)", fields: ["peakCandela"], kind: "number" },
+  // A zoom brightens as it narrows: its peak at each end of the range (one figure for a fixed-angle type).
+  { key: "peakCandela", header: "Peak at widest (cd)", fields: ["peakCandela"], kind: "number" },
+  { key: "peakCandelaNarrow", header: "Peak at narrowest (cd)", fields: ["peakCandelaNarrow"], kind: "optionalNumber" },
   { key: "wattage", header: "Power (W)", fields: ["wattage"], kind: "number" },
   { key: "weightKg", header: "Weight (kg)", fields: ["weightKg"], kind: "number" },
   { key: "dmxModes", header: "DMX modes (slots)", fields: ["dmxModes"], kind: "modes" },
@@ -69,6 +71,16 @@ export function parseTypeCell(column: TypeColumn, text: string, units: "metric" 
         break;
       }
       case "number": {
+        const n = number(text, header);
+        if (typeof n === "string") return { ok: false, message: n };
+        patch = { [column.fields[0]]: n };
+        break;
+      }
+      case "optionalNumber": {
+        if (text.trim() === "") {
+          patch = { [column.fields[0]]: null };
+          break;
+        }
         const n = number(text, header);
         if (typeof n === "string") return { ok: false, message: n };
         patch = { [column.fields[0]]: n };

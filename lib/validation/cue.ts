@@ -71,6 +71,7 @@ const cueFields = {
   upTime: timeSchema("Up time"),
   downTime: timeSchema("Down time").nullable(),
   delay: timeSchema("Delay"),
+  downDelay: timeSchema("Down delay").nullable(),
   follow: timeSchema("Follow").nullable(),
   link: cueNumberSchema("Link").nullable(),
   block: z.boolean({ error: "Block must be true or false" }),
@@ -97,4 +98,4 @@ export const cueImportSchema = z
   })
   .strict();
 
-export const cueExportQuerySchema = z.object({ format: z.enum(["ascii", "csv", "xlsx"], { error: "format must be ascii, csv or xlsx" }) });
+export const cueExportQuerySchema = z.object({ format: z.enum(["ascii", "csv", "xlsx", "patch"], { error: "format must be ascii, csv, xlsx or patch (the patch as CSV)" }) });

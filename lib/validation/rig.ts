@@ -39,6 +39,7 @@ export const fixtureTypeFieldsSchema = z.object({
   coneMaxDeg: z.number().gt(0, { error: "Cone must be more than 0°" }).lt(180, { error: "Cone must be less than 180°" }),
   defaultSoftnessDeg: z.number().min(0).max(90),
   peakCandela: z.number().min(0).max(10_000_000),
+  peakCandelaNarrow: z.number({ error: "Peak at the narrowest cone must be a number of candela" }).min(0, { error: "Peak at the narrowest cone cannot be negative" }).max(10_000_000, { error: "Peak at the narrowest cone: at most 10,000,000 cd" }).nullable(),
   wattage: z.number().min(0).max(100_000),
   weightKg: z.number().min(0).max(10_000),
   dmxModes: z.array(dmxModeSchema).min(1, { error: "At least one DMX mode" }).max(20),
@@ -50,7 +51,7 @@ export const fixtureTypeFieldsSchema = z.object({
 });
 const coneOrder = (t: { coneMinDeg?: number; coneMaxDeg?: number }) => t.coneMinDeg === undefined || t.coneMaxDeg === undefined || t.coneMinDeg <= t.coneMaxDeg;
 export const createFixtureTypeSchema = fixtureTypeFieldsSchema
-  .partial({ defaultSoftnessDeg: true, wattage: true, weightKg: true, lensApertureM: true, frameSize: true, goboSize: true, lensDropM: true, cells: true })
+  .partial({ peakCandelaNarrow: true, defaultSoftnessDeg: true, wattage: true, weightKg: true, lensApertureM: true, frameSize: true, goboSize: true, lensDropM: true, cells: true })
   .strict()
   .refine(coneOrder, { error: "The narrowest cone cannot be wider than the widest", path: ["coneMinDeg"] });
 export const updateFixtureTypeSchema = fixtureTypeFieldsSchema

@@ -1,13 +1,8 @@
 // The cue routes over HTTP: roles, validation, optimistic locking, import in one transaction, exports.
+// USITT ASCII details (FOLLOWON, delays on UP and DOWN, Hxx levels) are from memory, as REFERENCE.md says.
+import * as mariadb from "mariadb";
 import { beforeAll, describe, expect, it } from "vitest";
-import { ApiSession, demoProductionId, freshUser } from "./support/api";
-
-const DEMO = {
-  designer: "maren.oduya@quillmere.test",
-  electrician: "teodor.brask@quillmere.test",
-  stageManager: "ines.calloway@quillmere.test",
-  viewer: "rafe.lindqvist@quillmere.test",
-};
+import { ApiSession, demoProductionId, demoSession, freshUser } from "./support/api";
 
 let designer: ApiSession;
 let sm: ApiSession;
@@ -16,9 +11,9 @@ let pid: number;
 let base: string;
 
 beforeAll(async () => {
-  designer = await new ApiSession().signIn(DEMO.designer);
-  sm = await new ApiSession().signIn(DEMO.stageManager);
-  viewer = await new ApiSession().signIn(DEMO.viewer);
+  designer = await demoSession("designer");
+  sm = await demoSession("stageManager");
+  viewer = await demoSession("viewer");
   pid = await demoProductionId(designer);
   base = `/api/productions/${pid}/cues`;
 });
@@ -30,22 +25,60 @@ async function newCue(number: number, body: object = {}) {
 }
 
 describe("reading", () => {
+  // The demo seeder (seeders/…-demo-production.cjs) makes 30 cues: for i = 0…29 the number is i + 0.5 for
+  // i < 2, else i − 1; so 0.5, 1.5, then 1 … 28. Cues this file adds are numbered from 900 up.
+  const DEMO_NUMBERS = [0.5, 1, 1.5, ...Array.from({ length: 27 }, (_, k) => k + 2)];
+
   it("lists the demo cues in running order with their moves and the rig's channels", async () => {
     const r = await viewer.get(base);
     expect(r.status).toBe(200);
-    const numbers = r.json.cues.map((c: { number: number }) => c.number);
-    expect(numbers.length).toBeGreaterThanOrEqual(30);
-    expect([...numbers].sort((a, b) => a - b)).toEqual(numbers);
-    expect(r.json.channels.length).toBeGreaterThan(0);
+    const numbers: number[] = r.json.cues.map((c: { number: number }) => c.number);
+    expect(numbers.filter((n) => n < 900)).toEqual(DEMO_NUMBERS);
+    // Hand-worked from the seeder: the demo rig has 14 + 14 + 4 + 4 + 20 + 16 + 16 + 10 + 5 + 5 + 4 + 4 = 116
+    // units, one channel each, numbered 1–116.
+    const channels: number[] = r.json.channels.map((c: { channel: number }) => c.channel);
+    expect(channels.length).toBe(116);
+    expect(Math.min(...channels)).toBe(1);
+    expect(Math.max(...channels)).toBe(116);
   });
 
-  it("gives the stage manager a summary with running times and standbys", async () => {
+  it("gives the stage manager exact running times, move counts and standbys for named demo cues", async () => {
     const r = await sm.get(`${base}/summary`);
     expect(r.status).toBe(200);
-    const row = r.json.rows[3];
-    expect(row.summary).toMatch(/up|down|no level changes/);
-    expect(row.runningTime).toBeGreaterThanOrEqual(row.upTime);
-    expect(r.json.standbys.length).toBeLessThan(r.json.rows.length); // the demo has follows, so some cues share a standby
+    const cue = (n: number) => r.json.rows.find((row: { number: number }) => row.number === n);
+    // Cue 0.5 "House to half" (i = 0): up 5 s, down 7 s (i % 4 = 0), no delay. Its moves, from the seeder's
+    // formulas with 116 channels: channel 1 + (23k mod 116) at level ((29k) mod 11)·10 for k = 0…5:
+    // ch 1 @ 0, 24 @ 70, 47 @ 30, 70 @ 100, 93 @ 60, 116 @ 20. From dark that is 5 channels up and none down,
+    // so only the up fade runs: 0 + 5 = 5 s (the 7 s down fade moves nothing). Common practice, no source.
+    expect(cue(0.5)).toMatchObject({ label: "House to half", upTime: 5, downTime: 7, delay: 0, up: 5, down: 0, runningTime: 5 });
+    expect(cue(0.5).summary).toMatch(/^5 up · from dark · brighter: /);
+    expect(cue(0.5).levels).toEqual({ 1: 0, 24: 70, 47: 30, 70: 100, 93: 60, 116: 20 });
+    // Cue 1 "Dawn on the harbour" (i = 2), next in running order: up 8 s, no down time. Moves for k = 0…7:
+    // channel 1 + ((34 + 23k) mod 116) at ((26 + 29k) mod 11)·10 → 35 @ 40, 58 @ 0, 81 @ 70, 104 @ 30, 12 @ 100;
+    // k = 5…7 give 35, 58, 81 again and the seeder keeps the first. Against cue 0.5's look, 35, 81, 104 and 12
+    // go up and 58 stays out: 4 up, 0 down, running 0 + 8 = 8 s.
+    expect(cue(1)).toMatchObject({ label: "Dawn on the harbour", upTime: 8, downTime: null, up: 4, down: 0, runningTime: 8, callNote: "Standby on the foghorn" });
+    expect(cue(1).summary).toMatch(/^4 up · brighter: /);
+    // Cue 7 "Lightning" (i = 8) follows on after 2 s, within the 5 s standby window (Throwline's choice), so
+    // it and cue 8 are called as one standby; so are cue 16 (i = 17, follow 2 s) and cue 17.
+    const groupOf = (n: number) => r.json.standbys.find((g: { cueIds: number[] }) => g.cueIds.includes(cue(n).id));
+    expect(groupOf(7)).toEqual({ cueIds: [cue(7).id, cue(8).id], label: "7 and 8" });
+    expect(groupOf(16)).toEqual({ cueIds: [cue(16).id, cue(17).id], label: "16 and 17" });
+    expect(groupOf(6).cueIds).toEqual([cue(6).id]);
+  });
+
+  it("carries the demo rig's patch in the cue file and as CSV", async () => {
+    const url = `${process.env.APP_URL ?? "http://127.0.0.1:3000"}${base}/export`;
+    const cookie = viewer.cookie;
+    const text = await (await fetch(`${url}?format=ascii`, { headers: { cookie } })).text();
+    // Hand-worked from the seeder: channels 1–44 are one-slot units patched 1/1 … 1/44; channel 45 is the first
+    // 8-slot LED wash at 1/45, so channel 46 starts at 45 + 8 = 53. PATCH layout from memory.
+    expect(text).toMatch(/\r\nPATCH 1 1<1@FL 2<2@FL 3<3@FL /);
+    expect(text).toMatch(/[ ]45<45@FL[ \r]/);
+    expect(text).toMatch(/[ ]46<53@FL[ \r]/);
+    const csv = await (await fetch(`${url}?format=patch`, { headers: { cookie } })).text();
+    expect(csv.split("\r\n").slice(0, 2)).toEqual(["Channel,Universe,Address,Absolute address", "1,1,1,1"]);
+    expect(csv).toContain("\r\n46,1,53,53\r\n");
   });
 
   it("hides the cues of a production from outsiders (404)", async () => {
@@ -103,6 +136,17 @@ describe("writing, by role", () => {
     expect(dup.json.error.message).toMatch(/Cue 908 already exists/);
   });
 
+  it("keeps a down fade's own wait, clears it with null, and names it when it is bad", async () => {
+    const cue = await newCue(910, { upTime: 3, downTime: 6, delay: 0, downDelay: "1.5" });
+    expect(cue).toMatchObject({ delay: 0, downDelay: 1.5, downTime: 6 });
+    const cleared = await designer.patch(`${base}/${cue.id}`, { version: cue.version, downDelay: null });
+    expect(cleared.json.cue).toMatchObject({ downDelay: null, version: 2 });
+    const bad = await designer.post(base, { number: 911, downDelay: "soon" });
+    expect(bad.json.error.fieldErrors).toHaveProperty("downDelay");
+    // A down wait is a timing, so the stage manager may not set it (DESIGN.md roles: times are the designer's).
+    expect((await sm.patch(`${base}/${cue.id}`, { version: 2, downDelay: 2 })).status).toBe(403);
+  });
+
   it("removes a move with null so the channel tracks again", async () => {
     const cue = await newCue(909, { levels: { 7: 30, 8: 40 } });
     const r = await designer.patch(`${base}/${cue.id}`, { version: 1, levels: { 7: null } });
@@ -113,13 +157,15 @@ describe("writing, by role", () => {
 describe("renumbering and import in a production of one's own", () => {
   let own: ApiSession;
   let ownBase: string;
+  let ownId: number;
   beforeAll(async () => {
     ({ session: own } = await freshUser("cue-owner"));
     const p = await own.post("/api/productions", { name: "Cue Test Show", venue: "Test Hall", displayUnits: "metric" });
-    ownBase = `/api/productions/${p.json.production.id}/cues`;
+    ownId = p.json.production.id;
+    ownBase = `/api/productions/${ownId}/cues`;
   });
 
-  const FILE = ["IDENT 3:0", "CUE 1", "TEXT Opening", "UP 5", "CHAN 1@50 2@FL", "CUE 2", "UP 3 1", "DOWN 8", "FOLLOW 2", "CHAN 1@0 2@FL 3@H80", "CUE 3", "CHAN 3@40", "ENDDATA", ""].join("\r\n");
+  const FILE = ["IDENT 3:0", "CUE 1", "TEXT Opening", "UP 5", "CHAN 1@50 2@FL", "CUE 2", "UP 3 1", "DOWN 8", "FOLLOWON 2", "CHAN 1@0 2@FL 3@H80", "CUE 3", "DOWN 4 2.5", "CHAN 3@40", "ENDDATA", ""].join("\r\n");
 
   it("imports a USITT ASCII file, then exports it so it reads back the same", async () => {
     const r = await own.post(`${ownBase}/import`, { text: FILE });
@@ -129,13 +175,55 @@ describe("renumbering and import in a production of one's own", () => {
     expect(list.map((c: { number: number }) => c.number)).toEqual([1, 2, 3]);
     // Full-state reading: cue 3 lists only channel 3, so 2 goes out there (an explicit move to 0).
     expect(list[2].levels).toEqual({ 2: 0, 3: 40 });
-    expect(list[1]).toMatchObject({ upTime: 3, delay: 1, downTime: 8, follow: 2, levels: { 1: 0, 3: 50 } });
-    const out = await fetch(`${process.env.APP_URL ?? "http://127.0.0.1:3000"}${ownBase}/export?format=ascii`, { headers: { cookie: (own as unknown as { cookie: string }).cookie } });
+    // H80 = 128/255 = 50.196 % (from memory), stored as 50; the import says it rounded.
+    expect(list[1]).toMatchObject({ upTime: 3, delay: 1, downDelay: null, downTime: 8, follow: 2, levels: { 1: 0, 3: 50 } });
+    expect(r.json.notices).toContainEqual({ line: 10, message: "1 level was rounded to whole percentages (Throwline keeps whole percentages), the first on line 10: H80 → 50" });
+    // `DOWN 4 2.5` with no delay on UP: the down fade waits 2.5 s on its own; the up fade does not wait.
+    expect(list[2]).toMatchObject({ delay: 0, downDelay: 2.5, downTime: 4 });
+    const out = await fetch(`${process.env.APP_URL ?? "http://127.0.0.1:3000"}${ownBase}/export?format=ascii`, { headers: { cookie: own.cookie } });
     const text = await out.text();
     expect(text.startsWith("IDENT 3:0\r\n")).toBe(true);
+    expect(text).toContain("\r\nFOLLOWON 2\r\n"); // from memory: the standard's follow keyword
+    expect(text).toContain("\r\nCUE 3\r\nUP 5\r\nDOWN 4 2.5\r\n");
     const again = await own.post(`${ownBase}/import`, { text });
     expect(again.status).toBe(200);
-    expect((await own.get(ownBase)).json.cues.map((c: { levels: object }) => c.levels)).toEqual(list.map((c: { levels: object }) => c.levels));
+    const back = (await own.get(ownBase)).json.cues;
+    expect(back.map((c: { levels: object }) => c.levels)).toEqual(list.map((c: { levels: object }) => c.levels));
+    expect(back.map((c: { downDelay: number | null }) => c.downDelay)).toEqual([null, null, 2.5]);
+  });
+
+  it("refuses a file with no cues instead of emptying the list, and keeps what a replacing import removed", async () => {
+    const before = (await own.get(ownBase)).json.cues;
+    for (const text of ["IDENT 3:0\r\nENDDATA\r\n", "IDENT 3:0\r\n$TL-PAGE 4\r\n$OTHER x\r\nENDDATA\r\n"]) {
+      const r = await own.post(`${ownBase}/import`, { text });
+      expect(r.status).toBe(400);
+      expect(r.json.error.message).toMatch(/holds no cues, so importing it would delete every cue/);
+    }
+    expect((await own.get(ownBase)).json.cues).toEqual(before);
+    // A replacing import logs the cues it replaced, fields, moves and parts, so it can be undone.
+    const r = await own.post(`${ownBase}/import`, { text: FILE });
+    expect(r.status).toBe(200);
+    const u = new URL(process.env.DATABASE_URL!);
+    const db = await mariadb.createConnection({ host: u.hostname, port: Number(u.port), user: decodeURIComponent(u.username), password: decodeURIComponent(u.password), database: u.pathname.slice(1) });
+    try {
+      const [row] = await db.query("SELECT `before` FROM change_entries WHERE production_id = ? AND entity = 'cue' ORDER BY id DESC LIMIT 1", [ownId]);
+      const logged = typeof row.before === "string" ? JSON.parse(row.before) : row.before;
+      expect(logged.cues).toBe(before.length);
+      const strip = ({ id: _i, version: _v, updatedAt: _u, ...c }: Record<string, unknown>) => c;
+      expect(logged.replaced).toEqual(before.map(strip));
+    } finally {
+      await db.end();
+    }
+  });
+
+  it("exports the patch in the cue file and as CSV", async () => {
+    const cookie = own.cookie;
+    const url = `${process.env.APP_URL ?? "http://127.0.0.1:3000"}${ownBase}/export`;
+    const csv = await fetch(`${url}?format=patch`, { headers: { cookie } });
+    expect(csv.status).toBe(200);
+    expect(csv.headers.get("content-disposition")).toMatch(/Cue-Test-Show-patch\.csv/);
+    // A production with no fixtures has an empty patch: the header row only.
+    expect(await csv.text()).toBe("Channel,Universe,Address,Absolute address\r\n");
   });
 
   it("imports nothing when one line is bad, and names the line", async () => {
@@ -161,7 +249,7 @@ describe("renumbering and import in a production of one's own", () => {
   it("exports CSV with formula cells neutralised, and an Excel workbook", async () => {
     const list = (await own.get(ownBase)).json.cues;
     await own.patch(`${ownBase}/${list[0].id}`, { version: list[0].version, label: "=HYPERLINK(1)" });
-    const cookie = (own as unknown as { cookie: string }).cookie;
+    const cookie = own.cookie;
     const url = `${process.env.APP_URL ?? "http://127.0.0.1:3000"}${ownBase}/export`;
     const csv = await (await fetch(`${url}?format=csv`, { headers: { cookie } })).text();
     expect(csv).toContain("'=HYPERLINK(1)"); // OWASP CSV injection: leading = is neutralised

@@ -5,7 +5,7 @@ import { describe, expect, it } from "vitest";
 import { readUsittAscii, parseAsciiLevel } from "@/lib/cues/usitt-ascii-read";
 import { writeUsittAscii } from "@/lib/cues/usitt-ascii-write";
 import { patchToCsv, type PatchEntry } from "@/lib/cues/usitt-ascii-patch";
-import { toStoredMoves } from "@/lib/cues/import-plan";
+import { emptyFileReason, toStoredMoves } from "@/lib/cues/import-plan";
 import { CUE_DEFAULTS, runningTime, type CueWithMoves } from "@/lib/cues";
 
 const cue = (c: Partial<CueWithMoves> & { number: number }): CueWithMoves => ({ ...CUE_DEFAULTS, levels: {}, ...c });
@@ -154,5 +154,17 @@ describe("the patch", () => {
     expect(patchToCsv(patch)).toBe(
       "Channel,Universe,Address,Absolute address\r\n1,1,1,1\r\n1,1,9,9\r\n12,2,1,513\r\n40,3,512,1536\r\n",
     );
+  });
+});
+
+describe("a file with no cues", () => {
+  it("cannot replace the cue list: the reason says so in words", () => {
+    for (const text of [file(), file("$TL-PAGE 4", "$OTHER 1"), "IDENT 3:0\r\n! only a comment\r\nENDDATA\r\n"]) {
+      const read = readUsittAscii(text);
+      expect(read.errors).toEqual([]);
+      expect(emptyFileReason(read)).toMatch(/^The file holds no cues, so importing it would delete every cue/);
+    }
+    expect(emptyFileReason(readUsittAscii(file("PATCH 1 1<1@FL")))).toMatch(/holds no cues \(it holds a patch only\)/);
+    expect(emptyFileReason(readUsittAscii(file("CUE 1")))).toBeNull();
   });
 });

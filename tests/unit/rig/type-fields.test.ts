@@ -26,3 +26,13 @@ describe("typed fixture-type cells", () => {
     expect(drop.ok && (drop.patch.lensDropM as number)).toBeCloseTo(0.3048, 6);
   });
 });
+
+describe("a zoom's peak at both ends of its range", () => {
+  it("reads the narrow-end peak, clears it when emptied, and refuses a negative one", () => {
+    expect(parseTypeCell(col("peakCandelaNarrow"), "90000", "metric")).toEqual({ ok: true, patch: { peakCandelaNarrow: 90000 } });
+    expect(parseTypeCell(col("peakCandelaNarrow"), " ", "metric")).toEqual({ ok: true, patch: { peakCandelaNarrow: null } });
+    const neg = parseTypeCell(col("peakCandelaNarrow"), "-5", "metric");
+    expect(neg.ok ? "" : neg.message).toMatch(/^Peak at narrowest \(cd\): .*cannot be negative/);
+    expect(col("peakCandela").header).toBe("Peak at widest (cd)");
+  });
+});

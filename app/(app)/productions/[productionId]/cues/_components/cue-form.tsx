@@ -11,7 +11,7 @@ import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
 import { PartsEditor } from "./parts-editor";
 
-type Draft = { number: string; label: string; page: string; time: string; delay: string; follow: string; link: string; block: boolean; callNote: string; parts: PartDraft[] };
+type Draft = { number: string; label: string; page: string; time: string; delay: string; downDelay: string; follow: string; link: string; block: boolean; callNote: string; parts: PartDraft[] };
 
 function toDraft(c: CueDto): Draft {
   return {
@@ -20,6 +20,7 @@ function toDraft(c: CueDto): Draft {
     page: c.page ?? "",
     time: formatSplitTime(c.upTime, c.downTime),
     delay: c.delay ? formatFadeTime(c.delay) : "0",
+    downDelay: c.downDelay == null ? "" : formatFadeTime(c.downDelay),
     follow: c.follow == null ? "" : formatFadeTime(c.follow),
     link: c.link == null ? "" : formatCueNumber(c.link),
     block: c.block,
@@ -46,6 +47,11 @@ function readDraft(d: Draft, cue: CueDto): { changes: CueChanges; errors: Record
     if (t.down !== cue.downTime) changes.downTime = t.down;
   });
   attempt("delay", () => void (parseFadeTime(d.delay || "0", "Wait") !== cue.delay && (changes.delay = parseFadeTime(d.delay || "0", "Wait"))));
+  attempt("downDelay", () => {
+    // Empty: the down fade waits as long as the up fade.
+    const w = d.downDelay.trim() ? parseFadeTime(d.downDelay, "Down wait") : null;
+    if (w !== (cue.downDelay ?? null)) changes.downDelay = w;
+  });
   attempt("follow", () => {
     const f = d.follow.trim() ? parseFadeTime(d.follow, "Follow") : null;
     if (f !== cue.follow) changes.follow = f;
@@ -100,6 +106,7 @@ export function CueForm({ productionId, cue }: { productionId: number; cue: CueD
         <TextField label="Label" name="label" value={draft.label} onChange={set("label")} error={errors.label} className="col-span-1 sm:col-span-3" />
         <TextField label="Time (up/down)" name="time" value={draft.time} onChange={set("time")} error={errors.time ?? errors.upTime ?? errors.downTime} hint="5, 5.5, 1:30 or 3/8" />
         <TextField label="Wait before" name="delay" value={draft.delay} onChange={set("delay")} error={errors.delay} />
+        <TextField label="Down fade waits" name="downDelay" value={draft.downDelay} onChange={set("downDelay")} error={errors.downDelay} hint="empty = as the up fade" />
         <TextField label="Next cue follows after" name="follow" value={draft.follow} onChange={set("follow")} error={errors.follow} hint="seconds after GO; empty = called" />
         <TextField label="Then go to cue" name="link" value={draft.link} onChange={set("link")} error={errors.link} hint="empty = the next number" />
         <TextField label="Page" name="page" value={draft.page} onChange={set("page")} error={errors.page} />

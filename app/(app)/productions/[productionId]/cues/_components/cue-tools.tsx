@@ -78,9 +78,9 @@ export function CueTools({ productionId, cues, show, selected, selectedIndex, on
         <FormMessage message={message?.text} tone={message?.tone} />
         <div className="flex flex-wrap items-center gap-3 border-t border-line pt-3">
           <span className="font-medium">Take the cues away as</span>
-          {(["ascii", "csv", "xlsx"] as const).map((f) => (
+          {(["ascii", "csv", "xlsx", "patch"] as const).map((f) => (
             <a key={f} href={`/api/productions/${productionId}/cues/export?format=${f}`} className="text-accent underline" download>
-              {{ ascii: "USITT ASCII", csv: "CSV", xlsx: "Excel" }[f]}
+              {{ ascii: "USITT ASCII (with the patch)", csv: "CSV", xlsx: "Excel", patch: "Patch as CSV" }[f]}
             </a>
           ))}
         </div>
