@@ -18,9 +18,13 @@ export async function requireUser(): Promise<CurrentUser> {
  * The signed-in member of a production, checked against the role table. Outsiders get 404 (the
  * production's existence is not revealed); members without the right get 403.
  */
-export async function requireMember(rawProductionId: string | number, permission: Permission = "production.view"): Promise<MemberContext> {
+export async function requireMember(
+  rawProductionId: string | number,
+  permission: Permission = "production.view",
+): Promise<MemberContext> {
   const user = await requireUser();
-  const productionId = typeof rawProductionId === "number" ? rawProductionId : parseId(rawProductionId, "That production");
+  const productionId =
+    typeof rawProductionId === "number" ? rawProductionId : parseId(rawProductionId, "That production");
   const membership = await getMembership({ userId: user.id, productionId });
   if (!membership) throw new AppError("not_found", "That production was not found.");
   const member: Member = { role: membership.role, isOwner: membership.isOwner };
@@ -34,7 +38,12 @@ export async function requireMember(rawProductionId: string | number, permission
  * not a field) or the list of field names an edit will write; `message` replaces the list of names
  * where one plain sentence says it better.
  */
-export function requireFields(member: Member, entity: Entity, fields: object | readonly string[], message?: string): void {
+export function requireFields(
+  member: Member,
+  entity: Entity,
+  fields: object | readonly string[],
+  message?: string,
+): void {
   const names = Array.isArray(fields) ? [...fields] : Object.keys(fields).filter((k) => k !== "version");
   const denied = forbiddenFields(member, entity, names);
   if (!denied.length) return;

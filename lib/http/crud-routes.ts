@@ -20,16 +20,19 @@ import { parseId, readJson, readQuery, route } from "./respond";
  *
  *   // app/api/productions/[productionId]/focus-points/[focusPointId]/route.ts
  *   export const { PATCH, DELETE } = itemRoutes({
- *     param: "focusPointId", what: "Focus point", key: "focusPoint",
+ *     key: "focusPoint",
  *     update: { permission: "plot.edit", schema: updateFocusPointSchema, run: updateFocusPoint },
  *     remove: { permission: "plot.edit", run: deleteFocusPoint },
  *   });
+ *
+ * The row is sent under `key` ({ focusPoint: … }) and its id is read from the folder `[focusPointId]`
+ * (key + "Id"); a 404 says "Focus point was not found." unless `what` names it otherwise.
  *
  * Only the methods given are returned (the types say which), so exporting one that was not
  * declared fails the typecheck. Reads need only membership; writes need `permission`, or, with
  * `fields: "cue"` on an update, each written field's own right from the role table
  * (lib/auth/policy.ts), refused with a 403 whose fieldErrors name the fields. The id reaches the
- * data layer as `id` and under the URL's name (`cueId`), so either kind of data function fits.
+ * data layer as `id` and under the folder's name (`cueId`), so either kind of data function fits.
  */
 
 type Ctx = { params: Promise<Record<string, string>> };
@@ -40,38 +43,55 @@ type Target<P extends string> = { productionId: number; id: number } & Record<P,
 /** A write needs one right of the role table, or, with `fields`, each written field's own right. */
 type WriteRight = { permission: Permission; fields?: never } | { fields: Entity; permission?: never };
 
-export type ItemRouteSpec<P extends string, S extends z.ZodType, Q extends z.ZodType, G, U, R> = {
-  /** The id's folder name in the URL, without brackets: "focusPointId". */
-  param: P;
-  /** What a user calls one of them, capitalised, for "… was not found.": "Focus point". */
-  what: string;
-  /** The key the row is sent under: { focusPoint: … }. */
-  key: string;
+export type ItemRouteSpec<K extends string, S extends z.ZodType, Q extends z.ZodType, G, U, R> = {
+  /** The key the row is sent under ({ focusPoint: … }); the id's folder is `[${key}Id]`. */
+  key: K;
+  /** What a user calls one, capitalised, for "… was not found."; by default the key in words ("Focus point"). */
+  what?: string;
   /** GET (members): one row, or null for a 404. */
-  get?: (args: Target<P>) => Promise<G | null>;
+  get?: (args: Target<`${K}Id`>) => Promise<G | null>;
   /** PATCH: a JSON body read with `schema`, a 400 naming each bad field, before any write. */
-  update?: WriteRight & { schema: S; run: (args: Who & Target<P> & { patch: z.output<S> }) => Promise<U> };
+  update?: WriteRight & { schema: S; run: (args: Who & Target<`${K}Id`> & { patch: z.output<S> }) => Promise<U> };
   /** DELETE: with `query`, the query string is read with it (e.g. the version the user last saw). */
-  remove?: { permission: Permission; query?: Q; run: (args: Who & Target<P> & { query: z.output<Q> }) => Promise<R> };
+  remove?: {
+    permission: Permission;
+    query?: Q;
+    run: (args: Who & Target<`${K}Id`> & { query: z.output<Q> }) => Promise<R>;
+  };
 };
 
 type Given<T, Method extends string> = [T] extends [never] ? unknown : { [M in Method]: Handler };
 
-export function itemRoutes<P extends string, S extends z.ZodType = never, Q extends z.ZodType = never, G = never, U = never, R = never>(
-  spec: ItemRouteSpec<P, S, Q, G, U, R>,
-): Given<G, "GET"> & Given<U, "PATCH"> & Given<R, "DELETE"> {
+/** "fixtureType" → "Fixture type". */
+export function inWords(key: string): string {
+  const words = key.replace(/[A-Z]/g, (c) => ` ${c.toLowerCase()}`);
+  return words.charAt(0).toUpperCase() + words.slice(1);
+}
+
+export function itemRoutes<
+  K extends string,
+  S extends z.ZodType = never,
+  Q extends z.ZodType = never,
+  G = never,
+  U = never,
+  R = never,
+>(spec: ItemRouteSpec<K, S, Q, G, U, R>): Given<G, "GET"> & Given<U, "PATCH"> & Given<R, "DELETE"> {
+  const param = `${spec.key}Id` as const;
+  const what = spec.what ?? inWords(spec.key);
   async function target(ctx: Ctx, permission: Permission) {
     const params = await ctx.params;
     const { user, member, productionId } = await requireMember(params.productionId, permission);
-    const id = parseId(params[spec.param] ?? "", spec.what);
-    return { user, member, target: { productionId, id, [spec.param]: id } as Target<P> };
+    if (!(param in params))
+      throw new Error(`itemRoutes({ key: "${spec.key}" }) needs its route in a folder named [${param}]`);
+    const id = parseId(params[param], what);
+    return { user, member, target: { productionId, id, [param]: id } as Target<`${K}Id`> };
   }
   const handlers: Partial<Record<"GET" | "PATCH" | "DELETE", Handler>> = {};
   const { get, update, remove } = spec;
   if (get) {
     handlers.GET = route(async (_req, ctx: Ctx) => {
       const row = await get((await target(ctx, "production.view")).target);
-      if (row === null || row === undefined) throw notFound(spec.what);
+      if (row === null || row === undefined) throw notFound(what);
       return { [spec.key]: row };
     });
   }
@@ -125,7 +145,7 @@ export function collectionRoutes<S extends z.ZodType = never, I = never, L = nev
   if (create) {
     handlers.POST = route(async (req, ctx: Ctx) => {
       const { productionId, user } = await requireMember((await ctx.params).productionId, create.permission);
-      const input = create.schema ? await readJson(req, create.schema) : await create.read!(req);
+      const input = create.read ? await create.read(req) : await readJson(req, create.schema);
       const row = await create.run({ productionId, userId: user.id, input: input as never });
       return Response.json({ [spec.itemKey]: row }, { status: 201 });
     });

@@ -2,6 +2,7 @@ import "server-only";
 import { NextResponse } from "next/server";
 import type { z } from "zod";
 import { AppError, fromZodError, toAppError } from "@/lib/errors";
+import { BodyTooLarge, readBoundedBody } from "@/lib/io/bounded-body";
 import { toId } from "./id";
 
 /** Wraps a route handler: its result becomes JSON, its errors a JSON error with the right status. */
@@ -13,18 +14,34 @@ export function route<Ctx>(fn: (req: Request, ctx: Ctx) => Promise<unknown>) {
       return NextResponse.json(result ?? { ok: true });
     } catch (err) {
       const appError = toAppError(err);
-      return NextResponse.json(appError.toJSON(), { status: appError.status });
+      const retry = appError.details.retryAfterSeconds;
+      return NextResponse.json(appError.toJSON(), { status: appError.status, headers: retry ? { "Retry-After": String(retry) } : undefined });
     }
   };
 }
 
-/** Reads and validates a JSON body; a body that is not JSON is a 400 that says so. */
+/** The largest JSON body any route reads: the biggest real one (a bulk edit of a large rig) is well under. */
+export const MAX_JSON_BYTES = 1024 * 1024;
+
+/**
+ * Reads and validates a JSON body; a body that is not JSON is a 400 that says so. The bytes are counted
+ * as they arrive, so an oversized body (chunked, or lying about its length) is refused at the cap.
+ */
 export async function readJson<S extends z.ZodType>(req: Request, schema: S): Promise<z.infer<S>> {
   let body: unknown;
+  let bytes: Uint8Array;
   try {
-    body = await req.json();
+    bytes = await readBoundedBody(req, MAX_JSON_BYTES);
+  } catch (err) {
+    if (err instanceof BodyTooLarge) throw new AppError("too_large", `The request body is over ${MAX_JSON_BYTES / 1024} KB, more than any change needs.`);
+    throw err;
+  }
+  try {
+    body = JSON.parse(new TextDecoder().decode(bytes));
   } catch {
-    throw new AppError("bad_request", "The request body is not valid JSON.", { fieldErrors: { "(body)": ["not valid JSON"] } });
+    throw new AppError("bad_request", "The request body is not valid JSON.", {
+      fieldErrors: { "(body)": ["not valid JSON"] },
+    });
   }
   const parsed = schema.safeParse(body);
   if (!parsed.success) throw fromZodError(parsed.error);

@@ -23,17 +23,30 @@ function refusal(fn: () => void): AppError | null {
 describe("requireFields", () => {
   it("lets a write through when every field is the member's to write", () => {
     // DESIGN.md Roles: colour and channel are the designer's; circuit and address the electrician's too.
-    expect(refusal(() => requireFields(designer, "fixture", { version: 3, colour: "pale lavender", channel: 12, circuit: "A7" }))).toBeNull();
-    expect(refusal(() => requireFields(electrician, "fixture", { version: 3, circuit: "A7", address: 101 }))).toBeNull();
+    expect(
+      refusal(() =>
+        requireFields(designer, "fixture", { version: 3, colour: "pale lavender", channel: 12, circuit: "A7" }),
+      ),
+    ).toBeNull();
+    expect(
+      refusal(() => requireFields(electrician, "fixture", { version: 3, circuit: "A7", address: 101 })),
+    ).toBeNull();
     // DESIGN.md Roles: the stage manager edits page and call note.
-    expect(refusal(() => requireFields(stageManager, "cue", { version: 1, page: "12", callNote: "after the door slam" }))).toBeNull();
+    expect(
+      refusal(() => requireFields(stageManager, "cue", { version: 1, page: "12", callNote: "after the door slam" })),
+    ).toBeNull();
   });
 
   it("refuses with 403 and a fieldErrors entry for each refused field only", () => {
     // DESIGN.md Roles: colour and channel are "view" for the electrician; address is "edit".
-    const err = refusal(() => requireFields(electrician, "fixture", { version: 3, colour: "full CTB", channel: 4, address: 12 }));
+    const err = refusal(() =>
+      requireFields(electrician, "fixture", { version: 3, colour: "full CTB", channel: 4, address: 12 }),
+    );
     expect(err?.status).toBe(403);
-    expect(err?.details.fieldErrors).toEqual({ colour: ["not editable by your role"], channel: ["not editable by your role"] });
+    expect(err?.details.fieldErrors).toEqual({
+      colour: ["not editable by your role"],
+      channel: ["not editable by your role"],
+    });
     expect(err?.message).toBe("Your role cannot change: colour, channel.");
   });
 
@@ -49,8 +62,12 @@ describe("requireFields", () => {
 
   it("fixture types: the electrician writes wattage and weight but not the name; the viewer writes neither", () => {
     // DESIGN.md Roles: "types' wattage/weight" edit for designer and electrician.
-    expect(refusal(() => requireFields(electrician, "fixtureType", { version: 1, wattage: 750, weightKg: 8 }))).toBeNull();
-    const err = refusal(() => requireFields(electrician, "fixtureType", { version: 1, name: "Profile 19", wattage: 750 }));
+    expect(
+      refusal(() => requireFields(electrician, "fixtureType", { version: 1, wattage: 750, weightKg: 8 })),
+    ).toBeNull();
+    const err = refusal(() =>
+      requireFields(electrician, "fixtureType", { version: 1, name: "Profile 19", wattage: 750 }),
+    );
     expect(err?.details.fieldErrors).toEqual({ name: ["not editable by your role"] });
     expect(refusal(() => requireFields(viewer, "fixtureType", { version: 1, weightKg: 8 }))?.status).toBe(403);
   });
@@ -61,7 +78,9 @@ describe("requireFields", () => {
   });
 
   it("keeps the fieldErrors when a plainer message is given", () => {
-    const err = refusal(() => requireFields(viewer, "fixture", ["focusPhotoUploadId"], "Your role cannot change a focus photo."));
+    const err = refusal(() =>
+      requireFields(viewer, "fixture", ["focusPhotoUploadId"], "Your role cannot change a focus photo."),
+    );
     expect(err?.message).toBe("Your role cannot change a focus photo.");
     expect(err?.details.fieldErrors).toEqual({ focusPhotoUploadId: ["not editable by your role"] });
   });

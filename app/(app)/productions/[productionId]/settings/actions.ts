@@ -1,62 +1,83 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
-import { requireMember } from "@/lib/auth/guards";
-import { updateProductionSettings, type ProductionDto } from "@/lib/data/productions";
-import { productionSettingsSchema } from "@/lib/validation/production";
+import { z } from "zod";
+import { memberAction } from "@/lib/auth/member-action";
+import { updateProductionSettings } from "@/lib/data/productions";
+import { DISPLAY_UNITS, productionSettingsSchema } from "@/lib/validation/production";
+import { plainCountText } from "@/lib/http/id";
 import { parseLength } from "@/lib/optics";
-import { toAppError } from "@/lib/errors";
 
-export type SettingsFormState = {
-  message?: string;
-  ok?: boolean;
-  fieldErrors?: Record<string, string[]>;
-  production?: ProductionDto;
-  /** What the user typed, echoed back on error so the form does not lose it. */
-  values?: Record<string, string>;
-};
+const LENGTH_FIELDS = [
+  "headHeight",
+  "backWallY",
+  "prosceniumWidth",
+  "prosceniumHeight",
+  "stageWidth",
+  "stageDepth",
+  "apronDepth",
+] as const;
+const text = z.string().optional();
 
-const LENGTH_FIELDS = ["headHeight", "backWallY", "prosceniumWidth", "prosceniumHeight", "stageWidth", "stageDepth", "apronDepth"] as const;
-
-/** Saves the settings form. Checks the role again: an action can be POSTed to directly. */
-export async function updateSettingsAction(productionId: number, _prev: SettingsFormState, form: FormData): Promise<SettingsFormState> {
-  try {
-    const { user } = await requireMember(productionId, "settings.edit");
-    const units = form.get("displayUnits") === "imperial" ? "imperial" : "metric";
-    const fieldErrors: Record<string, string[]> = {};
+/**
+ * The settings form as typed: lengths in the chosen display units ("5' 6\"", "3.2 m"), numbers as
+ * text. Every field is checked in one pass so the form marks all that need fixing at once; a length
+ * that does not read as a length shows that message, not the range check's.
+ */
+const settingsFormSchema = z
+  .object({
+    name: text,
+    venue: text,
+    displayUnits: z.enum(DISPLAY_UNITS).catch("metric"),
+    datumName: text,
+    voltage: text,
+    derating: text,
+    numberingRule: text,
+    version: plainCountText("version is required (the version you last read)"),
+    headHeight: text,
+    backWallY: text,
+    prosceniumWidth: text,
+    prosceniumHeight: text,
+    stageWidth: text,
+    stageDepth: text,
+    apronDepth: text,
+  })
+  .transform((form, ctx) => {
+    const unread = new Set<string>();
     const lengths: Record<string, number> = {};
     for (const field of LENGTH_FIELDS) {
       try {
-        lengths[field] = parseLength(String(form.get(field) ?? ""), units === "imperial" ? "ft" : "m");
+        lengths[field] = parseLength(form[field] ?? "", form.displayUnits === "imperial" ? "ft" : "m");
       } catch (err) {
-        fieldErrors[field] = [(err as Error).message];
+        unread.add(field);
+        ctx.addIssue({ code: "custom", path: [field], message: (err as Error).message });
       }
     }
-    const parsed = productionSettingsSchema.safeParse({
-      name: form.get("name"),
-      venue: form.get("venue") ?? "",
-      displayUnits: units,
-      datumName: form.get("datumName"),
+    const checked = productionSettingsSchema.safeParse({
+      name: form.name,
+      venue: form.venue ?? "",
+      displayUnits: form.displayUnits,
+      datumName: form.datumName,
       ...lengths,
-      voltage: Number(form.get("voltage")),
-      derating: Number(form.get("derating")),
-      numberingRule: form.get("numberingRule"),
+      voltage: Number(form.voltage),
+      derating: Number(form.derating),
+      numberingRule: form.numberingRule,
     });
-    if (!parsed.success) {
-      for (const issue of parsed.error.issues) {
-        const field = String(issue.path[0]);
-        if (!(field in fieldErrors) || !LENGTH_FIELDS.includes(field as never)) (fieldErrors[field] ??= []).push(issue.message);
-      }
+    for (const issue of checked.error?.issues ?? []) {
+      if (!unread.has(String(issue.path[0])))
+        ctx.addIssue({ code: "custom", path: issue.path, message: issue.message });
     }
-    if (Object.keys(fieldErrors).length || !parsed.success) {
-      const values = Object.fromEntries([...form.entries()].map(([k, v]) => [k, String(v)]));
-      return { fieldErrors, values, message: "Some settings need fixing; see the marked fields." };
-    }
-    const production = await updateProductionSettings({ productionId, version: Number(form.get("version")), changes: parsed.data, userId: user.id });
+    if (!checked.success || unread.size) return z.NEVER;
+    return { version: form.version, changes: checked.data };
+  });
+
+/** Saves the settings form; the role is checked again on every call (see memberAction). */
+export const updateSettingsAction = memberAction(
+  "settings.edit",
+  settingsFormSchema,
+  async ({ version, changes }, { productionId, user }) => {
+    const production = await updateProductionSettings({ productionId, version, changes, userId: user.id });
     revalidatePath(`/productions/${productionId}`, "layout");
-    return { ok: true, message: "Settings saved.", production };
-  } catch (err) {
-    const e = toAppError(err);
-    return { message: e.message, fieldErrors: e.details.fieldErrors, production: e.details.current as ProductionDto | undefined };
-  }
-}
+    return { production, message: "Settings saved." };
+  },
+);

@@ -1,8 +1,9 @@
 "use client";
 
 import { useActionState, useState } from "react";
-import { updateSettingsAction, type SettingsFormState } from "./actions";
-import type { ProductionDto } from "@/lib/data/productions";
+import { updateSettingsAction } from "./actions";
+import type { ProductionDto } from "@/lib/dto/production";
+import { fieldError, IDLE, typedValue } from "@/lib/http/action-state";
 import { formatLength } from "@/lib/optics";
 import { Card } from "@/components/ui/card";
 import { TextField } from "@/components/ui/text-field";
@@ -19,17 +20,21 @@ const LENGTHS: Array<[keyof ProductionDto, string, string]> = [
   ["headHeight", "Head height", "For focusing to head height (common practice 1.7–1.8 m)"],
 ];
 
+type SettingsState = Awaited<ReturnType<typeof updateSettingsAction>>;
+
 export function SettingsForm({ production: initial, canEdit }: { production: ProductionDto; canEdit: boolean }) {
   const [production, setProduction] = useState(initial);
-  const [state, action, pending] = useActionState<SettingsFormState, FormData>(async (prev, form) => {
+  const [state, action, pending] = useActionState<SettingsState, FormData>(async (prev, form) => {
     const next = await updateSettingsAction(initial.id, prev, form);
-    if (next.production) setProduction(next.production);
+    // Saved, or refused because someone else saved first (409): show the row as it is now.
+    const now = next.status === "ok" ? next.production : next.status === "error" ? (next.current as ProductionDto | undefined) : undefined;
+    if (now) setProduction(now);
     return next;
-  }, {});
+  }, IDLE);
   const units = production.displayUnits;
-  const err = (f: string) => state.fieldErrors?.[f];
+  const err = (f: string) => fieldError(state, f);
   // After a refused save, show what was typed rather than the stored value.
-  const typed = (f: string, stored: string | number) => state.values?.[f] ?? String(stored);
+  const typed = (f: string, stored: string | number) => typedValue(state, f) ?? String(stored);
   return (
     <form action={action} key={production.version} className="flex flex-col gap-4" noValidate>
       <input type="hidden" name="version" value={production.version} />
@@ -78,7 +83,7 @@ export function SettingsForm({ production: initial, canEdit }: { production: Pro
         ) : (
           <p className="text-sm text-muted">Only the designer can change these settings.</p>
         )}
-        <FormMessage message={state.message} tone={state.ok ? "ok" : "error"} />
+        <FormMessage message={state.status === "idle" ? undefined : state.message} tone={state.status === "ok" ? "ok" : "error"} />
       </div>
     </form>
   );

@@ -3,7 +3,8 @@ import { createFixtureType, getFixtureTypesByProduction } from "@/lib/data/fixtu
 import { createFixtureTypeSchema } from "@/lib/validation/rig";
 
 export const { GET, POST } = collectionRoutes({
-  key: "fixtureTypes", itemKey: "fixtureType",
+  key: "fixtureTypes",
+  itemKey: "fixtureType",
   list: getFixtureTypesByProduction,
   create: { permission: "plot.edit", schema: createFixtureTypeSchema, run: createFixtureType },
 });

@@ -3,7 +3,8 @@ import { createFocusPoint, getFocusPointsByProduction } from "@/lib/data/focus-p
 import { createFocusPointSchema } from "@/lib/validation/rig";
 
 export const { GET, POST } = collectionRoutes({
-  key: "focusPoints", itemKey: "focusPoint",
+  key: "focusPoints",
+  itemKey: "focusPoint",
   list: getFocusPointsByProduction,
   create: { permission: "plot.edit", schema: createFocusPointSchema, run: createFocusPoint },
 });

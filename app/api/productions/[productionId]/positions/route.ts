@@ -3,7 +3,8 @@ import { createPosition, getPositionsByProduction } from "@/lib/data/positions";
 import { createPositionSchema } from "@/lib/validation/rig";
 
 export const { GET, POST } = collectionRoutes({
-  key: "positions", itemKey: "position",
+  key: "positions",
+  itemKey: "position",
   list: getPositionsByProduction,
   create: { permission: "plot.edit", schema: createPositionSchema, run: createPosition },
 });

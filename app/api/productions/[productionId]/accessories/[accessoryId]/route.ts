@@ -4,7 +4,7 @@ import { accessoryPatchSchema } from "@/lib/validation/accessory";
 
 /** Accessories are electrics: the designer and the electrician may change them. */
 export const { PATCH, DELETE } = itemRoutes({
-  param: "accessoryId", what: "Accessory", key: "accessory",
+  key: "accessory",
   update: { permission: "rig.editElectrics", schema: accessoryPatchSchema, run: updateAccessory },
   remove: { permission: "rig.editElectrics", run: deleteAccessory },
 });

@@ -3,7 +3,8 @@ import { deleteAreaZone, updateAreaZone } from "@/lib/data/area-zones";
 import { updateAreaZoneSchema } from "@/lib/validation/plot";
 
 export const { PATCH, DELETE } = itemRoutes({
-  param: "areaZoneId", what: "Acting area", key: "areaZone",
+  key: "areaZone",
+  what: "Acting area",
   update: { permission: "plot.edit", schema: updateAreaZoneSchema, run: updateAreaZone },
   remove: { permission: "plot.edit", run: deleteAreaZone },
 });

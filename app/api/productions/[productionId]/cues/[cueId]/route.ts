@@ -8,8 +8,12 @@ const deleteQuery = z.object({ version: plainCountText("version is required (the
 
 /** Cue fields are checked one by one against the role table: the stage manager may write page and call note only. */
 export const { GET, PATCH, DELETE } = itemRoutes({
-  param: "cueId", what: "Cue", key: "cue",
+  key: "cue",
   get: getCueById,
   update: { fields: "cue", schema: cuePatchSchema, run: updateCue },
-  remove: { permission: "cues.edit", query: deleteQuery, run: ({ query, ...cue }) => deleteCue({ ...cue, version: query.version }) },
+  remove: {
+    permission: "cues.edit",
+    query: deleteQuery,
+    run: ({ query, ...cue }) => deleteCue({ ...cue, version: query.version }),
+  },
 });

@@ -4,7 +4,7 @@ import { updateFixtureTypeSchema } from "@/lib/validation/rig";
 
 /** Electrical figures (wattage, weight, DMX modes) are the electrician's; the rest the designer's. */
 export const { PATCH, DELETE } = itemRoutes({
-  param: "fixtureTypeId", what: "Fixture type", key: "fixtureType",
+  key: "fixtureType",
   update: { fields: "fixtureType", schema: updateFixtureTypeSchema, run: updateFixtureType },
   remove: { permission: "plot.edit", run: deleteFixtureType },
 });

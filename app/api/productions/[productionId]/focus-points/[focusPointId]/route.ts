@@ -3,7 +3,7 @@ import { deleteFocusPoint, updateFocusPoint } from "@/lib/data/focus-points";
 import { updateFocusPointSchema } from "@/lib/validation/rig";
 
 export const { PATCH, DELETE } = itemRoutes({
-  param: "focusPointId", what: "Focus point", key: "focusPoint",
+  key: "focusPoint",
   update: { permission: "plot.edit", schema: updateFocusPointSchema, run: updateFocusPoint },
   remove: { permission: "plot.edit", run: deleteFocusPoint },
 });

@@ -3,7 +3,7 @@ import { deleteLandmark, updateLandmark } from "@/lib/data/landmarks";
 import { updateLandmarkSchema } from "@/lib/validation/plot";
 
 export const { PATCH, DELETE } = itemRoutes({
-  param: "landmarkId", what: "Landmark", key: "landmark",
+  key: "landmark",
   update: { permission: "plot.edit", schema: updateLandmarkSchema, run: updateLandmark },
   remove: { permission: "plot.edit", run: deleteLandmark },
 });

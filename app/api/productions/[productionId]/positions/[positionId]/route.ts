@@ -3,7 +3,7 @@ import { deletePosition, updatePosition } from "@/lib/data/positions";
 import { updatePositionSchema } from "@/lib/validation/rig";
 
 export const { PATCH, DELETE } = itemRoutes({
-  param: "positionId", what: "Position", key: "position",
+  key: "position",
   update: { permission: "plot.edit", schema: updatePositionSchema, run: updatePosition },
   remove: { permission: "plot.edit", run: deletePosition },
 });

@@ -4,7 +4,7 @@ import { updateUploadSchema } from "@/lib/validation/plot";
 
 /** Calibration of an underlay (scale, offset, rotation, opacity, lock), and its removal. */
 export const { PATCH, DELETE } = itemRoutes({
-  param: "uploadId", what: "Upload", key: "upload",
+  key: "upload",
   update: { permission: "plot.edit", schema: updateUploadSchema, run: updateUpload },
   remove: { permission: "plot.edit", run: deleteUpload },
 });
