@@ -28,7 +28,7 @@ function rig(n: number): FixtureDto[] {
     const record = {
       id: i + 1, productionId: 1, positionId: pos + 1, fixtureTypeId: 1, focusPointId: null, unitNumber: String((i % 20) + 1), bodyKey: null, cell: null,
       channel: i + 1, universe: 1 + Math.floor(i / 512), address: (i % 512) + 1, dmxMode: null, footprint: 1, circuit: `C${i + 1}`, dimmer: null,
-      colour: "L201", gobo: i % 7 === 0 ? "breakup" : null, purpose: foh ? "front light" : "top light", x: lens.x, y: lens.y, lensHeight: lens.z,
+      colour: "pale blue", gobo: i % 7 === 0 ? "breakup" : null, purpose: foh ? "front light" : "top light", x: lens.x, y: lens.y, lensHeight: lens.z,
       focusX: mark.x, focusY: mark.y, aim: (i % 2 ? "deck" : "head") as "deck" | "head", coneDeg: 26, softnessDeg: 3,
       shutterCuts: i % 4 === 0 ? [{ label: "top" as const, a: { x: -6, y: -1.5 }, b: { x: 6, y: -1.5 } }] : null, irisPercent: null,
       notes: i % 5 === 0 ? "Keep off the set edge." : null, focusNotes: null, focusPhotoUploadId: null, goboRotationDeg: i % 7 === 0 ? 45 : null,

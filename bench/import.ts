@@ -28,7 +28,7 @@ function rows(n: number, colourTag = ""): SheetOut {
   const body = Array.from({ length: n }, (_, i) => {
     const p = i % POSITIONS;
     const unit = Math.floor(i / POSITIONS) + 1;
-    return [`Pipe ${p + 1}`, String(unit), "Profile 26", i + 1, Math.floor(i / 512) + 1, (i % 512) + 1, i % 3 ? `L201${colourTag} + #132` : `N/C${colourTag}`, `area ${i % 12}`, -8 + (unit % 160) / 10, p, 7 - (i % 5) / 10, i % 2 ? "yes" : "no"];
+    return [`Pipe ${p + 1}`, String(unit), "Profile 26", i + 1, Math.floor(i / 512) + 1, (i % 512) + 1, i % 3 ? `pale blue${colourTag} + light frost` : `N/C${colourTag}`, `area ${i % 12}`, -8 + (unit % 160) / 10, p, 7 - (i % 5) / 10, i % 2 ? "yes" : "no"];
   });
   return { name: "Rig", columns: header.map((h) => ({ header: h, width: 10 })), rows: body };
 }

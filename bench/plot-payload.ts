@@ -16,7 +16,7 @@ function rig(n: number): PlotFixtureRecord[] {
   return Array.from({ length: n }, (_, i) => ({
     id: i + 1, positionId: (i % 40) + 1, fixtureTypeId: 100 + (i % 4), focusPointId: null, unitNumber: String(Math.floor(i / 40) + 1),
     channel: i + 1, x: -8 + (i % 37) * 0.4371, y: -6 + (i % 40) * 0.7719, lensHeight: null, focusX: Math.sin(i) * 5, focusY: Math.cos(i) * 4,
-    aim: i % 3 ? "deck" : "head", coneDeg: null, softnessDeg: null, shutterCuts: null, purpose: "front wash", colour: "L201", version: 1,
+    aim: i % 3 ? "deck" : "head", coneDeg: null, softnessDeg: null, shutterCuts: null, purpose: "front wash", colour: "pale blue", version: 1,
   }));
 }
 

@@ -145,7 +145,7 @@ describe("fixtures", () => {
     const el = await new ApiSession().signIn(DEMO.electrician);
     const id = await demoProductionId(el);
     const f = (await el.get(`/api/productions/${id}/fixtures`)).json.fixtures[5];
-    const denied = await el.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: f.version, colour: "L999" });
+    const denied = await el.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: f.version, colour: "deep amber" });
     expect(denied.status).toBe(403);
     expect(denied.json.error.fieldErrors).toHaveProperty("colour");
     const ok = await el.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: f.version, circuit: "A-17" });
@@ -159,11 +159,11 @@ describe("fixtures", () => {
     const el = await new ApiSession().signIn(DEMO.electrician);
     const id = await demoProductionId(designer);
     const f = (await designer.get(`/api/productions/${id}/fixtures`)).json.fixtures[7];
-    const a = await designer.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: f.version, colour: "L202" });
+    const a = await designer.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: f.version, colour: "pale amber" });
     const b = await el.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: f.version, circuit: "B-2" });
     expect(a.status).toBe(200);
     expect(b.status).toBe(409);
-    expect(b.json.error.current.colour).toBe("L202");
+    expect(b.json.error.current.colour).toBe("pale amber");
   });
 
   it("refuses a DMX address that runs past slot 512 (ANSI E1.11)", async () => {

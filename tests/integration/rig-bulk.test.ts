@@ -24,7 +24,7 @@ describe("bulk edit", () => {
     const { s, id, items } = await withUnits();
     expect((await s.post(`/api/productions/${id}/fixtures/bulk`, { items, action: { kind: "channels", start: 101, step: 1 } })).status).toBe(200);
     expect((await fixturesOf(s, id)).map((f) => f.channel)).toEqual([101, 102, 103, 104]);
-    const stale = await s.post(`/api/productions/${id}/fixtures/bulk`, { items, action: { kind: "colour", colour: "L201" } });
+    const stale = await s.post(`/api/productions/${id}/fixtures/bulk`, { items, action: { kind: "colour", colour: "pale blue" } });
     expect(stale.status).toBe(409);
     expect(stale.json.error.current.channel).toBe(101);
     expect((await fixturesOf(s, id)).every((f) => f.colour === null)).toBe(true);
@@ -38,7 +38,7 @@ describe("bulk edit", () => {
     const el = await new ApiSession().signIn("teodor.brask@quillmere.test");
     const demo = await demoProductionId(el);
     const f = (await fixturesOf(el, demo))[0];
-    expect((await el.post(`/api/productions/${demo}/fixtures/bulk`, { items: [{ id: f.id, version: f.version }], action: { kind: "colour", colour: "L201" } })).status).toBe(403);
+    expect((await el.post(`/api/productions/${demo}/fixtures/bulk`, { items: [{ id: f.id, version: f.version }], action: { kind: "colour", colour: "pale blue" } })).status).toBe(403);
   });
 });
 

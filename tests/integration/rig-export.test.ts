@@ -13,7 +13,7 @@ async function seeded(units: "metric" | "imperial") {
   const p = await rigProduction(units);
   const csv = [
     "Position,Unit,Type,Channel,Universe,Address,Colour,Purpose,X (m),Y (m),Lens height (m),Focus X (m),Focus Y (m),Cone,Hung,Notes,Gobo rotation,Barn door top",
-    "LX1,1,Profile 26,1,1,1,L201 + #132,Area 1,-3.3333333,1,6.55,-2,3.1,24.5,yes,=SUM(A1:A2),112.5,",
+    "LX1,1,Profile 26,1,1,1,pale blue + light frost,Area 1,-3.3333333,1,6.55,-2,3.1,24.5,yes,=SUM(A1:A2),112.5,",
     "LX1,2,Profile 26,2,1,2,N/C,Area 2,3.14159,1,,2,3,,no,\"comma, and \"\"quote\"\"\",,",
     "Boom SL,1,Wash 13,3,1,10,,side,7,2,2.2,0,4,30,no,+1 spare lamp,,in halfway",
   ].join("\n");
@@ -65,7 +65,7 @@ describe("export files", () => {
     expect(all.getColumn(1).width).toBeGreaterThan(8);
     const colour = wb.getWorksheet("Stock - colour")!;
     // common practice, from memory: 6.25 in cuts from a 20 × 24 in sheet → 3 × 3 = 9 per sheet
-    expect(colour.getRow(2).values).toEqual([undefined, "#132", "6.25 in", 1, 9, 1]);
+    expect(colour.getRow(2).values).toEqual([undefined, "light frost", "6.25 in", 1, 9, 1]);
   });
 
   it("lists each accessory on its own sheet and counts it in the stock", async () => {

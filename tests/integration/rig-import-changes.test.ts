@@ -23,7 +23,7 @@ async function fixtureChanges(productionId: number): Promise<Entry[]> {
 describe("an import's change records", () => {
   it("records each created fixture with the fields the file set, then each update with before and after", async () => {
     const { s, id } = await rigProduction();
-    const first = "Position,Unit,Type,Channel,Colour\nLX1,1,Profile 26,11,L201\nLX1,2,Profile 26,12,L202\n";
+    const first = "Position,Unit,Type,Channel,Colour\nLX1,1,Profile 26,11,pale blue\nLX1,2,Profile 26,12,pale amber\n";
     expect((await upload(s, id, { name: "rig.csv", body: first }, { mode: "commit" })).status).toBe(200);
     const made = await fixturesOf(s, id);
     const created = await fixtureChanges(id);
@@ -37,13 +37,13 @@ describe("an import's change records", () => {
     }
 
     // Only unit 2's colour changes: one update record, nothing for the unchanged unit 1.
-    const second = "Position,Unit,Type,Channel,Colour\nLX1,1,Profile 26,11,L201\nLX1,2,Profile 26,12,R80\n";
+    const second = "Position,Unit,Type,Channel,Colour\nLX1,1,Profile 26,11,pale blue\nLX1,2,Profile 26,12,deep blue\n";
     const again = await upload(s, id, { name: "rig.csv", body: second }, { mode: "commit" });
     expect(again.json.result.counts).toMatchObject({ create: 0, update: 1 });
     const unit2 = made.find((f) => f.unitNumber === "2");
     const updates = (await fixtureChanges(id)).filter((e) => e.action === "update");
     expect(updates).toHaveLength(1);
-    expect(updates[0]).toMatchObject({ entity_id: unit2.id, before: { colour: "L202" }, after: { id: unit2.id, colour: "R80", version: unit2.version + 1 } });
+    expect(updates[0]).toMatchObject({ entity_id: unit2.id, before: { colour: "pale amber" }, after: { id: unit2.id, colour: "deep blue", version: unit2.version + 1 } });
     expect(updates[0].after).not.toHaveProperty("channel");
   });
 });

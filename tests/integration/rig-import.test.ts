@@ -28,7 +28,7 @@ describe("real-world CSV files", () => {
 
   it("renames duplicated headers, says so, and maps the first copy", async () => {
     const { s, id } = await rigProduction();
-    const r = await upload(s, id, { name: "dup.csv", body: "Position,Unit,Type,Colour,Colour\nLX1,5,Profile 26,L201,R02\n" }, preview);
+    const r = await upload(s, id, { name: "dup.csv", body: "Position,Unit,Type,Colour,Colour\nLX1,5,Profile 26,pale blue,straw\n" }, preview);
     expect(r.json.preview.headers).toEqual(["Position", "Unit", "Type", "Colour", "Colour (2)"]);
     expect(r.json.preview.mapping).toEqual(["position", "unitNumber", "type", "colour", "ignore"]);
     expect(r.json.preview.notes[0]).toMatch(/more than once/);
@@ -134,15 +134,15 @@ describe("row errors and all-or-nothing", () => {
 
   it("updates matched fixtures with a version bump, leaves equal rows alone, and remembers the mapping", async () => {
     const { s, id } = await rigProduction();
-    await upload(s, id, { name: "a.csv", body: "Where,No.,Kind,Gel\nLX1,1,Profile 26,L201\nLX1,2,Profile 26,L202\n" }, { ...commit, mapping: ["position", "unitNumber", "type", "colour"] });
+    await upload(s, id, { name: "a.csv", body: "Where,No.,Kind,Gel\nLX1,1,Profile 26,pale blue\nLX1,2,Profile 26,pale amber\n" }, { ...commit, mapping: ["position", "unitNumber", "type", "colour"] });
     const before = await fixturesOf(s, id);
-    const again = await upload(s, id, { name: "b.csv", body: "where,no.,kind,gel\nLX1,1,Profile 26,L201 + #132\nLX1,2,Profile 26,L202\n" }, preview);
+    const again = await upload(s, id, { name: "b.csv", body: "where,no.,kind,gel\nLX1,1,Profile 26,pale blue + light frost\nLX1,2,Profile 26,pale amber\n" }, preview);
     expect(again.json.preview.mapping).toEqual(["position", "unitNumber", "type", "colour"]);
     expect(again.json.preview.counts).toEqual({ create: 0, update: 1, unchanged: 1 });
-    await upload(s, id, { name: "b.csv", body: "where,no.,kind,gel\nLX1,1,Profile 26,L201 + #132\nLX1,2,Profile 26,L202\n" }, commit);
+    await upload(s, id, { name: "b.csv", body: "where,no.,kind,gel\nLX1,1,Profile 26,pale blue + light frost\nLX1,2,Profile 26,pale amber\n" }, commit);
     const after = await fixturesOf(s, id);
     const one = (list: any[], u: string) => list.find((f) => f.unitNumber === u);
-    expect(one(after, "1")).toMatchObject({ colour: "L201 + #132", version: one(before, "1").version + 1 });
+    expect(one(after, "1")).toMatchObject({ colour: "pale blue + light frost", version: one(before, "1").version + 1 });
     expect(one(after, "2").version).toBe(one(before, "2").version);
   });
 });
@@ -154,7 +154,7 @@ describe("roles", () => {
     const fx = await fixturesOf(el, id);
     const target = fx[0];
     const other = fx[1];
-    const refused = await upload(el, id, { name: "el.csv", body: `Position,Unit,Circuit,Colour\n${target.positionName},${target.unitNumber},E-77,L999\n` }, preview);
+    const refused = await upload(el, id, { name: "el.csv", body: `Position,Unit,Circuit,Colour\n${target.positionName},${target.unitNumber},E-77,deep amber\n` }, preview);
     expect(refused.json.preview.errors).toEqual([{ row: 2, column: "Colour", message: expect.stringMatching(/^Your role cannot change Colour/) }]);
     const newUnit = await upload(el, id, { name: "el.csv", body: `Position,Unit,Circuit\n${target.positionName},999,E-1\n` }, preview);
     expect(newUnit.json.preview.errors[0].message).toMatch(/only the designer can add fixtures/);

@@ -15,7 +15,7 @@ export function makeFixture(o: Over = {}): FixtureDto {
   const mark = o.mark ?? { x: 1.2, y: 2.5 };
   const record = {
     id: 1, productionId: 1, positionId: 10, fixtureTypeId: 3, focusPointId: null, unitNumber: "7", bodyKey: null, cell: null,
-    channel: 107, universe: 1, address: 107, dmxMode: null, footprint: 1, circuit: "A12", dimmer: null, colour: "L201", gobo: null,
+    channel: 107, universe: 1, address: 107, dmxMode: null, footprint: 1, circuit: "A12", dimmer: null, colour: "pale blue", gobo: null,
     purpose: "front light", x: lens.x, y: lens.y, lensHeight: lens.z, focusX: mark.x, focusY: mark.y, aim: "deck" as const,
     coneDeg: 26, softnessDeg: 2, shutterCuts: null, irisPercent: null, notes: null, focusNotes: null, focusPhotoUploadId: null, goboRotationDeg: null,
     barnDoorTop: null, barnDoorBottom: null, barnDoorLeft: null, barnDoorRight: null, hung: true, focused: false,

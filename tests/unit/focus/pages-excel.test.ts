@@ -43,7 +43,7 @@ describe("Excel export", () => {
   it("neutralises cells that could run as formulas", () => {
     // OWASP CSV injection: = + - @ tab CR at the start of a cell
     for (const s of ["=1+1", "+A1", "-2+3", "@SUM(A1)", "\tx", "\rx"]) expect(neutraliseCell(s)).toBe(`'${s}`);
-    expect(neutraliseCell("L201 + L132")).toBe("L201 + L132");
+    expect(neutraliseCell("pale blue + light frost")).toBe("pale blue + light frost");
   });
 
   it("writes one row a fixture with every chart value", async () => {

@@ -87,7 +87,7 @@ describe("readXlsx", () => {
       wb.addWorksheet("Cover").addRow(["notes"]);
       const s = wb.addWorksheet("Rig");
       s.addRow(["Position", "Unit", "Purpose", "Colour"]);
-      for (let i = 0; i < 2000; i++) s.addRow([i % 7 ? null : `Pipe ${i}`, i + 1, `wash ${"x".repeat(60)} ${i}`, i % 5 ? null : "L201"]);
+      for (let i = 0; i < 2000; i++) s.addRow([i % 7 ? null : `Pipe ${i}`, i + 1, `wash ${"x".repeat(60)} ${i}`, i % 5 ? null : "pale blue"]);
       for (let i = 0; i < 2000; i += 7) s.mergeCells(`A${i + 2}:A${Math.min(i + 8, 2001)}`);
       for (let i = 0; i < 2000; i += 5) s.mergeCells(`D${i + 2}:D${i + 3}`);
     });

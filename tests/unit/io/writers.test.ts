@@ -9,7 +9,7 @@ describe("neutraliseCell", () => {
   it("prefixes text starting with = + - @ tab or carriage return", () => {
     // OWASP CSV injection: these leading characters can start a formula
     for (const s of ["=1+1", "+SUM(A1)", "-2+3", "@cmd", "\tx", "\rx"]) expect(neutraliseCell(s)).toBe(`'${s}`);
-    expect(neutraliseCell("L201 + #132")).toBe("L201 + #132");
+    expect(neutraliseCell("pale blue + light frost")).toBe("pale blue + light frost");
   });
 
   it("leaves plain numbers alone and reverses on import", () => {

@@ -13,7 +13,7 @@ const point = { id: 3, name: "Area 3", x: 1, y: 2 } as unknown as FocusPointDto;
 const record: PlotFixtureRecord = {
   id: 10, positionId: 1, fixtureTypeId: 2, focusPointId: null, unitNumber: "4", channel: 21,
   x: 1.23456789, y: -6.0004, lensHeight: null, focusX: 1.0001, focusY: 0.5, aim: "deck",
-  coneDeg: null, softnessDeg: null, shutterCuts: null, purpose: "warm front", colour: "L201", version: 3,
+  coneDeg: null, softnessDeg: null, shutterCuts: null, purpose: "warm front", colour: "pale blue", version: 3,
 };
 
 describe("the plot's slim fixture shape", () => {

@@ -5,7 +5,7 @@ const snap: Snapshot = {
   positions: [{ id: 1, name: "LX1", x1: -5, y1: 1, x2: 5, y2: 1 }],
   types: [{ id: 1, name: "Profile 26", dmxModes: [{ name: "dimmer", footprint: 1 }] }, { id: 2, name: "Wash", dmxModes: [{ name: "std", footprint: 13 }] }],
   focusPoints: [{ id: 7, name: "Area 1" }],
-  fixtures: [{ id: 10, version: 3, positionId: 1, fixtureTypeId: 1, unitNumber: "1", address: null, footprint: null, colour: "L201", circuit: "A1", x: 1.23456, lensHeight: 6, hung: false, focusPointId: null }],
+  fixtures: [{ id: 10, version: 3, positionId: 1, fixtureTypeId: 1, unitNumber: "1", address: null, footprint: null, colour: "pale blue", circuit: "A1", x: 1.23456, lensHeight: 6, hung: false, focusPointId: null }],
 };
 const designer = { role: "designer" as const, isOwner: true };
 const electrician = { role: "electrician" as const, isOwner: false };
@@ -13,19 +13,19 @@ const columnOf = (k: string) => k;
 
 describe("planImport", () => {
   it("treats lengths within 0.1 mm as unchanged and matches names case-insensitively", () => {
-    const r = planImport([{ rowNumber: 2, values: { position: "lx1", unitNumber: "1", x: 1.23459, colour: "L201" } }], snap, { member: designer, createMissing: false, columnOf });
+    const r = planImport([{ rowNumber: 2, values: { position: "lx1", unitNumber: "1", x: 1.23459, colour: "pale blue" } }], snap, { member: designer, createMissing: false, columnOf });
     expect(r.plans).toEqual([{ rowNumber: 2, action: "unchanged", fixtureId: 10 }]);
   });
 
   it("plans an update with only the changed fields and the version read", () => {
-    const r = planImport([{ rowNumber: 2, values: { position: "LX1", unitNumber: "1", colour: "L202", circuit: "A1", focusPoint: "area 1" } }], snap, { member: designer, createMissing: false, columnOf });
-    expect(r.plans[0]).toMatchObject({ action: "update", fixtureId: 10, version: 3, changes: { colour: "L202", focusPointId: 7 } });
+    const r = planImport([{ rowNumber: 2, values: { position: "LX1", unitNumber: "1", colour: "pale amber", circuit: "A1", focusPoint: "area 1" } }], snap, { member: designer, createMissing: false, columnOf });
+    expect(r.plans[0]).toMatchObject({ action: "update", fixtureId: 10, version: 3, changes: { colour: "pale amber", focusPointId: 7 } });
   });
 
   it("refuses the electrician's designer-field changes by name, and new units", () => {
     const r = planImport(
       [
-        { rowNumber: 2, values: { position: "LX1", unitNumber: "1", colour: "L202", circuit: "B2" } },
+        { rowNumber: 2, values: { position: "LX1", unitNumber: "1", colour: "pale amber", circuit: "B2" } },
         { rowNumber: 3, values: { position: "LX1", unitNumber: "2", type: "Profile 26" } },
       ],
       snap,
@@ -33,7 +33,7 @@ describe("planImport", () => {
     );
     expect(r.plans).toEqual([]);
     expect(r.errors).toEqual([
-      { row: 2, column: "colour", message: 'Your role cannot change Colour (it would go from "L201" to "L202")' },
+      { row: 2, column: "colour", message: 'Your role cannot change Colour (it would go from "pale blue" to "pale amber")' },
       { row: 3, column: "unitNumber", message: "Unit 2 on LX1 is not in the rig; only the designer can add fixtures" },
     ]);
   });

@@ -4,12 +4,12 @@ import { parseColour, formatColour } from "@/lib/rig/colour";
 
 describe("parseColour", () => {
   it("splits colour and diffusion on +, and reads empty-frame words as no cut", () => {
-    expect(parseColour("L201 + #132")).toEqual(["L201", "#132"]); // Throwline's convention
-    expect(parseColour("R02+L119")).toEqual(["R02", "L119"]);
+    expect(parseColour("pale blue + light frost")).toEqual(["pale blue", "light frost"]); // Throwline's convention
+    expect(parseColour("straw+heavy frost")).toEqual(["straw", "heavy frost"]);
     expect(parseColour("N/C")).toEqual([]);
     expect(parseColour(" open ")).toEqual([]);
     expect(parseColour(null)).toEqual([]);
-    expect(formatColour(["L201", "#132"])).toBe("L201 + #132");
+    expect(formatColour(["pale blue", "light frost"])).toBe("pale blue + light frost");
   });
 });
 
@@ -37,17 +37,17 @@ describe("stockCounts", () => {
 
   it("counts units, cuts by colour and frame, sheets, gobos, accessories and Y-cables", () => {
     const fixtures = [
-      ...Array.from({ length: 10 }, (_, i) => f({ unitNumber: String(i + 1), colour: "L201 + #132", circuit: i < 3 ? "12" : String(100 + i) })),
-      f({ fixtureTypeId: 2, typeName: "Fresnel", colour: "L201", gobo: "breakup", circuit: "7" }),
+      ...Array.from({ length: 10 }, (_, i) => f({ unitNumber: String(i + 1), colour: "pale blue + light frost", circuit: i < 3 ? "12" : String(100 + i) })),
+      f({ fixtureTypeId: 2, typeName: "Fresnel", colour: "pale blue", gobo: "breakup", circuit: "7" }),
       f({ gobo: "breakup" }),
     ];
     const s = stockCounts(fixtures, types, [{ kind: "scroller" }, { kind: "scroller" }, { kind: "iris" }]);
     expect(s.units).toEqual([{ type: "Profile 26", count: 11 }, { type: "Fresnel", count: 1 }]);
     // common practice, from memory: 9 cuts of 6.25 in per sheet → 10 cuts need 2 sheets
     expect(s.cuts).toEqual([
-      { colour: "#132", frameSize: "6.25 in", cuts: 10, perSheet: 9, sheets: 2 },
-      { colour: "L201", frameSize: "6.25 in", cuts: 10, perSheet: 9, sheets: 2 },
-      { colour: "L201", frameSize: "7.5 in", cuts: 1, perSheet: 6, sheets: 1 },
+      { colour: "light frost", frameSize: "6.25 in", cuts: 10, perSheet: 9, sheets: 2 },
+      { colour: "pale blue", frameSize: "6.25 in", cuts: 10, perSheet: 9, sheets: 2 },
+      { colour: "pale blue", frameSize: "7.5 in", cuts: 1, perSheet: 6, sheets: 1 },
     ]);
     expect(s.gobos).toEqual(expect.arrayContaining([{ gobo: "breakup", size: "B", count: 1 }, { gobo: "breakup", size: "size not set", count: 1 }]));
     expect(s.accessories).toEqual([{ kind: "scroller", count: 2 }, { kind: "iris", count: 1 }]);

@@ -45,7 +45,7 @@ export function BulkBar({ productionId, fixtures, selectedIds, canPlot, canElect
         </select>
       </label>
       {kind === "colour" ? (
-        <label className="flex flex-col gap-1"><span>Colour (+ diffusion)</span><input className="min-h-10 rounded-md border border-line bg-surface px-2" placeholder="L201 + #132" value={colour} onChange={(e) => setColour(e.target.value)} /></label>
+        <label className="flex flex-col gap-1"><span>Colour (+ diffusion)</span><input className="min-h-10 rounded-md border border-line bg-surface px-2" placeholder="pale blue + light frost" value={colour} onChange={(e) => setColour(e.target.value)} /></label>
       ) : null}
       {kind === "addresses" ? (
         <label className="flex flex-col gap-1"><span>Universe</span><input inputMode="numeric" className="min-h-10 w-20 rounded-md border border-line bg-surface px-2" value={universe} onChange={(e) => setUniverse(e.target.value)} /></label>

@@ -26,7 +26,7 @@ export function StockPanel({ fixtures, types, accessories }: { fixtures: Fixture
     <div className="grid gap-3 md:grid-cols-2 print:grid-cols-1" data-testid="stock-panel">
       <Block title="Units by type" head={["Type", "Units"]} rows={s.units.map((u) => [u.type, u.count])} />
       <Block title="Colour cuts" head={["Filter", "Frame", "Cuts", "Per sheet", "Sheets"]} rows={s.cuts.map((c) => [c.colour, c.frameSize, c.cuts, c.perSheet, c.sheets])}
-        note={`A colour field such as "L201 + #132" is one cut of each filter. Cuts per sheet assume a ${SHEET_INCHES.width} × ${SHEET_INCHES.height} in sheet and square cuts the size of the frame (common practice, from memory); check your supplier's sheet size.`} />
+        note={`A colour field such as "pale blue + light frost" is one cut of each filter. Cuts per sheet assume a ${SHEET_INCHES.width} × ${SHEET_INCHES.height} in sheet and square cuts the size of the frame (common practice, from memory); check your supplier's sheet size.`} />
       <Block title="Gobos by size" head={["Gobo", "Size", "Count"]} rows={s.gobos.map((g) => [g.gobo, g.size, g.count])} />
       <Block title="Accessories" head={["Kind", "Count"]} rows={s.accessories.map((a) => [a.kind, a.count])} />
       <Block title="Y-cables for shared circuits" head={["Circuit", "Fixtures", "Y-cables"]} rows={s.yCables.map((y) => [y.circuit, y.fixtures, y.yCables])}
