@@ -15,6 +15,7 @@ export type StudyLight = {
   softnessDeg: number;
   family: string;
   apertureDiameter: number;
+  peakCandela: number;
   /** Level in the chosen state, 0–100, and the share of full output after the curve and the colour. */
   level: number;
   output: number;

@@ -3,8 +3,6 @@ import { deleteColourTransmission, updateColourTransmission } from "@/lib/data/c
 import { updateColourTransmissionSchema } from "@/lib/validation/studies";
 
 export const { PATCH, DELETE } = itemRoutes({
-  param: "colourId",
-  what: "Colour",
   key: "colour",
   update: { permission: "studies.run", schema: updateColourTransmissionSchema, run: updateColourTransmission },
   remove: { permission: "studies.run", run: deleteColourTransmission },
