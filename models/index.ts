@@ -20,8 +20,10 @@ import { initImportMapping, ImportMapping } from "./import-mapping";
 import { initPerformerMark, PerformerMark } from "./performer-mark";
 import { initScenicPanel, ScenicPanel } from "./scenic-panel";
 import { initColourTransmission, ColourTransmission } from "./colour-transmission";
+import { initCircuit, Circuit } from "./circuit";
+import { initDataLine, DataLine } from "./data-line";
 
-const models = { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission };
+const models = { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission, Circuit, DataLine };
 export type Db = typeof models & { sequelize: Sequelize };
 
 function associate() {
@@ -48,7 +50,7 @@ function createDb(): Db {
     pool: { max: 10, min: 0, idle: 10_000, acquire: 10_000 },
     dialectOptions: { timezone: "Z", connectTimeout: 5_000 },
   });
-  for (const init of [initUser, initProduction, initMembership, initPosition, initFixtureType, initFocusPoint, initFixture, initCue, initCuePart, initChangeEntry, initAreaZone, initLandmark, initUpload, initAccessory, initImportMapping, initPerformerMark, initScenicPanel, initColourTransmission]) {
+  for (const init of [initUser, initProduction, initMembership, initPosition, initFixtureType, initFocusPoint, initFixture, initCue, initCuePart, initChangeEntry, initAreaZone, initLandmark, initUpload, initAccessory, initImportMapping, initPerformerMark, initScenicPanel, initColourTransmission, initCircuit, initDataLine]) {
     init(sequelize);
   }
   associate();
@@ -62,4 +64,4 @@ export function getDb(): Db {
   return holder.__throwlineDb;
 }
 
-export { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission };
+export { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission, Circuit, DataLine };

@@ -15,6 +15,8 @@ export class Position extends Model<InferAttributes<Position>, InferCreationAttr
   declare y2: number | null;
   declare trimHeight: number;
   declare ratedLoadKg: number | null;
+  /** Lift lines of a flown pipe, equally spaced, one at each end (for the rigging check). */
+  declare liftLines: CreationOptional<number | null>;
   declare sortOrder: CreationOptional<number>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
@@ -34,6 +36,7 @@ export function initPosition(sequelize: Sequelize) {
       y2: { type: DataTypes.DOUBLE, allowNull: true },
       trimHeight: { type: DataTypes.DOUBLE, allowNull: false },
       ratedLoadKg: { type: DataTypes.DOUBLE, allowNull: true },
+      liftLines: { type: DataTypes.INTEGER, allowNull: true },
       sortOrder: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
       version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
       createdAt: DataTypes.DATE,

@@ -1,3 +1,4 @@
+import { ELECTRICAL_CODES, SUPPLY_SYSTEMS, type ElectricalCode, type SupplySystem } from "./electrical-options";
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
 
 export type DisplayUnits = "metric" | "imperial";
@@ -19,7 +20,12 @@ export class Production extends Model<InferAttributes<Production>, InferCreation
   declare stageDepth: CreationOptional<number>;
   declare apronDepth: CreationOptional<number>;
   declare voltage: CreationOptional<number>;
-  declare derating: CreationOptional<number>;
+  /** Continuous-load factor set for this production; null takes the electrical code's default. */
+  declare derating: CreationOptional<number | null>;
+  declare electricalCode: CreationOptional<ElectricalCode>;
+  declare supplySystem: CreationOptional<SupplySystem>;
+  declare cableKgPerM: CreationOptional<number>;
+  declare hardwareKgPerUnit: CreationOptional<number>;
   declare numberingRule: CreationOptional<NumberingRule>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
@@ -45,7 +51,11 @@ export function initProduction(sequelize: Sequelize) {
       stageDepth: metres(10),
       apronDepth: metres(1.5),
       voltage: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 230 },
-      derating: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0.8 },
+      derating: { type: DataTypes.DOUBLE, allowNull: true, defaultValue: null },
+      electricalCode: { type: DataTypes.ENUM(...ELECTRICAL_CODES), allowNull: false, defaultValue: "none" },
+      supplySystem: { type: DataTypes.ENUM(...SUPPLY_SYSTEMS), allowNull: false, defaultValue: "by-hand" },
+      cableKgPerM: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0.5 },
+      hardwareKgPerUnit: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 1 },
       numberingRule: { type: DataTypes.ENUM("from-stage-left", "from-stage-right"), allowNull: false, defaultValue: "from-stage-left" },
       version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
       createdAt: DataTypes.DATE,

@@ -1,11 +1,9 @@
 // Electrical codes and supply systems: the one home for which voltage, phases and continuous-load
 // factor a production's power check uses. The display units never choose any of these.
 
-export const ELECTRICAL_CODES = ["none", "us-nec", "uk-bs7671", "iec-60364", "other"] as const;
-export type ElectricalCode = (typeof ELECTRICAL_CODES)[number];
+import type { ElectricalCode, SupplySystem } from "@/models/electrical-options";
 
-export const SUPPLY_SYSTEMS = ["120-208-3ph", "120-240-split", "230-400-3ph", "230-1ph", "100-1ph", "by-hand"] as const;
-export type SupplySystem = (typeof SUPPLY_SYSTEMS)[number];
+export { ELECTRICAL_CODES, SUPPLY_SYSTEMS, type ElectricalCode, type SupplySystem } from "@/models/electrical-options";
 
 type CodeInfo = { label: string; defaultSupply: SupplySystem; defaultDerating: number | null; note: string };
 

@@ -1,0 +1,158 @@
+import "server-only";
+// Reads what the checks need in a few plain queries and runs them (lib/checks is pure), plus the writes
+// of the checks' own settings: the production's electrical code and allowances, and a pipe's lift lines.
+import { QueryTypes } from "sequelize";
+import type { z } from "zod";
+import { getDb, type Production } from "@/models";
+import { CHECK_CAUTIONS, DMX_CAUTIONS, LOAD_KIND_RULE, POWER_CAUTIONS, effectiveElectrical, loadKindOfType, runChecks, type CheckPosition, type RiggingFixture } from "@/lib/checks";
+import type { ChecksReport, ElectricalSettingsDto } from "@/lib/dto/checks";
+import type { updateElectricalSettingsSchema, updateLiftLinesSchema } from "@/lib/validation/checks";
+import { isPointHung, type PositionKind } from "@/lib/rig/position-kinds";
+import { notFound } from "@/lib/errors";
+import { recordChange } from "./changes";
+import { jsonColumn } from "./json-column";
+import { versionedUpdate } from "./versioned";
+
+const SETTINGS_KEYS = ["electricalCode", "supplySystem", "voltage", "derating", "cableKgPerM", "hardwareKgPerUnit", "version"] as const;
+
+export const toElectricalSettingsDto = (p: Production): ElectricalSettingsDto => ({
+  productionId: p.id,
+  electricalCode: p.electricalCode,
+  supplySystem: p.supplySystem,
+  voltage: Number(p.voltage),
+  derating: p.derating == null ? null : Number(p.derating),
+  cableKgPerM: Number(p.cableKgPerM),
+  hardwareKgPerUnit: Number(p.hardwareKgPerUnit),
+  version: p.version,
+});
+
+export async function getElectricalSettings({ productionId }: { productionId: number }): Promise<ElectricalSettingsDto | null> {
+  const row = await getDb().Production.findByPk(productionId, { attributes: ["id", ...SETTINGS_KEYS] });
+  return row ? toElectricalSettingsDto(row) : null;
+}
+
+export async function updateElectricalSettings({ productionId, userId, patch }: { productionId: number; userId: number; patch: z.infer<typeof updateElectricalSettingsSchema> }): Promise<ElectricalSettingsDto> {
+  const { version, ...changes } = patch;
+  const { sequelize, Production } = getDb();
+  return sequelize.transaction(async (transaction) => {
+    const { before, after } = await versionedUpdate({ model: Production, scope: {}, id: productionId, version, changes, toDto: toElectricalSettingsDto, what: "Production", transaction });
+    const dto = toElectricalSettingsDto(after);
+    await recordChange({ productionId, userId, entity: "production", entityId: productionId, action: "update", before: toElectricalSettingsDto(before), after: dto }, transaction);
+    return dto;
+  });
+}
+
+export async function updateLiftLines({ productionId, positionId, userId, patch }: { productionId: number; positionId: number; userId: number; patch: z.infer<typeof updateLiftLinesSchema> }) {
+  const { sequelize, Position } = getDb();
+  const toDto = (p: { id: number; liftLines: number | null; version: number }) => ({ positionId: p.id, liftLines: p.liftLines, version: p.version });
+  return sequelize.transaction(async (transaction) => {
+    const { before, after } = await versionedUpdate({ model: Position, scope: { productionId }, id: positionId, version: patch.version, changes: { liftLines: patch.liftLines }, toDto, what: "Position", transaction });
+    await recordChange({ productionId, userId, entity: "position", entityId: positionId, action: "update", before: toDto(before), after: toDto(after) }, transaction);
+    return toDto(after);
+  });
+}
+
+type FixtureRow = { id: number; positionId: number; fixtureTypeId: number; unitNumber: string; bodyKey: string | null; channel: number | null; universe: number | null; address: number | null; dmxMode: string | null; footprint: number | null; circuit: string | null; dimmer: string | null; x: number; y: number };
+type TypeRow = { id: number; name: string; family: string; wattage: number; weightKg: number; dmxModes: unknown; cells: number };
+type PositionRow = { id: number; name: string; kind: PositionKind; x1: number; y1: number; x2: number | null; y2: number | null; ratedLoadKg: number | null; liftLines: number | null; version: number };
+
+/** Where a unit hangs along a line position, metres from its first end (its plan point projected). */
+function along(p: PositionRow, x: number, y: number): number | null {
+  if (p.x2 == null || p.y2 == null) return null;
+  const dx = p.x2 - p.x1;
+  const dy = p.y2 - p.y1;
+  const len2 = dx * dx + dy * dy;
+  if (len2 === 0) return null;
+  const t = Math.min(1, Math.max(0, ((x - p.x1) * dx + (y - p.y1) * dy) / len2));
+  return t * Math.sqrt(len2);
+}
+
+function toCheckPosition(p: PositionRow): CheckPosition {
+  const line = p.x2 != null && p.y2 != null && !isPointHung(p.kind);
+  return {
+    id: p.id,
+    name: p.name,
+    kind: p.kind,
+    lengthM: line ? Math.hypot((p.x2 as number) - p.x1, (p.y2 as number) - p.y1) : null,
+    ratedLoadKg: p.ratedLoadKg == null ? null : Number(p.ratedLoadKg),
+    liftLines: p.liftLines,
+    counterweighted: p.kind === "flying-electric",
+  };
+}
+
+/** All three checks for a production, computed from its current rows. */
+export async function getChecksReport({ productionId }: { productionId: number }): Promise<ChecksReport | null> {
+  const db = getDb();
+  const raw = { raw: true, where: { productionId } } as const;
+  const [production, fixtures, types, positions, accessories, circuits, lines, cueChannels] = await Promise.all([
+    db.Production.findByPk(productionId, { attributes: ["id", ...SETTINGS_KEYS] }),
+    db.Fixture.findAll({ ...raw, attributes: ["id", "positionId", "fixtureTypeId", "unitNumber", "bodyKey", "channel", "universe", "address", "dmxMode", "footprint", "circuit", "dimmer", "x", "y"] }) as unknown as Promise<FixtureRow[]>,
+    db.FixtureType.findAll({ ...raw, attributes: ["id", "name", "family", "wattage", "weightKg", "dmxModes", "cells"] }) as unknown as Promise<TypeRow[]>,
+    db.Position.findAll({ ...raw, attributes: ["id", "name", "kind", "x1", "y1", "x2", "y2", "ratedLoadKg", "liftLines", "version"], order: [["sortOrder", "ASC"], ["id", "ASC"]] }) as unknown as Promise<PositionRow[]>,
+    db.Accessory.findAll({ ...raw, attributes: ["id", "fixtureId", "kind", "universe", "address", "footprint", "weightKg"] }),
+    db.Circuit.findAll({ ...raw, attributes: ["id", "name", "ratingA", "phase", "power"] }),
+    db.DataLine.findAll({ ...raw, attributes: ["id", "name", "universe", "fixtureIds"], order: [["name", "ASC"]] }),
+    db.sequelize.query<{ channel: number }>("SELECT DISTINCT l.channel FROM cue_levels l JOIN cues c ON c.id = l.cue_id WHERE c.production_id = ?", { replacements: [productionId], type: QueryTypes.SELECT }),
+  ]);
+  if (!production) return null;
+  const started = performance.now();
+  const settings = toElectricalSettingsDto(production);
+  const electrical = effectiveElectrical(settings);
+  const typeById = new Map(types.map((t) => [t.id, { ...t, dmxModes: jsonColumn<{ name: string; footprint: number }[]>(t.dmxModes) ?? [] }]));
+  const positionById = new Map(positions.map((p) => [p.id, p]));
+
+  const checkFixtures: RiggingFixture[] = fixtures.map((f) => {
+    const t = typeById.get(f.fixtureTypeId);
+    const modes = t?.dmxModes ?? [];
+    const footprint = f.footprint ?? modes.find((m) => m.name === f.dmxMode)?.footprint ?? (modes.length === 1 ? modes[0].footprint : null);
+    // A type's wattage is the whole unit's; each cell row of a multi-cell body draws its share on its own circuit.
+    const cells = f.bodyKey && t && t.cells > 1 ? t.cells : 1;
+    const position = positionById.get(f.positionId);
+    return {
+      id: f.id,
+      label: position ? `${f.unitNumber} (${position.name})` : f.unitNumber,
+      positionId: f.positionId,
+      fixtureTypeId: f.fixtureTypeId,
+      typeName: t?.name ?? "unknown type",
+      dmxMode: f.dmxMode,
+      universe: f.universe,
+      address: f.address,
+      footprint,
+      channel: f.channel,
+      circuit: f.circuit,
+      dimmer: f.dimmer,
+      // Types store 0 for "not entered"; no real unit draws 0 W or weighs 0 kg, so 0 is reported as missing.
+      wattage: t && Number(t.wattage) > 0 ? Number(t.wattage) / cells : null,
+      weightKg: t && Number(t.weightKg) > 0 ? Number(t.weightKg) : null,
+      loadKind: t ? loadKindOfType(t) : "lamp",
+      bodyKey: f.bodyKey,
+      alongM: position ? along(position, Number(f.x), Number(f.y)) : null,
+    };
+  });
+
+  const result = runChecks({
+    fixtures: checkFixtures,
+    accessories: accessories.map((a) => ({ id: a.id, fixtureId: a.fixtureId, kind: a.kind, universe: a.universe, address: a.address, footprint: a.footprint, weightKg: Number(a.weightKg) > 0 ? Number(a.weightKg) : null })),
+    positions: positions.map(toCheckPosition),
+    circuits: circuits.map((c) => ({ id: c.id, name: c.name, ratingA: Number(c.ratingA), phase: c.phase, dimmed: c.power === "dimmed" })),
+    dataLines: lines.map((l) => ({ id: l.id, name: l.name, universe: l.universe, fixtureIds: jsonColumn<number[]>(l.fixtureIds) ?? [] })),
+    cueChannels: cueChannels.map((c) => Number(c.channel)),
+    electrical,
+    rigging: { cableKgPerM: settings.cableKgPerM, hardwareKgPerUnit: settings.hardwareKgPerUnit },
+  });
+  return {
+    ...result,
+    settings,
+    electrical,
+    cautions: { general: CHECK_CAUTIONS, power: POWER_CAUTIONS, dmx: DMX_CAUTIONS, loadKindRule: LOAD_KIND_RULE },
+    liftLines: positions.filter((p) => toCheckPosition(p).lengthM != null).map((p) => ({ positionId: p.id, liftLines: p.liftLines, version: p.version })),
+    computedAt: new Date().toISOString(),
+    computeMs: performance.now() - started,
+  };
+}
+
+export async function requireChecksReport({ productionId }: { productionId: number }): Promise<ChecksReport> {
+  const report = await getChecksReport({ productionId });
+  if (!report) throw notFound("Production");
+  return report;
+}
