@@ -9,4 +9,5 @@ export type * from "./people";
 export type * from "./plan";
 export type * from "./plot";
 export type * from "./production";
+export type * from "./studies";
 export type * from "./upload";
