@@ -1,6 +1,7 @@
 // The shapes the data layer returns and the API sends: plain objects with ISO date strings. Types only
 // and no 'server-only', so client components, hooks and pure modules import them from here.
 export type * from "./accessory";
+export type * from "./checks";
 export type * from "./cue";
 export type * from "./fixture";
 export type * from "./fixture-type";
