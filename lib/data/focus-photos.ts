@@ -1,16 +1,15 @@
 import "server-only";
 // Focus photos: one picture a fixture, taken on the deck during the focus call. Stored through the
 // uploads service (an Upload row of kind "focus-photo" and files in the file store) and linked from the
-// fixture, whose version guards the link like any other field. The type is decided from the bytes; sharp
-// then decodes the image (a file that only starts like an image is refused), turns it upright from the
+// fixture, whose version guards the link like any other field. sharp reads the header (type by content,
+// pixel limit), then decodes the image (a file that only starts like an image is refused), turns it upright from the
 // camera's orientation tag, drops its metadata (a phone photo carries the GPS position) and keeps two
 // JPEG copies: one for the screen, and a small one for the chart, the print view and the PDF.
 import { randomBytes } from "node:crypto";
-import sharp from "sharp";
 import { getDb } from "@/models";
 import { AppError, notFound } from "@/lib/errors";
 import { fileStore, MAX_UPLOAD_BYTES } from "@/lib/storage";
-import { sniffImageType } from "@/lib/storage/sniff";
+import { decoder, readImageHeader, refusal } from "@/lib/storage/image-decode";
 import type { ChartPhoto } from "@/lib/focus/chart-model";
 import type { FixtureDto } from "@/lib/dto/fixture";
 import { getFixtureById, toFixtureRecord } from "./fixtures";
@@ -23,8 +22,6 @@ export const MAX_FOCUS_PHOTO_BYTES = MAX_UPLOAD_BYTES;
 /** Long side of the kept copy and of the chart's copy, in pixels. */
 const FULL_PX = 1600;
 export const THUMB_PX = 320;
-/** Decoding limit: a 50-megapixel camera fits; a "decompression bomb" does not. */
-const MAX_INPUT_PIXELS = 64_000_000;
 
 const thumbKeyOf = (key: string) => key.replace(/-full\.jpg$/, "-thumb.jpg");
 const mb = (n: number) => `${(n / 1048576).toFixed(1)} MB`;
@@ -37,23 +34,16 @@ export async function preparePhoto(bytes: Uint8Array): Promise<Prepared> {
   if (bytes.byteLength > MAX_FOCUS_PHOTO_BYTES) {
     throw new AppError("too_large", `The photo is ${mb(bytes.byteLength)}; the limit is ${MAX_FOCUS_PHOTO_BYTES / 1048576} MB.`, { fieldErrors: { file: ["over the size limit"] } });
   }
-  if (!sniffImageType(bytes)) {
-    throw new AppError("unsupported", "That file is not a PNG, JPEG or WebP photo (checked by its content, not its name). Nothing was saved.", { fieldErrors: { file: ["not a PNG, JPEG or WebP image"] } });
-  }
+  await readImageHeader(bytes, "photo");
   try {
-    const upright = () => sharp(bytes, { limitInputPixels: MAX_INPUT_PIXELS, failOn: "error" }).rotate().flatten({ background: "#ffffff" });
+    const upright = () => decoder(bytes).rotate().flatten({ background: "#ffffff" });
     const [full, thumb] = await Promise.all([
       upright().resize({ width: FULL_PX, height: FULL_PX, fit: "inside", withoutEnlargement: true }).jpeg({ quality: 82 }).toBuffer({ resolveWithObject: true }),
       upright().resize({ width: THUMB_PX, height: THUMB_PX, fit: "inside", withoutEnlargement: true }).jpeg({ quality: 70 }).toBuffer(),
     ]);
     return { full: full.data, thumb, width: full.info.width, height: full.info.height };
   } catch (err) {
-    const pixels = /pixel limit/i.test((err as Error).message);
-    throw new AppError(
-      "bad_request",
-      pixels ? "The photo has more pixels than a camera makes (over 64 megapixels). Nothing was saved." : "The photo could not be read; the file may be damaged or cut short. Take it again. Nothing was saved.",
-      { fieldErrors: { file: [pixels ? "too many pixels" : "could not be read as an image"] } },
-    );
+    throw refusal(err, "photo");
   }
 }
 

@@ -5,7 +5,7 @@ import { getDb, type Upload } from "@/models";
 import type { UploadKind } from "@/models/upload";
 import { AppError, notFound } from "@/lib/errors";
 import { fileStore, MAX_UPLOAD_BYTES } from "@/lib/storage";
-import { imageSize, sniffImageType } from "@/lib/storage/sniff";
+import { reencodeUnderlay } from "@/lib/storage/image-decode";
 import type { updateUploadSchema } from "@/lib/validation/plot";
 import type { UploadDto } from "@/lib/dto/upload";
 import { plain } from "./plain";
@@ -27,28 +27,27 @@ export async function getUploadsByProduction({ productionId, kind }: { productio
 }
 
 /**
- * Stores an underlay image. The type comes from the bytes (PNG, JPEG, WebP), never the name; the
- * first placement puts the image's top-left corner upstage-left-ish so it lands near the stage.
+ * Stores an underlay image: decoded by sharp (PNG, JPEG or WebP by its content, never its name; a
+ * damaged file or one with too many pixels is refused) and stored as sharp writes it again. The first
+ * placement puts the image's top-left corner upstage-left-ish so it lands near the stage.
  */
 export async function createUnderlay({ productionId, userId, fileName, bytes }: { productionId: number; userId: number; fileName: string; bytes: Uint8Array }) {
   if (bytes.byteLength === 0) throw new AppError("bad_request", "The file is empty.", { fieldErrors: { file: ["the file is empty"] } });
   if (bytes.byteLength > MAX_UPLOAD_BYTES) {
     throw new AppError("too_large", `The file is ${(bytes.byteLength / 1048576).toFixed(1)} MB; the limit is ${MAX_UPLOAD_BYTES / 1048576} MB.`, { fieldErrors: { file: ["too large"] } });
   }
-  const type = sniffImageType(bytes);
-  if (!type) throw new AppError("unsupported", "That file is not a PNG, JPEG or WebP image (checked by its content, not its name).", { fieldErrors: { file: ["not a PNG, JPEG or WebP image"] } });
-  const size = imageSize(bytes, type);
+  const image = await reencodeUnderlay(bytes);
   const key = `p${productionId}/underlay-${Date.now()}-${randomBytes(6).toString("hex")}`;
-  await fileStore().put(key, bytes, type);
+  await fileStore().put(key, image.bytes, image.type);
   const { sequelize, Upload } = getDb();
   try {
     return await sequelize.transaction(async (transaction) => {
       const row = await Upload.create(
         {
-          productionId, kind: "underlay", fileName: fileName.slice(0, 200) || "groundplan", storageKey: key, contentType: type, sizeBytes: bytes.byteLength,
-          widthPx: size?.width ?? null, heightPx: size?.height ?? null, uploadedBy: userId,
+          productionId, kind: "underlay", fileName: fileName.slice(0, 200) || "groundplan", storageKey: key, contentType: image.type, sizeBytes: image.bytes.byteLength,
+          widthPx: image.width, heightPx: image.height, uploadedBy: userId,
           // 1 cm a pixel, centred on the centre line 4 m upstage: a starting guess that lands on the stage, to calibrate from.
-          metresPerPixel: 0.01, offsetX: -((size?.width ?? 0) * 0.01) / 2, offsetY: 4 + ((size?.height ?? 0) * 0.01) / 2,
+          metresPerPixel: 0.01, offsetX: -(image.width * 0.01) / 2, offsetY: 4 + (image.height * 0.01) / 2,
         },
         { transaction },
       );

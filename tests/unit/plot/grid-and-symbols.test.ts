@@ -1,6 +1,5 @@
 import { describe, expect, it } from "vitest";
 import { gridLines, gridStep, scaleBar } from "@/lib/plot/grid";
-import { sniffImageType, imageSize } from "@/lib/storage/sniff";
 import { stageOutline } from "@/lib/plot/stage-outline";
 import { symbolPixels, labelsFit } from "@/lib/plot/symbol";
 import { nearestOnScreen, distanceToSegment } from "@/lib/plot/pick";
@@ -21,23 +20,6 @@ describe("grid and scale bar in the production's units", () => {
   it("labels the scale bar in m or ft", () => {
     expect(scaleBar(40, "metric")).toMatchObject({ metres: 2, px: 80, label: "2 m" });
     expect(scaleBar(40, "imperial").label).toBe("5 ft");
-  });
-});
-
-describe("content sniffing of uploads", () => {
-  const png = Uint8Array.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 0x49, 0x48, 0x44, 0x52, 0, 0, 1, 0x2c, 0, 0, 0, 0xc8]);
-  it("knows PNG by its signature and reads the IHDR size", () => {
-    // PNG specification (ISO/IEC 15948): 8-byte signature, IHDR width/height big-endian at 16 and 20
-    expect(sniffImageType(png)).toBe("image/png");
-    expect(imageSize(png, "image/png")).toEqual({ width: 300, height: 200 });
-  });
-  it("knows JPEG and WebP, and refuses anything else", () => {
-    // JPEG (ITU T.81) starts FF D8 FF; WebP is RIFF....WEBP (RFC 9649)
-    expect(sniffImageType(Uint8Array.from([0xff, 0xd8, 0xff, 0xe0]))).toBe("image/jpeg");
-    expect(sniffImageType(new TextEncoder().encode("RIFF\0\0\0\0WEBPVP8 "))).toBe("image/webp");
-    expect(sniffImageType(new TextEncoder().encode("GIF89a"))).toBeNull();
-    expect(sniffImageType(new TextEncoder().encode("<svg xmlns="))).toBeNull();
-    expect(sniffImageType(new Uint8Array())).toBeNull();
   });
 });
 
