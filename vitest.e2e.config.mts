@@ -13,5 +13,7 @@ export default defineConfig({
     testTimeout: 90_000,
     hookTimeout: 90_000,
     fileParallelism: false,
+    // A loaded machine answers in seconds, not vitest's default of one: expect.poll waits up to 20 s.
+    expect: { poll: { timeout: 20_000, interval: 100 } },
   },
 });

@@ -2,16 +2,20 @@
 // the level grid and the cue list draw only the rows in view, typed entry still lands and brings its
 // channel into view, and the list's sort, filter and columns work and are remembered. Then parts in
 // the cue form, shown on the cue sheet; and the look on the plan in light and dark.
+import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { BrowserContext, Page } from "playwright-core";
-import { DEMO, openBrowser, screenshot, signIn } from "./support/browser";
+import { openBrowser, screenshot, SCREENSHOTS, type SignedIn, signedIn } from "./support/browser";
+import { eventually, nextFrames, textOf } from "./support/wait";
+import { setTheme } from "./support/theme";
 
 let browser: BrowserContext;
+let designer: SignedIn;
 beforeAll(async () => {
-  browser = await openBrowser({ width: 1440, height: 1000 });
+  [browser, designer] = await Promise.all([openBrowser({ width: 1440, height: 1000 }), signedIn("designer", { width: 1440, height: 1000 })]);
 });
 afterAll(async () => {
-  await browser?.close();
+  await Promise.all([browser?.close(), designer?.close()]);
 });
 
 /** Sparse moves as a real show has them; the same file every run (a fixed pseudo-random walk). */
@@ -27,11 +31,6 @@ function bigShowFile(cues = 600, channels = 400): string {
     for (let k = 0; k < pairs.length; k += 8) lines.push(`CHAN ${pairs.slice(k, k + 8).join(" ")}`);
   }
   return [...lines, "ENDDATA", ""].join("\r\n");
-}
-
-async function demoId(page: Page): Promise<number> {
-  const list = await (await page.request.get("/api/productions")).json();
-  return list.productions.find((p: { name: string }) => p.name === "Salt and Lantern").id;
 }
 
 async function type(page: Page, line: string, feedback: RegExp) {
@@ -57,22 +56,25 @@ describe("a show of 600 cues and 400 channels", () => {
 
     await page.goto(`/productions/${id}/cues`);
     await page.getByTestId("grid-ch-1").waitFor();
-    expect(await page.locator('[data-testid^="grid-ch-"]').count()).toBeLessThan(80); // 400 channels, only a window drawn
-    expect(await page.locator('[data-testid^="cue-row-"]').count()).toBeLessThan(60); // 600 cues, only a window drawn
+    await page.locator('[data-testid^="cue-row-"]').first().waitFor();
+    const drawn = async (prefix: string) => page.locator(`[data-testid^="${prefix}"]`).count();
+    expect(await drawn("grid-ch-")).toBeLessThan(80); // 400 channels, only a window drawn
+    expect(await drawn("cue-row-")).toBeLessThan(60); // 600 cues, only a window drawn
 
     await type(page, "cue 600", /Cue 600 selected/);
     await type(page, "350 75", /Cue 600: channel 350 at 75 %/);
-    await expect(page.getByTestId("cell-350-600").textContent()).resolves.toMatch(/^▲?75$/); // brought into view by the typed line
+    await textOf(page.getByTestId("cell-350-600")).toMatch(/^▲?75$/); // brought into view by the typed line
     await type(page, "349-351 full", /channels 349, 350, 351 at 100 %/);
-    for (const ch of [349, 350, 351]) await expect(page.getByTestId(`cell-${ch}-600`).textContent()).resolves.toMatch(/^▲?100$/);
+    for (const ch of [349, 350, 351]) await textOf(page.getByTestId(`cell-${ch}-600`)).toMatch(/^▲?100$/);
     await page.getByLabel("Go to channel").fill("2");
     await page.getByLabel("Go to channel").press("Enter");
     await page.getByTestId("grid-ch-2").waitFor();
 
     // Sort by label descending, filter, and hide a column; then reload: sort and columns are remembered.
     await page.getByRole("button", { name: /^Label/ }).click();
+    await page.locator("th[aria-sort=ascending]").filter({ hasText: "Label" }).waitFor(); // one click at a time: a second before the first lands is lost
     await page.getByRole("button", { name: /^Label/ }).click();
-    expect(await page.locator("th[aria-sort=descending]").textContent()).toMatch(/Label/);
+    await page.locator("th[aria-sort=descending]").filter({ hasText: "Label" }).waitFor();
     await page.getByText(/^Columns \(/).click();
     await page.getByRole("checkbox", { name: "Wait" }).uncheck();
     await page.getByLabel("Filter cues").fill("Look 59");
@@ -81,18 +83,18 @@ describe("a show of 600 cues and 400 channels", () => {
     await page.reload();
     await page.getByTestId("grid-ch-1").waitFor();
     await page.locator("th[aria-sort=descending]").filter({ hasText: "Label" }).waitFor();
-    expect(await page.getByRole("button", { name: /^Wait/ }).count()).toBe(0);
+    await eventually(() => page.getByRole("button", { name: /^Wait/ }).count()).toBe(0);
     await page.getByTestId("cue-list-scroll").evaluate((el) => el.scrollTo(0, 0)); // the list had scrolled to the selected cue
-    expect(await page.locator('[data-testid^="cue-row-"]').first().textContent()).toMatch(/Look 600/); // labels sort as people read numbers: 600 last, so first descending
+    // The windowed list draws the top rows on its next render, not during scrollTo: wait for them.
+    await textOf(page.locator('[data-testid^="cue-row-"]').first()).toMatch(/Look 600/); // labels sort as people read numbers: 600 last, so first descending
     await page.close();
   });
 });
 
 describe("parts and the look of a cue", () => {
   it("edits parts in the cue form, shows them on the sheet, and draws the look in both themes", async () => {
-    const page = await browser.newPage();
-    await signIn(page, DEMO.designer);
-    await page.goto(`/productions/${await demoId(page)}/cues`);
+    const { page, productionId } = designer;
+    await page.goto(`/productions/${productionId}/cues`);
     await page.getByLabel(/Type levels/).waitFor();
     await type(page, "cue 5", /Cue 5 (selected|created)/);
     await page.getByRole("button", { name: "Add a part" }).click();
@@ -109,17 +111,15 @@ describe("parts and the look of a cue", () => {
     await page.getByLabel("Part 1: channels").waitFor(); // the form comes back with the saved part
     await page.getByTestId("cue-plan").locator("canvas").first().waitFor();
     await screenshot(page, "cues-plan-light");
-    await page.getByTestId("cue-plan").screenshot({ path: `${process.env.TEST_RESULTS_DIR ?? "test-results"}/screenshots/cues-plan-only-light.png` });
-    await page.getByTestId("theme-toggle").click();
-    await page.waitForTimeout(200);
-    await page.getByTestId("cue-plan").screenshot({ path: `${process.env.TEST_RESULTS_DIR ?? "test-results"}/screenshots/cues-plan-only-dark.png` });
+    await page.getByTestId("cue-plan").screenshot({ path: path.join(SCREENSHOTS, "cues-plan-only-light.png") });
+    await setTheme(page, true);
+    await nextFrames(page); // the plan redraws in the dark palette on the frame after the class changes
+    await page.getByTestId("cue-plan").screenshot({ path: path.join(SCREENSHOTS, "cues-plan-only-dark.png") });
     await screenshot(page, "cues-plan-dark");
-    await page.getByTestId("theme-toggle").click();
-    expect(Number(await page.getByTestId("cue-plan").getAttribute("data-lit"))).toBeGreaterThan(0);
+    await setTheme(page, false);
+    await eventually(async () => Number(await page.getByTestId("cue-plan").getAttribute("data-lit"))).toBeGreaterThan(0);
 
     await page.goto(page.url().split("?")[0] + "?view=sheet");
-    await page.getByTestId("sheet-part-5-1").waitFor();
-    await expect(page.getByTestId("sheet-part-5-1").textContent()).resolves.toBe("part 1 sky: 12/4 wait 2 · ch 1-3");
-    await page.close();
+    await textOf(page.getByTestId("sheet-part-5-1")).toBe("part 1 sky: 12/4 wait 2 · ch 1-3");
   });
 });

@@ -2,6 +2,8 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import path from "node:path";
 import type { BrowserContext, Page } from "playwright-core";
 import { DEMO, SCREENSHOTS, openBrowser, screenshot, signIn, demoProductionId } from "./support/browser";
+import { eventually, textOf } from "./support/wait";
+import { setTheme } from "./support/theme";
 
 let browser: BrowserContext;
 beforeAll(async () => {
@@ -27,8 +29,7 @@ describe("the designer writes cues with the keyboard", () => {
   it("makes three cues, each from typed lines, and sees tracking in the grid", async () => {
     const page = await freshPage();
     await signIn(page, DEMO.designer);
-    const list = await (await page.request.get("/api/productions")).json();
-    await page.goto(`/productions/${list.productions.find((p: { name: string }) => p.name === "Salt and Lantern").id}/cues`);
+    await page.goto(`/productions/${await demoProductionId(page)}/cues`);
     await page.getByLabel(/Type levels/).waitFor();
 
     await type(page, "cue 801", /Cue 801 created/);
@@ -41,17 +42,17 @@ describe("the designer writes cues with the keyboard", () => {
     await type(page, "3-4 73", /channels 3, 4 at 73 %/);
     await type(page, "1 120", /outside 0–100/); // a bad level is refused in words
 
-    await expect(page.getByTestId("cell-1-801").textContent()).resolves.toMatch(/^[▲▼]?55$/);
-    await expect(page.getByTestId("cell-2-802").textContent()).resolves.toBe("100"); // tracked from 801
-    await expect(page.getByTestId("cell-1-802").textContent()).resolves.toBe("▼0");
-    await expect(page.getByTestId("cell-2-803").textContent()).resolves.toBe("100"); // still tracking
-    await expect(page.getByTestId("cell-3-803").textContent()).resolves.toBe("▲73");
-    await expect(page.getByTestId("moves-up").textContent()).resolves.toMatch(/Up \(2\)/);
+    await textOf(page.getByTestId("cell-1-801")).toMatch(/^[▲▼]?55$/);
+    await textOf(page.getByTestId("cell-2-802")).toBe("100"); // tracked from 801
+    await textOf(page.getByTestId("cell-1-802")).toBe("▼0");
+    await textOf(page.getByTestId("cell-2-803")).toBe("100"); // still tracking
+    await textOf(page.getByTestId("cell-3-803")).toBe("▲73");
+    await textOf(page.getByTestId("moves-up")).toMatch(/Up \(2\)/);
     await page.getByTestId("cue-plan").locator("canvas").first().waitFor();
     await screenshot(page, "cues-designer-light");
-    await page.getByTestId("theme-toggle").click();
+    await setTheme(page, true);
     await screenshot(page, "cues-designer-dark");
-    await page.getByTestId("theme-toggle").click();
+    await setTheme(page, false);
     await page.close();
   });
 });
@@ -62,7 +63,7 @@ describe("the stage manager calls the show from the cue sheet", () => {
     await signIn(page, DEMO.stageManager);
     expect(new URL(page.url()).pathname).toMatch(/\/productions\/\d+\/cues$/);
     await page.getByRole("heading", { name: "Cue sheet" }).waitFor();
-    await expect(page.getByText(/Standby LX/).first().isVisible()).resolves.toBe(true);
+    await page.getByText(/Standby LX/).first().waitFor();
     expect(await page.getByLabel(/Type levels/).count()).toBe(0); // no level entry for the stage manager
 
     const note = page.getByLabel("Call note for cue 1", { exact: true });
@@ -70,7 +71,8 @@ describe("the stage manager calls the show from the cue sheet", () => {
     await note.press("Enter");
     await page.getByRole("status").filter({ hasText: "Cue 1: call note saved." }).waitFor();
     await page.reload();
-    await expect(page.getByLabel("Call note for cue 1", { exact: true }).inputValue()).resolves.toBe("GO as the lantern is lifted");
+    // The field is filled once the saved notes have loaded, which can come after it first shows.
+    await eventually(() => page.getByLabel("Call note for cue 1", { exact: true }).inputValue()).toBe("GO as the lantern is lifted");
 
     // Even straight at the API, with the stage manager's own session, a level is refused.
     const productionId = await demoProductionId(page);
@@ -80,8 +82,9 @@ describe("the stage manager calls the show from the cue sheet", () => {
     expect(denied.status()).toBe(403);
 
     await screenshot(page, "cues-sheet-screen");
+    await page.getByRole("button", { name: "Print cue sheet" }).waitFor();
     await page.emulateMedia({ media: "print" });
-    expect(await page.getByRole("button", { name: "Print cue sheet" }).isVisible()).toBe(false); // hidden on paper
+    await page.getByRole("button", { name: "Print cue sheet" }).waitFor({ state: "hidden" }); // hidden on paper
     await screenshot(page, "cues-sheet-print");
     const pdf = await page.pdf({ path: path.join(SCREENSHOTS, "cue-sheet-a4.pdf"), format: "A4", printBackground: true });
     expect(pdf.subarray(0, 5).toString()).toBe("%PDF-");

@@ -2,15 +2,16 @@
 // in the print view, records the barn doors, and removes the photo again. Screenshots in both themes.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import sharp from "sharp";
-import type { BrowserContext } from "playwright-core";
-import { DEMO, openBrowser, screenshot, signIn, demoProductionId } from "./support/browser";
+import { type SignedIn, screenshot, signedIn } from "./support/browser";
+import { eventually, textOf } from "./support/wait";
+import { setTheme } from "./support/theme";
 
-let context: BrowserContext;
+let electrician: SignedIn;
 beforeAll(async () => {
-  context = await openBrowser({ width: 800, height: 1280 }); // a 10-inch tablet in portrait
+  electrician = await signedIn("electrician", { width: 800, height: 1280 }); // a 10-inch tablet in portrait
 });
 afterAll(async () => {
-  await context?.close();
+  await electrician?.close();
 });
 
 /** A camera-sized JPEG (3000 × 2250, about 3–4 MB): 10-pixel blocks of colour over a little noise. */
@@ -39,9 +40,7 @@ async function deckPhoto(): Promise<Buffer> {
 
 describe("focus photo from the deck", () => {
   it("the electrician adds a photo on a tablet, sees the thumbnail on the chart and in print, and removes it", async () => {
-    const page = await context.newPage();
-    await signIn(page, DEMO.electrician);
-    const productionId = await demoProductionId(page);
+    const { page, productionId } = electrician;
     const fixtures = (await (await page.context().request.get(`/api/productions/${productionId}/fixtures`)).json()).fixtures as Array<{ id: number; positionId: number; positionName: string; unitNumber: string; focusPhotoUploadId: number | null }>;
     const unit = fixtures.find((f) => f.positionName === "Boom SL 2" && f.unitNumber === "1")!;
     await page.goto(`/productions/${productionId}/focus/call?position=${unit.positionId}&unit=${unit.id}`);
@@ -55,17 +54,17 @@ describe("focus photo from the deck", () => {
 
     // A non-image file is refused with a message and nothing changes.
     await page.getByTestId("focus-photo-input").setInputFiles({ name: "notes.jpg", mimeType: "image/jpeg", buffer: Buffer.from("not a photo at all") });
-    await expect.poll(() => page.getByTestId("focus-photo").getByRole("alert").textContent(), { timeout: 20_000 }).toMatch(/not a PNG, JPEG or WebP photo/);
-    await expect(page.getByTestId("focus-photo-preview").count()).resolves.toBe(0);
+    await textOf(page.getByTestId("focus-photo").getByRole("alert")).toMatch(/not a PNG, JPEG or WebP photo/);
+    expect(await page.getByTestId("focus-photo-preview").count()).toBe(0);
 
     await page.getByTestId("focus-photo-input").setInputFiles({ name: "IMG_2231.png", mimeType: "image/png", buffer: await deckPhoto() });
-    await expect.poll(() => page.getByTestId("focus-photo").getByRole("status").textContent(), { timeout: 20_000 }).toBe("Photo saved.");
+    await eventually(() => page.getByTestId("focus-photo").getByRole("status").textContent()).toBe("Photo saved.");
     const preview = page.getByTestId("focus-photo-preview");
     await preview.waitFor();
     // The thumbnail actually loaded (a broken image has a natural width of 0): 320 px wide, the small copy.
-    await expect.poll(() => preview.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth), { timeout: 20_000 }).toBe(320);
+    await eventually(() => preview.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBe(320);
     const onChart = page.getByTestId("focus-chart").getByTestId("focus-photo-thumb");
-    await expect.poll(() => onChart.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth), { timeout: 20_000 }).toBe(320);
+    await eventually(() => onChart.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBe(320);
 
     // A camera-sized photo is shrunk in the browser before it is sent over the venue's wifi.
     const big = await cameraJpeg();
@@ -79,47 +78,46 @@ describe("focus photo from the deck", () => {
       };
     });
     await page.getByTestId("focus-photo-input").setInputFiles({ name: "IMG_2232.jpg", mimeType: "image/jpeg", buffer: big });
-    await expect.poll(() => page.getByTestId("focus-photo").getByRole("status").textContent(), { timeout: 30_000 }).toBe("Photo replaced.");
+    await eventually(() => page.getByTestId("focus-photo").getByRole("status").textContent(), { timeout: 30_000 }).toBe("Photo replaced."); // shrunk in the browser first
     const sent = await page.evaluate(() => (window as unknown as { sentPhotoBytes?: number }).sentPhotoBytes ?? 0);
     expect(big.byteLength).toBeGreaterThan(2 * 1024 * 1024);
     expect(sent).toBeGreaterThan(0);
     expect(sent).toBeLessThan(big.byteLength * 0.7);
-    await expect.poll(() => preview.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth), { timeout: 20_000 }).toBe(320);
+    await eventually(() => preview.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBe(320);
     // Back to the picture of the pool for the screenshots.
     const bigSrc = await preview.getAttribute("src");
     const replaced = page.waitForResponse((r) => r.url().includes(`/fixtures/${unit.id}/photo`) && r.request().method() === "POST");
     await page.getByTestId("focus-photo-input").setInputFiles({ name: "IMG_2231.png", mimeType: "image/png", buffer: await deckPhoto() });
     expect((await replaced).status()).toBe(201);
     // The screen shows the new photo (its address names the new upload) before anything else is edited.
-    await expect.poll(() => preview.getAttribute("src"), { timeout: 20_000 }).not.toBe(bigSrc);
-    await expect.poll(() => preview.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth), { timeout: 20_000 }).toBe(320);
+    await eventually(() => preview.getAttribute("src")).not.toBe(bigSrc);
+    await eventually(() => preview.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBe(320);
 
     // Barn doors as focused, leaf by leaf; the chart words them.
     await page.getByTestId("barn-door-top").fill("in halfway");
     await page.getByTestId("barn-door-left").fill("to the leg");
     await page.getByRole("button", { name: "Save barn doors" }).click();
-    await expect.poll(() => page.getByTestId("focus-chart").locator('[data-key="barnDoors"] dd').textContent(), { timeout: 20_000 }).toBe("top in halfway · left to the leg");
+    await eventually(() => page.getByTestId("focus-chart").locator('[data-key="barnDoors"] dd').textContent()).toBe("top in halfway · left to the leg");
     // The gobo's rotation is the designer's: the electrician reads it, with no field to change it.
-    await expect(page.getByTestId("gobo-rotation").count()).resolves.toBe(0);
+    expect(await page.getByTestId("gobo-rotation").count()).toBe(0);
     await screenshot(page, "focus-photo-tablet-light");
-    await page.getByTestId("theme-toggle").click();
+    await setTheme(page, true);
     await screenshot(page, "focus-photo-tablet-dark");
-    await page.getByTestId("theme-toggle").click();
+    await setTheme(page, false);
 
     // The print view of the position carries the same thumbnail.
     await page.goto(`/productions/${productionId}/focus/print?position=${unit.positionId}&perPage=4&paper=A4&tz=UTC`);
     const printed = page.getByTestId("focus-sheet").getByTestId("focus-photo-thumb");
-    await expect.poll(() => printed.count(), { timeout: 20_000 }).toBe(1);
-    await expect.poll(() => printed.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth), { timeout: 20_000 }).toBe(320);
+    await eventually(() => printed.count()).toBe(1);
+    await eventually(() => printed.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBe(320);
     await screenshot(page, "focus-photo-print-view");
 
     // Remove it again (two taps), back on the focus call.
     await page.goto(`/productions/${productionId}/focus/call?position=${unit.positionId}&unit=${unit.id}`);
     await page.getByTestId("focus-photo-remove").click();
     await page.getByTestId("focus-photo-remove-confirm").click();
-    await expect.poll(() => page.getByTestId("focus-photo").getByRole("status").textContent(), { timeout: 20_000 }).toBe("Photo removed.");
-    await expect(page.getByTestId("focus-photo-preview").count()).resolves.toBe(0);
-    await expect(page.getByTestId("focus-chart").getByTestId("focus-photo-thumb").count()).resolves.toBe(0);
-    await page.close();
+    await textOf(page.getByTestId("focus-photo").getByRole("status")).toBe("Photo removed.");
+    await eventually(() => page.getByTestId("focus-photo-preview").count()).toBe(0);
+    await eventually(() => page.getByTestId("focus-chart").getByTestId("focus-photo-thumb").count()).toBe(0);
   });
 });

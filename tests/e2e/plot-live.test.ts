@@ -4,7 +4,7 @@
 // The demo has one designer account, so A and B are two sessions of it in two separate browsers.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { BrowserContext } from "playwright-core";
-import { DEMO, openBrowser, screenshot, signIn } from "./support/browser";
+import { DEMO, demoProductionId, openBrowser, screenshot, signIn } from "./support/browser";
 
 type View = { scale: number; ox: number; oy: number };
 type Fixture = { id: number; version: number; unitNumber: string; positionName: string; focusPointId: number | null; x: number; y: number; focusX: number | null; focusY: number | null; computed: { throw: number; focus: { x: number; y: number } } };
@@ -23,8 +23,7 @@ describe("live updates on the plot", () => {
   it("shows another session's focus change without a reload", async () => {
     const pageB = await b.newPage();
     await signIn(pageB, DEMO.designer);
-    const list = await (await pageB.request.get("/api/productions")).json();
-    const productionId = list.productions.find((p: { name: string }) => p.name === "Salt and Lantern").id;
+    const productionId = await demoProductionId(pageB);
     const read = async () => (await (await pageB.request.get(`/api/productions/${productionId}/plot`)).json()).fixtures as Fixture[];
     // A unit on a pipe (boom units fan out on screen), away from the 4th Electric units the other plot test drags.
     const unit = (await read()).find((f) => /Electric$/.test(f.positionName) && f.positionName !== "4th Electric" && f.computed.focus)!;
@@ -68,8 +67,7 @@ describe("live updates on the plot", () => {
   it("lets the designer drag a landmark's end on the plot, saved with its version", async () => {
     const page = await b.newPage();
     await signIn(page, DEMO.designer);
-    const list = await (await page.request.get("/api/productions")).json();
-    const productionId = list.productions.find((p: { name: string }) => p.name === "Salt and Lantern").id;
+    const productionId = await demoProductionId(page);
     const made = await page.request.post(`/api/productions/${productionId}/landmarks`, { data: { name: "Test lip", x1: -3, y1: -1, x2: 3, y2: -1 } });
     expect(made.status()).toBe(201);
     const landmark = (await made.json()).landmark as { id: number; version: number; x2: number; y2: number };

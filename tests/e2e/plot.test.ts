@@ -2,8 +2,8 @@
 // drags a focus mark and sees the server's numbers; the electrician sees the same plot read-only.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { BrowserContext, Page } from "playwright-core";
-import { DEMO, openBrowser, screenshot, signIn } from "./support/browser";
-import { makePng } from "../integration/plot-png";
+import { DEMO, demoProductionId, openBrowser, screenshot, signIn } from "./support/browser";
+import { makePng } from "../support/png";
 
 type View = { scale: number; ox: number; oy: number };
 let browser: BrowserContext;
@@ -20,8 +20,7 @@ async function openPlot(email: string) {
   await browser.clearCookies();
   const page = await browser.newPage();
   await signIn(page, email);
-  const r = await page.request.get("/api/productions");
-  productionId = (await r.json()).productions.find((p: { name: string }) => p.name === "Salt and Lantern").id;
+  productionId = await demoProductionId(page);
   await page.goto(`/productions/${productionId}/plot`);
   await page.locator("[data-testid=plot-canvas][data-view]").waitFor();
   return page;

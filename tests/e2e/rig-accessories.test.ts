@@ -1,27 +1,27 @@
 // The electrician adds an accessory to a fixture, sees a bad address refused, edits it and removes it.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { BrowserContext } from "playwright-core";
-import { DEMO, openBrowser, screenshot, signIn, demoProductionId } from "./support/browser";
+import { afterAll, beforeAll, describe, it } from "vitest";
+import { type SignedIn, screenshot, signedIn } from "./support/browser";
+import { textOf, eventually } from "./support/wait";
 
-let browser: BrowserContext;
+let electrician: SignedIn;
 beforeAll(async () => {
-  browser = await openBrowser({ width: 1440, height: 900 });
+  electrician = await signedIn("electrician", { width: 1440, height: 900 });
 });
 afterAll(async () => {
-  await browser?.close();
+  await electrician?.close();
 });
 
 describe("accessories as the electrician", () => {
   it("adds, checks, edits and removes a scroller", async () => {
-    const page = await browser.newPage();
-    await signIn(page, DEMO.electrician);
-    const id = await demoProductionId(page);
-    await page.goto(`/productions/${id}/rig`);
+    const { page, productionId } = electrician;
+    await page.goto(`/productions/${productionId}/rig`);
     await page.getByTestId("rig-table").waitFor();
     await page.getByRole("button", { name: "Accessories", exact: true }).click();
     const panel = page.getByRole("region", { name: "Accessories" });
-    await panel.waitFor();
-    const before = await panel.getByTestId("accessory-row").count();
+    // The rows arrive after the panel opens: wait for as many as the server holds before counting on them.
+    const held = await page.request.get(`/api/productions/${productionId}/accessories`);
+    const before = ((await held.json()).accessories as unknown[]).length;
+    await eventually(() => panel.getByTestId("accessory-row").count()).toBe(before);
 
     const select = panel.getByLabel("Fixture for the new accessory");
     const fixtureName = (await select.locator("option").nth(1).textContent())!.trim();
@@ -31,13 +31,13 @@ describe("accessories as the electrician", () => {
     await panel.getByLabel("Slots of the new accessory").fill("2");
     await panel.getByRole("button", { name: "Add accessory" }).click();
     // ANSI E1.11: two slots from 512 run past the end of the universe
-    await expect(panel.getByRole("alert").first().textContent()).resolves.toMatch(/512/);
+    await textOf(panel.getByRole("alert").first()).toMatch(/512/);
     await panel.getByLabel("Address of the new accessory").fill("101");
     await panel.getByLabel("Universe of the new accessory").fill("2");
     await panel.getByLabel("Power (W) of the new accessory").fill("40");
     await panel.getByRole("button", { name: "Add accessory" }).click();
     await panel.getByRole("status").filter({ hasText: "Added a scroller" }).waitFor();
-    await expect.poll(() => panel.getByTestId("accessory-row").count()).toBe(before + 1);
+    await eventually(() => panel.getByTestId("accessory-row").count()).toBe(before + 1);
     await screenshot(page, "rig-accessories-electrician");
 
     await panel.getByRole("button", { name: `Edit the scroller on ${fixtureName}` }).click();
@@ -47,7 +47,6 @@ describe("accessories as the electrician", () => {
     await panel.getByTestId("accessory-row").filter({ hasText: "3.5" }).waitFor();
 
     await panel.getByRole("button", { name: `Remove the scroller on ${fixtureName}` }).click();
-    await expect.poll(() => panel.getByTestId("accessory-row").count()).toBe(before);
-    await page.close();
+    await eventually(() => panel.getByTestId("accessory-row").count()).toBe(before);
   });
 });

@@ -5,15 +5,17 @@ import os from "node:os";
 import path from "node:path";
 import ExcelJS from "exceljs";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { BrowserContext, Page } from "playwright-core";
-import { DEMO, SCREENSHOTS, openBrowser, screenshot, signIn, demoProductionId } from "./support/browser";
+import { DEMO_FIXTURE_COUNT } from "../support/demo";
+import { SCREENSHOTS, type SignedIn, screenshot, signedIn } from "./support/browser";
+import { setTheme } from "./support/theme";
+import { eventually, textOf } from "./support/wait";
 
-let browser: BrowserContext;
+let electrician: SignedIn;
 beforeAll(async () => {
-  browser = await openBrowser({ width: 1440, height: 900 });
+  electrician = await signedIn("electrician", { width: 1440, height: 900 });
 });
 afterAll(async () => {
-  await browser?.close();
+  await electrician?.close();
 });
 
 const dir = mkdtempSync(path.join(os.tmpdir(), "rig-e2e-"));
@@ -23,22 +25,21 @@ const csvFile = (name: string, text: string) => {
   return file;
 };
 
-async function openRig(page: Page) {
-  await signIn(page, DEMO.electrician);
-  const id = await demoProductionId(page);
-  await page.goto(`/productions/${id}/rig`);
+/** A new page on the demo's rig, for each test its own. */
+async function openRig() {
+  const page = await electrician.context.newPage();
+  await page.goto(`/productions/${electrician.productionId}/rig`);
   await page.getByTestId("rig-table").waitFor();
-  return id;
+  return { page, id: electrician.productionId };
 }
 
 describe("rig import and export as the electrician", () => {
   it("imports a CSV, fixes a reported error, imports again and exports .xlsx", async () => {
-    const page = await browser.newPage();
-    const id = await openRig(page);
+    const { page, id } = await openRig();
     // One row per fixture the server holds (other test files may have hung units in the demo).
     const held = (await (await page.request.get(`/api/productions/${id}/fixtures`)).json()).fixtures.length;
-    expect(held).toBeGreaterThanOrEqual(116);
-    expect(await page.getByTestId("rig-row").count()).toBe(held);
+    expect(held).toBeGreaterThanOrEqual(DEMO_FIXTURE_COUNT);
+    await eventually(() => page.getByTestId("rig-row").count()).toBe(held);
     await screenshot(page, "rig-hanging-electrician");
     await page.screenshot({ path: path.join(SCREENSHOTS, "rig-hanging-electrician-viewport.png") });
 
@@ -49,8 +50,7 @@ describe("rig import and export as the electrician", () => {
 
     await page.getByRole("button", { name: "Import a file" }).click();
     await page.getByTestId("import-file").setInputFiles(bad);
-    await page.getByTestId("import-errors").waitFor();
-    expect(await page.getByTestId("import-errors").textContent()).toContain("Row 3, DMX address: DMX address must be 1–512");
+    await textOf(page.getByTestId("import-errors")).toContain("Row 3, DMX address: DMX address must be 1–512");
     expect(await page.getByTestId("import-commit").isDisabled()).toBe(true);
     await screenshot(page, "rig-import-preview-error");
     await page.screenshot({ path: path.join(SCREENSHOTS, "rig-import-preview-error-viewport.png") });
@@ -61,10 +61,8 @@ describe("rig import and export as the electrician", () => {
     await page.getByTestId("import-summary").filter({ hasText: "2 to update" }).waitFor();
     await screenshot(page, "rig-import-preview-ok");
     await page.getByTestId("import-commit").click();
-    await page.getByTestId("import-done").waitFor();
-    expect(await page.getByTestId("import-done").textContent()).toMatch(/updated/);
-    await page.getByRole("button", { name: /Edit Circuit of unit .* on / }).first().waitFor();
-    expect(await page.getByTestId("rig-table").textContent()).toContain("C-102");
+    await textOf(page.getByTestId("import-done")).toMatch(/updated/);
+    await textOf(page.getByTestId("rig-table")).toContain("C-102"); // the table reloads after the import
 
     const [download] = await Promise.all([page.waitForEvent("download"), page.getByTestId("export-xlsx").click()]);
     expect(download.suggestedFilename()).toMatch(/hanging\.xlsx$/);
@@ -79,27 +77,25 @@ describe("rig import and export as the electrician", () => {
   });
 
   it("shows the patching view and the stock counts, in the dark theme too", async () => {
-    const page = await browser.newPage();
-    await openRig(page);
+    const { page } = await openRig();
     await page.getByRole("button", { name: "Patching" }).click();
     await page.getByRole("columnheader", { name: /Universe/ }).waitFor();
     await screenshot(page, "rig-patching");
     await page.getByRole("button", { name: "Pulling stock" }).click();
-    await page.getByTestId("stock-panel").waitFor();
-    expect(await page.getByTestId("stock-panel").textContent()).toContain("Colour cuts");
-    await page.getByTestId("theme-toggle").click();
+    await textOf(page.getByTestId("stock-panel")).toContain("Colour cuts");
+    await setTheme(page, true);
     await screenshot(page, "rig-stock-dark");
     await page.getByRole("button", { name: "Hanging" }).click();
     await screenshot(page, "rig-hanging-dark");
-    await page.getByTestId("theme-toggle").click();
+    await setTheme(page, false);
     await page.close();
   });
 
   it("lets the electrician edit a circuit inline but not a colour", async () => {
-    const page = await browser.newPage();
-    await openRig(page);
-    expect(await page.getByRole("button", { name: /^Edit Colour of/ }).count()).toBe(0);
+    const { page } = await openRig();
     const cell = page.getByRole("button", { name: /^Edit Dimmer of/ }).first();
+    await cell.waitFor(); // the editable cells are drawn: a Colour one would be among them
+    expect(await page.getByRole("button", { name: /^Edit Colour of/ }).count()).toBe(0);
     await cell.click();
     const input = page.getByRole("textbox", { name: /^Dimmer of/ });
     await input.fill("D-E2E");

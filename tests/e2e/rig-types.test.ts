@@ -1,27 +1,25 @@
 // The electrician edits a fixture type's wattage in the types table; the cone stays read-only for them.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { BrowserContext } from "playwright-core";
-import { DEMO, openBrowser, screenshot, signIn, demoProductionId } from "./support/browser";
+import { type SignedIn, screenshot, signedIn } from "./support/browser";
+import { textOf } from "./support/wait";
 
-let browser: BrowserContext;
+let electrician: SignedIn;
 beforeAll(async () => {
-  browser = await openBrowser({ width: 1440, height: 900 });
+  electrician = await signedIn("electrician", { width: 1440, height: 900 });
 });
 afterAll(async () => {
-  await browser?.close();
+  await electrician?.close();
 });
 
 describe("fixture types as the electrician", () => {
   it("edits a wattage, sees a bad figure refused, and cannot edit the cone", async () => {
-    const page = await browser.newPage();
-    await signIn(page, DEMO.electrician);
-    const id = await demoProductionId(page);
-    await page.goto(`/productions/${id}/rig`);
+    const { page, productionId } = electrician;
+    await page.goto(`/productions/${productionId}/rig`);
     await page.getByTestId("rig-table").waitFor();
     await page.getByRole("button", { name: /fixture types/i }).first().click();
     const panel = page.getByRole("region", { name: "Fixture types" });
     await panel.waitFor();
-    await expect(panel.getByTestId("types-from-memory").textContent()).resolves.toMatch(/from memory/);
+    await textOf(panel.getByTestId("types-from-memory")).toMatch(/from memory/);
 
     const wattButton = panel.getByRole("button", { name: /^Edit Power \(W\) of / }).first();
     const typeName = ((await wattButton.getAttribute("aria-label")) ?? "").replace(/^Edit Power \(W\) of /, "");
@@ -30,7 +28,7 @@ describe("fixture types as the electrician", () => {
     const input = panel.getByLabel(`Power (W) of ${typeName}`);
     await input.fill("lots");
     await input.press("Enter");
-    await expect(panel.getByTestId("type-cell-message").first().textContent()).resolves.toMatch(/not a number/);
+    await textOf(panel.getByTestId("type-cell-message").first()).toMatch(/not a number/);
     await input.fill("777");
     await input.press("Enter");
     await panel.getByRole("button", { name: `Edit Power (W) of ${typeName}` }).filter({ hasText: "777" }).waitFor();
@@ -42,6 +40,5 @@ describe("fixture types as the electrician", () => {
     await panel.getByLabel(`Power (W) of ${typeName}`).fill(old);
     await panel.getByLabel(`Power (W) of ${typeName}`).press("Enter");
     await panel.getByRole("button", { name: `Edit Power (W) of ${typeName}` }).filter({ hasText: old }).waitFor();
-    await page.close();
   });
 });

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { BrowserContext } from "playwright-core";
-import { DEMO, openBrowser, openDemoProduction, screenshot, signIn } from "./support/browser";
+import { DEMO, demoProductionId, openBrowser, openDemoProduction, screenshot, signIn } from "./support/browser";
+import { eventually } from "./support/wait";
 
 let browser: BrowserContext;
 beforeAll(async () => {
@@ -31,15 +32,23 @@ describe("production settings", () => {
     const page = await browser.newPage();
     await signIn(page, DEMO.designer);
     const settingsUrl = `${await openDemoProduction(page)}/settings`;
+    const productionApi = `/api/productions/${await demoProductionId(page)}`;
+    const storedHead = async () => (await (await page.request.get(productionApi)).json()).production.headHeight as number;
+    const seeded = await storedHead();
     await page.goto(settingsUrl);
-    await page.getByLabel("Head height").fill(`5' 6"`);
+    const head = page.getByLabel("Head height");
+    const before = await head.inputValue();
+    await head.fill(`5' 6"`);
     await page.getByRole("button", { name: "Save settings" }).click();
     await page.getByText("Settings saved.").waitFor();
     // 5'6" = 1.6764 m exactly (NIST SP 811: 1 ft = 0.3048 m); shown in metric to two decimals.
-    expect(await page.getByLabel("Head height").inputValue()).toBe("1.68 m");
-    await page.getByLabel("Head height").fill("1.7");
+    await eventually(() => head.inputValue()).toBe("1.68 m");
+    expect(await storedHead()).toBeCloseTo(1.6764, 9);
+    // Put the demo back. "Settings saved." is still on screen from the first save, so wait for the
+    // stored value itself before leaving the page.
+    await head.fill(before);
     await page.getByRole("button", { name: "Save settings" }).click();
-    await page.getByText("Settings saved.").waitFor();
+    await eventually(storedHead).toBe(seeded);
     await page.close();
 
     await browser.clearCookies();

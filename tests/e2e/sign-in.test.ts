@@ -1,6 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { BrowserContext } from "playwright-core";
+import { DEMO_PRODUCTION_NAME } from "../support/demo";
 import { DEMO, openBrowser, openDemoProduction, screenshot, signIn } from "./support/browser";
+import { textOf } from "./support/wait";
+import { isDark, toggleTheme } from "./support/theme";
 
 let browser: BrowserContext;
 beforeAll(async () => {
@@ -30,7 +33,7 @@ describe("each demo user lands on the right page", () => {
       await signIn(page, email);
       expect(new URL(page.url()).pathname).toMatch(path);
       if (name !== "stage-manager") await openDemoProduction(page);
-      await expect(page.getByTestId("production-name").textContent()).resolves.toContain("Salt and Lantern");
+      await textOf(page.getByTestId("production-name")).toContain(DEMO_PRODUCTION_NAME);
       await page.getByText(text).first().waitFor({ state: "visible" });
       await screenshot(page, `landing-${name}`);
       await page.close();
@@ -55,12 +58,10 @@ describe("theme and sign-out", () => {
   it("toggles the dark theme, remembers it, and signs out", async () => {
     const page = await freshPage();
     await signIn(page, DEMO.electrician);
-    const isDark = () => page.evaluate(() => document.documentElement.classList.contains("dark"));
-    const before = await isDark();
-    await page.getByTestId("theme-toggle").click();
-    expect(await isDark()).toBe(!before);
+    const before = await isDark(page);
+    expect(await toggleTheme(page)).toBe(!before);
     await page.reload();
-    expect(await isDark()).toBe(!before);
+    expect(await isDark(page)).toBe(!before); // set by the inline script before the page is shown
     if (!before) await screenshot(page, "overview-dark");
     await page.getByRole("button", { name: "Sign out" }).click();
     await page.waitForURL("**/sign-in");

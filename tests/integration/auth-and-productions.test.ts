@@ -1,13 +1,6 @@
 // Through the real route handlers, over HTTP, against the migrated and seeded MariaDB.
 import { describe, expect, it } from "vitest";
-import { ApiSession, demoProductionId, freshUser, uniqueEmail } from "./support/api";
-
-const DEMO = {
-  designer: "maren.oduya@quillmere.test",
-  electrician: "teodor.brask@quillmere.test",
-  stageManager: "ines.calloway@quillmere.test",
-  viewer: "rafe.lindqvist@quillmere.test",
-};
+import { ApiSession, DEMO_USERS, demoProductionId, demoSession, freshUser, uniqueEmail } from "./support/api";
 
 describe("health", () => {
   it("reports the database reachable", async () => {
@@ -19,22 +12,22 @@ describe("health", () => {
 
 describe("sign-in", () => {
   it("signs in a demo user and reads who is signed in", async () => {
-    const s = await new ApiSession().signIn(DEMO.designer);
+    const s = await demoSession("designer");
     const me = await s.get("/api/auth/me");
     expect(me.status).toBe(200);
-    expect(me.json.user.email).toBe(DEMO.designer);
+    expect(me.json.user.email).toBe(DEMO_USERS.designer);
   });
 
   it("gives the same 401 message for an unknown address and a wrong password", async () => {
     const unknown = await new ApiSession().post("/api/auth/sign-in", { email: "nobody@nowhere.test", password: "whatever-it-is" });
-    const wrong = await new ApiSession().post("/api/auth/sign-in", { email: DEMO.designer, password: "not-the-password" });
+    const wrong = await new ApiSession().post("/api/auth/sign-in", { email: DEMO_USERS.designer, password: "not-the-password" });
     expect(unknown.status).toBe(401);
     expect(wrong.status).toBe(401);
     expect(unknown.json.error.message).toBe(wrong.json.error.message);
   });
 
   it("names the missing field", async () => {
-    const r = await new ApiSession().post("/api/auth/sign-in", { email: DEMO.designer });
+    const r = await new ApiSession().post("/api/auth/sign-in", { email: DEMO_USERS.designer });
     expect(r.status).toBe(400);
     expect(r.json.error.fieldErrors).toHaveProperty("password");
   });
@@ -55,7 +48,7 @@ describe("sign-in", () => {
   });
 
   it("signs out", async () => {
-    const s = await new ApiSession().signIn(DEMO.viewer);
+    const s = await demoSession("viewer");
     await s.post("/api/auth/sign-out");
     expect((await s.get("/api/auth/me")).status).toBe(401);
   });
@@ -85,7 +78,7 @@ describe("productions", () => {
   });
 
   it("hides a production from an outsider (404, not 403)", async () => {
-    const designer = await new ApiSession().signIn(DEMO.designer);
+    const designer = await demoSession("designer");
     const id = await demoProductionId(designer);
     const { session: outsider } = await freshUser("outsider");
     expect((await outsider.get(`/api/productions/${id}`)).status).toBe(404);
@@ -94,13 +87,13 @@ describe("productions", () => {
   });
 
   it("answers 404 for an unknown or malformed production id", async () => {
-    const s = await new ApiSession().signIn(DEMO.designer);
+    const s = await demoSession("designer");
     expect((await s.get("/api/productions/999999")).status).toBe(404);
     expect((await s.get("/api/productions/abc")).status).toBe(404);
   });
 
   it("does not let a viewer change settings", async () => {
-    const viewer = await new ApiSession().signIn(DEMO.viewer);
+    const viewer = await demoSession("viewer");
     const id = await demoProductionId(viewer);
     const current = (await viewer.get(`/api/productions/${id}`)).json.production;
     const r = await viewer.patch(`/api/productions/${id}`, { version: current.version, venue: "Elsewhere" });
@@ -131,7 +124,7 @@ describe("productions", () => {
 
 describe("fixtures", () => {
   it("lists the demo rig with computed pools", async () => {
-    const s = await new ApiSession().signIn(DEMO.viewer);
+    const s = await demoSession("viewer");
     const id = await demoProductionId(s);
     const r = await s.get(`/api/productions/${id}/fixtures`);
     expect(r.status).toBe(200);
@@ -142,7 +135,7 @@ describe("fixtures", () => {
   });
 
   it("lets the electrician set a circuit but not a colour", async () => {
-    const el = await new ApiSession().signIn(DEMO.electrician);
+    const el = await demoSession("electrician");
     const id = await demoProductionId(el);
     const f = (await el.get(`/api/productions/${id}/fixtures`)).json.fixtures[5];
     const denied = await el.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: f.version, colour: "deep amber" });
@@ -155,8 +148,8 @@ describe("fixtures", () => {
   });
 
   it("keeps both people's work when two edit one fixture: the second gets 409", async () => {
-    const designer = await new ApiSession().signIn(DEMO.designer);
-    const el = await new ApiSession().signIn(DEMO.electrician);
+    const designer = await demoSession("designer");
+    const el = await demoSession("electrician");
     const id = await demoProductionId(designer);
     const f = (await designer.get(`/api/productions/${id}/fixtures`)).json.fixtures[7];
     const a = await designer.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: f.version, colour: "pale amber" });
@@ -167,7 +160,7 @@ describe("fixtures", () => {
   });
 
   it("refuses a DMX address that runs past slot 512 (ANSI E1.11)", async () => {
-    const el = await new ApiSession().signIn(DEMO.electrician);
+    const el = await demoSession("electrician");
     const id = await demoProductionId(el);
     const f = (await el.get(`/api/productions/${id}/fixtures`)).json.fixtures.find((x: any) => x.footprint === 8);
     const r = await el.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: f.version, address: 506 });
@@ -178,7 +171,7 @@ describe("fixtures", () => {
   });
 
   it("refuses a cone of 180° naming the field", async () => {
-    const designer = await new ApiSession().signIn(DEMO.designer);
+    const designer = await demoSession("designer");
     const id = await demoProductionId(designer);
     const f = (await designer.get(`/api/productions/${id}/fixtures`)).json.fixtures[0];
     const r = await designer.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: f.version, coneDeg: 180 });

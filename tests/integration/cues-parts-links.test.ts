@@ -2,7 +2,7 @@
 // standbys follow them, the files carry them, and the usual rules (roles, 409, 400 by field) hold.
 import { beforeAll, describe, expect, it } from "vitest";
 import ExcelJS from "exceljs";
-import { ApiSession, BASE_URL, freshUser } from "./support/api";
+import { ApiSession, BASE_URL, demoProductionId, demoSession, freshUser } from "./support/api";
 
 let own: ApiSession;
 let base: string;
@@ -12,7 +12,7 @@ beforeAll(async () => {
   ({ session: own } = await freshUser("cue-parts"));
   const p = await own.post("/api/productions", { name: "Parts Test Show", venue: "Test Hall", displayUnits: "metric" });
   base = `/api/productions/${p.json.production.id}/cues`;
-  cookie = (own as unknown as { cookie: string }).cookie;
+  cookie = own.cookie;
 });
 
 const create = async (number: number, body: object = {}) => {
@@ -74,11 +74,10 @@ describe("parts", () => {
   });
 
   it("are the designer's: the stage manager of the demo cannot write them", async () => {
-    const sm = await new ApiSession().signIn("ines.calloway@quillmere.test");
-    const list = await sm.get("/api/productions");
-    const demo = list.json.productions.find((p: { name: string }) => p.name === "Salt and Lantern");
-    const cues = (await sm.get(`/api/productions/${demo.id}/cues`)).json.cues;
-    const r = await sm.patch(`/api/productions/${demo.id}/cues/${cues[0].id}`, { version: cues[0].version, parts: [] });
+    const sm = await demoSession("stageManager");
+    const demo = await demoProductionId(sm);
+    const cues = (await sm.get(`/api/productions/${demo}/cues`)).json.cues;
+    const r = await sm.patch(`/api/productions/${demo}/cues/${cues[0].id}`, { version: cues[0].version, parts: [] });
     expect(r.status).toBe(403);
     expect(r.json.error.fieldErrors).toHaveProperty("parts");
   });

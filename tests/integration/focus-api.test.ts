@@ -1,25 +1,18 @@
 // Focus-chart downloads (PDF, Excel) and the focus fields, through the route handlers and the role table.
 import { describe, expect, it } from "vitest";
 import ExcelJS from "exceljs";
-import { ApiSession, BASE_URL, demoProductionId, freshUser } from "./support/api";
-
-const EMAILS = {
-  designer: "maren.oduya@quillmere.test",
-  electrician: "teodor.brask@quillmere.test",
-  viewer: "rafe.lindqvist@quillmere.test",
-  stageManager: "ines.calloway@quillmere.test",
-};
+import { ApiSession, BASE_URL, DEMO_USERS, demoProductionId, demoSession, freshUser } from "./support/api";
 
 /** A raw GET with the session's cookie, for binary bodies. */
 async function download(s: ApiSession, path: string) {
-  const cookie = (s as unknown as { cookie: string }).cookie;
+  const cookie = s.cookie;
   const res = await fetch(BASE_URL + path, { headers: { cookie } });
   return { status: res.status, type: res.headers.get("content-type") ?? "", sheets: res.headers.get("x-sheet-count"), body: Buffer.from(await res.arrayBuffer()) };
 }
 
 describe("focus chart downloads", () => {
   it("the electrician gets one position's charts as a PDF with ceil(n/4) pages", async () => {
-    const s = await new ApiSession().signIn(EMAILS.electrician);
+    const s = await demoSession("electrician");
     const id = await demoProductionId(s);
     const fixtures = (await s.get(`/api/productions/${id}/fixtures`)).json.fixtures as Array<{ positionId: number; positionName: string }>;
     const boom = fixtures.find((f) => f.positionName === "Boom SL 1")!;
@@ -34,7 +27,7 @@ describe("focus chart downloads", () => {
   });
 
   it("answers a bad layout and a bad channel range with 400 naming the field", async () => {
-    const s = await new ApiSession().signIn(EMAILS.viewer);
+    const s = await demoSession("viewer");
     const id = await demoProductionId(s);
     const bad = await s.get(`/api/productions/${id}/focus/pdf?perPage=3`);
     expect(bad.status).toBe(400);
@@ -49,14 +42,14 @@ describe("focus chart downloads", () => {
 
   it("hides the production from outsiders (404) for both downloads", async () => {
     const { session } = await freshUser("focus-outsider");
-    const s = await new ApiSession().signIn(EMAILS.viewer);
+    const s = await demoSession("viewer");
     const id = await demoProductionId(s);
     expect((await session.get(`/api/productions/${id}/focus/pdf`)).status).toBe(404);
     expect((await session.get(`/api/productions/${id}/focus/xlsx`)).status).toBe(404);
   });
 
   it("the viewer exports the focus data to Excel, one row a fixture", async () => {
-    const s = await new ApiSession().signIn(EMAILS.viewer);
+    const s = await demoSession("viewer");
     const id = await demoProductionId(s);
     const total = (await s.get(`/api/productions/${id}/fixtures`)).json.fixtures.length as number;
     const r = await download(s, `/api/productions/${id}/focus/xlsx`);
@@ -73,7 +66,7 @@ describe("focus chart downloads", () => {
 
 describe("focus fields by role", () => {
   it("the electrician marks focused (time and who) and writes as-focused notes, not designer notes", async () => {
-    const s = await new ApiSession().signIn(EMAILS.electrician);
+    const s = await demoSession("electrician");
     const id = await demoProductionId(s);
     const f = (await s.get(`/api/productions/${id}/fixtures`)).json.fixtures.find((x: { positionName: string; focused: boolean }) => x.positionName === "3rd Electric" && !x.focused);
     const marked = await s.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: f.version, focused: true, focusNotes: "Shuttered off the border." });
@@ -89,7 +82,7 @@ describe("focus fields by role", () => {
   });
 
   it("the stage manager and the viewer cannot mark focused", async () => {
-    for (const email of [EMAILS.stageManager, EMAILS.viewer]) {
+    for (const email of [DEMO_USERS.stageManager, DEMO_USERS.viewer]) {
       const s = await new ApiSession().signIn(email);
       const id = await demoProductionId(s);
       const f = (await s.get(`/api/productions/${id}/fixtures`)).json.fixtures[0];

@@ -1,7 +1,7 @@
 // Bulk edit of a selection and accessories, through the route handlers.
 import { describe, expect, it } from "vitest";
-import { ApiSession, demoProductionId } from "./support/api";
-import { fixturesOf, rigProduction, upload } from "./rig-upload";
+import { ApiSession, demoProductionId, demoSession } from "./support/api";
+import { fixturesOf, rigProduction, upload } from "./support/rig";
 
 async function withUnits() {
   const p = await rigProduction();
@@ -35,7 +35,7 @@ describe("bulk edit", () => {
     const bad = await s.post(`/api/productions/${id}/fixtures/bulk`, { items, action: { kind: "addresses", universe: 1, address: 513 } });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.json.error.fieldErrors)).toContain("action.address");
-    const el = await new ApiSession().signIn("teodor.brask@quillmere.test");
+    const el = await demoSession("electrician");
     const demo = await demoProductionId(el);
     const f = (await fixturesOf(el, demo))[0];
     expect((await el.post(`/api/productions/${demo}/fixtures/bulk`, { items: [{ id: f.id, version: f.version }], action: { kind: "colour", colour: "pale blue" } })).status).toBe(403);
@@ -57,12 +57,12 @@ describe("accessories", () => {
   });
 
   it("lets the electrician add one and not the viewer", async () => {
-    const el = await new ApiSession().signIn("teodor.brask@quillmere.test");
+    const el = await demoSession("electrician");
     const id = await demoProductionId(el);
     const f = (await fixturesOf(el, id))[0];
     const r = await el.post(`/api/productions/${id}/accessories`, { fixtureId: f.id, kind: "iris" });
     expect(r.status).toBe(201);
-    const viewer = await new ApiSession().signIn("rafe.lindqvist@quillmere.test");
+    const viewer = await demoSession("viewer");
     expect((await viewer.post(`/api/productions/${id}/accessories`, { fixtureId: f.id, kind: "iris" })).status).toBe(403);
   });
 });

@@ -1,6 +1,6 @@
 // Positions, focus points, fixture types and fixtures through the route handlers.
 import { describe, expect, it } from "vitest";
-import { ApiSession, demoProductionId, freshUser } from "./support/api";
+import { ApiSession, demoProductionId, demoSession, freshUser } from "./support/api";
 
 async function ownProduction() {
   const { session } = await freshUser("rig");
@@ -38,7 +38,7 @@ describe("positions", () => {
   });
 
   it("does not let the electrician draw positions", async () => {
-    const el = await new ApiSession().signIn("teodor.brask@quillmere.test");
+    const el = await demoSession("electrician");
     const id = await demoProductionId(el);
     const r = await el.post(`/api/productions/${id}/positions`, { name: "Rogue", kind: "boom", x1: 0, y1: 0, trimHeight: 3 });
     expect(r.status).toBe(403);

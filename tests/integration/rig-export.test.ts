@@ -5,9 +5,9 @@ import os from "node:os";
 import path from "node:path";
 import ExcelJS from "exceljs";
 import { describe, expect, it } from "vitest";
-import { ApiSession, demoProductionId, freshUser } from "./support/api";
+import { ApiSession, demoProductionId, demoSession, freshUser } from "./support/api";
 import { readCsv } from "@/lib/io/csv-read";
-import { download, fixturesOf, rigProduction, upload } from "./rig-upload";
+import { download, fixturesOf, rigProduction, upload } from "./support/rig";
 
 async function seeded(units: "metric" | "imperial") {
   const p = await rigProduction(units);
@@ -82,7 +82,7 @@ describe("export files", () => {
   });
 
   it("lets every role export, and refuses the workbook as CSV", async () => {
-    const viewer = await new ApiSession().signIn("rafe.lindqvist@quillmere.test");
+    const viewer = await demoSession("viewer");
     const id = await demoProductionId(viewer);
     const hang = await download(viewer, id, "view=hang&format=csv");
     expect(hang.status).toBe(200);
@@ -114,7 +114,7 @@ describe("LibreOffice reads our exports", () => {
 
   for (const ext of ["xlsx", "csv"] as const) {
     it(`converts the exported .${ext} to CSV with the same values`, async () => {
-      const viewer = await new ApiSession().signIn("rafe.lindqvist@quillmere.test");
+      const viewer = await demoSession("viewer");
       const id = await demoProductionId(viewer);
       const ours = readCsv(new TextDecoder().decode((await download(viewer, id, "view=all&format=csv")).bytes)).rows.map((r) => r.cells);
       const theirs = viaLibreOffice((await download(viewer, id, `view=all&format=${ext}`)).bytes, ext);

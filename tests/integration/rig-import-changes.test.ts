@@ -2,7 +2,7 @@
 // fixture's history can be looked up by its id, holding what the file wrote (and, for updates, what was there).
 import * as mariadb from "mariadb";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { fixturesOf, rigProduction, upload } from "./rig-upload";
+import { fixturesOf, rigProduction, upload } from "./support/rig";
 
 let db: mariadb.Connection;
 

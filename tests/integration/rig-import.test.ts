@@ -1,7 +1,7 @@
 // The import matrix against the real MariaDB, through the route handler.
 import { describe, expect, it } from "vitest";
-import { ApiSession, demoProductionId, freshUser } from "./support/api";
-import { fixturesOf, rigProduction, upload, xlsxBytes } from "./rig-upload";
+import { ApiSession, demoProductionId, demoSession, freshUser } from "./support/api";
+import { fixturesOf, rigProduction, upload, xlsxBytes } from "./support/rig";
 
 const preview = { mode: "preview" };
 const commit = { mode: "commit" };
@@ -149,7 +149,7 @@ describe("row errors and all-or-nothing", () => {
 
 describe("roles", () => {
   it("lets the electrician change electrics only, naming the designer fields a row would change", async () => {
-    const el = await new ApiSession().signIn("teodor.brask@quillmere.test");
+    const el = await demoSession("electrician");
     const id = await demoProductionId(el);
     const fx = await fixturesOf(el, id);
     const target = fx[0];
@@ -164,10 +164,10 @@ describe("roles", () => {
   });
 
   it("refuses import to the viewer and stage manager, and hides the production from outsiders", async () => {
-    const viewer = await new ApiSession().signIn("rafe.lindqvist@quillmere.test");
+    const viewer = await demoSession("viewer");
     const id = await demoProductionId(viewer);
     expect((await upload(viewer, id, { name: "v.csv", body: "Position,Unit\nX,1\n" }, preview)).status).toBe(403);
-    const sm = await new ApiSession().signIn("ines.calloway@quillmere.test");
+    const sm = await demoSession("stageManager");
     expect((await upload(sm, id, { name: "v.csv", body: "Position,Unit\nX,1\n" }, preview)).status).toBe(403);
     const { session: outsider } = await freshUser("outsider");
     expect((await upload(outsider, id, { name: "v.csv", body: "Position,Unit\nX,1\n" }, preview)).status).toBe(404);

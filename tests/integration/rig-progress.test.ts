@@ -1,7 +1,7 @@
 // A large file reports progress while it is read and checked, not only while it is written.
 import { describe, expect, it } from "vitest";
 import { BASE_URL } from "./support/api";
-import { rigProduction } from "./rig-upload";
+import { rigProduction } from "./support/rig";
 
 const cookieOf = (s: unknown) => (s as { cookie: string }).cookie;
 

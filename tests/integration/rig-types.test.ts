@@ -1,7 +1,7 @@
 // Fixture types: editing a type's figures per role, and every fixture's computed values following.
 import { describe, expect, it } from "vitest";
-import { ApiSession, demoProductionId } from "./support/api";
-import { fixturesOf, rigProduction, upload } from "./rig-upload";
+import { ApiSession, demoProductionId, demoSession } from "./support/api";
+import { fixturesOf, rigProduction, upload } from "./support/rig";
 
 describe("fixture type figures", () => {
   it("a new cone changes the computed pool of every fixture of the type", async () => {
@@ -25,7 +25,7 @@ describe("fixture type figures", () => {
   });
 
   it("the electrician changes wattage but not the cone; a bad figure is a 400 naming the field", async () => {
-    const el = await new ApiSession().signIn("teodor.brask@quillmere.test");
+    const el = await demoSession("electrician");
     const demo = await demoProductionId(el);
     const type = (await el.get(`/api/productions/${demo}/fixture-types`)).json.fixtureTypes[0];
     const ok = await el.patch(`/api/productions/${demo}/fixture-types/${type.id}`, { version: type.version, wattage: type.wattage + 1 });

@@ -2,7 +2,7 @@
 // they arrive and answers 413 at the cap rather than reading the whole body first.
 import { describe, expect, it } from "vitest";
 import { BASE_URL } from "./support/api";
-import { rigProduction } from "./rig-upload";
+import { rigProduction } from "./support/rig";
 
 const cookieOf = (s: unknown) => (s as { cookie: string }).cookie;
 

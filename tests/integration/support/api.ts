@@ -1,6 +1,8 @@
 // A small HTTP client with a cookie jar, for integration tests through the real route handlers.
+import { DEMO_PASSWORD, DEMO_USERS, type DemoRole, demoIdFrom } from "../../support/demo";
+
+export { DEMO_PASSWORD, DEMO_USERS };
 export const BASE_URL = process.env.APP_URL ?? "http://127.0.0.1:3000";
-export const DEMO_PASSWORD = "lantern-demo-2026";
 
 /**
  * fetch, retried once when a kept-alive socket was closed by the server just as it was reused
@@ -17,7 +19,8 @@ async function fetchOnce(url: string, init: RequestInit): Promise<Response> {
 }
 
 export class ApiSession {
-  private cookie = "";
+  /** The session cookie as a request header value, for raw fetches (multipart, binary downloads). */
+  cookie = "";
 
   async request(method: string, path: string, body?: unknown, rawBody?: string) {
     const res = await fetchOnce(BASE_URL + path, {
@@ -66,9 +69,28 @@ export async function freshUser(tag: string) {
   return { session: s, email, user: r.json.user };
 }
 
+/** A session of one of the demo accounts. */
+export const demoSession = (role: DemoRole) => new ApiSession().signIn(DEMO_USERS[role]);
+
 export async function demoProductionId(session: ApiSession): Promise<number> {
-  const r = await session.get("/api/productions");
-  const p = r.json.productions.find((x: { name: string }) => x.name === "Salt and Lantern");
-  if (!p) throw new Error("demo production not found");
-  return p.id;
+  return demoIdFrom((await session.get("/api/productions")).json);
+}
+
+/** A raw GET with the session's cookie, for binary bodies. */
+export async function getBytes(s: ApiSession, path: string) {
+  const res = await fetchOnce(BASE_URL + path, { headers: { cookie: s.cookie } });
+  return { status: res.status, headers: res.headers, type: res.headers.get("content-type") ?? "", bytes: Buffer.from(await res.arrayBuffer()) };
+}
+
+/** A multipart POST with the session's cookie; the body is any form the route reads. */
+export async function postForm(s: ApiSession, path: string, form: FormData) {
+  const res = await fetchOnce(BASE_URL + path, { method: "POST", headers: { cookie: s.cookie }, body: form });
+  const text = await res.text();
+  let json: any;
+  try {
+    json = JSON.parse(text);
+  } catch {
+    json = { raw: text };
+  }
+  return { status: res.status, json };
 }

@@ -1,28 +1,18 @@
 // Helpers for the rig import/export integration tests: multipart uploads and binary downloads with
-// the same cookie jar as ApiSession.
+// the same cookie jar as ApiSession, and a small production of a fresh designer's to import into.
 import ExcelJS from "exceljs";
-import { ApiSession, BASE_URL, freshUser } from "./support/api";
-
-const cookieOf = (s: ApiSession) => (s as unknown as { cookie: string }).cookie;
+import { type ApiSession, freshUser, getBytes, postForm } from "./api";
 
 export async function upload(s: ApiSession, productionId: number, file: { name: string; body: string | Uint8Array }, options: Record<string, unknown>) {
   const form = new FormData();
   form.set("file", new File([file.body as BlobPart], file.name));
   form.set("options", JSON.stringify(options));
-  const res = await fetch(`${BASE_URL}/api/productions/${productionId}/import`, { method: "POST", headers: { cookie: cookieOf(s) }, body: form });
-  const text = await res.text();
-  let json: any;
-  try {
-    json = JSON.parse(text);
-  } catch {
-    json = { raw: text };
-  }
-  return { status: res.status, json };
+  return postForm(s, `/api/productions/${productionId}/import`, form);
 }
 
 export async function download(s: ApiSession, productionId: number, query: string) {
-  const res = await fetch(`${BASE_URL}/api/productions/${productionId}/export?${query}`, { headers: { cookie: cookieOf(s) } });
-  return { status: res.status, type: res.headers.get("content-type") ?? "", disposition: res.headers.get("content-disposition") ?? "", bytes: new Uint8Array(await res.arrayBuffer()) };
+  const r = await getBytes(s, `/api/productions/${productionId}/export?${query}`);
+  return { status: r.status, type: r.type, disposition: r.headers.get("content-disposition") ?? "", bytes: new Uint8Array(r.bytes) };
 }
 
 /** A fresh production owned by a fresh designer, with one pipe, one boom and two types. */
