@@ -49,7 +49,7 @@ export async function getStudyFixtures({ productionId }: { productionId: number 
       raw: true,
     }) as unknown as Promise<FixtureRow[]>,
     Position.findAll({ where: { productionId }, attributes: ["id", "name", "trimHeight"], raw: true }),
-    FixtureType.findAll({ where: { productionId }, attributes: ["id", "family", "coneMaxDeg", "defaultSoftnessDeg", "lensDropM", "lensApertureM", "peakCandela"], raw: true }),
+    FixtureType.findAll({ where: { productionId }, attributes: ["id", "family", "coneMinDeg", "coneMaxDeg", "defaultSoftnessDeg", "lensDropM", "lensApertureM", "peakCandela", "peakCandelaNarrow"], raw: true }),
     FocusPoint.findAll({ where: { productionId }, attributes: ["id", "x", "y"], raw: true }),
   ]);
   const pos = new Map(positions.map((p) => [p.id, p]));
@@ -65,7 +65,7 @@ export async function getStudyFixtures({ productionId }: { productionId: number 
     out.push({
       id: f.id, unitNumber: f.unitNumber, positionName: p.name, channel: f.channel, colour: f.colour, x: f.x, y: f.y,
       lensHeight: f.lensHeight, trimHeight: p.trimHeight, focus, aim: f.aim, coneDeg: f.coneDeg, softnessDeg: f.softnessDeg,
-      type: { family: t.family, coneMaxDeg: t.coneMaxDeg, defaultSoftnessDeg: t.defaultSoftnessDeg, lensDropM: t.lensDropM, lensApertureM: t.lensApertureM, peakCandela: t.peakCandela },
+      type: { family: t.family, coneMaxDeg: t.coneMaxDeg, defaultSoftnessDeg: t.defaultSoftnessDeg, lensDropM: t.lensDropM, lensApertureM: t.lensApertureM, peakCandela: t.peakCandela, coneMinDeg: t.coneMinDeg, peakCandelaNarrow: t.peakCandelaNarrow },
     });
   }
   return out;

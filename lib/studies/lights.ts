@@ -2,7 +2,7 @@
 // the show deck), its level in the chosen state through its family's dimmer curve, times its colour's
 // transmission. Pure, so the server and the browser build the same beams.
 import {
-  dimmerCurveOf, FIXTURE_FAMILIES, lightFromLevel, transmissionOf, type ColourList, type Family, type LitBeam,
+  dimmerCurveOf, FIXTURE_FAMILIES, lightFromLevel, peakCandelaAt, transmissionOf, type ColourList, type Family, type LitBeam,
 } from "@/lib/optics";
 import type { StudyLight } from "@/lib/dto/studies";
 
@@ -20,7 +20,11 @@ export type StudyFixture = {
   aim: "deck" | "head";
   coneDeg: number | null;
   softnessDeg: number | null;
-  type: { family: string; coneMaxDeg: number; defaultSoftnessDeg: number; lensDropM: number; lensApertureM: number; peakCandela: number };
+  type: {
+    family: string; coneMaxDeg: number; defaultSoftnessDeg: number; lensDropM: number; lensApertureM: number; peakCandela: number;
+    /** A zoom's range and its peak at the narrow end: the peak follows the zoom setting (lib/optics/zoom-peak.ts). */
+    coneMinDeg?: number; peakCandelaNarrow?: number | null;
+  };
 };
 
 /** Level 0–100 of a channel in the chosen state; "full" lights every unit, channel or not. */
@@ -66,7 +70,9 @@ export function studyLights(fixtures: StudyFixture[], levels: Levels, s: StudySe
       fixtureId: f.id, unitLabel: label, channel: f.channel, source, focus, coneDeg, softnessDeg, family,
       apertureDiameter: f.type.lensApertureM, peakCandela: f.type.peakCandela, level, output, curve, colour: f.colour, missingColours: t.missing,
     });
-    beams.push({ source, focus, coneDeg, softnessDeg, peakCandela: f.type.peakCandela, level: output, family });
+    const t0 = f.type;
+    const peakCandela = peakCandelaAt({ coneMinDeg: t0.coneMinDeg ?? t0.coneMaxDeg, coneMaxDeg: t0.coneMaxDeg, peakCandela: t0.peakCandela, peakCandelaNarrow: t0.peakCandelaNarrow }, coneDeg);
+    beams.push({ source, focus, coneDeg, softnessDeg, peakCandela, level: output, family });
   }
   const warnings: string[] = [];
   if (missing.size) {
