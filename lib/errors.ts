@@ -11,6 +11,7 @@ export type ErrorCode =
   | "conflict"
   | "too_large"
   | "unsupported"
+  | "too_many_requests"
   | "unavailable"
   | "internal";
 
@@ -22,6 +23,7 @@ const STATUS: Record<ErrorCode, number> = {
   conflict: 409,
   too_large: 413,
   unsupported: 415,
+  too_many_requests: 429,
   unavailable: 503,
   internal: 500,
 };
@@ -32,7 +34,7 @@ export class AppError extends Error {
   constructor(
     readonly code: ErrorCode,
     message: string,
-    readonly details: { fieldErrors?: FieldErrors; current?: unknown } = {},
+    readonly details: { fieldErrors?: FieldErrors; current?: unknown; retryAfterSeconds?: number } = {},
   ) {
     super(message);
     this.name = "AppError";
