@@ -25,6 +25,9 @@ describe("shutter inversion", () => {
   });
 
   it("front light: downstage edge off the lip is the top shutter", () => {
+    // Geometry: the cut y = −1.5 lies downstage of the mark (0, 1), so it removes the downstage side, which for a
+    // beam travelling upstage (pan 90°) is its near side; the lens inverts the image, so the top shutter cuts
+    // the near edge (thin-lens inversion, from memory). The line coincides with the lip (y = −apron depth).
     const r = readCut({ label: "bottom", a: { x: -3, y: -1.5 }, b: { x: 3, y: -1.5 } }, { ...base, mark: { x: 0, y: 1 }, panDeg: 90, tiltDeg: 35, family: "profile" });
     expect(r.words).toBe("downstage edge off the lip");
     expect(r.beamSide).toBe("near");
@@ -33,12 +36,17 @@ describe("shutter inversion", () => {
   });
 
   it("front light: upstage edge off the back wall is the bottom shutter", () => {
+    // Geometry: the cut y = 9.45 is upstage of the mark (0, 7): it removes the far side of an upstage-travelling
+    // beam, which the inverted image puts on the bottom shutter; it runs 0.05 m from the back wall (y = 9.5).
     const r = readCut({ label: "top", a: { x: -3, y: 9.45 }, b: { x: 3, y: 9.45 } }, { ...base, mark: { x: 0, y: 7 }, panDeg: 90, tiltDeg: 35, family: "profile" });
     expect(r.words).toBe("upstage edge off the back wall");
     expect(r.physical).toBe("bottom");
   });
 
   it("front light: stage-left edge to the proscenium is the left shutter (right side of the beam)", () => {
+    // Geometry: the cut x = 5.1 is stage left (+x) of the mark (3, 2); facing upstage (+y), +x is on your right,
+    // so it removes the beam's right side, which the inverted image puts on the left shutter. The SL
+    // proscenium (x = 5) runs parallel 0.1 m away, within the pool's reach, so it names the cut.
     const r = readCut({ label: "left", a: { x: 5.1, y: -1 }, b: { x: 5.1, y: 4 } }, { ...base, mark: { x: 3, y: 2 }, panDeg: 90, tiltDeg: 40, family: "profile" });
     expect(r.words).toBe("stage-left edge to the SL proscenium");
     expect(r.beamSide).toBe("right");
@@ -90,23 +98,30 @@ describe("shutter inversion", () => {
   });
 
   it("a fresnel's barn door cuts its own side", () => {
+    // Geometry as the lip case: the near (downstage) side of the beam. Barn doors are outside the lens, so no
+    // inversion: the door on the near side is the bottom door (common practice, no source).
     const r = readCut({ label: "top", a: { x: -3, y: -1.5 }, b: { x: 3, y: -1.5 } }, { ...base, mark: { x: 0, y: 1 }, panDeg: 90, tiltDeg: 35, family: "fresnel" });
     expect(r.cutterWords).toBe("bottom barn door");
   });
 
   it("straight down: no top to the beam, so the stored label stands", () => {
+    // Geometry: at a 90° tilt the beam has no near or far side (its cross-section is symmetric about the axis),
+    // so which shutter cuts which deck edge depends only on how the unit is turned in its yoke: keep the label.
     const r = readCut({ label: "left", a: { x: -3, y: -1.5 }, b: { x: 3, y: -1.5 } }, { ...base, mark: { x: 0, y: 1 }, panDeg: 0, tiltDeg: 90, family: "profile" });
     expect(r.physical).toBeNull();
     expect(r.cutterWords).toMatch(/^left shutter \(as labelled/);
   });
 
   it("a chart computes pan and tilt itself and words its cuts", () => {
+    // Geometry: lens (0, −8, 7) to mark (0, 0.5) pans 90° (straight upstage) and tilts 39.5° down
+    // (atan(7/8.5)); the lip cut is then the near side, as in the lip case above.
     const f = makeFixture({ lens: { x: 0, y: -8, z: 7 }, mark: { x: 0, y: 0.5 }, shutterCuts: [{ label: "bottom", a: { x: -4, y: -1.5 }, b: { x: 4, y: -1.5 } }] });
     const chart = buildFocusChart(f, PRODUCTION);
     expect(chart.cuts.map((c) => `${c.words} — ${c.cutterWords}`)).toEqual(["downstage edge off the lip — top shutter"]);
   });
 
   it("a cut through the mark is a warning on the chart, not a crash", () => {
+    // Geometry: the mark (0, 1) lies on the cut y = 1, so neither side of the line is "the side with the mark".
     const f = makeFixture({ mark: { x: 0, y: 1 }, shutterCuts: [{ label: "top", a: { x: -1, y: 1 }, b: { x: 1, y: 1 } }] });
     const chart = buildFocusChart(f, PRODUCTION);
     expect(chart.cuts).toHaveLength(0);
