@@ -52,7 +52,8 @@ describe("reading", () => {
     // so only the up fade runs: 0 + 5 = 5 s (the 7 s down fade moves nothing). Common practice, no source.
     expect(cue(0.5)).toMatchObject({ label: "House to half", upTime: 5, downTime: 7, delay: 0, up: 5, down: 0, runningTime: 5 });
     expect(cue(0.5).summary).toMatch(/^5 up · from dark · brighter: /);
-    expect(cue(0.5).levels).toEqual({ 1: 0, 24: 70, 47: 30, 70: 100, 93: 60, 116: 20 });
+    const list = (await sm.get(base)).json.cues;
+    expect(list.find((c: { number: number }) => c.number === 0.5).levels).toEqual({ 1: 0, 24: 70, 47: 30, 70: 100, 93: 60, 116: 20 });
     // Cue 1 "Dawn on the harbour" (i = 2), next in running order: up 8 s, no down time. Moves for k = 0…7:
     // channel 1 + ((34 + 23k) mod 116) at ((26 + 29k) mod 11)·10 → 35 @ 40, 58 @ 0, 81 @ 70, 104 @ 30, 12 @ 100;
     // k = 5…7 give 35, 58, 81 again and the seeder keeps the first. Against cue 0.5's look, 35, 81, 104 and 12
@@ -231,8 +232,8 @@ describe("renumbering and import in a production of one's own", () => {
     const bad = FILE.replace("CHAN 3@40", "CHAN 3@120");
     const r = await own.post(`${ownBase}/import`, { text: bad });
     expect(r.status).toBe(400);
-    expect(r.json.error.message).toMatch(/Line 12: level 120 for channel 3 is above 100/);
-    expect(r.json.error.fieldErrors).toHaveProperty(["line 12"]);
+    expect(r.json.error.message).toMatch(/Line 13: level 120 for channel 3 is above 100/);
+    expect(r.json.error.fieldErrors).toHaveProperty(["line 13"]);
     const truncated = await own.post(`${ownBase}/import`, { text: FILE.replace("ENDDATA\r\n", "") });
     expect(truncated.json.error.message).toMatch(/without ENDDATA/);
     expect((await own.get(ownBase)).json.cues).toEqual(before);
