@@ -9,7 +9,7 @@ import { preparePhoto } from "../lib/data/focus-photos";
 import { buildFocusChart, type FocusChart } from "../lib/focus/chart-model";
 import { outlineLandmarks } from "../lib/focus/landmarks";
 import { paginate } from "../lib/focus/pages";
-import { sheetParts } from "../lib/focus/sheets-html";
+import { focusSheetsMarkup } from "../lib/pdf/focus-sheets-markup";
 import { renderPdf } from "../lib/pdf/focus-pdf";
 import { closeBrowser } from "../lib/pdf/browser";
 import { makeFixture, PRODUCTION } from "../tests/unit/focus/fixture-builder";
@@ -38,7 +38,7 @@ async function pdfOf(charts: FocusChart[]) {
   const landmarks = outlineLandmarks(PRODUCTION);
   const sheets = paginate(charts, 4, { newPagePerPosition: false });
   const t = performance.now();
-  const pdf = await renderPdf({ title: "bench", paper: "A4", footerText: "bench", sheets: sheetParts(sheets, { productionName: "Bench", printedAt: "now", perPage: 4, units: "metric", landmarks }) });
+  const pdf = await renderPdf({ title: "bench", paper: "A4", footerText: "bench", sheets: focusSheetsMarkup(sheets, { productionName: "Bench", printedAt: "now", perPage: 4, units: "metric", landmarks }) });
   return { ms: performance.now() - t, bytes: pdf.byteLength, pages: sheets.length };
 }
 

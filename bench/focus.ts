@@ -2,7 +2,7 @@
 // (chart model → sheets → Debian's headless Chromium → page.pdf). Reports wall time, pages, PDF size, the
 // peak resident memory of Node and of the browser's process tree, and the CPU seconds both spent (sampled
 // from /proc every 300 ms; CPU time varies far less than wall time on a shared machine).
-// Run with `npm run bench:focus [sizes…]` (tsx with the react-server condition so 'server-only' loads);
+// Run with `npm run bench:focus [sizes…]` (production React; bench/support/server-only-off.cjs lets 'server-only' load);
 // BENCH_PDF_OUT=/tmp/focus-{n}.pdf keeps each PDF.
 import { readdirSync, readFileSync, writeFileSync } from "node:fs";
 import os from "node:os";
@@ -11,10 +11,10 @@ import { computeFixtureGeometry } from "../lib/rig/fixture-geometry";
 import { buildFocusChart, type ChartProduction } from "../lib/focus/chart-model";
 import { outlineLandmarks } from "../lib/focus/landmarks";
 import { paginate } from "../lib/focus/pages";
-import { sheetParts } from "../lib/focus/sheets-html";
+import { focusSheetsMarkup } from "../lib/pdf/focus-sheets-markup";
 import { PART_SHEETS, renderPdf } from "../lib/pdf/focus-pdf";
 import { closeBrowser } from "../lib/pdf/browser";
-import type { FixtureDto } from "../lib/data/fixtures";
+import type { FixtureDto } from "../lib/dto/fixture";
 
 const PRODUCTION: ChartProduction = { name: "Bench Production", displayUnits: "metric", datumName: "setting line", headHeight: 1.7, prosceniumWidth: 10, apronDepth: 1.5, backWallY: 9.5, stageWidth: 16 };
 
@@ -137,7 +137,7 @@ async function run(n: number): Promise<Result> {
   const landmarks = outlineLandmarks(PRODUCTION);
   const charts = rig(n).map((f) => buildFocusChart(f, PRODUCTION, { landmarks, userNames: { 1: "Bench Electrician" }, timeZone: "UTC" }));
   const sheets = paginate(charts, 4, { newPagePerPosition: true });
-  const parts = sheetParts(sheets, { productionName: PRODUCTION.name, printedAt: "bench", perPage: 4, units: "metric", landmarks });
+  const parts = focusSheetsMarkup(sheets, { productionName: PRODUCTION.name, printedAt: "bench", perPage: 4, units: "metric", landmarks });
   const htmlLength = parts.reduce((n, p) => n + p.length, 0);
   const t1 = performance.now();
   const nodeBuilt = process.memoryUsage().rss;

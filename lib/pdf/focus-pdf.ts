@@ -12,12 +12,13 @@ import "server-only";
 // - On screen the body is not displayed, so Chromium lays the sheets out only for print (it also lays
 //   the page out again for the screen after printing).
 import { PDFDocument } from "pdf-lib";
+import { createElement } from "react";
 import { CHART_CSS, sheetCss } from "@/lib/focus/chart-css";
-import { escapeHtml } from "@/lib/focus/escape";
 import { PAPER, type Paper } from "@/lib/focus/pages";
 import { plexFontFaces, PLEX_WEIGHTS } from "./fonts";
 import type { Page } from "playwright-core";
 import { withPages } from "./browser";
+import { renderStaticMarkup } from "./static-markup";
 
 /** The document a print page holds between parts: everything but the title and the sheets. */
 function printShell(paper: Paper): string {
@@ -45,17 +46,20 @@ async function loadShell(page: Page, paper: Paper) {
   shellOf.set(page, paper);
 }
 
+const FOOTER_STYLE = { fontFamily: "sans-serif", fontSize: "7px", color: "#555", width: "100%", padding: "0 8mm", display: "flex", justifyContent: "space-between" };
+
 function footer(text: string, numbered: boolean): string {
   // Chromium fills pageNumber/totalPages itself; in a print made of parts they would restart, so then
   // the sheet's own header (page x of y over the whole print) is the page number.
-  const pages = numbered ? `<span>page <span class="pageNumber"></span> of <span class="totalPages"></span></span>` : "";
-  return `<div style="font-family:sans-serif;font-size:7px;color:#555;width:100%;padding:0 8mm;display:flex;justify-content:space-between">` +
-    `<span>${escapeHtml(text)}</span>${pages}</div>`;
+  const span = (className: string) => createElement("span", { className });
+  const pages = numbered ? createElement("span", null, "page ", span("pageNumber"), " of ", span("totalPages")) : null;
+  return renderStaticMarkup(createElement("div", { style: FOOTER_STYLE }, createElement("span", null, text), pages));
 }
 
 /** Print tuning, for the benchmark to compare part sizes and parallelism; the defaults are what the route uses. */
 export type PrintTuning = { partSheets?: number; parallel?: number };
 
+/** Prints sheets of static markup (from focusSheetsMarkup) to one PDF. */
 export async function renderPdf(o: { title: string; sheets: string[]; paper: Paper; footerText: string; tuning?: PrintTuning }): Promise<Buffer> {
   const size = o.tuning?.partSheets ?? PART_SHEETS;
   const parts: string[][] = [];

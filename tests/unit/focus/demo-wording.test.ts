@@ -1,8 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { buildFocusChart, type FocusChart } from "@/lib/focus/chart-model";
 import { mergeLandmarks, outlineLandmarks } from "@/lib/focus/landmarks";
-import { neighboursOf, poolPlanSvg } from "@/lib/focus/plan-svg";
+import { neighboursOf } from "@/lib/focus/shared-mark";
 import { demoFixtures, demoProduction, loadDemoTables } from "./demo-production";
+import { planMarkup } from "./render-markup";
 
 /** Every sentence a chart shows, as a reader meets it: a row's label followed by its value, each cut's words. */
 function sentences(chart: FocusChart): string[] {
@@ -42,7 +43,7 @@ describe("wording of the demo production's focus charts", () => {
     for (const f of fixtures) {
       const chart = buildFocusChart(f, production);
       cutCount += chart.cuts.length;
-      const svg = poolPlanSvg({ current: f, neighbours: neighboursOf(f, fixtures), landmarks, stage: production });
+      const svg = planMarkup({ current: f, neighbours: neighboursOf(f, fixtures), landmarks, stage: production });
       for (const s of [...sentences(chart), ...textOf(svg)]) {
         for (const p of badJoins(s)) problems.push(`${f.positionName} ${f.unitNumber}: ${p} in "${s}"`);
       }
@@ -68,11 +69,11 @@ describe("wording of the demo production's focus charts", () => {
     const f = fixtures.find((x) => x.focusPointId != null)!;
     const others = neighboursOf(f, fixtures);
     expect(others.length).toBeGreaterThan(1);
-    const svg = poolPlanSvg({ current: f, neighbours: others, landmarks, stage: production });
+    const svg = planMarkup({ current: f, neighbours: others, landmarks, stage: production });
     expect(textOf(svg)).toContain(`unit ${f.unitNumber} and ${others.length} others on this mark`);
-    const one = poolPlanSvg({ current: f, neighbours: others.slice(0, 1), landmarks, stage: production });
+    const one = planMarkup({ current: f, neighbours: others.slice(0, 1), landmarks, stage: production });
     expect(textOf(one)).toContain(`unit ${f.unitNumber} and 1 other on this mark`);
-    const alone = poolPlanSvg({ current: f, neighbours: [], landmarks, stage: production });
+    const alone = planMarkup({ current: f, neighbours: [], landmarks, stage: production });
     expect(textOf(alone)).toContain(`unit ${f.unitNumber}, alone on this mark`);
   });
 });

@@ -1,18 +1,19 @@
 import { describe, expect, it } from "vitest";
-import { clipSegment, diagramSvg } from "@/lib/focus/diagram";
+import { clipSegment } from "@/lib/focus/diagram";
 import { outlineLandmarks } from "@/lib/focus/landmarks";
 import { makeFixture, PRODUCTION } from "./fixture-builder";
+import { diagramMarkup } from "./render-markup";
 
 /** The x extent of the dashed outer outline (an unrotated <ellipse>), in plan metres (1 SVG unit = 1 m). */
 function outlineXs(svg: string): number[] {
-  const [, cx, rx] = svg.match(/<ellipse cx="([^"]+)" cy="[^"]+" rx="([^"]+)" ry="[^"]+" class="fc-outline"\/>/)!.map(Number);
+  const [, cx, rx] = svg.match(/<ellipse cx="([^"]+)" cy="[^"]+" rx="([^"]+)" ry="[^"]+" class="fc-outline"(?:\/>|><\/ellipse>)/)!.map(Number);
   return [cx - rx, cx + rx];
 }
 
 describe("the chart diagram is drawn to scale", () => {
   it("a straight-down 26° beam from 6 m draws a pool 1.38521 m in radius", () => {
     const f = makeFixture({ lens: { x: 2, y: 3, z: 6 }, mark: { x: 2, y: 3 }, coneDeg: 26 });
-    const xs = outlineXs(diagramSvg({ fixture: f, landmarks: outlineLandmarks(PRODUCTION), units: "metric" }));
+    const xs = outlineXs(diagramMarkup({ fixture: f, landmarks: outlineLandmarks(PRODUCTION), units: "metric" }));
     // REFERENCE.md pool ellipse table: h 6, φ 0°, α 13° → a = 1.38521 (rounded to 1 mm in the SVG)
     expect(Math.max(...xs) - 2).toBeCloseTo(1.38521, 2);
     expect(2 - Math.min(...xs)).toBeCloseTo(1.38521, 2);
@@ -20,7 +21,7 @@ describe("the chart diagram is drawn to scale", () => {
 
   it("draws the mark, the cut, the arrow and the stage lines, and escapes names", () => {
     const f = makeFixture({ lens: { x: 0, y: -8, z: 7 }, mark: { x: 0, y: 0.5 }, focusPointName: "<Area & 1>", shutterCuts: [{ label: "bottom", a: { x: -4, y: -1.5 }, b: { x: 4, y: -1.5 } }] });
-    const svg = diagramSvg({ fixture: f, landmarks: outlineLandmarks(PRODUCTION), units: "metric", cutLabels: ["T"] });
+    const svg = diagramMarkup({ fixture: f, landmarks: outlineLandmarks(PRODUCTION), units: "metric", cutLabels: ["T"] });
     expect(svg).toContain('class="fc-cut"');
     expect(svg).toContain('marker-end="url(#fc-head)"');
     expect(svg).toContain("&lt;Area &amp; 1&gt;");
@@ -31,7 +32,7 @@ describe("the chart diagram is drawn to scale", () => {
 
   it("an open pool shows the beam's width at the mark instead", () => {
     const f = makeFixture({ lens: { x: -6.5, y: 5, z: 2.4 }, mark: { x: 2.6, y: 5 }, aim: "head", coneDeg: 36 });
-    const svg = diagramSvg({ fixture: f, landmarks: [], units: "metric" });
+    const svg = diagramMarkup({ fixture: f, landmarks: [], units: "metric" });
     expect(svg).toContain("pool open: beam width at the mark");
     const r = Number(svg.match(/<circle cx="[^"]+" cy="[^"]+" r="([^"]+)" class="fc-outline"/)![1]);
     // trigonometry: radius = throw · tan(θ/2), throw = hypot(9.1, 0.7)

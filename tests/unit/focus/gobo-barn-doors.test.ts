@@ -2,11 +2,11 @@
 // fields, and the focus photo's place on the chart.
 import { describe, expect, it } from "vitest";
 import { buildFocusChart } from "@/lib/focus/chart-model";
-import { chartHtml } from "@/lib/focus/chart-html";
 import { focusRow } from "@/lib/focus/excel";
 import { barnDoorWords, goboRotationWords } from "@/lib/focus/words";
 import { outlineLandmarks } from "@/lib/focus/landmarks";
 import { makeFixture, PRODUCTION } from "./fixture-builder";
+import { chartMarkup } from "./render-markup";
 
 const value = (rows: Array<{ key: string; value: string }>, key: string) => rows.find((r) => r.key === key)?.value;
 
@@ -66,12 +66,12 @@ describe("the chart's rows", () => {
     const f = makeFixture({ id: 31, productionId: 4, focusPhotoUploadId: 9 });
     const chart = buildFocusChart(f, PRODUCTION);
     expect(chart.photo).toEqual({ uploadId: 9, thumbSrc: "/api/productions/4/fixtures/31/photo?u=9&size=thumb", href: "/api/productions/4/fixtures/31/photo?u=9" });
-    const html = chartHtml(chart, { landmarks: outlineLandmarks(PRODUCTION), units: "metric" });
+    const html = chartMarkup(chart, { landmarks: outlineLandmarks(PRODUCTION), units: "metric" });
     expect(html).toContain('class="fc-photo" href="/api/productions/4/fixtures/31/photo?u=9"');
     expect(html).toContain('src="/api/productions/4/fixtures/31/photo?u=9&amp;size=thumb"');
     expect(focusRow(chart).photo).toBe("taken");
     // In the PDF the small copy is inline and there is no link to follow.
-    const inline = chartHtml({ ...chart, photo: { ...chart.photo!, thumbSrc: "data:image/jpeg;base64,AAAA", href: "" } }, { landmarks: [], units: "metric" });
+    const inline = chartMarkup({ ...chart, photo: { ...chart.photo!, thumbSrc: "data:image/jpeg;base64,AAAA", href: "" } }, { landmarks: [], units: "metric" });
     expect(inline).toContain('<span class="fc-photo"><img src="data:image/jpeg;base64,AAAA"');
     expect(buildFocusChart(makeFixture(), PRODUCTION).photo).toBeNull();
   });

@@ -5,7 +5,8 @@ import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useMemo } from "react";
 import { POINT_HUNG_KINDS } from "@/lib/rig/position-kinds";
 import { useFocusFixtures } from "@/hooks/use-focus";
-import { neighboursOf, poolPlanSvg } from "@/lib/focus/plan-svg";
+import { neighboursOf } from "@/lib/focus/shared-mark";
+import { PoolPlan } from "@/components/focus/pool-plan";
 import { toQuery } from "@/lib/focus/filters";
 import { ChartCard } from "./chart-card";
 import { BeamFields } from "./beam-fields";
@@ -82,7 +83,7 @@ export function FocusCall({ data }: { data: FocusPageData }) {
                 <ChartCard chart={chart} landmarks={landmarks} units={data.production.displayUnits} />
                 <div className="grid gap-3 sm:grid-cols-2">
                   <figure className="m-0" data-testid="pool-plan">
-                    <div dangerouslySetInnerHTML={{ __html: poolPlanSvg({ current, neighbours, landmarks, stage: data.production }) }} />
+                    <div><PoolPlan current={current} neighbours={neighbours} landmarks={landmarks} stage={data.production} /></div>
                     <figcaption className="mt-1 text-xs text-muted">
                       {neighbours.length ? `Also on this mark: ${neighbours.map((n) => `${n.positionName} unit ${n.unitNumber}`).join(", ")}` : "No other unit aims at this mark."}
                     </figcaption>

@@ -4,9 +4,9 @@ import { memberForPage } from "@/lib/auth/page-guards";
 import { CHART_CSS, sheetCss } from "@/lib/focus/chart-css";
 import { focusFilterSchema, printOptionsSchema, toQuery } from "@/lib/focus/filters";
 import { paginate } from "@/lib/focus/pages";
-import { sheetsHtml } from "@/lib/focus/sheets-html";
 import { formatStamp } from "@/lib/focus/words";
 import { loadFocusCharts } from "@/lib/pdf/focus-source";
+import { FocusSheets } from "@/components/focus/focus-sheets";
 import { PrintButton } from "../_components/print-button";
 
 export const metadata: Metadata = { title: "Print focus charts" };
@@ -25,7 +25,7 @@ export default async function FocusPrintPage({ params, searchParams }: Props) {
 
   const { production, charts, landmarks } = await loadFocusCharts({ productionId, filter, timeZone: options.tz });
   const sheets = paginate(charts, options.perPage, { newPagePerPosition: options.newPagePerPosition });
-  const html = sheetsHtml(sheets, { productionName: production.name, printedAt: formatStamp(new Date(), options.tz), perPage: options.perPage, units: production.displayUnits, landmarks });
+  const sheetOptions = { productionName: production.name, printedAt: formatStamp(new Date(), options.tz), perPage: options.perPage, units: production.displayUnits, landmarks };
   return (
     <>
       <style dangerouslySetInnerHTML={{ __html: CHART_CSS + sheetCss(options.paper) }} />
@@ -36,7 +36,9 @@ export default async function FocusPrintPage({ params, searchParams }: Props) {
         <span className="ml-auto" />
         <PrintButton />
       </div>
-      <div className="fc-print-area bg-raised py-2 print:bg-transparent print:p-0" dangerouslySetInnerHTML={{ __html: html }} />
+      <div className="fc-print-area bg-raised py-2 print:bg-transparent print:p-0">
+        <FocusSheets sheets={sheets} o={sheetOptions} />
+      </div>
     </>
   );
 }

@@ -2,11 +2,11 @@ import { route, readQuery } from "@/lib/http/respond";
 import { requireMember } from "@/lib/auth/guards";
 import { focusFilterSchema, printOptionsSchema } from "@/lib/focus/filters";
 import { paginate } from "@/lib/focus/pages";
-import { sheetParts } from "@/lib/focus/sheets-html";
 import { formatStamp } from "@/lib/focus/words";
 import { loadFocusCharts } from "@/lib/pdf/focus-source";
 import { withEmbeddedPhotos } from "@/lib/data/focus-photos";
 import { renderPdf } from "@/lib/pdf/focus-pdf";
+import { focusSheetsMarkup } from "@/lib/pdf/focus-sheets-markup";
 import { chromiumMissing, CHROMIUM_PATH } from "@/lib/pdf/browser";
 import { AppError } from "@/lib/errors";
 import { attachmentName } from "../attachment";
@@ -28,7 +28,7 @@ export const GET = route(async (req, { params }: Ctx) => {
   const pdf = await renderPdf({
     title: `${production.name} — focus charts`,
     paper: filter.paper,
-    sheets: sheetParts(sheets, { productionName: production.name, printedAt, perPage: filter.perPage, units: production.displayUnits, landmarks }),
+    sheets: focusSheetsMarkup(sheets, { productionName: production.name, printedAt, perPage: filter.perPage, units: production.displayUnits, landmarks }),
     footerText: `${production.name} · focus charts · printed ${printedAt}`,
   });
   return new Response(new Uint8Array(pdf), {
