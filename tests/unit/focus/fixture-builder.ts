@@ -1,6 +1,7 @@
 // Test fixtures for focus charts: a FixtureDto built through the same geometry code the server uses.
 import type { FixtureDto } from "@/lib/dto/fixture";
 import { computeFixtureGeometry } from "@/lib/rig/fixture-geometry";
+import { emptyFixture } from "@/lib/rig/fixture-fields";
 import type { ChartProduction } from "@/lib/focus/chart-model";
 
 export const PRODUCTION: ChartProduction = {
@@ -13,13 +14,12 @@ type Over = Partial<FixtureDto> & { lens?: { x: number; y: number; z: number }; 
 export function makeFixture(o: Over = {}): FixtureDto {
   const lens = o.lens ?? { x: 0, y: -8, z: 7 };
   const mark = o.mark ?? { x: 1.2, y: 2.5 };
+  // Every field at a new fixture's empty value (the registry's), then this unit's own.
   const record = {
-    id: 1, productionId: 1, positionId: 10, fixtureTypeId: 3, focusPointId: null, unitNumber: "7", bodyKey: null, cell: null,
-    channel: 107, universe: 1, address: 107, dmxMode: null, footprint: 1, circuit: "A12", dimmer: null, colour: "pale blue", gobo: null,
-    purpose: "front light", x: lens.x, y: lens.y, lensHeight: lens.z, focusX: mark.x, focusY: mark.y, aim: "deck" as const,
-    coneDeg: 26, softnessDeg: 2, shutterCuts: null, irisPercent: null, notes: null, focusNotes: null, focusPhotoUploadId: null, goboRotationDeg: null,
-    barnDoorTop: null, barnDoorBottom: null, barnDoorLeft: null, barnDoorRight: null, hung: true, focused: false,
-    focusedAt: null, focusedBy: null, version: 1, updatedAt: "2026-12-02T10:00:00.000Z",
+    ...emptyFixture(),
+    id: 1, productionId: 1, positionId: 10, fixtureTypeId: 3, unitNumber: "7", channel: 107, universe: 1, address: 107, footprint: 1,
+    circuit: "A12", colour: "pale blue", purpose: "front light", x: lens.x, y: lens.y, lensHeight: lens.z, focusX: mark.x, focusY: mark.y,
+    coneDeg: 26, softnessDeg: 2, hung: true, version: 1, updatedAt: "2026-12-02T10:00:00.000Z",
     ...o,
   };
   const computed = computeFixtureGeometry(
