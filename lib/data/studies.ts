@@ -5,9 +5,11 @@ import "server-only";
 import { getDb } from "@/models";
 import { AppError, notFound } from "@/lib/errors";
 import { computeTracking } from "@/lib/cues/tracking";
-import type { LightSource } from "@/lib/validation/studies";
+import type { CoverageRequest, LightSource } from "@/lib/validation/studies";
+import { computeCoverage, stageBounds } from "@/lib/studies/coverage";
 import type { StudyFixture, Levels } from "@/lib/studies/lights";
 import { getCuesByProduction } from "./cue-reads";
+import { getAreaZonesByProduction } from "./area-zones";
 
 export type StudyProduction = {
   id: number;
@@ -93,4 +95,22 @@ export async function getStudyLevels({ productionId, source }: { productionId: n
 export async function getColourList({ productionId }: { productionId: number }): Promise<Map<string, number>> {
   const rows = await getDb().ColourTransmission.findAll({ where: { productionId }, attributes: ["name", "percent"], raw: true });
   return new Map(rows.map((r) => [r.name, r.percent]));
+}
+
+/** Reads everything a coverage study needs and computes it: the one path for the grid route and the exports. */
+export async function runCoverageStudy({ productionId, request }: { productionId: number; request: CoverageRequest }) {
+  const [production, fixtures, state, colours, zones] = await Promise.all([
+    getStudyProduction({ productionId }),
+    getStudyFixtures({ productionId }),
+    getStudyLevels({ productionId, source: request.source }),
+    getColourList({ productionId }),
+    getAreaZonesByProduction({ productionId }),
+  ]);
+  const result = computeCoverage(request, {
+    fixtures, levels: state.levels, colours,
+    areas: zones.map((z) => ({ id: z.id, name: z.name, polygon: z.polygon })),
+    headHeight: production.headHeight, faceHeight: production.faceHeight, deckHeight: production.showDeckHeight,
+    bounds: stageBounds(production),
+  });
+  return { ...result, stateLabel: state.label, displayUnits: production.displayUnits };
 }
