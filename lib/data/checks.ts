@@ -156,3 +156,11 @@ export async function requireChecksReport({ productionId }: { productionId: numb
   if (!report) throw notFound("Production");
   return report;
 }
+
+/** Each position's fixture ids in unit order: the default order of a data run along it. */
+export async function getUnitOrderByPosition({ productionId }: { productionId: number }): Promise<Record<number, number[]>> {
+  const rows = (await getDb().Fixture.findAll({ raw: true, where: { productionId }, attributes: ["id", "positionId"], order: [["positionId", "ASC"], ["unitSort", "ASC"], ["cell", "ASC"]] })) as unknown as { id: number; positionId: number }[];
+  const out: Record<number, number[]> = {};
+  for (const r of rows) (out[r.positionId] ??= []).push(r.id);
+  return out;
+}
