@@ -6,16 +6,22 @@ import { getTeamByProduction } from "@/lib/data/memberships";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import { formatLength } from "@/lib/optics";
 import { Card } from "@/components/ui/card";
+import { requireChecksReport } from "@/lib/data/checks";
+import { checksStatusLines } from "@/lib/checks/status";
 
 export const metadata: Metadata = { title: "Overview" };
 
 export default async function OverviewPage({ params }: { params: Promise<{ productionId: string }> }) {
   const { productionId } = await memberForPage((await params).productionId);
-  const [production, overview, team] = await Promise.all([
+  const [production, overview, team, checks] = await Promise.all([
     requireProduction(productionId),
     getProductionOverview({ productionId }),
     getTeamByProduction({ productionId }),
+    requireChecksReport({ productionId }),
   ]);
+  // What the checks found, or which of them have nothing to check yet: never a bare all-clear.
+  const checkLines = checksStatusLines(checks, { fixtures: checks.summary.fixtures, patched: checks.summary.fixtures - checks.dmx.unpatched.length });
+  const TONE = { error: "text-danger", warning: "text-caution", muted: "text-muted", ok: "text-success" } as const;
   const { counts } = overview;
   const len = (m: number) => formatLength(m, production.displayUnits);
   const stats: Array<[string, number | string, string]> = [
@@ -39,15 +45,16 @@ export default async function OverviewPage({ params }: { params: Promise<{ produ
         </dl>
       </Card>
       <Card title="Warnings">
-        {overview.warnings.length ? (
-          <ul className="list-disc pl-5 text-sm text-caution">
-            {overview.warnings.map((w) => (
-              <li key={w}>{w}</li>
-            ))}
-          </ul>
-        ) : (
-          <p className="text-sm text-muted">Nothing needs attention.</p>
-        )}
+        <ul className="list-disc pl-5 text-sm" data-testid="overview-warnings">
+          {checkLines.map((l) => (
+            <li key={l.text} className={TONE[l.tone]}>
+              {l.tone === "error" || l.tone === "warning" ? <Link href={`/productions/${productionId}/checks`} className="underline">{l.text}</Link> : l.text}
+            </li>
+          ))}
+          {overview.warnings.map((w) => (
+            <li key={w} className="text-caution">{w}</li>
+          ))}
+        </ul>
         <p className="mt-3 text-xs text-muted">Latest revision: none issued yet.</p>
       </Card>
       <Card title="Stage" className="lg:col-span-2">

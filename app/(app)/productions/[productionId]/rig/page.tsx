@@ -10,6 +10,8 @@ import { getAccessoriesByProduction } from "@/lib/data/accessories";
 import { RIG_COLUMNS } from "@/lib/rig/columns";
 import { isRigViewId } from "@/lib/rig/views";
 import { RigWorkspace } from "./_components/rig-workspace";
+import { requireChecksReport } from "@/lib/data/checks";
+import { ChecksBadge } from "@/components/checks/checks-badge";
 
 export const metadata: Metadata = { title: "Rig" };
 
@@ -18,16 +20,19 @@ const TYPE_FIELDS = TYPE_COLUMNS.flatMap((c) => c.fields as string[]);
 
 export default async function RigPage({ params, searchParams }: { params: Promise<{ productionId: string }>; searchParams: Promise<{ view?: string }> }) {
   const { productionId, member } = await memberForPage((await params).productionId);
-  const [production, fixtures, types, positions, accessories] = await Promise.all([
+  const [production, fixtures, types, positions, accessories, checks] = await Promise.all([
     requireProduction(productionId),
     getFixturesByProduction({ productionId }),
     getFixtureTypesByProduction({ productionId }),
     getPositionsByProduction({ productionId }),
     getAccessoriesByProduction({ productionId }),
+    requireChecksReport({ productionId }),
   ]);
   const editable = RIG_COLUMNS.filter((c) => c.importKey && c.id !== "unitNumber" && c.id !== "focusPoint" && canEditField(member, "fixture", c.attribute ?? c.id)).map((c) => c.id);
   const view = (await searchParams).view;
   return (
+    <>
+    <ChecksBadge productionId={productionId} summary={checks.summary} className="fixed right-4 bottom-4 z-30 shadow" />
     <RigWorkspace
       productionId={productionId}
       productionName={production.name}
@@ -39,5 +44,6 @@ export default async function RigPage({ params, searchParams }: { params: Promis
       positions={positions.map((p) => ({ id: p.id, name: p.name }))}
       rights={{ editable, typeFields: TYPE_FIELDS.filter((f) => canEditField(member, "fixtureType", f)), canImport: can(member, "rig.import"), canPlot: can(member, "plot.edit"), canElectrics: can(member, "rig.editElectrics") }}
     />
+    </>
   );
 }
