@@ -7,6 +7,7 @@
 import os from "node:os";
 import { performance } from "node:perf_hooks";
 import { buildCueSheet, computeTracking, type CueMoves, type SheetCue } from "../lib/cues";
+import { DEMO_PASSWORD, DEMO_USERS } from "../tests/support/demo";
 import { ensureDatabase, ensureServer, stopAll } from "./support/cues-env";
 import { seededRandom, summarise } from "./support/numbers";
 
@@ -81,10 +82,10 @@ async function database() {
 
 /** The summary route over HTTP, as the demo designer made a member of the throwaway production. */
 async function overHttp(base: string, productionId: number, db: ReturnType<typeof import("../models")["getDb"]>) {
-  const user = await db.User.findOne({ where: { email: "maren.oduya@quillmere.test" } });
+  const user = await db.User.findOne({ where: { email: DEMO_USERS.designer } });
   if (!user) throw new Error("the demo designer is not in this database (seed it, or use the throwaway one)");
   await db.Membership.create({ userId: user.id, productionId, role: "designer", isOwner: false } as never);
-  const signIn = await fetch(`${base}/api/auth/sign-in`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ email: "maren.oduya@quillmere.test", password: "lantern-demo-2026" }) });
+  const signIn = await fetch(`${base}/api/auth/sign-in`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ email: DEMO_USERS.designer, password: DEMO_PASSWORD }) });
   const cookie = signIn.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
   return time(async () => {
     const r = await fetch(`${base}/api/productions/${productionId}/cues/summary`, { headers: { cookie } });

@@ -2,6 +2,7 @@
 // or bridges, 10 booms), a few types, nine focus points; the demo designer is its owner.
 import { createRequire } from "node:module";
 import path from "node:path";
+import { DEMO_USERS } from "../tests/support/demo";
 
 const require = createRequire(path.resolve("package.json"));
 
@@ -10,7 +11,7 @@ export async function seedBenchProduction(databaseUrl: string, fixtures: number)
   const conn = await mariadb.createConnection(databaseUrl);
   try {
     const now = new Date();
-    const [{ id: userId }] = await conn.query("SELECT id FROM users WHERE email = ?", ["maren.oduya@quillmere.test"]);
+    const [{ id: userId }] = await conn.query("SELECT id FROM users WHERE email = ?", [DEMO_USERS.designer]);
     const prod = await conn.query(
       "INSERT INTO productions (name, venue, display_units, datum_name, head_height, back_wall_y, proscenium_width, proscenium_height, stage_width, stage_depth, apron_depth, voltage, derating, numbering_rule, version, created_at, updated_at) VALUES (?, 'Bench hall', 'metric', 'setting line', 1.7, 16, 16, 9, 26, 15, 2, 230, 0.8, 'from-stage-left', 1, ?, ?)",
       [`Bench ${fixtures} (${now.toISOString()})`, now, now],

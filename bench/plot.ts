@@ -7,6 +7,7 @@
 // first visit (renderer main-thread time by task). Ends with two compact tables to paste into docs/benchmarks.md.
 import os from "node:os";
 import { chromium, type Page } from "playwright-core";
+import { DEMO_PASSWORD, DEMO_USERS } from "../tests/support/demo";
 import { startServer } from "./plot-server";
 import { seedBenchProduction } from "./plot-seed";
 import { openPlot, traceFirstDraw, type FirstDrawParts } from "./plot-trace";
@@ -91,8 +92,8 @@ async function main() {
   try {
     const page = await browser.newPage({ viewport: { width: 1440, height: 900 }, baseURL: server.appUrl });
     await page.goto("/sign-in");
-    await page.getByLabel("E-mail").fill("maren.oduya@quillmere.test");
-    await page.getByLabel("Password").fill("lantern-demo-2026");
+    await page.getByLabel("E-mail").fill(DEMO_USERS.designer);
+    await page.getByLabel("Password").fill(DEMO_PASSWORD);
     await page.getByRole("button", { name: "Sign in" }).click();
     await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"));
     for (const n of SIZES) {
