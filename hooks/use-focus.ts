@@ -3,6 +3,7 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { apiFetch, ApiError } from "@/lib/http/api-client";
 import type { FixtureDto } from "@/lib/dto/fixture";
+import type { FixturePatch } from "@/lib/validation/fixture";
 import { productionKeys } from "./query-keys";
 
 /** The production's fixtures for the focus screens, seeded from the server's render. */
@@ -14,10 +15,8 @@ export function useFocusFixtures(productionId: number, initial: FixtureDto[]) {
   });
 }
 
-export type FocusPatch = {
-  focused?: boolean; focusNotes?: string | null; notes?: string | null; goboRotationDeg?: number | null;
-  barnDoorTop?: string | null; barnDoorBottom?: string | null; barnDoorLeft?: string | null; barnDoorRight?: string | null;
-};
+/** What the focus call edits: the API's own patch types for these fields. */
+export type FocusPatch = Pick<FixturePatch, "focused" | "focusNotes" | "notes" | "goboRotationDeg" | "barnDoorTop" | "barnDoorBottom" | "barnDoorLeft" | "barnDoorRight">;
 
 /**
  * Marks a fixture focused or edits its notes. The cache takes the server's row on success; a 409 (someone
