@@ -3,8 +3,6 @@ import { deletePerformerMark, updatePerformerMark } from "@/lib/data/performer-m
 import { updatePerformerMarkSchema } from "@/lib/validation/studies";
 
 export const { PATCH, DELETE } = itemRoutes({
-  param: "performerMarkId",
-  what: "Performer mark",
   key: "performerMark",
   update: { permission: "studies.run", schema: updatePerformerMarkSchema, run: updatePerformerMark },
   remove: { permission: "studies.run", run: deletePerformerMark },

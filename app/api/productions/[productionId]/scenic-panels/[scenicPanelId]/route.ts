@@ -3,7 +3,6 @@ import { deleteScenicPanel, updateScenicPanel } from "@/lib/data/scenic-panels";
 import { updateScenicPanelSchema } from "@/lib/validation/studies";
 
 export const { PATCH, DELETE } = itemRoutes({
-  param: "scenicPanelId",
   what: "Scenery panel",
   key: "scenicPanel",
   update: { permission: "studies.run", schema: updateScenicPanelSchema, run: updateScenicPanel },
