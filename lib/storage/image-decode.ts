@@ -19,12 +19,9 @@ const refuse = (code: "unsupported" | "bad_request", message: string, field: str
 
 /** The picture's type and size from its header, or an AppError naming what is wrong ("photo", "image"). */
 export async function readImageHeader(bytes: Uint8Array, noun: string): Promise<{ type: ImageType; width: number; height: number }> {
-  let meta: sharp.Metadata;
-  try {
-    meta = await decoder(bytes).metadata();
-  } catch (err) {
+  const meta = await decoder(bytes).metadata().catch((err: unknown) => {
     throw refusal(err, noun);
-  }
+  });
   const type = meta.format ? TYPES[meta.format] : undefined;
   if (!type || !meta.width || !meta.height) {
     throw refuse("unsupported", `That file is not a PNG, JPEG or WebP ${noun} (checked by its content, not its name). Nothing was saved.`, "not a PNG, JPEG or WebP image");
