@@ -2,7 +2,7 @@ import "server-only";
 import { AppError, forbidden } from "@/lib/errors";
 import { parseId } from "@/lib/http/respond";
 import { getCurrentUser } from "./session";
-import { can, forbiddenFields, type Entity, type Member, type Permission } from "./policy";
+import { can, canEditAnyField, forbiddenFields, type Entity, type Member, type Permission } from "./policy";
 import { getMembership } from "@/lib/data/memberships";
 
 export type CurrentUser = { id: number; name: string; email: string };
@@ -33,6 +33,24 @@ export async function requireMember(
 }
 
 /**
+ * A member who may write no field of the entity at all is refused (403) before the body is checked
+ * against the schema, naming the fields the body sent (its `version` aside) when it sent any.
+ */
+export function requireSomeField(member: Member, entity: Entity, body?: unknown): void {
+  if (canEditAnyField(member, entity)) return;
+  const sent =
+    body && typeof body === "object" && !Array.isArray(body) ? Object.keys(body).filter((k) => k !== "version") : [];
+  if (sent.length) throw fieldsRefused(sent);
+  throw forbidden();
+}
+
+function fieldsRefused(fields: string[], message?: string): AppError {
+  return new AppError("forbidden", message ?? `Your role cannot change: ${fields.join(", ")}.`, {
+    fieldErrors: Object.fromEntries(fields.map((f) => [f, ["not editable by your role"]])),
+  });
+}
+
+/**
  * Field-level rights: refuses (403) a write that touches any field this member's role may not write,
  * naming each such field in `fieldErrors`. `fields` is the patch itself (its `version` is the lock,
  * not a field) or the list of field names an edit will write; `message` replaces the list of names
@@ -46,8 +64,5 @@ export function requireFields(
 ): void {
   const names = Array.isArray(fields) ? [...fields] : Object.keys(fields).filter((k) => k !== "version");
   const denied = forbiddenFields(member, entity, names);
-  if (!denied.length) return;
-  throw new AppError("forbidden", message ?? `Your role cannot change: ${denied.join(", ")}.`, {
-    fieldErrors: Object.fromEntries(denied.map((f) => [f, ["not editable by your role"]])),
-  });
+  if (denied.length) throw fieldsRefused(denied, message);
 }

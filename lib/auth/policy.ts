@@ -79,6 +79,16 @@ export function forbiddenFields(member: Member | null | undefined, entity: Entit
   });
 }
 
+/** Whether this member may write at least one field of the entity (a member who may write none is refused before the body is read). */
+export function canEditAnyField(member: Member | null | undefined, entity: Entity): boolean {
+  const rights: Record<Entity, Permission[]> = {
+    fixture: [...FIXTURE_FIELD_RIGHTS.values()],
+    fixtureType: ["plot.edit", ...Object.values(FIXTURE_TYPE_FIELDS)],
+    cue: ["cues.edit", ...Object.values(CUE_FIELDS)],
+  };
+  return rights[entity].some((p) => can(member, p));
+}
+
 export function canEditField(member: Member | null | undefined, entity: Entity, field: string): boolean {
   return forbiddenFields(member, entity, [field]).length === 0;
 }

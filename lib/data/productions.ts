@@ -8,7 +8,7 @@ import { versionedUpdate } from "./versioned";
 import { recordChange } from "./changes";
 
 const PRODUCTION_KEYS = [
-  "id", "name", "venue", "displayUnits", "datumName", "headHeight", "backWallY", "prosceniumWidth", "prosceniumHeight", "stageWidth", "stageDepth",
+  "id", "name", "venue", "displayUnits", "datumName", "headHeight", "faceHeight", "showDeckHeight", "backWallY", "prosceniumWidth", "prosceniumHeight", "stageWidth", "stageDepth",
   "apronDepth", "voltage", "derating", "numberingRule", "version", "createdAt", "updatedAt",
 ] as const;
 

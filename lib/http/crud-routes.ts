@@ -1,9 +1,9 @@
 import "server-only";
 import type { z } from "zod";
-import { requireFields, requireMember } from "@/lib/auth/guards";
+import { requireFields, requireMember, requireSomeField } from "@/lib/auth/guards";
 import type { Entity, Permission } from "@/lib/auth/policy";
 import { notFound } from "@/lib/errors";
-import { parseId, readJson, readQuery, route } from "./respond";
+import { parseBody, parseId, readJson, readJsonValue, readQuery, route } from "./respond";
 
 /**
  * Route handlers for a production-owned entity from one declaration, the HTTP side of
@@ -98,7 +98,9 @@ export function itemRoutes<
   if (update) {
     handlers.PATCH = route(async (req, ctx: Ctx) => {
       const { user, member, target: t } = await target(ctx, update.permission ?? "production.view");
-      const patch = await readJson(req, update.schema);
+      const body = await readJsonValue(req);
+      if (update.fields) requireSomeField(member, update.fields, body);
+      const patch = parseBody(update.schema, body);
       if (update.fields) requireFields(member, update.fields, patch as object);
       return { [spec.key]: await update.run({ ...t, userId: user.id, patch }) };
     });

@@ -15,7 +15,10 @@ export function route<Ctx>(fn: (req: Request, ctx: Ctx) => Promise<unknown>) {
     } catch (err) {
       const appError = toAppError(err);
       const retry = appError.details.retryAfterSeconds;
-      return NextResponse.json(appError.toJSON(), { status: appError.status, headers: retry ? { "Retry-After": String(retry) } : undefined });
+      return NextResponse.json(appError.toJSON(), {
+        status: appError.status,
+        headers: retry ? { "Retry-After": String(retry) } : undefined,
+      });
     }
   };
 }
@@ -23,26 +26,39 @@ export function route<Ctx>(fn: (req: Request, ctx: Ctx) => Promise<unknown>) {
 /** The largest JSON body any route reads: the biggest real one (a bulk edit of a large rig) is well under. */
 export const MAX_JSON_BYTES = 1024 * 1024;
 
-/**
- * Reads and validates a JSON body; a body that is not JSON is a 400 that says so. The bytes are counted
- * as they arrive, so an oversized body (chunked, or lying about its length) is refused at the cap.
- */
+/** Reads and validates a JSON body; a body that is not JSON is a 400 that says so. */
 export async function readJson<S extends z.ZodType>(req: Request, schema: S): Promise<z.infer<S>> {
-  let body: unknown;
+  return parseBody(schema, await readJsonValue(req));
+}
+
+/**
+ * The JSON body, not yet validated (for checks that must come before the schema's, such as field
+ * rights). The bytes are counted as they arrive, so an oversized body (chunked, or lying about its
+ * length) is refused at the cap.
+ */
+export async function readJsonValue(req: Request): Promise<unknown> {
   let bytes: Uint8Array;
   try {
     bytes = await readBoundedBody(req, MAX_JSON_BYTES);
   } catch (err) {
-    if (err instanceof BodyTooLarge) throw new AppError("too_large", `The request body is over ${MAX_JSON_BYTES / 1024} KB, more than any change needs.`);
+    if (err instanceof BodyTooLarge)
+      throw new AppError(
+        "too_large",
+        `The request body is over ${MAX_JSON_BYTES / 1024} KB, more than any change needs.`,
+      );
     throw err;
   }
   try {
-    body = JSON.parse(new TextDecoder().decode(bytes));
+    return JSON.parse(new TextDecoder().decode(bytes));
   } catch {
     throw new AppError("bad_request", "The request body is not valid JSON.", {
       fieldErrors: { "(body)": ["not valid JSON"] },
     });
   }
+}
+
+/** Validates a body read with readJsonValue: a 400 naming each field. */
+export function parseBody<S extends z.ZodType>(schema: S, body: unknown): z.infer<S> {
   const parsed = schema.safeParse(body);
   if (!parsed.success) throw fromZodError(parsed.error);
   return parsed.data;

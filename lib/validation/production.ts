@@ -10,6 +10,8 @@ export const productionSettingsSchema = z.object({
   displayUnits: z.enum(DISPLAY_UNITS, { error: "Display units must be metric or imperial" }),
   datumName: z.string().trim().min(1, { error: "Name the datum line (e.g. setting line)" }).max(60),
   headHeight: metres(1, 2.5, "Head height"),
+  faceHeight: metres(0.5, 2.5, "Face height"),
+  showDeckHeight: metres(0, 10, "Show-deck height"),
   backWallY: metres(0.5, 100, "Back-wall depth"),
   prosceniumWidth: metres(1, 100, "Proscenium width"),
   prosceniumHeight: metres(1, 50, "Proscenium height"),

@@ -260,12 +260,10 @@ describe("roles on every entity route (DESIGN.md, Roles)", () => {
     const cases: Array<[keyof typeof DEMO_USERS, string, Record<string, unknown>, string[]]> = [
       // colour and channel: designer only; circuit: designer and electrician.
       ["electrician", "fixtures", { colour: "full CTB", channel: 901, circuit: "B2" }, ["colour", "channel"]],
-      ["stageManager", "fixtures", { circuit: "B2" }, ["circuit"]],
       // a type's name is the designer's; its wattage the electrician's too.
       ["electrician", "fixture-types", { name: "Renamed", wattage: 575 }, ["name"]],
       // the stage manager writes page and call note, not label or levels.
       ["stageManager", "cues", { label: "nope", page: "4" }, ["label"]],
-      ["viewer", "cues", { page: "4", callNote: "standby" }, ["page", "callNote"]],
     ];
     for (const [role, segment, patch, refused] of cases) {
       const x = sample(segment);
@@ -284,6 +282,37 @@ describe("roles on every entity route (DESIGN.md, Roles)", () => {
     });
     expect(bulk.status).toBe(403);
     expect(bulk.json.error.fieldErrors).toEqual({ colour: ["not editable by your role"] });
+  });
+
+  it("refuses a role that may write no field of the entity before reading the body", async () => {
+    // DESIGN.md Roles: the stage manager edits no fixture or type field, the electrician no cue field,
+    // the viewer nothing. A body no schema accepts still gets 403 (naming what it tried to write), not a
+    // 400 that describes the schema.
+    const cases: Array<[keyof typeof DEMO_USERS, string]> = [
+      ["stageManager", "fixtures"],
+      ["stageManager", "fixture-types"],
+      ["electrician", "cues"],
+      ["viewer", "cues"],
+      ["viewer", "fixtures"],
+    ];
+    for (const [role, segment] of cases) {
+      const x = sample(segment);
+      const named = await as[role].patch(itemPath(pid, x, x.row.id), {
+        version: "not-a-version",
+        page: 4,
+        circuit: ["B2"],
+      });
+      expect(named.status, `${role} ${segment}`).toBe(403);
+      expect(named.json.error.fieldErrors, `${role} ${segment}`).toEqual({
+        page: ["not editable by your role"],
+        circuit: ["not editable by your role"],
+      });
+      const bare = await as[role].patch(itemPath(pid, x, x.row.id), { version: "not-a-version" });
+      expect(bare.status, `${role} ${segment}`).toBe(403);
+      expect(bare.json.error.fieldErrors, `${role} ${segment}`).toBeUndefined();
+    }
+    const bulk = await as.stageManager.post(`/api/productions/${pid}/fixtures/bulk`, { items: "none" });
+    expect(bulk.status).toBe(403);
   });
 
   it("refuses deleting a cue or a type to roles without the right", async () => {

@@ -1,7 +1,7 @@
 // Field-level 403s (lib/auth/guards.ts requireFields) against the role table of shared/DESIGN.md,
 // "Roles", written out here rather than read from lib/auth/policy.ts.
 import { describe, expect, it } from "vitest";
-import { requireFields } from "@/lib/auth/guards";
+import { requireFields, requireSomeField } from "@/lib/auth/guards";
 import { AppError } from "@/lib/errors";
 import type { Member } from "@/lib/auth/policy";
 
@@ -83,5 +83,39 @@ describe("requireFields", () => {
     );
     expect(err?.message).toBe("Your role cannot change a focus photo.");
     expect(err?.details.fieldErrors).toEqual({ focusPhotoUploadId: ["not editable by your role"] });
+  });
+});
+
+describe("requireSomeField", () => {
+  // DESIGN.md Roles, by entity: who has at least one "edit" cell.
+  const cases: Array<[Member, "fixture" | "fixtureType" | "cue", boolean]> = [
+    [designer, "fixture", true],
+    [designer, "fixtureType", true],
+    [designer, "cue", true],
+    [electrician, "fixture", true], // circuit, dimmer, address …
+    [electrician, "fixtureType", true], // wattage and weight
+    [electrician, "cue", false],
+    [stageManager, "fixture", false],
+    [stageManager, "fixtureType", false],
+    [stageManager, "cue", true], // page and call note
+    [viewer, "fixture", false],
+    [viewer, "fixtureType", false],
+    [viewer, "cue", false],
+  ];
+  it.each(cases)("%o on %s: %s", (member, entity, allowed) => {
+    const err = refusal(() => requireSomeField(member, entity));
+    expect(err === null).toBe(allowed);
+    if (err) expect(err.status).toBe(403);
+  });
+
+  it("names what the body tried to write, before the body is checked", () => {
+    // DESIGN.md Roles: the viewer edits nothing.
+    const err = refusal(() => requireSomeField(viewer, "cue", { version: "x", page: 4, levels: "loud" }));
+    expect(err?.details.fieldErrors).toEqual({
+      page: ["not editable by your role"],
+      levels: ["not editable by your role"],
+    });
+    expect(refusal(() => requireSomeField(viewer, "cue", { version: 3 }))?.details.fieldErrors).toBeUndefined();
+    expect(refusal(() => requireSomeField(viewer, "cue", "not an object"))?.status).toBe(403);
   });
 });

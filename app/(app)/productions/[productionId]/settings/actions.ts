@@ -16,6 +16,8 @@ const LENGTH_FIELDS = [
   "stageWidth",
   "stageDepth",
   "apronDepth",
+  "faceHeight",
+  "showDeckHeight",
 ] as const;
 const text = z.string().optional();
 
@@ -35,6 +37,8 @@ const settingsFormSchema = z
     numberingRule: text,
     version: plainCountText("version is required (the version you last read)"),
     headHeight: text,
+    faceHeight: text,
+    showDeckHeight: text,
     backWallY: text,
     prosceniumWidth: text,
     prosceniumHeight: text,

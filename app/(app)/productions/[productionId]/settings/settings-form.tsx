@@ -18,6 +18,8 @@ const LENGTHS: Array<[keyof ProductionDto, string, string]> = [
   ["apronDepth", "Apron depth", "Downstage of the datum line"],
   ["backWallY", "Back-wall depth", "Datum line to the back wall"],
   ["headHeight", "Head height", "For focusing to head height (common practice 1.7–1.8 m)"],
+  ["faceHeight", "Face height", "Where the coverage study measures light on faces, above the deck"],
+  ["showDeckHeight", "Show-deck height", "A show deck's top above the stage floor; studies measure from it (0 = none)"],
 ];
 
 type SettingsState = Awaited<ReturnType<typeof updateSettingsAction>>;
