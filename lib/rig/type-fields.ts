@@ -2,16 +2,19 @@
 // figure in words a user types ("15–30" for a zoom, "dimmer 1, extended 4" for DMX modes), and a typed
 // cell becomes a patch checked by the API's own schema, so the table cannot send what the API refuses.
 import { fixtureTypeFieldsSchema } from "@/lib/validation/rig";
-import { formatLength, parseLength } from "@/lib/optics";
+import { FIXTURE_FAMILIES, formatLength, fromDatasheet, parseLength, type Family } from "@/lib/optics";
+import { FLAT_TENTH_ACROSS_BAND } from "@/lib/optics/profile";
 import type { FixtureTypeDto } from "@/lib/dto/fixture-type";
 
-export type TypeColumn = { key: string; header: string; fields: Array<keyof FixtureTypeDto>; kind: "text" | "cone" | "number" | "optionalNumber" | "modes" | "length" | "optionalText" | "readOnly" };
+export type TypeColumn = { key: string; header: string; fields: Array<keyof FixtureTypeDto>; kind: "text" | "cone" | "number" | "optionalNumber" | "datasheet" | "modes" | "length" | "optionalText" | "readOnly" };
 
 export const TYPE_COLUMNS: TypeColumn[] = [
   { key: "name", header: "Name", fields: ["name"], kind: "text" },
   { key: "family", header: "Family", fields: ["family"], kind: "readOnly" },
   { key: "cone", header: "Cone (°)", fields: ["coneMinDeg", "coneMaxDeg"], kind: "cone" },
   { key: "defaultSoftnessDeg", header: "Softness (°)", fields: ["defaultSoftnessDeg"], kind: "number" },
+  // A datasheet's beam (50 %) and field (10 %) angles, mapped onto the cone and softness (docs/optics.md).
+  { key: "datasheet", header: "Beam / field (°)", fields: ["coneMinDeg", "coneMaxDeg", "defaultSoftnessDeg"], kind: "datasheet" },
   // A zoom brightens as it narrows: its peak at each end of the range (one figure for a fixed-angle type).
   { key: "peakCandela", header: "Peak at widest (cd)", fields: ["peakCandela"], kind: "number" },
   { key: "peakCandelaNarrow", header: "Peak at narrowest (cd)", fields: ["peakCandelaNarrow"], kind: "optionalNumber" },
@@ -32,6 +35,13 @@ export function typeCellText(t: FixtureTypeDto, column: TypeColumn, units: "metr
       return t.dmxModes.map((m) => `${m.name} ${m.footprint}`).join(", ");
     case "length":
       return formatLength(t.lensDropM, units);
+    case "datasheet": {
+      // The model's own 50 % and 10 % full angles at the widest cone, as a datasheet would print them.
+      const s = Math.min(t.defaultSoftnessDeg, t.coneMaxDeg / 2);
+      const flat = familyOf(t.family) === "flat";
+      const field = flat ? t.coneMaxDeg - 2 * (1 - FLAT_TENTH_ACROSS_BAND) * s : t.coneMaxDeg;
+      return `${round(t.coneMaxDeg - s, 1)} / ${round(field, 1)}`;
+    }
     default: {
       const v = t[column.fields[0]];
       return v === null || v === undefined ? "" : String(v);
@@ -41,13 +51,30 @@ export function typeCellText(t: FixtureTypeDto, column: TypeColumn, units: "metr
 
 export type CellParse = { ok: true; patch: Record<string, unknown> } | { ok: false; message: string };
 
+const round = (v: number, places: number) => Math.round(v * 10 ** places) / 10 ** places;
+
+function familyOf(family: string): "flat" | "peaked" {
+  return FIXTURE_FAMILIES.find((f) => f.value === family)?.shape ?? "flat";
+}
+
+/** "22 / 30" → cone and softness for the type's family; a zoom's figures set its widest end. */
+function datasheetPatch(text: string, header: string, type: Pick<FixtureTypeDto, "family" | "coneMinDeg" | "coneMaxDeg"> | undefined): CellParse {
+  const m = /^\s*(\d+(?:[.,]\d+)?)\s*°?\s*[/,]\s*(\d+(?:[.,]\d+)?)\s*°?\s*$/.exec(text);
+  if (!m || !type) return { ok: false, message: `${header}: write the beam and field angles, e.g. "22 / 30"` };
+  const known = FIXTURE_FAMILIES.some((f) => f.value === type.family);
+  const d = fromDatasheet({ beamDeg: Number(m[1].replace(",", ".")), fieldDeg: Number(m[2].replace(",", ".")), family: (known ? type.family : "profile") as Family });
+  const cone = round(d.coneDeg, 2);
+  const fixed = type.coneMinDeg === type.coneMaxDeg || cone < type.coneMinDeg;
+  return { ok: true, patch: { ...(fixed ? { coneMinDeg: cone } : {}), coneMaxDeg: cone, defaultSoftnessDeg: round(d.softnessDeg, 2) } };
+}
+
 function number(text: string, header: string): number | string {
   const n = Number(text.trim().replace(",", "."));
   return text.trim() === "" || Number.isNaN(n) ? `${header}: "${text}" is not a number` : n;
 }
 
 /** Reads a typed cell into a patch, checked by the fixture-type schema; the message names the column. */
-export function parseTypeCell(column: TypeColumn, text: string, units: "metric" | "imperial"): CellParse {
+export function parseTypeCell(column: TypeColumn, text: string, units: "metric" | "imperial", type?: Pick<FixtureTypeDto, "family" | "coneMinDeg" | "coneMaxDeg">): CellParse {
   const header = column.header;
   let patch: Record<string, unknown>;
   try {
@@ -74,6 +101,12 @@ export function parseTypeCell(column: TypeColumn, text: string, units: "metric" 
         const n = number(text, header);
         if (typeof n === "string") return { ok: false, message: n };
         patch = { [column.fields[0]]: n };
+        break;
+      }
+      case "datasheet": {
+        const r = datasheetPatch(text, header, type);
+        if (!r.ok) return r;
+        patch = r.patch;
         break;
       }
       case "optionalNumber": {

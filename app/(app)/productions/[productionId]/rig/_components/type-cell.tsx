@@ -29,7 +29,7 @@ export function TypeCell({ productionId, type, column, units, editable }: { prod
   async function commit() {
     if (closing.current) return;
     if (text === shown) return setEditing(false);
-    const parsed = parseTypeCell(column, text, units);
+    const parsed = parseTypeCell(column, text, units, type);
     if (!parsed.ok) return setMessage({ tone: "error", text: parsed.message });
     closing.current = true;
     setEditing(false);
