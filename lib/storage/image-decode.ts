@@ -34,7 +34,10 @@ export function refusal(err: unknown, noun: string): AppError {
   if (/pixel limit/i.test((err as Error).message)) {
     return refuse("bad_request", `The ${noun} has more pixels than Throwline accepts (over ${MAX_INPUT_PIXELS / 1e6} megapixels). Make it smaller and try again. Nothing was saved.`, "too many pixels");
   }
-  if (/unsupported image format/i.test((err as Error).message)) {
+  // libvips names the loader it tried ("svgload_buffer: bad dimensions"): another format's loader means the
+  // file is not one of ours, whatever state it is in.
+  const loader = /\b([a-z]+)load/i.exec((err as Error).message)?.[1]?.toLowerCase();
+  if (/unsupported image format/i.test((err as Error).message) || (loader && !["png", "jpeg", "webp"].includes(loader))) {
     return refuse("unsupported", `That file is not a PNG, JPEG or WebP ${noun} (checked by its content, not its name). Nothing was saved.`, "not a PNG, JPEG or WebP image");
   }
   return refuse("bad_request", `The ${noun} could not be read; the file may be damaged or cut short. Save or export it again. Nothing was saved.`, "could not be read as an image");

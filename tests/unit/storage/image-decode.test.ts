@@ -21,7 +21,8 @@ describe("reading an uploaded picture's header", () => {
   });
 
   it("refuses what is not a PNG, JPEG or WebP (415), naming the kind of picture", async () => {
-    for (const bytes of [new TextEncoder().encode("<svg xmlns='http://www.w3.org/2000/svg' width='9' height='9'/>"), new TextEncoder().encode("just text"), await sharp(makePng(8, 8)).gif().toBuffer()]) {
+    const svgs = ["<svg xmlns='http://www.w3.org/2000/svg' width='9' height='9'/>", "<svg xmlns='http://www.w3.org/2000/svg'></svg>"];
+    for (const bytes of [...svgs.map((t) => new TextEncoder().encode(t)), new TextEncoder().encode("just text"), await sharp(makePng(8, 8)).gif().toBuffer()]) {
       const err = await refusedWith(readImageHeader(bytes, "photo"));
       expect(err.status).toBe(415);
       expect(err.message).toMatch(/not a PNG, JPEG or WebP photo/);
@@ -48,6 +49,12 @@ describe("re-encoding an underlay", () => {
     // EXIF orientation 6: the stored pixels are rotated 90° clockwise to display (CIPA DC-008)
     const tagged = await sharp(makePng(60, 20)).jpeg().withMetadata({ orientation: 6 }).toBuffer();
     expect(await reencodeUnderlay(tagged)).toMatchObject({ type: "image/jpeg", width: 20, height: 60 });
+  });
+
+  it("calls a PNG whose header is cut short damaged, not some other format (400)", async () => {
+    const err = await refusedWith(readImageHeader(makePng(50, 50).subarray(0, 40), "photo"));
+    expect(err.status).toBe(400);
+    expect(err.message).toMatch(/photo could not be read/);
   });
 
   it("refuses a PNG cut short: the header reads, the pixels do not (400)", async () => {
