@@ -46,20 +46,21 @@ describe("reading", () => {
     const r = await sm.get(`${base}/summary`);
     expect(r.status).toBe(200);
     const cue = (n: number) => r.json.rows.find((row: { number: number }) => row.number === n);
-    // Cue 0.5 "House to half" (i = 0): up 5 s, down 7 s (i % 4 = 0), no delay. Its moves, from the seeder's
-    // formulas with 116 channels: channel 1 + (23k mod 116) at level ((29k) mod 11)·10 for k = 0…5:
+    // Cue 0.5 "House to half" (i = 0, first in number order too): up 5 s, down 7 s (i % 4 = 0), no delay. Its
+    // moves, from the seeder's formulas with 116 channels: channel 1 + (23k mod 116) at level ((29k) mod 11)·10 for k = 0…5:
     // ch 1 @ 0, 24 @ 70, 47 @ 30, 70 @ 100, 93 @ 60, 116 @ 20. From dark that is 5 channels up and none down,
     // so only the up fade runs: 0 + 5 = 5 s (the 7 s down fade moves nothing). Common practice, no source.
     expect(cue(0.5)).toMatchObject({ label: "House to half", upTime: 5, downTime: 7, delay: 0, up: 5, down: 0, runningTime: 5 });
     expect(cue(0.5).summary).toMatch(/^5 up · from dark · brighter: /);
     const list = (await sm.get(base)).json.cues;
     expect(list.find((c: { number: number }) => c.number === 0.5).levels).toEqual({ 1: 0, 24: 70, 47: 30, 70: 100, 93: 60, 116: 20 });
-    // Cue 1 "Dawn on the harbour" (i = 2), next in running order: up 8 s, no down time. Moves for k = 0…7:
-    // channel 1 + ((34 + 23k) mod 116) at ((26 + 29k) mod 11)·10 → 35 @ 40, 58 @ 0, 81 @ 70, 104 @ 30, 12 @ 100;
-    // k = 5…7 give 35, 58, 81 again and the seeder keeps the first. Against cue 0.5's look, 35, 81, 104 and 12
-    // go up and 58 stays out: 4 up, 0 down, running 0 + 8 = 8 s.
-    expect(cue(1)).toMatchObject({ label: "Dawn on the harbour", upTime: 8, downTime: null, up: 4, down: 0, runningTime: 8, callNote: "Standby on the foghorn" });
-    expect(cue(1).summary).toMatch(/^4 up · brighter: /);
+    // Cue 1 "Dawn on the harbour" (inserted as i = 2): up 8 s, no down time. The seeder gives levels by the
+    // cue's place in number order, j = 1 here (0.5, 1, 1.5, …), for k = 0…6: channel 1 + ((17j + 23k) mod 116)
+    // at ((13j + 29k) mod 11)·10 → 18 @ 20, 41 @ 90, 64 @ 50, 87 @ 10, 110 @ 80, 17 @ 40, 40 @ 0. None of these
+    // is lit in cue 0.5, so six go up and 40 stays out: 6 up, 0 down, running 0 + 8 = 8 s.
+    expect(cue(1)).toMatchObject({ label: "Dawn on the harbour", upTime: 8, downTime: null, up: 6, down: 0, runningTime: 8, callNote: "Standby on the foghorn" });
+    expect(cue(1).summary).toMatch(/^6 up · brighter: /);
+    expect(list.find((c: { number: number }) => c.number === 1).levels).toEqual({ 17: 40, 18: 20, 40: 0, 41: 90, 64: 50, 87: 10, 110: 80 });
     // Cue 7 "Lightning" (i = 8) follows on after 2 s, within the 5 s standby window (Throwline's choice), so
     // it and cue 8 are called as one standby; so are cue 16 (i = 17, follow 2 s) and cue 17.
     const groupOf = (n: number) => r.json.standbys.find((g: { cueIds: number[] }) => g.cueIds.includes(cue(n).id));
