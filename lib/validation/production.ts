@@ -18,8 +18,6 @@ export const productionSettingsSchema = z.object({
   stageWidth: metres(1, 200, "Stage width"),
   stageDepth: metres(1, 100, "Stage depth"),
   apronDepth: metres(0, 30, "Apron depth"),
-  voltage: z.number({ error: "Voltage must be a number" }).int().min(90).max(480),
-  derating: z.number({ error: "Continuous-load factor must be a number" }).min(0.5).max(1).nullable(),
   numberingRule: z.enum(NUMBERING_RULES),
 });
 export type ProductionSettings = z.infer<typeof productionSettingsSchema>;

@@ -32,8 +32,6 @@ const settingsFormSchema = z
     venue: text,
     displayUnits: z.enum(DISPLAY_UNITS).catch("metric"),
     datumName: text,
-    voltage: text,
-    derating: text,
     numberingRule: text,
     version: plainCountText("version is required (the version you last read)"),
     headHeight: text,
@@ -63,8 +61,6 @@ const settingsFormSchema = z
       displayUnits: form.displayUnits,
       datumName: form.datumName,
       ...lengths,
-      voltage: Number(form.voltage),
-      derating: Number(form.derating),
       numberingRule: form.numberingRule,
     });
     for (const issue of checked.error?.issues ?? []) {

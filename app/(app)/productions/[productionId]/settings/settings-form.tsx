@@ -65,8 +65,10 @@ export function SettingsForm({ production: initial, canEdit }: { production: Pro
         </Card>
         <Card title="Power and numbering">
           <div className="grid gap-3 sm:grid-cols-3">
-            <TextField label="Supply voltage (V)" name="voltage" inputMode="numeric" defaultValue={typed("voltage", production.voltage)} error={err("voltage")} />
-            <TextField label="Continuous-load factor" name="derating" inputMode="decimal" defaultValue={typed("derating", production.derating)} hint="0.8 = load circuits to 80 % (NEC practice); check your local code" error={err("derating")} />
+            <p className="text-sm text-muted sm:col-span-2" data-testid="settings-electrical">
+              The electrical code, supply system and voltage, and the continuous-load factor are chosen with the{" "}
+              <a className="underline" href={`/productions/${production.id}/checks`}>checks</a>: the code sets the defaults, never the display units.
+            </p>
             <label className="flex flex-col gap-1 text-sm">
               <span className="font-medium">Unit numbers on overhead positions run</span>
               <select name="numberingRule" defaultValue={production.numberingRule} className="min-h-10 rounded-md border border-line bg-surface px-3">
