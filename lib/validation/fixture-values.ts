@@ -25,7 +25,9 @@ export const universe = () => z.number({ error: "Universe must be a whole number
 export const dmxAddress = () =>
   z.number({ error: "Address must be a whole number" }).int().min(1, { error: "DMX address must be 1–512" }).max(512, { error: "DMX address must be 1–512" }).nullable();
 
-export const footprint = () => z.number().int().min(1).max(512).nullable();
+// ANSI E1.11: a unit takes at least one slot and at most a whole universe.
+export const footprint = () =>
+  z.number({ error: "Footprint must be a whole number of DMX slots" }).int({ error: "Footprint must be a whole number of DMX slots" }).min(1, { error: "Footprint must be 1–512 slots" }).max(512, { error: "Footprint must be 1–512 slots" }).nullable();
 
 export const lensHeight = () =>
   z.number({ error: "Lens height must be a number of metres" }).min(0, { error: "Lens height cannot be below the deck" }).max(60).nullable();

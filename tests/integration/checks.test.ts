@@ -115,7 +115,12 @@ describe("DMX", () => {
     for (const address of [0, 513]) {
       const r = await s.post(`${p}/fixtures`, { fixtures: [unit(pos, led, "6", { universe: 1, address })] });
       expect(r.status, `address ${address}`).toBe(400); // ANSI E1.11: 1–512
+      expect(JSON.stringify(r.json.error)).toMatch(/1–512/);
     }
+    const noSlots = await s.post(`${p}/fixtures`, { fixtures: [unit(pos, profile, "7", { universe: 1, address: 100, footprint: 0 })] });
+    expect(noSlots.status).toBe(400);
+    expect(JSON.stringify(noSlots.json.error)).toMatch(/Footprint must be 1–512 slots/);
+    expect((await s.get(`${p}/fixtures`)).json.fixtures.map((f: any) => f.unitNumber).sort()).toEqual(["1", "2", "3", "4"]); // nothing half-written
   });
 
   it("data lines: units in order, the 32-device limit, only this production's fixtures", async () => {
