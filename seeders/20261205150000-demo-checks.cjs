@@ -38,8 +38,11 @@ async function up(qi) {
 
 /** @param {import('sequelize').QueryInterface} qi */
 async function down(qi) {
-  await qi.bulkDelete("data_lines", {});
-  await qi.bulkDelete("circuits", {});
+  const rows = await qi.sequelize.query("SELECT id FROM productions WHERE name = 'Salt and Lantern'", { type: "SELECT" });
+  const ids = rows.map((r) => r.id);
+  if (!ids.length) return;
+  await qi.bulkDelete("data_lines", { production_id: ids });
+  await qi.bulkDelete("circuits", { production_id: ids });
 }
 
 module.exports = { up, down };
