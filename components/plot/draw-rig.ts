@@ -95,7 +95,10 @@ function unitPath(shape: SymbolShape): Path2D {
   let p = PATHS.get(shape);
   if (!p) {
     p = new Path2D();
-    symbolOutline(shape).forEach(([x, y], i) => (i === 0 ? p!.moveTo(x, y) : p!.lineTo(x, y)));
+    for (const [i, [x, y]] of symbolOutline(shape).entries()) {
+      if (i === 0) p.moveTo(x, y);
+      else p.lineTo(x, y);
+    }
     p.closePath();
     PATHS.set(shape, p);
   }

@@ -98,7 +98,9 @@ export function pickTarget(scene: PickScene, at: Point, o: { shift: boolean }): 
 function pickVertex(scene: PickScene, toScreen: (q: Point) => Point, at: Point): VertexTarget | null {
   const candidates: VertexTarget[] = [];
   if (scene.layers.areas) {
-    for (const z of scene.areaZones) z.polygon.forEach((_, index) => candidates.push({ kind: "area", id: z.id, index, points: z.polygon }));
+    for (const z of scene.areaZones) {
+      for (let index = 0; index < z.polygon.length; index++) candidates.push({ kind: "area", id: z.id, index, points: z.polygon });
+    }
   }
   if (scene.layers.landmarks) {
     for (const l of scene.landmarks) {

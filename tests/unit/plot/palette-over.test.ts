@@ -23,7 +23,7 @@ describe("over (one colour for a translucent fill painted on another)", () => {
     const twice = paint(paint(white, [230, 150, 30], 0.035), [240, 170, 40], 0.06);
     const m = /rgba\((\d+), (\d+), (\d+), ([\d.]+)\)/.exec(over("rgba(240, 170, 40, 0.06)", "rgba(230, 150, 30, 0.035)"))!;
     const once = paint(white, [Number(m[1]), Number(m[2]), Number(m[3])], Number(m[4]));
-    once.forEach((c, i) => expect(c).toBeCloseTo(twice[i], 0));
+    for (const [i, c] of once.entries()) expect(c).toBeCloseTo(twice[i], 0);
   });
 
   it("names a colour it cannot read", () => {

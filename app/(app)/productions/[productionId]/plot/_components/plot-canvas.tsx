@@ -72,6 +72,7 @@ function PlotCanvas(props: PlotCanvasProps) {
   }, []);
 
   // A released drag keeps its preview until the server's row arrives (then the server's numbers show).
+  // biome-ignore lint/correctness/useExhaustiveDependencies: the listed props are what the picture shows; any change redraws it (the draw functions read them from `live`)
   useEffect(() => {
     const p = preview.current;
     if (p && !gesture.current) {
@@ -155,6 +156,7 @@ function PlotCanvas(props: PlotCanvasProps) {
   });
 
   /** Draws a costly layer through its snapshot (or directly for the PNG export) and notes fresh drawings for the bench. */
+  // biome-ignore lint/correctness/useExhaustiveDependencies: reads refs only (`live`, `snaps`, `view`, `moving`, `exporting`), so it never needs remaking
   const throughSnapshot = useCallback((ctx: Ctx, which: keyof typeof snaps.current, stamp: unknown[], paint: (g: Ctx, v: View, s: { width: number; height: number }) => void) => {
     const sz = live.current.size;
     if (exporting.current) return paint(ctx, view.current, sz);
@@ -238,7 +240,8 @@ function PlotCanvas(props: PlotCanvasProps) {
   }, [throughSnapshot]);
 
   return (
-    <div ref={container} data-testid="plot-canvas" tabIndex={0} className="relative h-full w-full touch-none select-none overflow-hidden outline-none" aria-label="Plot: plan view of the stage">
+    // biome-ignore lint/a11y/noNoninteractiveTabindex: the plan is the editor's surface and takes the keyboard (arrows nudge, Delete, Space pans)
+    <div ref={container} data-testid="plot-canvas" role="application" tabIndex={0} className="relative h-full w-full touch-none select-none overflow-hidden outline-none" aria-label="Plot: plan view of the stage">
       <Stage ref={stage} width={size.width} height={size.height} listening={false}>
         {/* Underlay and plan share a layer: both are cheap, and every layer is a canvas to allocate and composite. */}
         <Layer listening={false}>

@@ -25,7 +25,7 @@ export function buildRigItems(data: PlotPayload): RigItem[] {
   const stackIndex = new Map<number, number>();
   for (const list of stacks.values()) {
     list.sort((a, b) => b.computed.lensHeight - a.computed.lensHeight || a.id - b.id);
-    list.forEach((f, i) => stackIndex.set(f.id, i));
+    for (const [i, f] of list.entries()) stackIndex.set(f.id, i);
   }
   return data.fixtures.map((f) => toRigItem(f, stackIndex.get(f.id) ?? 0));
 }
