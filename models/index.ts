@@ -22,8 +22,9 @@ import { initScenicPanel, ScenicPanel } from "./scenic-panel";
 import { initColourTransmission, ColourTransmission } from "./colour-transmission";
 import { initCircuit, Circuit } from "./circuit";
 import { initDataLine, DataLine } from "./data-line";
+import { initInvitation, Invitation } from "./invitation";
 
-const models = { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission, Circuit, DataLine };
+const models = { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission, Circuit, DataLine, Invitation };
 export type Db = typeof models & { sequelize: Sequelize };
 
 function associate() {
@@ -40,6 +41,12 @@ function associate() {
   Accessory.belongsTo(Fixture, { foreignKey: "fixtureId", as: "fixture" });
 }
 
+/** Seconds a statement waits for a row lock before failing (InnoDB rows and metadata locks alike). */
+export const LOCK_WAIT_SECONDS = 5;
+/** Connections in the app's pool; requests beyond it queue for up to POOL_ACQUIRE_MS. */
+export const POOL_MAX = 10;
+const POOL_ACQUIRE_MS = 10_000;
+
 function createDb(): Db {
   const url = process.env.DATABASE_URL;
   if (!url) throw new Error("DATABASE_URL is not set");
@@ -47,10 +54,17 @@ function createDb(): Db {
     dialect: "mariadb",
     dialectModule: mariadb,
     logging: false,
-    pool: { max: 10, min: 0, idle: 10_000, acquire: 10_000 },
-    dialectOptions: { timezone: "Z", connectTimeout: 5_000 },
+    pool: { max: POOL_MAX, min: 0, idle: 10_000, acquire: POOL_ACQUIRE_MS },
+    dialectOptions: {
+      timezone: "Z",
+      connectTimeout: 5_000,
+      // A request waits a few seconds for a row another transaction holds, then gives up (503 with
+      // Retry-After) instead of holding its connection for the server's default 50 s. One string:
+      // Sequelize appends its own time-zone statement to an array given here on every connect.
+      initSql: `SET SESSION innodb_lock_wait_timeout = ${LOCK_WAIT_SECONDS}, SESSION lock_wait_timeout = ${LOCK_WAIT_SECONDS}`,
+    },
   });
-  for (const init of [initUser, initProduction, initMembership, initPosition, initFixtureType, initFocusPoint, initFixture, initCue, initCuePart, initChangeEntry, initAreaZone, initLandmark, initUpload, initAccessory, initImportMapping, initPerformerMark, initScenicPanel, initColourTransmission, initCircuit, initDataLine]) {
+  for (const init of [initUser, initProduction, initMembership, initPosition, initFixtureType, initFocusPoint, initFixture, initCue, initCuePart, initChangeEntry, initAreaZone, initLandmark, initUpload, initAccessory, initImportMapping, initPerformerMark, initScenicPanel, initColourTransmission, initCircuit, initDataLine, initInvitation]) {
     init(sequelize);
   }
   associate();
@@ -64,4 +78,4 @@ export function getDb(): Db {
   return holder.__throwlineDb;
 }
 
-export { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission, Circuit, DataLine };
+export { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission, Circuit, DataLine, Invitation };

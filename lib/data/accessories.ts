@@ -6,6 +6,7 @@ import type { AccessoryDto } from "@/lib/dto/accessory";
 import { plain } from "./plain";
 import { versionedUpdate } from "./versioned";
 import { recordChange } from "./changes";
+import { inTransaction } from "./transaction";
 
 
 export const toAccessoryDto = (a: Accessory): AccessoryDto =>
@@ -24,9 +25,9 @@ function checkDmx(a: { address: number | null; footprint: number | null }) {
 }
 
 export async function createAccessory({ productionId, userId, input }: { productionId: number; userId: number; input: AccessoryCreate }) {
-  const { sequelize, Accessory, Fixture } = getDb();
+  const { Accessory, Fixture } = getDb();
   checkDmx({ address: input.address ?? null, footprint: input.footprint ?? null });
-  return sequelize.transaction(async (transaction) => {
+  return inTransaction(async (transaction) => {
     const fixture = await Fixture.findOne({ where: { productionId, id: input.fixtureId }, transaction });
     if (!fixture) throw new AppError("bad_request", "No such fixture in this production.", { fieldErrors: { fixtureId: ["no such fixture in this production"] } });
     const row = await Accessory.create({ universe: null, address: null, footprint: null, notes: null, ...input, productionId }, { transaction });
@@ -36,10 +37,10 @@ export async function createAccessory({ productionId, userId, input }: { product
 }
 
 export async function updateAccessory({ productionId, accessoryId, userId, patch }: { productionId: number; accessoryId: number; userId: number; patch: AccessoryPatch }) {
-  const { sequelize, Accessory } = getDb();
+  const { Accessory } = getDb();
   const { version, ...changes } = patch;
   if (!Object.keys(changes).length) throw new AppError("bad_request", "Nothing to change: send at least one field.");
-  return sequelize.transaction(async (transaction) => {
+  return inTransaction(async (transaction) => {
     const current = await Accessory.findOne({ where: { productionId, id: accessoryId }, transaction });
     if (!current) throw notFound("Accessory");
     checkDmx({ address: changes.address !== undefined ? changes.address : current.address, footprint: changes.footprint !== undefined ? changes.footprint : current.footprint });
@@ -50,8 +51,8 @@ export async function updateAccessory({ productionId, accessoryId, userId, patch
 }
 
 export async function deleteAccessory({ productionId, accessoryId, userId }: { productionId: number; accessoryId: number; userId: number }) {
-  const { sequelize, Accessory } = getDb();
-  await sequelize.transaction(async (transaction) => {
+  const { Accessory } = getDb();
+  await inTransaction(async (transaction) => {
     const row = await Accessory.findOne({ where: { productionId, id: accessoryId }, transaction });
     if (!row) throw notFound("Accessory");
     await row.destroy({ transaction });

@@ -12,6 +12,7 @@ import { notFound } from "@/lib/errors";
 import { recordChange } from "./changes";
 import { jsonColumn } from "./json-column";
 import { versionedUpdate } from "./versioned";
+import { inTransaction } from "./transaction";
 
 const SETTINGS_KEYS = ["electricalCode", "supplySystem", "voltage", "derating", "cableKgPerM", "hardwareKgPerUnit", "version"] as const;
 
@@ -33,8 +34,8 @@ export async function getElectricalSettings({ productionId }: { productionId: nu
 
 export async function updateElectricalSettings({ productionId, userId, patch }: { productionId: number; userId: number; patch: z.infer<typeof updateElectricalSettingsSchema> }): Promise<ElectricalSettingsDto> {
   const { version, ...changes } = patch;
-  const { sequelize, Production } = getDb();
-  return sequelize.transaction(async (transaction) => {
+  const { Production } = getDb();
+  return inTransaction(async (transaction) => {
     const { before, after } = await versionedUpdate({ model: Production, scope: {}, id: productionId, version, changes, toDto: toElectricalSettingsDto, what: "Production", transaction });
     const dto = toElectricalSettingsDto(after);
     await recordChange({ productionId, userId, entity: "production", entityId: productionId, action: "update", before: toElectricalSettingsDto(before), after: dto }, transaction);
@@ -43,9 +44,9 @@ export async function updateElectricalSettings({ productionId, userId, patch }: 
 }
 
 export async function updateLiftLines({ productionId, positionId, userId, patch }: { productionId: number; positionId: number; userId: number; patch: z.infer<typeof updateLiftLinesSchema> }) {
-  const { sequelize, Position } = getDb();
+  const { Position } = getDb();
   const toDto = (p: { id: number; liftLines: number | null; version: number }) => ({ positionId: p.id, liftLines: p.liftLines, version: p.version });
-  return sequelize.transaction(async (transaction) => {
+  return inTransaction(async (transaction) => {
     const { before, after } = await versionedUpdate({ model: Position, scope: { productionId }, id: positionId, version: patch.version, changes: { liftLines: patch.liftLines }, toDto, what: "Position", transaction });
     await recordChange({ productionId, userId, entity: "position", entityId: positionId, action: "update", before: toDto(before), after: toDto(after) }, transaction);
     return toDto(after);
@@ -54,6 +55,9 @@ export async function updateLiftLines({ productionId, positionId, userId, patch 
 
 type FixtureRow = { id: number; positionId: number; fixtureTypeId: number; unitNumber: string; bodyKey: string | null; channel: number | null; universe: number | null; address: number | null; dmxMode: string | null; footprint: number | null; circuit: string | null; dimmer: string | null; x: number; y: number };
 type TypeRow = { id: number; name: string; family: string; wattage: number; weightKg: number; dmxModes: unknown; cells: number };
+type AccessoryRow = { id: number; fixtureId: number; kind: string; universe: number | null; address: number | null; footprint: number | null; weightKg: number };
+type CircuitRow = { id: number; name: string; ratingA: number; phase: string | null; power: string };
+type DataLineRow = { id: number; name: string; universe: number | null; fixtureIds: unknown };
 type PositionRow = { id: number; name: string; kind: PositionKind; x1: number; y1: number; x2: number | null; y2: number | null; ratedLoadKg: number | null; liftLines: number | null; version: number };
 
 /** Where a unit hangs along a line position, metres from its first end (its plan point projected). */
@@ -83,15 +87,17 @@ function toCheckPosition(p: PositionRow): CheckPosition {
 /** All three checks for a production, computed from its current rows. */
 export async function getChecksReport({ productionId }: { productionId: number }): Promise<ChecksReport | null> {
   const db = getDb();
-  const raw = { raw: true, where: { productionId } } as const;
+  // Plain SQL rows rather than model queries: at 1,500 fixtures decoding through the models was most of
+  // the request's CPU (bench:checks), and these reads need no model behaviour.
+  const select = <T extends object>(sql: string, id: number) => db.sequelize.query<T>(sql, { replacements: [id], type: QueryTypes.SELECT });
   const [production, fixtures, types, positions, accessories, circuits, lines, cueChannels] = await Promise.all([
     db.Production.findByPk(productionId, { attributes: ["id", ...SETTINGS_KEYS] }),
-    db.Fixture.findAll({ ...raw, attributes: ["id", "positionId", "fixtureTypeId", "unitNumber", "bodyKey", "channel", "universe", "address", "dmxMode", "footprint", "circuit", "dimmer", "x", "y"] }) as unknown as Promise<FixtureRow[]>,
-    db.FixtureType.findAll({ ...raw, attributes: ["id", "name", "family", "wattage", "weightKg", "dmxModes", "cells"] }) as unknown as Promise<TypeRow[]>,
-    db.Position.findAll({ ...raw, attributes: ["id", "name", "kind", "x1", "y1", "x2", "y2", "ratedLoadKg", "liftLines", "version"], order: [["sortOrder", "ASC"], ["id", "ASC"]] }) as unknown as Promise<PositionRow[]>,
-    db.Accessory.findAll({ ...raw, attributes: ["id", "fixtureId", "kind", "universe", "address", "footprint", "weightKg"] }),
-    db.Circuit.findAll({ ...raw, attributes: ["id", "name", "ratingA", "phase", "power"] }),
-    db.DataLine.findAll({ ...raw, attributes: ["id", "name", "universe", "fixtureIds"], order: [["name", "ASC"]] }),
+    select<FixtureRow>("SELECT id, position_id AS positionId, fixture_type_id AS fixtureTypeId, unit_number AS unitNumber, body_key AS bodyKey, channel, universe, address, dmx_mode AS dmxMode, footprint, circuit, dimmer, x, y FROM fixtures WHERE production_id = ?", productionId),
+    select<TypeRow>("SELECT id, name, family, wattage, weight_kg AS weightKg, dmx_modes AS dmxModes, cells FROM fixture_types WHERE production_id = ?", productionId),
+    select<PositionRow>("SELECT id, name, kind, x1, y1, x2, y2, rated_load_kg AS ratedLoadKg, lift_lines AS liftLines, version FROM positions WHERE production_id = ? ORDER BY sort_order, id", productionId),
+    select<AccessoryRow>("SELECT id, fixture_id AS fixtureId, kind, universe, address, footprint, weight_kg AS weightKg FROM accessories WHERE production_id = ?", productionId),
+    select<CircuitRow>("SELECT id, name, rating_a AS ratingA, phase, power FROM circuits WHERE production_id = ?", productionId),
+    select<DataLineRow>("SELECT id, name, universe, fixture_ids AS fixtureIds FROM data_lines WHERE production_id = ? ORDER BY name", productionId),
     db.sequelize.query<{ channel: number }>("SELECT DISTINCT l.channel FROM cue_levels l JOIN cues c ON c.id = l.cue_id WHERE c.production_id = ?", { replacements: [productionId], type: QueryTypes.SELECT }),
   ]);
   if (!production) return null;

@@ -8,6 +8,7 @@ import { recordChange } from "./changes";
 import { plain } from "./plain";
 import { productionCrud } from "./production-crud";
 import { uniqueNameError } from "./unique";
+import { inTransaction } from "./transaction";
 
 type CreateCircuit = z.infer<typeof createCircuitSchema>;
 
@@ -42,8 +43,8 @@ export async function createCircuits({ productionId, userId, inputs }: { product
     if (seen.has(key)) throw new AppError("bad_request", `Row ${i + 1}: circuit "${c.name}" is also on row ${seen.get(key)! + 1}.`, { fieldErrors: { [`circuits.${i}.name`]: ["named twice"] } });
     seen.set(key, i);
   });
-  const { sequelize, Circuit } = getDb();
-  return sequelize.transaction(async (transaction) => {
+  const { Circuit } = getDb();
+  return inTransaction(async (transaction) => {
     const rows = await Circuit.bulkCreate(inputs.map((c) => ({ phase: null, power: "dimmed" as const, ...c, productionId })), { transaction }).catch(uniqueNameError("circuit"));
     const dtos = rows.map(toCircuitDto);
     for (const d of dtos) await recordChange({ productionId, userId, entity: "circuit", entityId: d.id, action: "create", after: d }, transaction);

@@ -7,6 +7,7 @@ import { emptyFileReason, toStoredMoves, type ImportMode } from "@/lib/cues/impo
 import type { ImportOutcome } from "@/lib/dto/cue";
 import { recordChange } from "./changes";
 import { getCuesByProduction } from "./cue-reads";
+import { inTransaction } from "./transaction";
 
 
 /** Replaces the production's cue list with a USITT ASCII file: all of it, or (on any error) nothing. */
@@ -21,8 +22,8 @@ export async function importCuesFromAscii({ productionId, text, mode, userId }: 
   const empty = emptyFileReason(parsed);
   if (empty) throw new AppError("bad_request", empty, { fieldErrors: { text: [empty] } });
   const cues = toStoredMoves(parsed.cues, mode);
-  const { sequelize, Cue, CueLevel, CuePart } = getDb();
-  await sequelize.transaction(async (transaction) => {
+  const { Cue, CueLevel, CuePart } = getDb();
+  await inTransaction(async (transaction) => {
     // The whole list as it was (fields, moves, parts), so a replacing import can be undone from the log.
     const replaced = (await getCuesByProduction({ productionId, transaction })).map(({ id: _id, version: _v, updatedAt: _u, ...cue }) => cue);
     await Cue.destroy({ where: { productionId }, transaction });

@@ -8,6 +8,7 @@ import { versionedUpdate } from "./versioned";
 import { recordChange } from "./changes";
 import type { CueDto } from "@/lib/dto/cue";
 import { getCueById, getCuesByProduction } from "./cue-reads";
+import { inTransaction } from "./transaction";
 
 function duplicateNumber(err: unknown, number: number | undefined): never {
   if ((err as { name?: string }).name === "SequelizeUniqueConstraintError") {
@@ -57,10 +58,9 @@ async function keepLookWhenBlockChanges(productionId: number, cueId: number, blo
 const numberText = (n: number | null | undefined) => (n == null ? null : String(n));
 
 export async function createCue({ productionId, input, userId }: { productionId: number; input: CueCreate; userId: number }): Promise<CueDto> {
-  const { sequelize, Cue } = getDb();
+  const { Cue } = getDb();
   const { levels, parts, ...fields } = input;
-  const id = await sequelize
-    .transaction(async (transaction) => {
+  const id = await inTransaction(async (transaction) => {
       const row = await Cue.create({ productionId, ...fields, number: String(fields.number), link: numberText(fields.link) }, { transaction });
       if (levels) await writeLevels(row.id, levels, transaction);
       if (parts?.length) await writeParts(row.id, parts, transaction);
@@ -74,14 +74,13 @@ export async function createCue({ productionId, input, userId }: { productionId:
 
 /** Fields, levels and parts of one cue in one transaction, under the version the client read. */
 export async function updateCue({ productionId, cueId, patch, userId }: { productionId: number; cueId: number; patch: CuePatch; userId: number }): Promise<CueDto> {
-  const { sequelize, Cue } = getDb();
+  const { Cue } = getDb();
   const { version, levels, parts, ...fields } = patch;
   if (!Object.keys(fields).length && !levels && !parts) throw new AppError("bad_request", "Nothing to change: send at least one field.");
   const write: Record<string, unknown> = { ...fields };
   if (fields.number !== undefined) write.number = String(fields.number);
   if (fields.link !== undefined) write.link = numberText(fields.link);
-  await sequelize
-    .transaction(async (transaction) => {
+  await inTransaction(async (transaction) => {
       const before = await getCueById({ productionId, cueId, transaction });
       await versionedUpdate({ model: Cue, scope: { productionId }, id: cueId, version, changes: write, toDto: (r) => r.id, what: "Cue", transaction });
       if (fields.block !== undefined && before.block !== fields.block) await keepLookWhenBlockChanges(productionId, cueId, fields.block, transaction);
@@ -107,8 +106,8 @@ export async function updateCue({ productionId, cueId, patch, userId }: { produc
 }
 
 export async function deleteCue({ productionId, cueId, version, userId }: { productionId: number; cueId: number; version: number; userId: number }) {
-  const { sequelize, Cue } = getDb();
-  await sequelize.transaction(async (transaction) => {
+  const { Cue } = getDb();
+  await inTransaction(async (transaction) => {
     const before = await getCueById({ productionId, cueId, transaction });
     const count = await Cue.destroy({ where: { productionId, id: cueId, version }, transaction });
     if (!count) throw new AppError("conflict", "Someone else changed this cue first. Here is the current version.", { current: before });
@@ -118,7 +117,7 @@ export async function deleteCue({ productionId, cueId, version, userId }: { prod
 
 export async function renumberCues({ productionId, range, userId }: { productionId: number; range: { from: number; to: number; start: number; step: number }; userId: number }) {
   const { sequelize, Cue } = getDb();
-  return sequelize.transaction(async (transaction) => {
+  return inTransaction(async (transaction) => {
     const cues = await getCuesByProduction({ productionId, transaction });
     let plan;
     try {

@@ -8,6 +8,7 @@ import { AppError } from "@/lib/errors";
 import { jsonColumn } from "./json-column";
 import { plain } from "./plain";
 import { productionCrud } from "./production-crud";
+import { inTransaction } from "./transaction";
 
 export const toDataLineDto = (d: DataLine): DataLineDto => ({
   ...plain(d, ["id", "productionId", "name", "universe", "version", "updatedAt"]),
@@ -45,7 +46,7 @@ export const deleteDataLine = lines.remove;
 export async function updateDataLine(args: { productionId: number; id: number; userId: number; patch: Update }): Promise<DataLineDto> {
   if (args.patch.fixtureIds) {
     const ids = args.patch.fixtureIds;
-    await getDb().sequelize.transaction((transaction) => checkUnits(ids, args.productionId, transaction));
+    await inTransaction((transaction) => checkUnits(ids, args.productionId, transaction));
   }
   return lines.update(args);
 }

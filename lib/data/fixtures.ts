@@ -1,4 +1,5 @@
 import "server-only";
+import type { Transaction } from "sequelize";
 import { getDb, type Fixture } from "@/models";
 import { AppError, notFound } from "@/lib/errors";
 import type { FixtureCreate, FixturePatch } from "@/lib/validation/fixture";
@@ -11,6 +12,7 @@ import { jsonColumn } from "./json-column";
 import { versionedUpdate } from "./versioned";
 import { recordChange } from "./changes";
 import { requireProduction } from "./productions";
+import { inTransaction } from "./transaction";
 
 // Every registry field, then identity and bookkeeping: the keys of FixtureRecord.
 const RECORD_KEYS = ["id", "productionId", ...FIXTURE_FIELDS.map((f) => f.attribute), "focusedAt", "focusedBy", "version", "updatedAt"] as const;
@@ -52,14 +54,15 @@ export async function getFixtureById({ productionId, fixtureId }: { productionId
   return (await joinerFor(productionId, production.headHeight)).join(toFixtureRecord(row));
 }
 
-/** Checks that referenced rows belong to the same production and that the DMX range fits the universe. */
-async function checkReferences(productionId: number, merged: FixtureRecord) {
+/**
+ * Checks that referenced rows belong to the same production and that the DMX range fits the universe.
+ * Inside a transaction the reads run one after another on its connection (never a second one from the pool).
+ */
+async function checkReferences(productionId: number, merged: FixtureRecord, transaction?: Transaction) {
   const { Position, FixtureType, FocusPoint } = getDb();
-  const [position, type, point] = await Promise.all([
-    Position.findOne({ where: { productionId, id: merged.positionId } }),
-    FixtureType.findOne({ where: { productionId, id: merged.fixtureTypeId } }),
-    merged.focusPointId ? FocusPoint.findOne({ where: { productionId, id: merged.focusPointId } }) : null,
-  ]);
+  const position = await Position.findOne({ where: { productionId, id: merged.positionId }, transaction });
+  const type = await FixtureType.findOne({ where: { productionId, id: merged.fixtureTypeId }, transaction });
+  const point = merged.focusPointId ? await FocusPoint.findOne({ where: { productionId, id: merged.focusPointId }, transaction }) : null;
   const fieldErrors: Record<string, string[]> = {};
   if (!position) fieldErrors.positionId = ["no such position in this production"];
   if (!type) fieldErrors.fixtureTypeId = ["no such fixture type in this production"];
@@ -75,7 +78,7 @@ async function checkReferences(productionId: number, merged: FixtureRecord) {
 }
 
 export async function updateFixture({ productionId, fixtureId, patch, userId }: { productionId: number; fixtureId: number; patch: FixturePatch; userId: number }): Promise<FixtureDto> {
-  const { sequelize, Fixture } = getDb();
+  const { Fixture } = getDb();
   const { version, ...changes } = patch;
   if (Object.keys(changes).length === 0) throw new AppError("bad_request", "Nothing to change: send at least one field.");
   const existing = await Fixture.findOne({ where: { productionId, id: fixtureId } });
@@ -88,7 +91,7 @@ export async function updateFixture({ productionId, fixtureId, patch, userId }: 
   if (changes.focused === true && !existing.focused) Object.assign(write, { focusedAt: new Date(), focusedBy: userId });
   if (changes.focused === false) Object.assign(write, { focusedAt: null, focusedBy: null });
 
-  await sequelize.transaction(async (transaction) => {
+  await inTransaction(async (transaction) => {
     const { before, after } = await versionedUpdate({
       model: Fixture,
       scope: { productionId },
@@ -111,12 +114,12 @@ export async function updateFixture({ productionId, fixtureId, patch, userId }: 
 
 /** Creates fixtures in one transaction (all or none); returns them with computed geometry. */
 export async function createFixtures({ productionId, userId, inputs }: { productionId: number; userId: number; inputs: FixtureCreate[] }): Promise<FixtureDto[]> {
-  const { sequelize, Fixture } = getDb();
-  const ids = await sequelize.transaction(async (transaction) => {
+  const { Fixture } = getDb();
+  const ids = await inTransaction(async (transaction) => {
     const created: number[] = [];
     for (const [i, input] of inputs.entries()) {
       const merged = { ...emptyFixture(), ...input } as unknown as FixtureRecord;
-      await checkReferences(productionId, merged).catch((err) => {
+      await checkReferences(productionId, merged, transaction).catch((err) => {
         if (err instanceof AppError && inputs.length > 1) err.message = `Fixture ${i + 1}: ${err.message}`;
         throw err;
       });
@@ -137,9 +140,10 @@ export async function createFixtures({ productionId, userId, inputs }: { product
 
 /** Deletes fixtures of this production by id, recording each; unknown ids are a 404 and nothing is deleted. */
 export async function deleteFixtures({ productionId, userId, fixtureIds }: { productionId: number; userId: number; fixtureIds: number[] }) {
-  const { sequelize, Fixture } = getDb();
-  await sequelize.transaction(async (transaction) => {
-    const rows = await Fixture.findAll({ where: { productionId, id: fixtureIds }, transaction });
+  const { Fixture } = getDb();
+  await inTransaction(async (transaction) => {
+    // Locked in id order, as every multi-row edit does, so two overlapping edits queue instead of deadlocking.
+    const rows = await Fixture.findAll({ where: { productionId, id: fixtureIds }, order: [["id", "ASC"]], lock: true, transaction });
     if (rows.length !== new Set(fixtureIds).size) throw notFound("Fixture");
     for (const row of rows) {
       await recordChange({ productionId, userId, entity: "fixture", entityId: row.id, action: "delete", before: toFixtureRecord(row) }, transaction);

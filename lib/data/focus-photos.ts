@@ -16,6 +16,7 @@ import { getFixtureById, toFixtureRecord } from "./fixtures";
 import { toUploadDto } from "./uploads";
 import { versionedUpdate } from "./versioned";
 import { recordChange } from "./changes";
+import { inTransaction } from "./transaction";
 
 /** Same cap as every upload: a full-size phone photo (3–12 MB) fits. */
 export const MAX_FOCUS_PHOTO_BYTES = MAX_UPLOAD_BYTES;
@@ -64,10 +65,10 @@ export async function setFocusPhoto(o: { productionId: number; fixtureId: number
   const key = `p${productionId}/focus-${fixtureId}-${Date.now()}-${randomBytes(6).toString("hex")}-full.jpg`;
   const store = fileStore();
   await Promise.all([store.put(key, photo.full, "image/jpeg"), store.put(thumbKeyOf(key), photo.thumb, "image/jpeg")]);
-  const { sequelize, Upload, Fixture } = getDb();
+  const { Upload, Fixture } = getDb();
   let oldKey: string | null = null;
   try {
-    await sequelize.transaction(async (transaction) => {
+    await inTransaction(async (transaction) => {
       const upload = await Upload.create(
         { productionId, kind: "focus-photo", fileName: o.fileName.slice(0, 200) || "focus-photo.jpg", storageKey: key, contentType: "image/jpeg", sizeBytes: photo.full.byteLength, widthPx: photo.width, heightPx: photo.height, uploadedBy: userId },
         { transaction },
@@ -100,9 +101,9 @@ export async function removeFocusPhoto(o: { productionId: number; fixtureId: num
   if (existing.focusPhotoUploadId == null && existing.version === version) {
     throw new AppError("bad_request", "This unit has no focus photo to remove.", { fieldErrors: { file: ["no photo"] } });
   }
-  const { sequelize, Fixture } = getDb();
+  const { Fixture } = getDb();
   let oldKey: string | null = null;
-  await sequelize.transaction(async (transaction) => {
+  await inTransaction(async (transaction) => {
     const { before, after } = await versionedUpdate({ model: Fixture, scope: { productionId }, id: fixtureId, version, changes: { focusPhotoUploadId: null }, toDto: toFixtureRecord, what: "Fixture", transaction });
     await recordChange({ productionId, userId, entity: "fixture", entityId: fixtureId, action: "update", before: toFixtureRecord(before), after: toFixtureRecord(after) }, transaction);
     if (before.focusPhotoUploadId != null) oldKey = await dropUpload(productionId, before.focusPhotoUploadId, userId, transaction);

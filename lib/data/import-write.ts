@@ -9,6 +9,7 @@ import { isPointHung, type PositionKind } from "@/lib/rig/position-kinds";
 import type { ImportPlanResult } from "@/lib/rig/import-plan";
 import { batchInsert } from "./batch-insert";
 import type { Progress } from "./import-progress";
+import { inTransaction } from "./transaction";
 
 const CHUNK = 500;
 const lower = (s: string) => s.trim().toLowerCase();
@@ -120,13 +121,13 @@ const dbValue = (v: unknown) => (typeof v === "boolean" ? Number(v) : v === unde
 
 /** Writes a checked plan in one transaction: every row lands, or (on any error) none does. */
 export async function writeImport({ productionId, userId, plan, progress }: { productionId: number; userId: number; plan: ImportPlanResult; progress?: Progress }) {
-  const { sequelize, Position } = getDb();
+  const { Position } = getDb();
   const creates = plan.plans.filter((p) => p.action === "create");
   const updates = plan.plans.filter((p): p is UpdatePlan => p.action === "update");
   const total = creates.length + updates.length;
   let done = 0;
   progress?.("writing", 0, total);
-  await sequelize.transaction(async (transaction) => {
+  await inTransaction(async (transaction) => {
     const newPositions = plan.newPositions.length ? await createPositions(productionId, plan.newPositions, transaction) : new Map();
     const newTypes = plan.newTypes.length ? await createTypes(productionId, plan.newTypes, transaction) : new Map<string, number>();
     const positions = new Map((await Position.findAll({ where: { productionId }, transaction, raw: true })).map((p) => [p.id, p]));

@@ -4,6 +4,7 @@ import { AppError, notFound } from "@/lib/errors";
 import { versionedUpdate } from "./versioned";
 import { recordChange } from "./changes";
 import { uniqueNameError } from "./unique";
+import { inTransaction } from "./transaction";
 
 type Ids = { productionId: number; userId: number };
 
@@ -27,7 +28,6 @@ export function productionCrud<M extends Model & { id: number }, Dto, CreateInpu
   beforeDelete?: (row: M, ctx: { productionId: number; transaction: Transaction }) => Promise<object | void>;
 }) {
   const lower = spec.what.toLowerCase();
-  const sequelize = () => spec.model().sequelize!;
 
   async function list({ productionId }: { productionId: number }): Promise<Dto[]> {
     const rows = await spec.model().findAll({ where: { productionId } as never, order: spec.order });
@@ -35,7 +35,7 @@ export function productionCrud<M extends Model & { id: number }, Dto, CreateInpu
   }
 
   async function create({ productionId, userId, input }: Ids & { input: CreateInput }): Promise<Dto> {
-    return sequelize().transaction(async (transaction) => {
+    return inTransaction(async (transaction) => {
       const values = spec.prepareCreate ? await spec.prepareCreate(input, { productionId, transaction }) : input;
       const row = await spec.model().create({ ...values, productionId } as never, { transaction }).catch(uniqueNameError(lower));
       const after = spec.toDto(row);
@@ -47,7 +47,7 @@ export function productionCrud<M extends Model & { id: number }, Dto, CreateInpu
   async function update({ productionId, id, userId, patch }: Ids & { id: number; patch: Patch }): Promise<Dto> {
     const { version, ...changes } = patch;
     if (!Object.keys(changes).length) throw new AppError("bad_request", "Nothing to change: send at least one field.");
-    return sequelize().transaction(async (transaction) => {
+    return inTransaction(async (transaction) => {
       const { before, after } = await versionedUpdate({ model: spec.model(), scope: { productionId }, id, version, changes, toDto: spec.toDto, what: spec.what, transaction }).catch(uniqueNameError(lower));
       const afterDto = spec.toDto(after);
       await recordChange({ productionId, userId, entity: spec.entity, entityId: id, action: "update", before: spec.toDto(before) as object, after: afterDto as object }, transaction);
@@ -56,7 +56,7 @@ export function productionCrud<M extends Model & { id: number }, Dto, CreateInpu
   }
 
   async function remove({ productionId, id, userId }: Ids & { id: number }): Promise<void> {
-    await sequelize().transaction(async (transaction) => {
+    await inTransaction(async (transaction) => {
       const row = await spec.model().findOne({ where: { productionId, id } as never, transaction });
       if (!row) throw notFound(spec.what);
       const extra = spec.beforeDelete ? await spec.beforeDelete(row, { productionId, transaction }) : undefined;

@@ -6,6 +6,7 @@ import type { ProductionDto, ProductionListItem, ProductionOverview } from "@/li
 import { plain } from "./plain";
 import { versionedUpdate } from "./versioned";
 import { recordChange } from "./changes";
+import { inTransaction } from "./transaction";
 
 const PRODUCTION_KEYS = [
   "id", "name", "venue", "displayUnits", "datumName", "headHeight", "faceHeight", "showDeckHeight", "backWallY", "prosceniumWidth", "prosceniumHeight", "stageWidth", "stageDepth",
@@ -36,8 +37,8 @@ export async function getProductionsByUser({ userId }: { userId: number }): Prom
 
 /** Creates a production; its creator becomes the owner and its designer. */
 export async function createProduction({ userId, name, venue, displayUnits }: { userId: number; name: string; venue: string; displayUnits: "metric" | "imperial" }) {
-  const { sequelize, Production, Membership } = getDb();
-  return sequelize.transaction(async (transaction) => {
+  const { Production, Membership } = getDb();
+  return inTransaction(async (transaction) => {
     const production = await Production.create({ name, venue, displayUnits }, { transaction });
     await Membership.create({ userId, productionId: production.id, role: "designer", isOwner: true }, { transaction });
     await recordChange({ productionId: production.id, userId, entity: "production", entityId: production.id, action: "create", after: toProductionDto(production) }, transaction);
@@ -57,8 +58,8 @@ export async function updateProductionSettings({ productionId, version, changes,
   userId: number;
 }): Promise<ProductionDto> {
   if (Object.keys(changes).length === 0) throw new AppError("bad_request", "Nothing to change: send at least one setting.");
-  const { sequelize, Production } = getDb();
-  return sequelize.transaction(async (transaction) => {
+  const { Production } = getDb();
+  return inTransaction(async (transaction) => {
     const { before, after } = await versionedUpdate({
       model: Production,
       scope: {},

@@ -8,17 +8,20 @@ import { toFixtureRecord } from "./fixtures";
 import { jsonColumn } from "./json-column";
 import { versionedUpdate } from "./versioned";
 import { recordChange } from "./changes";
+import { inTransaction } from "./transaction";
 
 /**
  * Applies one edit to a selection, in the order given (the order on screen), in one transaction:
  * a stale version anywhere answers 409 with that fixture's current row and changes nothing.
  */
 export async function bulkEditFixtures({ productionId, userId, edit }: { productionId: number; userId: number; edit: BulkEdit }) {
-  const { sequelize, Fixture, FixtureType } = getDb();
+  const { Fixture, FixtureType } = getDb();
   const ids = edit.items.map((i) => i.id);
   if (new Set(ids).size !== ids.length) throw new AppError("bad_request", "The selection names a fixture twice.", { fieldErrors: { items: ["repeated fixture"] } });
-  return sequelize.transaction(async (transaction) => {
-    const rows = await Fixture.findAll({ where: { productionId, id: ids }, transaction });
+  return inTransaction(async (transaction) => {
+    // Every row is locked up front in id order, whatever order the selection came in: two bulk edits
+    // over the same fixtures then queue behind each other instead of deadlocking.
+    const rows = await Fixture.findAll({ where: { productionId, id: ids }, order: [["id", "ASC"]], lock: true, transaction });
     if (rows.length !== ids.length) throw new AppError("not_found", "Some of the selected fixtures no longer exist. Reload the rig.");
     const byId = new Map(rows.map((r) => [r.id, r]));
     let values: Array<Record<string, unknown>>;

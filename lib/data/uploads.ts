@@ -11,6 +11,7 @@ import type { UploadDto } from "@/lib/dto/upload";
 import { plain } from "./plain";
 import { versionedUpdate } from "./versioned";
 import { recordChange } from "./changes";
+import { inTransaction } from "./transaction";
 
 
 const UPLOAD_KEYS = ["id", "productionId", "kind", "fileName", "contentType", "sizeBytes", "widthPx", "heightPx", "metresPerPixel", "offsetX", "offsetY", "rotationDeg", "opacity", "version", "updatedAt"] as const;
@@ -39,9 +40,9 @@ export async function createUnderlay({ productionId, userId, fileName, bytes }: 
   const image = await reencodeUnderlay(bytes);
   const key = `p${productionId}/underlay-${Date.now()}-${randomBytes(6).toString("hex")}`;
   await fileStore().put(key, image.bytes, image.type);
-  const { sequelize, Upload } = getDb();
+  const { Upload } = getDb();
   try {
-    return await sequelize.transaction(async (transaction) => {
+    return await inTransaction(async (transaction) => {
       const row = await Upload.create(
         {
           productionId, kind: "underlay", fileName: fileName.slice(0, 200) || "groundplan", storageKey: key, contentType: image.type, sizeBytes: image.bytes.byteLength,
@@ -69,10 +70,10 @@ export async function readUploadFile({ productionId, uploadId }: { productionId:
 }
 
 export async function updateUpload({ productionId, uploadId, userId, patch }: { productionId: number; uploadId: number; userId: number; patch: z.infer<typeof updateUploadSchema> }) {
-  const { sequelize, Upload } = getDb();
+  const { Upload } = getDb();
   const { version, ...changes } = patch;
   if (!Object.keys(changes).length) throw new AppError("bad_request", "Nothing to change: send at least one field.");
-  return sequelize.transaction(async (transaction) => {
+  return inTransaction(async (transaction) => {
     // Only underlays are calibrated here; a focus photo changes through its fixture (lib/data/focus-photos.ts).
     const current = await Upload.findOne({ where: { productionId, id: uploadId, kind: "underlay" }, transaction });
     if (!current) throw notFound("Upload");
@@ -88,8 +89,8 @@ export async function updateUpload({ productionId, uploadId, userId, patch }: { 
 }
 
 export async function deleteUpload({ productionId, uploadId, userId }: { productionId: number; uploadId: number; userId: number }) {
-  const { sequelize, Upload } = getDb();
-  const key = await sequelize.transaction(async (transaction) => {
+  const { Upload } = getDb();
+  const key = await inTransaction(async (transaction) => {
     // A focus photo is removed through its fixture, under the fixture's version.
     const row = await Upload.findOne({ where: { productionId, id: uploadId, kind: ["underlay", "import"] }, transaction });
     if (!row) throw notFound("Upload");

@@ -18,14 +18,17 @@ export async function versionedUpdate<M extends Model, Dto>(opts: {
 }): Promise<{ before: M; after: M }> {
   const { model, scope, id, version, changes, toDto, what, transaction } = opts;
   const where = { ...(scope as object), id } as WhereOptions;
-  const before = await model.findOne({ where, transaction });
+  // A locking read inside a transaction: it sees the latest committed row (not the transaction's
+  // snapshot) and holds it until commit, so the 409's current row and the logged "before" are true.
+  const lock = transaction ? { lock: true } : {};
+  const before = await model.findOne({ where, transaction, ...lock });
   if (!before) throw notFound(what);
   const [count] = await model.update({ ...changes, version: literal("version + 1") } as never, {
     where: { ...(where as object), version } as WhereOptions,
     transaction,
   });
   if (count === 0) {
-    const current = await model.findOne({ where, transaction });
+    const current = await model.findOne({ where, transaction, ...lock });
     if (!current) throw notFound(what);
     throw new AppError("conflict", `Someone else changed this ${what.toLowerCase()} first. Here is the current version.`, {
       current: toDto(current),
