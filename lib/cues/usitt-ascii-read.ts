@@ -104,7 +104,9 @@ export function readUsittAscii(source: string): AsciiReadResult {
     if (raw.length > ASCII_MAX_LINE) notices.push({ line: n, message: `longer than the standard's ${ASCII_MAX_LINE} characters; read anyway` });
     const trimmed = raw.trim();
     if (!trimmed || trimmed.startsWith("!")) continue;
-    const keywordMatch = /^([^\s,/<>=@]+)\s*(.*)$/.exec(trimmed)!;
+    // Delimiters before the keyword are a run like any other: skipped (a line of only delimiters is blank).
+    const keywordMatch = /^[\s,/<>=@]*([^\s,/<>=@]+)\s*(.*)$/.exec(trimmed);
+    if (!keywordMatch) continue;
     const keyword = keywordMatch[1].toUpperCase();
     const restRaw = keywordMatch[2];
     const rest = restRaw.replace(/!.*$/, "").trim();
