@@ -18,7 +18,8 @@ async function clientAddress(): Promise<string> {
   return h.get("x-forwarded-for")?.split(",")[0].trim() || h.get("x-real-ip") || "unknown";
 }
 
-async function startSession(userId: number) {
+/** Signs this browser in as the user (a new server-side session record). */
+export async function startSession(userId: number) {
   const session = await getSession();
   session.token = await createSessionRecord({ userId, ttlSeconds: SESSION_TTL_SECONDS });
   await session.save();

@@ -1,0 +1,51 @@
+import "server-only";
+import { env } from "@/lib/env";
+import { dueMail, enqueueMail, markMailFailed, markMailSent, type QueuedMail } from "@/lib/data/mail-queue";
+import { mailTransport } from "./transport";
+
+export type Outgoing = { productionId: number | null; to: string; subject: string; text: string };
+export type SendOutcome = { queuedId: number; sent: boolean; error?: string };
+
+async function deliver(m: QueuedMail): Promise<SendOutcome> {
+  const transport = mailTransport();
+  if (!transport) {
+    const error = "No mail server is set up (SMTP_URL); the message waits in the queue.";
+    await markMailFailed(m.id, m.attempts, error);
+    return { queuedId: m.id, sent: false, error };
+  }
+  try {
+    await transport.sendMail({ from: env().MAIL_FROM, to: m.to, subject: m.subject, text: m.text });
+    await markMailSent(m.id);
+    return { queuedId: m.id, sent: true };
+  } catch (err) {
+    const error = `The mail server refused or did not answer: ${err instanceof Error ? err.message : String(err)}`;
+    await markMailFailed(m.id, m.attempts, error);
+    return { queuedId: m.id, sent: false, error };
+  }
+}
+
+let retryTimer: ReturnType<typeof setInterval> | null = null;
+
+/** Tries every queued message whose time has come; returns how many went out. */
+export async function retryQueuedMail(): Promise<number> {
+  let sent = 0;
+  for (const m of await dueMail()) if ((await deliver(m)).sent) sent++;
+  return sent;
+}
+
+function keepRetrying() {
+  if (retryTimer) return;
+  retryTimer = setInterval(() => void retryQueuedMail().catch(() => undefined), 60_000);
+  retryTimer.unref?.();
+}
+
+/**
+ * Queues a message, then tries to hand it to the mail server at once. A failure never fails the
+ * caller's action: the message stays queued with the reason and is retried (every minute while the
+ * process runs, and whenever more mail is sent or the outbox is opened).
+ */
+export async function sendMail(message: Outgoing): Promise<SendOutcome> {
+  const queued = await enqueueMail(message);
+  keepRetrying();
+  return deliver(queued);
+}
