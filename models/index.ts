@@ -23,7 +23,6 @@ import { initColourTransmission, ColourTransmission } from "./colour-transmissio
 import { initCircuit, Circuit } from "./circuit";
 import { initDataLine, DataLine } from "./data-line";
 import { initInvitation, Invitation } from "./invitation";
-import { initInvitation, Invitation } from "./invitation";
 
 const models = { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission, Circuit, DataLine, Invitation };
 export type Db = typeof models & { sequelize: Sequelize };
