@@ -119,6 +119,16 @@ const EXPECTED: Record<string, Scope> = {
   "POST /api/productions/[productionId]/studies/coverage": ALL,
   "POST /api/productions/[productionId]/studies/coverage/areas": ALL,
   "POST /api/productions/[productionId]/studies/shadows": ALL,
+  // Team: everyone sees who is on it; invitations, role changes and removal are the owner's (the demo's owner is its designer).
+  "GET /api/productions/[productionId]/team": ALL,
+  "PATCH /api/productions/[productionId]/team/[memberId]": D,
+  "DELETE /api/productions/[productionId]/team/[memberId]": D,
+  "GET /api/productions/[productionId]/invitations": D,
+  "POST /api/productions/[productionId]/invitations": D,
+  "DELETE /api/productions/[productionId]/invitations/[invitationId]": D,
+  "POST /api/productions/[productionId]/invitations/[invitationId]/resend": D,
+  // Accepting: the link's token is the proof.
+  "POST /api/invitations/accept": "public",
 };
 
 /** Every exported method of every route.ts under app/api, as "METHOD /api/…". */
