@@ -23,8 +23,9 @@ import { initColourTransmission, ColourTransmission } from "./colour-transmissio
 import { initCircuit, Circuit } from "./circuit";
 import { initDataLine, DataLine } from "./data-line";
 import { initInvitation, Invitation } from "./invitation";
+import { initNote, Note } from "./note";
 
-const models = { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission, Circuit, DataLine, Invitation };
+const models = { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission, Circuit, DataLine, Invitation, Note };
 export type Db = typeof models & { sequelize: Sequelize };
 
 function associate() {
@@ -64,7 +65,7 @@ function createDb(): Db {
       initSql: `SET SESSION innodb_lock_wait_timeout = ${LOCK_WAIT_SECONDS}, SESSION lock_wait_timeout = ${LOCK_WAIT_SECONDS}`,
     },
   });
-  for (const init of [initUser, initProduction, initMembership, initPosition, initFixtureType, initFocusPoint, initFixture, initCue, initCuePart, initChangeEntry, initAreaZone, initLandmark, initUpload, initAccessory, initImportMapping, initPerformerMark, initScenicPanel, initColourTransmission, initCircuit, initDataLine, initInvitation]) {
+  for (const init of [initUser, initProduction, initMembership, initPosition, initFixtureType, initFocusPoint, initFixture, initCue, initCuePart, initChangeEntry, initAreaZone, initLandmark, initUpload, initAccessory, initImportMapping, initPerformerMark, initScenicPanel, initColourTransmission, initCircuit, initDataLine, initInvitation, initNote]) {
     init(sequelize);
   }
   associate();
@@ -78,4 +79,4 @@ export function getDb(): Db {
   return holder.__throwlineDb;
 }
 
-export { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission, Circuit, DataLine, Invitation };
+export { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission, Circuit, DataLine, Invitation, Note };

@@ -14,5 +14,13 @@ export const PERMISSIONS = [
   "studies.run", // studies and checks
   "revisions.issue", // issue a revision, e-mail the team
   "team.manage",
+  "notes.write", // write a note, change an open one (any member)
+  "notes.setCurrentCue", // the "current cue" new notes pick up (stage manager, board operator)
+  "notes.closeWork", // mark a work note done or cannot-do, or reopen it
+  "notes.closeFocus",
+  "notes.closeCue",
+  "notes.closePaperwork",
+  "notes.closeGeneral",
+  "notes.fileShowReport", // the stage manager's report after a performance
 ] as const;
 export type Permission = (typeof PERMISSIONS)[number];

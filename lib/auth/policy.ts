@@ -3,6 +3,7 @@
 import type { Role } from "./roles";
 import type { Permission } from "./permissions";
 import { FIXTURE_FIELDS } from "@/lib/rig/fixture-fields";
+import type { NoteKind } from "@/models/note-vocabulary";
 
 export type Member = { role: Role; isOwner: boolean };
 
@@ -21,7 +22,15 @@ const TABLE: Record<Role, ReadonlySet<Permission>> = {
     "studies.view",
     "studies.run",
     "revisions.issue",
+    "notes.write",
+    "notes.setCurrentCue",
+    "notes.closeWork",
+    "notes.closeFocus",
+    "notes.closeCue",
+    "notes.closePaperwork",
+    "notes.closeGeneral",
   ]),
+  // The crew does the work and focus jobs and keeps the paperwork; the board operator is crew.
   electrician: new Set<Permission>([
     "production.view",
     "rig.editElectrics",
@@ -30,9 +39,26 @@ const TABLE: Record<Role, ReadonlySet<Permission>> = {
     "studies.view",
     "studies.run",
     "revisions.issue",
+    "notes.write",
+    "notes.setCurrentCue",
+    "notes.closeWork",
+    "notes.closeFocus",
+    "notes.closePaperwork",
+    "notes.closeGeneral",
   ]),
-  stage_manager: new Set<Permission>(["production.view", "rig.export", "cues.editCallNotes", "studies.view"]),
-  viewer: new Set<Permission>(["production.view", "rig.export", "studies.view"]),
+  // The stage manager writes the show report and keeps the current cue; a cue, focus or work note is
+  // closed by the people who change the show, not by the one who noticed it.
+  stage_manager: new Set<Permission>([
+    "production.view",
+    "rig.export",
+    "cues.editCallNotes",
+    "studies.view",
+    "notes.write",
+    "notes.setCurrentCue",
+    "notes.closeGeneral",
+    "notes.fileShowReport",
+  ]),
+  viewer: new Set<Permission>(["production.view", "rig.export", "studies.view", "notes.write"]),
 };
 
 /** Team management belongs to the production's owner, whatever their role. */
@@ -40,6 +66,25 @@ export function can(member: Member | null | undefined, permission: Permission): 
   if (!member) return false;
   if (permission === "team.manage") return member.isOwner;
   return TABLE[member.role].has(permission);
+}
+
+/** The right that closes (or reopens) a note of each kind. */
+const NOTE_CLOSE_RIGHT: Record<NoteKind, Permission> = {
+  work: "notes.closeWork",
+  focus: "notes.closeFocus",
+  cue: "notes.closeCue",
+  paperwork: "notes.closePaperwork",
+  general: "notes.closeGeneral",
+};
+
+/** Whether this member may mark a note of this kind done or cannot-do, or reopen it. */
+export function canCloseNote(member: Member | null | undefined, kind: NoteKind): boolean {
+  return can(member, NOTE_CLOSE_RIGHT[kind]);
+}
+
+/** The kinds of note this member may close (for the screens' buttons). */
+export function closableNoteKinds(member: Member | null | undefined): NoteKind[] {
+  return (Object.keys(NOTE_CLOSE_RIGHT) as NoteKind[]).filter((k) => canCloseNote(member, k));
 }
 
 // Field-level rules. A field not listed here cannot be written through the API at all. A fixture's

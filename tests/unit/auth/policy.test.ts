@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { can, canEditField, forbiddenFields, PERMISSIONS, type Member, type Permission } from "@/lib/auth/policy";
+import { can, canCloseNote, canEditField, closableNoteKinds, forbiddenFields, PERMISSIONS, type Member, type Permission } from "@/lib/auth/policy";
+import { NOTE_KINDS, type NoteKind } from "@/models/note-vocabulary";
 import { ROLES, type Role } from "@/lib/auth/roles";
 
 // The role table of shared/DESIGN.md ("Roles"), written out here independently of lib/auth/policy.ts
@@ -17,6 +18,16 @@ const EXPECTED: Record<Permission, Record<Role, boolean>> = {
   "studies.run": { designer: true, electrician: true, stage_manager: false, viewer: false },
   "revisions.issue": { designer: true, electrician: true, stage_manager: false, viewer: false },
   "team.manage": { designer: false, electrician: false, stage_manager: false, viewer: false },
+  // Notes: any member writes; closing follows who changes that part of the show (DESIGN.md's table:
+  // the rig and focus are the designer's and the crew's, cues the designer's, the stage manager calls).
+  "notes.write": { designer: true, electrician: true, stage_manager: true, viewer: true },
+  "notes.setCurrentCue": { designer: true, electrician: true, stage_manager: true, viewer: false },
+  "notes.closeWork": { designer: true, electrician: true, stage_manager: false, viewer: false },
+  "notes.closeFocus": { designer: true, electrician: true, stage_manager: false, viewer: false },
+  "notes.closeCue": { designer: true, electrician: false, stage_manager: false, viewer: false },
+  "notes.closePaperwork": { designer: true, electrician: true, stage_manager: false, viewer: false },
+  "notes.closeGeneral": { designer: true, electrician: true, stage_manager: true, viewer: false },
+  "notes.fileShowReport": { designer: false, electrician: false, stage_manager: true, viewer: false },
 };
 
 describe("role table (DESIGN.md, Roles)", () => {
@@ -82,5 +93,28 @@ describe("field-level rules for cues and types", () => {
     const el: Member = { role: "electrician", isOwner: false };
     expect(forbiddenFields(el, "fixtureType", ["wattage", "weightKg"])).toEqual([]);
     expect(forbiddenFields(el, "fixtureType", ["coneMaxDeg", "peakCandela"])).toEqual(["coneMaxDeg", "peakCandela"]);
+  });
+});
+
+// Who closes which kind of note, walked over every role and kind (written out by hand, not read from the policy).
+describe("closing notes by kind", () => {
+  const CLOSERS: Record<NoteKind, Role[]> = {
+    work: ["designer", "electrician"],
+    focus: ["designer", "electrician"],
+    cue: ["designer"],
+    paperwork: ["designer", "electrician"],
+    general: ["designer", "electrician", "stage_manager"],
+  };
+  for (const kind of NOTE_KINDS) {
+    for (const role of ROLES) {
+      const allowed = CLOSERS[kind].includes(role);
+      it(`${role} ${allowed ? "may" : "may not"} close a ${kind} note`, () => {
+        expect(canCloseNote({ role, isOwner: false }, kind)).toBe(allowed);
+        expect(closableNoteKinds({ role, isOwner: true }).includes(kind)).toBe(allowed);
+      });
+    }
+  }
+  it("a non-member closes nothing", () => {
+    expect(closableNoteKinds(null)).toEqual([]);
   });
 });
