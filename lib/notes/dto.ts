@@ -1,0 +1,30 @@
+// What a note looks like outside the server: the same shape for the notes page, the work call and the API.
+import type { NoteKind, NoteNeed, NoteOrigin, NotePriority, NoteStatus, NoteSubject } from "@/models/note-vocabulary";
+
+export type NoteDto = {
+  id: number;
+  productionId: number;
+  subject: NoteSubject;
+  subjectId: number | null;
+  body: string;
+  kind: NoteKind;
+  priority: NotePriority;
+  ownerId: number | null;
+  status: NoteStatus;
+  needs: NoteNeed[];
+  dueDate: string | null;
+  dueSession: string | null;
+  authorId: number;
+  runningCueId: number | null;
+  runningCueNumber: string | null;
+  origin: NoteOrigin;
+  showReportId: number | null;
+  closedBy: number | null;
+  closedAt: string | null;
+  version: number;
+  createdAt: string;
+  updatedAt: string;
+};
+
+/** The production's current cue, which new notes pick up. */
+export type CurrentCueDto = { cueId: number | null; number: string | null; label: string | null };
