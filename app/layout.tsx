@@ -30,6 +30,7 @@ export default async function RootLayout({ children }: { children: React.ReactNo
     <html lang="en" suppressHydrationWarning>
       <head>
         {/* Applies the remembered theme before the first paint, so a dark room never sees a white flash. */}
+        {/* biome-ignore lint/security/noDangerouslySetInnerHtml: a constant script of ours, run under the page's nonce */}
         <script nonce={nonce} dangerouslySetInnerHTML={{ __html: THEME_SCRIPT }} />
       </head>
       <body className="min-h-screen">

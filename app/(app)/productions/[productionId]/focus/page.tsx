@@ -10,6 +10,7 @@ export default async function FocusPage({ params }: { params: Promise<{ producti
   const data = await loadFocusPage((await params).productionId);
   return (
     <>
+      {/* biome-ignore lint/security/noDangerouslySetInnerHtml: the charts' own constant stylesheet, no user text */}
       <style dangerouslySetInnerHTML={{ __html: CHART_CSS }} />
       <Suspense>
         <FocusList data={data} />

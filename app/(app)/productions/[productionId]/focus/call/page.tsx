@@ -10,6 +10,7 @@ export default async function FocusCallPage({ params }: { params: Promise<{ prod
   const data = await loadFocusPage((await params).productionId);
   return (
     <>
+      {/* biome-ignore lint/security/noDangerouslySetInnerHtml: the charts' own constant stylesheet, no user text */}
       <style dangerouslySetInnerHTML={{ __html: CHART_CSS + PLAN_CSS }} />
       <Suspense>
         <FocusCall data={data} />

@@ -28,6 +28,7 @@ export default async function FocusPrintPage({ params, searchParams }: Props) {
   const sheetOptions = { productionName: production.name, printedAt: formatStamp(new Date(), options.tz), perPage: options.perPage, units: production.displayUnits, landmarks };
   return (
     <>
+      {/* biome-ignore lint/security/noDangerouslySetInnerHtml: the charts' own constant stylesheet, no user text */}
       <style dangerouslySetInnerHTML={{ __html: CHART_CSS + sheetCss(options.paper) }} />
       <div className="no-print flex flex-wrap items-center gap-3 border-b border-line bg-surface px-4 py-3 text-sm">
         <Link href={`/productions/${productionId}/focus?${toQuery({ ...filter })}`} className="text-muted hover:text-ink">← Back to the charts</Link>
