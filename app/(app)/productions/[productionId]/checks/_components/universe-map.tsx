@@ -1,11 +1,11 @@
 "use client";
 // Each universe as a strip of its 512 slots (ANSI E1.11), coloured by use: free, used, shared on purpose,
 // or in conflict. Exact slot ranges are in the export's "Universes" sheet.
-import type { SharedStart, UniverseMap as Map } from "@/lib/checks/dmx";
+import type { SharedStart, UniverseMap as UniverseStrip } from "@/lib/checks/dmx";
 
 const FILL = { used: "var(--accent)", shared: "var(--success)", conflict: "var(--danger)" } as const;
 
-export function UniverseMap({ universes, shared, unpatched }: { universes: Map[]; shared: SharedStart[]; unpatched: number }) {
+export function UniverseMap({ universes, shared, unpatched }: { universes: UniverseStrip[]; shared: SharedStart[]; unpatched: number }) {
   return (
     <div className="flex flex-col gap-2">
       <Legend />
