@@ -1,45 +1,75 @@
 import type { Metadata } from "next";
 import { memberForPage } from "@/lib/auth/page-guards";
-import { getTeamByProduction } from "@/lib/data/memberships";
+import { getTeam } from "@/lib/data/team";
+import { getOpenInvitations } from "@/lib/data/invitations";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import { can } from "@/lib/auth/policy";
 import { Card } from "@/components/ui/card";
+import { InviteForm } from "./_components/invite-form";
+import { InvitationForms, RemoveForm, RoleForm } from "./_components/row-forms";
 
 export const metadata: Metadata = { title: "Team" };
 
 export default async function TeamPage({ params }: { params: Promise<{ productionId: string }> }) {
-  const { productionId, member } = await memberForPage((await params).productionId);
-  const team = await getTeamByProduction({ productionId });
+  const { productionId, member, user } = await memberForPage((await params).productionId);
+  const manages = can(member, "team.manage");
+  const [team, invitations] = await Promise.all([getTeam({ productionId }), manages ? getOpenInvitations({ productionId }) : Promise.resolve([])]);
   return (
-    <main className="mx-auto max-w-3xl px-4 py-6">
+    <main className="mx-auto flex max-w-4xl flex-col gap-4 px-4 py-6">
       <Card title="Team">
         <table className="w-full text-sm">
           <thead className="text-left text-xs uppercase tracking-wide text-muted">
             <tr>
-              <th className="py-1">Name</th>
-              <th>E-mail</th>
-              <th>Role</th>
+              <th scope="col" className="py-1">Name</th>
+              <th scope="col">E-mail</th>
+              <th scope="col">Role</th>
+              {manages ? <th scope="col"><span className="sr-only">Remove</span></th> : null}
             </tr>
           </thead>
           <tbody>
             {team.map((m) => (
-              <tr key={m.userId} className="border-t border-line">
-                <td className="py-2">{m.name}</td>
+              <tr key={m.userId} className="border-t border-line align-middle">
+                <td className="py-2">
+                  {m.name}
+                  {m.userId === user.id ? <span className="text-muted"> (you)</span> : null}
+                </td>
                 <td className="text-muted">{m.email}</td>
                 <td>
-                  {ROLE_LABELS[m.role]}
-                  {m.isOwner ? " · owner" : ""}
+                  {manages ? <RoleForm productionId={productionId} memberId={m.userId} role={m.role} version={m.version} name={m.name} /> : ROLE_LABELS[m.role]}
+                  {m.isOwner ? <span className="text-xs text-muted"> · owner</span> : null}
                 </td>
+                {manages ? <td>{<RemoveForm productionId={productionId} memberId={m.userId} name={m.name} />}</td> : null}
               </tr>
             ))}
           </tbody>
         </table>
-        <p className="mt-4 text-xs text-muted">
-          {can(member, "team.manage")
-            ? "Invitations and role changes arrive in a later release; for now the team is set when the production is created."
-            : "Only the production's owner can invite people and change roles."}
-        </p>
+        {manages ? null : <p className="mt-4 text-xs text-muted">Only the production&apos;s owner can invite people and change roles.</p>}
       </Card>
+      {manages ? (
+        <>
+          <Card title="Invite someone">
+            <p className="mb-3 text-sm text-muted">They receive an e-mail with a link that works once and expires after a week.</p>
+            <InviteForm productionId={productionId} />
+          </Card>
+          <Card title="Open invitations">
+            {invitations.length === 0 ? (
+              <p className="text-sm text-muted">No invitations are waiting.</p>
+            ) : (
+              <ul className="flex flex-col divide-y divide-line text-sm">
+                {invitations.map((i) => (
+                  <li key={i.id} className="flex flex-wrap items-center justify-between gap-2 py-2">
+                    <span>
+                      {i.email} · {ROLE_LABELS[i.role]}
+                      <span className="text-xs text-muted"> · expires {new Date(i.expiresAt).toUTCString().slice(0, 16)}</span>
+                    </span>
+                    <InvitationForms productionId={productionId} invitationId={i.id} email={i.email} />
+                  </li>
+                ))}
+              </ul>
+            )}
+          </Card>
+        </>
+      ) : null}
     </main>
   );
 }
