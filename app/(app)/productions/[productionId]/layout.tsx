@@ -6,8 +6,10 @@ import { ProductionTabs } from "@/components/production-tabs";
 export default async function ProductionLayout({ children, params }: { children: React.ReactNode; params: Promise<{ productionId: string }> }) {
   const { productionId, member } = await memberForPage((await params).productionId);
   const production = await requireProduction(productionId);
+  // A page's <main> centres itself with auto margins, which in a flex column turns off stretching: without
+  // w-full a wide child (a long unit strip) would widen the whole page past a tablet's screen.
   return (
-    <div className="flex flex-col">
+    <div className="flex flex-col [&>main]:w-full">
       <div className="no-print border-b border-line bg-surface px-4 pt-3">
         <div className="flex flex-wrap items-baseline justify-between gap-2">
           <h1 className="text-lg font-semibold" data-testid="production-name">

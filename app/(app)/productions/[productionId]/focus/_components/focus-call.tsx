@@ -52,7 +52,7 @@ export function FocusCall({ data }: { data: FocusPageData }) {
   const pdf = `/api/productions/${data.production.id}/focus/pdf?${toQuery({ position: positionId, perPage: 4, paper: "A4", tz: inBrowser ? browserTimeZone() : undefined })}`;
 
   return (
-    <main className="mx-auto flex max-w-5xl flex-col gap-3 px-3 py-3" data-testid="focus-call">
+    <main className="mx-auto flex w-full max-w-5xl flex-col gap-3 px-3 py-3" data-testid="focus-call">
       <div className="flex flex-wrap items-end gap-3">
         <label className="flex flex-col text-xs text-muted">
           Position

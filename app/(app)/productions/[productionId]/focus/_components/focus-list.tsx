@@ -27,7 +27,7 @@ export function FocusList({ data }: { data: FocusPageData }) {
   const callHref = `/productions/${data.production.id}/focus/call?${toQuery({ position: filter.position ?? shown[0]?.positionId })}`;
 
   return (
-    <main className="mx-auto max-w-7xl space-y-4 px-4 py-5">
+    <main className="mx-auto w-full max-w-7xl space-y-4 px-4 py-5">
       <div className="no-print flex flex-wrap items-end justify-between gap-4">
         <FilterBar data={data} filter={filter} onChange={setFilter} />
         <Link href={callHref} className="inline-flex min-h-10 items-center rounded-md bg-accent px-4 text-sm font-medium text-accent-ink hover:opacity-90" data-testid="open-focus-call">

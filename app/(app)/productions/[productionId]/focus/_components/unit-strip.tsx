@@ -1,5 +1,6 @@
 "use client";
 
+import { useEffect, useRef } from "react";
 import { POINT_HUNG_KINDS, type PositionKind } from "@/lib/rig/position-kinds";
 import type { FixtureDto } from "@/lib/dto/fixture";
 
@@ -15,10 +16,25 @@ export function orderForStrip(kind: PositionKind | undefined, units: FixtureDto[
 
 export function UnitStrip({ kind, units, currentId, onPick }: { kind: PositionKind | undefined; units: FixtureDto[]; currentId: number | null; onPick: (id: number) => void }) {
   const vertical = !!kind && POINT_HUNG_KINDS.has(kind);
+  const ref = useRef<HTMLElement>(null);
+  // The strip scrolls inside itself (any number of units, any screen): keep the current unit in its view
+  // by scrolling the strip alone (scrollIntoView would move the page as well).
+  useEffect(() => {
+    const nav = ref.current;
+    const button = nav?.querySelector<HTMLElement>('[aria-current="true"]');
+    if (!nav || !button) return;
+    const n = nav.getBoundingClientRect();
+    const b = button.getBoundingClientRect();
+    if (b.top < n.top) nav.scrollTop -= n.top - b.top + 6;
+    else if (b.bottom > n.bottom) nav.scrollTop += b.bottom - n.bottom + 6;
+    if (b.left < n.left) nav.scrollLeft -= n.left - b.left + 6;
+    else if (b.right > n.right) nav.scrollLeft += b.right - n.right + 6;
+  }, [currentId]);
   return (
     <nav
+      ref={ref}
       aria-label={vertical ? "Units, top to bottom" : "Units along the position, stage right to stage left"}
-      className={`flex gap-1.5 rounded-md border border-line bg-raised p-1.5 ${vertical ? "flex-col" : "overflow-x-auto"}`}
+      className={`flex gap-1.5 rounded-md border border-line bg-raised p-1.5 overflow-auto ${vertical ? "max-h-[70vh] flex-col" : "max-h-[10.5rem] flex-wrap"}`}
       data-testid="unit-strip"
     >
       {units.map((f) => {
