@@ -9,7 +9,7 @@ import { renderPdf } from "@/lib/pdf/focus-pdf";
 import { focusSheetsMarkup } from "@/lib/pdf/focus-sheets-markup";
 import { chromiumMissing, CHROMIUM_PATH } from "@/lib/pdf/browser";
 import { AppError } from "@/lib/errors";
-import { attachmentName } from "../attachment";
+import { focusFileName } from "@/lib/focus/file-name";
 
 type Ctx = { params: Promise<{ productionId: string }> };
 
@@ -34,7 +34,7 @@ export const GET = route(async (req, { params }: Ctx) => {
   return new Response(new Uint8Array(pdf), {
     headers: {
       "content-type": "application/pdf",
-      "content-disposition": `attachment; filename="${attachmentName(production.name, "pdf")}"`,
+      "content-disposition": `attachment; filename="${focusFileName({ production: production.name, positions: charts.map((c) => c.positionName), at: new Date(), timeZone: filter.tz, ext: "pdf" })}"`,
       "x-sheet-count": String(sheets.length),
       "cache-control": "no-store",
     },

@@ -3,7 +3,7 @@ import { requireMember } from "@/lib/auth/guards";
 import { focusFilterSchema, printOptionsSchema } from "@/lib/focus/filters";
 import { focusWorkbook } from "@/lib/focus/excel";
 import { loadFocusCharts } from "@/lib/pdf/focus-source";
-import { attachmentName } from "../attachment";
+import { focusFileName } from "@/lib/focus/file-name";
 
 type Ctx = { params: Promise<{ productionId: string }> };
 
@@ -16,7 +16,7 @@ export const GET = route(async (req, { params }: Ctx) => {
   return new Response(new Uint8Array(body), {
     headers: {
       "content-type": "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet",
-      "content-disposition": `attachment; filename="${attachmentName(production.name, "xlsx")}"`,
+      "content-disposition": `attachment; filename="${focusFileName({ production: production.name, positions: charts.map((c) => c.positionName), at: new Date(), timeZone: filter.tz, ext: "xlsx" })}"`,
       "cache-control": "no-store",
     },
   });
