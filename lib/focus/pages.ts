@@ -14,15 +14,28 @@ export const PAPER: Record<Paper, { cssSize: string; widthMm: number; heightMm: 
 
 export type Sheet = { positions: string[]; charts: FocusChart[]; page: number; of: number };
 
-export function paginate(charts: FocusChart[], perPage: ChartsPerPage, o: { newPagePerPosition: boolean }): Sheet[] {
-  const groups: FocusChart[][] = [];
+/** Charts grouped as they go onto sheets: runs of one position each, or one run when positions share sheets. */
+function runs<T extends { positionId: number }>(charts: T[], newPagePerPosition: boolean): T[][] {
+  const groups: T[][] = [];
   for (const c of charts) {
     const last = groups.at(-1);
-    if (last && (!o.newPagePerPosition || last[0].positionId === c.positionId)) last.push(c);
+    if (last && (!newPagePerPosition || last[0].positionId === c.positionId)) last.push(c);
     else groups.push([c]);
   }
+  return groups;
+}
+
+/**
+ * How many sheets `paginate` will make, from the charts' positions alone (in hanging order): what the
+ * page's PDF button promises before anything is drawn.
+ */
+export function sheetCount(charts: { positionId: number }[], perPage: ChartsPerPage, o: { newPagePerPosition: boolean }): number {
+  return runs(charts, o.newPagePerPosition).reduce((n, g) => n + Math.ceil(g.length / perPage), 0);
+}
+
+export function paginate(charts: FocusChart[], perPage: ChartsPerPage, o: { newPagePerPosition: boolean }): Sheet[] {
   const sheets: Omit<Sheet, "of">[] = [];
-  for (const g of groups) {
+  for (const g of runs(charts, o.newPagePerPosition)) {
     for (let i = 0; i < g.length; i += perPage) {
       const part = g.slice(i, i + perPage);
       sheets.push({ positions: [...new Set(part.map((c) => c.positionName))], charts: part, page: sheets.length + 1 });

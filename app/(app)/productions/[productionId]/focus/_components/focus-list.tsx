@@ -2,7 +2,7 @@
 
 import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
-import { useMemo } from "react";
+import { useMemo, useState } from "react";
 import { useFocusFixtures } from "@/hooks/use-focus";
 import { filterFixtures, focusFilterSchema, toQuery, type FocusFilter } from "@/lib/focus/filters";
 import { FilterBar } from "./filter-bar";
@@ -10,6 +10,8 @@ import { PrintOptions } from "./print-options";
 import { ChartCard } from "./chart-card";
 import { useCharts, useInBrowser } from "./use-charts";
 import type { FocusPageData } from "./types";
+
+const CHART_WINDOW = 12;
 
 export function FocusList({ data }: { data: FocusPageData }) {
   const router = useRouter();
@@ -19,7 +21,13 @@ export function FocusList({ data }: { data: FocusPageData }) {
   const filter: Partial<FocusFilter> = parsed.success ? parsed.data : {};
   const { data: fixtures } = useFocusFixtures(data.production.id, data.fixtures);
   const shown = useMemo(() => filterFixtures(fixtures, filter), [fixtures, filter.position, filter.point, filter.chFrom, filter.chTo, filter.status]); // eslint-disable-line react-hooks/exhaustive-deps
-  const { charts, landmarks } = useCharts(data, shown);
+  // Charts are drawn a window at a time: all of a big rig at once is tens of thousands of pixels and seconds
+  // of work on a tablet. The window resets when the filter changes.
+  const filterKey = params.toString();
+  const [windowed, setWindowed] = useState({ key: filterKey, size: CHART_WINDOW });
+  const size = windowed.key === filterKey ? windowed.size : CHART_WINDOW;
+  const visible = useMemo(() => shown.slice(0, size), [shown, size]);
+  const { charts, landmarks } = useCharts(data, visible);
   const inBrowser = useInBrowser();
   const focusedCount = shown.filter((f) => f.focused).length;
 
@@ -39,18 +47,30 @@ export function FocusList({ data }: { data: FocusPageData }) {
         <p className="text-sm text-muted" data-testid="chart-count" aria-live="polite">
           {shown.length} chart{shown.length === 1 ? "" : "s"} · {focusedCount} focused · in hanging order
         </p>
-        <PrintOptions productionId={data.production.id} filter={filter} count={shown.length} canExport={data.rights.export} />
+        <PrintOptions productionId={data.production.id} filter={filter} charts={shown} canExport={data.rights.export} />
       </div>
       {!inBrowser ? (
         <p className="text-sm text-muted">Drawing the charts…</p>
       ) : charts.length === 0 ? (
         <p className="rounded-md border border-line bg-surface p-6 text-sm text-muted">No fixtures match these filters.</p>
       ) : (
-        <div className="grid gap-4 lg:grid-cols-2" data-testid="chart-list">
-          {charts.map((c) => (
-            <ChartCard key={c.id} chart={c} landmarks={landmarks} units={data.production.displayUnits} />
-          ))}
-        </div>
+        <>
+          <div className="grid gap-4 lg:grid-cols-2" data-testid="chart-list">
+            {charts.map((c) => (
+              <ChartCard key={c.id} chart={c} landmarks={landmarks} units={data.production.displayUnits} />
+            ))}
+          </div>
+          {shown.length > charts.length && (
+            <div className="no-print flex flex-wrap items-center gap-3 rounded-md border border-line bg-surface p-3 text-sm" data-testid="chart-window">
+              <span className="text-muted">
+                Showing {charts.length} of {shown.length} charts.{filter.position == null ? " Choose a position above to see one position at a time, or" : ""}
+              </span>
+              <button type="button" className="min-h-10 rounded-md border border-line bg-raised px-3 text-ink" onClick={() => setWindowed({ key: filterKey, size: size + CHART_WINDOW })} data-testid="show-more-charts">
+                Show {Math.min(CHART_WINDOW, shown.length - charts.length)} more
+              </button>
+            </div>
+          )}
+        </>
       )}
     </main>
   );

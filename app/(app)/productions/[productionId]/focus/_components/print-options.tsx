@@ -2,19 +2,21 @@
 
 import { useState } from "react";
 import { toQuery, type FocusFilter } from "@/lib/focus/filters";
-import { CHARTS_PER_PAGE, type ChartsPerPage, type Paper } from "@/lib/focus/pages";
+import { CHARTS_PER_PAGE, sheetCount, type ChartsPerPage, type Paper } from "@/lib/focus/pages";
 import { browserTimeZone } from "./use-charts";
 
 const field = "min-h-10 rounded-md border border-line bg-surface px-2 text-sm text-ink";
 const linkButton = "inline-flex min-h-10 items-center rounded-md border border-line bg-surface px-3 text-sm font-medium text-ink hover:bg-raised";
 
 /** Layout for printing (charts a page, paper) and the three ways out: print view, PDF, Excel. */
-export function PrintOptions({ productionId, filter, count, canExport }: { productionId: number; filter: Partial<FocusFilter>; count: number; canExport: boolean }) {
+export function PrintOptions({ productionId, filter, charts, canExport }: { productionId: number; filter: Partial<FocusFilter>; charts: { positionId: number }[]; canExport: boolean }) {
   const [perPage, setPerPage] = useState<ChartsPerPage>(4);
   const [paper, setPaper] = useState<Paper>("A4");
   const [pdfBusy, setPdfBusy] = useState(false);
   const query = toQuery({ ...filter, perPage, paper, tz: browserTimeZone() });
-  const pages = Math.ceil(count / perPage);
+  const count = charts.length;
+  // The print view and the PDF start each position on a new sheet (their default), so count the same way.
+  const pages = sheetCount(charts, perPage, { newPagePerPosition: true });
   return (
     <div className="flex flex-wrap items-end gap-3" role="group" aria-label="Print">
       <label className="flex flex-col text-xs text-muted">
