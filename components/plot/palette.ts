@@ -2,6 +2,8 @@
 // low-glare dark theme. Pools are a warm light tone; nothing copies another program's colour code.
 export type PlotPalette = {
   dark: boolean;
+  /** Share of full strength pools are drawn at: --pool-dim in app/globals.css (dimmer in the dark theme). */
+  poolDim: number;
   canvas: string;
   surface: string;
   line: string;
@@ -27,8 +29,12 @@ export function readPalette(el: Element = document.documentElement): PlotPalette
   const css = getComputedStyle(el);
   const v = (n: string, fallback: string) => css.getPropertyValue(`--${n}`).trim() || fallback;
   const dark = el.classList.contains("dark");
+  // Canvases stop at half strength: their pools are already translucent washes that add up where they
+  // overlap, so the focus chart's 0.3 would leave a single pool hard to find.
+  const poolDim = Math.max(Number(v("pool-dim", "1")) || 1, 0.5);
   return {
     dark,
+    poolDim,
     canvas: v("canvas", "#f4f2ee"),
     surface: v("surface", "#ffffff"),
     line: v("line", "#d6d0c4"),
@@ -45,8 +51,10 @@ export function readPalette(el: Element = document.documentElement): PlotPalette
     poolOuter: dark ? "rgba(222,170,90,0.035)" : "rgba(230,150,30,0.035)",
     poolCore: dark ? "rgba(232,186,110,0.06)" : "rgba(240,170,40,0.06)",
     poolEdge: dark ? "rgba(222,170,90,0.45)" : "rgba(170,100,10,0.45)",
-    poolOuterStrong: dark ? "rgba(222,170,90,0.16)" : "rgba(230,150,30,0.18)",
-    poolCoreStrong: dark ? "rgba(232,186,110,0.22)" : "rgba(240,170,40,0.28)",
+    // The strong (chosen) pools are the bright ones on a dark plot: they take the theme's dimming; the
+    // faint wash is already near the floor of what reads.
+    poolOuterStrong: dark ? `rgba(222,170,90,${(0.16 * poolDim).toFixed(3)})` : "rgba(230,150,30,0.18)",
+    poolCoreStrong: dark ? `rgba(232,186,110,${(0.22 * poolDim).toFixed(3)})` : "rgba(240,170,40,0.28)",
     area: dark ? "rgba(111,156,106,0.12)" : "rgba(47,107,58,0.08)",
     selection: dark ? "#d9a441" : "#1d6fb8",
   };

@@ -6,7 +6,7 @@ const VARIANTS: Record<Variant, string> = {
   primary: "bg-accent text-accent-ink hover:opacity-90",
   secondary: "border border-line bg-surface text-ink hover:bg-raised",
   quiet: "text-muted hover:text-ink",
-  danger: "bg-danger text-white hover:opacity-90",
+  danger: "bg-danger text-danger-ink hover:opacity-90",
 };
 
 export function Button({ variant = "primary", className = "", ...props }: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant }) {

@@ -22,7 +22,8 @@ function stagePalette(base: PlotPalette): PlotPalette {
 
 /** A pool's fill for a level: warm light whose strength follows the level (times the exposure); the core is brighter. */
 function litPalette(p: PlotPalette, level: number, exposure: number): PlotPalette {
-  const a = (k: number) => Math.min(1, k * level * exposure).toFixed(3);
+  // poolDim: the dark theme draws the look dimmer (app/globals.css --pool-dim), for a dark house.
+  const a = (k: number) => Math.min(1, k * level * exposure * p.poolDim).toFixed(3);
   return { ...p, poolOuter: `rgba(255,170,90,${a(0.3)})`, poolCore: `rgba(255,200,130,${a(0.3)})`, poolEdge: `rgba(255,200,130,${a(0.25)})` };
 }
 
