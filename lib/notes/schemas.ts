@@ -65,8 +65,6 @@ export const channelCheckSchema = z
 export type ChannelCheckInput = z.output<typeof channelCheckSchema>;
 
 /** A point on the plan (metres from the datum) in a cue's state. */
-export const spotQuerySchema = z.object({
-  x: z.coerce.number({ error: "x must be a number of metres" }).min(-200).max(200),
-  y: z.coerce.number({ error: "y must be a number of metres" }).min(-200).max(200),
-  cueId: z.coerce.number({ error: "cueId must be an id" }).int().positive().optional(),
-});
+const planCoord = (what: string) =>
+  z.number({ error: `${what} must be a number of metres` }).min(-200, { error: `${what} is more than 200 m from the datum` }).max(200, { error: `${what} is more than 200 m from the datum` });
+export const spotRequestSchema = z.object({ x: planCoord("x"), y: planCoord("y"), cueId: id("Cue").optional() }).strict();

@@ -119,6 +119,17 @@ const EXPECTED: Record<string, Scope> = {
   "POST /api/productions/[productionId]/studies/coverage": ALL,
   "POST /api/productions/[productionId]/studies/coverage/areas": ALL,
   "POST /api/productions/[productionId]/studies/shadows": ALL,
+  // Notes: any member writes and changes open notes (closing by kind is checked on the row, see notes tests);
+  // the current cue is kept by the stage manager or board operator; the channel check is the crew's.
+  "GET /api/productions/[productionId]/notes": ALL,
+  "POST /api/productions/[productionId]/notes": ALL,
+  "PATCH /api/productions/[productionId]/notes/[noteId]": ALL,
+  "DELETE /api/productions/[productionId]/notes/[noteId]": ALL,
+  "GET /api/productions/[productionId]/notes/current-cue": ALL,
+  "PUT /api/productions/[productionId]/notes/current-cue": ["designer", "electrician", "stageManager"],
+  "GET /api/productions/[productionId]/notes/work-call": ALL,
+  "POST /api/productions/[productionId]/notes/channel-check": DE,
+  "POST /api/productions/[productionId]/notes/spot": ALL,
   // Team: everyone sees who is on it; invitations, role changes and removal are the owner's (the demo's owner is its designer).
   "GET /api/productions/[productionId]/team": ALL,
   "PATCH /api/productions/[productionId]/team/[memberId]": D,
