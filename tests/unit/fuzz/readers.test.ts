@@ -118,6 +118,13 @@ describe(".xlsx reader", () => {
 });
 
 describe("USITT ASCII reader", () => {
+  it("a line that starts with delimiters is read like any other (found by the fuzzing below: it threw a TypeError)", () => {
+    // REFERENCE.md: space , / < > = @ are interchangeable delimiters and a run of them counts as one.
+    const r = readUsittAscii("IDENT 3:0\r\n, CUE 1\r\n@ CHAN 1@50\r\n,,,\r\nENDDATA\r\n");
+    expect(r.errors).toEqual([]);
+    expect(r.cues.map((c) => [c.number, c.levels])).toEqual([[1, { 1: 50 }]]);
+  });
+
   // Lines built from the standard's keywords and delimiters (shared REFERENCE.md), with junk mixed in.
   const KEYWORDS = ["IDENT", "CUE", "PART", "UP", "DOWN", "FOLLOWON", "FOLLOW", "LINK", "TEXT", "CHAN", "PATCH", "GROUP", "ENDDATA", "CLEAR", "$TL-TEXT", "$TL-NOTE", "$TL-PAGE", "$TL-BLOCK", "$TL-PARTTEXT", "$OTHER", "!", "MANUFACTURER", "CONSOLE", "bogus"];
   const ARGS = ["1", "2.5", "0", "-1", "3:0", "1@50", "2@FL", "3@H80", "4@HZZ", "5@101", "99999@1", "100000@1", "1/2", "1<2", "1:30", "25:00:00", ".5", "x", "\\u{1F600}", "\\n", "", "1 1 1"];
