@@ -124,14 +124,7 @@ export function buildFocusChart(
     row("deckBand", "Soft band at deck", bandWords(g.deck, units)),
     row("headBand", "Soft band at head", bandWords(g.head, units)),
   ];
-  const beam = [
-    row("edge", "Edge", edgeWord(g.coneDeg, g.softnessDeg)),
-    row("zoom", "Zoom", `${round1(g.coneDeg)}° cone, ${round1(g.softnessDeg)}° soft`),
-    row("field", "Field", shape ? (shape === "flat" ? "flat" : "peaked") : null),
-    row("iris", "Iris", f.irisPercent == null ? "open" : `${round1(f.irisPercent)} %`),
-    row("barnDoors", "Barn doors", barnDoorsValue(f, o.extras, cuts)),
-    row("goboOrientation", "Gobo rotation", goboValue(f, o.extras)),
-  ];
+  const beam = beamRows(f, { shape, barnDoors: barnDoorsValue(f, o.extras, cuts), gobo: goboValue(f, o.extras) });
   const who = f.focusedBy != null ? o.userNames?.[f.focusedBy] ?? "a former team member" : null;
   const focusedLine = f.focused
     ? `Focused${f.focusedAt ? ` ${formatStamp(f.focusedAt, o.timeZone)}` : ""}${who ? ` by ${who}` : ""}`
@@ -161,6 +154,50 @@ function barnDoorsValue(f: FixtureDto, extras: ChartExtras | undefined, cuts: Cu
 function goboValue(f: FixtureDto, extras: ChartExtras | undefined): string {
   if (f.goboRotationDeg != null) return f.gobo ? goboRotationWords(f.goboRotationDeg) : `${goboRotationWords(f.goboRotationDeg)} (no gobo named)`;
   return f.gobo ? extras?.goboOrientation ?? "not recorded" : "no gobo";
+}
+
+/**
+ * The beam's rows follow what the unit has to set on the deck: a profile its edge (barrel), zoom (when its
+ * lens zooms), iris and gobo; a fresnel or PC its spot/flood travel and barn doors; a PAR its lamp's
+ * rotation; an LED or moving wash its zoom. A row a family has no control for is left off.
+ */
+function beamRows(f: FixtureDto, o: { shape: "flat" | "peaked" | null; barnDoors: string; gobo: string }): ChartRow[] {
+  const g = f.computed;
+  const zooms = g.coneRange.max > g.coneRange.min;
+  const cone = `${round1(g.coneDeg)}° cone`;
+  const field = row("field", "Field", o.shape ? (o.shape === "flat" ? "flat" : "peaked") : null);
+  const zoom = zooms ? row("zoom", "Zoom", `${cone}, ${round1(g.softnessDeg)}° soft`) : row("cone", "Lens", `fixed, ${cone}`);
+  const barnDoors = row("barnDoors", "Barn doors", o.barnDoors);
+  switch (f.family) {
+    case "profile":
+    case "followspot":
+      return [
+        row("edge", "Edge", edgeWord(g.coneDeg, g.softnessDeg)),
+        zoom,
+        field,
+        row("iris", "Iris", f.irisPercent == null ? "open" : `${round1(f.irisPercent)} %`),
+        barnDoors,
+        row("goboOrientation", "Gobo rotation", o.gobo),
+      ];
+    case "fresnel":
+      return [row("spotFlood", "Spot/flood", spotFloodWords(g.coneDeg, g.coneRange)), field, barnDoors];
+    case "par":
+      // No stored field for the lamp's turn yet: the electrician records it in the as-focused notes.
+      return [row("cone", "Lens", cone), field, row("lampRotation", "Lamp rotation", "not recorded (see as-focused notes)"), barnDoors];
+    default:
+      // LED and moving washes, cyc units and anything unknown: the cone (zoom where it zooms) and the field.
+      return [zoom, field, barnDoors];
+  }
+}
+
+/** Where a fresnel or PC sits in its travel, in the words used on the deck. */
+export function spotFloodWords(coneDeg: number, range: { min: number; max: number }): string {
+  const cone = `${round1(coneDeg)}° cone`;
+  if (!(range.max > range.min)) return `fixed, ${cone}`;
+  const t = (coneDeg - range.min) / (range.max - range.min);
+  if (t <= 0.02) return `full spot, ${cone}`;
+  if (t >= 0.98) return `full flood, ${cone}`;
+  return `${Math.round(t * 100)} % toward flood, ${cone}`;
 }
 
 function round1(v: number): string {

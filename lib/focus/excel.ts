@@ -13,8 +13,11 @@ export function neutraliseCell(value: string): string {
 
 export type SheetColumn = { header: string; key: string; width: number };
 
-export function focusColumns(sample: FocusChart | undefined): SheetColumn[] {
-  const fromRows = sample ? [...sample.identity, ...sample.focus, ...sample.beam].map((r) => ({ header: r.label, key: r.key, width: r.key === "channel" || r.key === "unit" ? 8 : 24 })) : [];
+/** Every row key the charts use, in first-seen order: beam rows differ by family, so one chart is not enough. */
+export function focusColumns(charts: FocusChart[]): SheetColumn[] {
+  const seen = new Map<string, string>();
+  for (const c of charts) for (const r of [...c.identity, ...c.focus, ...c.beam]) if (!seen.has(r.key)) seen.set(r.key, r.label);
+  const fromRows = [...seen].map(([key, header]) => ({ header, key, width: key === "channel" || key === "unit" ? 8 : 24 }));
   return [
     ...fromRows,
     { header: "Cuts", key: "cuts", width: 50 },
@@ -43,7 +46,7 @@ export async function focusWorkbook(charts: FocusChart[], o: { productionName: s
   const wb = new ExcelJS.Workbook();
   wb.creator = "Throwline";
   const ws = wb.addWorksheet("Focus charts", { views: [{ state: "frozen", ySplit: 1 }] });
-  ws.columns = focusColumns(charts[0]);
+  ws.columns = focusColumns(charts);
   ws.getRow(1).font = { bold: true };
   for (const c of charts) ws.addRow(focusRow(c));
   ws.headerFooter.oddHeader = neutraliseCell(o.productionName);

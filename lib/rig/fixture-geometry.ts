@@ -24,7 +24,12 @@ export type FixtureGeometry = {
   lensHeight: number;
   lensHeightIsDefault: boolean;
   coneDeg: number;
+  /** True where the unit has no cone of its own and takes its type's widest. */
+  coneIsDefault: boolean;
   softnessDeg: number;
+  softnessIsDefault: boolean;
+  /** The type's cone range; equal ends mean a fixed-angle lens (no zoom, no spot/flood travel). */
+  coneRange: { min: number; max: number };
   source: Vec3;
   focus: Vec3 | null;
   throw: number | null;
@@ -45,7 +50,10 @@ export function computeFixtureGeometry(f: GeometryInput, headHeight: number): Fi
   const softnessDeg = f.softnessDeg ?? f.type.defaultSoftnessDeg;
   const source: Vec3 = { x: f.x, y: f.y, z: lensHeight };
   const mark = f.focusPoint ?? (f.focusX != null && f.focusY != null ? { x: f.focusX, y: f.focusY } : null);
-  const base = { lensHeight, lensHeightIsDefault: f.lensHeight == null, coneDeg, softnessDeg, source };
+  const base = {
+    lensHeight, lensHeightIsDefault: f.lensHeight == null, coneDeg, coneIsDefault: f.coneDeg == null, softnessDeg, softnessIsDefault: f.softnessDeg == null,
+    coneRange: { min: f.type.coneMinDeg, max: f.type.coneMaxDeg }, source,
+  };
   if (!mark) return { ...base, focus: null, throw: null, tiltDeg: null, panDeg: null, deck: null, head: null };
 
   const focus: Vec3 = { x: mark.x, y: mark.y, z: f.aim === "head" ? headHeight : 0 };

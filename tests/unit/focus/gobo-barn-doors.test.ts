@@ -47,7 +47,7 @@ describe("barn doors in words", () => {
 
 describe("the chart's rows", () => {
   it("uses the fixture's own gobo rotation and barn doors before an accessory's note", () => {
-    const f = makeFixture({ gobo: "leaf breakup", goboRotationDeg: 90, barnDoorBottom: "off the lip", family: "fresnel" });
+    const f = makeFixture({ gobo: "leaf breakup", goboRotationDeg: 90, barnDoorBottom: "off the lip", family: "profile" }); // a fresnel takes no gobo, so its chart has no gobo row
     const chart = buildFocusChart(f, PRODUCTION, { extras: { accessories: ["barn doors"], barnDoors: "fitted", goboOrientation: "slot A" } });
     expect(value(chart.beam, "goboOrientation")).toBe("90° clockwise, looking along the beam");
     expect(value(chart.beam, "barnDoors")).toBe("bottom off the lip");
