@@ -66,10 +66,20 @@ export function linearNeutral(currents: number[]): number | null {
   return null;
 }
 
-function phaseTotals(circuits: CircuitLoad[], e: EffectiveElectrical) {
-  const phases: PhaseLoad[] = e.phases.map((phase) => ({ phase, loadVA: 0, amps: 0, circuits: 0 }));
+/**
+ * The phases circuits can sit on: the supply's, or for a supply set by hand the phase names the circuits
+ * use (one phase when none names any), since the system's shape is not known.
+ */
+export function supplyPhases(e: EffectiveElectrical, circuits: { phase: string | null }[]): string[] {
+  if (e.supply !== "by-hand") return e.phases;
+  const named = [...new Set(circuits.map((c) => c.phase?.trim()).filter((p): p is string => !!p))].sort();
+  return named.length ? named : ["L"];
+}
+
+function phaseTotals(circuits: CircuitLoad[], names: string[]) {
+  const phases: PhaseLoad[] = names.map((phase) => ({ phase, loadVA: 0, amps: 0, circuits: 0 }));
   for (const c of circuits) {
-    const p = e.phases.length === 1 ? phases[0] : phases.find((x) => c.phase != null && norm(x.phase) === norm(c.phase));
+    const p = names.length === 1 ? phases[0] : phases.find((x) => c.phase != null && norm(x.phase) === norm(c.phase));
     if (!p) continue;
     p.loadVA += c.loadVA;
     p.amps += c.amps;
@@ -146,11 +156,12 @@ export function checkPower(input: { fixtures: CheckFixture[]; circuits: CheckCir
     };
   });
 
-  if (e.phases.length > 1) {
-    const unphased = circuits.filter((c) => c.phase == null || !e.phases.some((p) => norm(p) === norm(c.phase as string)));
-    if (unphased.length) findings.push({ area: "power", severity: "warning", subject: "Phases", message: `${unphased.length} circuit${unphased.length === 1 ? " has" : "s have"} no phase of this supply (${e.phases.join(", ")}): left out of the phase totals.` });
+  const phaseNames = supplyPhases(e, input.circuits);
+  if (phaseNames.length > 1) {
+    const unphased = circuits.filter((c) => c.phase == null || !phaseNames.some((p) => norm(p) === norm(c.phase as string)));
+    if (unphased.length) findings.push({ area: "power", severity: "warning", subject: "Phases", message: `${unphased.length} circuit${unphased.length === 1 ? " has" : "s have"} no phase of this supply (${phaseNames.join(", ")}): left out of the phase totals.` });
   }
-  const totals = phaseTotals(circuits, e);
+  const totals = phaseTotals(circuits, phaseNames);
   if (totals.imbalance != null && totals.imbalance > IMBALANCE_WARNING) {
     findings.push({ area: "power", severity: "warning", subject: "Phases", message: `The phases are ${Math.round(totals.imbalance * 100)} % out of balance (largest vs smallest phase current): move circuits to even them out.` });
   }

@@ -102,3 +102,15 @@ describe("phases", () => {
     expect(r.findings.some((f) => f.subject === "Phases" && /out of balance/.test(f.message))).toBe(true);
   });
 });
+
+describe("a supply set by hand", () => {
+  it("takes its phases from the circuits, or one phase when none is named", () => {
+    const byHand = effectiveElectrical({ electricalCode: "none", supplySystem: "by-hand", voltage: 230, derating: null });
+    const one = checkPower({ fixtures: [unit({ id: 1, circuit: "1" })], circuits: [{ id: 1, name: "1", ratingA: 16, phase: null, dimmed: true }], electrical: byHand });
+    expect(one.phases.map((p) => p.phase)).toEqual(["L"]);
+    expect(one.phases[0].amps).toBeCloseTo(750 / 230, 9); // P = V·I
+    expect(one.findings.some((f) => f.subject === "Phases")).toBe(false);
+    const two = checkPower({ fixtures: [], circuits: [{ id: 1, name: "1", ratingA: 16, phase: "X", dimmed: true }, { id: 2, name: "2", ratingA: 16, phase: "Y", dimmed: true }], electrical: byHand });
+    expect(two.phases.map((p) => p.phase)).toEqual(["X", "Y"]);
+  });
+});
