@@ -84,3 +84,17 @@ export function exportValue(c: RigColumn, f: FixtureDto, units: Units): string |
   if (c.kind === "angle" || c.kind === "number") return round(v, 4);
   return v;
 }
+
+/**
+ * The value in effect where a unit stores none of its own: the type's widest cone and default softness,
+ * or the lens height the position's trim gives. The table shows it marked as inherited; exports keep the
+ * stored (empty) value so a file still reads back as "use the default".
+ */
+export type Inherited = { value: number; from: "type" | "trim" };
+export function inheritedValue(columnId: string, f: FixtureDto): Inherited | null {
+  const g = f.computed;
+  if (columnId === "coneDeg" && g.coneIsDefault) return { value: g.coneDeg, from: "type" };
+  if (columnId === "softnessDeg" && g.softnessIsDefault) return { value: g.softnessDeg, from: "type" };
+  if (columnId === "lensHeight" && g.lensHeightIsDefault) return { value: g.lensHeight, from: "trim" };
+  return null;
+}

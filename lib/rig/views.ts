@@ -43,8 +43,8 @@ export const RIG_VIEWS: RigView[] = [
   {
     id: "focus",
     label: "Focus values",
-    description: "Marks, cones and the computed throw and pools at the deck and at head height.",
-    columns: ["position", "unitNumber", "type", "focusPoint", "focusX", "focusY", "aim", "coneDeg", "softnessDeg", "goboRotationDeg", "throw", "deckLength", "deckWidth", "headLength", "headWidth", "softBandFar", "focused", "focusNotes"],
+    description: "Marks, lens heights, cones and the computed throw and pools at the deck and at head height; values a unit takes from its type or its position's trim are marked as inherited.",
+    columns: ["position", "unitNumber", "type", "focusPoint", "focusX", "focusY", "aim", "lensHeight", "coneDeg", "softnessDeg", "goboRotationDeg", "throw", "deckLength", "deckWidth", "headLength", "headWidth", "softBandFar", "focused", "focusNotes"],
     sort: [{ id: "position" }, { id: "unitNumber" }],
   },
   { id: "all", label: "Every column", description: "Every stored field and every computed value.", columns: ALL, sort: [{ id: "position" }, { id: "unitNumber" }] },

@@ -1,6 +1,7 @@
 // How a rig value reads on screen and how typed text becomes a value, per column kind.
 import { formatLength, parseAngle, parseLength } from "@/lib/optics";
-import type { ColumnKind, Units } from "@/lib/rig/columns";
+import { inheritedValue, type ColumnKind, type Units } from "@/lib/rig/columns";
+import type { FixtureDto } from "@/lib/dto/fixture";
 
 export function showValue(kind: ColumnKind, v: unknown, units: Units): string {
   if (v === null || v === undefined || v === "") return "";
@@ -35,4 +36,11 @@ export function editText(kind: ColumnKind, v: unknown, units: Units): string {
   if (v === null || v === undefined) return "";
   if (kind === "length" && typeof v === "number") return units === "metric" ? String(Number(v.toFixed(3))) : formatLength(v, units);
   return String(v);
+}
+
+/** An empty cell's value in effect ("26° from type"), or null where the unit has none to inherit. */
+export function inheritedText(kind: ColumnKind, columnId: string, f: FixtureDto, units: Units): { text: string; from: string } | null {
+  const inherited = inheritedValue(columnId, f);
+  if (!inherited) return null;
+  return { text: showValue(kind, inherited.value, units), from: inherited.from === "type" ? "from type" : "from trim" };
 }

@@ -7,6 +7,7 @@ import type { RigColumn, Units } from "@/lib/rig/columns";
 import { ApiError } from "@/lib/http/api-client";
 import { useUpdateRigFixture } from "@/hooks/use-rig";
 import { editText, readTyped, showValue } from "./cell-value";
+import { EmptyOrInherited } from "./inherited-value";
 
 export type Choice = { id: number; name: string };
 
@@ -72,7 +73,7 @@ export function EditableCell({ fixture, column, units, productionId, choices }: 
     return (
       <span>
         <button type="button" aria-label={`Edit ${label}`} className="min-h-6 w-full min-w-10 rounded px-1 text-left hover:bg-raised" onClick={() => { setText(editText(column.kind, value, units)); setEditing(true); setMessage(null); }}>
-          {showValue(column.kind, value, units) || <span className="text-muted print:hidden">–</span>}
+          {showValue(column.kind, value, units) || <EmptyOrInherited column={column} fixture={fixture} units={units} />}
         </button>
         {note}
       </span>

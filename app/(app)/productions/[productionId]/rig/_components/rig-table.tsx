@@ -9,6 +9,7 @@ import type { FixtureDto } from "@/lib/dto/fixture";
 import { RIG_COLUMNS, headerWithUnit, type Units } from "@/lib/rig/columns";
 import { compareUnitNumbers } from "@/lib/rig/unit-number";
 import { EditableCell, type Choice } from "./editable-cell";
+import { EmptyOrInherited } from "./inherited-value";
 import { showValue } from "./cell-value";
 
 export type TableState = {
@@ -59,7 +60,7 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
         editable.includes(c.id) ? (
           <EditableCell fixture={row.original} column={c} units={units} productionId={productionId} choices={c.id === "position" ? choices.position : c.id === "type" ? choices.type : undefined} />
         ) : (
-          <span className={c.importKey ? "" : "text-muted"}>{showValue(c.kind, c.value(row.original), units)}</span>
+          <span className={c.importKey ? "" : "text-muted"}>{showValue(c.kind, c.value(row.original), units) || <EmptyOrInherited column={c} fixture={row.original} units={units} dash={false} />}</span>
         ),
       meta: { computed: !c.importKey },
     }));
