@@ -20,6 +20,7 @@ export function CueTools({ productionId, cues, show, selected, selectedIndex, on
   const [copyFrom, setCopyFrom] = useState("");
   const [range, setRange] = useState({ from: "", to: "", start: "", step: "1" });
   const [message, setMessage] = useState<{ tone: "ok" | "error"; text: string } | null>(null);
+  const [confirmingId, setConfirmingId] = useState<number | null>(null);
   const act = async (fn: () => Promise<string>) => {
     try {
       setMessage({ tone: "ok", text: await fn() });
@@ -54,12 +55,22 @@ export function CueTools({ productionId, cues, show, selected, selectedIndex, on
       <div className="flex flex-col gap-3 text-sm">
         <div className="flex flex-wrap gap-2">
           <Button type="button" variant="secondary" onClick={insertAfter}>Insert a cue after {selected ? formatCueNumber(selected.number) : "the last"}</Button>
-          {selected ? (
-            <Button type="button" variant="danger" onClick={() => act(async () => (await remove.mutateAsync({ id: selected.id, version: selected.version }), `Cue ${formatCueNumber(selected.number)} deleted.`))}>
+          {selected && confirmingId !== selected.id ? (
+            <Button type="button" variant="danger" onClick={() => setConfirmingId(selected.id)} data-testid="delete-cue">
               Delete cue {formatCueNumber(selected.number)}
             </Button>
           ) : null}
         </div>
+        {selected && confirmingId === selected.id ? (
+          // A cue's levels, label and timing go with it and there is no undo: ask once, in place.
+          <div role="alertdialog" aria-labelledby="delete-cue-question" className="flex flex-wrap items-center gap-2 rounded-md border border-danger/60 bg-surface p-2" data-testid="delete-cue-confirm">
+            <span id="delete-cue-question">Delete cue {formatCueNumber(selected.number)} with its levels and notes? This cannot be undone.</span>
+            <Button type="button" variant="danger" onClick={() => { setConfirmingId(null); void act(async () => (await remove.mutateAsync({ id: selected.id, version: selected.version }), `Cue ${formatCueNumber(selected.number)} deleted.`)); }}>
+              Yes, delete cue {formatCueNumber(selected.number)}
+            </Button>
+            <Button type="button" variant="secondary" onClick={() => setConfirmingId(null)} autoFocus>Keep it</Button>
+          </div>
+        ) : null}
         {selected ? (
           <form className="flex flex-wrap items-end gap-2" onSubmit={(e) => (e.preventDefault(), copyLevels())}>
             <label className="flex flex-col gap-1">Copy the look of cue<input value={copyFrom} onChange={(e) => setCopyFrom(e.target.value)} className={input} aria-label="Copy the look of cue" /></label>
