@@ -75,3 +75,17 @@ describe("deleting a cue", () => {
     await eventually(() => page.getByTestId("cue-row-2").count()).toBe(0);
   }, 120_000);
 });
+
+describe("the not-found page", () => {
+  it("keeps the header with the user's name and Sign out, for a stray address and a production not theirs", async () => {
+    const { page } = designer;
+    for (const address of ["/no-such-page", "/productions/999999999"]) {
+      const r = await page.goto(address);
+      expect(r?.status(), address).toBe(404);
+      await expect(page.getByTestId("signed-in-as").textContent()).resolves.toBe("Maren Oduya");
+      await expect(page.getByRole("button", { name: "Sign out" }).count()).resolves.toBe(1);
+    }
+    await screenshot(page, "deck-not-found");
+    expect((await page.request.get("/favicon.ico")).status()).toBe(200);
+  }, 60_000);
+});
