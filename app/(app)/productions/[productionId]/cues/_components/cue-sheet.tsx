@@ -1,6 +1,7 @@
 "use client";
 
-import { useMemo, useState } from "react";
+import { useEffect, useMemo, useState } from "react";
+import { flushSync } from "react-dom";
 import Link from "next/link";
 import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from "@tanstack/react-table";
 import { useCueSheet, useUpdateCallNote } from "@/hooks/use-cues";
@@ -46,12 +47,39 @@ function ThenCell({ row }: { row: CueSheetRow }) {
   return <span className="flex flex-col">{lines.map((l) => <span key={l} className={l.includes("no such") ? "text-danger" : ""}>{l}</span>)}</span>;
 }
 
+/** A CSS string literal: quotes, backslashes and line breaks escaped, so any production name is safe in `content`. */
+const cssString = (text: string) => `"${text.replace(/[\\"]/g, "\\$&").replace(/[\r\n]+/g, " ")}"`;
+
+/**
+ * Page margin boxes for the printed sheet: the production top left, when it was printed top right, and
+ * "page x of y" at the foot (Chromium fills counter(pages) when it lays out the print).
+ */
+export function printPageCss(o: { paper: string; productionName: string; printedAt: string }): string {
+  const box = "font: 8pt system-ui, sans-serif; color: #000;";
+  return `@page { size: ${o.paper}; margin: 16mm 12mm;
+  @top-left { content: ${cssString(o.productionName)} " · cue sheet"; ${box} }
+  @top-right { content: ${cssString(`printed ${o.printedAt}`)}; ${box} }
+  @bottom-right { content: "page " counter(page) " of " counter(pages); ${box} }
+}`;
+}
+
+const stamp = (d: Date) => d.toLocaleString(undefined, { day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit" });
+
 /** The stage manager's cue sheet: read-only except page and call note; prints on A4 or Letter. */
 export function CueSheetView({ productionId, productionName, canEditNotes, canWriteCues }: { productionId: number; productionName: string; canEditNotes: boolean; canWriteCues: boolean }) {
   const { data, error } = useCueSheet(productionId);
   const update = useUpdateCallNote(productionId);
   const [paper, setPaper] = useState<"A4" | "letter">("A4");
   const [message, setMessage] = useState<string | null>(null);
+  // The printed time is the moment of printing, not of opening the page: refreshed as the print starts.
+  // Empty on the server: its clock and time zone are not the reader's (and the HTML must match the first render).
+  const [printedAt, setPrintedAt] = useState("");
+  useEffect(() => {
+    setPrintedAt(stamp(new Date()));
+    const before = () => flushSync(() => setPrintedAt(stamp(new Date())));
+    window.addEventListener("beforeprint", before);
+    return () => window.removeEventListener("beforeprint", before);
+  }, []);
 
   const save = async (row: CueSheetRow, field: "page" | "callNote", value: string) => {
     const next = value.trim() === "" ? null : value.trim();
@@ -90,13 +118,14 @@ export function CueSheetView({ productionId, productionName, canEditNotes, canWr
   if (error) return <p role="alert" className="text-danger">{(error as Error).message}</p>;
   return (
     <section aria-labelledby="cue-sheet-title" className="mx-auto max-w-7xl">
-      <style>{`@page { size: ${paper}; margin: 12mm; }`}</style>
+      <style>{printPageCss({ paper, productionName, printedAt })}</style>
       <header className="mb-3 flex flex-wrap items-end justify-between gap-3">
         <div>
           <h2 id="cue-sheet-title" className="text-xl font-semibold">Cue sheet</h2>
           <p className="text-sm text-muted print:text-black">
             <span className="hidden print:inline">{productionName} · </span>
-            {data?.rows.length ?? 0} cues in running order (links followed) · standbys grouped when a cue follows within 5 s{canEditNotes ? " · you can edit page and call note" : ""}
+            {data?.rows.length ?? 0} cues in running order (links followed)
+            <span className="print:hidden"> · standbys grouped when a cue follows within 5 s{canEditNotes ? " · you can edit page and call note" : ""}</span>
           </p>
         </div>
         <div className="no-print flex items-center gap-2">
