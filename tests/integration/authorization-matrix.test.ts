@@ -22,6 +22,8 @@ const EXPECTED: Record<string, Scope> = {
   "POST /api/auth/sign-in": "public",
   "POST /api/auth/sign-out": "public",
   "POST /api/auth/sign-up": "public",
+  "POST /api/auth/password-reset": "public", // the same answer whether or not the address has an account
+  "POST /api/auth/password-reset/confirm": "public", // the link's token is the proof
   "GET /api/health": "public",
   "GET /api/productions": "signed-in",
   "POST /api/productions": "signed-in",
@@ -130,6 +132,8 @@ const EXPECTED: Record<string, Scope> = {
   "GET /api/productions/[productionId]/notes/work-call": ALL,
   "POST /api/productions/[productionId]/notes/channel-check": DE,
   "POST /api/productions/[productionId]/notes/spot": ALL,
+  "GET /api/productions/[productionId]/notes/show-reports": ALL,
+  "POST /api/productions/[productionId]/notes/show-reports": ["stageManager"],
   // Team: everyone sees who is on it; invitations, role changes and removal are the owner's (the demo's owner is its designer).
   "GET /api/productions/[productionId]/team": ALL,
   "PATCH /api/productions/[productionId]/team/[memberId]": D,

@@ -20,6 +20,10 @@ export default async function SignInPage() {
         <Link href="/sign-up" className="text-accent underline">
           Create an account
         </Link>
+        {" · "}
+        <Link href="/reset-password" className="text-accent underline">
+          Forgot your password?
+        </Link>
       </p>
     </section>
   );
