@@ -9,7 +9,7 @@ import os from "node:os";
 import path from "node:path";
 import { ensurePackages, log } from "./lib/system.mjs";
 import { ensureNodeModules } from "./lib/node-modules.mjs";
-import { startMariaDb } from "./lib/mariadb.mjs";
+import { startMariaDb, stopRunningMariaDb } from "./lib/mariadb.mjs";
 import { ROOT, bin, buildIfStale, freePort, migrate, seedWhenEmpty, waitForHttp } from "./lib/project.mjs";
 import { startMailStandIn } from "./lib/mail-stand-in.mjs";
 
@@ -116,8 +116,11 @@ async function main() {
 
   const dbDir = mkdtempSync(path.join(os.tmpdir(), "throwline-test-db-"));
   cleanups.push(() => rmSync(dbDir, { recursive: true, force: true }));
-  const db = await startMariaDb({ dir: dbDir, port: await freePort(), password: randomBytes(12).toString("hex") });
+  const dbSettings = { dir: dbDir, port: await freePort(), password: randomBytes(12).toString("hex") };
+  const db = await startMariaDb(dbSettings);
   cleanups.push(() => db.stop());
+  // The faults suite stops this server and starts it again (a new process): stop whichever one runs at the end.
+  cleanups.push(() => stopRunningMariaDb(dbDir));
   const mail = await startMailStandIn({ port: await freePort(), outboxDir: path.join(dbDir, "outbox") });
   cleanups.push(() => mail.stop());
 
@@ -127,6 +130,10 @@ async function main() {
     SMTP_URL: mail.url,
     MAIL_OUTBOX_DIR: mail.outboxDir,
     STORAGE_DIR: path.join(dbDir, "uploads"),
+    // For the faults suite only (tests/integration/faults.test.ts): how to stop and restart this database.
+    TEST_MARIADB_DIR: dbDir,
+    TEST_MARIADB_PORT: String(dbSettings.port),
+    TEST_MARIADB_PASSWORD: dbSettings.password,
     NEXT_TELEMETRY_DISABLED: "1",
   };
   migrate(env);

@@ -187,6 +187,8 @@ export async function writeImport({ productionId, userId, plan, progress }: { pr
       done += chunk.length;
       progress?.("writing", done, total);
     }
+    // The last step before the commit: a listener that has gone away (the request was abandoned) throws
+    // here, and the whole import rolls back rather than landing unseen.
+    progress?.("writing", total, total);
   });
-  progress?.("writing", total, total);
 }

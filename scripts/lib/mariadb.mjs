@@ -138,6 +138,12 @@ export async function stopPid(pid) {
   if (isAlive(pid)) process.kill(pid, "SIGKILL");
 }
 
+/** Stops the server whose pid file is in `dir` (it may have been restarted since it was started). */
+export async function stopRunningMariaDb(dir) {
+  const pid = readPid(path.join(path.resolve(dir), "mariadb.pid"));
+  if (pid && isAlive(pid)) await stopPid(pid);
+}
+
 /** Synchronous stop for process-exit handlers. */
 export function stopPidSync(pid) {
   try {

@@ -51,18 +51,27 @@ export const POST = route(async (req, { params }: Ctx) => {
   if (!streamed) return mode === "preview" ? { preview: await previewImport({ productionId, member, request }) } : { result: await commitImport({ productionId, member, userId: user.id, request }) };
 
   const encoder = new TextEncoder();
+  // The reader went away (tab closed, request aborted): the next progress step throws, so a commit
+  // still writing rolls back instead of landing unseen.
+  let cancelled = false;
   const stream = new ReadableStream({
     async start(controller) {
-      const send = (line: unknown) => controller.enqueue(encoder.encode(JSON.stringify(line) + "\n"));
+      const send = (line: unknown) => cancelled || controller.enqueue(encoder.encode(JSON.stringify(line) + "\n"));
       try {
-        const progress = (stage: string, done: number, total: number) => send({ progress: { stage, done, total } });
+        const progress = (stage: string, done: number, total: number) => {
+          if (cancelled || req.signal.aborted) throw new AppError("bad_request", "The import was cancelled before it finished; nothing was saved.");
+          send({ progress: { stage, done, total } });
+        };
         if (mode === "preview") send({ preview: await previewImport({ productionId, member, request, progress }) });
         else send({ result: await commitImport({ productionId, member, userId: user.id, request, progress }) });
       } catch (err) {
         const e = toAppError(err);
         send({ ...e.toJSON(), status: e.status });
       }
-      controller.close();
+      if (!cancelled) controller.close();
+    },
+    cancel() {
+      cancelled = true;
     },
   });
   return new Response(stream, { headers: { "content-type": "application/x-ndjson; charset=utf-8", "cache-control": "no-store" } });
