@@ -18,7 +18,7 @@ export function TextField({
         name={name}
         aria-invalid={errors.length > 0 || undefined}
         aria-describedby={describedBy}
-        className="min-h-10 rounded-md border border-line bg-surface px-3 text-ink aria-invalid:border-danger"
+        className="min-h-10 rounded-md border border-line bg-surface px-3 text-ink aria-invalid:border-danger pointer-coarse:min-h-11"
         {...props}
       />
       {hint && !errors.length ? (

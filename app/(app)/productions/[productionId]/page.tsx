@@ -9,7 +9,11 @@ import { Card } from "@/components/ui/card";
 import { requireChecksReport } from "@/lib/data/checks";
 import { checksStatusLines } from "@/lib/checks/status";
 
-export const metadata: Metadata = { title: "Overview" };
+// The layout's title template covers the tabs below it, not this page of its own segment.
+export async function generateMetadata({ params }: { params: Promise<{ productionId: string }> }): Promise<Metadata> {
+  const { productionId } = await memberForPage((await params).productionId);
+  return { title: { absolute: `Overview · ${(await requireProduction(productionId)).name} · Throwline` } };
+}
 
 export default async function OverviewPage({ params }: { params: Promise<{ productionId: string }> }) {
   const { productionId } = await memberForPage((await params).productionId);
@@ -35,14 +39,17 @@ export default async function OverviewPage({ params }: { params: Promise<{ produ
   return (
     <main className="mx-auto grid max-w-6xl gap-4 px-4 py-6 lg:grid-cols-3">
       <Card title="Where things stand" className="lg:col-span-2">
-        <dl className="grid grid-cols-2 gap-3 sm:grid-cols-3" data-testid="overview-counts">
+        {/* A list of links (a link may not sit between a term and its description list). */}
+        <ul className="grid grid-cols-2 gap-3 sm:grid-cols-3" data-testid="overview-counts">
           {stats.map(([label, value, tab]) => (
-            <Link key={label} href={`/productions/${productionId}/${tab}`} className="rounded-md border border-line p-3 hover:border-accent">
-              <dt className="text-xs uppercase tracking-wide text-muted">{label}</dt>
-              <dd className="text-2xl font-semibold tabular-nums">{value}</dd>
-            </Link>
+            <li key={label}>
+              <Link href={`/productions/${productionId}/${tab}`} className="block rounded-md border border-line p-3 hover:border-accent">
+                <span className="block text-xs uppercase tracking-wide text-muted">{label}</span>
+                <span className="block text-2xl font-semibold tabular-nums">{value}</span>
+              </Link>
+            </li>
           ))}
-        </dl>
+        </ul>
       </Card>
       <Card title="Warnings">
         <ul className="list-disc pl-5 text-sm" data-testid="overview-warnings">

@@ -14,9 +14,9 @@ export default async function PlotPage({ params }: { params: Promise<{ productio
   const stamp = await getPlotStamp({ productionId });
   const [production, data, checks] = await Promise.all([requireProduction(productionId), getPlotWireData({ productionId }), requireChecksReport({ productionId })]);
   return (
-    <>
+    <main aria-label="Plot">
       <ChecksBadge productionId={productionId} summary={checks.summary} className="fixed right-4 bottom-4 z-30 shadow" />
       <PlotEditor production={production} initial={{ stamp, ...data }} canEdit={can(member, "plot.edit")} />
-    </>
+    </main>
   );
 }

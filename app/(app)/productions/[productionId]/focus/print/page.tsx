@@ -37,9 +37,9 @@ export default async function FocusPrintPage({ params, searchParams }: Props) {
         <span className="ml-auto" />
         <PrintButton />
       </div>
-      <div className="fc-print-area bg-raised py-2 print:bg-transparent print:p-0">
+      <main aria-label="Focus chart sheets" className="fc-print-area bg-raised py-2 print:bg-transparent print:p-0">
         <FocusSheets sheets={sheets} o={sheetOptions} />
-      </div>
+      </main>
     </>
   );
 }

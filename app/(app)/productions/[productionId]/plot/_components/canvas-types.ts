@@ -13,6 +13,9 @@ export type LayerVisibility = Record<LayerName, boolean>;
 
 export type Selection = { fixtures: ReadonlySet<number>; positionId: number | null; focusPointId: number | null };
 
+/** The id of the canvas's text description (go-to-unit.tsx writes it; the canvas points at it). */
+export const PLOT_CANVAS_DESCRIPTION_ID = "plot-canvas-description";
+
 /** Nothing selected. One shared value: a selection is always replaced, never changed in place. */
 export const EMPTY_SELECTION: Selection = Object.freeze({ fixtures: new Set<number>(), positionId: null, focusPointId: null });
 

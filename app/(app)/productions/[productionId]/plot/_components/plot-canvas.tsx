@@ -17,7 +17,7 @@ import { useViewNavigation } from "@/components/plot/use-view-navigation";
 import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import { buildRigItems, toRigItem } from "./rig-items";
 import { useCanvasGestures } from "./use-canvas-gestures";
-import type { Gesture } from "./canvas-types";
+import { PLOT_CANVAS_DESCRIPTION_ID, type Gesture } from "./canvas-types";
 import type { PlotCanvasProps } from "./plot-canvas-props";
 
 // Memoised: the side panel follows a drag once a frame through the editor's state; the canvas draws
@@ -241,7 +241,7 @@ function PlotCanvas(props: PlotCanvasProps) {
 
   return (
     // biome-ignore lint/a11y/noNoninteractiveTabindex: the plan is the editor's surface and takes the keyboard (arrows nudge, Delete, Space pans)
-    <div ref={container} data-testid="plot-canvas" role="application" tabIndex={0} className="relative h-full w-full touch-none select-none overflow-hidden outline-none" aria-label="Plot: plan view of the stage">
+    <div ref={container} data-testid="plot-canvas" role="application" tabIndex={0} className="relative h-full w-full touch-none select-none overflow-hidden outline-none" aria-label="Plot: plan view of the stage" aria-describedby={PLOT_CANVAS_DESCRIPTION_ID}>
       <Stage ref={stage} width={size.width} height={size.height} listening={false}>
         {/* Underlay and plan share a layer: both are cheap, and every layer is a canvas to allocate and composite. */}
         <Layer listening={false}>

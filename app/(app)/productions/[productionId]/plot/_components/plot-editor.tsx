@@ -15,6 +15,8 @@ import { usePlotKeys } from "./use-plot-keys";
 import { Toolbar } from "./toolbar";
 import { TypeShelf } from "./type-shelf";
 import { SidePanel } from "./side-panel";
+import { GoToUnit } from "./go-to-unit";
+import { PLOT_CANVAS_DESCRIPTION_ID } from "./canvas-types";
 
 // Konva needs the browser's canvas: load the canvas only on the client. Its code is requested as soon
 // as this module runs in the browser, not after hydration reaches the canvas (one round trip less).
@@ -111,6 +113,14 @@ export function PlotEditor({ production, initial, canEdit }: { production: Produ
             setDirection={setDirection}
           />
         ) : null}
+        <GoToUnit
+          fixtures={data.fixtures}
+          productionId={production.id}
+          selection={selection}
+          setSelection={setSelection}
+          focusCanvas={() => canvasBox.current?.querySelector<HTMLElement>("[data-testid=plot-canvas]")?.focus()}
+          descriptionId={PLOT_CANVAS_DESCRIPTION_ID}
+        />
         <div ref={canvasBox} className="relative min-w-0 flex-1" onDragOver={(e) => canEdit && e.preventDefault()} onDrop={onDrop}>
           <PlotCanvas data={data} production={production} layers={layers} selection={selection} tool={tool} canEdit={canEdit} events={events} handleRef={handle} />
           <p className="pointer-events-none absolute right-3 top-2 rounded bg-surface/80 px-2 py-0.5 text-xs text-muted">{hintFor(tool, canEdit)}</p>
