@@ -5,17 +5,11 @@
 import { readFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { chromium, type BrowserContext, type Page } from "playwright-core";
-import { BASE_URL, DEMO, DEMO_PASSWORD, demoProductionId } from "./support/browser";
-import { THEME_STORAGE_KEY } from "@/components/theme-script";
+import type { BrowserContext, Page } from "playwright-core";
+import { demoProductionId } from "./support/browser";
+import { VIEWPORTS, type ViewportName, openThemed, signInAs } from "./support/a11y-browser";
 
 const AXE_SOURCE = readFileSync(createRequire(import.meta.url).resolve("axe-core/axe.min.js"), "utf8");
-
-const VIEWPORTS = {
-  desktop: { viewport: { width: 1366, height: 900 }, hasTouch: false },
-  tablet: { viewport: { width: 800, height: 1280 }, hasTouch: true },
-} as const;
-type ViewportName = keyof typeof VIEWPORTS;
 
 /** Every page a member reaches from the production's tabs, plus the signed-out and list pages. */
 const PAGES: Array<{ name: string; path: (id: number) => string; signedOut?: boolean }> = [
@@ -34,19 +28,6 @@ const PAGES: Array<{ name: string; path: (id: number) => string; signedOut?: boo
 ];
 
 type AxeViolation = { id: string; impact: string | null; help: string; nodes: Array<{ target: unknown[]; failureSummary?: string }> };
-
-/** A browser for one viewport and theme; the theme is remembered in localStorage before any page script runs. */
-async function openThemed(name: ViewportName, dark: boolean): Promise<BrowserContext> {
-  const browser = await chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
-    headless: true,
-    args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
-  });
-  const context = await browser.newContext({ ...VIEWPORTS[name], baseURL: BASE_URL });
-  context.on("close", () => void browser.close());
-  await context.addInitScript(([key, value]) => localStorage.setItem(key, value), [THEME_STORAGE_KEY, dark ? "dark" : "light"] as const);
-  return context;
-}
 
 async function audit(page: Page): Promise<AxeViolation[]> {
   await page.waitForLoadState("networkidle");
@@ -89,8 +70,7 @@ for (const viewportName of Object.keys(VIEWPORTS) as ViewportName[]) {
       for (const target of PAGES) {
         it(`${target.name}: no serious or critical violation`, async () => {
           if (!target.signedOut && productionId === undefined) {
-            const r = await context.request.post("/api/auth/sign-in", { data: { email: DEMO.designer, password: DEMO_PASSWORD } });
-            expect(r.ok(), await r.text()).toBe(true);
+            await signInAs(context, "designer");
             productionId = await demoProductionId(page);
           }
           await page.goto(target.path(productionId), { timeout: 120_000 });

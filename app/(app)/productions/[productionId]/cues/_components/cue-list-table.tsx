@@ -101,8 +101,15 @@ export function CueListTable({ productionId, cues, selectedId, onSelect }: { pro
                   aria-rowindex={virtual.first + k + 2}
                   data-testid={`cue-row-${formatCueNumber(row.original.number)}`}
                   aria-selected={active}
+                  // Keyboard: the chosen row (or the first) is the one tab stop; Up/Down move and choose, Enter or Space chooses.
+                  tabIndex={active || (selectedId == null && virtual.first + k === 0) ? 0 : -1}
                   onClick={() => onSelect(row.original.id)}
-                  className={`cursor-pointer border-t border-line ${active ? "bg-accent/15 outline outline-1 outline-accent" : "hover:bg-raised"}`}
+                  onKeyDown={(e) => {
+                    if (e.key === "Enter" || e.key === " ") { e.preventDefault(); onSelect(row.original.id); }
+                    const next = e.key === "ArrowDown" ? e.currentTarget.nextElementSibling : e.key === "ArrowUp" ? e.currentTarget.previousElementSibling : null;
+                    if (next instanceof HTMLTableRowElement && next.dataset.testid?.startsWith("cue-row-")) { e.preventDefault(); next.focus(); next.click(); }
+                  }}
+                  className={`cursor-pointer border-t border-line focus-visible:outline-2 focus-visible:-outline-offset-2 ${active ? "bg-accent/15 outline outline-1 outline-accent" : "hover:bg-raised"}`}
                 >
                   {row.getVisibleCells().map((cell) => <td key={cell.id} className="whitespace-nowrap px-2">{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>)}
                 </tr>

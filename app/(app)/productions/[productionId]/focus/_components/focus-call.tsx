@@ -62,7 +62,11 @@ export function FocusCall({ data }: { data: FocusPageData }) {
             ))}
           </select>
         </label>
-        <p className="text-sm text-muted" data-testid="call-progress">{done} of {units.length} focused</p>
+        <p className="text-sm text-muted" aria-live="polite" data-testid="call-progress">{done} of {units.length} focused</p>
+        {/* Stays in the page so a screen reader hears each unit change (a region added with its text is not read). */}
+        <p className="sr-only" aria-live="polite" data-testid="call-announce">
+          {current ? `Unit ${current.unitNumber}${current.channel != null ? `, channel ${current.channel}` : ""}${current.focused ? ", focused" : ""}` : ""}
+        </p>
         <div className="ml-auto flex gap-2">
           <Link href={`/productions/${data.production.id}/focus?${toQuery({ position: positionId })}`} className="inline-flex min-h-12 items-center rounded-md border border-line bg-surface px-3 text-sm text-ink">All charts</Link>
           <a href={pdf} className="inline-flex min-h-12 items-center rounded-md border border-line bg-surface px-3 text-sm text-ink" data-testid="call-pdf">PDF of this position</a>

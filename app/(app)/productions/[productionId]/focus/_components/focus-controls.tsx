@@ -24,7 +24,8 @@ function NoteField({ id, label, value, editable, onSave, busy }: { id: string; l
     <div className="flex flex-col gap-1">
       <label htmlFor={id} className="text-xs text-muted">{label}</label>
       <textarea id={id} value={text} onChange={(e) => setText(e.target.value)} rows={3} maxLength={4000} className="rounded-md border border-line bg-surface p-2 text-sm text-ink" />
-      <Button type="button" variant="secondary" disabled={!dirty || busy} onClick={() => onSave(text.trim() ? text : null)} className="self-end">
+      {/* aria-disabled, not disabled: a disabled button drops the focus to the page once the note is saved. */}
+      <Button type="button" variant="secondary" aria-disabled={!dirty || busy} onClick={() => dirty && !busy && onSave(text.trim() ? text : null)} className="self-end">
         Save {label.toLowerCase()}
       </Button>
     </div>

@@ -1,6 +1,6 @@
 "use client";
 
-import { Fragment, useMemo, useState } from "react";
+import { Fragment, type KeyboardEvent, useMemo, useState } from "react";
 import {
   flexRender, getCoreRowModel, getExpandedRowModel, getFilteredRowModel, getGroupedRowModel, getSortedRowModel, useReactTable,
   type ColumnDef, type GroupingState, type Row, type RowSelectionState, type SortingState, type VisibilityState,
@@ -60,7 +60,7 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
         editable.includes(c.id) ? (
           <EditableCell fixture={row.original} column={c} units={units} productionId={productionId} choices={c.id === "position" ? choices.position : c.id === "type" ? choices.type : undefined} />
         ) : (
-          <span className={c.importKey ? "" : "text-muted"}>{showValue(c.kind, c.value(row.original), units) || <EmptyOrInherited column={c} fixture={row.original} units={units} dash={false} />}</span>
+          <span className={`block px-2 ${c.importKey ? "" : "text-muted"}`}>{showValue(c.kind, c.value(row.original), units) || <EmptyOrInherited column={c} fixture={row.original} units={units} dash={false} />}</span>
         ),
       meta: { computed: !c.importKey },
     }));
@@ -69,8 +69,17 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
         id: "select",
         enableSorting: false,
         enableHiding: false,
-        header: ({ table }) => <input type="checkbox" aria-label="Select every shown fixture" checked={table.getIsAllRowsSelected()} onChange={table.getToggleAllRowsSelectedHandler()} />,
-        cell: ({ row }) => (row.getCanSelect() ? <input type="checkbox" aria-label={`Select unit ${row.original.unitNumber} on ${row.original.positionName}`} checked={row.getIsSelected()} onChange={row.getToggleSelectedHandler()} /> : null),
+        header: ({ table }) => (
+          <label className={TAP_TARGET}>
+            <input type="checkbox" aria-label="Select every shown fixture" checked={table.getIsAllRowsSelected()} onChange={table.getToggleAllRowsSelectedHandler()} />
+          </label>
+        ),
+        cell: ({ row }) =>
+          row.getCanSelect() ? (
+            <label className={TAP_TARGET}>
+              <input type="checkbox" data-cell-control aria-label={`Select unit ${row.original.unitNumber} on ${row.original.positionName}`} checked={row.getIsSelected()} onChange={row.getToggleSelectedHandler()} />
+            </label>
+          ) : null,
       });
     }
     return defs;
@@ -104,7 +113,7 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
     <tr key={row.id} data-testid="rig-row" data-cell={isCell ? row.original.cell ?? "" : undefined}
       className={`border-b border-line/60 align-middle hover:bg-raised/50 print:break-inside-avoid ${row.getIsSelected() ? "bg-accent/10" : ""}`}>
       {row.getVisibleCells().map((cell, i) => (
-        <td key={cell.id} className={`whitespace-nowrap px-2 py-1 ${cell.column.id === "select" ? "print:hidden" : ""} ${isCell && i === 0 ? "border-l-4 border-l-accent/40" : ""}`}>
+        <td key={cell.id} tabIndex={-1} className={`whitespace-nowrap p-0 ${stickyCell(cell.column.id, selectable, "bg-surface")} ${cell.column.id === "select" ? "print:hidden" : ""} ${isCell && i === 0 ? "border-l-4 border-l-accent/40" : ""}`}>
           {flexRender(cell.column.columnDef.cell, cell.getContext())}
         </td>
       ))}
@@ -112,7 +121,8 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
   );
   return (
     <div className="overflow-x-auto rounded-lg border border-line bg-surface print:overflow-visible print:border-0">
-      <table className="w-full border-collapse text-sm print:text-[9pt]" data-testid="rig-table">
+      {/* biome-ignore lint/a11y/noNoninteractiveElementInteractions: arrow keys move between the cells' own controls (a grid's keys) */}
+      <table className="w-full border-collapse text-sm print:text-[9pt]" data-testid="rig-table" onKeyDown={moveBetweenCells}>
         <thead className="sticky top-0 bg-raised print:static print:bg-transparent">
           {table.getHeaderGroups().map((hg) => (
             <tr key={hg.id}>
@@ -121,9 +131,9 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
                 const computed = (h.column.columnDef.meta as { computed?: boolean } | undefined)?.computed;
                 return (
                   <th key={h.id} scope="col" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}
-                    className={`whitespace-nowrap border-b border-line px-2 py-1.5 text-left text-xs font-semibold ${computed ? "italic text-muted" : ""} ${h.id === "select" ? "print:hidden" : ""}`}>
+                    className={`whitespace-nowrap border-b border-line px-2 py-1.5 text-left text-xs font-semibold ${stickyCell(h.id, selectable, "bg-raised")} ${computed ? "italic text-muted" : ""} ${h.id === "select" ? "print:hidden" : ""}`}>
                     {h.column.getCanSort() ? (
-                      <button type="button" className="inline-flex items-center gap-1 hover:text-accent" onClick={h.column.getToggleSortingHandler()} title="Click to sort; shift-click to add a second sort">
+                      <button type="button" className="inline-flex min-h-8 items-center gap-1 hover:text-accent pointer-coarse:min-h-11 pointer-coarse:min-w-11" onClick={h.column.getToggleSortingHandler()} title="Click to sort; shift-click to add a second sort">
                         {flexRender(h.column.columnDef.header, h.getContext())}
                         <span aria-hidden className="print:hidden">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : ""}</span>
                       </button>
@@ -159,7 +169,7 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
                       {first ? (
                         <tr className="border-b border-line/60 bg-raised/40" data-testid="rig-body">
                           <td colSpan={visibleCount} className="px-2 py-1 text-sm">
-                            <button type="button" aria-expanded={open} onClick={toggle} className="inline-flex items-center gap-1 font-semibold hover:text-accent print:pointer-events-none">
+                            <button type="button" aria-expanded={open} onClick={toggle} className="inline-flex min-h-8 items-center gap-1 font-semibold pointer-coarse:min-h-11 hover:text-accent print:pointer-events-none">
                               <span aria-hidden className="inline-block w-3 print:hidden">{open ? "▾" : "▸"}</span>
                               Unit {row.original.unitNumber} on {row.original.positionName} · {row.original.typeName}
                             </button>{" "}
@@ -179,6 +189,41 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
       {table.getRowModel().rows.length === 0 ? <p className="p-4 text-sm text-muted">No fixtures match.</p> : null}
     </div>
   );
+}
+
+/** A checkbox's tap area: the whole cell, at least 44 × 44 CSS px on a touch screen. */
+const TAP_TARGET = "flex min-h-8 min-w-11 cursor-pointer items-center justify-center pointer-coarse:min-h-11";
+
+/**
+ * The unit and Hung columns stay in view on a narrow screen: the unit sticks at the left (after the
+ * 44 px select column), Hung at the right. Opaque so the cells scrolling under them do not show through.
+ */
+function stickyCell(columnId: string, selectable: boolean, background: string): string {
+  if (columnId === "select") return `sticky left-0 z-10 w-11 ${background} print:static`;
+  if (columnId === "unitNumber") return `sticky ${selectable ? "left-11" : "left-0"} z-10 ${background} print:static`;
+  if (columnId === "hung") return `sticky right-0 z-10 ${background} print:static`;
+  return "";
+}
+
+/**
+ * Arrow keys move between cells like a grid: to the same column's control in the row above or below,
+ * or the next control along the row. A cell with no control takes the focus itself (tabIndex -1), so
+ * reading along a row never skips a value. Open editors and selects keep their own arrow keys.
+ */
+function moveBetweenCells(e: KeyboardEvent<HTMLTableElement>) {
+  const step = { ArrowUp: [-1, 0], ArrowDown: [1, 0], ArrowLeft: [0, -1], ArrowRight: [0, 1] }[e.key];
+  const from = e.target as HTMLElement;
+  if (!step || e.altKey || e.ctrlKey || e.metaKey || e.shiftKey) return;
+  if (from instanceof HTMLSelectElement || (from instanceof HTMLInputElement && from.type !== "checkbox")) return;
+  const td = from.closest("td");
+  const tr = td?.parentElement as HTMLTableRowElement | null;
+  if (!td || !tr) return;
+  const rows = [...(tr.closest("tbody")?.querySelectorAll<HTMLTableRowElement>("tr[data-testid=rig-row]") ?? [])];
+  const row = rows[rows.indexOf(tr) + step[0]];
+  const target = row?.cells[td.cellIndex + step[1]];
+  if (!target) return;
+  e.preventDefault();
+  (target.querySelector<HTMLElement>("[data-cell-control]") ?? target).focus();
 }
 
 const bodyOf = (f: FixtureDto) => (f.bodyKey ? `${f.positionId}|${f.bodyKey}` : null);

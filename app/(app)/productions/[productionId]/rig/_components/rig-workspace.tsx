@@ -1,6 +1,6 @@
 "use client";
 
-import { useMemo, useState } from "react";
+import { useMemo, useRef, useState } from "react";
 import { usePathname, useRouter } from "next/navigation";
 import type { FixtureDto } from "@/lib/dto/fixture";
 import type { FixtureTypeDto } from "@/lib/dto/fixture-type";
@@ -67,13 +67,24 @@ export function RigWorkspace(props: Props) {
   const bulkAllowed = rights.canPlot || rights.canElectrics;
   const current = VIEW_BY_ID.get(view)!;
 
+  // A panel that closes gives the focus back to the button that opened it (keyboard users stay in place).
+  const opener = useRef<HTMLElement | null>(null);
+  function togglePanel(which: NonNullable<typeof panel>, from: HTMLElement) {
+    opener.current = from;
+    setPanel(panel === which ? null : which);
+  }
+  function closePanel() {
+    setPanel(null);
+    requestAnimationFrame(() => opener.current?.focus());
+  }
+
   return (
     <main className="flex flex-col gap-3 px-4 py-4 print:p-0">
       <h1 className="hidden text-base font-semibold print:block">{props.productionName} — rig, {current.label.toLowerCase()}</h1>
       <nav aria-label="Rig views" className="flex flex-wrap gap-1 print:hidden">
         {RIG_VIEWS.map((v) => (
           <button key={v.id} type="button" aria-pressed={v.id === view} onClick={() => chooseView(v.id)}
-            className={`rounded-md border px-3 py-1.5 text-sm ${v.id === view ? "border-accent bg-accent text-accent-ink" : "border-line bg-surface hover:bg-raised"}`}>
+            className={`min-h-10 rounded-md border px-3 py-1.5 text-sm pointer-coarse:min-h-11 ${v.id === view ? "border-accent bg-accent text-accent-ink" : "border-line bg-surface hover:bg-raised"}`}>
             {v.label}
           </button>
         ))}
@@ -97,14 +108,14 @@ export function RigWorkspace(props: Props) {
         <a className="inline-flex min-h-10 items-center rounded-md border border-line bg-surface px-3 text-sm hover:bg-raised" href={exportHref("csv")} download>Export CSV</a>
         <a className="inline-flex min-h-10 items-center rounded-md border border-line bg-surface px-3 text-sm hover:bg-raised" href={exportHref("xlsx")} download data-testid="export-xlsx">Export .xlsx</a>
         <a className="inline-flex min-h-10 items-center rounded-md border border-line bg-surface px-3 text-sm hover:bg-raised" href={exportHref("xlsx", "workbook")} download>Whole workbook</a>
-        <Button variant="secondary" onClick={() => setPanel(panel === "types" ? null : "types")}>Fixture types</Button>
-        <Button variant="secondary" onClick={() => setPanel(panel === "accessories" ? null : "accessories")}>Accessories</Button>
-        {rights.canImport ? <Button onClick={() => setPanel(panel === "import" ? null : "import")}>Import a file</Button> : null}
+        <Button variant="secondary" aria-expanded={panel === "types"} onClick={(e) => togglePanel("types", e.currentTarget)}>Fixture types</Button>
+        <Button variant="secondary" aria-expanded={panel === "accessories"} onClick={(e) => togglePanel("accessories", e.currentTarget)}>Accessories</Button>
+        {rights.canImport ? <Button aria-expanded={panel === "import"} onClick={(e) => togglePanel("import", e.currentTarget)}>Import a file</Button> : null}
       </div>
 
-      {panel === "import" ? <ImportPanel productionId={productionId} units={units} onClose={() => setPanel(null)} /> : null}
-      {panel === "accessories" ? <AccessoriesPanel productionId={productionId} fixtures={fixtures} accessories={accessories} canEdit={rights.canElectrics} onClose={() => setPanel(null)} /> : null}
-      {panel === "types" ? <TypesPanel productionId={productionId} types={types} canAdd={rights.canPlot} editableFields={rights.typeFields} units={units} onClose={() => setPanel(null)} /> : null}
+      {panel === "import" ? <ImportPanel productionId={productionId} units={units} onClose={closePanel} /> : null}
+      {panel === "accessories" ? <AccessoriesPanel productionId={productionId} fixtures={fixtures} accessories={accessories} canEdit={rights.canElectrics} onClose={closePanel} /> : null}
+      {panel === "types" ? <TypesPanel productionId={productionId} types={types} canAdd={rights.canPlot} editableFields={rights.typeFields} units={units} onClose={closePanel} /> : null}
 
       {view === "stock" ? (
         <StockPanel fixtures={fixtures} types={types} accessories={accessories} />
