@@ -7,7 +7,7 @@ import { signOutAction } from "@/app/(auth)/actions";
 export function SignedInHeader({ userName }: { userName: string }) {
   return (
     <header className="no-print flex items-center justify-between gap-4 border-b border-line bg-surface px-4 py-2">
-      <Link href="/productions" aria-label="All productions">
+      <Link href="/productions" aria-label="Throwline, all productions">
         <Wordmark small />
       </Link>
       <div className="flex items-center gap-3 text-sm">
