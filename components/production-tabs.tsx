@@ -9,6 +9,7 @@ export const PRODUCTION_TABS = [
   { slug: "rig", label: "Rig" },
   { slug: "focus", label: "Focus charts" },
   { slug: "cues", label: "Cues" },
+  { slug: "notes", label: "Notes" },
   { slug: "studies", label: "Studies" },
   { slug: "checks", label: "Checks" },
   { slug: "revisions", label: "Revisions" },

@@ -24,8 +24,9 @@ import { initCircuit, Circuit } from "./circuit";
 import { initDataLine, DataLine } from "./data-line";
 import { initInvitation, Invitation } from "./invitation";
 import { initNote, Note } from "./note";
+import { initShowReport, ShowReport, ShowReportFault } from "./show-report";
 
-const models = { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission, Circuit, DataLine, Invitation, Note };
+const models = { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission, Circuit, DataLine, Invitation, Note, ShowReport, ShowReportFault };
 export type Db = typeof models & { sequelize: Sequelize };
 
 function associate() {
@@ -65,7 +66,7 @@ function createDb(): Db {
       initSql: `SET SESSION innodb_lock_wait_timeout = ${LOCK_WAIT_SECONDS}, SESSION lock_wait_timeout = ${LOCK_WAIT_SECONDS}`,
     },
   });
-  for (const init of [initUser, initProduction, initMembership, initPosition, initFixtureType, initFocusPoint, initFixture, initCue, initCuePart, initChangeEntry, initAreaZone, initLandmark, initUpload, initAccessory, initImportMapping, initPerformerMark, initScenicPanel, initColourTransmission, initCircuit, initDataLine, initInvitation, initNote]) {
+  for (const init of [initUser, initProduction, initMembership, initPosition, initFixtureType, initFocusPoint, initFixture, initCue, initCuePart, initChangeEntry, initAreaZone, initLandmark, initUpload, initAccessory, initImportMapping, initPerformerMark, initScenicPanel, initColourTransmission, initCircuit, initDataLine, initInvitation, initNote, initShowReport]) {
     init(sequelize);
   }
   associate();
@@ -79,4 +80,4 @@ export function getDb(): Db {
   return holder.__throwlineDb;
 }
 
-export { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission, Circuit, DataLine, Invitation, Note };
+export { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission, Circuit, DataLine, Invitation, Note, ShowReport, ShowReportFault };

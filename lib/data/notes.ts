@@ -69,29 +69,44 @@ const notes = productionCrud<Note, NoteDto, NewNote, UpdateNotePatch>({
   what: "Note",
   toDto: toNoteDto,
   order: [["createdAt", "DESC"], ["id", "DESC"]],
-  prepareCreate: async (input, { productionId, transaction }) => {
-    const { needs, ...rest } = input;
-    const subjectId = input.subject === "production" ? null : (input.subjectId ?? null);
-    await checkSubject(productionId, input.subject, subjectId, transaction);
-    await checkOwner(productionId, input.ownerId, transaction);
-    const running = await readCurrentCue(productionId, transaction);
-    const status = input.status ?? "open";
-    // A note may be written already closed ("done on the spot") only by someone who may close that kind.
-    if (isClosed(status)) {
-      const member = await memberOf(productionId, input.authorId);
-      if (!canCloseNote(member, input.kind)) throw forbidden(`Your role on this production cannot close a ${input.kind} note.`);
-    }
-    return {
-      ...rest,
-      subjectId,
-      status,
-      ...needColumns(needs),
-      runningCueId: running.cueId,
-      runningCueNumber: running.number,
-      ...(isClosed(status) ? { closedBy: input.authorId, closedAt: new Date() } : {}),
-    };
-  },
 });
+
+/** The values a new note is written with: subject and owner checked, the current cue picked up, a closed note's closer recorded. */
+async function prepareNote(input: NewNote, productionId: number, transaction: Transaction) {
+  const { needs, ...rest } = input;
+  const subjectId = input.subject === "production" ? null : (input.subjectId ?? null);
+  await checkSubject(productionId, input.subject, subjectId, transaction);
+  await checkOwner(productionId, input.ownerId, transaction);
+  const running = await readCurrentCue(productionId, transaction);
+  const status = input.status ?? "open";
+  // A note may be written already closed ("done on the spot") only by someone who may close that kind.
+  if (isClosed(status)) {
+    const member = await memberOf(productionId, input.authorId);
+    if (!canCloseNote(member, input.kind)) throw forbidden(`Your role on this production cannot close a ${input.kind} note.`);
+  }
+  return {
+    ...rest,
+    productionId,
+    subjectId,
+    status,
+    ...needColumns(needs),
+    runningCueId: running.cueId,
+    runningCueNumber: running.number,
+    ...(isClosed(status) ? { closedBy: input.authorId, closedAt: new Date() } : {}),
+  };
+}
+
+/** Writes one note with its change-log entry inside the caller's transaction (a show report writes several). */
+export async function insertNote(
+  transaction: Transaction,
+  { productionId, userId, input, origin, showReportId }: { productionId: number; userId: number; input: CreateNoteInput; origin?: NoteOrigin; showReportId?: number | null },
+): Promise<NoteDto> {
+  const values = await prepareNote({ ...input, authorId: userId, origin: origin ?? "written", showReportId: showReportId ?? null }, productionId, transaction);
+  const row = await getDb().Note.create(values as never, { transaction });
+  const dto = toNoteDto(row);
+  await recordChange({ productionId, userId, entity: "note", entityId: row.id, action: "create", after: dto }, transaction);
+  return dto;
+}
 
 async function memberOf(productionId: number, userId: number): Promise<Member | null> {
   const m = await getMembership({ userId, productionId });
@@ -100,8 +115,8 @@ async function memberOf(productionId: number, userId: number): Promise<Member | 
 
 export const getNotesByProduction = notes.list;
 
-export async function createNote({ productionId, userId, input, origin }: { productionId: number; userId: number; input: CreateNoteInput; origin?: NoteOrigin }): Promise<NoteDto> {
-  return notes.create({ productionId, userId, input: { ...input, authorId: userId, origin: origin ?? "written" } });
+export async function createNote(args: { productionId: number; userId: number; input: CreateNoteInput }): Promise<NoteDto> {
+  return inTransaction((transaction) => insertNote(transaction, args));
 }
 
 /**

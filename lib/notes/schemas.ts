@@ -68,3 +68,41 @@ export type ChannelCheckInput = z.output<typeof channelCheckSchema>;
 const planCoord = (what: string) =>
   z.number({ error: `${what} must be a number of metres` }).min(-200, { error: `${what} is more than 200 m from the datum` }).max(200, { error: `${what} is more than 200 m from the datum` });
 export const spotRequestSchema = z.object({ x: planCoord("x"), y: planCoord("y"), cueId: id("Cue").optional() }).strict();
+
+/** The stage manager's report: lighting items become notes; the lamp-out and fault log stays with the report. */
+export const showReportSchema = z
+  .object({
+    performance: z.string({ error: "Performance is required" }).trim().min(1, { error: "Performance is required (e.g. \"Evening 3\")" }).max(80, { error: "Performance is at most 80 characters" }),
+    performedOn: z.iso.date({ error: "Date must be a date (YYYY-MM-DD)" }),
+    summary: z.string({ error: "Summary must be text" }).trim().max(4000, { error: "Summary is at most 4,000 characters" }),
+    items: z
+      .array(
+        z
+          .object({
+            body: noteFields.body,
+            kind: noteFields.kind,
+            subject: noteFields.subject,
+            subjectId: noteFields.subjectId.optional(),
+            priority: noteFields.priority.optional(),
+            ownerId: noteFields.ownerId.optional(),
+          })
+          .strict()
+          .refine(subjectHasId, subjectRule),
+        { error: "Lighting items must be a list" },
+      )
+      .max(100, { error: "At most 100 lighting items" }),
+    faults: z
+      .array(
+        z
+          .object({
+            fixtureId: id("Fixture").nullable(),
+            kind: z.enum(["lamp_out", "fault"], { error: "Each log entry is a lamp out or a fault" }),
+            description: z.string({ error: "Say what happened" }).trim().min(1, { error: "Say what happened" }).max(300, { error: "At most 300 characters" }),
+          })
+          .strict(),
+        { error: "The fault log must be a list" },
+      )
+      .max(200, { error: "At most 200 log entries" }),
+  })
+  .strict();
+export type ShowReportInput = z.output<typeof showReportSchema>;

@@ -175,3 +175,42 @@ describe("what lights this spot", () => {
     expect((await viewer.post(`${base}/notes/spot`, { x: "centre", y: 0 })).status).toBe(400);
   });
 });
+
+describe("show reports", () => {
+  it("the stage manager files one: items become notes for the role that does them, a lamp out a work note; nothing half-written on a bad row", async () => {
+    const team = (await designer.get(base)).json;
+    const members = (team.team ?? team.members ?? []) as Array<{ userId: number; role: string }>;
+    const electricianId = members.find((m) => m.role === "electrician")?.userId;
+    const designerId = members.find((m) => m.role === "designer")?.userId;
+    const unit = fixtures[2];
+    const body = {
+      performance: "Matinee 2", performedOn: "2026-12-05", summary: "Smooth; one unit dark.",
+      items: [
+        { body: "Cue 30 fade felt slow", kind: "cue", subject: "production" },
+        { body: "Boom base rattles on the revolve", kind: "work", subject: "fixture", subjectId: unit.id },
+      ],
+      faults: [{ fixtureId: unit.id, kind: "lamp_out", description: "dark all second half" }],
+    };
+    expect((await electrician.post(`${base}/notes/show-reports`, body)).status).toBe(403);
+    const before = (await designer.get(`${base}/notes`)).json.notes.length;
+    const bad = await stageManager.post(`${base}/notes/show-reports`, { ...body, faults: [{ fixtureId: 2_147_483_000, kind: "fault", description: "x" }] });
+    expect(bad.status).toBe(400);
+    expect(bad.json.error.fieldErrors["faults.0.fixtureId"]).toBeTruthy();
+    const badItem = await stageManager.post(`${base}/notes/show-reports`, { ...body, items: [{ body: "x", kind: "work", subject: "fixture", subjectId: 2_147_483_000 }] });
+    expect(badItem.status).toBe(400);
+    expect((await designer.get(`${base}/notes`)).json.notes.length).toBe(before);
+    expect((await designer.get(`${base}/notes/show-reports`)).json.showReports.some((r: { performance: string; summary: string }) => r.summary === "Smooth; one unit dark." && r.performance === "Matinee 2")).toBe(false);
+
+    const r = await stageManager.post(`${base}/notes/show-reports`, body);
+    expect(r.status).toBe(201);
+    for (const n of r.json.notes) created.push(n.id);
+    const [cueNote, workNote, lampNote] = r.json.notes;
+    expect([cueNote.kind, cueNote.origin, cueNote.showReportId]).toEqual(["cue", "show_report", r.json.report.id]);
+    if (designerId) expect(cueNote.ownerId).toBe(designerId);
+    if (electricianId) expect([workNote.ownerId, lampNote.ownerId]).toEqual([electricianId, electricianId]);
+    expect([lampNote.kind, lampNote.subjectId, lampNote.status]).toEqual(["work", unit.id, "open"]);
+    expect(r.json.report.faults).toEqual([expect.objectContaining({ fixtureId: unit.id, kind: "lamp_out", description: "dark all second half" })]);
+    const stops = (await electrician.get(`${base}/notes/work-call`)).json.stops as Array<{ note: { id: number } }>;
+    expect(stops.some((s) => s.note.id === lampNote.id)).toBe(true);
+  });
+});
