@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { memberForPage } from "@/lib/auth/page-guards";
 import { can } from "@/lib/auth/policy";
 import { requireProduction } from "@/lib/data/productions";
-import { getCuesByProduction, getChannelLabels } from "@/lib/data/cues";
+import { getCuesByProduction } from "@/lib/data/cues";
 import { getAreaZonesByProduction } from "@/lib/data/area-zones";
 import { getStudyProduction } from "@/lib/data/studies";
 import { getPerformerMarksByProduction } from "@/lib/data/performer-marks";
@@ -15,11 +15,10 @@ export const metadata: Metadata = { title: "Studies" };
 /** Coverage of the acting areas and the shadows performers cast, for a cue or any chosen light. */
 export default async function StudiesPage({ params, searchParams }: { params: Promise<{ productionId: string }>; searchParams: Promise<{ study?: string }> }) {
   const { productionId, member } = await memberForPage((await params).productionId, "studies.view");
-  const [production, study, cues, channels, areas, performers, panels, colours] = await Promise.all([
+  const [production, study, cues, areas, performers, panels, colours] = await Promise.all([
     requireProduction(productionId),
     getStudyProduction({ productionId }),
     getCuesByProduction({ productionId }),
-    getChannelLabels({ productionId }),
     getAreaZonesByProduction({ productionId }),
     getPerformerMarksByProduction({ productionId }),
     getScenicPanelsByProduction({ productionId }),
@@ -36,7 +35,6 @@ export default async function StudiesPage({ params, searchParams }: { params: Pr
         stage={{ prosceniumWidth: production.prosceniumWidth, stageWidth: production.stageWidth, stageDepth: production.stageDepth, apronDepth: production.apronDepth, backWallY: production.backWallY, datumName: production.datumName }}
         heights={{ head: study.headHeight, face: study.faceHeight, deck: study.showDeckHeight }}
         cues={cues.map((c) => ({ id: c.id, number: c.number, label: c.label }))}
-        channels={channels.map((c) => c.channel)}
         areas={areas.map((a) => ({ id: a.id, name: a.name, polygon: a.polygon }))}
         performers={performers}
         panels={panels}

@@ -5,7 +5,7 @@ import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { useMemo, useRef, useState } from "react";
 import { apiFetch } from "@/lib/http/api-client";
 import {
-  differenceGrid, faceLightAt, illuminanceAt, lineProfile, type GridCells, type LitBeam, type Point,
+  differenceGrid, faceLightAt, formatIlluminance, illuminanceAt, lineProfile, type GridCells, type LitBeam, type Point,
 } from "@/lib/optics";
 import type { CoverageResult, GridWire, StudyLight } from "@/lib/dto/studies";
 import { base64ToFloat32, base64ToInt32 } from "@/lib/studies/wire";
@@ -65,6 +65,7 @@ export function CoverageStudy(p: StudiesProps) {
   const [line, setLine] = useState<{ a: Point; b: Point } | null>(null);
   const dragging = useRef(false);
   const [selectedArea, setSelectedArea] = useState<number | null>(null);
+  const [probe, setProbe] = useState<Point | null>(null);
   const canvasA = useRef<StudyCanvasHandle>(null);
 
   const A = useCoverage(p.productionId, source, measure, facingDeg, minU, ratio);
@@ -103,6 +104,23 @@ export function CoverageStudy(p: StudiesProps) {
     return key >= 0 ? { light: a.lights[key], ratio: total - keyLux > 0 ? keyLux / (total - keyLux) : null } : null;
   }, [gridA, a, selected]);
 
+  // The reading under the pointer: the light there and, for faces, where the key comes from and key : fill.
+  const reading = useMemo(() => {
+    if (!probe || !gridA || !a) return null;
+    const col = Math.round((probe.x - gridA.originX) / gridA.resolution);
+    const row = Math.round((probe.y - gridA.originY) / gridA.resolution);
+    if (col < 0 || row < 0 || col >= gridA.cols || row >= gridA.rows) return null;
+    const k = row * gridA.cols + col;
+    const total = gridA.values[k];
+    const key = gridA.key ? gridA.key[k] : -1;
+    const fill = total - (gridA.keyLux ? gridA.keyLux[k] : 0);
+    return { at: probe, total, key: key >= 0 ? a.lights[key] : null, ratio: key >= 0 && fill > 0 ? gridA.keyLux![k] / fill : null };
+  }, [probe, gridA, a]);
+  const readingText = !reading
+    ? "Point at the stage for a reading."
+    : `At ${reading.at.x.toFixed(2)} m, ${reading.at.y.toFixed(2)} m: ${formatIlluminance(reading.total, p.units)}` +
+      (reading.key ? `; key ${reading.key.unitLabel}, key to fill ${reading.ratio === null ? "— (no fill)" : `${reading.ratio.toFixed(1)} : 1`}` : "");
+
   const profiles = useMemo(() => {
     if (!line || !gridA) return [];
     const out = [{ name: a?.stateLabel ?? "A", samples: lineProfile(gridA, line.a, line.b), colour: "#d08a1e" }];
@@ -121,6 +139,7 @@ export function CoverageStudy(p: StudiesProps) {
       if (g && contours.length) drawContours(ctx, v, g, diff && showSpot ? diff : g.values, contours, pal);
       drawUnits(ctx, v, lights, pal, new Set(showSpot ? covering.map((c) => c.k) : []));
       if (line) drawLine(ctx, v, line.a, line.b, pal);
+      if (showSpot && reading?.key) drawLine(ctx, v, reading.at, reading.key.source, pal);
       if (showSpot && selected?.minAt) drawDarkSpot(ctx, v, selected.minAt, covering.map((c) => c.light.source), pal);
     },
   });
@@ -140,6 +159,7 @@ export function CoverageStudy(p: StudiesProps) {
     },
     onPointerMove: (pt: Point) => {
       if (dragging.current) setLine((l) => (l ? { a: l.a, b: pt } : l));
+      else setProbe(pt);
     },
     onPointerUp: () => {
       dragging.current = false;
@@ -200,6 +220,7 @@ export function CoverageStudy(p: StudiesProps) {
       <div className={`grid gap-3 ${compare === "side" ? "lg:grid-cols-2" : ""}`} data-testid="coverage-result" data-state={A.query.isFetching ? "loading" : a ? "ready" : "empty"}>
         <div className="flex flex-col gap-2">
           <StudyCanvas ref={canvasA} label={`Heat map: ${what(a)}`} stage={p.stage} units={p.units} areas={p.areas} {...overlay(gridA, imgA, a?.lights ?? [], true)} {...pointer} />
+          <p className="min-h-5 text-xs text-muted" data-testid="probe">{readingText}</p>
           {a && <Legend max={diff ? diffMax : scaleMax} units={p.units} curves={a.curves} mode={diff ? "difference" : "light"} what={diff ? `Difference: ${b?.stateLabel ?? "…"} minus ${a.stateLabel}` : what(a)} />}
         </div>
         {compare === "side" && (

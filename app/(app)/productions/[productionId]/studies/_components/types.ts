@@ -12,7 +12,6 @@ export type StudiesProps = {
   stage: StageSettings;
   heights: { head: number; face: number; deck: number };
   cues: CueChoice[];
-  channels: number[];
   areas: Array<{ id: number; name: string; polygon: Array<{ x: number; y: number }> }>;
   performers: PerformerMarkDto[];
   panels: ScenicPanelDto[];
