@@ -212,5 +212,7 @@ describe("show reports", () => {
     expect(r.json.report.faults).toEqual([expect.objectContaining({ fixtureId: unit.id, kind: "lamp_out", description: "dark all second half" })]);
     const stops = (await electrician.get(`${base}/notes/work-call`)).json.stops as Array<{ note: { id: number } }>;
     expect(stops.some((s) => s.note.id === lampNote.id)).toBe(true);
+    // One e-mail to each member of the team, sent or queued for retry.
+    expect(r.json.mail.sent + r.json.mail.queued).toBe(members.length);
   });
 });

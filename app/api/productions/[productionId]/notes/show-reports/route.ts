@@ -2,6 +2,7 @@ import { readJson, route } from "@/lib/http/respond";
 import { requireMember } from "@/lib/auth/guards";
 import { fileShowReport, getShowReports } from "@/lib/data/show-reports";
 import { showReportSchema } from "@/lib/notes/schemas";
+import { mailShowReport } from "@/lib/notes/show-report-mail";
 
 type Ctx = { params: Promise<{ productionId: string }> };
 
@@ -10,9 +11,12 @@ export const GET = route(async (_req, { params }: Ctx) => {
   return { showReports: await getShowReports({ productionId }) };
 });
 
-/** The stage manager files the report after a performance; its lighting items and logged faults become notes. */
+/** The stage manager files the report after a performance; its lighting items and logged faults become notes; the team gets it by e-mail. */
 export const POST = route(async (req, { params }: Ctx) => {
   const { productionId, user } = await requireMember((await params).productionId, "notes.fileShowReport");
   const input = await readJson(req, showReportSchema);
-  return Response.json(await fileShowReport({ productionId, userId: user.id, input }), { status: 201 });
+  const filed = await fileShowReport({ productionId, userId: user.id, input });
+  // After the commit: a mail failure leaves the messages queued and never undoes the report.
+  const mail = await mailShowReport(productionId, filed.report, filed.notes);
+  return Response.json({ ...filed, mail }, { status: 201 });
 });
