@@ -16,7 +16,9 @@ async function smallTargets(root: Locator) {
     const controls = el.querySelectorAll<HTMLElement>("button, a[href], input, select, textarea, summary, [role=button]");
     const small: string[] = [];
     for (const c of controls) {
-      const area = (c instanceof HTMLInputElement && (c.type === "checkbox" || c.type === "radio") ? c.closest("label") : null) ?? c;
+      // A checkbox, a radio or a visually hidden file input is tapped through its label.
+      const viaLabel = c instanceof HTMLInputElement && (["checkbox", "radio", "file"].includes(c.type) || c.getBoundingClientRect().width <= 1);
+      const area = (viaLabel ? (c.closest("label") ?? c.labels?.[0]) : null) ?? c;
       const r = area.getBoundingClientRect();
       if (r.width === 0 && r.height === 0) continue; // not rendered (a hidden file input behind its label)
       if (r.width < min - 0.5 || r.height < min - 0.5) small.push(`${c.tagName.toLowerCase()} "${c.getAttribute("aria-label") ?? c.textContent?.trim().slice(0, 30)}" ${r.width.toFixed(0)}×${r.height.toFixed(0)}`);

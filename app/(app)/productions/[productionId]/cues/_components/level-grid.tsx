@@ -73,9 +73,11 @@ export function LevelGrid({ show, cues, channels, selectedIndex, onSelect, focus
               <th scope="col" className="sticky left-0 bg-raised px-2 text-left">Ch</th>
               {visible.map(({ cue, index }) => (
                 <th key={cue.id} scope="col" className={`px-1 text-right ${index === selectedIndex ? "bg-accent/20" : ""}`}>
-                  <button type="button" onClick={() => onSelect(cue.id)} className="h-6 w-full text-right" aria-label={`Select cue ${formatCueNumber(cue.number)}`}>
+                  {/* Named by what it shows plus words for a screen reader ("Select cue 1.5, block"). */}
+                  <button type="button" onClick={() => onSelect(cue.id)} className="h-6 w-full text-right">
+                    <span className="sr-only">Select cue </span>
                     {formatCueNumber(cue.number)}
-                    {cue.block ? <span className="ml-0.5 text-[10px] text-muted">B</span> : null}
+                    {cue.block ? <><span className="sr-only">, block</span><span aria-hidden="true" className="ml-0.5 text-[10px] text-muted">B</span></> : null}
                   </button>
                 </th>
               ))}

@@ -45,13 +45,18 @@ export function UnitStrip({ kind, units, currentId, onPick }: { kind: PositionKi
             type="button"
             onClick={() => onPick(f.id)}
             aria-current={current ? "true" : undefined}
-            aria-label={`Unit ${f.unitNumber}, channel ${f.channel ?? "none"}${f.focused ? ", focused" : ""}`}
             className={`flex min-h-12 min-w-12 flex-col items-center justify-center rounded px-2 text-sm ${
               current ? "bg-accent text-accent-ink" : f.focused ? "bg-surface text-success" : "bg-surface text-ink"
             } border ${current ? "border-accent" : "border-line"}`}
           >
-            <span className="font-semibold">{f.unitNumber}</span>
-            <span className="text-xs opacity-80">{f.focused ? "✓ " : ""}{f.channel ?? "—"}</span>
+            {/* The name is the text shown plus words only a screen reader needs: "Unit 11, channel 11, focused". */}
+            <span className="font-semibold"><span className="sr-only">Unit </span>{f.unitNumber}</span>
+            <span className="text-xs">
+              <span className="sr-only">, </span>
+              {f.focused ? <span aria-hidden="true">✓ </span> : null}
+              {f.channel != null ? <><span className="sr-only">channel </span>{f.channel}</> : <><span className="sr-only">no channel</span><span aria-hidden="true">—</span></>}
+              {f.focused ? <span className="sr-only">, focused</span> : null}
+            </span>
           </button>
         );
       })}

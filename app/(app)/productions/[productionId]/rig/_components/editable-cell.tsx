@@ -110,7 +110,8 @@ export function EditableCell({ fixture, column, units, productionId, choices }: 
         onChange={(e) => setText(e.target.value)}
         onKeyDown={(e) => {
           if (e.key === "Escape") { refocus.current = true; setEditing(false); setMessage(null); }
-          if (e.key === "Enter") { refocus.current = true; commit(); }
+          // preventDefault: otherwise the Enter's keypress lands on the cell's button, now focused again, and reopens the editor.
+          if (e.key === "Enter") { e.preventDefault(); refocus.current = true; commit(); }
         }}
         onBlur={() => commit()}
       />

@@ -187,6 +187,10 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
         </tbody>
       </table>
       {table.getRowModel().rows.length === 0 ? <p className="p-4 text-sm text-muted">No fixtures match.</p> : null}
+      {/* Always in the page, so the count is read out as the filter is typed. */}
+      <p className="sr-only" aria-live="polite" data-testid="rig-filter-count">
+        {state.filter ? `${table.getFilteredRowModel().rows.length} of ${fixtures.length} fixtures match` : ""}
+      </p>
     </div>
   );
 }
