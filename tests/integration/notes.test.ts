@@ -104,10 +104,10 @@ describe("current cue", () => {
 
 describe("work call", () => {
   it("lists open work notes highest position first, each position's notes together, and drops a note once done", async () => {
-    const byHeight = [...positions].sort((a, b) => b.trimHeight - a.trimHeight);
+    const on = (p: Position) => fixtures.filter((f) => f.positionId === p.id);
+    const byHeight = positions.filter((p) => on(p).length >= 2).sort((a, b) => b.trimHeight - a.trimHeight);
     const high = byHeight[0];
     const low = byHeight.find((p) => p.trimHeight < high.trimHeight)!;
-    const on = (p: Position) => fixtures.filter((f) => f.positionId === p.id);
     const mine: number[] = [];
     // Written low first, interleaved, so the order cannot come from the order of writing.
     for (const f of [on(low)[0], on(high)[1], on(low)[1], on(high)[0]]) {
