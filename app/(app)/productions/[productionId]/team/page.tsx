@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { memberForPage } from "@/lib/auth/page-guards";
 import { getTeam } from "@/lib/data/team";
 import { getOpenInvitations } from "@/lib/data/invitations";
@@ -51,7 +52,14 @@ export default async function TeamPage({ params }: { params: Promise<{ productio
             <p className="mb-3 text-sm text-muted">They receive an e-mail with a link that works once and expires after a week.</p>
             <InviteForm productionId={productionId} />
           </Card>
-          <Card title="Open invitations">
+          <Card
+            title="Open invitations"
+            actions={
+              <Link href={`/productions/${productionId}/team/outbox`} className="text-sm text-accent underline">
+                Outbox
+              </Link>
+            }
+          >
             {invitations.length === 0 ? (
               <p className="text-sm text-muted">No invitations are waiting.</p>
             ) : (
