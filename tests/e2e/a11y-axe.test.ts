@@ -76,7 +76,9 @@ for (const viewportName of Object.keys(VIEWPORTS) as ViewportName[]) {
           await page.goto(target.path(productionId), { timeout: 120_000 });
           const violations = await audit(page);
           const counts = countsByImpact(violations);
-          summary.push(`  ${viewportName.padEnd(7)} ${dark ? "dark " : "light"} ${target.name.padEnd(12)} critical ${counts.critical}, serious ${counts.serious}, moderate ${counts.moderate}, minor ${counts.minor}`);
+          const line = `  ${viewportName.padEnd(7)} ${dark ? "dark " : "light"} ${target.name.padEnd(12)} critical ${counts.critical}, serious ${counts.serious}, moderate ${counts.moderate}, minor ${counts.minor}`;
+          summary.push(line);
+          console.log(line);
           const blocking = violations
             .filter((v) => v.impact === "serious" || v.impact === "critical")
             .map((v) => `${v.impact} ${v.id} (${v.help}) ×${v.nodes.length}: ${v.nodes.slice(0, 3).map((n) => `${JSON.stringify(n.target)} ${n.failureSummary ?? ""}`).join(" | ")}`);
