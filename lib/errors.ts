@@ -50,7 +50,8 @@ export class AppError extends Error {
 }
 
 export const notFound = (what = "That") => new AppError("not_found", `${what} was not found.`);
-export const forbidden = (message = "Your role on this production cannot do that.") => new AppError("forbidden", message);
+export const forbidden = (message = "Your role on this production cannot do that.") =>
+  new AppError("forbidden", message);
 
 /** Turns a zod failure into a 400 that names each field. */
 export function fromZodError(error: z.ZodError, prefix = ""): AppError {
@@ -66,7 +67,14 @@ export function fromZodError(error: z.ZodError, prefix = ""): AppError {
   return new AppError("bad_request", `Please check the input — ${summary}`, { fieldErrors });
 }
 
-type DriverFailure = { name?: string; code?: string; errno?: number; fatal?: boolean; original?: DriverFailure; parent?: DriverFailure };
+type DriverFailure = {
+  name?: string;
+  code?: string;
+  errno?: number;
+  fatal?: boolean;
+  original?: DriverFailure;
+  parent?: DriverFailure;
+};
 
 /** The driver's own error under Sequelize's wrapper (or the error itself when it is the driver's). */
 function driverError(err: unknown): DriverFailure {
@@ -76,10 +84,26 @@ function driverError(err: unknown): DriverFailure {
 
 // Driver and socket codes that mean the connection itself failed or was lost (not the query).
 const CONNECTION_LOST_CODES = new Set([
-  "ECONNREFUSED", "ECONNRESET", "EPIPE", "ETIMEDOUT", "EHOSTUNREACH", "ENETUNREACH", "ENOTFOUND", "EADDRNOTAVAIL",
-  "ER_CONNECTION_TIMEOUT", "ER_SOCKET_UNEXPECTED_CLOSE", "ER_SOCKET", "ER_SOCKET_TIMEOUT", "ER_CONNECTION_ALREADY_CLOSED",
-  "ER_CMD_CONNECTION_CLOSED", "ER_CMD_NOT_EXECUTED_DESTROYED", "ER_SERVER_SHUTDOWN", "ER_CONNECTION_KILLED",
-  "PROTOCOL_CONNECTION_LOST", "ER_POOL_ALREADY_CLOSED", "ER_INITIAL_TIMEOUT_ERROR",
+  "ECONNREFUSED",
+  "ECONNRESET",
+  "EPIPE",
+  "ETIMEDOUT",
+  "EHOSTUNREACH",
+  "ENETUNREACH",
+  "ENOTFOUND",
+  "EADDRNOTAVAIL",
+  "ER_CONNECTION_TIMEOUT",
+  "ER_SOCKET_UNEXPECTED_CLOSE",
+  "ER_SOCKET",
+  "ER_SOCKET_TIMEOUT",
+  "ER_CONNECTION_ALREADY_CLOSED",
+  "ER_CMD_CONNECTION_CLOSED",
+  "ER_CMD_NOT_EXECUTED_DESTROYED",
+  "ER_SERVER_SHUTDOWN",
+  "ER_CONNECTION_KILLED",
+  "PROTOCOL_CONNECTION_LOST",
+  "ER_POOL_ALREADY_CLOSED",
+  "ER_INITIAL_TIMEOUT_ERROR",
 ]);
 // MariaDB server errors: 1053 shutting down, 1927 connection killed, 1040 too many connections.
 const CONNECTION_LOST_ERRNOS = new Set([1053, 1927, 1040]);
@@ -98,7 +122,12 @@ export function databaseTrouble(err: unknown): DatabaseTrouble | null {
   const code = driver.code ?? (err as DriverFailure)?.code ?? "";
   const errno = driver.errno ?? (err as DriverFailure)?.errno;
   if (name === "SequelizeConnectionAcquireTimeoutError" || code === "ER_GET_CONNECTION_TIMEOUT") return "busy";
-  if (name === "SequelizeAccessDeniedError" || code === "ER_ACCESS_DENIED_ERROR" || code === "ER_ACCESS_DENIED_NO_PASSWORD_ERROR") return "refused";
+  if (
+    name === "SequelizeAccessDeniedError" ||
+    code === "ER_ACCESS_DENIED_ERROR" ||
+    code === "ER_ACCESS_DENIED_NO_PASSWORD_ERROR"
+  )
+    return "refused";
   if (isDeadlock(err) || isLockWaitTimeout(err)) return "lock_contention";
   if (
     name === "SequelizeConnectionError" ||
@@ -135,17 +164,29 @@ export function isDatabaseDown(err: unknown): boolean {
 
 // What each kind of trouble tells the user, and how long a client should wait before trying again.
 const TROUBLE: Record<DatabaseTrouble, { message: string; retryAfterSeconds: number }> = {
-  busy: { message: "The server is busy: every database connection is in use. Try again in a moment.", retryAfterSeconds: 2 },
+  busy: {
+    message: "The server is busy: every database connection is in use. Try again in a moment.",
+    retryAfterSeconds: 2,
+  },
   unreachable: { message: "The database is not reachable right now. Try again in a moment.", retryAfterSeconds: 5 },
-  refused: { message: "The database refused the server's sign-in. An administrator needs to check the server's settings.", retryAfterSeconds: 30 },
-  lock_contention: { message: "Other edits to the same items were being saved at the same moment. Try again.", retryAfterSeconds: 1 },
+  refused: {
+    message: "The database refused the server's sign-in. An administrator needs to check the server's settings.",
+    retryAfterSeconds: 30,
+  },
+  lock_contention: {
+    message: "Other edits to the same items were being saved at the same moment. Try again.",
+    retryAfterSeconds: 1,
+  },
 };
 
 export function toAppError(err: unknown): AppError {
   if (err instanceof AppError) return err;
   if (err instanceof z.ZodError) return fromZodError(err);
   const trouble = databaseTrouble(err);
-  if (trouble) return new AppError("unavailable", TROUBLE[trouble].message, { retryAfterSeconds: TROUBLE[trouble].retryAfterSeconds });
+  if (trouble)
+    return new AppError("unavailable", TROUBLE[trouble].message, {
+      retryAfterSeconds: TROUBLE[trouble].retryAfterSeconds,
+    });
   console.error(err);
   return new AppError("internal", "Something went wrong on the server. The error has been logged.");
 }

@@ -25,7 +25,15 @@ afterAll(async () => {
 const ALLOWED = new Set([200, 201, 409, 503]);
 
 async function hang(units: string[]) {
-  const r = await s.post(`/api/productions/${pid}/fixtures`, { fixtures: units.map((unitNumber, i) => ({ positionId: lx1.id, fixtureTypeId: profile.id, unitNumber, x: -5 + i * 0.2, y: 1 })) });
+  const r = await s.post(`/api/productions/${pid}/fixtures`, {
+    fixtures: units.map((unitNumber, i) => ({
+      positionId: lx1.id,
+      fixtureTypeId: profile.id,
+      unitNumber,
+      x: -5 + i * 0.2,
+      y: 1,
+    })),
+  });
   expect(r.status, JSON.stringify(r.json)).toBe(201);
   return r.json.fixtures as Array<{ id: number; version: number }>;
 }
@@ -37,7 +45,12 @@ type Ack = { value: string; version: number };
  * and on a 409 tries again from the current row the answer carries (a few times). Returns the
  * acknowledged writes and every status seen.
  */
-async function contend(clients: number, write: (value: string, version: number) => Promise<{ status: number; json: any }>, read: () => Promise<number>, versionOf: (json: any) => number) {
+async function contend(
+  clients: number,
+  write: (value: string, version: number) => Promise<{ status: number; json: any }>,
+  read: () => Promise<number>,
+  versionOf: (json: any) => number,
+) {
   const acks: Ack[] = [];
   const statuses: number[] = [];
   await Promise.all(
@@ -65,11 +78,18 @@ async function contend(clients: number, write: (value: string, version: number) 
  * write, which is the latest acknowledged one or a later write whose answer was lost.
  */
 function checkHistory(acks: Ack[], logged: ChangeRow[], field: string, finalValue: unknown, finalVersion: number) {
-  for (const ack of acks) expect(logged.some((c) => c.after?.[field] === ack.value && c.after?.version === ack.version), `${ack.value} (v${ack.version}) not logged`).toBe(true);
+  for (const ack of acks)
+    expect(
+      logged.some((c) => c.after?.[field] === ack.value && c.after?.version === ack.version),
+      `${ack.value} (v${ack.version}) not logged`,
+    ).toBe(true);
   const versions = logged.map((c) => c.after?.version as number);
   expect(versions).toEqual(versions.map((_, i) => versions[0] + i));
   const last = logged.at(-1)!;
-  expect({ value: finalValue, version: finalVersion }).toEqual({ value: last.after?.[field], version: last.after?.version });
+  expect({ value: finalValue, version: finalVersion }).toEqual({
+    value: last.after?.[field],
+    version: last.after?.version,
+  });
   expect(Math.max(...acks.map((a) => a.version))).toBeLessThanOrEqual(finalVersion);
 }
 
@@ -102,7 +122,8 @@ describe("50 clients on one cue", () => {
     const { acks, statuses } = await contend(
       50,
       (label, version) => s.patch(path, { version, label, levels: { 1: Number(label.match(/\d+/)![0]) + 1 } }),
-      async () => (await s.get(`/api/productions/${pid}/cues`)).json.cues.find((c: { id: number }) => c.id === cue.id).version,
+      async () =>
+        (await s.get(`/api/productions/${pid}/cues`)).json.cues.find((c: { id: number }) => c.id === cue.id).version,
       (json) => (json.conflict ? json.current.version : json.cue.version),
     );
     expect(statuses.filter((st) => !ALLOWED.has(st))).toEqual([]);
@@ -121,17 +142,31 @@ describe("bulk edits over the same fixtures in opposite orders", () => {
     const units = await hang(Array.from({ length: 16 }, (_, i) => String(101 + i)));
     const ids = units.map((u) => u.id);
     for (let round = 0; round < 3; round++) {
-      const fixtures = (await s.get(`/api/productions/${pid}/fixtures`)).json.fixtures.filter((f: { id: number }) => ids.includes(f.id));
+      const fixtures = (await s.get(`/api/productions/${pid}/fixtures`)).json.fixtures.filter((f: { id: number }) =>
+        ids.includes(f.id),
+      );
       const items = fixtures.map((f: { id: number; version: number }) => ({ id: f.id, version: f.version }));
       // Each edit sends the versions it read; half list the selection forwards, half backwards.
-      const edits = Array.from({ length: 8 }, (_, k) => ({ colour: `round ${round} edit ${k}`, items: k % 2 ? [...items].reverse() : items }));
-      const results = await Promise.all(edits.map((e) => s.post(`/api/productions/${pid}/fixtures/bulk`, { items: e.items, action: { kind: "colour", colour: e.colour } })));
+      const edits = Array.from({ length: 8 }, (_, k) => ({
+        colour: `round ${round} edit ${k}`,
+        items: k % 2 ? [...items].reverse() : items,
+      }));
+      const results = await Promise.all(
+        edits.map((e) =>
+          s.post(`/api/productions/${pid}/fixtures/bulk`, {
+            items: e.items,
+            action: { kind: "colour", colour: e.colour },
+          }),
+        ),
+      );
       const statuses = results.map((r) => r.status);
       expect(statuses.filter((st) => !ALLOWED.has(st))).toEqual([]);
       // All read the same versions, so exactly one can apply; the rest see a changed fixture.
       expect(statuses.filter((st) => st === 200).length).toBe(1);
       const winner = edits[statuses.indexOf(200)].colour;
-      const after = (await s.get(`/api/productions/${pid}/fixtures`)).json.fixtures.filter((f: { id: number }) => ids.includes(f.id));
+      const after = (await s.get(`/api/productions/${pid}/fixtures`)).json.fixtures.filter((f: { id: number }) =>
+        ids.includes(f.id),
+      );
       expect(after.map((f: { colour: string }) => f.colour)).toEqual(ids.map(() => winner));
     }
   }, 120_000);
@@ -140,20 +175,34 @@ describe("bulk edits over the same fixtures in opposite orders", () => {
     const units = await hang(Array.from({ length: 10 }, (_, i) => String(201 + i)));
     const ids = units.map((u) => u.id);
     for (let round = 0; round < 4; round++) {
-      const current = (await s.get(`/api/productions/${pid}/fixtures`)).json.fixtures.filter((f: { id: number }) => ids.includes(f.id));
+      const current = (await s.get(`/api/productions/${pid}/fixtures`)).json.fixtures.filter((f: { id: number }) =>
+        ids.includes(f.id),
+      );
       const item = (f: { id: number; version: number }) => ({ id: f.id, version: f.version });
       // Fixtures 0–6 forwards and 3–9 backwards: they share 3–6, and each starts on a fixture the other lacks.
       const edits = [
         { colour: `left ${round}`, items: current.slice(0, 7).map(item) },
         { colour: `right ${round}`, items: current.slice(3).map(item).reverse() },
       ];
-      const results = await Promise.all(edits.map((e) => s.post(`/api/productions/${pid}/fixtures/bulk`, { items: e.items, action: { kind: "colour", colour: e.colour } })));
+      const results = await Promise.all(
+        edits.map((e) =>
+          s.post(`/api/productions/${pid}/fixtures/bulk`, {
+            items: e.items,
+            action: { kind: "colour", colour: e.colour },
+          }),
+        ),
+      );
       const statuses = results.map((r) => r.status);
       expect(statuses.filter((st) => !ALLOWED.has(st))).toEqual([]);
       expect(statuses.filter((st) => st === 200).length).toBe(1);
       const winner = edits[statuses.indexOf(200)];
       const loser = edits[1 - statuses.indexOf(200)];
-      const colours = new Map<number, string>((await s.get(`/api/productions/${pid}/fixtures`)).json.fixtures.map((f: { id: number; colour: string }) => [f.id, f.colour]));
+      const colours = new Map<number, string>(
+        (await s.get(`/api/productions/${pid}/fixtures`)).json.fixtures.map((f: { id: number; colour: string }) => [
+          f.id,
+          f.colour,
+        ]),
+      );
       expect(winner.items.map((f: { id: number }) => colours.get(f.id))).toEqual(winner.items.map(() => winner.colour));
       // Nothing of the refused edit stayed, not even on the fixtures only it selected.
       expect(ids.filter((id) => colours.get(id) === loser.colour)).toEqual([]);
@@ -164,7 +213,9 @@ describe("bulk edits over the same fixtures in opposite orders", () => {
 describe("creates beyond the pool size", () => {
   it(`all ${3 * POOL_MAX} parallel creates succeed, and an unrelated read during them is answered`, async () => {
     const creates = Array.from({ length: 3 * POOL_MAX }, (_, i) =>
-      s.post(`/api/productions/${pid}/fixtures`, { fixtures: [{ positionId: lx1.id, fixtureTypeId: profile.id, unitNumber: String(301 + i), x: 0, y: 1 }] }),
+      s.post(`/api/productions/${pid}/fixtures`, {
+        fixtures: [{ positionId: lx1.id, fixtureTypeId: profile.id, unitNumber: String(301 + i), x: 0, y: 1 }],
+      }),
     );
     const started = Date.now();
     const read = await s.get(`/api/productions/${pid}/positions`);
@@ -174,7 +225,9 @@ describe("creates beyond the pool size", () => {
     expect(read.status).toBe(200);
     // Not a speed goal: a read that had to wait out the pool's acquire timeout (10 s) would be a 503.
     expect(readMs).toBeLessThan(10_000);
-    const made = (await s.get(`/api/productions/${pid}/fixtures`)).json.fixtures.filter((f: { unitNumber: string }) => Number(f.unitNumber) > 300 && Number(f.unitNumber) <= 300 + 3 * POOL_MAX);
+    const made = (await s.get(`/api/productions/${pid}/fixtures`)).json.fixtures.filter(
+      (f: { unitNumber: string }) => Number(f.unitNumber) > 300 && Number(f.unitNumber) <= 300 + 3 * POOL_MAX,
+    );
     expect(made.length).toBe(3 * POOL_MAX);
   }, 120_000);
 });

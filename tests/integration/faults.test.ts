@@ -13,7 +13,10 @@ const PORT = Number(process.env.TEST_MARIADB_PORT);
 const PASSWORD = process.env.TEST_MARIADB_PASSWORD;
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
-type DbControl = { startMariaDb: (o: { dir: string; port: number; password: string }) => Promise<unknown>; stopRunningMariaDb: (dir: string) => Promise<void> };
+type DbControl = {
+  startMariaDb: (o: { dir: string; port: number; password: string }) => Promise<unknown>;
+  stopRunningMariaDb: (dir: string) => Promise<void>;
+};
 const control = () => import(pathToFileURL(path.resolve("scripts/lib/mariadb.mjs")).href) as Promise<DbControl>;
 
 let s: ApiSession;
@@ -46,7 +49,11 @@ describe.skipIf(!DIR || !PASSWORD)("the database stops in the middle of a load",
     const writers = Array.from({ length: 4 }, async (_, w) => {
       for (let i = 0; running; i++) {
         const unitNumber = String((w + 1) * 1000 + (i % 1000));
-        const r = await s.post(`/api/productions/${pid}/fixtures`, { fixtures: [{ positionId: lx1.id, fixtureTypeId: profile.id, unitNumber, x: 0, y: 1 }] }).catch(() => ({ status: 0, json: null }));
+        const r = await s
+          .post(`/api/productions/${pid}/fixtures`, {
+            fixtures: [{ positionId: lx1.id, fixtureTypeId: profile.id, unitNumber, x: 0, y: 1 }],
+          })
+          .catch(() => ({ status: 0, json: null }));
         seen(r.status);
         if (r.status === 201) acked.push(unitNumber);
         if (r.status !== 201) await sleep(100);
@@ -77,7 +84,8 @@ describe.skipIf(!DIR || !PASSWORD)("the database stops in the middle of a load",
       running = false;
       await Promise.all(writers);
       // Whatever happened above, leave the database running for the suites after this one.
-      if (!(await until(async () => (await fetch(`${BASE_URL}/api/health`)).ok, 1000))) await startMariaDb({ dir: DIR!, port: PORT, password: PASSWORD! }).catch(() => {});
+      if (!(await until(async () => (await fetch(`${BASE_URL}/api/health`)).ok, 1000)))
+        await startMariaDb({ dir: DIR!, port: PORT, password: PASSWORD! }).catch(() => {});
     }
     // Never a 500: a write either landed (201) or was refused as unavailable (503); 0 would be a dropped connection.
     expect([...statuses.keys()].filter((st) => st !== 201 && st !== 503)).toEqual([]);
@@ -91,12 +99,20 @@ describe("an import abandoned half-way", () => {
   it("leaves no fixture of it when the request is aborted while it is being written", async () => {
     const rows = 6000;
     // On the boom, which has no units yet: every row is a new fixture.
-    const csv = ["Position,Unit,Type,Purpose", ...Array.from({ length: rows }, (_, i) => `Boom SL,${i + 1},Profile 26,killed import`)].join("\n");
+    const csv = [
+      "Position,Unit,Type,Purpose",
+      ...Array.from({ length: rows }, (_, i) => `Boom SL,${i + 1},Profile 26,killed import`),
+    ].join("\n");
     const form = new FormData();
     form.set("file", new File([csv], "big.csv"));
     form.set("options", JSON.stringify({ mode: "commit" }));
     const abort = new AbortController();
-    const res = await fetch(`${BASE_URL}/api/productions/${pid}/import?stream=1`, { method: "POST", headers: { cookie: s.cookie }, body: form, signal: abort.signal });
+    const res = await fetch(`${BASE_URL}/api/productions/${pid}/import?stream=1`, {
+      method: "POST",
+      headers: { cookie: s.cookie },
+      body: form,
+      signal: abort.signal,
+    });
     expect(res.status).toBe(200);
     const reader = res.body!.getReader();
     let text = "";
@@ -122,7 +138,11 @@ describe("an import abandoned half-way", () => {
     const small = new FormData();
     small.set("file", new File(["Position,Unit,Type\nBoom SL,1,Profile 26\nBoom SL,2,Profile 26\n"], "small.csv"));
     small.set("options", JSON.stringify({ mode: "commit" }));
-    const ok = await fetch(`${BASE_URL}/api/productions/${pid}/import`, { method: "POST", headers: { cookie: s.cookie }, body: small });
+    const ok = await fetch(`${BASE_URL}/api/productions/${pid}/import`, {
+      method: "POST",
+      headers: { cookie: s.cookie },
+      body: small,
+    });
     expect(ok.status).toBe(200);
     expect((await onBoom()).length).toBe(2);
   }, 180_000);

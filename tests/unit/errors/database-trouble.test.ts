@@ -1,14 +1,35 @@
 import { describe, expect, it } from "vitest";
 import * as mariadb from "mariadb";
-import { AccessDeniedError, ConnectionAcquireTimeoutError, ConnectionRefusedError, DatabaseError, HostNotReachableError, InvalidConnectionError, UniqueConstraintError } from "sequelize";
+import {
+  AccessDeniedError,
+  ConnectionAcquireTimeoutError,
+  ConnectionRefusedError,
+  DatabaseError,
+  HostNotReachableError,
+  InvalidConnectionError,
+  UniqueConstraintError,
+} from "sequelize";
 import { databaseTrouble, isDeadlock, isLockWaitTimeout, toAppError } from "@/lib/errors";
 import { retryOnDeadlock } from "@/lib/data/transaction";
 
 // The driver's own error class with the server's error numbers, wrapped the way Sequelize wraps a
 // failed query, so the classification sees what production sees.
-const SqlError = (mariadb as unknown as { SqlError: new (msg: string, sql: string | null, fatal: boolean, info: null, state: string, errno: number) => Error & { code: string } }).SqlError;
-const serverError = (errno: number, state: string, fatal = false) => new SqlError("server said no", "UPDATE fixtures SET colour = ?", fatal, null, state, errno);
-const queryFailure = (errno: number, state: string, fatal = false) => new DatabaseError(serverError(errno, state, fatal) as never);
+const SqlError = (
+  mariadb as unknown as {
+    SqlError: new (
+      msg: string,
+      sql: string | null,
+      fatal: boolean,
+      info: null,
+      state: string,
+      errno: number,
+    ) => Error & { code: string };
+  }
+).SqlError;
+const serverError = (errno: number, state: string, fatal = false) =>
+  new SqlError("server said no", "UPDATE fixtures SET colour = ?", fatal, null, state, errno);
+const queryFailure = (errno: number, state: string, fatal = false) =>
+  new DatabaseError(serverError(errno, state, fatal) as never);
 
 describe("database failures become 503 with a true message and Retry-After, never 500", () => {
   it("the driver maps the server's numbers to the codes the classification names", () => {

@@ -11,7 +11,53 @@ const RUNS = 3000;
 
 // Text near the grammar: digits, units, feet/inch marks (ASCII and typographic), fractions, signs and spaces,
 // so the generator reaches the parsers' branches instead of failing at the first character.
-const PIECES = ["0", "1", "7", "12", "3.5", ".5", "1/2", "3/2", "0/0", "-", "+", " ", "  ", "'", '"', "′", "″", "’", "”", "''", "ft", "feet", "in", "inch", "m", "cm", "mm", "metres", "km", "°", "º", "deg", "degrees", ":", "::", "/", "e5", "1e400", "99999999999999999999", "−", "\t", "\u00a0", "x", "NaN", "Infinity"];
+const PIECES = [
+  "0",
+  "1",
+  "7",
+  "12",
+  "3.5",
+  ".5",
+  "1/2",
+  "3/2",
+  "0/0",
+  "-",
+  "+",
+  " ",
+  "  ",
+  "'",
+  '"',
+  "′",
+  "″",
+  "’",
+  "”",
+  "''",
+  "ft",
+  "feet",
+  "in",
+  "inch",
+  "m",
+  "cm",
+  "mm",
+  "metres",
+  "km",
+  "°",
+  "º",
+  "deg",
+  "degrees",
+  ":",
+  "::",
+  "/",
+  "e5",
+  "1e400",
+  "99999999999999999999",
+  "−",
+  "\t",
+  "\u00a0",
+  "x",
+  "NaN",
+  "Infinity",
+];
 const nearGrammar = fc.array(fc.constantFrom(...PIECES), { maxLength: 8 }).map((p) => p.join(""));
 const anyText = fc.oneof(nearGrammar, fc.string({ maxLength: 30 }), fc.string({ unit: "grapheme", maxLength: 20 }));
 
@@ -30,10 +76,18 @@ function returnsNumberOrRangeError(parse: (t: string) => number | { up: number; 
 
 describe("length, angle, time and cue-number parsers on arbitrary text", () => {
   it("parseLength (metres and feet defaults)", () => {
-    fc.assert(fc.property(anyText, fc.constantFrom("m" as const, "ft" as const), (t, unit) => returnsNumberOrRangeError((x) => parseLength(x, unit), t)), { numRuns: RUNS });
+    fc.assert(
+      fc.property(anyText, fc.constantFrom("m" as const, "ft" as const), (t, unit) =>
+        returnsNumberOrRangeError((x) => parseLength(x, unit), t),
+      ),
+      { numRuns: RUNS },
+    );
   });
   it("parseAngle", () => {
-    fc.assert(fc.property(anyText, (t) => returnsNumberOrRangeError(parseAngle, t)), { numRuns: RUNS });
+    fc.assert(
+      fc.property(anyText, (t) => returnsNumberOrRangeError(parseAngle, t)),
+      { numRuns: RUNS },
+    );
   });
   it("parseFadeTime and parseSplitTime stay within 0 … 24 h", () => {
     fc.assert(
@@ -74,7 +128,9 @@ describe("what the formatters write, the parsers read back", () => {
         // Metric is shown to 2 decimals: within half a centimetre (common practice, no source).
         expect(Math.abs(parseLength(formatLength(m, "metric"), "m") - m)).toBeLessThanOrEqual(0.005 + 1e-9);
         // Imperial is shown to the nearest 1/2 inch: within a quarter inch; 1 in = 25.4 mm exactly (NIST SP 811).
-        expect(Math.abs(parseLength(formatLength(m, "imperial"), "ft") - m)).toBeLessThanOrEqual(METRES_PER_INCH / 4 + 1e-9);
+        expect(Math.abs(parseLength(formatLength(m, "imperial"), "ft") - m)).toBeLessThanOrEqual(
+          METRES_PER_INCH / 4 + 1e-9,
+        );
       }),
       { numRuns: RUNS },
     );

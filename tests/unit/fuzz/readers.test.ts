@@ -28,50 +28,87 @@ async function tableOrFileProblem(read: () => unknown) {
 }
 
 // Cell text with the characters that matter to CSV: quotes, delimiters, line ends, a BOM, non-ASCII.
-const cellText = fc.array(fc.constantFrom("a", "B", "7", " ", ",", ";", "\t", "|", '"', "\n", "\r\n", "é", "\ufeff", "=1+2", "LX1", "3.2"), { maxLength: 6 }).map((p) => p.join(""));
+const cellText = fc
+  .array(
+    fc.constantFrom("a", "B", "7", " ", ",", ";", "\t", "|", '"', "\n", "\r\n", "é", "\ufeff", "=1+2", "LX1", "3.2"),
+    { maxLength: 6 },
+  )
+  .map((p) => p.join(""));
 
 describe("CSV reader", () => {
   it("arbitrary text: a table or a FileProblem", async () => {
-    await fc.assert(fc.asyncProperty(fc.oneof(fc.string({ maxLength: 200 }), fc.array(cellText, { maxLength: 30 }).map((c) => c.join(""))), (text) => tableOrFileProblem(() => readCsv(text))), { numRuns: 2000 });
+    await fc.assert(
+      fc.asyncProperty(
+        fc.oneof(
+          fc.string({ maxLength: 200 }),
+          fc.array(cellText, { maxLength: 30 }).map((c) => c.join("")),
+        ),
+        (text) => tableOrFileProblem(() => readCsv(text)),
+      ),
+      { numRuns: 2000 },
+    );
   }, 120_000);
 
   it("a grid written with RFC 4180 quoting reads back cell for cell", async () => {
     // RFC 4180: a field with a comma, quote or line break is quoted, and a quote inside is doubled.
     const word = fc.stringMatching(/^[A-Za-z0-9 ,"\n]{0,8}$/).filter((s) => s.trim() !== "" && s === s.trim());
     await fc.assert(
-      fc.asyncProperty(fc.integer({ min: 1, max: 5 }).chain((cols) => fc.array(fc.array(word, { minLength: cols, maxLength: cols }), { minLength: 2, maxLength: 8 })), (grid) => {
-        // Header cells unique and plain, so the reader keeps them as written.
-        const headers = grid[0].map((_, i) => `Col${i + 1}`);
-        const quote = (c: string) => (/[",\n]/.test(c) ? `"${c.replace(/"/g, '""')}"` : c);
-        const text = [headers, ...grid].map((row) => row.map(quote).join(",")).join("\r\n");
-        const t = readCsv(text);
-        expect(t.headers).toEqual(headers);
-        expect(t.rows.map((r) => r.cells)).toEqual(grid);
-      }),
+      fc.asyncProperty(
+        fc
+          .integer({ min: 1, max: 5 })
+          .chain((cols) =>
+            fc.array(fc.array(word, { minLength: cols, maxLength: cols }), { minLength: 2, maxLength: 8 }),
+          ),
+        (grid) => {
+          // Header cells unique and plain, so the reader keeps them as written.
+          const headers = grid[0].map((_, i) => `Col${i + 1}`);
+          const quote = (c: string) => (/[",\n]/.test(c) ? `"${c.replace(/"/g, '""')}"` : c);
+          const text = [headers, ...grid].map((row) => row.map(quote).join(",")).join("\r\n");
+          const t = readCsv(text);
+          expect(t.headers).toEqual(headers);
+          expect(t.rows.map((r) => r.cells)).toEqual(grid);
+        },
+      ),
       { numRuns: 500 },
     );
   });
 });
 
 // A minimal SpreadsheetML package (ECMA-376 Part 1) around sheet XML the generator writes.
-const ns = 'xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main" xmlns:r="http://schemas.openxmlformats.org/officeDocument/2006/relationships"';
+const ns =
+  'xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main" xmlns:r="http://schemas.openxmlformats.org/officeDocument/2006/relationships"';
 const rel = "http://schemas.openxmlformats.org/officeDocument/2006/relationships";
 const workbook = (sheet: string) =>
   zipSync({
-    "xl/workbook.xml": strToU8(`<workbook ${ns}><sheets><sheet name="Rig" sheetId="1" r:id="rId1"/></sheets></workbook>`),
-    "xl/_rels/workbook.xml.rels": strToU8(`<Relationships xmlns="http://schemas.openxmlformats.org/package/2006/relationships"><Relationship Id="rId1" Type="${rel}/worksheet" Target="worksheets/sheet1.xml"/></Relationships>`),
+    "xl/workbook.xml": strToU8(
+      `<workbook ${ns}><sheets><sheet name="Rig" sheetId="1" r:id="rId1"/></sheets></workbook>`,
+    ),
+    "xl/_rels/workbook.xml.rels": strToU8(
+      `<Relationships xmlns="http://schemas.openxmlformats.org/package/2006/relationships"><Relationship Id="rId1" Type="${rel}/worksheet" Target="worksheets/sheet1.xml"/></Relationships>`,
+    ),
     "xl/worksheets/sheet1.xml": strToU8(sheet),
   });
 
 const colLetters = fc.constantFrom("A", "B", "Z", "AA", "IV", "IW", "XFD", "XFE", "ZZZZ", "");
 const rowNum = fc.constantFrom("1", "2", "3", "20000", "20001", "1048576", "1048577", "0", "99999999999", "");
 const ref = fc.tuple(colLetters, rowNum).map(([c, r]) => c + r);
-const cell = fc.tuple(ref, fc.constantFrom("inlineStr", "s", "n", "b", "str", "e", "x"), fc.constantFrom("7", "-1", "1e308", "abc", "<", "&amp;", "&bogus;", "0", "99999")).map(
-  ([r, t, v]) => (t === "inlineStr" ? `<c r="${r}" t="inlineStr"><is><t>${v}</t></is></c>` : `<c r="${r}" t="${t}"><v>${v}</v></c>`),
-);
+const cell = fc
+  .tuple(
+    ref,
+    fc.constantFrom("inlineStr", "s", "n", "b", "str", "e", "x"),
+    fc.constantFrom("7", "-1", "1e308", "abc", "<", "&amp;", "&bogus;", "0", "99999"),
+  )
+  .map(([r, t, v]) =>
+    t === "inlineStr" ? `<c r="${r}" t="inlineStr"><is><t>${v}</t></is></c>` : `<c r="${r}" t="${t}"><v>${v}</v></c>`,
+  );
 const row = fc.tuple(rowNum, fc.array(cell, { maxLength: 4 })).map(([r, cs]) => `<row r="${r}">${cs.join("")}</row>`);
 const sheetXml = fc
-  .tuple(fc.option(fc.tuple(ref, ref)), fc.array(row, { maxLength: 6 }), fc.array(fc.tuple(ref, ref), { maxLength: 3 }), fc.boolean())
+  .tuple(
+    fc.option(fc.tuple(ref, ref)),
+    fc.array(row, { maxLength: 6 }),
+    fc.array(fc.tuple(ref, ref), { maxLength: 3 }),
+    fc.boolean(),
+  )
   .map(([dim, rows, merges, truncate]) => {
     const xml = `<worksheet ${ns}>${dim ? `<dimension ref="${dim[0]}:${dim[1]}"/>` : ""}<sheetData>${rows.join("")}</sheetData>${merges.length ? `<mergeCells>${merges.map(([a, b]) => `<mergeCell ref="${a}:${b}"/>`).join("")}</mergeCells>` : ""}</worksheet>`;
     return truncate ? xml.slice(0, Math.floor(xml.length / 2)) : xml;
@@ -80,7 +117,10 @@ const sheetXml = fc
 describe(".xlsx reader", () => {
   it("generated sheet XML (odd refs, types, merges, dimensions, cut short): a table or a FileProblem, in bounded memory", async () => {
     const before = process.memoryUsage().heapUsed;
-    await fc.assert(fc.asyncProperty(sheetXml, (xml) => tableOrFileProblem(() => readXlsx(workbook(xml)))), { numRuns: 400 });
+    await fc.assert(
+      fc.asyncProperty(sheetXml, (xml) => tableOrFileProblem(() => readXlsx(workbook(xml)))),
+      { numRuns: 400 },
+    );
     expect(process.memoryUsage().heapUsed - before).toBeLessThan(300 * 1024 * 1024);
   }, 120_000);
 
@@ -91,11 +131,15 @@ describe(".xlsx reader", () => {
     for (let i = 1; i <= 20; i++) ws.addRow(["LX1", i, "Profile 26"]);
     const good = new Uint8Array(await wb.xlsx.writeBuffer());
     await fc.assert(
-      fc.asyncProperty(fc.array(fc.tuple(fc.nat(good.length - 1), fc.integer({ min: 0, max: 255 })), { maxLength: 6 }), fc.option(fc.nat(good.length)), async (flips, cut) => {
-        const bytes = good.slice(0, cut ?? good.length);
-        for (const [at, v] of flips) if (at < bytes.length) bytes[at] = v;
-        await tableOrFileProblem(() => readTable(bytes, "rig.xlsx"));
-      }),
+      fc.asyncProperty(
+        fc.array(fc.tuple(fc.nat(good.length - 1), fc.integer({ min: 0, max: 255 })), { maxLength: 6 }),
+        fc.option(fc.nat(good.length)),
+        async (flips, cut) => {
+          const bytes = good.slice(0, cut ?? good.length);
+          for (const [at, v] of flips) if (at < bytes.length) bytes[at] = v;
+          await tableOrFileProblem(() => readTable(bytes, "rig.xlsx"));
+        },
+      ),
       { numRuns: 150 },
     );
   }, 120_000);
@@ -103,15 +147,18 @@ describe(".xlsx reader", () => {
   it("what a workbook holds reads back cell for cell", async () => {
     const text = fc.stringMatching(/^[A-Za-z0-9 é'.-]{1,12}$/).filter((s) => s.trim() === s && s !== "");
     await fc.assert(
-      fc.asyncProperty(fc.array(fc.array(text, { minLength: 3, maxLength: 3 }), { minLength: 1, maxLength: 6 }), async (rows) => {
-        const wb = new ExcelJS.Workbook();
-        const ws = wb.addWorksheet("Rig");
-        ws.addRow(["Position", "Unit", "Type"]);
-        for (const r of rows) ws.addRow(r);
-        const t = await readXlsx(new Uint8Array(await wb.xlsx.writeBuffer()));
-        expect(t.headers).toEqual(["Position", "Unit", "Type"]);
-        expect(t.rows.map((r) => r.cells)).toEqual(rows);
-      }),
+      fc.asyncProperty(
+        fc.array(fc.array(text, { minLength: 3, maxLength: 3 }), { minLength: 1, maxLength: 6 }),
+        async (rows) => {
+          const wb = new ExcelJS.Workbook();
+          const ws = wb.addWorksheet("Rig");
+          ws.addRow(["Position", "Unit", "Type"]);
+          for (const r of rows) ws.addRow(r);
+          const t = await readXlsx(new Uint8Array(await wb.xlsx.writeBuffer()));
+          expect(t.headers).toEqual(["Position", "Unit", "Type"]);
+          expect(t.rows.map((r) => r.cells)).toEqual(rows);
+        },
+      ),
       { numRuns: 60 },
     );
   }, 120_000);
@@ -126,10 +173,69 @@ describe("USITT ASCII reader", () => {
   });
 
   // Lines built from the standard's keywords and delimiters (shared REFERENCE.md), with junk mixed in.
-  const KEYWORDS = ["IDENT", "CUE", "PART", "UP", "DOWN", "FOLLOWON", "FOLLOW", "LINK", "TEXT", "CHAN", "PATCH", "GROUP", "ENDDATA", "CLEAR", "$TL-TEXT", "$TL-NOTE", "$TL-PAGE", "$TL-BLOCK", "$TL-PARTTEXT", "$OTHER", "!", "MANUFACTURER", "CONSOLE", "bogus"];
-  const ARGS = ["1", "2.5", "0", "-1", "3:0", "1@50", "2@FL", "3@H80", "4@HZZ", "5@101", "99999@1", "100000@1", "1/2", "1<2", "1:30", "25:00:00", ".5", "x", "\\u{1F600}", "\\n", "", "1 1 1"];
-  const line = fc.tuple(fc.constantFrom(...KEYWORDS), fc.array(fc.constantFrom(...ARGS), { maxLength: 5 }), fc.constantFrom(" ", ",", "/", "<", ">", "=", "@", "  ")).map(([k, a, d]) => [k, ...a].join(d));
-  const file = fc.tuple(fc.array(fc.oneof(line, fc.string({ maxLength: 90 })), { maxLength: 40 }), fc.constantFrom("\r\n", "\n", "\r")).map(([ls, end]) => ls.join(end));
+  const KEYWORDS = [
+    "IDENT",
+    "CUE",
+    "PART",
+    "UP",
+    "DOWN",
+    "FOLLOWON",
+    "FOLLOW",
+    "LINK",
+    "TEXT",
+    "CHAN",
+    "PATCH",
+    "GROUP",
+    "ENDDATA",
+    "CLEAR",
+    "$TL-TEXT",
+    "$TL-NOTE",
+    "$TL-PAGE",
+    "$TL-BLOCK",
+    "$TL-PARTTEXT",
+    "$OTHER",
+    "!",
+    "MANUFACTURER",
+    "CONSOLE",
+    "bogus",
+  ];
+  const ARGS = [
+    "1",
+    "2.5",
+    "0",
+    "-1",
+    "3:0",
+    "1@50",
+    "2@FL",
+    "3@H80",
+    "4@HZZ",
+    "5@101",
+    "99999@1",
+    "100000@1",
+    "1/2",
+    "1<2",
+    "1:30",
+    "25:00:00",
+    ".5",
+    "x",
+    "\\u{1F600}",
+    "\\n",
+    "",
+    "1 1 1",
+  ];
+  const line = fc
+    .tuple(
+      fc.constantFrom(...KEYWORDS),
+      fc.array(fc.constantFrom(...ARGS), { maxLength: 5 }),
+      fc.constantFrom(" ", ",", "/", "<", ">", "=", "@", "  "),
+    )
+    .map(([k, a, d]) => [k, ...a].join(d));
+  const file = fc
+    .tuple(
+      fc.array(fc.oneof(line, fc.string({ maxLength: 90 })), { maxLength: 40 }),
+      fc.constantFrom("\r\n", "\n", "\r"),
+    )
+    .map(([ls, end]) => ls.join(end));
 
   it("never throws; every problem names a line of the file (0: the file as a whole)", () => {
     fc.assert(
@@ -143,7 +249,8 @@ describe("USITT ASCII reader", () => {
         }
         for (const c of r.cues) {
           expect(c.number).toBeGreaterThan(0);
-          for (const level of Object.values(c.levels)) expect(level === null || (level >= 0 && level <= 100)).toBe(true);
+          for (const level of Object.values(c.levels))
+            expect(level === null || (level >= 0 && level <= 100)).toBe(true);
         }
       }),
       { numRuns: 3000 },
