@@ -4,8 +4,12 @@ import { type NextRequest, NextResponse } from "next/server";
 import { contentSecurityPolicy, refuseCrossSiteWrite, securityHeaders } from "@/lib/http/request-guard";
 
 export function proxy(request: NextRequest) {
-  const https = request.nextUrl.protocol === "https:" || request.headers.get("x-forwarded-proto")?.startsWith("https") === true;
-  const refusal = refuseCrossSiteWrite({ method: request.method, pathname: request.nextUrl.pathname, headers: request.headers }, https ? "https" : "http");
+  const https =
+    request.nextUrl.protocol === "https:" || request.headers.get("x-forwarded-proto")?.startsWith("https") === true;
+  const refusal = refuseCrossSiteWrite(
+    { method: request.method, pathname: request.nextUrl.pathname, headers: request.headers },
+    https ? "https" : "http",
+  );
   if (refusal) {
     const res = NextResponse.json({ error: refusal.code, message: refusal.message }, { status: refusal.status });
     for (const [k, v] of Object.entries(securityHeaders(https))) res.headers.set(k, v);

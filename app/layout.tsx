@@ -11,7 +11,13 @@ export const metadata: Metadata = {
   title: { default: "Throwline", template: "%s · Throwline" },
   description: "Plot, focus, cues and paperwork for the lighting department.",
   // Throwline's own icon set (public/icons) and the manifest from app/manifest.ts.
-  icons: { icon: [{ url: "/favicon.ico", sizes: "48x48" }, { url: "/icons/throwline.svg", type: "image/svg+xml" }], apple: "/icons/apple-touch-icon.png" },
+  icons: {
+    icon: [
+      { url: "/favicon.ico", sizes: "48x48" },
+      { url: "/icons/throwline.svg", type: "image/svg+xml" },
+    ],
+    apple: "/icons/apple-touch-icon.png",
+  },
   manifest: "/manifest.webmanifest",
   appleWebApp: { capable: true, title: "Throwline", statusBarStyle: "black-translucent" },
 };
@@ -19,7 +25,10 @@ export const metadata: Metadata = {
 export const viewport: Viewport = {
   width: "device-width",
   initialScale: 1,
-  themeColor: [{ media: "(prefers-color-scheme: dark)", color: "#161412" }, { media: "(prefers-color-scheme: light)", color: "#ffffff" }],
+  themeColor: [
+    { media: "(prefers-color-scheme: dark)", color: "#161412" },
+    { media: "(prefers-color-scheme: light)", color: "#ffffff" },
+  ],
 };
 
 export default async function RootLayout({ children }: { children: React.ReactNode }) {

@@ -20,12 +20,56 @@ const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.len
 /** An invented production of n fixtures: a third 16-slot LED units, the rest 1-slot lamps. */
 async function seedProduction(n: number) {
   const { Production, Position, FixtureType, Fixture, Circuit, DataLine, Accessory } = getDb();
-  const production = await Production.create({ name: `Bench checks ${n} ${Date.now()}`, venue: "Bench", displayUnits: "metric", electricalCode: "us-nec", supplySystem: "120-208-3ph" } as never);
+  const production = await Production.create({
+    name: `Bench checks ${n} ${Date.now()}`,
+    venue: "Bench",
+    displayUnits: "metric",
+    electricalCode: "us-nec",
+    supplySystem: "120-208-3ph",
+  } as never);
   const productionId = production.id;
   const pipes = Math.ceil(n / UNITS_PER_PIPE);
-  const positions = await Position.bulkCreate(Array.from({ length: pipes }, (_, p) => ({ productionId, name: `Pipe ${p + 1}`, kind: "overhead-pipe" as const, x1: -8, y1: p, x2: 8, y2: p, trimHeight: 7, ratedLoadKg: 250, liftLines: 3, sortOrder: p })));
-  const lamp = await FixtureType.create({ productionId, name: "Lamp profile", family: "profile", coneMinDeg: 26, coneMaxDeg: 26, peakCandela: 40000, wattage: 750, weightKg: 8, dmxModes: [{ name: "dimmer", footprint: 1 }], frameSize: null, goboSize: null });
-  const led = await FixtureType.create({ productionId, name: "LED wash", family: "led-wash", coneMinDeg: 20, coneMaxDeg: 20, peakCandela: 9000, wattage: 300, weightKg: 10, dmxModes: [{ name: "wide", footprint: 16 }], frameSize: null, goboSize: null });
+  const positions = await Position.bulkCreate(
+    Array.from({ length: pipes }, (_, p) => ({
+      productionId,
+      name: `Pipe ${p + 1}`,
+      kind: "overhead-pipe" as const,
+      x1: -8,
+      y1: p,
+      x2: 8,
+      y2: p,
+      trimHeight: 7,
+      ratedLoadKg: 250,
+      liftLines: 3,
+      sortOrder: p,
+    })),
+  );
+  const lamp = await FixtureType.create({
+    productionId,
+    name: "Lamp profile",
+    family: "profile",
+    coneMinDeg: 26,
+    coneMaxDeg: 26,
+    peakCandela: 40000,
+    wattage: 750,
+    weightKg: 8,
+    dmxModes: [{ name: "dimmer", footprint: 1 }],
+    frameSize: null,
+    goboSize: null,
+  });
+  const led = await FixtureType.create({
+    productionId,
+    name: "LED wash",
+    family: "led-wash",
+    coneMinDeg: 20,
+    coneMaxDeg: 20,
+    peakCandela: 9000,
+    wattage: 300,
+    weightKg: 10,
+    dmxModes: [{ name: "wide", footprint: 16 }],
+    frameSize: null,
+    goboSize: null,
+  });
   const circuitCount = Math.round(n * 0.4);
   // 1,500 fixtures over 48 universes (issue 15's size), the same density at other sizes.
   const universes = Math.max(1, Math.round((n * 48) / 1500));
@@ -36,19 +80,61 @@ async function seedProduction(n: number) {
     const footprint = isLed ? 16 : 1;
     if (i % perUniverse === 0) address = 1;
     const row = {
-      productionId, positionId: positions[Math.floor(i / UNITS_PER_PIPE)].id, fixtureTypeId: isLed ? led.id : lamp.id,
-      unitNumber: String((i % UNITS_PER_PIPE) + 1), unitSort: String((i % UNITS_PER_PIPE) + 1).padStart(6, "0"), channel: i + 1, universe: 1 + Math.floor(i / perUniverse), address, dmxMode: isLed ? "wide" : "dimmer", footprint,
-      circuit: String(1 + (i % circuitCount)), x: -8 + ((i % UNITS_PER_PIPE) + 0.5) * (16 / UNITS_PER_PIPE), y: Math.floor(i / UNITS_PER_PIPE),
+      productionId,
+      positionId: positions[Math.floor(i / UNITS_PER_PIPE)].id,
+      fixtureTypeId: isLed ? led.id : lamp.id,
+      unitNumber: String((i % UNITS_PER_PIPE) + 1),
+      unitSort: String((i % UNITS_PER_PIPE) + 1).padStart(6, "0"),
+      channel: i + 1,
+      universe: 1 + Math.floor(i / perUniverse),
+      address,
+      dmxMode: isLed ? "wide" : "dimmer",
+      footprint,
+      circuit: String(1 + (i % circuitCount)),
+      x: -8 + ((i % UNITS_PER_PIPE) + 0.5) * (16 / UNITS_PER_PIPE),
+      y: Math.floor(i / UNITS_PER_PIPE),
     };
     // Every 50th lamp shares the next one's dimmer slot (a deliberate share); every 97th overlaps the next unit (a conflict).
     address += i % 50 === 1 ? 0 : i % 97 === 5 ? Math.max(0, footprint - 1) : footprint;
     return row;
   });
   for (let i = 0; i < rows.length; i += 1000) await Fixture.bulkCreate(rows.slice(i, i + 1000) as never);
-  await Circuit.bulkCreate(Array.from({ length: circuitCount }, (_, c) => ({ productionId, name: String(c + 1), ratingA: 20, phase: ["A", "B", "C"][c % 3], power: c % 3 === 0 ? ("constant" as const) : ("dimmed" as const) })));
-  const ids = (await Fixture.findAll({ raw: true, where: { productionId }, attributes: ["id", "positionId"], order: [["id", "ASC"]] })) as unknown as { id: number; positionId: number }[];
-  await DataLine.bulkCreate(positions.map((p) => ({ productionId, name: `${p.name} run`, universe: null, fixtureIds: ids.filter((f) => f.positionId === p.id).map((f) => f.id) })));
-  await Accessory.bulkCreate(ids.filter((_, i) => i % 10 === 0).map((f) => ({ productionId, fixtureId: f.id, kind: "scroller", universe: null, address: null, footprint: null, weightKg: 2 })));
+  await Circuit.bulkCreate(
+    Array.from({ length: circuitCount }, (_, c) => ({
+      productionId,
+      name: String(c + 1),
+      ratingA: 20,
+      phase: ["A", "B", "C"][c % 3],
+      power: c % 3 === 0 ? ("constant" as const) : ("dimmed" as const),
+    })),
+  );
+  const ids = (await Fixture.findAll({
+    raw: true,
+    where: { productionId },
+    attributes: ["id", "positionId"],
+    order: [["id", "ASC"]],
+  })) as unknown as { id: number; positionId: number }[];
+  await DataLine.bulkCreate(
+    positions.map((p) => ({
+      productionId,
+      name: `${p.name} run`,
+      universe: null,
+      fixtureIds: ids.filter((f) => f.positionId === p.id).map((f) => f.id),
+    })),
+  );
+  await Accessory.bulkCreate(
+    ids
+      .filter((_, i) => i % 10 === 0)
+      .map((f) => ({
+        productionId,
+        fixtureId: f.id,
+        kind: "scroller",
+        universe: null,
+        address: null,
+        footprint: null,
+        weightKg: 2,
+      })),
+  );
   return { productionId, universes, circuits: circuitCount };
 }
 
@@ -57,8 +143,15 @@ async function timeHttp(url: string, productionId: number): Promise<number | nul
   const { Membership, User } = getDb();
   const demo = await User.findOne({ where: { email: "maren.oduya@quillmere.test" } });
   if (!demo) return null;
-  await Membership.findOrCreate({ where: { userId: demo.id, productionId }, defaults: { userId: demo.id, productionId, role: "designer", isOwner: true } });
-  const signIn = await fetch(`${url}/api/auth/sign-in`, { method: "POST", headers: { "content-type": "application/json", origin: url }, body: JSON.stringify({ email: demo.email, password: "lantern-demo-2026" }) });
+  await Membership.findOrCreate({
+    where: { userId: demo.id, productionId },
+    defaults: { userId: demo.id, productionId, role: "designer", isOwner: true },
+  });
+  const signIn = await fetch(`${url}/api/auth/sign-in`, {
+    method: "POST",
+    headers: { "content-type": "application/json", origin: url },
+    body: JSON.stringify({ email: demo.email, password: "lantern-demo-2026" }),
+  });
   const cookie = signIn.headers.getSetCookie()[0]?.split(";")[0];
   if (!cookie) return null;
   const times: number[] = [];
@@ -74,11 +167,18 @@ async function timeHttp(url: string, productionId: number): Promise<number | nul
 }
 
 async function main() {
-  console.log(`bench:checks — ${os.cpus().length} CPUs, load ${os.loadavg().map((x) => x.toFixed(1)).join(" ")}, Node ${process.version}`);
+  console.log(
+    `bench:checks — ${os.cpus().length} CPUs, load ${os
+      .loadavg()
+      .map((x) => x.toFixed(1))
+      .join(" ")}, Node ${process.version}`,
+  );
   if ((await ensureDatabase()) === "unavailable") return;
   const url = await ensureServer();
   // Wall time swings with other work on a shared machine; Node's CPU time (reads decoded + checks) much less.
-  console.log("fixtures | universes | circuits | report wall ms (reads + checks) | report Node CPU ms | checks only wall ms | HTTP GET ms | findings");
+  console.log(
+    "fixtures | universes | circuits | report wall ms (reads + checks) | report Node CPU ms | checks only wall ms | HTTP GET ms | findings",
+  );
   for (const n of SIZES) {
     const { productionId, universes, circuits } = await seedProduction(n);
     await getChecksReport({ productionId }); // warm the pool and the JIT
@@ -97,7 +197,9 @@ async function main() {
       findings = r!.findings.length;
     }
     const http = url ? await timeHttp(url, productionId) : null;
-    console.log(`${n} | ${universes} | ${circuits} | ${median(total).toFixed(1)} | ${median(cpu).toFixed(1)} | ${median(compute).toFixed(1)} | ${http == null ? "–" : http.toFixed(1)} | ${findings}`);
+    console.log(
+      `${n} | ${universes} | ${circuits} | ${median(total).toFixed(1)} | ${median(cpu).toFixed(1)} | ${median(compute).toFixed(1)} | ${http == null ? "–" : http.toFixed(1)} | ${findings}`,
+    );
   }
 }
 
@@ -107,6 +209,9 @@ main()
     process.exitCode = 1;
   })
   .finally(async () => {
-    if (process.env.DATABASE_URL) await getDb().sequelize.close().catch(() => {});
+    if (process.env.DATABASE_URL)
+      await getDb()
+        .sequelize.close()
+        .catch(() => {});
     await stopAll();
   });

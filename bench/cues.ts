@@ -11,7 +11,6 @@ import { DEMO_PASSWORD, DEMO_USERS } from "../tests/support/demo";
 import { ensureDatabase, ensureServer, stopAll } from "./support/cues-env";
 import { seededRandom, summarise } from "./support/numbers";
 
-
 /** Sparse moves as in real shows: most cues move 2–20 channels, a few a third of the rig; some follow, some have parts or links. */
 function show(cues: number, channels: number, seed = 7): SheetCue[] {
   const r = seededRandom(seed);
@@ -21,9 +20,23 @@ function show(cues: number, channels: number, seed = 7): SheetCue[] {
     const levels: Record<number, number> = {};
     for (let k = 0; k < count; k++) levels[1 + Math.floor(r() * channels)] = Math.round(r() * 10) * 10;
     const moved = Object.keys(levels).map(Number);
-    const parts = r() < 0.05 ? [{ part: 2, upTime: 8, downTime: null, delay: 2, channels: moved.slice(0, Math.ceil(moved.length / 2)) }] : [];
+    const parts =
+      r() < 0.05
+        ? [{ part: 2, upTime: 8, downTime: null, delay: 2, channels: moved.slice(0, Math.ceil(moved.length / 2)) }]
+        : [];
     const link = r() < 0.02 && i + 5 < cues ? i + 5 : null;
-    return { id: i + 1, number: i + 1, block: r() < 0.01, levels, follow: r() < 0.08 ? 2 : null, link, upTime: 3, downTime: null, delay: 0, parts };
+    return {
+      id: i + 1,
+      number: i + 1,
+      block: r() < 0.01,
+      levels,
+      follow: r() < 0.08 ? 2 : null,
+      link,
+      upTime: 3,
+      downTime: null,
+      delay: 0,
+      parts,
+    };
   });
 }
 
@@ -39,14 +52,24 @@ async function time(fn: () => unknown, runs = 21) {
 }
 
 const fmt = (ms: number) => `${ms.toFixed(ms < 10 ? 2 : 1)} ms`;
-const line = (s: { median: number; p95: number; max: number }) => `median ${fmt(s.median)}, p95 ${fmt(s.p95)}, max ${fmt(s.max)}`;
-const SIZES = [[150, 100], [300, 200], [600, 400], [1200, 800]] as const;
+const line = (s: { median: number; p95: number; max: number }) =>
+  `median ${fmt(s.median)}, p95 ${fmt(s.p95)}, max ${fmt(s.max)}`;
+const SIZES = [
+  [150, 100],
+  [300, 200],
+  [600, 400],
+  [1200, 800],
+] as const;
 
 async function pure() {
-  console.log("\nPure (lib/cues): tracking every cue; then the whole cue sheet (summaries, running times with parts, links, standbys)");
+  console.log(
+    "\nPure (lib/cues): tracking every cue; then the whole cue sheet (summaries, running times with parts, links, standbys)",
+  );
   for (const [c, ch] of SIZES) {
     const s = show(c, ch);
-    const info = new Map(Array.from({ length: ch }, (_, i) => [i + 1, { purposes: [`purpose ${i % 12}`], areas: [`Area ${i % 9}`] }]));
+    const info = new Map(
+      Array.from({ length: ch }, (_, i) => [i + 1, { purposes: [`purpose ${i % 12}`], areas: [`Area ${i % 9}`] }]),
+    );
     const track = await time(() => computeTracking(s as CueMoves[]));
     const sheet = await time(() => buildCueSheet(s, info));
     const moves = s.reduce((n, x) => n + Object.keys(x.levels).length, 0);
@@ -64,15 +87,36 @@ async function database() {
     const server = await ensureServer();
     for (const [c, ch] of SIZES.slice(1)) {
       const s = show(c, ch);
-      const production = await db.Production.create({ name: `bench cues ${c}x${ch} ${Date.now()}`, venue: "bench" } as never);
+      const production = await db.Production.create({
+        name: `bench cues ${c}x${ch} ${Date.now()}`,
+        venue: "bench",
+      } as never);
       made.push(production.id);
-      const rows = await db.Cue.bulkCreate(s.map((q) => ({ productionId: production.id, number: String(q.number), upTime: 3, follow: q.follow, block: q.block, link: q.link == null ? null : String(q.link) })));
-      const levels = rows.flatMap((row, i) => Object.entries(s[i].levels).map(([chan, level]) => ({ cueId: row.id, channel: Number(chan), level })));
+      const rows = await db.Cue.bulkCreate(
+        s.map((q) => ({
+          productionId: production.id,
+          number: String(q.number),
+          upTime: 3,
+          follow: q.follow,
+          block: q.block,
+          link: q.link == null ? null : String(q.link),
+        })),
+      );
+      const levels = rows.flatMap((row, i) =>
+        Object.entries(s[i].levels).map(([chan, level]) => ({ cueId: row.id, channel: Number(chan), level })),
+      );
       for (let i = 0; i < levels.length; i += 5000) await db.CueLevel.bulkCreate(levels.slice(i, i + 5000));
-      await db.CuePart.bulkCreate(rows.flatMap((row, i) => s[i].parts.map((p) => ({ cueId: row.id, ...p, channels: [...p.channels] }))));
+      await db.CuePart.bulkCreate(
+        rows.flatMap((row, i) => s[i].parts.map((p) => ({ cueId: row.id, ...p, channels: [...p.channels] }))),
+      );
       console.log(`\n${c} cues × ${ch} channels from the database (${levels.length} moves):`);
-      console.log(`  getCueSheet (the summary route's whole work): ${line(await time(() => getCueSheet({ productionId: production.id }), 41))}`);
-      if (server) console.log(`  GET /cues/summary over HTTP as the designer: ${line(await overHttp(server, production.id, db))}`);
+      console.log(
+        `  getCueSheet (the summary route's whole work): ${line(await time(() => getCueSheet({ productionId: production.id }), 41))}`,
+      );
+      if (server)
+        console.log(
+          `  GET /cues/summary over HTTP as the designer: ${line(await overHttp(server, production.id, db))}`,
+        );
     }
   } finally {
     if (made.length) await db.Production.destroy({ where: { id: made } });
@@ -85,8 +129,15 @@ async function overHttp(base: string, productionId: number, db: ReturnType<typeo
   const user = await db.User.findOne({ where: { email: DEMO_USERS.designer } });
   if (!user) throw new Error("the demo designer is not in this database (seed it, or use the throwaway one)");
   await db.Membership.create({ userId: user.id, productionId, role: "designer", isOwner: false } as never);
-  const signIn = await fetch(`${base}/api/auth/sign-in`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ email: DEMO_USERS.designer, password: DEMO_PASSWORD }) });
-  const cookie = signIn.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+  const signIn = await fetch(`${base}/api/auth/sign-in`, {
+    method: "POST",
+    headers: { "content-type": "application/json" },
+    body: JSON.stringify({ email: DEMO_USERS.designer, password: DEMO_PASSWORD }),
+  });
+  const cookie = signIn.headers
+    .getSetCookie()
+    .map((c) => c.split(";")[0])
+    .join("; ");
   return time(async () => {
     const r = await fetch(`${base}/api/productions/${productionId}/cues/summary`, { headers: { cookie } });
     if (!r.ok) throw new Error(`summary answered ${r.status}`);
@@ -94,7 +145,9 @@ async function overHttp(base: string, productionId: number, db: ReturnType<typeo
   }, 41);
 }
 
-console.log(`cues benchmark · ${new Date().toISOString().slice(0, 10)} · ${os.cpus().length} cores · Node ${process.version}`);
+console.log(
+  `cues benchmark · ${new Date().toISOString().slice(0, 10)} · ${os.cpus().length} cores · Node ${process.version}`,
+);
 pure()
   .then(database)
   .catch((err) => {

@@ -5,7 +5,6 @@ import { performance } from "node:perf_hooks";
 import { illuminanceGrid, poolAtPlane, type Family, type LitBeam, type PoolInput } from "../lib/optics";
 import { seededRandom, summarise } from "./support/numbers";
 
-
 const FAMILIES: Family[] = ["profile", "profile", "fresnel", "wash", "par", "led-wash", "followspot"];
 const STAGE = { minX: -8, minY: 0, maxX: 8, maxY: 12 }; // 16 m × 12 m, setting line at y = 0
 
@@ -15,16 +14,20 @@ function rig(n: number, seed = 42): LitBeam[] {
   const beams: LitBeam[] = [];
   for (let k = 0; k < n; k++) {
     const kind = r();
-    const source = kind < 0.6
-      ? { x: -9 + 18 * r(), y: 1 + 10 * r(), z: 6 + 3 * r() }
-      : kind < 0.85
-        ? { x: -10 + 20 * r(), y: -12 + 5 * r(), z: 7 + 4 * r() }
-        : { x: r() < 0.5 ? -9.5 : 9.5, y: 1 + 10 * r(), z: 0.5 + 4 * r() };
+    const source =
+      kind < 0.6
+        ? { x: -9 + 18 * r(), y: 1 + 10 * r(), z: 6 + 3 * r() }
+        : kind < 0.85
+          ? { x: -10 + 20 * r(), y: -12 + 5 * r(), z: 7 + 4 * r() }
+          : { x: r() < 0.5 ? -9.5 : 9.5, y: 1 + 10 * r(), z: 0.5 + 4 * r() };
     const coneDeg = 10 + 40 * r();
     beams.push({
       source,
       focus: { x: -7 + 14 * r(), y: 0.5 + 11 * r(), z: r() < 0.5 ? 1.7 : 0 },
-      coneDeg, softnessDeg: coneDeg * 0.3 * r(), peakCandela: 5_000 + 80_000 * r(), level: 0.2 + 0.8 * r(),
+      coneDeg,
+      softnessDeg: coneDeg * 0.3 * r(),
+      peakCandela: 5_000 + 80_000 * r(),
+      level: 0.2 + 0.8 * r(),
       family: FAMILIES[k % FAMILIES.length],
     });
   }
@@ -35,7 +38,11 @@ function benchPools(): { perSecond: number; bestPerSecond: number; calls: number
   // Plain PoolInput literals, as a caller builds them. (Objects spread from bigger rows ran about 2.5× slower
   // in V8 on this machine: property access on their hidden classes, not the geometry.)
   const inputs: PoolInput[] = rig(1024, 7).map((b) => ({
-    source: b.source, focus: b.focus, coneDeg: b.coneDeg, softnessDeg: b.softnessDeg, planeZ: b.focus.z,
+    source: b.source,
+    focus: b.focus,
+    coneDeg: b.coneDeg,
+    softnessDeg: b.softnessDeg,
+    planeZ: b.focus.z,
   }));
   let sink = 0;
   const run = (calls: number) => {
@@ -105,18 +112,20 @@ console.log(
 
 const rows = [100, 500, 1500].map(benchGrid);
 console.log("Coverage grid, 16 m × 12 m at 0.1 m, deck plane (median and best of 9 culled and 5 unculled runs)");
-console.table(rows.map((r) => ({
-  fixtures: r.fixtures,
-  points: r.points,
-  "culled ms": +r.culledMs.toFixed(1),
-  "culled best ms": +r.culledBestMs.toFixed(1),
-  "no culling ms": +r.fullMs.toFixed(1),
-  "no culling best ms": +r.fullBestMs.toFixed(1),
-  "speed-up": +r.ratio.toFixed(1),
-  "cells culled": r.evalsCulled,
-  "cells unculled": r.evalsFull,
-  "max |diff| lx": r.maxDiff,
-})));
+console.table(
+  rows.map((r) => ({
+    fixtures: r.fixtures,
+    points: r.points,
+    "culled ms": +r.culledMs.toFixed(1),
+    "culled best ms": +r.culledBestMs.toFixed(1),
+    "no culling ms": +r.fullMs.toFixed(1),
+    "no culling best ms": +r.fullBestMs.toFixed(1),
+    "speed-up": +r.ratio.toFixed(1),
+    "cells culled": r.evalsCulled,
+    "cells unculled": r.evalsFull,
+    "max |diff| lx": r.maxDiff,
+  })),
+);
 const at500 = rows[1];
 const gridGoal = at500.culledMs < 150 ? "meets" : "MISSES";
 console.log(

@@ -18,7 +18,12 @@ export async function startServer(): Promise<Server> {
   }
   const dir = mkdtempSync(path.join(os.tmpdir(), "throwline-bench-"));
   const db = await startMariaDb({ dir, port: await freePort(), password: randomBytes(12).toString("hex") });
-  const env = { DATABASE_URL: db.url, SESSION_SECRET: randomBytes(36).toString("base64url"), STORAGE_DIR: path.join(dir, "uploads"), NEXT_TELEMETRY_DISABLED: "1" };
+  const env = {
+    DATABASE_URL: db.url,
+    SESSION_SECRET: randomBytes(36).toString("base64url"),
+    STORAGE_DIR: path.join(dir, "uploads"),
+    NEXT_TELEMETRY_DISABLED: "1",
+  };
   migrate(env);
   await seedWhenEmpty(env);
   const distDir = process.env.BENCH_DIST_DIR ?? ".next-bench-plot";

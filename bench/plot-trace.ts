@@ -4,7 +4,15 @@
 // tasks by name, so server wait, script compile/evaluation, layout, GC and canvas drawing can be told apart.
 import type { Browser, Page } from "playwright-core";
 
-export type FirstDrawParts = { ttfb: number; htmlDone: number; domReady: number; rebuildStart: number; rebuild: number; drawStart: number; paint: number };
+export type FirstDrawParts = {
+  ttfb: number;
+  htmlDone: number;
+  domReady: number;
+  rebuildStart: number;
+  rebuild: number;
+  drawStart: number;
+  paint: number;
+};
 
 // A page script as a string: tsx's name-keeping helper (__name) does not exist inside the page.
 const READ_PARTS = `(() => {
@@ -21,16 +29,33 @@ export async function openPlot(page: Page, productionId: number): Promise<FirstD
   return (await page.evaluate(READ_PARTS)) as FirstDrawParts;
 }
 
-type TraceEvent = { name: string; ph: string; ts: number; dur?: number; pid: number; tid: number; args?: { name?: string } };
+type TraceEvent = {
+  name: string;
+  ph: string;
+  ts: number;
+  dur?: number;
+  pid: number;
+  tid: number;
+  args?: { name?: string };
+};
 
 /** Top-level task time on the renderer's main thread during one visit, largest first. */
 export async function traceFirstDraw(browser: Browser, page: Page, productionId: number) {
-  await browser.startTracing(page, { categories: ["devtools.timeline", "v8", "disabled-by-default-devtools.timeline", "blink.user_timing"] });
+  await browser.startTracing(page, {
+    categories: ["devtools.timeline", "v8", "disabled-by-default-devtools.timeline", "blink.user_timing"],
+  });
   await openPlot(page, productionId);
   const events = (JSON.parse((await browser.stopTracing()).toString()) as { traceEvents: TraceEvent[] }).traceEvents;
-  const main = events.find((e) => e.name === "thread_name" && e.args?.name === "CrRendererMain" && events.some((x) => x.pid === e.pid && x.name === "ParseHTML"));
+  const main = events.find(
+    (e) =>
+      e.name === "thread_name" &&
+      e.args?.name === "CrRendererMain" &&
+      events.some((x) => x.pid === e.pid && x.name === "ParseHTML"),
+  );
   if (!main) return [];
-  const tasks = events.filter((e) => e.pid === main.pid && e.tid === main.tid && e.ph === "X" && e.dur).sort((a, b) => a.ts - b.ts);
+  const tasks = events
+    .filter((e) => e.pid === main.pid && e.tid === main.tid && e.ph === "X" && e.dur)
+    .sort((a, b) => a.ts - b.ts);
   const sums = new Map<string, number>();
   let end = 0;
   for (const t of tasks) {

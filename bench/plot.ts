@@ -39,7 +39,10 @@ async function stopRecording(page: Page) {
 
 async function canvasBox(page: Page) {
   const c = page.getByTestId("plot-canvas");
-  return { box: (await c.boundingBox())!, view: JSON.parse((await c.getAttribute("data-view"))!) as { scale: number; ox: number; oy: number } };
+  return {
+    box: (await c.boundingBox())!,
+    view: JSON.parse((await c.getAttribute("data-view"))!) as { scale: number; ox: number; oy: number },
+  };
 }
 
 async function panAndZoom(page: Page, seconds: number) {
@@ -51,7 +54,8 @@ async function panAndZoom(page: Page, seconds: number) {
   while (Date.now() < end) {
     await page.mouse.move(cx, cy);
     await page.mouse.down();
-    for (let i = 0; i < 20; i++) await page.mouse.move(cx + Math.sin((k + i) / 6) * 150, cy + Math.cos((k + i) / 6) * 100);
+    for (let i = 0; i < 20; i++)
+      await page.mouse.move(cx + Math.sin((k + i) / 6) * 150, cy + Math.cos((k + i) / 6) * 100);
     await page.mouse.up();
     for (let i = 0; i < 10; i++) await page.mouse.wheel(0, (k % 2 ? 1 : -1) * 40);
     k += 20;
@@ -60,11 +64,17 @@ async function panAndZoom(page: Page, seconds: number) {
 
 async function dragMark(page: Page, productionId: number, seconds: number) {
   const data = await (await page.request.get(`/api/productions/${productionId}/plot`)).json();
-  const f = data.fixtures.find((x: { focusPointId: number | null; positionName: string; computed: { focus: unknown } }) => x.focusPointId === null && x.computed.focus && x.positionName.startsWith("Pipe 2"));
+  const f = data.fixtures.find(
+    (x: { focusPointId: number | null; positionName: string; computed: { focus: unknown } }) =>
+      x.focusPointId === null && x.computed.focus && x.positionName.startsWith("Pipe 2"),
+  );
   await page.getByRole("button", { name: "Fit to stage" }).click(); // the pan may have left the unit off screen
   await page.evaluate(AFTER_TWO_FRAMES);
   const { box, view } = await canvasBox(page);
-  const at = (p: { x: number; y: number }) => ({ x: box.x + view.ox + view.scale * p.x, y: box.y + view.oy - view.scale * p.y });
+  const at = (p: { x: number; y: number }) => ({
+    x: box.x + view.ox + view.scale * p.x,
+    y: box.y + view.oy - view.scale * p.y,
+  });
   const s = at(f);
   await page.mouse.click(s.x, s.y);
   await page.getByTestId("fixture-panel").waitFor();
@@ -86,7 +96,11 @@ async function dragMark(page: Page, productionId: number, seconds: number) {
 
 async function main() {
   const server = await startServer();
-  const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium", headless: true, args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run"] });
+  const browser = await chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
+    headless: true,
+    args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run"],
+  });
   const frames: string[] = [];
   const parts: string[] = [];
   try {
@@ -108,7 +122,9 @@ async function main() {
       parts.push(`| ${n.toLocaleString("en")} | ${row} |`);
       if (process.env.BENCH_TRACE) {
         const top = await traceFirstDraw(browser, page, productionId);
-        console.log(`main-thread tasks, ${n} fixtures: ${top.map(([name, t]) => `${name} ${t.toFixed(0)} ms`).join(", ")}`);
+        console.log(
+          `main-thread tasks, ${n} fixtures: ${top.map(([name, t]) => `${name} ${t.toFixed(0)} ms`).join(", ")}`,
+        );
       }
       await startRecording(page);
       await panAndZoom(page, 5);
@@ -124,20 +140,22 @@ async function main() {
     await server.stop();
   }
   const [load] = os.loadavg();
-  console.log([
-    "",
-    `load average (1 min) at the end: ${load.toFixed(1)} on ${os.cpus().length} cores`,
-    "",
-    "First full draw (median of 3 visits; times from navigation start):",
-    "| fixtures | first full draw (painted) | server answers (TTFB) | HTML done | DOM ready | data rebuild starts | rebuild takes | first canvas draw |",
-    "|---|---|---|---|---|---|---|---|",
-    ...parts,
-    "",
-    "Frames:",
-    "| fixtures | pan+zoom frame interval p50 / p95 | pan+zoom draw cost p50 / p95 | mark-drag frame interval p50 / p95 | mark-drag draw cost p50 / p95 |",
-    "|---|---|---|---|---|",
-    ...frames,
-  ].join("\n"));
+  console.log(
+    [
+      "",
+      `load average (1 min) at the end: ${load.toFixed(1)} on ${os.cpus().length} cores`,
+      "",
+      "First full draw (median of 3 visits; times from navigation start):",
+      "| fixtures | first full draw (painted) | server answers (TTFB) | HTML done | DOM ready | data rebuild starts | rebuild takes | first canvas draw |",
+      "|---|---|---|---|---|---|---|---|",
+      ...parts,
+      "",
+      "Frames:",
+      "| fixtures | pan+zoom frame interval p50 / p95 | pan+zoom draw cost p50 / p95 | mark-drag frame interval p50 / p95 | mark-drag draw cost p50 / p95 |",
+      "|---|---|---|---|---|",
+      ...frames,
+    ].join("\n"),
+  );
 }
 
 main().catch((err) => {

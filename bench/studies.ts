@@ -32,13 +32,35 @@ function show(n: number, seed = 16): StudyFixture[] {
   const out: StudyFixture[] = [];
   for (let k = 0; k < n; k++) {
     const kind = r();
-    const at = kind < 0.6 ? { x: -9 + 18 * r(), y: 1 + 10 * r(), z: 6 + 3 * r() } : kind < 0.85 ? { x: -10 + 20 * r(), y: -12 + 5 * r(), z: 7 + 4 * r() } : { x: r() < 0.5 ? -9.5 : 9.5, y: 1 + 10 * r(), z: 0.5 + 4 * r() };
+    const at =
+      kind < 0.6
+        ? { x: -9 + 18 * r(), y: 1 + 10 * r(), z: 6 + 3 * r() }
+        : kind < 0.85
+          ? { x: -10 + 20 * r(), y: -12 + 5 * r(), z: 7 + 4 * r() }
+          : { x: r() < 0.5 ? -9.5 : 9.5, y: 1 + 10 * r(), z: 0.5 + 4 * r() };
     const cone = 10 + 40 * r();
     out.push({
-      id: k + 1, unitNumber: String(k + 1), positionName: "Pos", channel: k + 1, colour: r() < 0.5 ? "pale lavender" : "N/C",
-      x: at.x, y: at.y, lensHeight: at.z, trimHeight: at.z, focus: { x: -7 + 14 * r(), y: 0.5 + 11 * r() }, aim: r() < 0.5 ? "head" : "deck",
-      coneDeg: cone, softnessDeg: cone * 0.3 * r(),
-      type: { family: FAMILIES[k % FAMILIES.length], coneMaxDeg: cone, defaultSoftnessDeg: 3, lensDropM: 0.3, lensApertureM: 0.1 + 0.1 * r(), peakCandela: 5_000 + 80_000 * r() },
+      id: k + 1,
+      unitNumber: String(k + 1),
+      positionName: "Pos",
+      channel: k + 1,
+      colour: r() < 0.5 ? "pale lavender" : "N/C",
+      x: at.x,
+      y: at.y,
+      lensHeight: at.z,
+      trimHeight: at.z,
+      focus: { x: -7 + 14 * r(), y: 0.5 + 11 * r() },
+      aim: r() < 0.5 ? "head" : "deck",
+      coneDeg: cone,
+      softnessDeg: cone * 0.3 * r(),
+      type: {
+        family: FAMILIES[k % FAMILIES.length],
+        coneMaxDeg: cone,
+        defaultSoftnessDeg: 3,
+        lensDropM: 0.3,
+        lensApertureM: 0.1 + 0.1 * r(),
+        peakCandela: 5_000 + 80_000 * r(),
+      },
     });
   }
   return out;
@@ -66,7 +88,16 @@ function time(fn: () => unknown, runs: number): ReturnType<typeof summarise> {
 const AREAS = Array.from({ length: 12 }, (_, k) => {
   const cx = -6 + 4 * (k % 4);
   const cy = 2 + 4 * Math.floor(k / 4);
-  return { id: k + 1, name: `Area ${k + 1}`, polygon: [{ x: cx - 1.8, y: cy - 1.8 }, { x: cx + 1.8, y: cy - 1.8 }, { x: cx + 1.8, y: cy + 1.8 }, { x: cx - 1.8, y: cy + 1.8 }] };
+  return {
+    id: k + 1,
+    name: `Area ${k + 1}`,
+    polygon: [
+      { x: cx - 1.8, y: cy - 1.8 },
+      { x: cx + 1.8, y: cy - 1.8 },
+      { x: cx + 1.8, y: cy + 1.8 },
+      { x: cx - 1.8, y: cy + 1.8 },
+    ],
+  };
 });
 
 /** The grid the slow way: exact profile at every point (no table), every beam at every cell (no culling). */
@@ -87,36 +118,105 @@ function coverageAt(n: number) {
   const fixtures = show(n);
   const levels = levelsFor(n);
   const colours = new Map([["pale lavender", 60]]);
-  const scene = { fixtures, levels, colours, areas: AREAS, headHeight: 1.7, faceHeight: 1.55, deckHeight: 0, bounds: BOUNDS };
-  const req = (measure: CoverageRequest["measure"]): CoverageRequest => ({ source: { kind: "full" }, measure, resolution: 0.1, minUniformity: 0.5, meanRatio: 2 });
+  const scene = {
+    fixtures,
+    levels,
+    colours,
+    areas: AREAS,
+    headHeight: 1.7,
+    faceHeight: 1.55,
+    deckHeight: 0,
+    bounds: BOUNDS,
+  };
+  const req = (measure: CoverageRequest["measure"]): CoverageRequest => ({
+    source: { kind: "full" },
+    measure,
+    resolution: 0.1,
+    minUniformity: 0.5,
+    meanRatio: 2,
+  });
   const route = time(() => JSON.stringify(computeCoverage(req({ kind: "deck" }), scene)), 7);
   const { beams, lights } = studyLights(fixtures, levels, { headHeight: 1.7, deckHeight: 0, colours });
-  const deck = time(() => coverageGrid({ bounds: BOUNDS, resolution: 0.1, deckHeight: 0, measure: { kind: "deck" }, beams }), 7);
-  const face = time(() => coverageGrid({ bounds: BOUNDS, resolution: 0.1, deckHeight: 0, measure: { kind: "face", height: 1.55, facingDeg: -90 }, beams }), 7);
+  const deck = time(
+    () => coverageGrid({ bounds: BOUNDS, resolution: 0.1, deckHeight: 0, measure: { kind: "deck" }, beams }),
+    7,
+  );
+  const face = time(
+    () =>
+      coverageGrid({
+        bounds: BOUNDS,
+        resolution: 0.1,
+        deckHeight: 0,
+        measure: { kind: "face", height: 1.55, facingDeg: -90 },
+        beams,
+      }),
+    7,
+  );
   const baseline = time(() => baselineGrid(beams), 2);
   const g = coverageGrid({ bounds: BOUNDS, resolution: 0.1, deckHeight: 0, measure: { kind: "deck" }, beams });
   const draw = time(() => {
     heatPixels(g.values, g.cols, g.rows, g.max, "light");
     for (const level of [100, 300, 500]) contourSegments(g, level);
   }, 7);
-  const performers = Array.from({ length: 10 }, (_, k) => ({ id: k + 1, name: `P${k + 1}`, x: -6 + 1.3 * k, y: 2 + (k % 4) * 2, height: 1.75, shoulderWidth: 0.5 }));
+  const performers = Array.from({ length: 10 }, (_, k) => ({
+    id: k + 1,
+    name: `P${k + 1}`,
+    x: -6 + 1.3 * k,
+    y: 2 + (k % 4) * 2,
+    height: 1.75,
+    shoulderWidth: 0.5,
+  }));
   const shadowScene = { lights, performers, panels: [], backWallY: 12, deckHeight: 0 };
   const shadowsNumbers = time(() => shadowStudy({ ...shadowScene, outlines: false }), 7);
   // While dragging, only the dragged performer is recomputed, with coarse outlines.
-  const shadowsLive = time(() => shadowStudy({ ...shadowScene, performers: performers.slice(0, 1), outlines: { sides: 12, lensSamples: 8 } }), 5);
+  const shadowsLive = time(
+    () => shadowStudy({ ...shadowScene, performers: performers.slice(0, 1), outlines: { sides: 12, lensSamples: 8 } }),
+    5,
+  );
   const shadowsServer = time(() => shadowStudy(shadowScene), 1);
-  return { n, lit: beams.length, cells: g.cols * g.rows, evaluations: g.evaluations, route, deck, face, baseline, draw, shadowsNumbers, shadowsLive, shadowsServer };
+  return {
+    n,
+    lit: beams.length,
+    cells: g.cols * g.rows,
+    evaluations: g.evaluations,
+    route,
+    deck,
+    face,
+    baseline,
+    draw,
+    shadowsNumbers,
+    shadowsLive,
+    shadowsServer,
+  };
 }
 
 const ms = (v: number) => `${v.toFixed(1)} ms`;
-console.log(`studies benchmark — ${new Date().toISOString()} — load ${os.loadavg().map((l) => l.toFixed(1)).join(" ")} — ${os.cpus().length} cores`);
+console.log(
+  `studies benchmark — ${new Date().toISOString()} — load ${os
+    .loadavg()
+    .map((l) => l.toFixed(1))
+    .join(" ")} — ${os.cpus().length} cores`,
+);
 for (const n of [100, 1500, 5000]) {
   const r = coverageAt(n);
   console.log(`\n${r.n} units, ${r.lit} lit, ${r.cells} cells (${r.evaluations} point evaluations after culling)`);
-  console.log(`  route work (grid + areas + JSON): median ${ms(r.route.median)}, p95 ${ms(r.route.p95)}   goal < 300 ms`);
-  console.log(`  deck grid ${ms(r.deck.median)}; uncached, unculled ${ms(r.baseline.median)} → ${(r.baseline.median / r.deck.median).toFixed(1)}× faster`);
-  console.log(`  face grid ${ms(r.face.median)} = ${(r.face.median / r.deck.median).toFixed(2)}× the deck grid   goal ≤ 1.5×`);
+  console.log(
+    `  route work (grid + areas + JSON): median ${ms(r.route.median)}, p95 ${ms(r.route.p95)}   goal < 300 ms`,
+  );
+  console.log(
+    `  deck grid ${ms(r.deck.median)}; uncached, unculled ${ms(r.baseline.median)} → ${(r.baseline.median / r.deck.median).toFixed(1)}× faster`,
+  );
+  console.log(
+    `  face grid ${ms(r.face.median)} = ${(r.face.median / r.deck.median).toFixed(2)}× the deck grid   goal ≤ 1.5×`,
+  );
   console.log(`  draw CPU (heat pixels + 3 contour levels) median ${ms(r.draw.median)}   goal < 200 ms`);
-  console.log(`  shadows 10 performers × ${r.lit}: numbers ${ms(r.shadowsNumbers.median)} (goal < 50 ms); live drag (1 performer, coarse outlines) ${ms(r.shadowsLive.median)}; server with outlines ${ms(r.shadowsServer.median)}`);
+  console.log(
+    `  shadows 10 performers × ${r.lit}: numbers ${ms(r.shadowsNumbers.median)} (goal < 50 ms); live drag (1 performer, coarse outlines) ${ms(r.shadowsLive.median)}; server with outlines ${ms(r.shadowsServer.median)}`,
+  );
 }
-console.log(`\nload after: ${os.loadavg().map((l) => l.toFixed(1)).join(" ")}`);
+console.log(
+  `\nload after: ${os
+    .loadavg()
+    .map((l) => l.toFixed(1))
+    .join(" ")}`,
+);

@@ -9,16 +9,24 @@ import { productionKeys } from "./query-keys";
 
 export type CueList = { cues: CueDto[]; channels: ChannelLabel[] };
 export type CueSheet = { rows: CueSheetRow[]; standbys: StandbyGroup[] };
-export type CueChanges = Partial<Omit<CueDto, "id" | "version" | "updatedAt" | "levels">> & { levels?: Record<number, number | null> };
+export type CueChanges = Partial<Omit<CueDto, "id" | "version" | "updatedAt" | "levels">> & {
+  levels?: Record<number, number | null>;
+};
 
 const base = (productionId: number) => `/api/productions/${productionId}/cues`;
 
 export function useCueList(productionId: number) {
-  return useQuery({ queryKey: productionKeys.cues(productionId), queryFn: () => apiFetch<CueList>(base(productionId)) });
+  return useQuery({
+    queryKey: productionKeys.cues(productionId),
+    queryFn: () => apiFetch<CueList>(base(productionId)),
+  });
 }
 
 export function useCueSheet(productionId: number) {
-  return useQuery({ queryKey: productionKeys.cueSheet(productionId), queryFn: () => apiFetch<CueSheet>(`${base(productionId)}/summary`) });
+  return useQuery({
+    queryKey: productionKeys.cueSheet(productionId),
+    queryFn: () => apiFetch<CueSheet>(`${base(productionId)}/summary`),
+  });
 }
 
 /** Puts one cue into the cached list (replacing, inserting or removing it) and keeps running order. */
@@ -43,7 +51,8 @@ function useCueCache(productionId: number) {
 export function useCreateCue(productionId: number) {
   const cache = useCueCache(productionId);
   return useMutation({
-    mutationFn: async (input: CueChanges & { number: number | string }) => (await apiFetch<{ cue: CueDto }>(base(productionId), { method: "POST", json: input })).cue,
+    mutationFn: async (input: CueChanges & { number: number | string }) =>
+      (await apiFetch<{ cue: CueDto }>(base(productionId), { method: "POST", json: input })).cue,
     onSuccess: (cue) => cache.put(cue),
   });
 }
@@ -54,7 +63,12 @@ export function useUpdateCue(productionId: number) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: async ({ id, version, changes }: { id: number; version: number; changes: CueChanges }) =>
-      (await apiFetch<{ cue: CueDto }>(`${base(productionId)}/${id}`, { method: "PATCH", json: { ...changes, version } })).cue,
+      (
+        await apiFetch<{ cue: CueDto }>(`${base(productionId)}/${id}`, {
+          method: "PATCH",
+          json: { ...changes, version },
+        })
+      ).cue,
     onSuccess: (cue, vars) => {
       cache.put(cue);
       // Marking a block changes what earlier moves mean for later cues; a renumbered link too.
@@ -71,11 +85,31 @@ export function useUpdateCue(productionId: number) {
 export function useUpdateCallNote(productionId: number) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: async ({ id, version, changes }: { id: number; version: number; changes: { page?: string | null; callNote?: string | null } }) =>
-      (await apiFetch<{ cue: CueDto }>(`${base(productionId)}/${id}`, { method: "PATCH", json: { ...changes, version } })).cue,
+    mutationFn: async ({
+      id,
+      version,
+      changes,
+    }: {
+      id: number;
+      version: number;
+      changes: { page?: string | null; callNote?: string | null };
+    }) =>
+      (
+        await apiFetch<{ cue: CueDto }>(`${base(productionId)}/${id}`, {
+          method: "PATCH",
+          json: { ...changes, version },
+        })
+      ).cue,
     onSuccess: (cue) =>
       qc.setQueryData<CueSheet>(productionKeys.cueSheet(productionId), (old) =>
-        old ? { ...old, rows: old.rows.map((r) => (r.id === cue.id ? { ...r, page: cue.page, callNote: cue.callNote, version: cue.version } : r)) } : old,
+        old
+          ? {
+              ...old,
+              rows: old.rows.map((r) =>
+                r.id === cue.id ? { ...r, page: cue.page, callNote: cue.callNote, version: cue.version } : r,
+              ),
+            }
+          : old,
       ),
     onError: () => qc.invalidateQueries({ queryKey: productionKeys.cueSheet(productionId) }),
   });
@@ -95,7 +129,8 @@ export function useDeleteCue(productionId: number) {
 export function useRenumberCues(productionId: number) {
   const cache = useCueCache(productionId);
   return useMutation({
-    mutationFn: (range: { from: string; to: string; start: string; step: string }) => apiFetch<{ renumbered: number }>(`${base(productionId)}/renumber`, { method: "POST", json: range }),
+    mutationFn: (range: { from: string; to: string; start: string; step: string }) =>
+      apiFetch<{ renumbered: number }>(`${base(productionId)}/renumber`, { method: "POST", json: range }),
     onSuccess: () => cache.refresh(),
   });
 }
@@ -103,7 +138,8 @@ export function useRenumberCues(productionId: number) {
 export function useImportCues(productionId: number) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: { text: string; mode: "state" | "moves" }) => apiFetch<ImportOutcome>(`${base(productionId)}/import`, { method: "POST", json: input }),
+    mutationFn: (input: { text: string; mode: "state" | "moves" }) =>
+      apiFetch<ImportOutcome>(`${base(productionId)}/import`, { method: "POST", json: input }),
     onSuccess: () => qc.invalidateQueries({ queryKey: productionKeys.cues(productionId) }),
   });
 }

@@ -14,7 +14,8 @@ export function useFocusPhoto(productionId: number) {
   const key = productionKeys.fixtures(productionId);
   const url = (id: number) => `/api/productions/${productionId}/fixtures/${id}/photo`;
   const handlers = {
-    onSuccess: (fixture: FixtureDto) => qc.setQueryData<FixtureDto[]>(key, (list) => list?.map((f) => (f.id === fixture.id ? fixture : f))),
+    onSuccess: (fixture: FixtureDto) =>
+      qc.setQueryData<FixtureDto[]>(key, (list) => list?.map((f) => (f.id === fixture.id ? fixture : f))),
     onError: (err: Error) => {
       if (err instanceof ApiError && err.status === 409) void qc.invalidateQueries({ queryKey: key });
     },
@@ -29,7 +30,8 @@ export function useFocusPhoto(productionId: number) {
     ...handlers,
   });
   const remove = useMutation({
-    mutationFn: async ({ id, version }: { id: number; version: number }) => (await apiFetch<{ fixture: FixtureDto }>(url(id), { method: "DELETE", json: { version } })).fixture,
+    mutationFn: async ({ id, version }: { id: number; version: number }) =>
+      (await apiFetch<{ fixture: FixtureDto }>(url(id), { method: "DELETE", json: { version } })).fixture,
     ...handlers,
   });
   return { upload, remove };

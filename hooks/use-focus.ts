@@ -10,13 +10,24 @@ import { productionKeys } from "./query-keys";
 export function useFocusFixtures(productionId: number, initial: FixtureDto[]) {
   return useQuery({
     queryKey: productionKeys.fixtures(productionId),
-    queryFn: async () => (await apiFetch<{ fixtures: FixtureDto[] }>(`/api/productions/${productionId}/fixtures`)).fixtures,
+    queryFn: async () =>
+      (await apiFetch<{ fixtures: FixtureDto[] }>(`/api/productions/${productionId}/fixtures`)).fixtures,
     initialData: initial,
   });
 }
 
 /** What the focus call edits: the API's own patch types for these fields. */
-export type FocusPatch = Pick<FixturePatch, "focused" | "focusNotes" | "notes" | "goboRotationDeg" | "barnDoorTop" | "barnDoorBottom" | "barnDoorLeft" | "barnDoorRight">;
+export type FocusPatch = Pick<
+  FixturePatch,
+  | "focused"
+  | "focusNotes"
+  | "notes"
+  | "goboRotationDeg"
+  | "barnDoorTop"
+  | "barnDoorBottom"
+  | "barnDoorLeft"
+  | "barnDoorRight"
+>;
 
 /**
  * Marks a fixture focused or edits its notes. The cache takes the server's row on success; a 409 (someone
@@ -27,7 +38,12 @@ export function useUpdateFocus(productionId: number) {
   const key = productionKeys.fixtures(productionId);
   return useMutation({
     mutationFn: async ({ id, version, patch }: { id: number; version: number; patch: FocusPatch }) =>
-      (await apiFetch<{ fixture: FixtureDto }>(`/api/productions/${productionId}/fixtures/${id}`, { method: "PATCH", json: { version, ...patch } })).fixture,
+      (
+        await apiFetch<{ fixture: FixtureDto }>(`/api/productions/${productionId}/fixtures/${id}`, {
+          method: "PATCH",
+          json: { version, ...patch },
+        })
+      ).fixture,
     onSuccess: (fixture) => {
       qc.setQueryData<FixtureDto[]>(key, (list) => list?.map((f) => (f.id === fixture.id ? fixture : f)));
     },

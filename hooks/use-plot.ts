@@ -41,7 +41,8 @@ export function usePlot(
   });
   const plot = useQuery({
     queryKey: key,
-    queryFn: async () => expandPlot(await apiFetch<PlotWirePayload>(`/api/productions/${productionId}/plot?shape=slim`), headHeight),
+    queryFn: async () =>
+      expandPlot(await apiFetch<PlotWirePayload>(`/api/productions/${productionId}/plot?shape=slim`), headHeight),
     initialData,
     staleTime: Infinity,
   });
@@ -49,7 +50,8 @@ export function usePlot(
     queryKey: productionKeys.plotStamp(productionId),
     queryFn: async () => {
       const { stamp } = await apiFetch<{ stamp: string }>(`/api/productions/${productionId}/plot?only=stamp`);
-      if (stamp !== qc.getQueryData<PlotPayload>(key)?.stamp) await qc.invalidateQueries({ queryKey: key, exact: true });
+      if (stamp !== qc.getQueryData<PlotPayload>(key)?.stamp)
+        await qc.invalidateQueries({ queryKey: key, exact: true });
       return stamp;
     },
     refetchInterval: paused ? false : PLOT_POLL_MS,

@@ -5,7 +5,6 @@ import { apiFetch } from "@/lib/http/api-client";
 import { productionKeys } from "./query-keys";
 import type { ProductionDto, ProductionListItem } from "@/lib/dto/production";
 
-
 export function useProductions() {
   return useQuery({
     queryKey: productionKeys.list(),

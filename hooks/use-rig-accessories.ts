@@ -12,11 +12,13 @@ export function useAccessoryMutations(productionId: number) {
   const refresh = () => qc.invalidateQueries({ queryKey: productionKeys.accessories(productionId) });
   return {
     create: useMutation({
-      mutationFn: async (input: Record<string, unknown>) => (await apiFetch<{ accessory: AccessoryDto }>(base, { method: "POST", json: input })).accessory,
+      mutationFn: async (input: Record<string, unknown>) =>
+        (await apiFetch<{ accessory: AccessoryDto }>(base, { method: "POST", json: input })).accessory,
       onSettled: refresh,
     }),
     update: useMutation({
-      mutationFn: async ({ id, patch }: { id: number; patch: Record<string, unknown> }) => (await apiFetch<{ accessory: AccessoryDto }>(`${base}/${id}`, { method: "PATCH", json: patch })).accessory,
+      mutationFn: async ({ id, patch }: { id: number; patch: Record<string, unknown> }) =>
+        (await apiFetch<{ accessory: AccessoryDto }>(`${base}/${id}`, { method: "PATCH", json: patch })).accessory,
       onSettled: refresh,
     }),
     remove: useMutation({

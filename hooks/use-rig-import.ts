@@ -7,7 +7,12 @@ import type { ImportPreview } from "@/lib/dto/import";
 import type { ColumnTarget } from "@/lib/io/fields";
 import { productionKeys } from "./query-keys";
 
-export type ImportOptions = { mapping?: ColumnTarget[]; lengthUnit?: "m" | "ft"; createMissing: boolean; sheet?: string };
+export type ImportOptions = {
+  mapping?: ColumnTarget[];
+  lengthUnit?: "m" | "ft";
+  createMissing: boolean;
+  sheet?: string;
+};
 export type ImportProgress = { stage: string; done: number; total: number } | null;
 
 function body(file: File, mode: "preview" | "commit", options: ImportOptions) {
@@ -31,7 +36,12 @@ export function useRigImport(productionId: number) {
 
   // Both steps stream newline-delimited JSON: progress lines while the server reads, checks (and writes),
   // then one line with the answer, so a file of thousands of rows shows a moving bar from the start.
-  async function streamed<T>(file: File, mode: "preview" | "commit", options: ImportOptions, answer: "preview" | "result"): Promise<T> {
+  async function streamed<T>(
+    file: File,
+    mode: "preview" | "commit",
+    options: ImportOptions,
+    answer: "preview" | "result",
+  ): Promise<T> {
     setProgress({ stage: "uploading", done: 0, total: 1 });
     try {
       const res = await fetch(`${url}?stream=1`, { method: "POST", body: body(file, mode, options) });
@@ -46,10 +56,18 @@ export function useRigImport(productionId: number) {
         for (const line of lines.filter(Boolean)) {
           const msg = JSON.parse(line);
           if (msg.progress) setProgress(msg.progress);
-          if (msg.error) throw new ApiError(msg.status ?? 400, msg.error.code, msg.error.message, msg.error.fieldErrors);
+          if (msg.error)
+            throw new ApiError(msg.status ?? 400, msg.error.code, msg.error.message, msg.error.fieldErrors);
           if (msg[answer]) return msg[answer] as T;
         }
-        if (done) throw new ApiError(500, "internal", mode === "commit" ? "The import stopped without an answer. Check the rig before trying again." : "The check stopped without an answer. Try again.");
+        if (done)
+          throw new ApiError(
+            500,
+            "internal",
+            mode === "commit"
+              ? "The import stopped without an answer. Check the rig before trying again."
+              : "The check stopped without an answer. Try again.",
+          );
       }
     } finally {
       setProgress(null);

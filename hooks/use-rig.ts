@@ -12,7 +12,8 @@ import { productionKeys } from "./query-keys";
 export function useRigFixtures(productionId: number, initialData?: FixtureDto[]) {
   return useQuery({
     queryKey: productionKeys.fixtures(productionId),
-    queryFn: async () => (await apiFetch<{ fixtures: FixtureDto[] }>(`/api/productions/${productionId}/fixtures`)).fixtures,
+    queryFn: async () =>
+      (await apiFetch<{ fixtures: FixtureDto[] }>(`/api/productions/${productionId}/fixtures`)).fixtures,
     initialData,
   });
 }
@@ -20,7 +21,9 @@ export function useRigFixtures(productionId: number, initialData?: FixtureDto[])
 export function useRigTypes(productionId: number, initialData?: FixtureTypeDto[]) {
   return useQuery({
     queryKey: productionKeys.fixtureTypes(productionId),
-    queryFn: async () => (await apiFetch<{ fixtureTypes: FixtureTypeDto[] }>(`/api/productions/${productionId}/fixture-types`)).fixtureTypes,
+    queryFn: async () =>
+      (await apiFetch<{ fixtureTypes: FixtureTypeDto[] }>(`/api/productions/${productionId}/fixture-types`))
+        .fixtureTypes,
     initialData,
   });
 }
@@ -28,7 +31,8 @@ export function useRigTypes(productionId: number, initialData?: FixtureTypeDto[]
 export function useRigAccessories(productionId: number, initialData?: AccessoryDto[]) {
   return useQuery({
     queryKey: productionKeys.accessories(productionId),
-    queryFn: async () => (await apiFetch<{ accessories: AccessoryDto[] }>(`/api/productions/${productionId}/accessories`)).accessories,
+    queryFn: async () =>
+      (await apiFetch<{ accessories: AccessoryDto[] }>(`/api/productions/${productionId}/accessories`)).accessories,
     initialData,
   });
 }
@@ -38,8 +42,16 @@ export function useUpdateRigFixture(productionId: number) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: async ({ id, patch }: { id: number; patch: FixturePatch }) =>
-      (await apiFetch<{ fixture: FixtureDto }>(`/api/productions/${productionId}/fixtures/${id}`, { method: "PATCH", json: patch })).fixture,
-    onSuccess: (fixture) => qc.setQueryData<FixtureDto[]>(productionKeys.fixtures(productionId), (all) => all?.map((f) => (f.id === fixture.id ? fixture : f))),
+      (
+        await apiFetch<{ fixture: FixtureDto }>(`/api/productions/${productionId}/fixtures/${id}`, {
+          method: "PATCH",
+          json: patch,
+        })
+      ).fixture,
+    onSuccess: (fixture) =>
+      qc.setQueryData<FixtureDto[]>(productionKeys.fixtures(productionId), (all) =>
+        all?.map((f) => (f.id === fixture.id ? fixture : f)),
+      ),
     onError: () => qc.invalidateQueries({ queryKey: productionKeys.fixtures(productionId) }),
   });
 }
@@ -47,7 +59,8 @@ export function useUpdateRigFixture(productionId: number) {
 export function useBulkEditRig(productionId: number) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (edit: BulkEdit) => apiFetch<{ updated: number }>(`/api/productions/${productionId}/fixtures/bulk`, { method: "POST", json: edit }),
+    mutationFn: (edit: BulkEdit) =>
+      apiFetch<{ updated: number }>(`/api/productions/${productionId}/fixtures/bulk`, { method: "POST", json: edit }),
     onSettled: () => qc.invalidateQueries({ queryKey: productionKeys.fixtures(productionId) }),
   });
 }
@@ -55,7 +68,8 @@ export function useBulkEditRig(productionId: number) {
 export function useAddStarterTypes(productionId: number) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (names: string[]) => apiFetch(`/api/productions/${productionId}/rig/starter-types`, { method: "POST", json: { names } }),
+    mutationFn: (names: string[]) =>
+      apiFetch(`/api/productions/${productionId}/rig/starter-types`, { method: "POST", json: { names } }),
     onSettled: () => qc.invalidateQueries({ queryKey: productionKeys.fixtureTypes(productionId) }),
   });
 }
@@ -65,8 +79,16 @@ export function useUpdateFixtureType(productionId: number) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: async ({ id, patch }: { id: number; patch: Record<string, unknown> }) =>
-      (await apiFetch<{ fixtureType: FixtureTypeDto }>(`/api/productions/${productionId}/fixture-types/${id}`, { method: "PATCH", json: patch })).fixtureType,
-    onSuccess: (type) => qc.setQueryData<FixtureTypeDto[]>(productionKeys.fixtureTypes(productionId), (all) => all?.map((t) => (t.id === type.id ? type : t))),
+      (
+        await apiFetch<{ fixtureType: FixtureTypeDto }>(`/api/productions/${productionId}/fixture-types/${id}`, {
+          method: "PATCH",
+          json: patch,
+        })
+      ).fixtureType,
+    onSuccess: (type) =>
+      qc.setQueryData<FixtureTypeDto[]>(productionKeys.fixtureTypes(productionId), (all) =>
+        all?.map((t) => (t.id === type.id ? type : t)),
+      ),
     onError: () => qc.invalidateQueries({ queryKey: productionKeys.fixtureTypes(productionId) }),
     onSettled: () => qc.invalidateQueries({ queryKey: productionKeys.fixtures(productionId) }),
   });

@@ -3,8 +3,12 @@ import { z } from "zod";
 
 // Validated once on first use, so `next build` never needs the secrets.
 const envSchema = z.object({
-  DATABASE_URL: z.string({ error: "DATABASE_URL is not set" }).regex(/^mariadb:\/\//, { error: "DATABASE_URL must start with mariadb://" }),
-  SESSION_SECRET: z.string({ error: "SESSION_SECRET is not set" }).min(32, { error: "SESSION_SECRET must be at least 32 characters" }),
+  DATABASE_URL: z
+    .string({ error: "DATABASE_URL is not set" })
+    .regex(/^mariadb:\/\//, { error: "DATABASE_URL must start with mariadb://" }),
+  SESSION_SECRET: z
+    .string({ error: "SESSION_SECRET is not set" })
+    .min(32, { error: "SESSION_SECRET must be at least 32 characters" }),
   SMTP_URL: z.string().optional(),
   MAIL_OUTBOX_DIR: z.string().optional(),
   MAIL_FROM: z.string().default("Throwline <paperwork@throwline.invalid>"),

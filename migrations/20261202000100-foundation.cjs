@@ -18,7 +18,11 @@ async function up(qi, S) {
     onDelete,
     onUpdate: "CASCADE",
   });
-  const metres = (allowNull = true, defaultValue) => ({ type: S.DOUBLE, allowNull, ...(defaultValue !== undefined ? { defaultValue } : {}) });
+  const metres = (allowNull = true, defaultValue) => ({
+    type: S.DOUBLE,
+    allowNull,
+    ...(defaultValue !== undefined ? { defaultValue } : {}),
+  });
 
   await qi.createTable("users", {
     id,
@@ -44,7 +48,11 @@ async function up(qi, S) {
     apron_depth: metres(false, 1.5),
     voltage: { type: S.INTEGER, allowNull: false, defaultValue: 230 },
     derating: { type: S.DOUBLE, allowNull: false, defaultValue: 0.8 },
-    numbering_rule: { type: S.ENUM("from-stage-left", "from-stage-right"), allowNull: false, defaultValue: "from-stage-left" },
+    numbering_rule: {
+      type: S.ENUM("from-stage-left", "from-stage-right"),
+      allowNull: false,
+      defaultValue: "from-stage-left",
+    },
     version,
     ...stamps,
   });
@@ -66,10 +74,24 @@ async function up(qi, S) {
     production_id: ref("productions"),
     name: { type: S.STRING(80), allowNull: false },
     kind: {
-      type: S.ENUM("overhead-pipe", "truss", "boom", "ladder", "box-boom", "foh-bridge", "foh-rail", "pipe-end", "floor", "flying-electric"),
+      type: S.ENUM(
+        "overhead-pipe",
+        "truss",
+        "boom",
+        "ladder",
+        "box-boom",
+        "foh-bridge",
+        "foh-rail",
+        "pipe-end",
+        "floor",
+        "flying-electric",
+      ),
       allowNull: false,
     },
-    x1: metres(false), y1: metres(false), x2: metres(), y2: metres(),
+    x1: metres(false),
+    y1: metres(false),
+    x2: metres(),
+    y2: metres(),
     trim_height: metres(false),
     rated_load_kg: { type: S.DOUBLE, allowNull: true },
     sort_order: { type: S.INTEGER, allowNull: false, defaultValue: 0 },
@@ -98,13 +120,17 @@ async function up(qi, S) {
     version,
     ...stamps,
   });
-  await qi.addIndex("fixture_types", ["production_id", "name"], { unique: true, name: "fixture_types_production_name" });
+  await qi.addIndex("fixture_types", ["production_id", "name"], {
+    unique: true,
+    name: "fixture_types_production_name",
+  });
 
   await qi.createTable("focus_points", {
     id,
     production_id: ref("productions"),
     name: { type: S.STRING(60), allowNull: false },
-    x: metres(false), y: metres(false),
+    x: metres(false),
+    y: metres(false),
     version,
     ...stamps,
   });
@@ -131,9 +157,11 @@ async function up(qi, S) {
     colour: { type: S.STRING(60), allowNull: true },
     gobo: { type: S.STRING(60), allowNull: true },
     purpose: { type: S.STRING(120), allowNull: true },
-    x: metres(false), y: metres(false),
+    x: metres(false),
+    y: metres(false),
     lens_height: metres(),
-    focus_x: metres(), focus_y: metres(),
+    focus_x: metres(),
+    focus_y: metres(),
     aim: { type: S.ENUM("deck", "head"), allowNull: false, defaultValue: "deck" },
     cone_deg: { type: S.DOUBLE, allowNull: true },
     softness_deg: { type: S.DOUBLE, allowNull: true },
@@ -148,7 +176,10 @@ async function up(qi, S) {
     version,
     ...stamps,
   });
-  await qi.addIndex("fixtures", ["production_id", "position_id", "unit_number"], { unique: true, name: "fixtures_position_unit" });
+  await qi.addIndex("fixtures", ["production_id", "position_id", "unit_number"], {
+    unique: true,
+    name: "fixtures_position_unit",
+  });
   await qi.addIndex("fixtures", ["position_id"], { name: "fixtures_position" });
   await qi.addIndex("fixtures", ["fixture_type_id"], { name: "fixtures_type" });
   await qi.addIndex("fixtures", ["focus_point_id"], { name: "fixtures_focus_point" });
@@ -196,7 +227,18 @@ async function up(qi, S) {
 }
 
 async function down(qi) {
-  for (const t of ["change_entries", "cue_levels", "cues", "fixtures", "focus_points", "fixture_types", "positions", "memberships", "productions", "users"]) {
+  for (const t of [
+    "change_entries",
+    "cue_levels",
+    "cues",
+    "fixtures",
+    "focus_points",
+    "fixture_types",
+    "positions",
+    "memberships",
+    "productions",
+    "users",
+  ]) {
     await qi.dropTable(t);
   }
 }

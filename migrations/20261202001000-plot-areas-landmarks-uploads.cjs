@@ -10,7 +10,13 @@ async function up(qi, S) {
     created_at: { type: S.DATE, allowNull: false, defaultValue: S.literal("CURRENT_TIMESTAMP") },
     updated_at: { type: S.DATE, allowNull: false, defaultValue: S.literal("CURRENT_TIMESTAMP") },
   });
-  const production = () => ({ type: S.INTEGER, allowNull: false, references: { model: "productions", key: "id" }, onDelete: "CASCADE", onUpdate: "CASCADE" });
+  const production = () => ({
+    type: S.INTEGER,
+    allowNull: false,
+    references: { model: "productions", key: "id" },
+    onDelete: "CASCADE",
+    onUpdate: "CASCADE",
+  });
 
   await qi.createTable("area_zones", {
     id: id(),
@@ -51,7 +57,13 @@ async function up(qi, S) {
     rotation_deg: { type: S.DOUBLE, allowNull: false, defaultValue: 0 },
     opacity: { type: S.DOUBLE, allowNull: false, defaultValue: 0.5 },
     locked: { type: S.BOOLEAN, allowNull: false, defaultValue: false },
-    uploaded_by: { type: S.INTEGER, allowNull: true, references: { model: "users", key: "id" }, onDelete: "SET NULL", onUpdate: "CASCADE" },
+    uploaded_by: {
+      type: S.INTEGER,
+      allowNull: true,
+      references: { model: "users", key: "id" },
+      onDelete: "SET NULL",
+      onUpdate: "CASCADE",
+    },
     version: version(),
     ...stamps(),
   });

@@ -9,7 +9,13 @@ async function up(qi, S) {
     created_at: { type: S.DATE, allowNull: false, defaultValue: S.literal("CURRENT_TIMESTAMP") },
     updated_at: { type: S.DATE, allowNull: false, defaultValue: S.literal("CURRENT_TIMESTAMP") },
   });
-  const ref = (table) => ({ type: S.INTEGER, allowNull: false, references: { model: table, key: "id" }, onDelete: "CASCADE", onUpdate: "CASCADE" });
+  const ref = (table) => ({
+    type: S.INTEGER,
+    allowNull: false,
+    references: { model: table, key: "id" },
+    onDelete: "CASCADE",
+    onUpdate: "CASCADE",
+  });
   await qi.createTable("accessories", {
     id: { type: S.INTEGER, autoIncrement: true, primaryKey: true },
     production_id: ref("productions"),

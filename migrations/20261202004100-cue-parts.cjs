@@ -7,7 +7,13 @@
 async function up(qi, S) {
   await qi.createTable("cue_parts", {
     id: { type: S.INTEGER, autoIncrement: true, primaryKey: true },
-    cue_id: { type: S.INTEGER, allowNull: false, references: { model: "cues", key: "id" }, onDelete: "CASCADE", onUpdate: "CASCADE" },
+    cue_id: {
+      type: S.INTEGER,
+      allowNull: false,
+      references: { model: "cues", key: "id" },
+      onDelete: "CASCADE",
+      onUpdate: "CASCADE",
+    },
     part: { type: S.TINYINT, allowNull: false },
     label: { type: S.STRING(60), allowNull: false, defaultValue: "" },
     up_time: { type: S.DOUBLE, allowNull: false, defaultValue: 5 },

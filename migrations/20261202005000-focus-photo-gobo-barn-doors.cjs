@@ -9,10 +9,15 @@ const LEAVES = ["top", "bottom", "left", "right"];
 async function up(qi, S) {
   await qi.changeColumn("uploads", "kind", { type: S.ENUM("underlay", "import", "focus-photo"), allowNull: false });
   await qi.addColumn("fixtures", "focus_photo_upload_id", {
-    type: S.INTEGER, allowNull: true, references: { model: "uploads", key: "id" }, onDelete: "SET NULL", onUpdate: "CASCADE",
+    type: S.INTEGER,
+    allowNull: true,
+    references: { model: "uploads", key: "id" },
+    onDelete: "SET NULL",
+    onUpdate: "CASCADE",
   });
   await qi.addColumn("fixtures", "gobo_rotation_deg", { type: S.DOUBLE, allowNull: true });
-  for (const leaf of LEAVES) await qi.addColumn("fixtures", `barn_door_${leaf}`, { type: S.STRING(60), allowNull: true });
+  for (const leaf of LEAVES)
+    await qi.addColumn("fixtures", `barn_door_${leaf}`, { type: S.STRING(60), allowNull: true });
 }
 
 /** @param {import('sequelize').QueryInterface} qi @param {typeof import('sequelize')} S */

@@ -12,7 +12,13 @@ async function up(qi, S) {
     created_at: { type: S.DATE, allowNull: false, defaultValue: S.literal("CURRENT_TIMESTAMP") },
     updated_at: { type: S.DATE, allowNull: false, defaultValue: S.literal("CURRENT_TIMESTAMP") },
   });
-  const production = () => ({ type: S.INTEGER, allowNull: false, references: { model: "productions", key: "id" }, onDelete: "CASCADE", onUpdate: "CASCADE" });
+  const production = () => ({
+    type: S.INTEGER,
+    allowNull: false,
+    references: { model: "productions", key: "id" },
+    onDelete: "CASCADE",
+    onUpdate: "CASCADE",
+  });
 
   await qi.createTable("performer_marks", {
     id: id(),
@@ -25,7 +31,10 @@ async function up(qi, S) {
     version: version(),
     ...stamps(),
   });
-  await qi.addIndex("performer_marks", ["production_id", "name"], { unique: true, name: "performer_marks_production_name" });
+  await qi.addIndex("performer_marks", ["production_id", "name"], {
+    unique: true,
+    name: "performer_marks_production_name",
+  });
 
   await qi.createTable("scenic_panels", {
     id: id(),
@@ -39,7 +48,10 @@ async function up(qi, S) {
     version: version(),
     ...stamps(),
   });
-  await qi.addIndex("scenic_panels", ["production_id", "name"], { unique: true, name: "scenic_panels_production_name" });
+  await qi.addIndex("scenic_panels", ["production_id", "name"], {
+    unique: true,
+    name: "scenic_panels_production_name",
+  });
 
   await qi.createTable("colour_transmissions", {
     id: id(),
@@ -50,7 +62,10 @@ async function up(qi, S) {
     version: version(),
     ...stamps(),
   });
-  await qi.addIndex("colour_transmissions", ["production_id", "name"], { unique: true, name: "colour_transmissions_production_name" });
+  await qi.addIndex("colour_transmissions", ["production_id", "name"], {
+    unique: true,
+    name: "colour_transmissions_production_name",
+  });
 
   await qi.addColumn("productions", "face_height", { type: S.DOUBLE, allowNull: false, defaultValue: 1.55 });
   await qi.addColumn("productions", "show_deck_height", { type: S.DOUBLE, allowNull: false, defaultValue: 0 });

@@ -8,7 +8,13 @@ async function up(qi, S) {
   await qi.createTable("user_sessions", {
     // SHA-256 of the random token in the sealed cookie: a copy of this table cannot sign anyone in.
     token_hash: { type: S.CHAR(64), allowNull: false, primaryKey: true },
-    user_id: { type: S.INTEGER, allowNull: false, references: { model: "users", key: "id" }, onDelete: "CASCADE", onUpdate: "CASCADE" },
+    user_id: {
+      type: S.INTEGER,
+      allowNull: false,
+      references: { model: "users", key: "id" },
+      onDelete: "CASCADE",
+      onUpdate: "CASCADE",
+    },
     created_at: { type: S.DATE(3), allowNull: false, defaultValue: S.literal("CURRENT_TIMESTAMP(3)") },
     expires_at: { type: S.DATE(3), allowNull: false },
   });

@@ -14,7 +14,13 @@ async function up(qi, S) {
     created_at: { type: S.DATE, allowNull: false, defaultValue: S.literal("CURRENT_TIMESTAMP") },
     updated_at: { type: S.DATE, allowNull: false, defaultValue: S.literal("CURRENT_TIMESTAMP") },
   });
-  const production = () => ({ type: S.INTEGER, allowNull: false, references: { model: "productions", key: "id" }, onDelete: "CASCADE", onUpdate: "CASCADE" });
+  const production = () => ({
+    type: S.INTEGER,
+    allowNull: false,
+    references: { model: "productions", key: "id" },
+    onDelete: "CASCADE",
+    onUpdate: "CASCADE",
+  });
 
   await qi.createTable("circuits", {
     id: id(),
@@ -41,8 +47,16 @@ async function up(qi, S) {
   });
   await qi.addIndex("data_lines", ["production_id", "name"], { unique: true, name: "data_lines_production_name" });
 
-  await qi.addColumn("productions", "electrical_code", { type: S.ENUM(...CODES), allowNull: false, defaultValue: "none" });
-  await qi.addColumn("productions", "supply_system", { type: S.ENUM(...SUPPLIES), allowNull: false, defaultValue: "by-hand" });
+  await qi.addColumn("productions", "electrical_code", {
+    type: S.ENUM(...CODES),
+    allowNull: false,
+    defaultValue: "none",
+  });
+  await qi.addColumn("productions", "supply_system", {
+    type: S.ENUM(...SUPPLIES),
+    allowNull: false,
+    defaultValue: "by-hand",
+  });
   await qi.addColumn("productions", "cable_kg_per_m", { type: S.DOUBLE, allowNull: false, defaultValue: 0.5 });
   await qi.addColumn("productions", "hardware_kg_per_unit", { type: S.DOUBLE, allowNull: false, defaultValue: 1 });
   // The factor now defaults from the code; null means "the code's default" (none for most codes).
@@ -58,7 +72,8 @@ async function down(qi, S) {
   await qi.removeColumn("positions", "lift_lines");
   await qi.sequelize.query("UPDATE productions SET derating = 0.8 WHERE derating IS NULL");
   await qi.changeColumn("productions", "derating", { type: S.DOUBLE, allowNull: false, defaultValue: 0.8 });
-  for (const c of ["hardware_kg_per_unit", "cable_kg_per_m", "supply_system", "electrical_code"]) await qi.removeColumn("productions", c);
+  for (const c of ["hardware_kg_per_unit", "cable_kg_per_m", "supply_system", "electrical_code"])
+    await qi.removeColumn("productions", c);
   await qi.dropTable("data_lines");
   await qi.dropTable("circuits");
 }

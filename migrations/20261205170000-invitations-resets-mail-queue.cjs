@@ -10,14 +10,32 @@ async function up(qi, S) {
   };
   await qi.createTable("invitations", {
     id: { type: S.INTEGER, autoIncrement: true, primaryKey: true },
-    production_id: { type: S.INTEGER, allowNull: false, references: { model: "productions", key: "id" }, onDelete: "CASCADE", onUpdate: "CASCADE" },
+    production_id: {
+      type: S.INTEGER,
+      allowNull: false,
+      references: { model: "productions", key: "id" },
+      onDelete: "CASCADE",
+      onUpdate: "CASCADE",
+    },
     email: { type: S.STRING(254), allowNull: false },
     role: { type: S.ENUM("designer", "electrician", "stage_manager", "viewer"), allowNull: false },
     token_hash: { type: S.CHAR(64), allowNull: false, unique: true },
-    invited_by_user_id: { type: S.INTEGER, allowNull: true, references: { model: "users", key: "id" }, onDelete: "SET NULL", onUpdate: "CASCADE" },
+    invited_by_user_id: {
+      type: S.INTEGER,
+      allowNull: true,
+      references: { model: "users", key: "id" },
+      onDelete: "SET NULL",
+      onUpdate: "CASCADE",
+    },
     expires_at: { type: S.DATE(3), allowNull: false },
     used_at: { type: S.DATE(3), allowNull: true },
-    used_by_user_id: { type: S.INTEGER, allowNull: true, references: { model: "users", key: "id" }, onDelete: "SET NULL", onUpdate: "CASCADE" },
+    used_by_user_id: {
+      type: S.INTEGER,
+      allowNull: true,
+      references: { model: "users", key: "id" },
+      onDelete: "SET NULL",
+      onUpdate: "CASCADE",
+    },
     withdrawn_at: { type: S.DATE(3), allowNull: true },
     version: { type: S.INTEGER, allowNull: false, defaultValue: 1 },
     ...stamps,
@@ -26,7 +44,13 @@ async function up(qi, S) {
 
   await qi.createTable("password_resets", {
     token_hash: { type: S.CHAR(64), allowNull: false, primaryKey: true },
-    user_id: { type: S.INTEGER, allowNull: false, references: { model: "users", key: "id" }, onDelete: "CASCADE", onUpdate: "CASCADE" },
+    user_id: {
+      type: S.INTEGER,
+      allowNull: false,
+      references: { model: "users", key: "id" },
+      onDelete: "CASCADE",
+      onUpdate: "CASCADE",
+    },
     expires_at: { type: S.DATE(3), allowNull: false },
     used_at: { type: S.DATE(3), allowNull: true },
     created_at: { type: S.DATE(3), allowNull: false, defaultValue: S.literal("CURRENT_TIMESTAMP(3)") },
@@ -36,7 +60,13 @@ async function up(qi, S) {
   await qi.createTable("outgoing_mail", {
     id: { type: S.INTEGER, autoIncrement: true, primaryKey: true },
     // The production it concerns (null for account mail such as a password reset): the outbox page lists a production's own.
-    production_id: { type: S.INTEGER, allowNull: true, references: { model: "productions", key: "id" }, onDelete: "SET NULL", onUpdate: "CASCADE" },
+    production_id: {
+      type: S.INTEGER,
+      allowNull: true,
+      references: { model: "productions", key: "id" },
+      onDelete: "SET NULL",
+      onUpdate: "CASCADE",
+    },
     to_address: { type: S.STRING(254), allowNull: false },
     subject: { type: S.STRING(300), allowNull: false },
     body_text: { type: S.TEXT, allowNull: false },

@@ -10,11 +10,23 @@ const ORIGINS = ["written", "channel_check", "show_report", "spot"];
 
 /** @param {import('sequelize').QueryInterface} qi @param {typeof import('sequelize')} S */
 async function up(qi, S) {
-  const user = (allowNull) => ({ type: S.INTEGER, allowNull, references: { model: "users", key: "id" }, onDelete: allowNull ? "SET NULL" : "CASCADE", onUpdate: "CASCADE" });
+  const user = (allowNull) => ({
+    type: S.INTEGER,
+    allowNull,
+    references: { model: "users", key: "id" },
+    onDelete: allowNull ? "SET NULL" : "CASCADE",
+    onUpdate: "CASCADE",
+  });
   const flag = () => ({ type: S.BOOLEAN, allowNull: false, defaultValue: false });
   await qi.createTable("notes", {
     id: { type: S.INTEGER, autoIncrement: true, primaryKey: true },
-    production_id: { type: S.INTEGER, allowNull: false, references: { model: "productions", key: "id" }, onDelete: "CASCADE", onUpdate: "CASCADE" },
+    production_id: {
+      type: S.INTEGER,
+      allowNull: false,
+      references: { model: "productions", key: "id" },
+      onDelete: "CASCADE",
+      onUpdate: "CASCADE",
+    },
     subject: { type: S.ENUM(...SUBJECTS), allowNull: false },
     // No foreign key: the subject may be any of four tables; a note outlives a deleted subject.
     subject_id: { type: S.INTEGER, allowNull: true },
@@ -30,7 +42,13 @@ async function up(qi, S) {
     due_date: { type: S.DATEONLY, allowNull: true },
     due_session: { type: S.STRING(80), allowNull: true },
     author_id: user(false),
-    running_cue_id: { type: S.INTEGER, allowNull: true, references: { model: "cues", key: "id" }, onDelete: "SET NULL", onUpdate: "CASCADE" },
+    running_cue_id: {
+      type: S.INTEGER,
+      allowNull: true,
+      references: { model: "cues", key: "id" },
+      onDelete: "SET NULL",
+      onUpdate: "CASCADE",
+    },
     running_cue_number: { type: S.STRING(20), allowNull: true },
     origin: { type: S.ENUM(...ORIGINS), allowNull: false, defaultValue: "written" },
     show_report_id: { type: S.INTEGER, allowNull: true },
@@ -45,8 +63,12 @@ async function up(qi, S) {
 
   await qi.addColumn("productions", "current_cue_id", { type: S.INTEGER, allowNull: true });
   await qi.addConstraint("productions", {
-    type: "foreign key", name: "productions_current_cue_fk", fields: ["current_cue_id"],
-    references: { table: "cues", field: "id" }, onDelete: "SET NULL", onUpdate: "CASCADE",
+    type: "foreign key",
+    name: "productions_current_cue_fk",
+    fields: ["current_cue_id"],
+    references: { table: "cues", field: "id" },
+    onDelete: "SET NULL",
+    onUpdate: "CASCADE",
   });
 }
 

@@ -9,19 +9,43 @@ async function up(qi, S) {
   });
   await qi.createTable("show_reports", {
     id: { type: S.INTEGER, autoIncrement: true, primaryKey: true },
-    production_id: { type: S.INTEGER, allowNull: false, references: { model: "productions", key: "id" }, onDelete: "CASCADE", onUpdate: "CASCADE" },
+    production_id: {
+      type: S.INTEGER,
+      allowNull: false,
+      references: { model: "productions", key: "id" },
+      onDelete: "CASCADE",
+      onUpdate: "CASCADE",
+    },
     performance: { type: S.STRING(80), allowNull: false },
     performed_on: { type: S.DATEONLY, allowNull: false },
     summary: { type: S.TEXT, allowNull: false },
-    author_id: { type: S.INTEGER, allowNull: false, references: { model: "users", key: "id" }, onDelete: "CASCADE", onUpdate: "CASCADE" },
+    author_id: {
+      type: S.INTEGER,
+      allowNull: false,
+      references: { model: "users", key: "id" },
+      onDelete: "CASCADE",
+      onUpdate: "CASCADE",
+    },
     version: { type: S.INTEGER, allowNull: false, defaultValue: 1 },
     ...stamps(),
   });
   await qi.addIndex("show_reports", ["production_id", "performed_on"], { name: "show_reports_production_date" });
   await qi.createTable("show_report_faults", {
     id: { type: S.INTEGER, autoIncrement: true, primaryKey: true },
-    show_report_id: { type: S.INTEGER, allowNull: false, references: { model: "show_reports", key: "id" }, onDelete: "CASCADE", onUpdate: "CASCADE" },
-    fixture_id: { type: S.INTEGER, allowNull: true, references: { model: "fixtures", key: "id" }, onDelete: "SET NULL", onUpdate: "CASCADE" },
+    show_report_id: {
+      type: S.INTEGER,
+      allowNull: false,
+      references: { model: "show_reports", key: "id" },
+      onDelete: "CASCADE",
+      onUpdate: "CASCADE",
+    },
+    fixture_id: {
+      type: S.INTEGER,
+      allowNull: true,
+      references: { model: "fixtures", key: "id" },
+      onDelete: "SET NULL",
+      onUpdate: "CASCADE",
+    },
     kind: { type: S.ENUM("lamp_out", "fault"), allowNull: false },
     description: { type: S.STRING(300), allowNull: false },
     ...stamps(),

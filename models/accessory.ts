@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 
 /** A device hung on a fixture (scroller, gobo rotator, iris, barn doors …), with its own DMX, power and weight. */
 export class Accessory extends Model<InferAttributes<Accessory>, InferCreationAttributes<Accessory>> {

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 
 /** One recorded change: who changed what, with the row before and after (the basis of revisions). */
 export class ChangeEntry extends Model<InferAttributes<ChangeEntry>, InferCreationAttributes<ChangeEntry>> {

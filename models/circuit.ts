@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 
 /** dimmed: through a dimmer; non-dim: a dimmer set to switch fully on; constant: a direct (hard) power circuit. */
 export const CIRCUIT_POWER = ["dimmed", "non-dim", "constant"] as const;

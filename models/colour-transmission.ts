@@ -1,7 +1,17 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 
 /** One entry of a production's colour list: the colour text as typed in the rig (name) → transmission %. */
-export class ColourTransmission extends Model<InferAttributes<ColourTransmission>, InferCreationAttributes<ColourTransmission>> {
+export class ColourTransmission extends Model<
+  InferAttributes<ColourTransmission>,
+  InferCreationAttributes<ColourTransmission>
+> {
   declare id: CreationOptional<number>;
   declare productionId: number;
   declare name: string;

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 
 /** A part of a cue: channels that fade with their own times. Written only with its cue (the cue's version guards it). */
 export class CuePart extends Model<InferAttributes<CuePart>, InferCreationAttributes<CuePart>> {
@@ -30,7 +37,7 @@ export function initCuePart(sequelize: Sequelize) {
         allowNull: false,
         get() {
           const raw = this.getDataValue("channels") as unknown;
-          return (typeof raw === "string" ? JSON.parse(raw) : raw ?? []) as number[];
+          return (typeof raw === "string" ? JSON.parse(raw) : (raw ?? [])) as number[];
         },
       },
       createdAt: DataTypes.DATE,

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 
 /** A cue. `number` is DECIMAL(10,3), which the driver returns as a string; the data layer converts. */
 export class Cue extends Model<InferAttributes<Cue>, InferCreationAttributes<Cue>> {

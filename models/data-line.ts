@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 
 /** A DMX data run as the electrician cables it: the units in order, optionally the universe it carries. */
 export class DataLine extends Model<InferAttributes<DataLine>, InferCreationAttributes<DataLine>> {

@@ -1,6 +1,17 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 
-export type ShutterCut = { label: "top" | "bottom" | "left" | "right"; a: { x: number; y: number }; b: { x: number; y: number } };
+export type ShutterCut = {
+  label: "top" | "bottom" | "left" | "right";
+  a: { x: number; y: number };
+  b: { x: number; y: number };
+};
 export type AimHeight = "deck" | "head";
 
 /** One fixture (or one cell of a multi-cell body, grouped by bodyKey). */

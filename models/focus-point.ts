@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 
 /** A named mark on the deck ("Area 3") that several fixtures aim at. */
 export class FocusPoint extends Model<InferAttributes<FocusPoint>, InferCreationAttributes<FocusPoint>> {

@@ -26,7 +26,33 @@ import { initInvitation, Invitation } from "./invitation";
 import { initNote, Note } from "./note";
 import { initShowReport, ShowReport, ShowReportFault } from "./show-report";
 
-const models = { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission, Circuit, DataLine, Invitation, Note, ShowReport, ShowReportFault };
+const models = {
+  User,
+  Production,
+  Membership,
+  Position,
+  FixtureType,
+  FocusPoint,
+  Fixture,
+  Cue,
+  CueLevel,
+  CuePart,
+  ChangeEntry,
+  AreaZone,
+  Landmark,
+  Upload,
+  Accessory,
+  ImportMapping,
+  PerformerMark,
+  ScenicPanel,
+  ColourTransmission,
+  Circuit,
+  DataLine,
+  Invitation,
+  Note,
+  ShowReport,
+  ShowReportFault,
+};
 export type Db = typeof models & { sequelize: Sequelize };
 
 function associate() {
@@ -66,7 +92,31 @@ function createDb(): Db {
       initSql: `SET SESSION innodb_lock_wait_timeout = ${LOCK_WAIT_SECONDS}, SESSION lock_wait_timeout = ${LOCK_WAIT_SECONDS}`,
     },
   });
-  for (const init of [initUser, initProduction, initMembership, initPosition, initFixtureType, initFocusPoint, initFixture, initCue, initCuePart, initChangeEntry, initAreaZone, initLandmark, initUpload, initAccessory, initImportMapping, initPerformerMark, initScenicPanel, initColourTransmission, initCircuit, initDataLine, initInvitation, initNote, initShowReport]) {
+  for (const init of [
+    initUser,
+    initProduction,
+    initMembership,
+    initPosition,
+    initFixtureType,
+    initFocusPoint,
+    initFixture,
+    initCue,
+    initCuePart,
+    initChangeEntry,
+    initAreaZone,
+    initLandmark,
+    initUpload,
+    initAccessory,
+    initImportMapping,
+    initPerformerMark,
+    initScenicPanel,
+    initColourTransmission,
+    initCircuit,
+    initDataLine,
+    initInvitation,
+    initNote,
+    initShowReport,
+  ]) {
     init(sequelize);
   }
   associate();
@@ -80,4 +130,30 @@ export function getDb(): Db {
   return holder.__throwlineDb;
 }
 
-export { User, Production, Membership, Position, FixtureType, FocusPoint, Fixture, Cue, CueLevel, CuePart, ChangeEntry, AreaZone, Landmark, Upload, Accessory, ImportMapping, PerformerMark, ScenicPanel, ColourTransmission, Circuit, DataLine, Invitation, Note, ShowReport, ShowReportFault };
+export {
+  User,
+  Production,
+  Membership,
+  Position,
+  FixtureType,
+  FocusPoint,
+  Fixture,
+  Cue,
+  CueLevel,
+  CuePart,
+  ChangeEntry,
+  AreaZone,
+  Landmark,
+  Upload,
+  Accessory,
+  ImportMapping,
+  PerformerMark,
+  ScenicPanel,
+  ColourTransmission,
+  Circuit,
+  DataLine,
+  Invitation,
+  Note,
+  ShowReport,
+  ShowReportFault,
+};

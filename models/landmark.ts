@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 
 /** A named line on the plot ("lip", "SL leg 1", "header") that focus charts use to word shutter cuts. */
 export class Landmark extends Model<InferAttributes<Landmark>, InferCreationAttributes<Landmark>> {

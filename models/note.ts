@@ -1,7 +1,22 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
 import {
-  NOTE_KINDS, NOTE_ORIGINS, NOTE_PRIORITIES, NOTE_STATUSES, NOTE_SUBJECTS,
-  type NoteKind, type NoteOrigin, type NotePriority, type NoteStatus, type NoteSubject,
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
+import {
+  NOTE_KINDS,
+  NOTE_ORIGINS,
+  NOTE_PRIORITIES,
+  NOTE_STATUSES,
+  NOTE_SUBJECTS,
+  type NoteKind,
+  type NoteOrigin,
+  type NotePriority,
+  type NoteStatus,
+  type NoteSubject,
 } from "./note-vocabulary";
 
 /** A note from a rehearsal or a performance: a job for someone, on the production or one thing in it. */

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 
 /** Where a performer stands for the shadow study: a plan point, their height and shoulder width. */
 export class PerformerMark extends Model<InferAttributes<PerformerMark>, InferCreationAttributes<PerformerMark>> {

@@ -1,5 +1,12 @@
 import { POSITION_KINDS, type PositionKind } from "./position-kinds";
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 
 export { POSITION_KINDS, type PositionKind };
 

@@ -1,5 +1,12 @@
 import { ELECTRICAL_CODES, SUPPLY_SYSTEMS, type ElectricalCode, type SupplySystem } from "./electrical-options";
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 
 export type DisplayUnits = "metric" | "imperial";
 export type NumberingRule = "from-stage-left" | "from-stage-right";
@@ -56,7 +63,11 @@ export function initProduction(sequelize: Sequelize) {
       supplySystem: { type: DataTypes.ENUM(...SUPPLY_SYSTEMS), allowNull: false, defaultValue: "by-hand" },
       cableKgPerM: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0.5 },
       hardwareKgPerUnit: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 1 },
-      numberingRule: { type: DataTypes.ENUM("from-stage-left", "from-stage-right"), allowNull: false, defaultValue: "from-stage-left" },
+      numberingRule: {
+        type: DataTypes.ENUM("from-stage-left", "from-stage-right"),
+        allowNull: false,
+        defaultValue: "from-stage-left",
+      },
       version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,

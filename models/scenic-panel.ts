@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 
 /** A flat piece of scenery for the shadow study: a segment on the plan standing up to a height. */
 export class ScenicPanel extends Model<InferAttributes<ScenicPanel>, InferCreationAttributes<ScenicPanel>> {

@@ -10,7 +10,8 @@ const icons = path.join(root, "public", "icons");
 const { default: sharp } = await import("sharp");
 const svg = await readFile(path.join(icons, "throwline.svg"));
 
-const png = (size, input = svg) => sharp(input, { density: 384 }).resize(size, size).png({ compressionLevel: 9 }).toBuffer();
+const png = (size, input = svg) =>
+  sharp(input, { density: 384 }).resize(size, size).png({ compressionLevel: 9 }).toBuffer();
 
 for (const size of [192, 512]) await writeFile(path.join(icons, `icon-${size}.png`), await png(size));
 await writeFile(path.join(icons, "apple-touch-icon.png"), await png(180));

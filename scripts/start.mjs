@@ -56,7 +56,10 @@ async function main() {
   const env = { DATABASE_URL: databaseUrl, SESSION_SECRET: settings.SESSION_SECRET, NEXT_TELEMETRY_DISABLED: "1" };
   if (!settings.SMTP_URL) {
     // The local mail stand-in: messages land in .data/outbox, shown on the app's outbox page.
-    const mail = await startMailStandIn({ port: Number(settings.SMTP_PORT || 2525), outboxDir: path.join(ROOT, ".data", "outbox") });
+    const mail = await startMailStandIn({
+      port: Number(settings.SMTP_PORT || 2525),
+      outboxDir: path.join(ROOT, ".data", "outbox"),
+    });
     cleanups.push(() => mail.stop());
     Object.assign(env, { SMTP_URL: mail.url, MAIL_OUTBOX_DIR: mail.outboxDir });
     log(`Mail stand-in listening on ${mail.url} (outbox in .data/outbox).`);
@@ -72,11 +75,15 @@ async function main() {
 
   const port = Number(settings.PORT || 3000);
   if (!dev) buildIfStale(".next", env);
-  const child = spawn(process.execPath, [bin("next"), dev ? "dev" : "start", "-p", String(port), "-H", settings.HOST || "127.0.0.1"], {
-    cwd: ROOT,
-    stdio: ["ignore", "inherit", "inherit"],
-    env: { ...process.env, ...env, NODE_ENV: dev ? "development" : "production" },
-  });
+  const child = spawn(
+    process.execPath,
+    [bin("next"), dev ? "dev" : "start", "-p", String(port), "-H", settings.HOST || "127.0.0.1"],
+    {
+      cwd: ROOT,
+      stdio: ["ignore", "inherit", "inherit"],
+      env: { ...process.env, ...env, NODE_ENV: dev ? "development" : "production" },
+    },
+  );
   cleanups.push(
     () =>
       new Promise((resolve) => {

@@ -53,11 +53,15 @@ function runVitest(name, configFile, dir, env) {
   const report = path.join(RESULTS, `${name}.json`);
   rmSync(report, { force: true });
   return new Promise((resolve) => {
-    const child = spawn(process.execPath, [bin("vitest"), "run", "--reporter=default", "--reporter=json", `--outputFile.json=${report}`, ...args], {
-      cwd: ROOT,
-      stdio: "inherit",
-      env: { ...process.env, ...env, NO_COLOR: "1", FORCE_COLOR: "0" },
-    });
+    const child = spawn(
+      process.execPath,
+      [bin("vitest"), "run", "--reporter=default", "--reporter=json", `--outputFile.json=${report}`, ...args],
+      {
+        cwd: ROOT,
+        stdio: "inherit",
+        env: { ...process.env, ...env, NO_COLOR: "1", FORCE_COLOR: "0" },
+      },
+    );
     child.on("exit", (code) => {
       count(name, report, code);
       resolve(code);
@@ -74,7 +78,9 @@ function count(name, report, code) {
   }
   const r = JSON.parse(readFileSync(report, "utf8"));
   // A file that fails to load has no test results of its own: count it as a failure too.
-  const brokenFiles = r.testResults.filter((f) => f.status === "failed" && f.assertionResults.every((a) => a.status !== "failed")).length;
+  const brokenFiles = r.testResults.filter(
+    (f) => f.status === "failed" && f.assertionResults.every((a) => a.status !== "failed"),
+  ).length;
   totals.passed += r.numPassedTests;
   totals.failed += r.numFailedTests + brokenFiles;
   totals.skipped += r.numPendingTests + r.numTodoTests;
@@ -84,7 +90,11 @@ function count(name, report, code) {
 /** Biome (format + lint, one config in biome.json) over the whole tree counts as one test; it runs first. */
 function lint() {
   log("Format and lint (biome check) …");
-  const r = spawnSync(process.execPath, [path.join(ROOT, "node_modules/@biomejs/biome/bin/biome"), "check", "--colors=off", "."], { cwd: ROOT, encoding: "utf8" });
+  const r = spawnSync(
+    process.execPath,
+    [path.join(ROOT, "node_modules/@biomejs/biome/bin/biome"), "check", "--colors=off", "."],
+    { cwd: ROOT, encoding: "utf8" },
+  );
   if (r.status === 0) {
     totals.passed += 1;
     log("biome: passed");
@@ -98,7 +108,11 @@ function lint() {
 /** `tsc --noEmit` over the whole tree counts as one test. */
 function typecheck() {
   log("Type-checking (tsc --noEmit) …");
-  const r = spawnSync(process.execPath, [path.join(ROOT, "node_modules/typescript/bin/tsc"), "--noEmit", "-p", "tsconfig.json"], { cwd: ROOT, encoding: "utf8" });
+  const r = spawnSync(
+    process.execPath,
+    [path.join(ROOT, "node_modules/typescript/bin/tsc"), "--noEmit", "-p", "tsconfig.json"],
+    { cwd: ROOT, encoding: "utf8" },
+  );
   if (r.status === 0) {
     totals.passed += 1;
     log("typecheck: passed");

@@ -23,7 +23,10 @@ export async function ensureDatabase(): Promise<"given" | "started" | "unavailab
   const dir = mkdtempSync(path.join(os.tmpdir(), "throwline-bench-db-"));
   try {
     const db = await startMariaDb({ dir, port: await freePort(), password: randomBytes(12).toString("hex") });
-    stops.push(() => rmSync(dir, { recursive: true, force: true }), () => db.stop());
+    stops.push(
+      () => rmSync(dir, { recursive: true, force: true }),
+      () => db.stop(),
+    );
     const env = { DATABASE_URL: db.url };
     migrate(env);
     await seedWhenEmpty(env);
@@ -31,7 +34,9 @@ export async function ensureDatabase(): Promise<"given" | "started" | "unavailab
     return "started";
   } catch (err) {
     rmSync(dir, { recursive: true, force: true });
-    console.log(`Could not start a throwaway MariaDB (${(err as Error).message.split("\n")[0]}); is mariadb-server installed? Database part skipped.`);
+    console.log(
+      `Could not start a throwaway MariaDB (${(err as Error).message.split("\n")[0]}); is mariadb-server installed? Database part skipped.`,
+    );
     return "unavailable";
   }
 }
@@ -42,14 +47,22 @@ export async function ensureServer(): Promise<string | null> {
   const { ROOT, bin, freePort, waitForHttp } = await import("../../scripts/lib/project.mjs" as string);
   const distDir = process.env.BENCH_DIST_DIR ?? ".next";
   if (!existsSync(path.join(ROOT, distDir, "BUILD_ID"))) {
-    console.log(`  No build in ${distDir} (run \`npm run build\`, or set BENCH_DIST_DIR or APP_URL): HTTP part skipped.`);
+    console.log(
+      `  No build in ${distDir} (run \`npm run build\`, or set BENCH_DIST_DIR or APP_URL): HTTP part skipped.`,
+    );
     return null;
   }
   const port = await freePort();
   const server: ChildProcess = spawn(process.execPath, [bin("next"), "start", "-p", String(port), "-H", "127.0.0.1"], {
     cwd: ROOT,
     stdio: ["ignore", "ignore", "inherit"],
-    env: { ...process.env, NEXT_DIST_DIR: distDir, NODE_ENV: "production", NEXT_TELEMETRY_DISABLED: "1", SESSION_SECRET: process.env.SESSION_SECRET ?? randomBytes(36).toString("base64url") },
+    env: {
+      ...process.env,
+      NEXT_DIST_DIR: distDir,
+      NODE_ENV: "production",
+      NEXT_TELEMETRY_DISABLED: "1",
+      SESSION_SECRET: process.env.SESSION_SECRET ?? randomBytes(36).toString("base64url"),
+    },
   });
   stops.push(
     () =>

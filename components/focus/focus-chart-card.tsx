@@ -24,7 +24,12 @@ function Cuts({ chart }: { chart: FocusChart }) {
   if (!chart.cuts.length) return <p className="fc-none">No cuts.</p>;
   return (
     <ol className="fc-cutlist">
-      {chart.cuts.map((c, n) => <li key={n}><b>{c.words}</b>{` — ${c.cutterWords}`}</li>)}
+      {chart.cuts.map((c, n) => (
+        <li key={n}>
+          <b>{c.words}</b>
+          {` — ${c.cutterWords}`}
+        </li>
+      ))}
     </ol>
   );
 }
@@ -32,7 +37,7 @@ function Cuts({ chart }: { chart: FocusChart }) {
 function Note({ label, text, className }: { label: string; text: string | null; className: string }) {
   return (
     <div className={`fc-note ${className}`}>
-      <span className="fc-note-label">{label}</span>{" "}{text?.trim() ? text : <span className="fc-none">none</span>}
+      <span className="fc-note-label">{label}</span> {text?.trim() ? text : <span className="fc-none">none</span>}
     </div>
   );
 }
@@ -42,14 +47,31 @@ function Photo({ chart }: { chart: FocusChart }) {
   if (!chart.photo) return null;
   // Lazy on screen, where a long list may hold hundreds; the PDF's inline copies load with the page.
   const img = (
-    <img src={chart.photo.thumbSrc} loading={chart.photo.href ? "lazy" : undefined} alt={`Focus photo of ${chart.positionName} unit ${chart.unitNumber}`} data-testid="focus-photo-thumb" />
+    <img
+      src={chart.photo.thumbSrc}
+      loading={chart.photo.href ? "lazy" : undefined}
+      alt={`As focused: ${chart.positionName} unit ${chart.unitNumber}`}
+      data-testid="focus-photo-thumb"
+    />
   );
-  return chart.photo.href
-    ? <a className="fc-photo" href={chart.photo.href} target="_blank" rel="noopener">{img}</a>
-    : <span className="fc-photo">{img}</span>;
+  return chart.photo.href ? (
+    <a className="fc-photo" href={chart.photo.href} target="_blank" rel="noopener">
+      {img}
+    </a>
+  ) : (
+    <span className="fc-photo">{img}</span>
+  );
 }
 
-export function FocusChartCard({ chart, landmarks, units }: { chart: FocusChart; landmarks: Landmark[]; units: Units }) {
+export function FocusChartCard({
+  chart,
+  landmarks,
+  units,
+}: {
+  chart: FocusChart;
+  landmarks: Landmark[];
+  units: Units;
+}) {
   return (
     <article className="fc-card" data-testid="focus-chart" data-fixture-id={chart.id}>
       <header className="fc-head">
@@ -59,12 +81,25 @@ export function FocusChartCard({ chart, landmarks, units }: { chart: FocusChart;
       </header>
       <div className="fc-body">
         <figure className="fc-figure">
-          <PoolDiagram fixture={chart.fixture} landmarks={landmarks} units={units} cutLabels={chart.cuts.map((c) => (c.physical ? SHORT[c.physical] : ""))} />
+          <PoolDiagram
+            fixture={chart.fixture}
+            landmarks={landmarks}
+            units={units}
+            cutLabels={chart.cuts.map((c) => (c.physical ? SHORT[c.physical] : ""))}
+          />
         </figure>
-        <dl className="fc-fields fc-identity"><Rows list={chart.identity} skip={["position", "unit", "channel"]} /></dl>
-        <dl className="fc-fields fc-focus"><Rows list={chart.focus} /><Rows list={chart.beam} /></dl>
+        <dl className="fc-fields fc-identity">
+          <Rows list={chart.identity} skip={["position", "unit", "channel"]} />
+        </dl>
+        <dl className="fc-fields fc-focus">
+          <Rows list={chart.focus} />
+          <Rows list={chart.beam} />
+        </dl>
       </div>
-      <section className="fc-cuts"><h4>Cuts</h4><Cuts chart={chart} /></section>
+      <section className="fc-cuts">
+        <h4>Cuts</h4>
+        <Cuts chart={chart} />
+      </section>
       <div className="fc-foot">
         <section className="fc-notes">
           <Note label="Designer:" text={chart.notes} className="fc-designer" />

@@ -6,21 +6,36 @@ import type { Landmark } from "@/lib/focus/landmarks";
 import type { ChartsPerPage, Sheet } from "@/lib/focus/pages";
 import { FocusChartCard } from "./focus-chart-card";
 
-export type SheetOptions = { productionName: string; printedAt: string; perPage: ChartsPerPage; units: Units; landmarks: Landmark[] };
+export type SheetOptions = {
+  productionName: string;
+  printedAt: string;
+  perPage: ChartsPerPage;
+  units: Units;
+  landmarks: Landmark[];
+};
 
 export function EmptySheet({ perPage }: { perPage: ChartsPerPage }) {
-  return <section className={`fc-sheet fc-n${perPage}`}><p>No fixtures match these filters.</p></section>;
+  return (
+    <section className={`fc-sheet fc-n${perPage}`}>
+      <p>No fixtures match these filters.</p>
+    </section>
+  );
 }
 
 export function FocusSheet({ sheet, o }: { sheet: Sheet; o: SheetOptions }) {
   return (
     <section className={`fc-sheet fc-n${o.perPage}`} data-testid="focus-sheet">
       <header className="fc-sheet-head">
-        <span><b>{o.productionName}</b>{` · ${sheet.positions.join(", ")}`}</span>
+        <span>
+          <b>{o.productionName}</b>
+          {` · ${sheet.positions.join(", ")}`}
+        </span>
         <span>{`Focus charts · printed ${o.printedAt} · page ${sheet.page} of ${sheet.of}`}</span>
       </header>
       <div className="fc-grid">
-        {sheet.charts.map((c) => <FocusChartCard key={c.id} chart={c} landmarks={o.landmarks} units={o.units} />)}
+        {sheet.charts.map((c) => (
+          <FocusChartCard key={c.id} chart={c} landmarks={o.landmarks} units={o.units} />
+        ))}
       </div>
     </section>
   );

@@ -46,7 +46,8 @@ export function drawPoolEdges(ctx: Ctx, v: View, items: RigItem[], pal: PlotPale
   ctx.globalAlpha = 0.5;
   ctx.lineWidth = 0.75;
   ctx.beginPath();
-  for (const it of items) if (drawable(it, visible) && it.pool.half) addPoolPath(ctx, v, it.pool.half, cutsOf(it), it.mark);
+  for (const it of items)
+    if (drawable(it, visible) && it.pool.half) addPoolPath(ctx, v, it.pool.half, cutsOf(it), it.mark);
   ctx.stroke();
   ctx.globalAlpha = 1;
   ctx.strokeStyle = pal.danger;

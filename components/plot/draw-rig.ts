@@ -24,7 +24,15 @@ export type RigItem = {
 
 function ellipsePath(ctx: Ctx, v: View, e: Ellipse) {
   const c = planToScreen(v, e.centre);
-  ctx.ellipse(c.x, c.y, Math.max(0.5, e.semiMajor * v.scale), Math.max(0.5, e.semiMinor * v.scale), (-e.rotationDeg * Math.PI) / 180, 0, Math.PI * 2);
+  ctx.ellipse(
+    c.x,
+    c.y,
+    Math.max(0.5, e.semiMajor * v.scale),
+    Math.max(0.5, e.semiMinor * v.scale),
+    (-e.rotationDeg * Math.PI) / 180,
+    0,
+    Math.PI * 2,
+  );
 }
 
 export function intersects(b: Bounds, e: Ellipse) {
@@ -45,13 +53,22 @@ export function addPoolPath(ctx: Ctx, v: View, e: Ellipse, cuts: RigItem["cuts"]
     if (poly.length) planPath(ctx, v, poly);
   } else {
     const c = planToScreen(v, e.centre);
-    ctx.moveTo(c.x + Math.max(0.5, e.semiMajor * v.scale) * Math.cos((-e.rotationDeg * Math.PI) / 180), c.y + Math.max(0.5, e.semiMajor * v.scale) * Math.sin((-e.rotationDeg * Math.PI) / 180));
+    ctx.moveTo(
+      c.x + Math.max(0.5, e.semiMajor * v.scale) * Math.cos((-e.rotationDeg * Math.PI) / 180),
+      c.y + Math.max(0.5, e.semiMajor * v.scale) * Math.sin((-e.rotationDeg * Math.PI) / 180),
+    );
     ellipsePath(ctx, v, e);
     ctx.closePath();
   }
 }
 
-export function drawPool(ctx: Ctx, v: View, item: Pick<RigItem, "pool" | "cuts" | "mark">, pal: PlotPalette, strong = false) {
+export function drawPool(
+  ctx: Ctx,
+  v: View,
+  item: Pick<RigItem, "pool" | "cuts" | "mark">,
+  pal: PlotPalette,
+  strong = false,
+) {
   const pool = item.pool;
   if (!pool || pool.status !== "ok" || !pool.outer) return;
   const cuts = item.cuts.length && item.mark ? item.cuts : null;
@@ -105,7 +122,11 @@ function unitPath(shape: SymbolShape): Path2D {
   return p;
 }
 
-type FixtureDrawOptions = { labels: boolean; selected: ReadonlySet<number>; visible: { width: number; height: number } };
+type FixtureDrawOptions = {
+  labels: boolean;
+  selected: ReadonlySet<number>;
+  visible: { width: number; height: number };
+};
 
 export function drawFixtures(ctx: Ctx, v: View, items: RigItem[], pal: PlotPalette, o: FixtureDrawOptions) {
   const px = symbolPixels(v.scale);
@@ -187,7 +208,14 @@ function cross(ctx: Ctx, m: Point, r: number) {
   ctx.lineTo(m.x + r, m.y - r);
 }
 
-export function drawFocusPoints(ctx: Ctx, v: View, points: Array<{ id: number; name: string; x: number; y: number }>, pal: PlotPalette, labels: boolean, selected: number | null) {
+export function drawFocusPoints(
+  ctx: Ctx,
+  v: View,
+  points: Array<{ id: number; name: string; x: number; y: number }>,
+  pal: PlotPalette,
+  labels: boolean,
+  selected: number | null,
+) {
   ctx.font = "600 11px 'IBM Plex Sans', system-ui, sans-serif";
   ctx.textAlign = "left";
   ctx.textBaseline = "middle";

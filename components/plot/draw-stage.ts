@@ -10,13 +10,15 @@ import { planPath } from "./plan-paths";
 export type Ctx = CanvasRenderingContext2D;
 export type Size = { width: number; height: number };
 
-
 export function drawGrid(ctx: Ctx, v: View, size: Size, units: "metric" | "imperial", pal: PlotPalette) {
   const step = gridStep(v.scale, units);
   const major = step * (units === "metric" ? (step < 1 ? 1 / step : 5) : 5);
   const b = visiblePlanBounds(v, size);
   ctx.lineWidth = 1;
-  for (const [lines, isX] of [[gridLines(b.minX, b.maxX, step), true], [gridLines(b.minY, b.maxY, step), false]] as const) {
+  for (const [lines, isX] of [
+    [gridLines(b.minX, b.maxX, step), true],
+    [gridLines(b.minY, b.maxY, step), false],
+  ] as const) {
     for (const m of lines) {
       const isMajor = Math.abs(m / major - Math.round(m / major)) < 1e-6;
       ctx.strokeStyle = isMajor ? pal.gridMajor : pal.grid;
@@ -98,7 +100,14 @@ function handles(ctx: Ctx, v: View, pts: Point[], colour: string) {
   }
 }
 
-export function drawAreas(ctx: Ctx, v: View, zones: Array<{ name: string; polygon: Point[] }>, pal: PlotPalette, labels: boolean, editable = false) {
+export function drawAreas(
+  ctx: Ctx,
+  v: View,
+  zones: Array<{ name: string; polygon: Point[] }>,
+  pal: PlotPalette,
+  labels: boolean,
+  editable = false,
+) {
   ctx.lineWidth = 1;
   for (const z of zones) {
     if (editable) handles(ctx, v, z.polygon, pal.success);
@@ -111,7 +120,10 @@ export function drawAreas(ctx: Ctx, v: View, zones: Array<{ name: string; polygo
     ctx.stroke();
     ctx.setLineDash([]);
     if (labels) {
-      const c = z.polygon.reduce((a, p) => ({ x: a.x + p.x / z.polygon.length, y: a.y + p.y / z.polygon.length }), { x: 0, y: 0 });
+      const c = z.polygon.reduce((a, p) => ({ x: a.x + p.x / z.polygon.length, y: a.y + p.y / z.polygon.length }), {
+        x: 0,
+        y: 0,
+      });
       const s = planToScreen(v, c);
       ctx.fillStyle = pal.success;
       ctx.font = "italic 12px 'IBM Plex Sans', system-ui, sans-serif";
@@ -122,7 +134,14 @@ export function drawAreas(ctx: Ctx, v: View, zones: Array<{ name: string; polygo
   }
 }
 
-export function drawLandmarks(ctx: Ctx, v: View, marks: Array<{ name: string; x1: number; y1: number; x2: number; y2: number }>, pal: PlotPalette, labels: boolean, editable = false) {
+export function drawLandmarks(
+  ctx: Ctx,
+  v: View,
+  marks: Array<{ name: string; x1: number; y1: number; x2: number; y2: number }>,
+  pal: PlotPalette,
+  labels: boolean,
+  editable = false,
+) {
   ctx.strokeStyle = pal.caution;
   ctx.fillStyle = pal.caution;
   ctx.lineWidth = 1.25;
@@ -136,7 +155,16 @@ export function drawLandmarks(ctx: Ctx, v: View, marks: Array<{ name: string; x1
     ctx.lineTo(b.x, b.y);
     ctx.stroke();
     ctx.setLineDash([]);
-    if (editable) handles(ctx, v, [{ x: l.x1, y: l.y1 }, { x: l.x2, y: l.y2 }], pal.caution);
+    if (editable)
+      handles(
+        ctx,
+        v,
+        [
+          { x: l.x1, y: l.y1 },
+          { x: l.x2, y: l.y2 },
+        ],
+        pal.caution,
+      );
     if (labels) {
       ctx.textAlign = "left";
       ctx.textBaseline = "bottom";
@@ -147,7 +175,14 @@ export function drawLandmarks(ctx: Ctx, v: View, marks: Array<{ name: string; x1
 
 type PositionShape = { id: number; name: string; x1: number; y1: number; x2: number | null; y2: number | null };
 
-export function drawPositions(ctx: Ctx, v: View, positions: PositionShape[], pal: PlotPalette, labels: boolean, selected: ReadonlySet<number>) {
+export function drawPositions(
+  ctx: Ctx,
+  v: View,
+  positions: PositionShape[],
+  pal: PlotPalette,
+  labels: boolean,
+  selected: ReadonlySet<number>,
+) {
   ctx.font = "600 11px 'IBM Plex Sans', system-ui, sans-serif";
   for (const p of positions) {
     const isSel = selected.has(p.id);

@@ -3,7 +3,13 @@ import { planToScreen, type View } from "@/lib/plot/view";
 import type { Ctx } from "./draw-stage";
 
 /** Draws a calibrated groundplan image: its top-left pixel at the plan offset, scaled and rotated. */
-export function drawUnderlay(ctx: Ctx, v: View, img: CanvasImageSource, u: UnderlayPlacement & { opacity: number }, dark = false) {
+export function drawUnderlay(
+  ctx: Ctx,
+  v: View,
+  img: CanvasImageSource,
+  u: UnderlayPlacement & { opacity: number },
+  dark = false,
+) {
   const o = planToScreen(v, { x: u.offsetX, y: u.offsetY });
   ctx.save();
   ctx.globalAlpha = u.opacity;

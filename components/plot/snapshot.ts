@@ -32,11 +32,23 @@ export class LayerSnapshot {
    * visibility), compared item by item: when one changes the bitmap is redrawn. While `moving`, a bitmap of the same stamp is
    * reused at any view; at rest it is redrawn whenever the view differs from the one it was drawn at.
    */
-  draw(ctx: Ctx, v: View, size: Size, stamp: readonly unknown[], paint: SnapshotDraw, moving: boolean): "reused" | "fresh" {
+  draw(
+    ctx: Ctx,
+    v: View,
+    size: Size,
+    stamp: readonly unknown[],
+    paint: SnapshotDraw,
+    moving: boolean,
+  ): "reused" | "fresh" {
     const t0 = performance.now();
     const ratio = (typeof window === "undefined" ? 1 : window.devicePixelRatio || 1) * this.resolution;
     const sameSize = size.width === this.size.width && size.height === this.size.height && ratio === this.ratio;
-    const usable = this.canvas && this.at && sameSize && stamp.length === this.stamp.length && stamp.every((x, i) => x === this.stamp[i]);
+    const usable =
+      this.canvas &&
+      this.at &&
+      sameSize &&
+      stamp.length === this.stamp.length &&
+      stamp.every((x, i) => x === this.stamp[i]);
     const fresh = !usable || (!moving && !this.sameView(v));
     if (fresh) this.render(v, size, stamp, paint, ratio);
     const at = this.at!;
@@ -57,7 +69,11 @@ export class LayerSnapshot {
 
   private sameView(v: View) {
     const at = this.at!;
-    return Math.abs(v.scale - at.scale) < 1e-9 && Math.abs(v.ox + this.margin.x - at.ox) < 0.01 && Math.abs(v.oy + this.margin.y - at.oy) < 0.01;
+    return (
+      Math.abs(v.scale - at.scale) < 1e-9 &&
+      Math.abs(v.ox + this.margin.x - at.ox) < 0.01 &&
+      Math.abs(v.oy + this.margin.y - at.oy) < 0.01
+    );
   }
 
   private render(v: View, size: Size, stamp: readonly unknown[], paint: SnapshotDraw, ratio: number) {

@@ -9,7 +9,11 @@ const VARIANTS: Record<Variant, string> = {
   danger: "bg-danger text-danger-ink hover:opacity-90",
 };
 
-export function Button({ variant = "primary", className = "", ...props }: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant }) {
+export function Button({
+  variant = "primary",
+  className = "",
+  ...props
+}: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant }) {
   return (
     <button
       {...props}

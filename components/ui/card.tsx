@@ -1,4 +1,14 @@
-export function Card({ title, children, className = "", actions }: { title?: string; children: React.ReactNode; className?: string; actions?: React.ReactNode }) {
+export function Card({
+  title,
+  children,
+  className = "",
+  actions,
+}: {
+  title?: string;
+  children: React.ReactNode;
+  className?: string;
+  actions?: React.ReactNode;
+}) {
   return (
     <section className={`rounded-lg border border-line bg-surface p-4 ${className}`}>
       {title || actions ? (

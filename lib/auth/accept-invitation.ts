@@ -17,7 +17,10 @@ export async function acceptAndSignIn(input: { token: string; name?: string; pas
   const accepted = await acceptInvitation({
     token: input.token,
     signedInUserId: current?.id ?? null,
-    newAccount: input.name !== undefined && input.password !== undefined ? { name: input.name, password: input.password } : undefined,
+    newAccount:
+      input.name !== undefined && input.password !== undefined
+        ? { name: input.name, password: input.password }
+        : undefined,
   });
   if (accepted.createdAccount) await startSession(accepted.userId);
   return { ...accepted, landing: landingForRole(accepted.productionId, accepted.role) };

@@ -1,5 +1,5 @@
 import "server-only";
-import { createPasswordReset, usePasswordReset } from "@/lib/data/password-resets";
+import { createPasswordReset, consumePasswordReset } from "@/lib/data/password-resets";
 import { endUserSessions } from "@/lib/data/sessions";
 import { appOrigin } from "@/lib/mail/links";
 import { noAccountMessage, passwordResetMessage } from "@/lib/mail/messages";
@@ -9,7 +9,8 @@ import { clearAccountFailures } from "./sign-in-limits";
 import { startSession } from "./sign-in";
 
 /** The one answer to every reset request, whether or not an account uses the address. */
-export const RESET_REQUESTED = "If a Throwline account uses that address, a link to choose a new password is on its way. Check your e-mail.";
+export const RESET_REQUESTED =
+  "If a Throwline account uses that address, a link to choose a new password is on its way. Check your e-mail.";
 
 /**
  * A request for a reset link. Known or unknown, the address gets an e-mail and the page the same
@@ -20,14 +21,19 @@ export async function requestPasswordReset(email: string): Promise<string> {
   const origin = await appOrigin();
   const message = reset
     ? passwordResetMessage({ link: `${origin}/reset-password/${reset.token}`, expiresAt: reset.expiresAt })
-    : noAccountMessage({ signUpHint: `To use Throwline, start a production of your own at ${origin}/sign-up or ask a production's owner for an invitation.` });
+    : noAccountMessage({
+        signUpHint: `To use Throwline, start a production of your own at ${origin}/sign-up or ask a production's owner for an invitation.`,
+      });
   await sendMail({ productionId: null, to: email.trim().toLowerCase(), ...message });
   return RESET_REQUESTED;
 }
 
 /** Sets the new password, ends every session of the account, and signs this browser in afresh. */
 export async function completePasswordReset(input: { token: string; password: string }) {
-  const { userId, email } = await usePasswordReset({ token: input.token, passwordHash: await hashPassword(input.password) });
+  const { userId, email } = await consumePasswordReset({
+    token: input.token,
+    passwordHash: await hashPassword(input.password),
+  });
   await endUserSessions({ userId });
   await clearAccountFailures(email);
   await startSession(userId);

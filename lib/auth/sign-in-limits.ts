@@ -22,17 +22,25 @@ export async function assertSignInAllowed(keys: { account: string; address: stri
             CEIL(TIMESTAMPDIFF(MICROSECOND, NOW(3), window_started_at + INTERVAL (CASE WHEN limit_key LIKE 'account:%' THEN ? ELSE ? END) SECOND) / 1e6) AS seconds_left
        FROM sign_in_attempts WHERE limit_key IN (?, ?)`,
     {
-      replacements: [SIGN_IN_LIMITS.account.windowSeconds, SIGN_IN_LIMITS.address.windowSeconds, keyOf("account", keys.account), keyOf("address", keys.address)],
+      replacements: [
+        SIGN_IN_LIMITS.account.windowSeconds,
+        SIGN_IN_LIMITS.address.windowSeconds,
+        keyOf("account", keys.account),
+        keyOf("address", keys.address),
+      ],
       type: QueryTypes.SELECT,
     },
   );
   let wait = 0;
   for (const r of rows) {
     const kind: Kind = r.limit_key.startsWith("account:") ? "account" : "address";
-    if (Number(r.seconds_left) > 0 && r.failures >= SIGN_IN_LIMITS[kind].failures) wait = Math.max(wait, Number(r.seconds_left));
+    if (Number(r.seconds_left) > 0 && r.failures >= SIGN_IN_LIMITS[kind].failures)
+      wait = Math.max(wait, Number(r.seconds_left));
   }
   if (wait > 0) {
-    throw new AppError("too_many_requests", `Too many sign-in attempts. Try again in ${wait} s.`, { retryAfterSeconds: wait });
+    throw new AppError("too_many_requests", `Too many sign-in attempts. Try again in ${wait} s.`, {
+      retryAfterSeconds: wait,
+    });
   }
 }
 
@@ -54,5 +62,7 @@ export async function recordSignInFailure(keys: { account: string; address: stri
 
 /** A successful sign-in clears the account's count (not the address's: others share it). */
 export async function clearAccountFailures(account: string): Promise<void> {
-  await getDb().sequelize.query("DELETE FROM sign_in_attempts WHERE limit_key = ?", { replacements: [keyOf("account", account)] });
+  await getDb().sequelize.query("DELETE FROM sign_in_attempts WHERE limit_key = ?", {
+    replacements: [keyOf("account", account)],
+  });
 }

@@ -42,14 +42,19 @@ export type PointLoad = { at: number; kg: number };
  * uniform load, and the uniform load that would bend the span as much: W = 8·M / L (beam tables:
  * uniform WL/8, centre point PL/4, so a centre point load P counts as a uniform 2P).
  */
-export function uniformEquivalent(lengthM: number, points: PointLoad[], uniformKg: number): { maxMomentKgM: number; equivalentKg: number } {
+export function uniformEquivalent(
+  lengthM: number,
+  points: PointLoad[],
+  uniformKg: number,
+): { maxMomentKgM: number; equivalentKg: number } {
   if (!(lengthM > 0)) throw new RangeError("The span must be longer than 0 m.");
   const w = uniformKg / lengthM;
   const loads = points.map((p) => ({ at: Math.min(lengthM, Math.max(0, p.at)), kg: p.kg })).sort((a, b) => a.at - b.at);
   const total = uniformKg + loads.reduce((s, p) => s + p.kg, 0);
   const rightMoment = loads.reduce((s, p) => s + p.kg * p.at, 0) + (uniformKg * lengthM) / 2;
   const rLeft = total - rightMoment / lengthM;
-  const momentAt = (x: number) => rLeft * x - (w * x * x) / 2 - loads.reduce((s, p) => (p.at < x ? s + p.kg * (x - p.at) : s), 0);
+  const momentAt = (x: number) =>
+    rLeft * x - (w * x * x) / 2 - loads.reduce((s, p) => (p.at < x ? s + p.kg * (x - p.at) : s), 0);
   // The maximum is at a point load or where the shear crosses zero between two of them.
   const candidates = [0, lengthM, ...loads.map((p) => p.at)];
   let before = 0;

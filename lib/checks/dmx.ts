@@ -32,13 +32,27 @@ export type DmxResult = {
 };
 
 /** A fixture's or accessory's claim on slots. */
-type Device = { fixtureId: number; label: string; universe: number; start: number; footprint: number; shareKey: string; why: string };
+type Device = {
+  fixtureId: number;
+  label: string;
+  universe: number;
+  start: number;
+  footprint: number;
+  shareKey: string;
+  why: string;
+};
 /** Devices at one start that deliberately share it: one interval on the universe. */
 type Claim = { universe: number; start: number; end: number; members: Device[] };
 
 /** Does a footprint fit a universe? ANSI E1.11: s ≥ 1 and s + N − 1 ≤ 512 (no straddling). */
 export function fitsUniverse(address: number, footprint: number): boolean {
-  return Number.isInteger(address) && Number.isInteger(footprint) && footprint >= 1 && address >= 1 && address + footprint - 1 <= SLOTS_PER_UNIVERSE;
+  return (
+    Number.isInteger(address) &&
+    Number.isInteger(footprint) &&
+    footprint >= 1 &&
+    address >= 1 &&
+    address + footprint - 1 <= SLOTS_PER_UNIVERSE
+  );
 }
 
 function fixtureDevice(f: CheckFixture): Device | null {
@@ -117,7 +131,8 @@ function universeMaps(claims: Claim[], conflicts: Map<Claim, Claim[]>): Universe
       const state = new Uint8Array(SLOTS_PER_UNIVERSE + 1); // 0 free, 1 used, 2 shared, 3 conflict
       for (const c of list) {
         const s = conflicts.has(c) ? 3 : c.members.length > 1 ? 2 : 1;
-        for (let slot = Math.max(1, c.start); slot <= Math.min(SLOTS_PER_UNIVERSE, c.end); slot++) state[slot] = Math.max(state[slot], s);
+        for (let slot = Math.max(1, c.start); slot <= Math.min(SLOTS_PER_UNIVERSE, c.end); slot++)
+          state[slot] = Math.max(state[slot], s);
       }
       const segments: Segment[] = [];
       let slotsUsed = 0;
@@ -134,7 +149,10 @@ function universeMaps(claims: Claim[], conflicts: Map<Claim, Claim[]>): Universe
     });
 }
 
-export function checkDataLines(lines: DataLineInput[], fixtures: Map<number, CheckFixture>): { results: DataLineResult[]; findings: Finding[] } {
+export function checkDataLines(
+  lines: DataLineInput[],
+  fixtures: Map<number, CheckFixture>,
+): { results: DataLineResult[]; findings: Finding[] } {
   const findings: Finding[] = [];
   const results = lines.map((line) => {
     // A multi-cell body is one device on the line, however many cells (rows) it has.
@@ -152,21 +170,53 @@ export function checkDataLines(lines: DataLineInput[], fixtures: Map<number, Che
     const last = units.at(-1) ?? null;
     const overLimit = units.length > UNIT_LOADS_PER_SEGMENT;
     if (overLimit) {
-      findings.push({ area: "dmx", severity: "error", subject, message: `${units.length} devices on one run: EIA-485 allows ${UNIT_LOADS_PER_SEGMENT} unit loads per segment (one device is usually one unit load). Split the run with a DMX splitter or buffer.`, fixtureIds: units.map((u) => u.id) });
+      findings.push({
+        area: "dmx",
+        severity: "error",
+        subject,
+        message: `${units.length} devices on one run: EIA-485 allows ${UNIT_LOADS_PER_SEGMENT} unit loads per segment (one device is usually one unit load). Split the run with a DMX splitter or buffer.`,
+        fixtureIds: units.map((u) => u.id),
+      });
     }
-    if (last) findings.push({ area: "dmx", severity: "info", subject, message: `Terminate the last device on the run (unit ${last.label}) with a DMX terminator.`, fixtureIds: [last.id] });
+    if (last)
+      findings.push({
+        area: "dmx",
+        severity: "info",
+        subject,
+        message: `Terminate the last device on the run (unit ${last.label}) with a DMX terminator.`,
+        fixtureIds: [last.id],
+      });
     else findings.push({ area: "dmx", severity: "info", subject, message: "No units on this run yet." });
     if (line.universe != null) {
       const elsewhere = units.filter((u) => u.universe != null && u.universe !== line.universe);
-      if (elsewhere.length) findings.push({ area: "dmx", severity: "warning", subject, message: `The run carries universe ${line.universe} but ${elsewhere.map((u) => `unit ${u.label} (universe ${u.universe})`).join(", ")} ${elsewhere.length === 1 ? "is" : "are"} patched to another universe.`, fixtureIds: elsewhere.map((u) => u.id) });
+      if (elsewhere.length)
+        findings.push({
+          area: "dmx",
+          severity: "warning",
+          subject,
+          message: `The run carries universe ${line.universe} but ${elsewhere.map((u) => `unit ${u.label} (universe ${u.universe})`).join(", ")} ${elsewhere.length === 1 ? "is" : "are"} patched to another universe.`,
+          fixtureIds: elsewhere.map((u) => u.id),
+        });
     }
-    return { id: line.id, name: line.name, universe: line.universe, devices: units.length, overLimit, lastDevice: last ? `unit ${last.label}` : null };
+    return {
+      id: line.id,
+      name: line.name,
+      universe: line.universe,
+      devices: units.length,
+      overLimit,
+      lastDevice: last ? `unit ${last.label}` : null,
+    };
   });
   return { results, findings };
 }
 
 /** The whole DMX check. `cueChannels` are the control channels the cues use. */
-export function checkDmx(input: { fixtures: CheckFixture[]; accessories: CheckAccessory[]; dataLines: DataLineInput[]; cueChannels: number[] }): DmxResult {
+export function checkDmx(input: {
+  fixtures: CheckFixture[];
+  accessories: CheckAccessory[];
+  dataLines: DataLineInput[];
+  cueChannels: number[];
+}): DmxResult {
   const findings: Finding[] = [];
   const byId = new Map(input.fixtures.map((f) => [f.id, f]));
   const devices: Device[] = [];
@@ -176,19 +226,38 @@ export function checkDmx(input: { fixtures: CheckFixture[]; accessories: CheckAc
     if (!d) return;
     const subject = d.label.charAt(0).toUpperCase() + d.label.slice(1);
     if (!Number.isInteger(d.universe) || d.universe < 1 || d.universe > MAX_UNIVERSE) {
-      findings.push({ area: "dmx", severity: "error", subject, message: `Universe ${d.universe} is outside 1–${MAX_UNIVERSE}.`, fixtureIds: [d.fixtureId] });
+      findings.push({
+        area: "dmx",
+        severity: "error",
+        subject,
+        message: `Universe ${d.universe} is outside 1–${MAX_UNIVERSE}.`,
+        fixtureIds: [d.fixtureId],
+      });
       return;
     }
     if (!fitsUniverse(d.start, d.footprint)) {
       const end = d.start + d.footprint - 1;
-      findings.push({ area: "dmx", severity: "error", subject, message: `Address ${d.start} with a footprint of ${d.footprint} slots runs to slot ${end}: a universe has slots 1–${SLOTS_PER_UNIVERSE}, and a unit may not straddle two.`, fixtureIds: [d.fixtureId] });
+      findings.push({
+        area: "dmx",
+        severity: "error",
+        subject,
+        message: `Address ${d.start} with a footprint of ${d.footprint} slots runs to slot ${end}: a universe has slots 1–${SLOTS_PER_UNIVERSE}, and a unit may not straddle two.`,
+        fixtureIds: [d.fixtureId],
+      });
     }
     devices.push(d);
   };
 
   for (const f of input.fixtures) {
     if (f.universe == null || f.address == null) unpatched.push({ id: f.id, label: f.label });
-    else if (f.footprint == null) findings.push({ area: "dmx", severity: "warning", subject: `Unit ${f.label}`, message: "Patched, but its footprint is not known (no DMX mode chosen): not counted on the universe map.", fixtureIds: [f.id] });
+    else if (f.footprint == null)
+      findings.push({
+        area: "dmx",
+        severity: "warning",
+        subject: `Unit ${f.label}`,
+        message: "Patched, but its footprint is not known (no DMX mode chosen): not counted on the universe map.",
+        fixtureIds: [f.id],
+      });
     admit(fixtureDevice(f));
   }
   for (const a of input.accessories) admit(accessoryDevice(a, byId.get(a.fixtureId)));
@@ -207,13 +276,39 @@ export function checkDmx(input: { fixtures: CheckFixture[]; accessories: CheckAc
   }
   const shared = claims
     .filter((c) => c.members.length > 1)
-    .map((c) => ({ universe: c.universe, address: c.start, labels: c.members.map((m) => m.label), fixtureIds: c.members.map((m) => m.fixtureId), why: c.members[0].why }));
-  if (unpatched.length) findings.push({ area: "dmx", severity: "info", subject: "Unpatched", message: `${unpatched.length} unit${unpatched.length === 1 ? " has" : "s have"} no universe and address.`, fixtureIds: unpatched.map((u) => u.id) });
+    .map((c) => ({
+      universe: c.universe,
+      address: c.start,
+      labels: c.members.map((m) => m.label),
+      fixtureIds: c.members.map((m) => m.fixtureId),
+      why: c.members[0].why,
+    }));
+  if (unpatched.length)
+    findings.push({
+      area: "dmx",
+      severity: "info",
+      subject: "Unpatched",
+      message: `${unpatched.length} unit${unpatched.length === 1 ? " has" : "s have"} no universe and address.`,
+      fixtureIds: unpatched.map((u) => u.id),
+    });
 
   const channels = new Set(input.fixtures.map((f) => f.channel).filter((c): c is number => c != null));
   const channelsWithoutFixture = [...new Set(input.cueChannels)].filter((c) => !channels.has(c)).sort((a, b) => a - b);
-  if (channelsWithoutFixture.length) findings.push({ area: "dmx", severity: "warning", subject: "Channels", message: `The cues use channel${channelsWithoutFixture.length === 1 ? "" : "s"} ${channelsWithoutFixture.slice(0, 20).join(", ")}${channelsWithoutFixture.length > 20 ? " …" : ""} with no fixture.` });
+  if (channelsWithoutFixture.length)
+    findings.push({
+      area: "dmx",
+      severity: "warning",
+      subject: "Channels",
+      message: `The cues use channel${channelsWithoutFixture.length === 1 ? "" : "s"} ${channelsWithoutFixture.slice(0, 20).join(", ")}${channelsWithoutFixture.length > 20 ? " …" : ""} with no fixture.`,
+    });
 
   const lines = checkDataLines(input.dataLines, byId);
-  return { universes: universeMaps(claims, conflicts), shared, unpatched, channelsWithoutFixture, dataLines: lines.results, findings: [...findings, ...lines.findings] };
+  return {
+    universes: universeMaps(claims, conflicts),
+    shared,
+    unpatched,
+    channelsWithoutFixture,
+    dataLines: lines.results,
+    findings: [...findings, ...lines.findings],
+  };
 }

@@ -91,7 +91,8 @@ export function effectiveElectrical(s: ElectricalSettings): EffectiveElectrical 
     phases: supply.phases,
     voltage: supply.lineToNeutral ?? s.voltage,
     derating,
-    deratingSource: s.derating != null ? "set for this production" : derating != null ? `the default of ${code.label}` : "none set",
+    deratingSource:
+      s.derating != null ? "set for this production" : derating != null ? `the default of ${code.label}` : "none set",
   };
 }
 

@@ -2,7 +2,13 @@
 import { checkDmx, type DataLineInput, type DmxResult } from "./dmx";
 import type { EffectiveElectrical } from "./electrical";
 import { checkPower, type CheckCircuit, type PowerResult } from "./power";
-import { checkRigging, type CheckPosition, type RiggingFixture, type RiggingResult, type RiggingSettings } from "./rigging";
+import {
+  checkRigging,
+  type CheckPosition,
+  type RiggingFixture,
+  type RiggingResult,
+  type RiggingSettings,
+} from "./rigging";
 import type { CheckAccessory, Finding, Severity } from "./types";
 
 export type ChecksInput = {
@@ -33,14 +39,28 @@ export function runChecks(input: ChecksInput): ChecksResult {
   const dmx = checkDmx(input);
   const power = checkPower(input);
   const rigging = checkRigging({ ...input, settings: input.rigging });
-  const findings = [...dmx.findings, ...power.findings, ...rigging.findings].sort((a, b) => RANK[a.severity] - RANK[b.severity]);
+  const findings = [...dmx.findings, ...power.findings, ...rigging.findings].sort(
+    (a, b) => RANK[a.severity] - RANK[b.severity],
+  );
   const fixtureSeverity: Record<number, "error" | "warning"> = {};
   for (const f of findings) {
     if (f.severity === "info") continue;
     for (const id of f.fixtureIds ?? []) if (fixtureSeverity[id] !== "error") fixtureSeverity[id] = f.severity;
   }
   const count = (s: Severity) => findings.filter((f) => f.severity === s).length;
-  return { dmx, power, rigging, findings, summary: { errors: count("error"), warnings: count("warning"), infos: count("info"), fixtures: input.fixtures.length }, fixtureSeverity };
+  return {
+    dmx,
+    power,
+    rigging,
+    findings,
+    summary: {
+      errors: count("error"),
+      warnings: count("warning"),
+      infos: count("info"),
+      fixtures: input.fixtures.length,
+    },
+    fixtureSeverity,
+  };
 }
 
 export * from "./beams";

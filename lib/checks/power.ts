@@ -91,7 +91,11 @@ function phaseTotals(circuits: CircuitLoad[], names: string[]) {
   return { phases, imbalance, linearNeutralA: phases.length > 1 ? linearNeutral(currents) : null };
 }
 
-export function checkPower(input: { fixtures: CheckFixture[]; circuits: CheckCircuit[]; electrical: EffectiveElectrical }): PowerResult {
+export function checkPower(input: {
+  fixtures: CheckFixture[];
+  circuits: CheckCircuit[];
+  electrical: EffectiveElectrical;
+}): PowerResult {
   const e = input.electrical;
   const findings: Finding[] = [];
   if (!(e.voltage > 0)) throw new RangeError("The supply voltage must be above 0 V.");
@@ -110,7 +114,13 @@ export function checkPower(input: { fixtures: CheckFixture[]; circuits: CheckCir
     }
     const circuit = byName.get(norm(ref));
     if (!circuit) {
-      findings.push({ area: "power", severity: "warning", subject: `Unit ${f.label}`, message: `Circuit "${ref}" is not in the circuit list: its load is not checked. Add the circuit with its rating.`, fixtureIds: [f.id] });
+      findings.push({
+        area: "power",
+        severity: "warning",
+        subject: `Unit ${f.label}`,
+        message: `Circuit "${ref}" is not in the circuit list: its load is not checked. Add the circuit with its rating.`,
+        fixtureIds: [f.id],
+      });
       continue;
     }
     members.get(circuit.id)!.push(f);
@@ -127,16 +137,40 @@ export function checkPower(input: { fixtures: CheckFixture[]; circuits: CheckCir
     const ids = units.map((u) => u.id);
     const fmt = (n: number) => n.toFixed(1);
     if (status === "over-rating") {
-      findings.push({ area: "power", severity: "error", subject, message: `${fmt(a)} A on a ${c.ratingA} A circuit (${Math.round(loadVA)} W at ${e.voltage} V): over its rating.`, fixtureIds: ids });
+      findings.push({
+        area: "power",
+        severity: "error",
+        subject,
+        message: `${fmt(a)} A on a ${c.ratingA} A circuit (${Math.round(loadVA)} W at ${e.voltage} V): over its rating.`,
+        fixtureIds: ids,
+      });
     } else if (status === "over-continuous") {
-      findings.push({ area: "power", severity: "warning", subject, message: `${fmt(a)} A is over the continuous-load limit of ${fmt(c.ratingA * (e.derating as number))} A (${Math.round((e.derating as number) * 100)} % of ${c.ratingA} A).`, fixtureIds: ids });
+      findings.push({
+        area: "power",
+        severity: "warning",
+        subject,
+        message: `${fmt(a)} A is over the continuous-load limit of ${fmt(c.ratingA * (e.derating as number))} A (${Math.round((e.derating as number) * 100)} % of ${c.ratingA} A).`,
+        fixtureIds: ids,
+      });
     }
     if (c.dimmed && switchMode.length) {
-      findings.push({ area: "power", severity: "error", subject, message: `${switchMode.map((u) => `Unit ${u.label}`).join(", ")} ${switchMode.length === 1 ? "has" : "have"} an electronic supply on a dimmed circuit: set that dimmer to non-dim or use a constant-power circuit. A dimmer can damage the unit's power supply.`, fixtureIds: switchMode.map((u) => u.id) });
+      findings.push({
+        area: "power",
+        severity: "error",
+        subject,
+        message: `${switchMode.map((u) => `Unit ${u.label}`).join(", ")} ${switchMode.length === 1 ? "has" : "have"} an electronic supply on a dimmed circuit: set that dimmer to non-dim or use a constant-power circuit. A dimmer can damage the unit's power supply.`,
+        fixtureIds: switchMode.map((u) => u.id),
+      });
     }
     const missing = units.filter((u) => u.wattage == null);
     if (missing.length) {
-      findings.push({ area: "power", severity: "warning", subject, message: `${missing.length} unit${missing.length === 1 ? "" : "s"} with no wattage not counted: the total is incomplete.`, fixtureIds: missing.map((u) => u.id) });
+      findings.push({
+        area: "power",
+        severity: "warning",
+        subject,
+        message: `${missing.length} unit${missing.length === 1 ? "" : "s"} with no wattage not counted: the total is incomplete.`,
+        fixtureIds: missing.map((u) => u.id),
+      });
     }
     return {
       id: c.id,
@@ -158,15 +192,42 @@ export function checkPower(input: { fixtures: CheckFixture[]; circuits: CheckCir
 
   const phaseNames = supplyPhases(e, input.circuits);
   if (phaseNames.length > 1) {
-    const unphased = circuits.filter((c) => c.phase == null || !phaseNames.some((p) => norm(p) === norm(c.phase as string)));
-    if (unphased.length) findings.push({ area: "power", severity: "warning", subject: "Phases", message: `${unphased.length} circuit${unphased.length === 1 ? " has" : "s have"} no phase of this supply (${phaseNames.join(", ")}): left out of the phase totals.` });
+    const unphased = circuits.filter(
+      (c) => c.phase == null || !phaseNames.some((p) => norm(p) === norm(c.phase as string)),
+    );
+    if (unphased.length)
+      findings.push({
+        area: "power",
+        severity: "warning",
+        subject: "Phases",
+        message: `${unphased.length} circuit${unphased.length === 1 ? " has" : "s have"} no phase of this supply (${phaseNames.join(", ")}): left out of the phase totals.`,
+      });
   }
   const totals = phaseTotals(circuits, phaseNames);
   if (totals.imbalance != null && totals.imbalance > IMBALANCE_WARNING) {
-    findings.push({ area: "power", severity: "warning", subject: "Phases", message: `The phases are ${Math.round(totals.imbalance * 100)} % out of balance (largest vs smallest phase current): move circuits to even them out.` });
+    findings.push({
+      area: "power",
+      severity: "warning",
+      subject: "Phases",
+      message: `The phases are ${Math.round(totals.imbalance * 100)} % out of balance (largest vs smallest phase current): move circuits to even them out.`,
+    });
   }
-  if (notCounted.length) findings.push({ area: "power", severity: "warning", subject: "Wattage", message: `${notCounted.length} unit${notCounted.length === 1 ? " has" : "s have"} no wattage and ${notCounted.length === 1 ? "is" : "are"} not counted: the totals are incomplete.`, fixtureIds: notCounted.map((u) => u.id) });
-  if (notOnCircuit.length) findings.push({ area: "power", severity: "info", subject: "Circuits", message: `${notOnCircuit.length} unit${notOnCircuit.length === 1 ? " is" : "s are"} on no circuit or dimmer.`, fixtureIds: notOnCircuit.map((u) => u.id) });
+  if (notCounted.length)
+    findings.push({
+      area: "power",
+      severity: "warning",
+      subject: "Wattage",
+      message: `${notCounted.length} unit${notCounted.length === 1 ? " has" : "s have"} no wattage and ${notCounted.length === 1 ? "is" : "are"} not counted: the totals are incomplete.`,
+      fixtureIds: notCounted.map((u) => u.id),
+    });
+  if (notOnCircuit.length)
+    findings.push({
+      area: "power",
+      severity: "info",
+      subject: "Circuits",
+      message: `${notOnCircuit.length} unit${notOnCircuit.length === 1 ? " is" : "s are"} on no circuit or dimmer.`,
+      fixtureIds: notOnCircuit.map((u) => u.id),
+    });
   return {
     electrical: e,
     circuits,

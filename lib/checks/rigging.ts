@@ -42,7 +42,12 @@ export type PositionLoad = {
   arborAddKg: number | null;
   notCounted: string[];
 };
-export type RiggingResult = { positions: PositionLoad[]; totalKg: number; notCounted: { id: number; label: string }[]; findings: Finding[] };
+export type RiggingResult = {
+  positions: PositionLoad[];
+  totalKg: number;
+  notCounted: { id: number; label: string }[];
+  findings: Finding[];
+};
 
 /** A fixture with where it hangs along its position (metres from the first end), if known. */
 export type RiggingFixture = CheckFixture & { alongM: number | null };
@@ -66,7 +71,13 @@ function bodies(fixtures: RiggingFixture[]): RiggingFixture[] {
   });
 }
 
-function positionLoad(p: CheckPosition, units: RiggingFixture[], accessoriesOf: Map<number, CheckAccessory[]>, s: RiggingSettings, findings: Finding[]): PositionLoad {
+function positionLoad(
+  p: CheckPosition,
+  units: RiggingFixture[],
+  accessoriesOf: Map<number, CheckAccessory[]>,
+  s: RiggingSettings,
+  findings: Finding[],
+): PositionLoad {
   const subject = p.name;
   const counted = units.filter((u) => u.weightKg != null);
   const missing = units.filter((u) => u.weightKg == null);
@@ -81,42 +92,112 @@ function positionLoad(p: CheckPosition, units: RiggingFixture[], accessoriesOf: 
   const fraction = status === "no-rating" ? null : totalKg / (p.ratedLoadKg as number);
   const ids = units.map((u) => u.id);
   const pct = (f: number) => `${Math.round(f * 100)} %`;
-  if (status === "over") findings.push({ area: "rigging", severity: "error", subject, message: `${totalKg.toFixed(1)} kg is ${pct(fraction!)} of its rated load of ${p.ratedLoadKg} kg: over the rating.`, fixtureIds: ids });
-  else if (status === "near") findings.push({ area: "rigging", severity: "warning", subject, message: `${totalKg.toFixed(1)} kg is ${pct(fraction!)} of its rated load of ${p.ratedLoadKg} kg: close to the rating.`, fixtureIds: ids });
-  else if (status === "no-rating" && units.length) findings.push({ area: "rigging", severity: "info", subject, message: `No rated load entered: ${totalKg.toFixed(1)} kg not compared with anything.` });
-  const notCounted = [...missing.map((u) => `unit ${u.label}`), ...missingAcc.map((a) => `${a.kind} on unit ${units.find((u) => u.id === a.fixtureId)?.label ?? "?"}`)];
-  if (notCounted.length) findings.push({ area: "rigging", severity: "warning", subject, message: `No weight entered for ${notCounted.join(", ")}: not counted, the total is incomplete.`, fixtureIds: [...missing.map((u) => u.id), ...missingAcc.map((a) => a.fixtureId)] });
+  if (status === "over")
+    findings.push({
+      area: "rigging",
+      severity: "error",
+      subject,
+      message: `${totalKg.toFixed(1)} kg is ${pct(fraction!)} of its rated load of ${p.ratedLoadKg} kg: over the rating.`,
+      fixtureIds: ids,
+    });
+  else if (status === "near")
+    findings.push({
+      area: "rigging",
+      severity: "warning",
+      subject,
+      message: `${totalKg.toFixed(1)} kg is ${pct(fraction!)} of its rated load of ${p.ratedLoadKg} kg: close to the rating.`,
+      fixtureIds: ids,
+    });
+  else if (status === "no-rating" && units.length)
+    findings.push({
+      area: "rigging",
+      severity: "info",
+      subject,
+      message: `No rated load entered: ${totalKg.toFixed(1)} kg not compared with anything.`,
+    });
+  const notCounted = [
+    ...missing.map((u) => `unit ${u.label}`),
+    ...missingAcc.map((a) => `${a.kind} on unit ${units.find((u) => u.id === a.fixtureId)?.label ?? "?"}`),
+  ];
+  if (notCounted.length)
+    findings.push({
+      area: "rigging",
+      severity: "warning",
+      subject,
+      message: `No weight entered for ${notCounted.join(", ")}: not counted, the total is incomplete.`,
+      fixtureIds: [...missing.map((u) => u.id), ...missingAcc.map((a) => a.fixtureId)],
+    });
 
   let bendingEquivalentKg: number | null = null;
   let liftLineKg: number[] | null = null;
   if (p.lengthM != null && p.lengthM > 0) {
     // Units of unknown place along the pipe are put at mid-span, where they bend it most.
-    const points: PointLoad[] = counted.map((u) => ({ at: u.alongM ?? p.lengthM! / 2, kg: (u.weightKg as number) + s.hardwareKgPerUnit + (accessoriesOf.get(u.id) ?? []).reduce((a, x) => a + (x.weightKg ?? 0), 0) }));
+    const points: PointLoad[] = counted.map((u) => ({
+      at: u.alongM ?? p.lengthM! / 2,
+      kg:
+        (u.weightKg as number) +
+        s.hardwareKgPerUnit +
+        (accessoriesOf.get(u.id) ?? []).reduce((a, x) => a + (x.weightKg ?? 0), 0),
+    }));
     bendingEquivalentKg = uniformEquivalent(p.lengthM, points, cableKg).equivalentKg;
     if (p.ratedLoadKg != null && p.ratedLoadKg > 0 && bendingEquivalentKg > p.ratedLoadKg && status !== "over") {
-      findings.push({ area: "rigging", severity: "warning", subject, message: `Its units bend the pipe as much as ${bendingEquivalentKg.toFixed(1)} kg spread evenly would (heavy units near mid-span count up to twice): more than the rated ${p.ratedLoadKg} kg if that is a distributed-load rating.`, fixtureIds: ids });
+      findings.push({
+        area: "rigging",
+        severity: "warning",
+        subject,
+        message: `Its units bend the pipe as much as ${bendingEquivalentKg.toFixed(1)} kg spread evenly would (heavy units near mid-span count up to twice): more than the rated ${p.ratedLoadKg} kg if that is a distributed-load rating.`,
+        fixtureIds: ids,
+      });
     }
-    if (p.liftLines != null && p.liftLines >= 2) liftLineKg = liftLineShares(p.liftLines).map((share) => share * totalKg);
+    if (p.liftLines != null && p.liftLines >= 2)
+      liftLineKg = liftLineShares(p.liftLines).map((share) => share * totalKg);
   }
   const arborAddKg = p.counterweighted ? totalKg : null;
   if (arborAddKg != null && arborAddKg > 0) {
-    findings.push({ area: "rigging", severity: "info", subject, message: `Counterweight set: add about ${arborAddKg.toFixed(1)} kg to the arbor for this load (set balanced with the bare pipe). Never release an out-of-weight set; load and unload pipe and arbor in the order your venue's procedure says.` });
+    findings.push({
+      area: "rigging",
+      severity: "info",
+      subject,
+      message: `Counterweight set: add about ${arborAddKg.toFixed(1)} kg to the arbor for this load (set balanced with the bare pipe). Never release an out-of-weight set; load and unload pipe and arbor in the order your venue's procedure says.`,
+    });
   }
   return {
-    id: p.id, name: p.name, kind: p.kind, units: units.length, fixturesKg, accessoriesKg, cableKg, hardwareKg, totalKg,
-    ratedLoadKg: p.ratedLoadKg, fraction, status,
-    bendingEquivalentKg, bendingFraction: bendingEquivalentKg != null && p.ratedLoadKg ? bendingEquivalentKg / p.ratedLoadKg : null,
-    liftLineKg, arborAddKg, notCounted,
+    id: p.id,
+    name: p.name,
+    kind: p.kind,
+    units: units.length,
+    fixturesKg,
+    accessoriesKg,
+    cableKg,
+    hardwareKg,
+    totalKg,
+    ratedLoadKg: p.ratedLoadKg,
+    fraction,
+    status,
+    bendingEquivalentKg,
+    bendingFraction: bendingEquivalentKg != null && p.ratedLoadKg ? bendingEquivalentKg / p.ratedLoadKg : null,
+    liftLineKg,
+    arborAddKg,
+    notCounted,
   };
 }
 
-export function checkRigging(input: { positions: CheckPosition[]; fixtures: RiggingFixture[]; accessories: CheckAccessory[]; settings: RiggingSettings }): RiggingResult {
+export function checkRigging(input: {
+  positions: CheckPosition[];
+  fixtures: RiggingFixture[];
+  accessories: CheckAccessory[];
+  settings: RiggingSettings;
+}): RiggingResult {
   const findings: Finding[] = [];
   const byPosition = new Map<number, RiggingFixture[]>(input.positions.map((p) => [p.id, []]));
   for (const f of bodies(input.fixtures)) byPosition.get(f.positionId)?.push(f);
   const accessoriesOf = new Map<number, CheckAccessory[]>();
   for (const a of input.accessories) accessoriesOf.set(a.fixtureId, [...(accessoriesOf.get(a.fixtureId) ?? []), a]);
-  const positions = input.positions.map((p) => positionLoad(p, byPosition.get(p.id)!, accessoriesOf, input.settings, findings));
-  const notCounted = bodies(input.fixtures).filter((f) => f.weightKg == null).map((f) => ({ id: f.id, label: f.label }));
+  const positions = input.positions.map((p) =>
+    positionLoad(p, byPosition.get(p.id)!, accessoriesOf, input.settings, findings),
+  );
+  const notCounted = bodies(input.fixtures)
+    .filter((f) => f.weightKg == null)
+    .map((f) => ({ id: f.id, label: f.label }));
   return { positions, totalKg: positions.reduce((s, p) => s + p.totalKg, 0), notCounted, findings };
 }

@@ -67,14 +67,19 @@ export function planRenumber(
   if (!inside.length) throw new RangeError(`No cues between ${formatCueNumber(from)} and ${formatCueNumber(to)}`);
   const moves = inside.map((c, i) => ({ id: c.id, from: c.number, to: (cueKey(start) + i * cueKey(step)) / 1000 }));
   const last = moves[moves.length - 1].to;
-  if (cueKey(moves[0].to) <= 0 || last > MAX_CUE_NUMBER) throw new RangeError("The new numbers must stay between 0.001 and 9999999.999");
+  if (cueKey(moves[0].to) <= 0 || last > MAX_CUE_NUMBER)
+    throw new RangeError("The new numbers must stay between 0.001 and 9999999.999");
   const prev = sorted.filter((c) => cueKey(c.number) < cueKey(from)).at(-1);
   const next = sorted.find((c) => cueKey(c.number) > cueKey(to));
   if (prev && cueKey(moves[0].to) <= cueKey(prev.number)) {
-    throw new RangeError(`The new numbers would start at or before cue ${formatCueNumber(prev.number)}, which comes before the range`);
+    throw new RangeError(
+      `The new numbers would start at or before cue ${formatCueNumber(prev.number)}, which comes before the range`,
+    );
   }
   if (next && cueKey(last) >= cueKey(next.number)) {
-    throw new RangeError(`The new numbers would reach cue ${formatCueNumber(next.number)}, which follows the range (last new number ${formatCueNumber(last)})`);
+    throw new RangeError(
+      `The new numbers would reach cue ${formatCueNumber(next.number)}, which follows the range (last new number ${formatCueNumber(last)})`,
+    );
   }
   return { moves };
 }

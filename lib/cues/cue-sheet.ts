@@ -39,7 +39,10 @@ export type SheetFacts = {
   loopsTo: number | null;
 };
 
-export function buildCueSheet<C extends SheetCue>(input: readonly C[], info: ChannelInfo): { rows: Array<C & SheetFacts>; standbys: StandbyGroup[]; show: TrackedShow } {
+export function buildCueSheet<C extends SheetCue>(
+  input: readonly C[],
+  info: ChannelInfo,
+): { rows: Array<C & SheetFacts>; standbys: StandbyGroup[]; show: TrackedShow } {
   const cues = [...input].sort((a, b) => compareCueNumbers(a.number, b.number));
   const show = computeTracking(cues);
   const order = runningOrder(cues);
@@ -66,6 +69,9 @@ export function buildCueSheet<C extends SheetCue>(input: readonly C[], info: Cha
   const ran = order.steps.map((st) => facts(st.index, st.from, true, st.linked));
   // A cue nobody reaches is still shown, read as if it ran after the cue numbered before it.
   const skipped = order.unreached.map((i) => facts(i, i - 1, false, false));
-  const standbys = [...groupStandbys(ran), ...skipped.map((r) => ({ cueIds: [r.id], label: groupStandbys([r])[0].label }))];
+  const standbys = [
+    ...groupStandbys(ran),
+    ...skipped.map((r) => ({ cueIds: [r.id], label: groupStandbys([r])[0].label })),
+  ];
   return { rows: [...ran, ...skipped], standbys, show };
 }

@@ -9,7 +9,10 @@ export function parseFadeTime(text: string, what = "Time"): number {
   const hint = "use seconds such as 5 or 5.5, or minutes:seconds such as 1:30";
   if (!t) throw new RangeError(`${what} is empty: ${hint}`);
   const parts = t.split(":");
-  if (parts.length > 3 || !parts.every((p, i) => (i === parts.length - 1 ? /^\d+(\.\d+)?$|^\.\d+$/ : /^\d+$/).test(p))) {
+  if (
+    parts.length > 3 ||
+    !parts.every((p, i) => (i === parts.length - 1 ? /^\d+(\.\d+)?$|^\.\d+$/ : /^\d+$/).test(p))
+  ) {
     throw new RangeError(`${what} "${t}" is not a time: ${hint}`);
   }
   const nums = parts.map(Number);

@@ -6,9 +6,7 @@
 //   cue 12.5     go to cue 12.5, creating it when it does not exist
 import { parseCueNumber } from "./cue-number";
 
-export type Entry =
-  | { kind: "levels"; channels: number[]; level: number | null }
-  | { kind: "cue"; number: number };
+export type Entry = { kind: "levels"; channels: number[]; level: number | null } | { kind: "cue"; number: number };
 
 export const MAX_CHANNELS_PER_ENTRY = 2000;
 
@@ -21,7 +19,8 @@ export function parseChannels(text: string): number[] {
     const a = Number(m[1]);
     const b = m[2] ? Number(m[2]) : a;
     if (a < 1 || b < 1) throw new RangeError("Channels start at 1");
-    if (Math.abs(b - a) >= MAX_CHANNELS_PER_ENTRY) throw new RangeError(`At most ${MAX_CHANNELS_PER_ENTRY} channels at once`);
+    if (Math.abs(b - a) >= MAX_CHANNELS_PER_ENTRY)
+      throw new RangeError(`At most ${MAX_CHANNELS_PER_ENTRY} channels at once`);
     for (let ch = Math.min(a, b); ch <= Math.max(a, b); ch++) out.add(ch);
   }
   return [...out].sort((x, y) => x - y);
@@ -32,7 +31,8 @@ function parseLevel(text: string): number | null {
   if (t === "full" || t === "fl") return 100;
   if (t === "out") return 0;
   if (t === "track") return null;
-  if (!/^-?\d+(\.\d+)?%?$/.test(t)) throw new RangeError(`"${text.trim()}" is not a level: type 0–100, full, out or track`);
+  if (!/^-?\d+(\.\d+)?%?$/.test(t))
+    throw new RangeError(`"${text.trim()}" is not a level: type 0–100, full, out or track`);
   const n = Number(t.replace("%", ""));
   if (n < 0 || n > 100) throw new RangeError(`Level ${n} is outside 0–100`);
   return Math.round(n);

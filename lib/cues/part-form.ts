@@ -36,7 +36,8 @@ export function readPartDrafts(drafts: readonly PartDraft[]): { parts: CuePart[]
   for (const d of drafts) {
     const at = (field: string) => `part-${d.key}-${field}`;
     const partNo = Number(d.part.trim());
-    if (!/^\d+$/.test(d.part.trim()) || partNo < 1 || partNo > MAX_PARTS) errors[at("part")] = `A part number from 1 to ${MAX_PARTS}`;
+    if (!/^\d+$/.test(d.part.trim()) || partNo < 1 || partNo > MAX_PARTS)
+      errors[at("part")] = `A part number from 1 to ${MAX_PARTS}`;
     let time = { up: 0, down: null as number | null };
     try {
       time = parseSplitTime(d.time);

@@ -53,7 +53,12 @@ function lit(cols: number[], show: TrackedShow, info: ChannelInfo): string[] {
  * One line for the cue at `index`, e.g. "4 up, 2 down · brighter: Area 2, front light · darker: cyc".
  * `from` is the cue that runs before it (-1: from dark); by default the one numbered before.
  */
-export function summarizeCue(show: TrackedShow, index: number, info: ChannelInfo, from = index - 1): { up: number; down: number; changed: number[]; text: string } {
+export function summarizeCue(
+  show: TrackedShow,
+  index: number,
+  info: ChannelInfo,
+  from = index - 1,
+): { up: number; down: number; changed: number[]; text: string } {
   const { up, down, changed } = countMoves(show, index, from);
   if (!changed.length) return { up, down, changed, text: "no level changes" };
   const now = show.states[index];
@@ -99,10 +104,13 @@ export function groupStandbys(
     const nums = g.cues.map((c) => formatCueNumber(c.number));
     const jumps = g.cues.slice(1).some((c) => c.linked);
     const label =
-      nums.length === 1 ? nums[0]
-      : nums.length === 2 ? `${nums[0]} and ${nums[1]}`
-      : jumps ? `${nums.slice(0, -1).join(", ")} and ${nums.at(-1)}`
-      : `${nums[0]} to ${nums.at(-1)} (${nums.length} cues)`;
+      nums.length === 1
+        ? nums[0]
+        : nums.length === 2
+          ? `${nums[0]} and ${nums[1]}`
+          : jumps
+            ? `${nums.slice(0, -1).join(", ")} and ${nums.at(-1)}`
+            : `${nums[0]} to ${nums.at(-1)} (${nums.length} cues)`;
     return { cueIds: g.cues.map((c) => c.id), label };
   });
 }

@@ -8,12 +8,29 @@ import type { CueFields, CuePart } from "./types";
 
 export type CueTableRow = CueFields & { runningTime: number; summary: string };
 
-export const CUE_TABLE_COLUMNS = ["Cue", "Label", "Page", "Up (s)", "Down (s)", "Delay (s)", "Follow (s)", "Link", "Block", "Running time", "What changes", "Parts", "Call note"] as const;
+export const CUE_TABLE_COLUMNS = [
+  "Cue",
+  "Label",
+  "Page",
+  "Up (s)",
+  "Down (s)",
+  "Delay (s)",
+  "Follow (s)",
+  "Link",
+  "Block",
+  "Running time",
+  "What changes",
+  "Parts",
+  "Call note",
+] as const;
 
 /** "part 2 (specials) 3/5 wait 1: ch 1-4, 9" for each part, separated by "; ". */
 export function describeParts(parts: readonly CuePart[]): string {
   return parts
-    .map((p) => `part ${p.part}${p.label ? ` (${p.label})` : ""} ${formatSplitTime(p.upTime, p.downTime)}${p.delay ? ` wait ${formatFadeTime(p.delay)}` : ""}: ch ${formatChannels(p.channels) || "none"}`)
+    .map(
+      (p) =>
+        `part ${p.part}${p.label ? ` (${p.label})` : ""} ${formatSplitTime(p.upTime, p.downTime)}${p.delay ? ` wait ${formatFadeTime(p.delay)}` : ""}: ch ${formatChannels(p.channels) || "none"}`,
+    )
     .join("; ");
 }
 

@@ -99,7 +99,11 @@ export function classifyMoves(show: TrackedShow, index: number): ChannelMove[] {
  * Counts of each kind in a cue, cheaper than classifyMoves when only the numbers are needed.
  * `from` is the cue that ran before it (running order, which a link can change); -1 means dark.
  */
-export function countMoves(show: TrackedShow, index: number, from = index - 1): { up: number; down: number; changed: number[] } {
+export function countMoves(
+  show: TrackedShow,
+  index: number,
+  from = index - 1,
+): { up: number; down: number; changed: number[] } {
   const now = show.states[index];
   const before = from >= 0 ? show.states[from] : null;
   let up = 0;
@@ -120,7 +124,10 @@ export function countMoves(show: TrackedShow, index: number, from = index - 1): 
  * (used by import of full states and by "copy a cue's levels"). Channels already at the target
  * level are left to track.
  */
-export function movesToReach(before: ReadonlyMap<number, number>, target: ReadonlyMap<number, number>): Record<number, number> {
+export function movesToReach(
+  before: ReadonlyMap<number, number>,
+  target: ReadonlyMap<number, number>,
+): Record<number, number> {
   const moves: Record<number, number> = {};
   for (const [ch, level] of target) if ((before.get(ch) ?? 0) !== level) moves[ch] = level;
   for (const [ch, level] of before) if (level !== 0 && !target.has(ch)) moves[ch] = 0;

@@ -38,9 +38,12 @@ export function readPatchArgs(args: readonly string[]): { entries: PatchEntry[] 
   for (let k = 0; k < triples.length; k += 3) {
     const channel = Number(triples[k]);
     const absolute = Number(triples[k + 1]);
-    if (!Number.isInteger(channel) || channel < 1 || channel > 99_999) return { error: `PATCH: "${triples[k]}" is not a channel number (1–99999)` };
+    if (!Number.isInteger(channel) || channel < 1 || channel > 99_999)
+      return { error: `PATCH: "${triples[k]}" is not a channel number (1–99999)` };
     if (!Number.isInteger(absolute) || absolute < 1 || absolute > MAX_ABSOLUTE_ADDRESS) {
-      return { error: `PATCH: address ${triples[k + 1]} for channel ${channel} is not a DMX address (1 to ${MAX_ABSOLUTE_ADDRESS.toLocaleString("en-GB")} counted across universes)` };
+      return {
+        error: `PATCH: address ${triples[k + 1]} for channel ${channel} is not a DMX address (1 to ${MAX_ABSOLUTE_ADDRESS.toLocaleString("en-GB")} counted across universes)`,
+      };
     }
     entries.push({ channel, ...fromAbsolute(absolute) });
   }
@@ -55,6 +58,9 @@ const csvCell = (v: string | number) => {
 /** The patch as CSV with a header row, CR LF line ends, sorted by channel. */
 export function patchToCsv(patch: readonly PatchEntry[]): string {
   const rows = [...patch].sort((a, b) => a.channel - b.channel || absoluteAddress(a) - absoluteAddress(b));
-  const lines = [["Channel", "Universe", "Address", "Absolute address"], ...rows.map((e) => [e.channel, e.universe, e.address, absoluteAddress(e)])];
+  const lines = [
+    ["Channel", "Universe", "Address", "Absolute address"],
+    ...rows.map((e) => [e.channel, e.universe, e.address, absoluteAddress(e)]),
+  ];
   return lines.map((l) => l.map(csvCell).join(",")).join("\r\n") + "\r\n";
 }

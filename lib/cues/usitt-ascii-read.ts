@@ -52,11 +52,26 @@ export function parseAsciiLevel(token: string): number | null {
   return Number(t);
 }
 
-type OpenPart = { part: CuePart; text: string; fullText: string[]; downDelay: { value: number; line: number } | null; upDelaySet: boolean };
+type OpenPart = {
+  part: CuePart;
+  text: string;
+  fullText: string[];
+  downDelay: { value: number; line: number } | null;
+  upDelaySet: boolean;
+};
 /** Levels rounded to whole percentages while reading: how many, and the first. */
 type Rounding = { count: number; first: { line: number; token: string; stored: number } | null };
 type Open =
-  | { kind: "cue"; cue: CueWithMoves & { line: number }; text: string; fullText: string[]; note: string[]; page: string[]; part: OpenPart | null; parts: OpenPart[] }
+  | {
+      kind: "cue";
+      cue: CueWithMoves & { line: number };
+      text: string;
+      fullText: string[];
+      note: string[];
+      page: string[];
+      part: OpenPart | null;
+      parts: OpenPart[];
+    }
   | { kind: "other" }
   | null;
 
@@ -68,7 +83,11 @@ export function readUsittAscii(source: string): AsciiReadResult {
   const bareCr = source.search(/\r(?!\n)/);
   if (bareCr >= 0) {
     const line = source.slice(0, bareCr).split("\n").length;
-    errors.push({ line, message: "the file has a carriage return without a line feed, so its line ends are wrong (old Mac style?). Save it with CR LF or LF line ends." });
+    errors.push({
+      line,
+      message:
+        "the file has a carriage return without a line feed, so its line ends are wrong (old Mac style?). Save it with CR LF or LF line ends.",
+    });
     return result;
   }
   const lines = source.split(/\r?\n/);
@@ -85,23 +104,31 @@ export function readUsittAscii(source: string): AsciiReadResult {
     open.cue.label = (open.fullText.length ? unescapeText(open.fullText.join("")) : open.text).slice(0, 160);
     if (open.note.length) open.cue.callNote = unescapeText(open.note.join(""));
     if (open.page.length) open.cue.page = unescapeText(open.page.join("")).slice(0, 20);
-    for (const p of open.parts) p.part.label = (p.fullText.length ? unescapeText(p.fullText.join("")) : p.text).slice(0, 60);
+    for (const p of open.parts)
+      p.part.label = (p.fullText.length ? unescapeText(p.fullText.join("")) : p.text).slice(0, 60);
     // The same wait on both lines is the one delay of the cue; only a different down wait is its own.
     if (open.cue.downDelay === open.cue.delay) open.cue.downDelay = null;
     const cueName = formatCueNumber(open.cue.number);
     for (const p of open.parts) {
       if (p.downDelay && p.downDelay.value !== p.part.delay) {
-        notices.push({ line: p.downDelay.line, message: `part ${p.part.part} of cue ${cueName}: its down delay (${p.downDelay.value} s) differs from its up delay (${p.part.delay} s); a part keeps one wait, so it waits ${p.part.delay} s` });
+        notices.push({
+          line: p.downDelay.line,
+          message: `part ${p.part.part} of cue ${cueName}: its down delay (${p.downDelay.value} s) differs from its up delay (${p.part.delay} s); a part keeps one wait, so it waits ${p.part.delay} s`,
+        });
       }
     }
-    open.cue.parts = open.parts.map((p) => ({ ...p.part, channels: [...new Set(p.part.channels)].sort((a, b) => a - b) })).sort((a, b) => a.part - b.part);
-    for (const problem of checkParts(open.cue.parts)) fail(open.cue.line, `cue ${formatCueNumber(open.cue.number)}: ${problem}`);
+    open.cue.parts = open.parts
+      .map((p) => ({ ...p.part, channels: [...new Set(p.part.channels)].sort((a, b) => a - b) }))
+      .sort((a, b) => a.part - b.part);
+    for (const problem of checkParts(open.cue.parts))
+      fail(open.cue.line, `cue ${formatCueNumber(open.cue.number)}: ${problem}`);
   };
 
   for (let i = 0; i < lines.length && !ended; i++) {
     const n = i + 1;
     const raw = lines[i];
-    if (raw.length > ASCII_MAX_LINE) notices.push({ line: n, message: `longer than the standard's ${ASCII_MAX_LINE} characters; read anyway` });
+    if (raw.length > ASCII_MAX_LINE)
+      notices.push({ line: n, message: `longer than the standard's ${ASCII_MAX_LINE} characters; read anyway` });
     const trimmed = raw.trim();
     if (!trimmed || trimmed.startsWith("!")) continue;
     // Delimiters before the keyword are a run like any other: skipped (a line of only delimiters is blank).
@@ -111,12 +138,14 @@ export function readUsittAscii(source: string): AsciiReadResult {
     const restRaw = keywordMatch[2];
     const rest = restRaw.replace(/!.*$/, "").trim();
     const args = rest ? rest.split(DELIMITERS).filter(Boolean) : [];
-    if (firstInstruction && keyword !== "IDENT") notices.push({ line: n, message: "no IDENT line at the start; read as version 3.0" });
+    if (firstInstruction && keyword !== "IDENT")
+      notices.push({ line: n, message: "no IDENT line at the start; read as version 3.0" });
     firstInstruction = false;
 
     if (keyword.startsWith("$")) {
       if (open?.kind === "cue" && keyword === THROWLINE_KEYWORDS.note) open.note.push(restRaw);
-      else if (open?.kind === "cue" && keyword === THROWLINE_KEYWORDS.partText && open.part) open.part.fullText.push(restRaw);
+      else if (open?.kind === "cue" && keyword === THROWLINE_KEYWORDS.partText && open.part)
+        open.part.fullText.push(restRaw);
       else if (open?.kind === "cue" && keyword === THROWLINE_KEYWORDS.text) open.fullText.push(restRaw);
       else if (open?.kind === "cue" && keyword === THROWLINE_KEYWORDS.page) open.page.push(restRaw);
       else if (open?.kind === "cue" && keyword === THROWLINE_KEYWORDS.block) open.cue.block = true;
@@ -126,7 +155,11 @@ export function readUsittAscii(source: string): AsciiReadResult {
     switch (keyword) {
       case "IDENT":
         if (n > 1 && result.cues.length) notices.push({ line: n, message: "IDENT should come first" });
-        if (args[0] && !/^3(:0|\.0)?$/.test(args.join(":").replace(/:0:0$/, ":0"))) notices.push({ line: n, message: `IDENT ${args.join(":")}: written for another version of the standard; read as 3.0` });
+        if (args[0] && !/^3(:0|\.0)?$/.test(args.join(":").replace(/:0:0$/, ":0")))
+          notices.push({
+            line: n,
+            message: `IDENT ${args.join(":")}: written for another version of the standard; read as 3.0`,
+          });
         break;
       case "MANUFACTURER":
         result.manufacturer = rest;
@@ -190,7 +223,13 @@ export function readUsittAscii(source: string): AsciiReadResult {
             break;
           }
           // Until the part's own UP and DOWN: the cue's up time, no split, no delay (Throwline's reading).
-          open.part = { part: { part: number, label: "", upTime: open.cue.upTime, downTime: null, delay: 0, channels: [] }, text: "", fullText: [], downDelay: null, upDelaySet: false };
+          open.part = {
+            part: { part: number, label: "", upTime: open.cue.upTime, downTime: null, delay: 0, channels: [] },
+            text: "",
+            fullText: [],
+            downDelay: null,
+            upDelaySet: false,
+          };
           open.parts.push(open.part);
         } else if (!open) notices.push({ line: n, message: "PART outside any cue ignored" });
         break;
@@ -198,8 +237,7 @@ export function readUsittAscii(source: string): AsciiReadResult {
         if (open?.kind === "cue") {
           const listed = readLevels(open.cue.levels, args, n, fail, rounding);
           open.part?.part.channels.push(...listed);
-        }
-        else if (!open) notices.push({ line: n, message: "CHAN outside any cue ignored" });
+        } else if (!open) notices.push({ line: n, message: "CHAN outside any cue ignored" });
         break;
       case "PATCH": {
         close();
@@ -220,11 +258,15 @@ export function readUsittAscii(source: string): AsciiReadResult {
     }
   }
   close();
-  if (ignoredManufacturer) notices.push({ line: 0, message: `${ignoredManufacturer} manufacturer-specific ($) lines ignored` });
+  if (ignoredManufacturer)
+    notices.push({ line: 0, message: `${ignoredManufacturer} manufacturer-specific ($) lines ignored` });
   if (rounding.first) {
     const { line, token, stored } = rounding.first;
     const what = rounding.count === 1 ? "1 level was" : `${rounding.count} levels were`;
-    notices.push({ line, message: `${what} rounded to whole percentages (Throwline keeps whole percentages), the first on line ${line}: ${token} → ${stored}` });
+    notices.push({
+      line,
+      message: `${what} rounded to whole percentages (Throwline keeps whole percentages), the first on line ${line}: ${token} → ${stored}`,
+    });
   }
   if (!ended && !errors.length) {
     const last = lines.length - (lines.at(-1) === "" ? 1 : 0);
@@ -233,7 +275,13 @@ export function readUsittAscii(source: string): AsciiReadResult {
   return result;
 }
 
-function readTimes(cue: { upTime: number; downTime: number | null; delay: number; downDelay?: number | null }, keyword: "UP" | "DOWN", args: string[], line: number, fail: (l: number, m: string) => void) {
+function readTimes(
+  cue: { upTime: number; downTime: number | null; delay: number; downDelay?: number | null },
+  keyword: "UP" | "DOWN",
+  args: string[],
+  line: number,
+  fail: (l: number, m: string) => void,
+) {
   try {
     const t = parseFadeTime(args[0] ?? "", `${keyword} time`);
     const delay = args[1] !== undefined ? parseFadeTime(args[1], `${keyword} delay`) : null;
@@ -254,8 +302,18 @@ function readTimes(cue: { upTime: number; downTime: number | null; delay: number
  * A part has one wait: UP's delay, else DOWN's. A DOWN delay is remembered so that close() can report one
  * that differs from the part's wait rather than drop it silently.
  */
-function readPartTimes(p: OpenPart, keyword: "UP" | "DOWN", args: string[], line: number, fail: (l: number, m: string) => void) {
-  const times: { upTime: number; downTime: number | null; delay: number; downDelay?: number | null } = { ...p.part, delay: Number.NaN, downDelay: null };
+function readPartTimes(
+  p: OpenPart,
+  keyword: "UP" | "DOWN",
+  args: string[],
+  line: number,
+  fail: (l: number, m: string) => void,
+) {
+  const times: { upTime: number; downTime: number | null; delay: number; downDelay?: number | null } = {
+    ...p.part,
+    delay: Number.NaN,
+    downDelay: null,
+  };
   readTimes(times, keyword, args, line, fail);
   p.part.upTime = times.upTime;
   p.part.downTime = times.downTime;
@@ -270,7 +328,13 @@ function readPartTimes(p: OpenPart, keyword: "UP" | "DOWN", args: string[], line
 }
 
 /** Reads `ch level` pairs into `levels`; returns the channels it read. */
-function readLevels(levels: Record<number, number>, args: string[], line: number, fail: (l: number, m: string) => void, rounding: Rounding): number[] {
+function readLevels(
+  levels: Record<number, number>,
+  args: string[],
+  line: number,
+  fail: (l: number, m: string) => void,
+  rounding: Rounding,
+): number[] {
   const listed: number[] = [];
   if (args.length % 2 === 1) fail(line, `CHAN needs channel and level pairs; channel ${args.at(-1)} has no level`);
   for (let k = 0; k + 1 < args.length; k += 2) {
@@ -281,7 +345,8 @@ function readLevels(levels: Record<number, number>, args: string[], line: number
     }
     const level = parseAsciiLevel(args[k + 1]);
     if (/^-\d/.test(args[k + 1])) fail(line, `level ${args[k + 1]} for channel ${ch} is below 0`);
-    else if (level === null) fail(line, `level "${args[k + 1]}" for channel ${ch} is not a level (0–100, FL or H00–HFF)`);
+    else if (level === null)
+      fail(line, `level "${args[k + 1]}" for channel ${ch} is not a level (0–100, FL or H00–HFF)`);
     else if (level > 100) fail(line, `level ${args[k + 1]} for channel ${ch} is above 100`);
     else {
       const stored = Math.round(level);

@@ -19,7 +19,13 @@ import type { CuePart, CueWithMoves } from "./types";
 import { patchItems, type PatchEntry } from "./usitt-ascii-patch";
 
 export const ASCII_MAX_LINE = 80;
-export const THROWLINE_KEYWORDS = { page: "$TL-PAGE", note: "$TL-NOTE", text: "$TL-TEXT", block: "$TL-BLOCK", partText: "$TL-PARTTEXT" } as const;
+export const THROWLINE_KEYWORDS = {
+  page: "$TL-PAGE",
+  note: "$TL-NOTE",
+  text: "$TL-TEXT",
+  block: "$TL-BLOCK",
+  partText: "$TL-PARTTEXT",
+} as const;
 
 /** Throwline's own `$` lines may carry any text: `\` and line breaks are escaped, non-ASCII as \u{hex}. */
 export function escapeText(text: string): string {
@@ -75,7 +81,10 @@ function packed(head: string, items: string[]): string[] {
 }
 
 function levelLines(pairs: Array<[number, number]>): string[] {
-  return packed("CHAN", pairs.map(([ch, level]) => `${ch}@${Math.round(level)}`));
+  return packed(
+    "CHAN",
+    pairs.map(([ch, level]) => `${ch}@${Math.round(level)}`),
+  );
 }
 
 /** `UP time [delay]` and `DOWN time [delay]`: the standard's only place for waits (from memory). */
@@ -104,19 +113,35 @@ function partLines(part: CuePart, level: (ch: number) => number): string[] {
 }
 
 /** The cue list (and, when given, the patch) as one USITT ASCII file. */
-export function writeUsittAscii(opts: { title: string; cues: ReadonlyArray<CueWithMoves & { id?: number }>; patch?: readonly PatchEntry[] }): string {
+export function writeUsittAscii(opts: {
+  title: string;
+  cues: ReadonlyArray<CueWithMoves & { id?: number }>;
+  patch?: readonly PatchEntry[];
+}): string {
   const withIds = opts.cues.map((c, i) => ({ ...c, id: i }));
   const show = computeTracking(withIds);
   const byId = new Map(withIds.map((c) => [c.id, c]));
-  const out = ["IDENT 3:0", "MANUFACTURER Throwline", "CONSOLE Throwline", `! ${asciiOnly(opts.title)}`.slice(0, ASCII_MAX_LINE), `! cues: ${withIds.length}; each cue is written as its full state`];
-  if (opts.patch?.length) out.push("", "! patch: channel<absolute DMX address ((universe - 1) * 512 + address)", ...packed("PATCH 1", patchItems(opts.patch)));
+  const out = [
+    "IDENT 3:0",
+    "MANUFACTURER Throwline",
+    "CONSOLE Throwline",
+    `! ${asciiOnly(opts.title)}`.slice(0, ASCII_MAX_LINE),
+    `! cues: ${withIds.length}; each cue is written as its full state`,
+  ];
+  if (opts.patch?.length)
+    out.push(
+      "",
+      "! patch: channel<absolute DMX address ((universe - 1) * 512 + address)",
+      ...packed("PATCH 1", patchItems(opts.patch)),
+    );
   show.cueIds.forEach((id, index) => {
     const cue = byId.get(id)!;
     out.push("", `CUE ${formatCueNumber(cue.number)}`);
     if (cue.label) {
       const plain = asciiOnly(cue.label);
       out.push(`TEXT ${plain}`.slice(0, ASCII_MAX_LINE));
-      if (plain !== cue.label || plain.length > ASCII_MAX_LINE - 5) out.push(...chunked(THROWLINE_KEYWORDS.text, escapeText(cue.label)));
+      if (plain !== cue.label || plain.length > ASCII_MAX_LINE - 5)
+        out.push(...chunked(THROWLINE_KEYWORDS.text, escapeText(cue.label)));
     }
     out.push(...timeLines(cue));
     if (cue.follow != null) out.push(`FOLLOWON ${time(cue.follow)}`);

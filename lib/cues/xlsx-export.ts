@@ -7,7 +7,10 @@ import { formatChannels } from "./keyboard-entry";
 import { computeTracking } from "./tracking";
 import { formatCueNumber } from "./cue-number";
 
-export async function cuesToXlsx(opts: { title: string; rows: ReadonlyArray<CueTableRow & { id: number; levels: Record<number, number> }> }): Promise<Buffer> {
+export async function cuesToXlsx(opts: {
+  title: string;
+  rows: ReadonlyArray<CueTableRow & { id: number; levels: Record<number, number> }>;
+}): Promise<Buffer> {
   const book = new ExcelJS.Workbook();
   book.creator = "Throwline";
   const sheet = book.addWorksheet("Cues", { views: [{ state: "frozen", ySplit: 1 }] });
@@ -18,7 +21,17 @@ export async function cuesToXlsx(opts: { title: string; rows: ReadonlyArray<CueT
   // One row a part, so a spreadsheet can sort and filter them.
   const parts = book.addWorksheet("Parts", { views: [{ state: "frozen", ySplit: 1 }] });
   parts.addRow(["Cue", "Part", "Label", "Up (s)", "Down (s)", "Delay (s)", "Channels"]).font = { bold: true };
-  for (const r of opts.rows) for (const p of r.parts) parts.addRow([formatCueNumber(r.number), p.part, neutralise(p.label), p.upTime, p.downTime ?? "", p.delay, formatChannels(p.channels)]);
+  for (const r of opts.rows)
+    for (const p of r.parts)
+      parts.addRow([
+        formatCueNumber(r.number),
+        p.part,
+        neutralise(p.label),
+        p.upTime,
+        p.downTime ?? "",
+        p.delay,
+        formatChannels(p.channels),
+      ]);
   parts.columns.forEach((c, i) => (c.width = [8, 6, 24, 8, 8, 8, 40][i] ?? 12));
 
   const show = computeTracking(opts.rows);

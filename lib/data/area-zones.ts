@@ -6,10 +6,15 @@ import type { AreaZoneDto } from "@/lib/dto/plan";
 import { plain } from "./plain";
 import { productionCrud } from "./production-crud";
 
+export const toAreaZoneDto = (z: AreaZone): AreaZoneDto =>
+  plain(z, ["id", "productionId", "name", "polygon", "version", "updatedAt"]);
 
-export const toAreaZoneDto = (z: AreaZone): AreaZoneDto => plain(z, ["id", "productionId", "name", "polygon", "version", "updatedAt"]);
-
-const areaZones = productionCrud<AreaZone, AreaZoneDto, z.infer<typeof createAreaZoneSchema>, z.infer<typeof updateAreaZoneSchema>>({
+const areaZones = productionCrud<
+  AreaZone,
+  AreaZoneDto,
+  z.infer<typeof createAreaZoneSchema>,
+  z.infer<typeof updateAreaZoneSchema>
+>({
   model: () => getDb().AreaZone,
   entity: "areaZone",
   what: "Acting area",

@@ -4,7 +4,17 @@ import "server-only";
 import { QueryTypes } from "sequelize";
 import type { z } from "zod";
 import { getDb, type Production } from "@/models";
-import { CHECK_CAUTIONS, DMX_CAUTIONS, LOAD_KIND_RULE, POWER_CAUTIONS, effectiveElectrical, loadKindOfType, runChecks, type CheckPosition, type RiggingFixture } from "@/lib/checks";
+import {
+  CHECK_CAUTIONS,
+  DMX_CAUTIONS,
+  LOAD_KIND_RULE,
+  POWER_CAUTIONS,
+  effectiveElectrical,
+  loadKindOfType,
+  runChecks,
+  type CheckPosition,
+  type RiggingFixture,
+} from "@/lib/checks";
 import type { ChecksReport, ElectricalSettingsDto } from "@/lib/dto/checks";
 import type { updateElectricalSettingsSchema, updateLiftLinesSchema } from "@/lib/validation/checks";
 import { isPointHung, type PositionKind } from "@/lib/rig/position-kinds";
@@ -14,7 +24,15 @@ import { jsonColumn } from "./json-column";
 import { versionedUpdate } from "./versioned";
 import { inTransaction } from "./transaction";
 
-const SETTINGS_KEYS = ["electricalCode", "supplySystem", "voltage", "derating", "cableKgPerM", "hardwareKgPerUnit", "version"] as const;
+const SETTINGS_KEYS = [
+  "electricalCode",
+  "supplySystem",
+  "voltage",
+  "derating",
+  "cableKgPerM",
+  "hardwareKgPerUnit",
+  "version",
+] as const;
 
 export const toElectricalSettingsDto = (p: Production): ElectricalSettingsDto => ({
   productionId: p.id,
@@ -27,38 +45,146 @@ export const toElectricalSettingsDto = (p: Production): ElectricalSettingsDto =>
   version: p.version,
 });
 
-export async function getElectricalSettings({ productionId }: { productionId: number }): Promise<ElectricalSettingsDto | null> {
+export async function getElectricalSettings({
+  productionId,
+}: {
+  productionId: number;
+}): Promise<ElectricalSettingsDto | null> {
   const row = await getDb().Production.findByPk(productionId, { attributes: ["id", ...SETTINGS_KEYS] });
   return row ? toElectricalSettingsDto(row) : null;
 }
 
-export async function updateElectricalSettings({ productionId, userId, patch }: { productionId: number; userId: number; patch: z.infer<typeof updateElectricalSettingsSchema> }): Promise<ElectricalSettingsDto> {
+export async function updateElectricalSettings({
+  productionId,
+  userId,
+  patch,
+}: {
+  productionId: number;
+  userId: number;
+  patch: z.infer<typeof updateElectricalSettingsSchema>;
+}): Promise<ElectricalSettingsDto> {
   const { version, ...changes } = patch;
   const { Production } = getDb();
   return inTransaction(async (transaction) => {
-    const { before, after } = await versionedUpdate({ model: Production, scope: {}, id: productionId, version, changes, toDto: toElectricalSettingsDto, what: "Production", transaction });
+    const { before, after } = await versionedUpdate({
+      model: Production,
+      scope: {},
+      id: productionId,
+      version,
+      changes,
+      toDto: toElectricalSettingsDto,
+      what: "Production",
+      transaction,
+    });
     const dto = toElectricalSettingsDto(after);
-    await recordChange({ productionId, userId, entity: "production", entityId: productionId, action: "update", before: toElectricalSettingsDto(before), after: dto }, transaction);
+    await recordChange(
+      {
+        productionId,
+        userId,
+        entity: "production",
+        entityId: productionId,
+        action: "update",
+        before: toElectricalSettingsDto(before),
+        after: dto,
+      },
+      transaction,
+    );
     return dto;
   });
 }
 
-export async function updateLiftLines({ productionId, positionId, userId, patch }: { productionId: number; positionId: number; userId: number; patch: z.infer<typeof updateLiftLinesSchema> }) {
+export async function updateLiftLines({
+  productionId,
+  positionId,
+  userId,
+  patch,
+}: {
+  productionId: number;
+  positionId: number;
+  userId: number;
+  patch: z.infer<typeof updateLiftLinesSchema>;
+}) {
   const { Position } = getDb();
-  const toDto = (p: { id: number; liftLines: number | null; version: number }) => ({ positionId: p.id, liftLines: p.liftLines, version: p.version });
+  const toDto = (p: { id: number; liftLines: number | null; version: number }) => ({
+    positionId: p.id,
+    liftLines: p.liftLines,
+    version: p.version,
+  });
   return inTransaction(async (transaction) => {
-    const { before, after } = await versionedUpdate({ model: Position, scope: { productionId }, id: positionId, version: patch.version, changes: { liftLines: patch.liftLines }, toDto, what: "Position", transaction });
-    await recordChange({ productionId, userId, entity: "position", entityId: positionId, action: "update", before: toDto(before), after: toDto(after) }, transaction);
+    const { before, after } = await versionedUpdate({
+      model: Position,
+      scope: { productionId },
+      id: positionId,
+      version: patch.version,
+      changes: { liftLines: patch.liftLines },
+      toDto,
+      what: "Position",
+      transaction,
+    });
+    await recordChange(
+      {
+        productionId,
+        userId,
+        entity: "position",
+        entityId: positionId,
+        action: "update",
+        before: toDto(before),
+        after: toDto(after),
+      },
+      transaction,
+    );
     return toDto(after);
   });
 }
 
-type FixtureRow = { id: number; positionId: number; fixtureTypeId: number; unitNumber: string; bodyKey: string | null; channel: number | null; universe: number | null; address: number | null; dmxMode: string | null; footprint: number | null; circuit: string | null; dimmer: string | null; x: number; y: number };
-type TypeRow = { id: number; name: string; family: string; wattage: number; weightKg: number; dmxModes: unknown; cells: number };
-type AccessoryRow = { id: number; fixtureId: number; kind: string; universe: number | null; address: number | null; footprint: number | null; weightKg: number };
+type FixtureRow = {
+  id: number;
+  positionId: number;
+  fixtureTypeId: number;
+  unitNumber: string;
+  bodyKey: string | null;
+  channel: number | null;
+  universe: number | null;
+  address: number | null;
+  dmxMode: string | null;
+  footprint: number | null;
+  circuit: string | null;
+  dimmer: string | null;
+  x: number;
+  y: number;
+};
+type TypeRow = {
+  id: number;
+  name: string;
+  family: string;
+  wattage: number;
+  weightKg: number;
+  dmxModes: unknown;
+  cells: number;
+};
+type AccessoryRow = {
+  id: number;
+  fixtureId: number;
+  kind: string;
+  universe: number | null;
+  address: number | null;
+  footprint: number | null;
+  weightKg: number;
+};
 type CircuitRow = { id: number; name: string; ratingA: number; phase: string | null; power: string };
 type DataLineRow = { id: number; name: string; universe: number | null; fixtureIds: unknown };
-type PositionRow = { id: number; name: string; kind: PositionKind; x1: number; y1: number; x2: number | null; y2: number | null; ratedLoadKg: number | null; liftLines: number | null; version: number };
+type PositionRow = {
+  id: number;
+  name: string;
+  kind: PositionKind;
+  x1: number;
+  y1: number;
+  x2: number | null;
+  y2: number | null;
+  ratedLoadKg: number | null;
+  liftLines: number | null;
+  version: number;
+};
 
 /** Where a unit hangs along a line position, metres from its first end (its plan point projected). */
 function along(p: PositionRow, x: number, y: number): number | null {
@@ -89,28 +215,55 @@ export async function getChecksReport({ productionId }: { productionId: number }
   const db = getDb();
   // Plain SQL rows rather than model queries: these reads need no model behaviour, and at 1,500 fixtures
   // it took Node's CPU for the report from 55 to 47 ms (bench:checks, loaded machine).
-  const select = <T extends object>(sql: string, id: number) => db.sequelize.query<T>(sql, { replacements: [id], type: QueryTypes.SELECT });
+  const select = <T extends object>(sql: string, id: number) =>
+    db.sequelize.query<T>(sql, { replacements: [id], type: QueryTypes.SELECT });
   const [production, fixtures, types, positions, accessories, circuits, lines, cueChannels] = await Promise.all([
     db.Production.findByPk(productionId, { attributes: ["id", ...SETTINGS_KEYS] }),
-    select<FixtureRow>("SELECT id, position_id AS positionId, fixture_type_id AS fixtureTypeId, unit_number AS unitNumber, body_key AS bodyKey, channel, universe, address, dmx_mode AS dmxMode, footprint, circuit, dimmer, x, y FROM fixtures WHERE production_id = ?", productionId),
-    select<TypeRow>("SELECT id, name, family, wattage, weight_kg AS weightKg, dmx_modes AS dmxModes, cells FROM fixture_types WHERE production_id = ?", productionId),
-    select<PositionRow>("SELECT id, name, kind, x1, y1, x2, y2, rated_load_kg AS ratedLoadKg, lift_lines AS liftLines, version FROM positions WHERE production_id = ? ORDER BY sort_order, id", productionId),
-    select<AccessoryRow>("SELECT id, fixture_id AS fixtureId, kind, universe, address, footprint, weight_kg AS weightKg FROM accessories WHERE production_id = ?", productionId),
-    select<CircuitRow>("SELECT id, name, rating_a AS ratingA, phase, power FROM circuits WHERE production_id = ?", productionId),
-    select<DataLineRow>("SELECT id, name, universe, fixture_ids AS fixtureIds FROM data_lines WHERE production_id = ? ORDER BY name", productionId),
-    db.sequelize.query<{ channel: number }>("SELECT DISTINCT l.channel FROM cue_levels l JOIN cues c ON c.id = l.cue_id WHERE c.production_id = ?", { replacements: [productionId], type: QueryTypes.SELECT }),
+    select<FixtureRow>(
+      "SELECT id, position_id AS positionId, fixture_type_id AS fixtureTypeId, unit_number AS unitNumber, body_key AS bodyKey, channel, universe, address, dmx_mode AS dmxMode, footprint, circuit, dimmer, x, y FROM fixtures WHERE production_id = ?",
+      productionId,
+    ),
+    select<TypeRow>(
+      "SELECT id, name, family, wattage, weight_kg AS weightKg, dmx_modes AS dmxModes, cells FROM fixture_types WHERE production_id = ?",
+      productionId,
+    ),
+    select<PositionRow>(
+      "SELECT id, name, kind, x1, y1, x2, y2, rated_load_kg AS ratedLoadKg, lift_lines AS liftLines, version FROM positions WHERE production_id = ? ORDER BY sort_order, id",
+      productionId,
+    ),
+    select<AccessoryRow>(
+      "SELECT id, fixture_id AS fixtureId, kind, universe, address, footprint, weight_kg AS weightKg FROM accessories WHERE production_id = ?",
+      productionId,
+    ),
+    select<CircuitRow>(
+      "SELECT id, name, rating_a AS ratingA, phase, power FROM circuits WHERE production_id = ?",
+      productionId,
+    ),
+    select<DataLineRow>(
+      "SELECT id, name, universe, fixture_ids AS fixtureIds FROM data_lines WHERE production_id = ? ORDER BY name",
+      productionId,
+    ),
+    db.sequelize.query<{ channel: number }>(
+      "SELECT DISTINCT l.channel FROM cue_levels l JOIN cues c ON c.id = l.cue_id WHERE c.production_id = ?",
+      { replacements: [productionId], type: QueryTypes.SELECT },
+    ),
   ]);
   if (!production) return null;
   const started = performance.now();
   const settings = toElectricalSettingsDto(production);
   const electrical = effectiveElectrical(settings);
-  const typeById = new Map(types.map((t) => [t.id, { ...t, dmxModes: jsonColumn<{ name: string; footprint: number }[]>(t.dmxModes) ?? [] }]));
+  const typeById = new Map(
+    types.map((t) => [t.id, { ...t, dmxModes: jsonColumn<{ name: string; footprint: number }[]>(t.dmxModes) ?? [] }]),
+  );
   const positionById = new Map(positions.map((p) => [p.id, p]));
 
   const checkFixtures: RiggingFixture[] = fixtures.map((f) => {
     const t = typeById.get(f.fixtureTypeId);
     const modes = t?.dmxModes ?? [];
-    const footprint = f.footprint ?? modes.find((m) => m.name === f.dmxMode)?.footprint ?? (modes.length === 1 ? modes[0].footprint : null);
+    const footprint =
+      f.footprint ??
+      modes.find((m) => m.name === f.dmxMode)?.footprint ??
+      (modes.length === 1 ? modes[0].footprint : null);
     // A type's wattage is the whole unit's; each cell row of a multi-cell body draws its share on its own circuit.
     const cells = f.bodyKey && t && t.cells > 1 ? t.cells : 1;
     const position = positionById.get(f.positionId);
@@ -138,10 +291,29 @@ export async function getChecksReport({ productionId }: { productionId: number }
 
   const result = runChecks({
     fixtures: checkFixtures,
-    accessories: accessories.map((a) => ({ id: a.id, fixtureId: a.fixtureId, kind: a.kind, universe: a.universe, address: a.address, footprint: a.footprint, weightKg: Number(a.weightKg) > 0 ? Number(a.weightKg) : null })),
+    accessories: accessories.map((a) => ({
+      id: a.id,
+      fixtureId: a.fixtureId,
+      kind: a.kind,
+      universe: a.universe,
+      address: a.address,
+      footprint: a.footprint,
+      weightKg: Number(a.weightKg) > 0 ? Number(a.weightKg) : null,
+    })),
     positions: positions.map(toCheckPosition),
-    circuits: circuits.map((c) => ({ id: c.id, name: c.name, ratingA: Number(c.ratingA), phase: c.phase, dimmed: c.power === "dimmed" })),
-    dataLines: lines.map((l) => ({ id: l.id, name: l.name, universe: l.universe, fixtureIds: jsonColumn<number[]>(l.fixtureIds) ?? [] })),
+    circuits: circuits.map((c) => ({
+      id: c.id,
+      name: c.name,
+      ratingA: Number(c.ratingA),
+      phase: c.phase,
+      dimmed: c.power === "dimmed",
+    })),
+    dataLines: lines.map((l) => ({
+      id: l.id,
+      name: l.name,
+      universe: l.universe,
+      fixtureIds: jsonColumn<number[]>(l.fixtureIds) ?? [],
+    })),
     cueChannels: cueChannels.map((c) => Number(c.channel)),
     electrical,
     rigging: { cableKgPerM: settings.cableKgPerM, hardwareKgPerUnit: settings.hardwareKgPerUnit },
@@ -151,7 +323,9 @@ export async function getChecksReport({ productionId }: { productionId: number }
     settings,
     electrical,
     cautions: { general: CHECK_CAUTIONS, power: POWER_CAUTIONS, dmx: DMX_CAUTIONS, loadKindRule: LOAD_KIND_RULE },
-    liftLines: positions.filter((p) => toCheckPosition(p).lengthM != null).map((p) => ({ positionId: p.id, liftLines: p.liftLines, version: p.version })),
+    liftLines: positions
+      .filter((p) => toCheckPosition(p).lengthM != null)
+      .map((p) => ({ positionId: p.id, liftLines: p.liftLines, version: p.version })),
     computedAt: new Date().toISOString(),
     computeMs: performance.now() - started,
   };
@@ -164,8 +338,21 @@ export async function requireChecksReport({ productionId }: { productionId: numb
 }
 
 /** Each position's fixture ids in unit order: the default order of a data run along it. */
-export async function getUnitOrderByPosition({ productionId }: { productionId: number }): Promise<Record<number, number[]>> {
-  const rows = (await getDb().Fixture.findAll({ raw: true, where: { productionId }, attributes: ["id", "positionId"], order: [["positionId", "ASC"], ["unitSort", "ASC"], ["cell", "ASC"]] })) as unknown as { id: number; positionId: number }[];
+export async function getUnitOrderByPosition({
+  productionId,
+}: {
+  productionId: number;
+}): Promise<Record<number, number[]>> {
+  const rows = (await getDb().Fixture.findAll({
+    raw: true,
+    where: { productionId },
+    attributes: ["id", "positionId"],
+    order: [
+      ["positionId", "ASC"],
+      ["unitSort", "ASC"],
+      ["cell", "ASC"],
+    ],
+  })) as unknown as { id: number; positionId: number }[];
   const out: Record<number, number[]> = {};
   for (const r of rows) (out[r.positionId] ??= []).push(r.id);
   return out;

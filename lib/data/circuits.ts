@@ -36,18 +36,36 @@ export const updateCircuit = circuits.update;
 export const deleteCircuit = circuits.remove;
 
 /** A rack's worth of circuits in one transaction: all are created or none (a taken name names its row). */
-export async function createCircuits({ productionId, userId, inputs }: { productionId: number; userId: number; inputs: CreateCircuit[] }): Promise<CircuitDto[]> {
+export async function createCircuits({
+  productionId,
+  userId,
+  inputs,
+}: {
+  productionId: number;
+  userId: number;
+  inputs: CreateCircuit[];
+}): Promise<CircuitDto[]> {
   const seen = new Map<string, number>();
   inputs.forEach((c, i) => {
     const key = c.name.trim().toLowerCase();
-    if (seen.has(key)) throw new AppError("bad_request", `Row ${i + 1}: circuit "${c.name}" is also on row ${seen.get(key)! + 1}.`, { fieldErrors: { [`circuits.${i}.name`]: ["named twice"] } });
+    if (seen.has(key))
+      throw new AppError("bad_request", `Row ${i + 1}: circuit "${c.name}" is also on row ${seen.get(key)! + 1}.`, {
+        fieldErrors: { [`circuits.${i}.name`]: ["named twice"] },
+      });
     seen.set(key, i);
   });
   const { Circuit } = getDb();
   return inTransaction(async (transaction) => {
-    const rows = await Circuit.bulkCreate(inputs.map((c) => ({ phase: null, power: "dimmed" as const, ...c, productionId })), { transaction }).catch(uniqueNameError("circuit"));
+    const rows = await Circuit.bulkCreate(
+      inputs.map((c) => ({ phase: null, power: "dimmed" as const, ...c, productionId })),
+      { transaction },
+    ).catch(uniqueNameError("circuit"));
     const dtos = rows.map(toCircuitDto);
-    for (const d of dtos) await recordChange({ productionId, userId, entity: "circuit", entityId: d.id, action: "create", after: d }, transaction);
+    for (const d of dtos)
+      await recordChange(
+        { productionId, userId, entity: "circuit", entityId: d.id, action: "create", after: d },
+        transaction,
+      );
     return dtos;
   });
 }

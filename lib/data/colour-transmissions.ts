@@ -7,9 +7,15 @@ import type { ColourTransmissionDto } from "@/lib/dto/studies";
 import { plain } from "./plain";
 import { productionCrud } from "./production-crud";
 
-export const toColourTransmissionDto = (r: ColourTransmission): ColourTransmissionDto => plain(r, ["id", "productionId", "name", "percent", "version", "updatedAt"]);
+export const toColourTransmissionDto = (r: ColourTransmission): ColourTransmissionDto =>
+  plain(r, ["id", "productionId", "name", "percent", "version", "updatedAt"]);
 
-const rows = productionCrud<ColourTransmission, ColourTransmissionDto, z.infer<typeof createColourTransmissionSchema>, z.infer<typeof updateColourTransmissionSchema>>({
+const rows = productionCrud<
+  ColourTransmission,
+  ColourTransmissionDto,
+  z.infer<typeof createColourTransmissionSchema>,
+  z.infer<typeof updateColourTransmissionSchema>
+>({
   model: () => getDb().ColourTransmission,
   entity: "colourTransmission",
   what: "Colour",

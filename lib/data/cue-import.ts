@@ -9,15 +9,26 @@ import { recordChange } from "./changes";
 import { getCuesByProduction } from "./cue-reads";
 import { inTransaction } from "./transaction";
 
-
 /** Replaces the production's cue list with a USITT ASCII file: all of it, or (on any error) nothing. */
-export async function importCuesFromAscii({ productionId, text, mode, userId }: { productionId: number; text: string; mode: ImportMode; userId: number }): Promise<ImportOutcome> {
+export async function importCuesFromAscii({
+  productionId,
+  text,
+  mode,
+  userId,
+}: {
+  productionId: number;
+  text: string;
+  mode: ImportMode;
+  userId: number;
+}): Promise<ImportOutcome> {
   const parsed = readUsittAscii(text);
   if (parsed.errors.length) {
     const fieldErrors = Object.fromEntries(parsed.errors.map((e) => [`line ${e.line}`, [e.message]]));
     const first = parsed.errors[0];
     const more = parsed.errors.length > 1 ? ` (and ${parsed.errors.length - 1} more)` : "";
-    throw new AppError("bad_request", `Nothing was imported. Line ${first.line}: ${first.message}${more}.`, { fieldErrors });
+    throw new AppError("bad_request", `Nothing was imported. Line ${first.line}: ${first.message}${more}.`, {
+      fieldErrors,
+    });
   }
   const empty = emptyFileReason(parsed);
   if (empty) throw new AppError("bad_request", empty, { fieldErrors: { text: [empty] } });
@@ -25,18 +36,39 @@ export async function importCuesFromAscii({ productionId, text, mode, userId }: 
   const { Cue, CueLevel, CuePart } = getDb();
   await inTransaction(async (transaction) => {
     // The whole list as it was (fields, moves, parts), so a replacing import can be undone from the log.
-    const replaced = (await getCuesByProduction({ productionId, transaction })).map(({ id: _id, version: _v, updatedAt: _u, ...cue }) => cue);
+    const replaced = (await getCuesByProduction({ productionId, transaction })).map(
+      ({ id: _id, version: _v, updatedAt: _u, ...cue }) => cue,
+    );
     await Cue.destroy({ where: { productionId }, transaction });
-    const rows = await Cue.bulkCreate(cues.map((c) => ({ productionId, ...fieldsForRow(c) })), { transaction });
-    const levels = rows.flatMap((row, i) => Object.entries(cues[i].levels).map(([ch, level]) => ({ cueId: row.id, channel: Number(ch), level })));
+    const rows = await Cue.bulkCreate(
+      cues.map((c) => ({ productionId, ...fieldsForRow(c) })),
+      { transaction },
+    );
+    const levels = rows.flatMap((row, i) =>
+      Object.entries(cues[i].levels).map(([ch, level]) => ({ cueId: row.id, channel: Number(ch), level })),
+    );
     for (let i = 0; i < levels.length; i += 5000) await CueLevel.bulkCreate(levels.slice(i, i + 5000), { transaction });
     const parts = rows.flatMap((row, i) => normaliseParts(cues[i].parts).map((p) => ({ cueId: row.id, ...p })));
     if (parts.length) await CuePart.bulkCreate(parts, { transaction });
-    await recordChange({ productionId, userId, entity: "cue", entityId: null, action: "update", before: { cues: replaced.length, replaced }, after: { imported: rows.length, parts: parts.length, from: "USITT ASCII" } }, transaction);
+    await recordChange(
+      {
+        productionId,
+        userId,
+        entity: "cue",
+        entityId: null,
+        action: "update",
+        before: { cues: replaced.length, replaced },
+        after: { imported: rows.length, parts: parts.length, from: "USITT ASCII" },
+      },
+      transaction,
+    );
   });
   const notices = [...parsed.notices];
   if (parsed.patch.length) {
-    notices.push({ line: 0, message: `${parsed.patch.length} patch entries (channel → universe/address) read; the rig's addresses were not changed by the cue import` });
+    notices.push({
+      line: 0,
+      message: `${parsed.patch.length} patch entries (channel → universe/address) read; the rig's addresses were not changed by the cue import`,
+    });
   }
   return { imported: cues.length, notices };
 }

@@ -18,10 +18,16 @@ export const toDataLineDto = (d: DataLine): DataLineDto => ({
 /** Every unit on a line must be a fixture of this production, and appear once. */
 async function checkUnits(fixtureIds: number[], productionId: number, transaction: Transaction) {
   const twice = fixtureIds.find((id, i) => fixtureIds.indexOf(id) !== i);
-  if (twice != null) throw new AppError("bad_request", `Fixture ${twice} is on the data line twice.`, { fieldErrors: { fixtureIds: ["a unit appears twice"] } });
+  if (twice != null)
+    throw new AppError("bad_request", `Fixture ${twice} is on the data line twice.`, {
+      fieldErrors: { fixtureIds: ["a unit appears twice"] },
+    });
   if (!fixtureIds.length) return;
   const found = await getDb().Fixture.count({ where: { productionId, id: { [Op.in]: fixtureIds } }, transaction });
-  if (found !== fixtureIds.length) throw new AppError("bad_request", "Some units on the data line are not fixtures of this production.", { fieldErrors: { fixtureIds: ["unknown fixture"] } });
+  if (found !== fixtureIds.length)
+    throw new AppError("bad_request", "Some units on the data line are not fixtures of this production.", {
+      fieldErrors: { fixtureIds: ["unknown fixture"] },
+    });
 }
 
 type Create = z.infer<typeof createDataLineSchema>;
@@ -43,7 +49,12 @@ export const getDataLinesByProduction = lines.list;
 export const createDataLine = lines.create;
 export const deleteDataLine = lines.remove;
 
-export async function updateDataLine(args: { productionId: number; id: number; userId: number; patch: Update }): Promise<DataLineDto> {
+export async function updateDataLine(args: {
+  productionId: number;
+  id: number;
+  userId: number;
+  patch: Update;
+}): Promise<DataLineDto> {
   if (args.patch.fixtureIds) {
     const ids = args.patch.fixtureIds;
     await inTransaction((transaction) => checkUnits(ids, args.productionId, transaction));

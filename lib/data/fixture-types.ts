@@ -8,12 +8,39 @@ import { plain } from "./plain";
 import { jsonColumn } from "./json-column";
 import { productionCrud } from "./production-crud";
 
+const TYPE_KEYS = [
+  "id",
+  "productionId",
+  "name",
+  "family",
+  "coneMinDeg",
+  "coneMaxDeg",
+  "defaultSoftnessDeg",
+  "peakCandela",
+  "peakCandelaNarrow",
+  "wattage",
+  "weightKg",
+  "dmxModes",
+  "lensApertureM",
+  "frameSize",
+  "goboSize",
+  "lensDropM",
+  "cells",
+  "version",
+  "updatedAt",
+] as const;
 
-const TYPE_KEYS = ["id", "productionId", "name", "family", "coneMinDeg", "coneMaxDeg", "defaultSoftnessDeg", "peakCandela", "peakCandelaNarrow", "wattage", "weightKg", "dmxModes", "lensApertureM", "frameSize", "goboSize", "lensDropM", "cells", "version", "updatedAt"] as const;
+export const toFixtureTypeDto = (t: FixtureType): FixtureTypeDto => ({
+  ...plain(t, TYPE_KEYS),
+  dmxModes: jsonColumn<DmxMode[]>(t.dmxModes),
+});
 
-export const toFixtureTypeDto = (t: FixtureType): FixtureTypeDto => ({ ...plain(t, TYPE_KEYS), dmxModes: jsonColumn<DmxMode[]>(t.dmxModes) });
-
-const fixtureTypes = productionCrud<FixtureType, FixtureTypeDto, z.infer<typeof createFixtureTypeSchema>, z.infer<typeof updateFixtureTypeSchema>>({
+const fixtureTypes = productionCrud<
+  FixtureType,
+  FixtureTypeDto,
+  z.infer<typeof createFixtureTypeSchema>,
+  z.infer<typeof updateFixtureTypeSchema>
+>({
   model: () => getDb().FixtureType,
   entity: "fixtureType",
   what: "Fixture type",
@@ -22,7 +49,11 @@ const fixtureTypes = productionCrud<FixtureType, FixtureTypeDto, z.infer<typeof 
   prepareCreate: (input) => ({ frameSize: null, goboSize: null, ...input }),
   beforeDelete: async (row, { productionId, transaction }) => {
     const inUse = await getDb().Fixture.count({ where: { productionId, fixtureTypeId: row.id }, transaction });
-    if (inUse) throw new AppError("bad_request", `${inUse} fixture${inUse === 1 ? " uses" : "s use"} this type; swap them to another type first.`);
+    if (inUse)
+      throw new AppError(
+        "bad_request",
+        `${inUse} fixture${inUse === 1 ? " uses" : "s use"} this type; swap them to another type first.`,
+      );
   },
 });
 

@@ -15,7 +15,15 @@ import { requireProduction } from "./productions";
 import { inTransaction } from "./transaction";
 
 // Every registry field, then identity and bookkeeping: the keys of FixtureRecord.
-const RECORD_KEYS = ["id", "productionId", ...FIXTURE_FIELDS.map((f) => f.attribute), "focusedAt", "focusedBy", "version", "updatedAt"] as const;
+const RECORD_KEYS = [
+  "id",
+  "productionId",
+  ...FIXTURE_FIELDS.map((f) => f.attribute),
+  "focusedAt",
+  "focusedBy",
+  "version",
+  "updatedAt",
+] as const;
 
 export function toFixtureRecord(f: Fixture): FixtureRecord {
   const record = plain(f as unknown as Record<string, unknown>, RECORD_KEYS) as unknown as FixtureRecord;
@@ -33,21 +41,39 @@ async function joinerFor(productionId: number, headHeight: number) {
     FixtureType.findAll({ where: { productionId } }),
     FocusPoint.findAll({ where: { productionId } }),
   ]);
-  return { join: fixtureJoiner({ positions, types, points }, headHeight), positions: new Map(positions.map((p) => [p.id, p])) };
+  return {
+    join: fixtureJoiner({ positions, types, points }, headHeight),
+    positions: new Map(positions.map((p) => [p.id, p])),
+  };
 }
 
 /** Every fixture of a production in hanging order (position order, then unit number), with computed geometry. */
 export async function getFixturesByProduction({ productionId }: { productionId: number }): Promise<FixtureDto[]> {
   const production = await requireProduction(productionId);
   const [rows, { join, positions }] = await Promise.all([
-    getDb().Fixture.findAll({ where: { productionId }, order: [["positionId", "ASC"], ["unitSort", "ASC"], ["cell", "ASC"]] }),
+    getDb().Fixture.findAll({
+      where: { productionId },
+      order: [
+        ["positionId", "ASC"],
+        ["unitSort", "ASC"],
+        ["cell", "ASC"],
+      ],
+    }),
     joinerFor(productionId, production.headHeight),
   ]);
   const order = (id: number) => positions.get(id)?.sortOrder ?? 0;
-  return joinFixtures(rows.map(toFixtureRecord), join).sort((a, b) => order(a.positionId) - order(b.positionId) || a.positionName.localeCompare(b.positionName) || 0);
+  return joinFixtures(rows.map(toFixtureRecord), join).sort(
+    (a, b) => order(a.positionId) - order(b.positionId) || a.positionName.localeCompare(b.positionName) || 0,
+  );
 }
 
-export async function getFixtureById({ productionId, fixtureId }: { productionId: number; fixtureId: number }): Promise<FixtureDto | null> {
+export async function getFixtureById({
+  productionId,
+  fixtureId,
+}: {
+  productionId: number;
+  fixtureId: number;
+}): Promise<FixtureDto | null> {
   const production = await requireProduction(productionId);
   const row = await getDb().Fixture.findOne({ where: { productionId, id: fixtureId } });
   if (!row) return null;
@@ -62,7 +88,9 @@ async function checkReferences(productionId: number, merged: FixtureRecord, tran
   const { Position, FixtureType, FocusPoint } = getDb();
   const position = await Position.findOne({ where: { productionId, id: merged.positionId }, transaction });
   const type = await FixtureType.findOne({ where: { productionId, id: merged.fixtureTypeId }, transaction });
-  const point = merged.focusPointId ? await FocusPoint.findOne({ where: { productionId, id: merged.focusPointId }, transaction }) : null;
+  const point = merged.focusPointId
+    ? await FocusPoint.findOne({ where: { productionId, id: merged.focusPointId }, transaction })
+    : null;
   const fieldErrors: Record<string, string[]> = {};
   if (!position) fieldErrors.positionId = ["no such position in this production"];
   if (!type) fieldErrors.fixtureTypeId = ["no such fixture type in this production"];
@@ -73,14 +101,31 @@ async function checkReferences(productionId: number, merged: FixtureRecord, tran
     fieldErrors.address = [`a ${footprint}-slot fixture at ${merged.address} runs past slot 512`];
   }
   if (Object.keys(fieldErrors).length) {
-    throw new AppError("bad_request", `Please check the input — ${Object.entries(fieldErrors).map(([k, v]) => `${k}: ${v[0]}`).join("; ")}`, { fieldErrors });
+    throw new AppError(
+      "bad_request",
+      `Please check the input — ${Object.entries(fieldErrors)
+        .map(([k, v]) => `${k}: ${v[0]}`)
+        .join("; ")}`,
+      { fieldErrors },
+    );
   }
 }
 
-export async function updateFixture({ productionId, fixtureId, patch, userId }: { productionId: number; fixtureId: number; patch: FixturePatch; userId: number }): Promise<FixtureDto> {
+export async function updateFixture({
+  productionId,
+  fixtureId,
+  patch,
+  userId,
+}: {
+  productionId: number;
+  fixtureId: number;
+  patch: FixturePatch;
+  userId: number;
+}): Promise<FixtureDto> {
   const { Fixture } = getDb();
   const { version, ...changes } = patch;
-  if (Object.keys(changes).length === 0) throw new AppError("bad_request", "Nothing to change: send at least one field.");
+  if (Object.keys(changes).length === 0)
+    throw new AppError("bad_request", "Nothing to change: send at least one field.");
   const existing = await Fixture.findOne({ where: { productionId, id: fixtureId } });
   if (!existing) throw notFound("Fixture");
   const merged = { ...toFixtureRecord(existing), ...changes } as FixtureRecord;
@@ -103,17 +148,38 @@ export async function updateFixture({ productionId, fixtureId, patch, userId }: 
       transaction,
     }).catch((err) => {
       if ((err as { name?: string }).name === "SequelizeUniqueConstraintError") {
-        throw new AppError("bad_request", "Another fixture on that position already has this unit number.", { fieldErrors: { unitNumber: ["already used on this position"] } });
+        throw new AppError("bad_request", "Another fixture on that position already has this unit number.", {
+          fieldErrors: { unitNumber: ["already used on this position"] },
+        });
       }
       throw err;
     });
-    await recordChange({ productionId, userId, entity: "fixture", entityId: fixtureId, action: "update", before: toFixtureRecord(before), after: toFixtureRecord(after) }, transaction);
+    await recordChange(
+      {
+        productionId,
+        userId,
+        entity: "fixture",
+        entityId: fixtureId,
+        action: "update",
+        before: toFixtureRecord(before),
+        after: toFixtureRecord(after),
+      },
+      transaction,
+    );
   });
   return (await getFixtureById({ productionId, fixtureId }))!;
 }
 
 /** Creates fixtures in one transaction (all or none); returns them with computed geometry. */
-export async function createFixtures({ productionId, userId, inputs }: { productionId: number; userId: number; inputs: FixtureCreate[] }): Promise<FixtureDto[]> {
+export async function createFixtures({
+  productionId,
+  userId,
+  inputs,
+}: {
+  productionId: number;
+  userId: number;
+  inputs: FixtureCreate[];
+}): Promise<FixtureDto[]> {
   const { Fixture } = getDb();
   const ids = await inTransaction(async (transaction) => {
     const created: number[] = [];
@@ -123,13 +189,21 @@ export async function createFixtures({ productionId, userId, inputs }: { product
         if (err instanceof AppError && inputs.length > 1) err.message = `Fixture ${i + 1}: ${err.message}`;
         throw err;
       });
-      const row = await Fixture.create({ ...emptyFixture(), ...input, productionId, unitSort: unitSortKey(input.unitNumber) }, { transaction }).catch((err) => {
+      const row = await Fixture.create(
+        { ...emptyFixture(), ...input, productionId, unitSort: unitSortKey(input.unitNumber) },
+        { transaction },
+      ).catch((err) => {
         if ((err as { name?: string }).name === "SequelizeUniqueConstraintError") {
-          throw new AppError("bad_request", `Unit ${input.unitNumber} already exists on that position.`, { fieldErrors: { unitNumber: ["already used on this position"] } });
+          throw new AppError("bad_request", `Unit ${input.unitNumber} already exists on that position.`, {
+            fieldErrors: { unitNumber: ["already used on this position"] },
+          });
         }
         throw err;
       });
-      await recordChange({ productionId, userId, entity: "fixture", entityId: row.id, action: "create", after: toFixtureRecord(row) }, transaction);
+      await recordChange(
+        { productionId, userId, entity: "fixture", entityId: row.id, action: "create", after: toFixtureRecord(row) },
+        transaction,
+      );
       created.push(row.id);
     }
     return created;
@@ -139,14 +213,30 @@ export async function createFixtures({ productionId, userId, inputs }: { product
 }
 
 /** Deletes fixtures of this production by id, recording each; unknown ids are a 404 and nothing is deleted. */
-export async function deleteFixtures({ productionId, userId, fixtureIds }: { productionId: number; userId: number; fixtureIds: number[] }) {
+export async function deleteFixtures({
+  productionId,
+  userId,
+  fixtureIds,
+}: {
+  productionId: number;
+  userId: number;
+  fixtureIds: number[];
+}) {
   const { Fixture } = getDb();
   await inTransaction(async (transaction) => {
     // Locked in id order, as every multi-row edit does, so two overlapping edits queue instead of deadlocking.
-    const rows = await Fixture.findAll({ where: { productionId, id: fixtureIds }, order: [["id", "ASC"]], lock: true, transaction });
+    const rows = await Fixture.findAll({
+      where: { productionId, id: fixtureIds },
+      order: [["id", "ASC"]],
+      lock: true,
+      transaction,
+    });
     if (rows.length !== new Set(fixtureIds).size) throw notFound("Fixture");
     for (const row of rows) {
-      await recordChange({ productionId, userId, entity: "fixture", entityId: row.id, action: "delete", before: toFixtureRecord(row) }, transaction);
+      await recordChange(
+        { productionId, userId, entity: "fixture", entityId: row.id, action: "delete", before: toFixtureRecord(row) },
+        transaction,
+      );
     }
     await Fixture.destroy({ where: { productionId, id: fixtureIds }, transaction });
   });

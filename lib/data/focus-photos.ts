@@ -31,16 +31,29 @@ type Prepared = { full: Buffer; thumb: Buffer; width: number; height: number };
 
 /** Checks and shrinks the picture; throws an AppError that names the file and says what to do. */
 export async function preparePhoto(bytes: Uint8Array): Promise<Prepared> {
-  if (bytes.byteLength === 0) throw new AppError("bad_request", "The file is empty. Take the photo again.", { fieldErrors: { file: ["the file is empty"] } });
+  if (bytes.byteLength === 0)
+    throw new AppError("bad_request", "The file is empty. Take the photo again.", {
+      fieldErrors: { file: ["the file is empty"] },
+    });
   if (bytes.byteLength > MAX_FOCUS_PHOTO_BYTES) {
-    throw new AppError("too_large", `The photo is ${mb(bytes.byteLength)}; the limit is ${MAX_FOCUS_PHOTO_BYTES / 1048576} MB.`, { fieldErrors: { file: ["over the size limit"] } });
+    throw new AppError(
+      "too_large",
+      `The photo is ${mb(bytes.byteLength)}; the limit is ${MAX_FOCUS_PHOTO_BYTES / 1048576} MB.`,
+      { fieldErrors: { file: ["over the size limit"] } },
+    );
   }
   await readImageHeader(bytes, "photo");
   try {
     const upright = () => decoder(bytes).rotate().flatten({ background: "#ffffff" });
     const [full, thumb] = await Promise.all([
-      upright().resize({ width: FULL_PX, height: FULL_PX, fit: "inside", withoutEnlargement: true }).jpeg({ quality: 82 }).toBuffer({ resolveWithObject: true }),
-      upright().resize({ width: THUMB_PX, height: THUMB_PX, fit: "inside", withoutEnlargement: true }).jpeg({ quality: 70 }).toBuffer(),
+      upright()
+        .resize({ width: FULL_PX, height: FULL_PX, fit: "inside", withoutEnlargement: true })
+        .jpeg({ quality: 82 })
+        .toBuffer({ resolveWithObject: true }),
+      upright()
+        .resize({ width: THUMB_PX, height: THUMB_PX, fit: "inside", withoutEnlargement: true })
+        .jpeg({ quality: 70 })
+        .toBuffer(),
     ]);
     return { full: full.data, thumb, width: full.info.width, height: full.info.height };
   } catch (err) {
@@ -58,7 +71,14 @@ async function fixtureRow(productionId: number, fixtureId: number) {
  * Sets (or replaces) a fixture's focus photo at the version the client read: the files are written first
  * and removed again if the database write fails, so nothing is left half-saved; the old photo goes after.
  */
-export async function setFocusPhoto(o: { productionId: number; fixtureId: number; version: number; userId: number; fileName: string; bytes: Uint8Array }): Promise<FixtureDto> {
+export async function setFocusPhoto(o: {
+  productionId: number;
+  fixtureId: number;
+  version: number;
+  userId: number;
+  fileName: string;
+  bytes: Uint8Array;
+}): Promise<FixtureDto> {
   const { productionId, fixtureId, version, userId } = o;
   await fixtureRow(productionId, fixtureId);
   const photo = await preparePhoto(o.bytes);
@@ -70,13 +90,47 @@ export async function setFocusPhoto(o: { productionId: number; fixtureId: number
   try {
     await inTransaction(async (transaction) => {
       const upload = await Upload.create(
-        { productionId, kind: "focus-photo", fileName: o.fileName.slice(0, 200) || "focus-photo.jpg", storageKey: key, contentType: "image/jpeg", sizeBytes: photo.full.byteLength, widthPx: photo.width, heightPx: photo.height, uploadedBy: userId },
+        {
+          productionId,
+          kind: "focus-photo",
+          fileName: o.fileName.slice(0, 200) || "focus-photo.jpg",
+          storageKey: key,
+          contentType: "image/jpeg",
+          sizeBytes: photo.full.byteLength,
+          widthPx: photo.width,
+          heightPx: photo.height,
+          uploadedBy: userId,
+        },
         { transaction },
       );
-      const { before, after } = await versionedUpdate({ model: Fixture, scope: { productionId }, id: fixtureId, version, changes: { focusPhotoUploadId: upload.id }, toDto: toFixtureRecord, what: "Fixture", transaction });
-      await recordChange({ productionId, userId, entity: "upload", entityId: upload.id, action: "create", after: toUploadDto(upload) }, transaction);
-      await recordChange({ productionId, userId, entity: "fixture", entityId: fixtureId, action: "update", before: toFixtureRecord(before), after: toFixtureRecord(after) }, transaction);
-      if (before.focusPhotoUploadId != null) oldKey = await dropUpload(productionId, before.focusPhotoUploadId, userId, transaction);
+      const { before, after } = await versionedUpdate({
+        model: Fixture,
+        scope: { productionId },
+        id: fixtureId,
+        version,
+        changes: { focusPhotoUploadId: upload.id },
+        toDto: toFixtureRecord,
+        what: "Fixture",
+        transaction,
+      });
+      await recordChange(
+        { productionId, userId, entity: "upload", entityId: upload.id, action: "create", after: toUploadDto(upload) },
+        transaction,
+      );
+      await recordChange(
+        {
+          productionId,
+          userId,
+          entity: "fixture",
+          entityId: fixtureId,
+          action: "update",
+          before: toFixtureRecord(before),
+          after: toFixtureRecord(after),
+        },
+        transaction,
+      );
+      if (before.focusPhotoUploadId != null)
+        oldKey = await dropUpload(productionId, before.focusPhotoUploadId, userId, transaction);
     });
   } catch (err) {
     await Promise.all([store.delete(key), store.delete(thumbKeyOf(key))]);
@@ -86,37 +140,83 @@ export async function setFocusPhoto(o: { productionId: number; fixtureId: number
   return (await getFixtureById({ productionId, fixtureId }))!;
 }
 
-async function dropUpload(productionId: number, uploadId: number, userId: number, transaction: import("sequelize").Transaction): Promise<string | null> {
+async function dropUpload(
+  productionId: number,
+  uploadId: number,
+  userId: number,
+  transaction: import("sequelize").Transaction,
+): Promise<string | null> {
   const row = await getDb().Upload.findOne({ where: { productionId, id: uploadId, kind: "focus-photo" }, transaction });
   if (!row) return null;
   await row.destroy({ transaction });
-  await recordChange({ productionId, userId, entity: "upload", entityId: uploadId, action: "delete", before: toUploadDto(row) }, transaction);
+  await recordChange(
+    { productionId, userId, entity: "upload", entityId: uploadId, action: "delete", before: toUploadDto(row) },
+    transaction,
+  );
   return row.storageKey;
 }
 
 /** Removes the photo at the version the client read (409 when someone changed the fixture first). */
-export async function removeFocusPhoto(o: { productionId: number; fixtureId: number; version: number; userId: number }): Promise<FixtureDto> {
+export async function removeFocusPhoto(o: {
+  productionId: number;
+  fixtureId: number;
+  version: number;
+  userId: number;
+}): Promise<FixtureDto> {
   const { productionId, fixtureId, version, userId } = o;
   const existing = await fixtureRow(productionId, fixtureId);
   if (existing.focusPhotoUploadId == null && existing.version === version) {
-    throw new AppError("bad_request", "This unit has no focus photo to remove.", { fieldErrors: { file: ["no photo"] } });
+    throw new AppError("bad_request", "This unit has no focus photo to remove.", {
+      fieldErrors: { file: ["no photo"] },
+    });
   }
   const { Fixture } = getDb();
   let oldKey: string | null = null;
   await inTransaction(async (transaction) => {
-    const { before, after } = await versionedUpdate({ model: Fixture, scope: { productionId }, id: fixtureId, version, changes: { focusPhotoUploadId: null }, toDto: toFixtureRecord, what: "Fixture", transaction });
-    await recordChange({ productionId, userId, entity: "fixture", entityId: fixtureId, action: "update", before: toFixtureRecord(before), after: toFixtureRecord(after) }, transaction);
-    if (before.focusPhotoUploadId != null) oldKey = await dropUpload(productionId, before.focusPhotoUploadId, userId, transaction);
+    const { before, after } = await versionedUpdate({
+      model: Fixture,
+      scope: { productionId },
+      id: fixtureId,
+      version,
+      changes: { focusPhotoUploadId: null },
+      toDto: toFixtureRecord,
+      what: "Fixture",
+      transaction,
+    });
+    await recordChange(
+      {
+        productionId,
+        userId,
+        entity: "fixture",
+        entityId: fixtureId,
+        action: "update",
+        before: toFixtureRecord(before),
+        after: toFixtureRecord(after),
+      },
+      transaction,
+    );
+    if (before.focusPhotoUploadId != null)
+      oldKey = await dropUpload(productionId, before.focusPhotoUploadId, userId, transaction);
   });
   if (oldKey) await Promise.all([fileStore().delete(oldKey), fileStore().delete(thumbKeyOf(oldKey))]);
   return (await getFixtureById({ productionId, fixtureId }))!;
 }
 
 /** The fixture's current photo, full or small; 404 when it has none. */
-export async function readFocusPhoto({ productionId, fixtureId, size }: { productionId: number; fixtureId: number; size: "full" | "thumb" }) {
+export async function readFocusPhoto({
+  productionId,
+  fixtureId,
+  size,
+}: {
+  productionId: number;
+  fixtureId: number;
+  size: "full" | "thumb";
+}) {
   const fixture = await fixtureRow(productionId, fixtureId);
   if (fixture.focusPhotoUploadId == null) throw notFound("The focus photo");
-  const upload = await getDb().Upload.findOne({ where: { productionId, id: fixture.focusPhotoUploadId, kind: "focus-photo" } });
+  const upload = await getDb().Upload.findOne({
+    where: { productionId, id: fixture.focusPhotoUploadId, kind: "focus-photo" },
+  });
   if (!upload) throw notFound("The focus photo");
   const bytes = await fileStore().get(size === "thumb" ? thumbKeyOf(upload.storageKey) : upload.storageKey);
   if (!bytes) throw notFound("The stored photo");
@@ -127,10 +227,19 @@ export async function readFocusPhoto({ productionId, fixtureId, size }: { produc
  * The small copies as data: URLs, by upload id, for the server's PDF (its browser page has no session to
  * fetch them with). A small copy is 10–30 KB, so a part of 20 pages carries at most a few MB.
  */
-export async function focusPhotoThumbs({ productionId, uploadIds }: { productionId: number; uploadIds: number[] }): Promise<Map<number, string>> {
+export async function focusPhotoThumbs({
+  productionId,
+  uploadIds,
+}: {
+  productionId: number;
+  uploadIds: number[];
+}): Promise<Map<number, string>> {
   const out = new Map<number, string>();
   if (!uploadIds.length) return out;
-  const rows = await getDb().Upload.findAll({ where: { productionId, id: [...new Set(uploadIds)], kind: "focus-photo" }, attributes: ["id", "storageKey"] });
+  const rows = await getDb().Upload.findAll({
+    where: { productionId, id: [...new Set(uploadIds)], kind: "focus-photo" },
+    attributes: ["id", "storageKey"],
+  });
   const store = fileStore();
   for (let i = 0; i < rows.length; i += 32) {
     await Promise.all(
@@ -144,7 +253,10 @@ export async function focusPhotoThumbs({ productionId, uploadIds }: { production
 }
 
 /** Charts ready for the server's PDF: each photo as its small copy inline, without a link (the PDF has no session). */
-export async function withEmbeddedPhotos<C extends { photo: ChartPhoto | null }>(productionId: number, charts: C[]): Promise<C[]> {
+export async function withEmbeddedPhotos<C extends { photo: ChartPhoto | null }>(
+  productionId: number,
+  charts: C[],
+): Promise<C[]> {
   const ids = charts.flatMap((c) => (c.photo ? [c.photo.uploadId] : []));
   if (!ids.length) return charts;
   const thumbs = await focusPhotoThumbs({ productionId, uploadIds: ids });

@@ -7,10 +7,15 @@ import type { FocusPointDto } from "@/lib/dto/plan";
 import { plain } from "./plain";
 import { productionCrud } from "./production-crud";
 
+export const toFocusPointDto = (p: FocusPoint): FocusPointDto =>
+  plain(p, ["id", "productionId", "name", "x", "y", "version", "updatedAt"]);
 
-export const toFocusPointDto = (p: FocusPoint): FocusPointDto => plain(p, ["id", "productionId", "name", "x", "y", "version", "updatedAt"]);
-
-const focusPoints = productionCrud<FocusPoint, FocusPointDto, z.infer<typeof createFocusPointSchema>, z.infer<typeof updateFocusPointSchema>>({
+const focusPoints = productionCrud<
+  FocusPoint,
+  FocusPointDto,
+  z.infer<typeof createFocusPointSchema>,
+  z.infer<typeof updateFocusPointSchema>
+>({
   model: () => getDb().FocusPoint,
   entity: "focusPoint",
   what: "Focus point",

@@ -35,7 +35,18 @@ async function createPositions(productionId: number, names: string[], transactio
   const rows = names.map((name, i) => {
     const kind = guessKind(name);
     const line = !isPointHung(kind);
-    return { productionId, name, kind, x1: line ? -5 : 0, y1: 0, x2: line ? 5 : null, y2: line ? 0 : null, trimHeight: kind === "floor" ? 0 : 6, ratedLoadKg: null, sortOrder: top + 1 + i };
+    return {
+      productionId,
+      name,
+      kind,
+      x1: line ? -5 : 0,
+      y1: 0,
+      x2: line ? 5 : null,
+      y2: line ? 0 : null,
+      trimHeight: kind === "floor" ? 0 : 6,
+      ratedLoadKg: null,
+      sortOrder: top + 1 + i,
+    };
   });
   const created = await Position.bulkCreate(rows, { transaction });
   return new Map(created.map((p) => [lower(p.name), p]));
@@ -49,7 +60,18 @@ async function createTypes(productionId: number, names: string[], transaction: T
     const starter = STARTER_TYPES.find((t) => lower(t.name) === lower(name));
     return starter
       ? { ...starter, productionId, name }
-      : { productionId, name, family: "profile", coneMinDeg: 26, coneMaxDeg: 26, defaultSoftnessDeg: 2, peakCandela: 30000, dmxModes: [{ name: "dimmer", footprint: 1 }], frameSize: null, goboSize: null };
+      : {
+          productionId,
+          name,
+          family: "profile",
+          coneMinDeg: 26,
+          coneMaxDeg: 26,
+          defaultSoftnessDeg: 2,
+          peakCandela: 30000,
+          dmxModes: [{ name: "dimmer", footprint: 1 }],
+          frameSize: null,
+          goboSize: null,
+        };
   });
   const created = await FixtureType.bulkCreate(rows as never[], { transaction });
   return new Map(created.map((t) => [lower(t.name), t.id]));
@@ -81,16 +103,27 @@ async function updateChunk(productionId: number, chunk: UpdatePlan[], transactio
   replacements.push(productionId, ...chunk.map((u) => u.fixtureId));
   const sql = `UPDATE fixtures SET ${[...sets, "version = version + 1", "updated_at = NOW()"].join(", ")} WHERE version = CASE id ${versionWhens} END AND production_id = ? AND id IN (${chunk.map(() => "?").join(",")})`;
   // BULKUPDATE makes Sequelize answer with the number of affected rows.
-  const affected = (await sequelize.query(sql, { replacements: replacements.map(dbValue), transaction, type: QueryTypes.BULKUPDATE })) as unknown as number;
+  const affected = (await sequelize.query(sql, {
+    replacements: replacements.map(dbValue),
+    transaction,
+    type: QueryTypes.BULKUPDATE,
+  })) as unknown as number;
   if (affected !== chunk.length) {
-    throw new AppError("conflict", `Nothing was imported: a fixture in rows ${chunk[0].rowNumber}–${chunk[chunk.length - 1].rowNumber} was changed by someone else while the file was being checked. Check the file again.`);
+    throw new AppError(
+      "conflict",
+      `Nothing was imported: a fixture in rows ${chunk[0].rowNumber}–${chunk[chunk.length - 1].rowNumber} was changed by someone else while the file was being checked. Check the file again.`,
+    );
   }
 }
 
-const fieldOf = (attr: string) => (getDb().Fixture.getAttributes() as Record<string, { field?: string }>)[attr]?.field ?? attr;
+const fieldOf = (attr: string) =>
+  (getDb().Fixture.getAttributes() as Record<string, { field?: string }>)[attr]?.field ?? attr;
 
 async function idsByUnit(productionId: number, transaction: Transaction) {
-  const found = (await getDb().sequelize.query("SELECT id, position_id AS positionId, unit_number AS unitNumber FROM fixtures WHERE production_id = ?", { replacements: [productionId], type: QueryTypes.SELECT, transaction })) as Array<{ id: number; positionId: number; unitNumber: string }>;
+  const found = (await getDb().sequelize.query(
+    "SELECT id, position_id AS positionId, unit_number AS unitNumber FROM fixtures WHERE production_id = ?",
+    { replacements: [productionId], type: QueryTypes.SELECT, transaction },
+  )) as Array<{ id: number; positionId: number; unitNumber: string }>;
   return new Map(found.map((f) => [`${f.positionId}|${lower(f.unitNumber)}`, f.id]));
 }
 
@@ -116,11 +149,22 @@ function createdRecord(attrs: string[], row: unknown[], id: number) {
   return after;
 }
 
-const withSort = (changes: Record<string, unknown>) => (changes.unitNumber ? { ...changes, unitSort: unitSortKey(String(changes.unitNumber)) } : changes);
+const withSort = (changes: Record<string, unknown>) =>
+  changes.unitNumber ? { ...changes, unitSort: unitSortKey(String(changes.unitNumber)) } : changes;
 const dbValue = (v: unknown) => (typeof v === "boolean" ? Number(v) : v === undefined ? null : v);
 
 /** Writes a checked plan in one transaction: every row lands, or (on any error) none does. */
-export async function writeImport({ productionId, userId, plan, progress }: { productionId: number; userId: number; plan: ImportPlanResult; progress?: Progress }) {
+export async function writeImport({
+  productionId,
+  userId,
+  plan,
+  progress,
+}: {
+  productionId: number;
+  userId: number;
+  plan: ImportPlanResult;
+  progress?: Progress;
+}) {
   const { Position } = getDb();
   const creates = plan.plans.filter((p) => p.action === "create");
   const updates = plan.plans.filter((p): p is UpdatePlan => p.action === "update");
@@ -128,14 +172,31 @@ export async function writeImport({ productionId, userId, plan, progress }: { pr
   let done = 0;
   progress?.("writing", 0, total);
   await inTransaction(async (transaction) => {
-    const newPositions = plan.newPositions.length ? await createPositions(productionId, plan.newPositions, transaction) : new Map();
-    const newTypes = plan.newTypes.length ? await createTypes(productionId, plan.newTypes, transaction) : new Map<string, number>();
-    const positions = new Map((await Position.findAll({ where: { productionId }, transaction, raw: true })).map((p) => [p.id, p]));
+    const newPositions = plan.newPositions.length
+      ? await createPositions(productionId, plan.newPositions, transaction)
+      : new Map();
+    const newTypes = plan.newTypes.length
+      ? await createTypes(productionId, plan.newTypes, transaction)
+      : new Map<string, number>();
+    const positions = new Map(
+      (await Position.findAll({ where: { productionId }, transaction, raw: true })).map((p) => [p.id, p]),
+    );
     for (const p of newPositions.values()) positions.set(p.id, p);
 
     // Only the attributes some new row sets (names as in the model): every other column takes its table
     // default, which is EMPTY's value; a row that does not set an attribute another row sets gets EMPTY's.
-    const attrs = [...new Set(["productionId", "positionId", "fixtureTypeId", "unitNumber", "unitSort", "x", "y", ...creates.flatMap((c) => Object.keys(c.values))])];
+    const attrs = [
+      ...new Set([
+        "productionId",
+        "positionId",
+        "fixtureTypeId",
+        "unitNumber",
+        "unitSort",
+        "x",
+        "y",
+        ...creates.flatMap((c) => Object.keys(c.values)),
+      ]),
+    ];
     const at = new Map(attrs.map((a, i) => [a, i]));
     const rows = creates.map((c) => {
       const v = c.values as Record<string, unknown>;
@@ -157,7 +218,11 @@ export async function writeImport({ productionId, userId, plan, progress }: { pr
     const fields = attrs.map(fieldOf);
     for (let i = 0; i < rows.length; i += CHUNK) {
       const chunk = rows.slice(i, i + CHUNK);
-      await batchInsert(transaction, "fixtures", fields, chunk, { version: "1", created_at: "NOW()", updated_at: "NOW()" });
+      await batchInsert(transaction, "fixtures", fields, chunk, {
+        version: "1",
+        created_at: "NOW()",
+        updated_at: "NOW()",
+      });
       done += chunk.length;
       progress?.("writing", done, total);
     }
@@ -168,7 +233,15 @@ export async function writeImport({ productionId, userId, plan, progress }: { pr
       const ui = at.get("unitNumber")!;
       for (const r of rows) {
         const id = ids.get(`${r[pi]}|${lower(r[ui] as string)}`)!;
-        changes.push({ productionId, userId, entity: "fixture", entityId: id, action: "create", before: null, after: createdRecord(attrs, r, id) });
+        changes.push({
+          productionId,
+          userId,
+          entity: "fixture",
+          entityId: id,
+          action: "create",
+          before: null,
+          after: createdRecord(attrs, r, id),
+        });
         if (changes.length >= CHUNK) await writeChanges();
       }
       await writeChanges();
@@ -181,7 +254,15 @@ export async function writeImport({ productionId, userId, plan, progress }: { pr
         const before: Record<string, unknown> = { id: u.fixtureId };
         for (const attr of Object.keys(u.changes)) before[attr] = u.before[attr] ?? null;
         before.version = u.version;
-        changes.push({ productionId, userId, entity: "fixture", entityId: u.fixtureId, action: "update", before, after: { id: u.fixtureId, ...u.changes, version: u.version + 1 } });
+        changes.push({
+          productionId,
+          userId,
+          entity: "fixture",
+          entityId: u.fixtureId,
+          action: "update",
+          before,
+          after: { id: u.fixtureId, ...u.changes, version: u.version + 1 },
+        });
       }
       await writeChanges();
       done += chunk.length;

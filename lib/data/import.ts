@@ -16,9 +16,15 @@ import { jsonColumn } from "./json-column";
 import { writeImport } from "./import-write";
 import type { Progress } from "./import-progress";
 
-export type ImportRequest = { bytes: Uint8Array; fileName: string; sheet?: string; mapping?: ColumnTarget[]; lengthUnit?: LengthUnit; createMissing: boolean };
+export type ImportRequest = {
+  bytes: Uint8Array;
+  fileName: string;
+  sheet?: string;
+  mapping?: ColumnTarget[];
+  lengthUnit?: LengthUnit;
+  createMissing: boolean;
+};
 export type { Progress };
-
 
 const MAX_ERRORS = 500;
 
@@ -39,7 +45,8 @@ async function loadSnapshot(productionId: number, mapping: ColumnTarget[]): Prom
     Fixture.findAll({ where: { productionId }, attributes, raw: true }),
   ]);
   const bools = ["hung", "focused"].filter((a) => attributes.includes(a));
-  if (bools.length) for (const f of fixtures as unknown as Array<Record<string, unknown>>) for (const b of bools) f[b] = Boolean(f[b]);
+  if (bools.length)
+    for (const f of fixtures as unknown as Array<Record<string, unknown>>) for (const b of bools) f[b] = Boolean(f[b]);
   return {
     positions,
     types: types.map((t) => ({ ...t, dmxModes: jsonColumn<DmxMode[]>(t.dmxModes) })),
@@ -77,26 +84,48 @@ async function prepare(productionId: number, member: Member, req: ImportRequest,
   const production = await requireProduction(productionId);
   progress?.("reading", 0, 1);
   const table = await readTable(req.bytes, req.fileName, { sheet: req.sheet }).catch((err) => {
-    if (err instanceof FileProblem) throw new AppError("bad_request", err.message, { fieldErrors: { file: [err.message] } });
+    if (err instanceof FileProblem)
+      throw new AppError("bad_request", err.message, { fieldErrors: { file: [err.message] } });
     throw err;
   });
   const remembered = await getRememberedMapping(productionId);
   if (req.mapping && req.mapping.length !== table.headers.length) {
-    throw new AppError("bad_request", `The mapping has ${req.mapping.length} entries but the file has ${table.headers.length} columns. Check the file again.`, { fieldErrors: { mapping: ["does not match the file's columns"] } });
+    throw new AppError(
+      "bad_request",
+      `The mapping has ${req.mapping.length} entries but the file has ${table.headers.length} columns. Check the file again.`,
+      { fieldErrors: { mapping: ["does not match the file's columns"] } },
+    );
   }
   const mapping = req.mapping ?? suggestMapping(table.headers, remembered.columns);
-  const lengthUnit: LengthUnit = req.lengthUnit ?? remembered.lengthUnit ?? (production.displayUnits === "imperial" ? "ft" : "m");
+  const lengthUnit: LengthUnit =
+    req.lengthUnit ?? remembered.lengthUnit ?? (production.displayUnits === "imperial" ? "ft" : "m");
   const columnOf = (key: string) => table.headers[mapping.indexOf(key as ColumnTarget)] ?? key;
 
   let errors: RowError[] = [];
-  let plan: ImportPlanResult = { plans: [], errors: [], newPositions: [], newTypes: [], counts: { create: 0, update: 0, unchanged: 0 } };
+  let plan: ImportPlanResult = {
+    plans: [],
+    errors: [],
+    newPositions: [],
+    newTypes: [],
+    counts: { create: 0, update: 0, unchanged: 0 },
+  };
   const missing = missingRequiredColumns(mapping);
   if (missing.length) {
-    errors = [{ row: table.headerRowNumber, column: "(columns)", message: `No column is mapped to ${missing.join(" or ")}; every row needs them to find its fixture` }];
+    errors = [
+      {
+        row: table.headerRowNumber,
+        column: "(columns)",
+        message: `No column is mapped to ${missing.join(" or ")}; every row needs them to find its fixture`,
+      },
+    ];
   } else {
     progress?.("checking", 0, table.rows.length);
     const checked = await checkInSlices(table, mapping, lengthUnit, progress);
-    plan = planImport(checked.rows, await loadSnapshot(productionId, mapping), { member, createMissing: req.createMissing, columnOf });
+    plan = planImport(checked.rows, await loadSnapshot(productionId, mapping), {
+      member,
+      createMissing: req.createMissing,
+      columnOf,
+    });
     errors = [...checked.errors, ...plan.errors].sort((a, b) => a.row - b.row);
     progress?.("checking", table.rows.length, table.rows.length);
   }
@@ -120,18 +149,44 @@ async function prepare(productionId: number, member: Member, req: ImportRequest,
   return { preview, plan, table, mapping, lengthUnit };
 }
 
-export async function previewImport({ productionId, member, request, progress }: { productionId: number; member: Member; request: ImportRequest; progress?: Progress }): Promise<ImportPreview> {
+export async function previewImport({
+  productionId,
+  member,
+  request,
+  progress,
+}: {
+  productionId: number;
+  member: Member;
+  request: ImportRequest;
+  progress?: Progress;
+}): Promise<ImportPreview> {
   return (await prepare(productionId, member, request, progress)).preview;
 }
 
 /** Checks everything first; writes only when every row is good, all in one transaction. */
-export async function commitImport({ productionId, member, userId, request, progress }: { productionId: number; member: Member; userId: number; request: ImportRequest; progress?: Progress }) {
+export async function commitImport({
+  productionId,
+  member,
+  userId,
+  request,
+  progress,
+}: {
+  productionId: number;
+  member: Member;
+  userId: number;
+  request: ImportRequest;
+  progress?: Progress;
+}) {
   const { preview, plan, table, mapping, lengthUnit } = await prepare(productionId, member, request, progress);
   if (preview.errorCount) {
     const first = preview.errors[0];
-    throw new AppError("bad_request", `Nothing was imported: ${preview.errorCount} problem${preview.errorCount === 1 ? "" : "s"} to fix first (row ${first.row}, ${first.column}: ${first.message}).`, {
-      fieldErrors: { rows: preview.errors.map((e) => `Row ${e.row}, ${e.column}: ${e.message}`) },
-    });
+    throw new AppError(
+      "bad_request",
+      `Nothing was imported: ${preview.errorCount} problem${preview.errorCount === 1 ? "" : "s"} to fix first (row ${first.row}, ${first.column}: ${first.message}).`,
+      {
+        fieldErrors: { rows: preview.errors.map((e) => `Row ${e.row}, ${e.column}: ${e.message}`) },
+      },
+    );
   }
   await writeImport({ productionId, userId, plan, progress });
   const columns = Object.fromEntries(table.headers.map((h, i) => [normaliseHeader(h), mapping[i]]));

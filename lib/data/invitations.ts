@@ -34,26 +34,51 @@ async function inviterName(userId: number | null, transaction?: Transaction): Pr
  * message; an address with an invitation still open gets that invitation back with a fresh link (and
  * the new role), never a second one.
  */
-export async function createInvitation(a: { productionId: number; userId: number; email: string; role: Role }): Promise<IssuedInvitation> {
+export async function createInvitation(a: {
+  productionId: number;
+  userId: number;
+  email: string;
+  role: Role;
+}): Promise<IssuedInvitation> {
   const { sequelize, Invitation, Membership, User } = getDb();
   const email = normalise(a.email);
   return sequelize.transaction(async (transaction) => {
     // The production row is locked so two owners inviting the same address at once make one invitation.
-    await sequelize.query("SELECT id FROM productions WHERE id = ? FOR UPDATE", { replacements: [a.productionId], transaction });
+    await sequelize.query("SELECT id FROM productions WHERE id = ? FOR UPDATE", {
+      replacements: [a.productionId],
+      transaction,
+    });
     const user = await User.findOne({ where: { email }, attributes: ["id"], transaction });
     if (user && (await Membership.findOne({ where: { userId: user.id, productionId: a.productionId }, transaction })))
-      throw new AppError("conflict", `${email} is already on this production's team; change their role in the list instead.`, {
-        fieldErrors: { email: ["already on the team"] },
-      });
+      throw new AppError(
+        "conflict",
+        `${email} is already on this production's team; change their role in the list instead.`,
+        {
+          fieldErrors: { email: ["already on the team"] },
+        },
+      );
     const token = newLinkToken();
     const open = await Invitation.findOne({ where: openWhere(a.productionId, email), transaction });
     let row: Invitation;
     if (open) {
-      open.set({ role: a.role, tokenHash: hashLinkToken(token), expiresAt: expiry(), invitedByUserId: a.userId, version: open.version + 1 });
+      open.set({
+        role: a.role,
+        tokenHash: hashLinkToken(token),
+        expiresAt: expiry(),
+        invitedByUserId: a.userId,
+        version: open.version + 1,
+      });
       row = await open.save({ transaction });
     } else {
       row = await Invitation.create(
-        { productionId: a.productionId, email, role: a.role, tokenHash: hashLinkToken(token), invitedByUserId: a.userId, expiresAt: expiry() },
+        {
+          productionId: a.productionId,
+          email,
+          role: a.role,
+          tokenHash: hashLinkToken(token),
+          invitedByUserId: a.userId,
+          expiresAt: expiry(),
+        },
         { transaction },
       );
     }
@@ -79,26 +104,46 @@ export async function getOpenInvitations({ productionId }: { productionId: numbe
   const { Invitation, User } = getDb();
   const rows = await Invitation.findAll({ where: openWhere(productionId), order: [["id", "ASC"]] });
   const names = new Map(
-    (await User.findAll({ where: { id: rows.map((r) => r.invitedByUserId).filter((id): id is number => id !== null) }, attributes: ["id", "name"] })).map(
-      (u) => [u.id, u.name],
-    ),
+    (
+      await User.findAll({
+        where: { id: rows.map((r) => r.invitedByUserId).filter((id): id is number => id !== null) },
+        attributes: ["id", "name"],
+      })
+    ).map((u) => [u.id, u.name]),
   );
-  return rows.map((r) => ({ ...toDto(r), invitedBy: r.invitedByUserId ? (names.get(r.invitedByUserId) ?? null) : null }));
+  return rows.map((r) => ({
+    ...toDto(r),
+    invitedBy: r.invitedByUserId ? (names.get(r.invitedByUserId) ?? null) : null,
+  }));
 }
 
 async function openInvitation(productionId: number, id: number, transaction: Transaction): Promise<Invitation> {
-  const row = await getDb().Invitation.findOne({ where: { ...openWhere(productionId), id }, transaction, lock: transaction.LOCK.UPDATE });
-  if (!row) throw new AppError("not_found", "That invitation is no longer open (it was accepted, withdrawn or has expired).");
+  const row = await getDb().Invitation.findOne({
+    where: { ...openWhere(productionId), id },
+    transaction,
+    lock: transaction.LOCK.UPDATE,
+  });
+  if (!row)
+    throw new AppError("not_found", "That invitation is no longer open (it was accepted, withdrawn or has expired).");
   return row;
 }
 
 /** A new link for an open invitation (the old link stops working) and a new expiry. */
-export async function resendInvitation(a: { productionId: number; id: number; userId: number }): Promise<IssuedInvitation> {
+export async function resendInvitation(a: {
+  productionId: number;
+  id: number;
+  userId: number;
+}): Promise<IssuedInvitation> {
   const { sequelize } = getDb();
   return sequelize.transaction(async (transaction) => {
     const row = await openInvitation(a.productionId, a.id, transaction);
     const token = newLinkToken();
-    row.set({ tokenHash: hashLinkToken(token), expiresAt: expiry(), invitedByUserId: a.userId, version: row.version + 1 });
+    row.set({
+      tokenHash: hashLinkToken(token),
+      expiresAt: expiry(),
+      invitedByUserId: a.userId,
+      version: row.version + 1,
+    });
     await row.save({ transaction });
     return {
       invitation: { ...toDto(row), invitedBy: await inviterName(a.userId, transaction) },
@@ -148,7 +193,8 @@ function stateOf(row: Invitation | null): "invalid" | "used" | "withdrawn" | "ex
 }
 
 export const LINK_REFUSALS: Record<"invalid" | "used" | "withdrawn" | "expired", string> = {
-  invalid: "This invitation link is not valid. Check that the whole link was copied, or ask the production's owner for a new one.",
+  invalid:
+    "This invitation link is not valid. Check that the whole link was copied, or ask the production's owner for a new one.",
   used: "This invitation link has already been used. Sign in with the account that accepted it.",
   withdrawn: "This invitation was withdrawn by the production's owner.",
   expired: "This invitation link has expired. Ask the production's owner to send a new one.",
@@ -170,23 +216,43 @@ export async function acceptInvitation(a: {
   const passwordHash = a.newAccount && !a.signedInUserId ? await hashPassword(a.newAccount.password) : null;
   const { sequelize, Invitation, Membership, User } = getDb();
   return sequelize.transaction(async (transaction) => {
-    const row = await Invitation.findOne({ where: { tokenHash: hashLinkToken(a.token) }, transaction, lock: transaction.LOCK.UPDATE });
+    const row = await Invitation.findOne({
+      where: { tokenHash: hashLinkToken(a.token) },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     const state = stateOf(row);
-    if (state !== "open" || !row) throw new AppError(state === "invalid" ? "not_found" : "conflict", LINK_REFUSALS[state === "open" ? "invalid" : state]);
+    if (state !== "open" || !row)
+      throw new AppError(
+        state === "invalid" ? "not_found" : "conflict",
+        LINK_REFUSALS[state === "open" ? "invalid" : state],
+      );
     let userId = a.signedInUserId;
     let createdAccount = false;
     if (!userId) {
       if (await User.findOne({ where: { email: row.email }, attributes: ["id"], transaction }))
-        throw new AppError("conflict", `An account already uses ${row.email}. Sign in with it, then open this link again.`);
+        throw new AppError(
+          "conflict",
+          `An account already uses ${row.email}. Sign in with it, then open this link again.`,
+        );
       if (!a.newAccount || !passwordHash)
-        throw new AppError("bad_request", "Choose your name and a password to create your account.", { fieldErrors: { name: ["required"], password: ["required"] } });
-      const user = await User.create({ email: row.email, name: a.newAccount.name.trim(), passwordHash }, { transaction });
+        throw new AppError("bad_request", "Choose your name and a password to create your account.", {
+          fieldErrors: { name: ["required"], password: ["required"] },
+        });
+      const user = await User.create(
+        { email: row.email, name: a.newAccount.name.trim(), passwordHash },
+        { transaction },
+      );
       userId = user.id;
       createdAccount = true;
     }
     const existing = await Membership.findOne({ where: { userId, productionId: row.productionId }, transaction });
-    if (existing) throw new AppError("conflict", "You are already on this production's team; the invitation was not needed.");
-    await Membership.create({ userId, productionId: row.productionId, role: row.role, isOwner: false }, { transaction });
+    if (existing)
+      throw new AppError("conflict", "You are already on this production's team; the invitation was not needed.");
+    await Membership.create(
+      { userId, productionId: row.productionId, role: row.role, isOwner: false },
+      { transaction },
+    );
     row.set({ usedAt: new Date(), usedByUserId: userId, version: row.version + 1 });
     await row.save({ transaction });
     return { userId, productionId: row.productionId, role: row.role, createdAccount };

@@ -6,10 +6,15 @@ import type { LandmarkDto } from "@/lib/dto/plan";
 import { plain } from "./plain";
 import { productionCrud } from "./production-crud";
 
+export const toLandmarkDto = (l: Landmark): LandmarkDto =>
+  plain(l, ["id", "productionId", "name", "x1", "y1", "x2", "y2", "version", "updatedAt"]);
 
-export const toLandmarkDto = (l: Landmark): LandmarkDto => plain(l, ["id", "productionId", "name", "x1", "y1", "x2", "y2", "version", "updatedAt"]);
-
-const landmarks = productionCrud<Landmark, LandmarkDto, z.infer<typeof createLandmarkSchema>, z.infer<typeof updateLandmarkSchema>>({
+const landmarks = productionCrud<
+  Landmark,
+  LandmarkDto,
+  z.infer<typeof createLandmarkSchema>,
+  z.infer<typeof updateLandmarkSchema>
+>({
   model: () => getDb().Landmark,
   entity: "landmark",
   what: "Landmark",

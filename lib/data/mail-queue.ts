@@ -4,13 +4,30 @@ import { getDb } from "@/models";
 
 // Every message is written here before it is handed to the SMTP server, so a server that is down loses
 // nothing: the row stays queued with the failure, and is tried again later.
-export type QueuedMail = { id: number; productionId: number | null; to: string; subject: string; text: string; attempts: number };
-export type MailRecord = QueuedMail & { status: "queued" | "sent"; lastError: string | null; sentAt: Date | null; createdAt: Date };
+export type QueuedMail = {
+  id: number;
+  productionId: number | null;
+  to: string;
+  subject: string;
+  text: string;
+  attempts: number;
+};
+export type MailRecord = QueuedMail & {
+  status: "queued" | "sent";
+  lastError: string | null;
+  sentAt: Date | null;
+  createdAt: Date;
+};
 
 /** The wait before the next try after `attempts` failures: 1, 2, 4 … minutes, at most an hour. */
 export const retryDelaySeconds = (attempts: number) => Math.min(3600, 60 * 2 ** Math.max(0, attempts - 1));
 
-export async function enqueueMail(m: { productionId: number | null; to: string; subject: string; text: string }): Promise<QueuedMail> {
+export async function enqueueMail(m: {
+  productionId: number | null;
+  to: string;
+  subject: string;
+  text: string;
+}): Promise<QueuedMail> {
   const [id] = await getDb().sequelize.query(
     "INSERT INTO outgoing_mail (production_id, to_address, subject, body_text) VALUES (?, ?, ?, ?)",
     { replacements: [m.productionId, m.to, m.subject.slice(0, 300), m.text], type: QueryTypes.INSERT },

@@ -5,7 +5,13 @@ import { plain } from "./plain";
 
 const MEMBERSHIP_KEYS = ["userId", "productionId", "role", "isOwner"] as const;
 
-export async function getMembership({ userId, productionId }: { userId: number; productionId: number }): Promise<MembershipDto | null> {
+export async function getMembership({
+  userId,
+  productionId,
+}: {
+  userId: number;
+  productionId: number;
+}): Promise<MembershipDto | null> {
   const row = await getDb().Membership.findOne({ where: { userId, productionId } });
   return row ? plain(row, MEMBERSHIP_KEYS) : null;
 }

@@ -14,7 +14,9 @@ export const RESET_REFUSALS = {
 export type ResetState = keyof typeof RESET_REFUSALS | "open";
 
 /** A reset link for the account using `email`, or null when no account does (the caller answers the same either way). */
-export async function createPasswordReset(email: string): Promise<{ token: string; expiresAt: Date; userId: number } | null> {
+export async function createPasswordReset(
+  email: string,
+): Promise<{ token: string; expiresAt: Date; userId: number } | null> {
   const { User, sequelize } = getDb();
   const user = await User.findOne({ where: { email: normalise(email) }, attributes: ["id"] });
   if (!user) return null;
@@ -44,7 +46,10 @@ export async function lookUpPasswordReset(token: string): Promise<ResetState> {
  * Uses a reset link once: the new password hash is stored and the link marked used in one transaction
  * (the row locked, so two clicks change the password once). Returns the account's id and e-mail.
  */
-export async function usePasswordReset(a: { token: string; passwordHash: string }): Promise<{ userId: number; email: string }> {
+export async function consumePasswordReset(a: {
+  token: string;
+  passwordHash: string;
+}): Promise<{ userId: number; email: string }> {
   if (!LINK_TOKEN_PATTERN.test(a.token)) throw new AppError("not_found", RESET_REFUSALS.invalid);
   const { sequelize, User } = getDb();
   return sequelize.transaction(async (transaction) => {
@@ -59,7 +64,10 @@ export async function usePasswordReset(a: { token: string; passwordHash: string 
     user.set({ passwordHash: a.passwordHash, version: user.version + 1 });
     await user.save({ transaction });
     // Every other open link of the account goes too: one reset, one password.
-    await sequelize.query("UPDATE password_resets SET used_at = NOW(3) WHERE user_id = ? AND used_at IS NULL", { replacements: [user.id], transaction });
+    await sequelize.query("UPDATE password_resets SET used_at = NOW(3) WHERE user_id = ? AND used_at IS NULL", {
+      replacements: [user.id],
+      transaction,
+    });
     return { userId: user.id, email: user.email };
   });
 }

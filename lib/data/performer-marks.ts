@@ -7,9 +7,15 @@ import type { PerformerMarkDto } from "@/lib/dto/studies";
 import { plain } from "./plain";
 import { productionCrud } from "./production-crud";
 
-export const toPerformerMarkDto = (r: PerformerMark): PerformerMarkDto => plain(r, ["id", "productionId", "name", "x", "y", "height", "shoulderWidth", "version", "updatedAt"]);
+export const toPerformerMarkDto = (r: PerformerMark): PerformerMarkDto =>
+  plain(r, ["id", "productionId", "name", "x", "y", "height", "shoulderWidth", "version", "updatedAt"]);
 
-const rows = productionCrud<PerformerMark, PerformerMarkDto, z.infer<typeof createPerformerMarkSchema>, z.infer<typeof updatePerformerMarkSchema>>({
+const rows = productionCrud<
+  PerformerMark,
+  PerformerMarkDto,
+  z.infer<typeof createPerformerMarkSchema>,
+  z.infer<typeof updatePerformerMarkSchema>
+>({
   model: () => getDb().PerformerMark,
   entity: "performerMark",
   what: "Performer mark",

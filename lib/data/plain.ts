@@ -6,7 +6,13 @@ export const iso = (d: Date | string | null | undefined) => (d == null ? null : 
 
 /** A Date field becomes its ISO string (nullable stays nullable); everything else keeps its type. */
 // Brackets keep the check from distributing over a union (number | null must stay number | null).
-export type Plain<T> = [T] extends [Date] ? string : [T] extends [Date | null | undefined] ? ([T] extends [Date | undefined] ? string : string | null) : T;
+export type Plain<T> = [T] extends [Date]
+  ? string
+  : [T] extends [Date | null | undefined]
+    ? [T] extends [Date | undefined]
+      ? string
+      : string | null
+    : T;
 export type PlainPick<T, K extends keyof T> = { [P in K]: Plain<T[P]> };
 
 /** The listed fields of a row (a model instance or a raw row), dates as ISO strings. */

@@ -44,8 +44,18 @@ export async function getPlotWireData({ productionId }: { productionId: number }
   const pos = new Map(positions.map((p) => [p.id, p]));
   const rank = (id: number) => pos.get(id)?.sortOrder ?? 0;
   const name = (id: number) => pos.get(id)?.name ?? "";
-  records.sort((a, b) => rank(a.positionId) - rank(b.positionId) || name(a.positionId).localeCompare(name(b.positionId)));
-  return { positions, fixtures: records.map(toPlotFixtureWire), fixtureTypes, focusPoints, areaZones, landmarks, underlays };
+  records.sort(
+    (a, b) => rank(a.positionId) - rank(b.positionId) || name(a.positionId).localeCompare(name(b.positionId)),
+  );
+  return {
+    positions,
+    fixtures: records.map(toPlotFixtureWire),
+    fixtureTypes,
+    focusPoints,
+    areaZones,
+    landmarks,
+    underlays,
+  };
 }
 
 async function getPlotFixtureRecords(productionId: number): Promise<PlotFixtureRecord[]> {
@@ -53,7 +63,11 @@ async function getPlotFixtureRecords(productionId: number): Promise<PlotFixtureR
   const rows = (await getDb().Fixture.findAll({
     where: { productionId },
     attributes: [...PLOT_FIXTURE_FIELDS],
-    order: [["positionId", "ASC"], ["unitSort", "ASC"], ["cell", "ASC"]],
+    order: [
+      ["positionId", "ASC"],
+      ["unitSort", "ASC"],
+      ["cell", "ASC"],
+    ],
     raw: true,
   })) as unknown as Array<Record<string, unknown>>;
   return rows.map((f) => {

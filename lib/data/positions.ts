@@ -6,17 +6,38 @@ import type { PositionDto } from "@/lib/dto/plan";
 import { plain } from "./plain";
 import { productionCrud } from "./production-crud";
 
-
-const POSITION_KEYS = ["id", "productionId", "name", "kind", "x1", "y1", "x2", "y2", "trimHeight", "ratedLoadKg", "sortOrder", "version", "updatedAt"] as const;
+const POSITION_KEYS = [
+  "id",
+  "productionId",
+  "name",
+  "kind",
+  "x1",
+  "y1",
+  "x2",
+  "y2",
+  "trimHeight",
+  "ratedLoadKg",
+  "sortOrder",
+  "version",
+  "updatedAt",
+] as const;
 
 export const toPositionDto = (p: Position): PositionDto => plain(p, POSITION_KEYS);
 
-const positions = productionCrud<Position, PositionDto, z.infer<typeof createPositionSchema>, z.infer<typeof updatePositionSchema>>({
+const positions = productionCrud<
+  Position,
+  PositionDto,
+  z.infer<typeof createPositionSchema>,
+  z.infer<typeof updatePositionSchema>
+>({
   model: () => getDb().Position,
   entity: "position",
   what: "Position",
   toDto: toPositionDto,
-  order: [["sortOrder", "ASC"], ["name", "ASC"]],
+  order: [
+    ["sortOrder", "ASC"],
+    ["name", "ASC"],
+  ],
   // A new position goes after the last one unless the caller places it.
   prepareCreate: async (input, { productionId, transaction }) => {
     const last = (await getDb().Position.max("sortOrder", { where: { productionId }, transaction })) as number | null;

@@ -13,7 +13,12 @@ type Ids = { productionId: number; userId: number };
  * acting areas, landmarks): list in a fixed order, create with a unique name, versioned update, delete —
  * each write in one transaction with its change-log entry. Entity-specific rules hook in where they differ.
  */
-export function productionCrud<M extends Model & { id: number }, Dto, CreateInput extends object, Patch extends { version: number }>(spec: {
+export function productionCrud<
+  M extends Model & { id: number },
+  Dto,
+  CreateInput extends object,
+  Patch extends { version: number },
+>(spec: {
   /** The model, looked up lazily (models are created on first use). */
   model: () => ModelStatic<M>;
   /** Change-log entity name, e.g. "focusPoint". */
@@ -23,7 +28,10 @@ export function productionCrud<M extends Model & { id: number }, Dto, CreateInpu
   toDto: (row: M) => Dto;
   order: Order;
   /** Values to write for a new row (defaults for nullable columns, derived fields). */
-  prepareCreate?: (input: CreateInput, ctx: { productionId: number; transaction: Transaction }) => Promise<object> | object;
+  prepareCreate?: (
+    input: CreateInput,
+    ctx: { productionId: number; transaction: Transaction },
+  ) => Promise<object> | object;
   /** Runs before the row is destroyed; may refuse (throw) or tidy dependants. Returns extra facts for the change log. */
   beforeDelete?: (row: M, ctx: { productionId: number; transaction: Transaction }) => Promise<object | void>;
 }) {
@@ -37,9 +45,15 @@ export function productionCrud<M extends Model & { id: number }, Dto, CreateInpu
   async function create({ productionId, userId, input }: Ids & { input: CreateInput }): Promise<Dto> {
     return inTransaction(async (transaction) => {
       const values = spec.prepareCreate ? await spec.prepareCreate(input, { productionId, transaction }) : input;
-      const row = await spec.model().create({ ...values, productionId } as never, { transaction }).catch(uniqueNameError(lower));
+      const row = await spec
+        .model()
+        .create({ ...values, productionId } as never, { transaction })
+        .catch(uniqueNameError(lower));
       const after = spec.toDto(row);
-      await recordChange({ productionId, userId, entity: spec.entity, entityId: row.id, action: "create", after: after as object }, transaction);
+      await recordChange(
+        { productionId, userId, entity: spec.entity, entityId: row.id, action: "create", after: after as object },
+        transaction,
+      );
       return after;
     });
   }
@@ -48,9 +62,29 @@ export function productionCrud<M extends Model & { id: number }, Dto, CreateInpu
     const { version, ...changes } = patch;
     if (!Object.keys(changes).length) throw new AppError("bad_request", "Nothing to change: send at least one field.");
     return inTransaction(async (transaction) => {
-      const { before, after } = await versionedUpdate({ model: spec.model(), scope: { productionId }, id, version, changes, toDto: spec.toDto, what: spec.what, transaction }).catch(uniqueNameError(lower));
+      const { before, after } = await versionedUpdate({
+        model: spec.model(),
+        scope: { productionId },
+        id,
+        version,
+        changes,
+        toDto: spec.toDto,
+        what: spec.what,
+        transaction,
+      }).catch(uniqueNameError(lower));
       const afterDto = spec.toDto(after);
-      await recordChange({ productionId, userId, entity: spec.entity, entityId: id, action: "update", before: spec.toDto(before) as object, after: afterDto as object }, transaction);
+      await recordChange(
+        {
+          productionId,
+          userId,
+          entity: spec.entity,
+          entityId: id,
+          action: "update",
+          before: spec.toDto(before) as object,
+          after: afterDto as object,
+        },
+        transaction,
+      );
       return afterDto;
     });
   }
@@ -61,7 +95,17 @@ export function productionCrud<M extends Model & { id: number }, Dto, CreateInpu
       if (!row) throw notFound(spec.what);
       const extra = spec.beforeDelete ? await spec.beforeDelete(row, { productionId, transaction }) : undefined;
       await row.destroy({ transaction });
-      await recordChange({ productionId, userId, entity: spec.entity, entityId: id, action: "delete", before: { ...(spec.toDto(row) as object), ...(extra ?? {}) } }, transaction);
+      await recordChange(
+        {
+          productionId,
+          userId,
+          entity: spec.entity,
+          entityId: id,
+          action: "delete",
+          before: { ...(spec.toDto(row) as object), ...(extra ?? {}) },
+        },
+        transaction,
+      );
     });
   }
 

@@ -9,8 +9,26 @@ import { recordChange } from "./changes";
 import { inTransaction } from "./transaction";
 
 const PRODUCTION_KEYS = [
-  "id", "name", "venue", "displayUnits", "datumName", "headHeight", "faceHeight", "showDeckHeight", "backWallY", "prosceniumWidth", "prosceniumHeight", "stageWidth", "stageDepth",
-  "apronDepth", "voltage", "derating", "numberingRule", "version", "createdAt", "updatedAt",
+  "id",
+  "name",
+  "venue",
+  "displayUnits",
+  "datumName",
+  "headHeight",
+  "faceHeight",
+  "showDeckHeight",
+  "backWallY",
+  "prosceniumWidth",
+  "prosceniumHeight",
+  "stageWidth",
+  "stageDepth",
+  "apronDepth",
+  "voltage",
+  "derating",
+  "numberingRule",
+  "version",
+  "createdAt",
+  "updatedAt",
 ] as const;
 
 export const toProductionDto = (p: Production): ProductionDto => plain(p, PRODUCTION_KEYS);
@@ -24,7 +42,10 @@ export async function getProductionsByUser({ userId }: { userId: number }): Prom
   });
   const ids = memberships.map((m) => m.productionId);
   const counts = ids.length
-    ? ((await Fixture.count({ where: { productionId: ids }, group: ["productionId"] })) as unknown as Array<{ productionId: number; count: number }>)
+    ? ((await Fixture.count({ where: { productionId: ids }, group: ["productionId"] })) as unknown as Array<{
+        productionId: number;
+        count: number;
+      }>)
     : [];
   const byId = new Map(counts.map((c) => [c.productionId, Number(c.count)]));
   return memberships.map((m) => ({
@@ -36,12 +57,32 @@ export async function getProductionsByUser({ userId }: { userId: number }): Prom
 }
 
 /** Creates a production; its creator becomes the owner and its designer. */
-export async function createProduction({ userId, name, venue, displayUnits }: { userId: number; name: string; venue: string; displayUnits: "metric" | "imperial" }) {
+export async function createProduction({
+  userId,
+  name,
+  venue,
+  displayUnits,
+}: {
+  userId: number;
+  name: string;
+  venue: string;
+  displayUnits: "metric" | "imperial";
+}) {
   const { Production, Membership } = getDb();
   return inTransaction(async (transaction) => {
     const production = await Production.create({ name, venue, displayUnits }, { transaction });
     await Membership.create({ userId, productionId: production.id, role: "designer", isOwner: true }, { transaction });
-    await recordChange({ productionId: production.id, userId, entity: "production", entityId: production.id, action: "create", after: toProductionDto(production) }, transaction);
+    await recordChange(
+      {
+        productionId: production.id,
+        userId,
+        entity: "production",
+        entityId: production.id,
+        action: "create",
+        after: toProductionDto(production),
+      },
+      transaction,
+    );
     return toProductionDto(production);
   });
 }
@@ -51,13 +92,19 @@ export async function getProductionById({ productionId }: { productionId: number
   return row ? toProductionDto(row) : null;
 }
 
-export async function updateProductionSettings({ productionId, version, changes, userId }: {
+export async function updateProductionSettings({
+  productionId,
+  version,
+  changes,
+  userId,
+}: {
   productionId: number;
   version: number;
   changes: Partial<ProductionSettings>;
   userId: number;
 }): Promise<ProductionDto> {
-  if (Object.keys(changes).length === 0) throw new AppError("bad_request", "Nothing to change: send at least one setting.");
+  if (Object.keys(changes).length === 0)
+    throw new AppError("bad_request", "Nothing to change: send at least one setting.");
   const { Production } = getDb();
   return inTransaction(async (transaction) => {
     const { before, after } = await versionedUpdate({
@@ -70,11 +117,21 @@ export async function updateProductionSettings({ productionId, version, changes,
       what: "Production",
       transaction,
     });
-    await recordChange({ productionId, userId, entity: "production", entityId: productionId, action: "update", before: toProductionDto(before), after: toProductionDto(after) }, transaction);
+    await recordChange(
+      {
+        productionId,
+        userId,
+        entity: "production",
+        entityId: productionId,
+        action: "update",
+        before: toProductionDto(before),
+        after: toProductionDto(after),
+      },
+      transaction,
+    );
     return toProductionDto(after);
   });
 }
-
 
 export async function getProductionOverview({ productionId }: { productionId: number }): Promise<ProductionOverview> {
   const { Position, Fixture, Cue, FocusPoint } = getDb();

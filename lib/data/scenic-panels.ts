@@ -7,9 +7,15 @@ import type { ScenicPanelDto } from "@/lib/dto/studies";
 import { plain } from "./plain";
 import { productionCrud } from "./production-crud";
 
-export const toScenicPanelDto = (r: ScenicPanel): ScenicPanelDto => plain(r, ["id", "productionId", "name", "x1", "y1", "x2", "y2", "height", "version", "updatedAt"]);
+export const toScenicPanelDto = (r: ScenicPanel): ScenicPanelDto =>
+  plain(r, ["id", "productionId", "name", "x1", "y1", "x2", "y2", "height", "version", "updatedAt"]);
 
-const rows = productionCrud<ScenicPanel, ScenicPanelDto, z.infer<typeof createScenicPanelSchema>, z.infer<typeof updateScenicPanelSchema>>({
+const rows = productionCrud<
+  ScenicPanel,
+  ScenicPanelDto,
+  z.infer<typeof createScenicPanelSchema>,
+  z.infer<typeof updateScenicPanelSchema>
+>({
   model: () => getDb().ScenicPanel,
   entity: "scenicPanel",
   what: "Scenery panel",

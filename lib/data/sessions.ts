@@ -8,11 +8,20 @@ import type { UserDto } from "@/lib/dto/people";
 const hash = (token: string) => createHash("sha256").update(token).digest("hex");
 
 /** Starts a session record for a user; the returned token goes into the sealed cookie. */
-export async function createSessionRecord({ userId, ttlSeconds }: { userId: number; ttlSeconds: number }): Promise<string> {
+export async function createSessionRecord({
+  userId,
+  ttlSeconds,
+}: {
+  userId: number;
+  ttlSeconds: number;
+}): Promise<string> {
   const token = randomBytes(32).toString("base64url");
-  await getDb().sequelize.query("INSERT INTO user_sessions (token_hash, user_id, expires_at) VALUES (?, ?, NOW(3) + INTERVAL ? SECOND)", {
-    replacements: [hash(token), userId, ttlSeconds],
-  });
+  await getDb().sequelize.query(
+    "INSERT INTO user_sessions (token_hash, user_id, expires_at) VALUES (?, ?, NOW(3) + INTERVAL ? SECOND)",
+    {
+      replacements: [hash(token), userId, ttlSeconds],
+    },
+  );
   return token;
 }
 

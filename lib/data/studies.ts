@@ -27,7 +27,18 @@ export type StudyProduction = {
 export async function getStudyProduction({ productionId }: { productionId: number }): Promise<StudyProduction> {
   const row = (await getDb().Production.findOne({
     where: { id: productionId },
-    attributes: ["id", "displayUnits", "headHeight", "faceHeight", "showDeckHeight", "backWallY", "stageWidth", "stageDepth", "apronDepth", "prosceniumWidth"],
+    attributes: [
+      "id",
+      "displayUnits",
+      "headHeight",
+      "faceHeight",
+      "showDeckHeight",
+      "backWallY",
+      "stageWidth",
+      "stageDepth",
+      "apronDepth",
+      "prosceniumWidth",
+    ],
     raw: true,
   })) as unknown as StudyProduction | null;
   if (!row) throw notFound("Production");
@@ -35,9 +46,21 @@ export async function getStudyProduction({ productionId }: { productionId: numbe
 }
 
 type FixtureRow = {
-  id: number; unitNumber: string; positionId: number; fixtureTypeId: number; focusPointId: number | null; channel: number | null;
-  colour: string | null; x: number; y: number; lensHeight: number | null; focusX: number | null; focusY: number | null;
-  aim: "deck" | "head"; coneDeg: number | null; softnessDeg: number | null;
+  id: number;
+  unitNumber: string;
+  positionId: number;
+  fixtureTypeId: number;
+  focusPointId: number | null;
+  channel: number | null;
+  colour: string | null;
+  x: number;
+  y: number;
+  lensHeight: number | null;
+  focusX: number | null;
+  focusY: number | null;
+  aim: "deck" | "head";
+  coneDeg: number | null;
+  softnessDeg: number | null;
 };
 
 /** Every unit of the production with its position's trim, its type's optics and its focus mark resolved. */
@@ -46,12 +69,46 @@ export async function getStudyFixtures({ productionId }: { productionId: number 
   const [fixtures, positions, types, points] = await Promise.all([
     Fixture.findAll({
       where: { productionId },
-      attributes: ["id", "unitNumber", "positionId", "fixtureTypeId", "focusPointId", "channel", "colour", "x", "y", "lensHeight", "focusX", "focusY", "aim", "coneDeg", "softnessDeg"],
-      order: [["positionId", "ASC"], ["unitSort", "ASC"], ["cell", "ASC"]],
+      attributes: [
+        "id",
+        "unitNumber",
+        "positionId",
+        "fixtureTypeId",
+        "focusPointId",
+        "channel",
+        "colour",
+        "x",
+        "y",
+        "lensHeight",
+        "focusX",
+        "focusY",
+        "aim",
+        "coneDeg",
+        "softnessDeg",
+      ],
+      order: [
+        ["positionId", "ASC"],
+        ["unitSort", "ASC"],
+        ["cell", "ASC"],
+      ],
       raw: true,
     }) as unknown as Promise<FixtureRow[]>,
     Position.findAll({ where: { productionId }, attributes: ["id", "name", "trimHeight"], raw: true }),
-    FixtureType.findAll({ where: { productionId }, attributes: ["id", "family", "coneMinDeg", "coneMaxDeg", "defaultSoftnessDeg", "lensDropM", "lensApertureM", "peakCandela", "peakCandelaNarrow"], raw: true }),
+    FixtureType.findAll({
+      where: { productionId },
+      attributes: [
+        "id",
+        "family",
+        "coneMinDeg",
+        "coneMaxDeg",
+        "defaultSoftnessDeg",
+        "lensDropM",
+        "lensApertureM",
+        "peakCandela",
+        "peakCandelaNarrow",
+      ],
+      raw: true,
+    }),
     FocusPoint.findAll({ where: { productionId }, attributes: ["id", "x", "y"], raw: true }),
   ]);
   const pos = new Map(positions.map((p) => [p.id, p]));
@@ -63,18 +120,48 @@ export async function getStudyFixtures({ productionId }: { productionId: number 
     const t = typ.get(f.fixtureTypeId);
     if (!p || !t) continue;
     const point = f.focusPointId != null ? pts.get(f.focusPointId) : undefined;
-    const focus = point ? { x: point.x, y: point.y } : f.focusX != null && f.focusY != null ? { x: f.focusX, y: f.focusY } : null;
+    const focus = point
+      ? { x: point.x, y: point.y }
+      : f.focusX != null && f.focusY != null
+        ? { x: f.focusX, y: f.focusY }
+        : null;
     out.push({
-      id: f.id, unitNumber: f.unitNumber, positionName: p.name, channel: f.channel, colour: f.colour, x: f.x, y: f.y,
-      lensHeight: f.lensHeight, trimHeight: p.trimHeight, focus, aim: f.aim, coneDeg: f.coneDeg, softnessDeg: f.softnessDeg,
-      type: { family: t.family, coneMaxDeg: t.coneMaxDeg, defaultSoftnessDeg: t.defaultSoftnessDeg, lensDropM: t.lensDropM, lensApertureM: t.lensApertureM, peakCandela: t.peakCandela, coneMinDeg: t.coneMinDeg, peakCandelaNarrow: t.peakCandelaNarrow },
+      id: f.id,
+      unitNumber: f.unitNumber,
+      positionName: p.name,
+      channel: f.channel,
+      colour: f.colour,
+      x: f.x,
+      y: f.y,
+      lensHeight: f.lensHeight,
+      trimHeight: p.trimHeight,
+      focus,
+      aim: f.aim,
+      coneDeg: f.coneDeg,
+      softnessDeg: f.softnessDeg,
+      type: {
+        family: t.family,
+        coneMaxDeg: t.coneMaxDeg,
+        defaultSoftnessDeg: t.defaultSoftnessDeg,
+        lensDropM: t.lensDropM,
+        lensApertureM: t.lensApertureM,
+        peakCandela: t.peakCandela,
+        coneMinDeg: t.coneMinDeg,
+        peakCandelaNarrow: t.peakCandelaNarrow,
+      },
     });
   }
   return out;
 }
 
 /** Channel levels (0–100) of the chosen light: a cue's tracked state, all at full, or hand-picked channels. */
-export async function getStudyLevels({ productionId, source }: { productionId: number; source: LightSource }): Promise<{ levels: Levels; label: string }> {
+export async function getStudyLevels({
+  productionId,
+  source,
+}: {
+  productionId: number;
+  source: LightSource;
+}): Promise<{ levels: Levels; label: string }> {
   if (source.kind === "full") return { levels: "full", label: "All units at full" };
   if (source.kind === "channels") {
     const m = new Map(Object.entries(source.levels).map(([ch, lv]) => [Number(ch), lv]));
@@ -83,7 +170,10 @@ export async function getStudyLevels({ productionId, source }: { productionId: n
   const cues = await getCuesByProduction({ productionId });
   const show = computeTracking(cues);
   const index = show.cueIds.indexOf(source.cueId);
-  if (index < 0) throw new AppError("not_found", "That cue was not found in this production.", { fieldErrors: { "source.cueId": ["no such cue"] } });
+  if (index < 0)
+    throw new AppError("not_found", "That cue was not found in this production.", {
+      fieldErrors: { "source.cueId": ["no such cue"] },
+    });
   const levels = new Map<number, number>();
   show.states[index].forEach((lv, col) => {
     if (lv > 0) levels.set(show.channels[col], lv);
@@ -93,7 +183,11 @@ export async function getStudyLevels({ productionId, source }: { productionId: n
 }
 
 export async function getColourList({ productionId }: { productionId: number }): Promise<Map<string, number>> {
-  const rows = await getDb().ColourTransmission.findAll({ where: { productionId }, attributes: ["name", "percent"], raw: true });
+  const rows = await getDb().ColourTransmission.findAll({
+    where: { productionId },
+    attributes: ["name", "percent"],
+    raw: true,
+  });
   return new Map(rows.map((r) => [r.name, r.percent]));
 }
 
@@ -107,9 +201,13 @@ export async function runCoverageStudy({ productionId, request }: { productionId
     getAreaZonesByProduction({ productionId }),
   ]);
   const result = computeCoverage(request, {
-    fixtures, levels: state.levels, colours,
+    fixtures,
+    levels: state.levels,
+    colours,
     areas: zones.map((z) => ({ id: z.id, name: z.name, polygon: z.polygon })),
-    headHeight: production.headHeight, faceHeight: production.faceHeight, deckHeight: production.showDeckHeight,
+    headHeight: production.headHeight,
+    faceHeight: production.faceHeight,
+    deckHeight: production.showDeckHeight,
     bounds: stageBounds(production),
   });
   return { ...result, stateLabel: state.label, displayUnits: production.displayUnits };

@@ -5,7 +5,11 @@ import { AppError } from "@/lib/errors";
 import { DUMMY_HASH, hashPassword, verifyPassword } from "@/lib/auth/password";
 import type { UserDto } from "@/lib/dto/people";
 
-const toUserDto = (u: { id: number; email: string; name: string }): UserDto => ({ id: u.id, email: u.email, name: u.name });
+const toUserDto = (u: { id: number; email: string; name: string }): UserDto => ({
+  id: u.id,
+  email: u.email,
+  name: u.name,
+});
 
 const normalise = (email: string) => email.trim().toLowerCase();
 
@@ -18,10 +22,22 @@ export async function authenticate({ email, password }: { email: string; passwor
   return toUserDto(user);
 }
 
-export async function createUser({ email, name, password }: { email: string; name: string; password: string }): Promise<UserDto> {
+export async function createUser({
+  email,
+  name,
+  password,
+}: {
+  email: string;
+  name: string;
+  password: string;
+}): Promise<UserDto> {
   const { User } = getDb();
   try {
-    const user = await User.create({ email: normalise(email), name: name.trim(), passwordHash: await hashPassword(password) });
+    const user = await User.create({
+      email: normalise(email),
+      name: name.trim(),
+      passwordHash: await hashPassword(password),
+    });
     return toUserDto(user);
   } catch (err) {
     if (err instanceof UniqueConstraintError) {

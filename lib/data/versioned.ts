@@ -30,9 +30,13 @@ export async function versionedUpdate<M extends Model, Dto>(opts: {
   if (count === 0) {
     const current = await model.findOne({ where, transaction, ...lock });
     if (!current) throw notFound(what);
-    throw new AppError("conflict", `Someone else changed this ${what.toLowerCase()} first. Here is the current version.`, {
-      current: toDto(current),
-    });
+    throw new AppError(
+      "conflict",
+      `Someone else changed this ${what.toLowerCase()} first. Here is the current version.`,
+      {
+        current: toDto(current),
+      },
+    );
   }
   const after = await model.findOne({ where, transaction });
   return { before, after: after! };

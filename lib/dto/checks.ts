@@ -4,9 +4,26 @@ import type { ChecksResult } from "@/lib/checks";
 import type { EffectiveElectrical, ElectricalCode, SupplySystem } from "@/lib/checks/electrical";
 import type { CircuitPower } from "@/models/circuit";
 
-export type CircuitDto = { id: number; productionId: number; name: string; ratingA: number; phase: string | null; power: CircuitPower; version: number; updatedAt: string };
+export type CircuitDto = {
+  id: number;
+  productionId: number;
+  name: string;
+  ratingA: number;
+  phase: string | null;
+  power: CircuitPower;
+  version: number;
+  updatedAt: string;
+};
 
-export type DataLineDto = { id: number; productionId: number; name: string; universe: number | null; fixtureIds: number[]; version: number; updatedAt: string };
+export type DataLineDto = {
+  id: number;
+  productionId: number;
+  name: string;
+  universe: number | null;
+  fixtureIds: number[];
+  version: number;
+  updatedAt: string;
+};
 
 /** The production's settings the checks use; derating null means the code's default. */
 export type ElectricalSettingsDto = {

@@ -1,8 +1,36 @@
 import type { AreaCoverage, DimmerCurve } from "@/lib/optics";
 
-export type PerformerMarkDto = { id: number; productionId: number; name: string; x: number; y: number; height: number; shoulderWidth: number; version: number; updatedAt: string };
-export type ScenicPanelDto = { id: number; productionId: number; name: string; x1: number; y1: number; x2: number; y2: number; height: number; version: number; updatedAt: string };
-export type ColourTransmissionDto = { id: number; productionId: number; name: string; percent: number; version: number; updatedAt: string };
+export type PerformerMarkDto = {
+  id: number;
+  productionId: number;
+  name: string;
+  x: number;
+  y: number;
+  height: number;
+  shoulderWidth: number;
+  version: number;
+  updatedAt: string;
+};
+export type ScenicPanelDto = {
+  id: number;
+  productionId: number;
+  name: string;
+  x1: number;
+  y1: number;
+  x2: number;
+  y2: number;
+  height: number;
+  version: number;
+  updatedAt: string;
+};
+export type ColourTransmissionDto = {
+  id: number;
+  productionId: number;
+  name: string;
+  percent: number;
+  version: number;
+  updatedAt: string;
+};
 
 /** A unit that gives light in the study, as the browser needs it to draw, recompute shadows and name keys. */
 export type StudyLight = {
@@ -27,8 +55,14 @@ export type StudyLight = {
 
 /** A grid as sent: float32 cells in base64 (row-major, rows upstage from originY). */
 export type GridWire = {
-  cols: number; rows: number; resolution: number; originX: number; originY: number;
-  min: number; mean: number; max: number;
+  cols: number;
+  rows: number;
+  resolution: number;
+  originX: number;
+  originY: number;
+  min: number;
+  mean: number;
+  max: number;
   values: string;
   /** Face light: the key's index in `lights` per cell (int32, −1 when dark) and its lux (float32). */
   key?: string;
@@ -62,4 +96,10 @@ export type FixtureShadow = {
 };
 
 export type OccluderShadows = { kind: "performer" | "panel"; id: number; name: string; shadows: FixtureShadow[] };
-export type ShadowResult = { occluders: OccluderShadows[]; lights: StudyLight[]; backWallY: number; deckHeight: number; warnings: string[] };
+export type ShadowResult = {
+  occluders: OccluderShadows[];
+  lights: StudyLight[];
+  backWallY: number;
+  deckHeight: number;
+  warnings: string[];
+};

@@ -2,7 +2,15 @@
 // deck words, so the screen, the printed page, the PDF and the Excel sheet all say the same thing.
 import type { FixtureDto } from "@/lib/dto/fixture";
 import {
-  describeBeam, describePoint, edgeWord, formatLength, profileShapeOf, type Family, type PlanePool, type Point, type Units,
+  describeBeam,
+  describePoint,
+  edgeWord,
+  formatLength,
+  profileShapeOf,
+  type Family,
+  type PlanePool,
+  type Point,
+  type Units,
 } from "@/lib/optics";
 import { mergeLandmarks, outlineLandmarks, type Landmark, type StageDimensions } from "./landmarks";
 import { readCut, type CutReading } from "./shutters";
@@ -38,7 +46,11 @@ export type FocusChart = {
   fixture: FixtureDto;
 };
 
-const row = (key: string, label: string, value: string | null | undefined): ChartRow => ({ key, label, value: value?.trim() ? value : "—" });
+const row = (key: string, label: string, value: string | null | undefined): ChartRow => ({
+  key,
+  label,
+  value: value?.trim() ? value : "—",
+});
 
 function familyShape(family: string): "flat" | "peaked" | null {
   try {
@@ -70,7 +82,8 @@ function bandWords(pool: PlanePool | null, units: Units): string {
 
 function hotSpotWords(f: FixtureDto, mark: Point, units: Units, shape: "flat" | "peaked" | null): string {
   const at = f.aim === "head" ? "at head height" : "on the deck";
-  const lead = shape === "flat" ? `Flat field, even across the core; axis on the mark ${at}` : `Brightest on the mark ${at}`;
+  const lead =
+    shape === "flat" ? `Flat field, even across the core; axis on the mark ${at}` : `Brightest on the mark ${at}`;
   const hit = f.aim === "head" ? f.computed.deck?.axisHit : null;
   return hit ? `${lead}; axis reaches the deck ${offsetFromMark(hit, mark, units)}` : lead;
 }
@@ -78,7 +91,12 @@ function hotSpotWords(f: FixtureDto, mark: Point, units: Units, shape: "flat" | 
 export function buildFocusChart(
   f: FixtureDto,
   p: ChartProduction,
-  o: { landmarks?: Landmark[] | null; userNames?: Record<number, string>; timeZone?: string; extras?: ChartExtras } = {},
+  o: {
+    landmarks?: Landmark[] | null;
+    userNames?: Record<number, string>;
+    timeZone?: string;
+    extras?: ChartExtras;
+  } = {},
 ): FocusChart {
   const units = p.displayUnits;
   const len = (v: number | null | undefined) => (v == null ? null : formatLength(v, units));
@@ -93,7 +111,18 @@ export function buildFocusChart(
   for (const [i, cut] of (f.shutterCuts ?? []).entries()) {
     if (!mark) break;
     try {
-      cuts.push(readCut(cut, { mark, panDeg: g.panDeg, tiltDeg: g.tiltDeg, family: f.family, landmarks, units, datumName: p.datumName, poolReach: poolReach(g.deck, mark) }));
+      cuts.push(
+        readCut(cut, {
+          mark,
+          panDeg: g.panDeg,
+          tiltDeg: g.tiltDeg,
+          family: f.family,
+          landmarks,
+          units,
+          datumName: p.datumName,
+          poolReach: poolReach(g.deck, mark),
+        }),
+      );
     } catch (err) {
       warnings.push(`Cut ${i + 1}: ${(err as Error).message}`);
     }
@@ -109,11 +138,19 @@ export function buildFocusChart(
     row("type", "Type", f.typeName),
     row("colour", "Colour", f.colour),
     row("gobo", "Gobo", f.gobo),
-    row("accessories", "Accessories", o.extras?.accessories?.length ? o.extras.accessories.join(", ") : "none recorded"),
+    row(
+      "accessories",
+      "Accessories",
+      o.extras?.accessories?.length ? o.extras.accessories.join(", ") : "none recorded",
+    ),
     row("purpose", "Purpose", f.purpose),
   ];
   const focus = [
-    row("mark", "Focus mark", mark ? (f.focusPointName ? `${f.focusPointName}: ${deckWords}` : deckWords) : "no mark set"),
+    row(
+      "mark",
+      "Focus mark",
+      mark ? (f.focusPointName ? `${f.focusPointName}: ${deckWords}` : deckWords) : "no mark set",
+    ),
     row("aimHeight", "Aim height", f.aim === "head" ? `head height (${len(p.headHeight)})` : "deck"),
     row("hotSpot", "Hot spot", mark ? hotSpotWords(f, mark, units, shape) : null),
     row("throw", "Throw", len(g.throw)),
@@ -125,15 +162,31 @@ export function buildFocusChart(
     row("headBand", "Soft band at head", bandWords(g.head, units)),
   ];
   const beam = beamRows(f, { shape, barnDoors: barnDoorsValue(f, o.extras, cuts), gobo: goboValue(f, o.extras) });
-  const who = f.focusedBy != null ? o.userNames?.[f.focusedBy] ?? "a former team member" : null;
+  const who = f.focusedBy != null ? (o.userNames?.[f.focusedBy] ?? "a former team member") : null;
   const focusedLine = f.focused
     ? `Focused${f.focusedAt ? ` ${formatStamp(f.focusedAt, o.timeZone)}` : ""}${who ? ` by ${who}` : ""}`
     : "Not focused yet";
 
   return {
-    id: f.id, positionId: f.positionId, positionName: f.positionName, unitNumber: f.unitNumber, channel: f.channel,
-    focusPointId: f.focusPointId, mark, version: f.version, focused: f.focused, focusedLine,
-    identity, focus, beam, cuts, notes: f.notes, focusNotes: f.focusNotes, photo: photoOf(f), warnings, fixture: f,
+    id: f.id,
+    positionId: f.positionId,
+    positionName: f.positionName,
+    unitNumber: f.unitNumber,
+    channel: f.channel,
+    focusPointId: f.focusPointId,
+    mark,
+    version: f.version,
+    focused: f.focused,
+    focusedLine,
+    identity,
+    focus,
+    beam,
+    cuts,
+    notes: f.notes,
+    focusNotes: f.focusNotes,
+    photo: photoOf(f),
+    warnings,
+    fixture: f,
   };
 }
 
@@ -146,14 +199,20 @@ export function photoOf(f: Pick<FixtureDto, "id" | "productionId" | "focusPhotoU
 
 // The fixture's own fields first; an accessory's note or a barn-door cut drawn on the plot otherwise.
 function barnDoorsValue(f: FixtureDto, extras: ChartExtras | undefined, cuts: CutReading[]): string {
-  const own = barnDoorWords({ top: f.barnDoorTop, bottom: f.barnDoorBottom, left: f.barnDoorLeft, right: f.barnDoorRight });
+  const own = barnDoorWords({
+    top: f.barnDoorTop,
+    bottom: f.barnDoorBottom,
+    left: f.barnDoorLeft,
+    right: f.barnDoorRight,
+  });
   if (own) return own;
   return extras?.barnDoors ?? (cuts.some((c) => c.cutter === "barn door") ? "see cuts" : "none recorded");
 }
 
 function goboValue(f: FixtureDto, extras: ChartExtras | undefined): string {
-  if (f.goboRotationDeg != null) return f.gobo ? goboRotationWords(f.goboRotationDeg) : `${goboRotationWords(f.goboRotationDeg)} (no gobo named)`;
-  return f.gobo ? extras?.goboOrientation ?? "not recorded" : "no gobo";
+  if (f.goboRotationDeg != null)
+    return f.gobo ? goboRotationWords(f.goboRotationDeg) : `${goboRotationWords(f.goboRotationDeg)} (no gobo named)`;
+  return f.gobo ? (extras?.goboOrientation ?? "not recorded") : "no gobo";
 }
 
 /**
@@ -166,7 +225,9 @@ function beamRows(f: FixtureDto, o: { shape: "flat" | "peaked" | null; barnDoors
   const zooms = g.coneRange.max > g.coneRange.min;
   const cone = `${round1(g.coneDeg)}° cone`;
   const field = row("field", "Field", o.shape ? (o.shape === "flat" ? "flat" : "peaked") : null);
-  const zoom = zooms ? row("zoom", "Zoom", `${cone}, ${round1(g.softnessDeg)}° soft`) : row("cone", "Lens", `fixed, ${cone}`);
+  const zoom = zooms
+    ? row("zoom", "Zoom", `${cone}, ${round1(g.softnessDeg)}° soft`)
+    : row("cone", "Lens", `fixed, ${cone}`);
   const barnDoors = row("barnDoors", "Barn doors", o.barnDoors);
   switch (f.family) {
     case "profile":
@@ -183,7 +244,12 @@ function beamRows(f: FixtureDto, o: { shape: "flat" | "peaked" | null; barnDoors
       return [row("spotFlood", "Spot/flood", spotFloodWords(g.coneDeg, g.coneRange)), field, barnDoors];
     case "par":
       // No stored field for the lamp's turn yet: the electrician records it in the as-focused notes.
-      return [row("cone", "Lens", cone), field, row("lampRotation", "Lamp rotation", "not recorded (see as-focused notes)"), barnDoors];
+      return [
+        row("cone", "Lens", cone),
+        field,
+        row("lampRotation", "Lamp rotation", "not recorded (see as-focused notes)"),
+        barnDoors,
+      ];
     default:
       // LED and moving washes, cyc units and anything unknown: the cone (zoom where it zooms) and the field.
       return [zoom, field, barnDoors];

@@ -2,7 +2,7 @@
 // mark and pool, the stage lines cut to it, the scale bar's length, the pool to draw. The drawing itself is a
 // React component (components/focus/pool-diagram.tsx), so every name on it is escaped by React; one component
 // serves the screen, the browser's print and the server's PDF, so all three show the same drawing.
-import { clipPoolByCuts, ellipseBounds, ellipseToPolygon, formatLength, METRES_PER_FOOT, type Ellipse, type Point, type Units } from "@/lib/optics";
+import { METRES_PER_FOOT, type Ellipse, type Point, type Units } from "@/lib/optics";
 import type { FixtureDto } from "@/lib/dto/fixture";
 import type { Landmark } from "./landmarks";
 
@@ -35,7 +35,12 @@ export function ellipseAttrs(e: Ellipse): { cx: string; cy: string; rx: string; 
 
 export function viewBox(mark: Point, outer: { minX: number; minY: number; maxX: number; maxY: number } | null): Box {
   const b = outer ?? { minX: mark.x, minY: mark.y, maxX: mark.x, maxY: mark.y };
-  const box = { minX: Math.min(b.minX, mark.x), minY: Math.min(b.minY, mark.y), maxX: Math.max(b.maxX, mark.x), maxY: Math.max(b.maxY, mark.y) };
+  const box = {
+    minX: Math.min(b.minX, mark.x),
+    minY: Math.min(b.minY, mark.y),
+    maxX: Math.max(b.maxX, mark.x),
+    maxY: Math.max(b.maxY, mark.y),
+  };
   const span = Math.max(MIN_SPAN_M, box.maxX - box.minX, box.maxY - box.minY) * 1.35;
   const cx = (box.minX + box.maxX) / 2;
   const cy = (box.minY + box.maxY) / 2;
@@ -57,7 +62,12 @@ export function clipSegment(a: Point, b: Point, box: Box): [Point, Point] | null
   const d = { x: b.x - a.x, y: b.y - a.y };
   let t0 = 0;
   let t1 = 1;
-  const edges: Array<[number, number]> = [[-d.x, a.x - box.minX], [d.x, box.maxX - a.x], [-d.y, a.y - box.minY], [d.y, box.maxY - a.y]];
+  const edges: Array<[number, number]> = [
+    [-d.x, a.x - box.minX],
+    [d.x, box.maxX - a.x],
+    [-d.y, a.y - box.minY],
+    [d.y, box.maxY - a.y],
+  ];
   for (const [p, q] of edges) {
     if (p === 0) {
       if (q < 0) return null;
@@ -68,7 +78,10 @@ export function clipSegment(a: Point, b: Point, box: Box): [Point, Point] | null
     else t1 = Math.min(t1, t);
     if (t0 > t1) return null;
   }
-  return [{ x: a.x + d.x * t0, y: a.y + d.y * t0 }, { x: a.x + d.x * t1, y: a.y + d.y * t1 }];
+  return [
+    { x: a.x + d.x * t0, y: a.y + d.y * t0 },
+    { x: a.x + d.x * t1, y: a.y + d.y * t1 },
+  ];
 }
 
 export type LandmarkLine = { name: string; a: Point; b: Point; label: { at: Point; vertical: boolean } | null };
@@ -79,7 +92,10 @@ export function landmarkLines(landmarks: Landmark[], box: Box, text: number): La
     const seg = clipSegment(l.a, l.b, box);
     if (!seg) return [];
     const [a, b] = seg;
-    const mid = { x: Math.min(Math.max((a.x + b.x) / 2, box.minX + text * 3), box.maxX - text * 3), y: (a.y + b.y) / 2 };
+    const mid = {
+      x: Math.min(Math.max((a.x + b.x) / 2, box.minX + text * 3), box.maxX - text * 3),
+      y: (a.y + b.y) / 2,
+    };
     const vertical = Math.abs(b.x - a.x) < Math.abs(b.y - a.y);
     const at = vertical ? { x: a.x, y: Math.min(Math.max(mid.y, box.minY + text), box.maxY - text * 4) } : mid;
     const inside = at.x > box.minX && at.x < box.maxX && at.y > box.minY && at.y < box.maxY;
@@ -88,8 +104,10 @@ export function landmarkLines(landmarks: Landmark[], box: Box, text: number): La
 }
 
 /** The pool the chart draws: at the aim height the designer chose, else the other plane; null if both are open. */
-export function drawnPool(g: FixtureDto["computed"]): { pool: NonNullable<FixtureDto["computed"]["deck"]>; plane: "the deck" | "head height" } | null {
+export function drawnPool(
+  g: FixtureDto["computed"],
+): { pool: NonNullable<FixtureDto["computed"]["deck"]>; plane: "the deck" | "head height" } | null {
   const deck = g.deck?.status === "ok" && g.deck.outer ? { pool: g.deck, plane: "the deck" as const } : null;
   const head = g.head?.status === "ok" && g.head.outer ? { pool: g.head, plane: "head height" as const } : null;
-  return g.focus && g.focus.z > 0 ? head ?? deck : deck ?? head;
+  return g.focus && g.focus.z > 0 ? (head ?? deck) : (deck ?? head);
 }

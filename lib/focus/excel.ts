@@ -16,8 +16,13 @@ export type SheetColumn = { header: string; key: string; width: number };
 /** Every row key the charts use, in first-seen order: beam rows differ by family, so one chart is not enough. */
 export function focusColumns(charts: FocusChart[]): SheetColumn[] {
   const seen = new Map<string, string>();
-  for (const c of charts) for (const r of [...c.identity, ...c.focus, ...c.beam]) if (!seen.has(r.key)) seen.set(r.key, r.label);
-  const fromRows = [...seen].map(([key, header]) => ({ header, key, width: key === "channel" || key === "unit" ? 8 : 24 }));
+  for (const c of charts)
+    for (const r of [...c.identity, ...c.focus, ...c.beam]) if (!seen.has(r.key)) seen.set(r.key, r.label);
+  const fromRows = [...seen].map(([key, header]) => ({
+    header,
+    key,
+    width: key === "channel" || key === "unit" ? 8 : 24,
+  }));
   return [
     ...fromRows,
     { header: "Cuts", key: "cuts", width: 50 },

@@ -14,13 +14,29 @@ const slug = (text: string) =>
 
 /** The calendar day of `at` in `timeZone` (the server's own zone when none is given) as YYYY-MM-DD. */
 export function isoDay(at: Date, timeZone?: string): string {
-  const parts = new Intl.DateTimeFormat("en-GB", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" }).formatToParts(at);
+  const parts = new Intl.DateTimeFormat("en-GB", {
+    timeZone,
+    year: "numeric",
+    month: "2-digit",
+    day: "2-digit",
+  }).formatToParts(at);
   const get = (t: string) => parts.find((p) => p.type === t)?.value ?? "";
   return `${get("year")}-${get("month")}-${get("day")}`;
 }
 
-export function focusFileName(o: { production: string; positions: string[]; at: Date; timeZone?: string; ext: "pdf" | "xlsx" }): string {
+export function focusFileName(o: {
+  production: string;
+  positions: string[];
+  at: Date;
+  timeZone?: string;
+  ext: "pdf" | "xlsx";
+}): string {
   const unique = [...new Set(o.positions)];
-  const parts = [slug(o.production) || "production", unique.length === 1 ? slug(unique[0]) : "", "focus-charts", isoDay(o.at, o.timeZone)];
+  const parts = [
+    slug(o.production) || "production",
+    unique.length === 1 ? slug(unique[0]) : "",
+    "focus-charts",
+    isoDay(o.at, o.timeZone),
+  ];
   return `${parts.filter(Boolean).join("-")}.${o.ext}`;
 }

@@ -51,6 +51,8 @@ export function cutPreposition(name: string): "off" | "to" {
 }
 
 /** The plot's stored landmarks (x1, y1, x2, y2 rows) in the shape cut wording uses. */
-export function landmarksFromRows(rows: Array<{ name: string; x1: number; y1: number; x2: number; y2: number }>): Landmark[] {
+export function landmarksFromRows(
+  rows: Array<{ name: string; x1: number; y1: number; x2: number; y2: number }>,
+): Landmark[] {
   return rows.map((r) => ({ name: r.name, a: { x: r.x1, y: r.y1 }, b: { x: r.x2, y: r.y2 } }));
 }

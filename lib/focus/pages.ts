@@ -7,7 +7,10 @@ export type ChartsPerPage = (typeof CHARTS_PER_PAGE)[number];
 export type Paper = "A4" | "Letter";
 
 /** ISO 216 A4 is 210 × 297 mm; US Letter is 8.5 × 11 in (215.9 × 279.4 mm). */
-export const PAPER: Record<Paper, { cssSize: string; widthMm: number; heightMm: number; marginMm: { top: number; side: number; bottom: number } }> = {
+export const PAPER: Record<
+  Paper,
+  { cssSize: string; widthMm: number; heightMm: number; marginMm: { top: number; side: number; bottom: number } }
+> = {
   A4: { cssSize: "A4", widthMm: 210, heightMm: 297, marginMm: { top: 8, side: 8, bottom: 11 } },
   Letter: { cssSize: "letter", widthMm: 215.9, heightMm: 279.4, marginMm: { top: 8, side: 8, bottom: 11 } },
 };
@@ -29,7 +32,11 @@ function runs<T extends { positionId: number }>(charts: T[], newPagePerPosition:
  * How many sheets `paginate` will make, from the charts' positions alone (in hanging order): what the
  * page's PDF button promises before anything is drawn.
  */
-export function sheetCount(charts: { positionId: number }[], perPage: ChartsPerPage, o: { newPagePerPosition: boolean }): number {
+export function sheetCount(
+  charts: { positionId: number }[],
+  perPage: ChartsPerPage,
+  o: { newPagePerPosition: boolean },
+): number {
   return runs(charts, o.newPagePerPosition).reduce((n, g) => n + Math.ceil(g.length / perPage), 0);
 }
 

@@ -3,7 +3,10 @@
 import type { FixtureDto } from "@/lib/dto/fixture";
 
 /** Fixtures sharing the focus point, or (without one) aimed within half a metre of the same mark. */
-export function neighboursOf<F extends Pick<FixtureDto, "id" | "focusPointId" | "computed">>(current: F, all: F[]): F[] {
+export function neighboursOf<F extends Pick<FixtureDto, "id" | "focusPointId" | "computed">>(
+  current: F,
+  all: F[],
+): F[] {
   const mark = current.computed.focus;
   return all.filter((f) => {
     if (f.id === current.id || !f.computed.focus) return false;

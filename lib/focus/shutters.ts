@@ -16,9 +16,19 @@ export type DeckEdge = "downstage" | "upstage" | "stage-left" | "stage-right";
 export type BeamSide = "near" | "far" | "left" | "right";
 
 /** Beam side removed → physical shutter that removes it, through a lens that inverts the image. */
-export const SHUTTER_FOR_BEAM_SIDE: Record<BeamSide, CutSide> = { near: "top", far: "bottom", left: "right", right: "left" };
+export const SHUTTER_FOR_BEAM_SIDE: Record<BeamSide, CutSide> = {
+  near: "top",
+  far: "bottom",
+  left: "right",
+  right: "left",
+};
 /** Barn doors are outside the lens: no inversion. */
-export const BARN_DOOR_FOR_BEAM_SIDE: Record<BeamSide, CutSide> = { near: "bottom", far: "top", left: "left", right: "right" };
+export const BARN_DOOR_FOR_BEAM_SIDE: Record<BeamSide, CutSide> = {
+  near: "bottom",
+  far: "top",
+  left: "left",
+  right: "right",
+};
 
 /** Families whose beam is shaped in the gate (shutters behind the lens); the rest carry barn doors. */
 const GATE_FAMILIES = new Set(["profile", "followspot"]);
@@ -53,7 +63,8 @@ export function removedNormal(cut: { a: Point; b: Point }, mark: Point): Point {
   if (!(len > 1e-9)) throw new RangeError("A shutter cut needs two different points.");
   let n = { x: -dy / len, y: dx / len };
   const markSide = n.x * (mark.x - cut.a.x) + n.y * (mark.y - cut.a.y);
-  if (Math.abs(markSide) < 1e-9) throw new RangeError("The focus mark lies on a shutter cut, so the side it removes is unclear.");
+  if (Math.abs(markSide) < 1e-9)
+    throw new RangeError("The focus mark lies on a shutter cut, so the side it removes is unclear.");
   if (markSide > 0) n = { x: -n.x, y: -n.y };
   return n;
 }
@@ -101,7 +112,12 @@ export const DEFAULT_POOL_REACH_M = 3;
  * and the point where the cut meets the landmark must lie within it (plus the house tolerance), never somewhere
  * along the cut line's endless extension.
  */
-export function matchLandmark(cut: { a: Point; b: Point }, mark: Point, landmarks: Landmark[], reach = DEFAULT_POOL_REACH_M): Landmark | null {
+export function matchLandmark(
+  cut: { a: Point; b: Point },
+  mark: Point,
+  landmarks: Landmark[],
+  reach = DEFAULT_POOL_REACH_M,
+): Landmark | null {
   const foot = footOnLine(mark, cut.a, cut.b);
   const nearPool = (p: Point) => Math.hypot(p.x - mark.x, p.y - mark.y) <= reach + NEAR_M;
   const d = Math.atan2(cut.b.y - cut.a.y, cut.b.x - cut.a.x);
@@ -119,7 +135,8 @@ export function matchLandmark(cut: { a: Point; b: Point }, mark: Point, landmark
   // parallel to the cut is not crossed by it (its end near the cut line is only the cut's extension).
   const len = Math.hypot(cut.b.x - cut.a.x, cut.b.y - cut.a.y);
   for (const l of landmarks) {
-    if (Math.abs(Math.sin(d - Math.atan2(l.b.y - l.a.y, l.b.x - l.a.x))) <= Math.sin((PARALLEL_DEG * Math.PI) / 180)) continue;
+    if (Math.abs(Math.sin(d - Math.atan2(l.b.y - l.a.y, l.b.x - l.a.x))) <= Math.sin((PARALLEL_DEG * Math.PI) / 180))
+      continue;
     for (const end of [l.a, l.b]) {
       if (!nearPool(end)) continue;
       const dist = Math.abs((cut.b.x - cut.a.x) * (cut.a.y - end.y) - (cut.a.x - end.x) * (cut.b.y - cut.a.y)) / len;
@@ -143,7 +160,13 @@ function lineWords(edge: DeckEdge, foot: Point, o: { units: Units; datumName: st
 export function readCut(
   cut: CutInput,
   o: {
-    mark: Point; panDeg: number | null; tiltDeg: number | null; family: string; landmarks: Landmark[]; units: Units; datumName: string;
+    mark: Point;
+    panDeg: number | null;
+    tiltDeg: number | null;
+    family: string;
+    landmarks: Landmark[];
+    units: Units;
+    datumName: string;
     /** Distance from the mark to the pool's farthest edge, so only landmarks near the pool are named. */
     poolReach?: number;
   },
@@ -161,5 +184,14 @@ export function readCut(
   const cutterWords = physical
     ? `${physical} ${cutter}`
     : `${cut.label} ${cutter} (as labelled: the beam points straight down)`;
-  return { label: cut.label, deckEdge, beamSide, cutter, physical, landmark: landmark?.name ?? null, words, cutterWords };
+  return {
+    label: cut.label,
+    deckEdge,
+    beamSide,
+    cutter,
+    physical,
+    landmark: landmark?.name ?? null,
+    words,
+    cutterWords,
+  };
 }

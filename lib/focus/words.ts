@@ -17,7 +17,13 @@ export function offsetFromMark(p: Point, mark: Point, units: Units): string {
 export function formatStamp(isoOrDate: string | Date, timeZone?: string): string {
   const d = typeof isoOrDate === "string" ? new Date(isoOrDate) : isoOrDate;
   return new Intl.DateTimeFormat("en-GB", {
-    day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit", hour12: false, timeZone,
+    day: "numeric",
+    month: "short",
+    year: "numeric",
+    hour: "2-digit",
+    minute: "2-digit",
+    hour12: false,
+    timeZone,
   }).format(d);
 }
 
@@ -40,14 +46,19 @@ const deg1 = (v: number) => `${Math.round(v * 10) / 10}°`;
  * words hold for the gobo in the gate and for its image. Past 180° the shorter way round is named.
  */
 export function goboRotationWords(deg: number): string {
-  const d = Math.round((((deg % 360) + 360) % 360) * 10) / 10 % 360;
+  const d = (Math.round((((deg % 360) + 360) % 360) * 10) / 10) % 360;
   if (d === 0) return "upright, as drawn (0°)";
   if (d === 180) return "upside down (180°)";
   if (d < 180) return `${deg1(d)} clockwise, looking along the beam`;
   return `${deg1(360 - d)} anticlockwise (${deg1(d)}), looking along the beam`;
 }
 
-export type BarnDoorNotes = { top?: string | null; bottom?: string | null; left?: string | null; right?: string | null };
+export type BarnDoorNotes = {
+  top?: string | null;
+  bottom?: string | null;
+  left?: string | null;
+  right?: string | null;
+};
 const LEAVES = ["top", "bottom", "left", "right"] as const;
 
 /**

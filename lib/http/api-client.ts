@@ -23,7 +23,13 @@ export async function apiFetch<T>(url: string, init: RequestInit & { json?: unkn
   const body = await res.json().catch(() => null);
   if (!res.ok) {
     const e = body?.error ?? {};
-    throw new ApiError(res.status, e.code ?? "internal", e.message ?? `Request failed (${res.status})`, e.fieldErrors, e.current);
+    throw new ApiError(
+      res.status,
+      e.code ?? "internal",
+      e.message ?? `Request failed (${res.status})`,
+      e.fieldErrors,
+      e.current,
+    );
   }
   return body as T;
 }

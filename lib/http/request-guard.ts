@@ -39,17 +39,29 @@ export function refuseCrossSiteWrite(req: GuardInput, protocol = "http"): Refusa
   const foreignOrigin = origin !== null && (origin === "null" || origin !== own);
   const foreignSite = site !== null && site !== "same-origin" && site !== "none";
   if (foreignOrigin || foreignSite) {
-    return { status: 403, code: "forbidden", message: "This change was sent from another site, so it was refused. Make it from Throwline's own pages." };
+    return {
+      status: 403,
+      code: "forbidden",
+      message: "This change was sent from another site, so it was refused. Make it from Throwline's own pages.",
+    };
   }
   const declared = Number(h.get("content-length") ?? "0");
   if (declared > MAX_DECLARED_BODY_BYTES) {
-    return { status: 413, code: "too_large", message: `The request is ${Math.round(declared / 1048576)} MB; at most ${MAX_DECLARED_BODY_BYTES / 1048576} MB is accepted.` };
+    return {
+      status: 413,
+      code: "too_large",
+      message: `The request is ${Math.round(declared / 1048576)} MB; at most ${MAX_DECLARED_BODY_BYTES / 1048576} MB is accepted.`,
+    };
   }
   if (req.pathname.startsWith("/api/")) {
     const hasBody = declared > 0 || h.get("transfer-encoding") !== null;
     const type = (h.get("content-type") ?? "").split(";")[0].trim().toLowerCase();
     if (hasBody && !API_BODY_TYPES.includes(type)) {
-      return { status: 415, code: "unsupported_media_type", message: `The request body must be JSON (Content-Type: application/json)${type ? `, not ${type}` : ""}.` };
+      return {
+        status: 415,
+        code: "unsupported_media_type",
+        message: `The request body must be JSON (Content-Type: application/json)${type ? `, not ${type}` : ""}.`,
+      };
     }
   }
   return null;

@@ -12,7 +12,9 @@ export function readCsv(text: string): RawTable {
   const broken = parsed.errors.find((e) => e.type === "Quotes");
   if (broken) {
     const row = (broken.row ?? 0) + 1;
-    throw new FileProblem(`Row ${row}: a quoted field is opened but never closed, so the rest of the file cannot be read. Check the quote marks in that row.`);
+    throw new FileProblem(
+      `Row ${row}: a quoted field is opened but never closed, so the rest of the file cannot be read. Check the quote marks in that row.`,
+    );
   }
   const records: RawRow[] = parsed.data.map((cells, i) => ({ rowNumber: i + 1, cells: cells.map((c) => c ?? "") }));
   return toRawTable(records, { decimalComma: parsed.meta.delimiter === ";" });

@@ -2,7 +2,8 @@ import Papa from "papaparse";
 import { neutraliseCell } from "./neutralise";
 import type { CellOut, SheetOut } from "./sheet";
 
-const text = (v: CellOut) => (v == null ? "" : typeof v === "boolean" ? (v ? "yes" : "no") : typeof v === "number" ? String(v) : neutraliseCell(v));
+const text = (v: CellOut) =>
+  v == null ? "" : typeof v === "boolean" ? (v ? "yes" : "no") : typeof v === "number" ? String(v) : neutraliseCell(v);
 
 /**
  * One sheet as CSV: comma-separated, CRLF line ends, quotes where needed, and a UTF-8 byte-order mark

@@ -6,24 +6,46 @@ import { FIXTURE_FIELDS, type FileField } from "@/lib/rig/fixture-fields";
 export type ImportKey = FileField["key"];
 export type FieldKind = FileField["kind"];
 export type ColumnTarget = ImportKey | "ignore";
-export type ImportField = { key: ImportKey; attribute: string; header: string; kind: FieldKind; aliases: readonly string[] };
+export type ImportField = {
+  key: ImportKey;
+  attribute: string;
+  header: string;
+  kind: FieldKind;
+  aliases: readonly string[];
+};
 
-export const IMPORT_FIELDS: readonly ImportField[] = FIXTURE_FIELDS.filter((f): f is FileField => f.width !== null).map((f) => ({
-  key: f.key,
-  attribute: f.attribute,
-  header: f.header,
-  kind: f.kind,
-  aliases: f.aliases,
-}));
+export const IMPORT_FIELDS: readonly ImportField[] = FIXTURE_FIELDS.filter((f): f is FileField => f.width !== null).map(
+  (f) => ({
+    key: f.key,
+    attribute: f.attribute,
+    header: f.header,
+    kind: f.kind,
+    aliases: f.aliases,
+  }),
+);
 
 /** Computed values that exports carry; recognised on the way back in and left alone. */
-export const COMPUTED_HEADERS = ["Throw", "Tilt", "Deck pool length", "Deck pool width", "Head pool length", "Head pool width", "Soft band far", "Soft band near"];
+export const COMPUTED_HEADERS = [
+  "Throw",
+  "Tilt",
+  "Deck pool length",
+  "Deck pool width",
+  "Head pool length",
+  "Head pool width",
+  "Soft band far",
+  "Soft band near",
+];
 
 export const FIELD_BY_KEY: ReadonlyMap<ImportKey, ImportField> = new Map(IMPORT_FIELDS.map((f) => [f.key, f]));
 
 /** "X (m)" → "x"; "Unit #" → "unit #"; case and spacing do not matter. */
 export function normaliseHeader(header: string): string {
-  return header.toLowerCase().replace(/\((?:m|ft|°|deg|%|metres|meters|feet)\)/g, "").replace(/[_\s]+/g, " ").replace(/[:.]$/, "").trim();
+  return header
+    .toLowerCase()
+    .replace(/\((?:m|ft|°|deg|%|metres|meters|feet)\)/g, "")
+    .replace(/[_\s]+/g, " ")
+    .replace(/[:.]$/, "")
+    .trim();
 }
 
 const LOOKUP = new Map<string, ImportKey | "ignore">();

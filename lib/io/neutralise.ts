@@ -14,6 +14,7 @@ export function neutraliseCell(value: string): string {
 
 /** Undoes neutraliseCell on import, so an export read back in gives the same text. */
 export function restoreCell(value: string): string {
-  if (value.length >= 2 && value[0] === "'" && TRIGGERS.has(value[1]) && !PLAIN_NUMBER.test(value.slice(1))) return value.slice(1);
+  if (value.length >= 2 && value[0] === "'" && TRIGGERS.has(value[1]) && !PLAIN_NUMBER.test(value.slice(1)))
+    return value.slice(1);
   return value;
 }

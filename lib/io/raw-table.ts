@@ -23,7 +23,8 @@ export class FileProblem extends Error {
 
 const isBlank = (cells: string[]) => cells.every((c) => c.trim() === "");
 
-const columnLetter = (i: number): string => (i >= 26 ? columnLetter(Math.floor(i / 26) - 1) : "") + String.fromCharCode(65 + (i % 26));
+const columnLetter = (i: number): string =>
+  (i >= 26 ? columnLetter(Math.floor(i / 26) - 1) : "") + String.fromCharCode(65 + (i % 26));
 
 /** Finds the header row (the first non-blank row), names blank and repeated headers, and drops blank rows. */
 export function toRawTable(records: RawRow[], extra: Pick<RawTable, "decimalComma"> & Partial<RawTable>): RawTable {
@@ -41,13 +42,18 @@ export function toRawTable(records: RawRow[], extra: Pick<RawTable, "decimalComm
     const count = (seen.get(key) ?? 0) + 1;
     seen.set(key, count);
     if (count > 1) {
-      notes.push(`The header "${name}" appears more than once; the copy in column ${columnLetter(i)} is called "${name} (${count})".`);
+      notes.push(
+        `The header "${name}" appears more than once; the copy in column ${columnLetter(i)} is called "${name} (${count})".`,
+      );
       name = `${name} (${count})`;
     }
     return name;
   });
   const rows = records.slice(headerIndex + 1).filter((r) => !isBlank(r.cells));
-  if (rows.length > MAX_IMPORT_ROWS) throw new FileProblem(`The file has ${rows.length} rows; at most ${MAX_IMPORT_ROWS} can be imported at once. Split it into parts.`);
+  if (rows.length > MAX_IMPORT_ROWS)
+    throw new FileProblem(
+      `The file has ${rows.length} rows; at most ${MAX_IMPORT_ROWS} can be imported at once. Split it into parts.`,
+    );
   for (const r of rows) while (r.cells.length < headers.length) r.cells.push("");
   return { headers, rows, headerRowNumber: header.rowNumber, notes, ...extra };
 }

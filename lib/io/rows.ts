@@ -34,7 +34,12 @@ function cellSchema(key: ImportKey, unit: LengthUnit, decimalComma: boolean): z.
   const text = z.string().transform((s) => restoreCell(s).trim());
   switch (field.kind) {
     case "name":
-      return text.pipe(z.string().min(1, { error: `${field.header} is empty` }).max(80, { error: `${field.header} is longer than 80 characters` }));
+      return text.pipe(
+        z
+          .string()
+          .min(1, { error: `${field.header} is empty` })
+          .max(80, { error: `${field.header} is longer than 80 characters` }),
+      );
     case "optionalName":
       return text.transform((s) => s || null).pipe(z.string().max(60).nullable());
     case "unit":
@@ -104,14 +109,20 @@ function columnChecker(schema: z.ZodType<unknown, string>): (text: string) => Ce
     const hit = memo.get(text);
     if (hit) return hit;
     const parsed = schema.safeParse(text);
-    const result: CellResult = parsed.success ? { ok: true, value: parsed.data } : { ok: false, messages: parsed.error.issues.map((i) => i.message) };
+    const result: CellResult = parsed.success
+      ? { ok: true, value: parsed.data }
+      : { ok: false, messages: parsed.error.issues.map((i) => i.message) };
     if (memo.size < MEMO_LIMIT) memo.set(text, result);
     return result;
   };
 }
 
 /** Validates every data row; errors name the row number and the file's own column header. */
-export function validateRows(table: RawTable, mapping: ColumnTarget[], opts: { lengthUnit: LengthUnit }): { rows: ParsedRow[]; errors: RowError[] } {
+export function validateRows(
+  table: RawTable,
+  mapping: ColumnTarget[],
+  opts: { lengthUnit: LengthUnit },
+): { rows: ParsedRow[]; errors: RowError[] } {
   const checker = rowChecker(table, mapping, opts);
   checker.check(0, table.rows.length);
   return checker.result;
@@ -120,7 +131,18 @@ export function validateRows(table: RawTable, mapping: ColumnTarget[], opts: { l
 /** The same checks a slice at a time, so a caller can report progress (and let the event loop breathe) between slices. */
 export function rowChecker(table: RawTable, mapping: ColumnTarget[], opts: { lengthUnit: LengthUnit }) {
   const columns: Column[] = mapping.flatMap((key, index) =>
-    key === "ignore" ? [] : [{ key, index, header: table.headers[index], check: columnChecker(cellSchema(key, headerUnit(table.headers[index]) ?? opts.lengthUnit, table.decimalComma)) }],
+    key === "ignore"
+      ? []
+      : [
+          {
+            key,
+            index,
+            header: table.headers[index],
+            check: columnChecker(
+              cellSchema(key, headerUnit(table.headers[index]) ?? opts.lengthUnit, table.decimalComma),
+            ),
+          },
+        ],
   );
   const unitHeader = columns.find((c) => c.key === "unitNumber")?.header ?? "Unit";
 
@@ -141,7 +163,11 @@ export function rowChecker(table: RawTable, mapping: ColumnTarget[], opts: { len
     const key = `${String(values.position).toLowerCase()}|${String(values.unitNumber).toLowerCase()}`;
     const first = seen.get(key);
     if (first !== undefined) {
-      errors.push({ row: raw.rowNumber, column: unitHeader, message: `Unit ${values.unitNumber} on ${values.position} is already in row ${first}` });
+      errors.push({
+        row: raw.rowNumber,
+        column: unitHeader,
+        message: `Unit ${values.unitNumber} on ${values.position} is already in row ${first}`,
+      });
       return;
     }
     seen.set(key, raw.rowNumber);
@@ -157,6 +183,9 @@ export function rowChecker(table: RawTable, mapping: ColumnTarget[], opts: { len
 
 /** The columns a file must map before any row can be read. */
 export function missingRequiredColumns(mapping: ColumnTarget[]): string[] {
-  const need: Array<[ImportKey, string]> = [["position", "Position"], ["unitNumber", "Unit"]];
+  const need: Array<[ImportKey, string]> = [
+    ["position", "Position"],
+    ["unitNumber", "Unit"],
+  ];
   return need.filter(([k]) => !mapping.includes(k)).map(([, label]) => label);
 }

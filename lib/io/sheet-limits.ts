@@ -30,7 +30,9 @@ export function checkDeclaredDimension(ref: string | undefined) {
   if (!m) return;
   const col = [...m[1]].reduce((n, ch) => n * 26 + ch.charCodeAt(0) - 64, 0);
   if (col > SHEET_MAX_COLUMNS || Number(m[2]) > SHEET_MAX_ROWS) {
-    throw new FileProblem(`The sheet says it spans ${ref}, which is larger than a spreadsheet can be: the file is damaged. Save it again as .xlsx or CSV.`);
+    throw new FileProblem(
+      `The sheet says it spans ${ref}, which is larger than a spreadsheet can be: the file is damaged. Save it again as .xlsx or CSV.`,
+    );
   }
 }
 
@@ -66,7 +68,9 @@ export function fillMerges(records: RawRow[], merges: string[]) {
       if (!record) {
         // +1: the header row is one of the records.
         if (records.length >= MAX_IMPORT_ROWS + 1) {
-          throw new FileProblem(`The merged cells ${range} run past ${MAX_IMPORT_ROWS.toLocaleString("en")} rows, more than can be imported at once. Unmerge them, or split the sheet into parts.`);
+          throw new FileProblem(
+            `The merged cells ${range} run past ${MAX_IMPORT_ROWS.toLocaleString("en")} rows, more than can be imported at once. Unmerge them, or split the sheet into parts.`,
+          );
         }
         record = { rowNumber: r, cells: [] };
         byNumber.set(r, record);

@@ -24,7 +24,10 @@ export function cellText(value: CellValue): string {
 
 type SheetRead = { name: string; records: RawRow[]; merges: string[] };
 // What the streaming reader gives per sheet; `name` and `iterator` are set by ExcelJS but not in its types.
-type StreamSheet = ExcelJS.stream.xlsx.WorksheetReader & { name: string; iterator: AsyncIterable<Buffer> } & AsyncIterable<ExcelJS.Row>;
+type StreamSheet = ExcelJS.stream.xlsx.WorksheetReader & {
+  name: string;
+  iterator: AsyncIterable<Buffer>;
+} & AsyncIterable<ExcelJS.Row>;
 
 // ExcelJS's streaming reader skips <mergeCell>; the sheet's XML passes through here on its way to the
 // parser, and the merge ranges (they follow the cell data) are picked out of it. What is carried from
@@ -73,17 +76,23 @@ function padRows(records: RawRow[]) {
 
 const firstFilledRow = (s: SheetRead) => s.records.find((r) => r.cells.some((c) => c !== ""))?.cells ?? null;
 
-const BROKEN = "This file looks like a zipped Office file but is not a readable .xlsx workbook. Save it again as .xlsx or CSV.";
+const BROKEN =
+  "This file looks like a zipped Office file but is not a readable .xlsx workbook. Save it again as .xlsx or CSV.";
 
 type ReadOptions = { sheet?: string; looksLikeHeader?: (cells: string[]) => boolean };
 
 // The sheet asked for by name; else the first sheet whose header row looks like a fixture list (per
 // `looksLikeHeader`), else the first sheet with data. Sheets are read (`read`) only as far as needed.
-function chooseSheet(sheets: Array<{ name: string; read: () => SheetRead }>, sheetNames: string[], opts: ReadOptions): RawTable {
+function chooseSheet(
+  sheets: Array<{ name: string; read: () => SheetRead }>,
+  sheetNames: string[],
+  opts: ReadOptions,
+): RawTable {
   let chosen: SheetRead | undefined;
   if (opts.sheet) {
     chosen = sheets.find((s) => s.name === opts.sheet)?.read();
-    if (!chosen) throw new FileProblem(`The workbook has no sheet called "${opts.sheet}". Its sheets: ${sheetNames.join(", ")}.`);
+    if (!chosen)
+      throw new FileProblem(`The workbook has no sheet called "${opts.sheet}". Its sheets: ${sheetNames.join(", ")}.`);
   } else {
     let firstWithData: SheetRead | undefined;
     for (const sheet of sheets) {
@@ -133,7 +142,13 @@ export async function readXlsx(bytes: Uint8Array, opts: ReadOptions = {}): Promi
 export async function readXlsxWithExcelJs(bytes: Uint8Array, opts: ReadOptions): Promise<RawTable> {
   const input = Readable.from([Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength)]);
   // Styles are read so that date cells come back as dates (their format says so), not day numbers.
-  const reader = new ExcelJS.stream.xlsx.WorkbookReader(input, { worksheets: "emit", sharedStrings: "cache", hyperlinks: "ignore", styles: "cache", entries: "ignore" });
+  const reader = new ExcelJS.stream.xlsx.WorkbookReader(input, {
+    worksheets: "emit",
+    sharedStrings: "cache",
+    hyperlinks: "ignore",
+    styles: "cache",
+    entries: "ignore",
+  });
   const read: SheetRead[] = [];
   try {
     for await (const sheet of reader as unknown as AsyncIterable<StreamSheet>) {

@@ -14,7 +14,12 @@ export type XmlWorkbook = { sheets: XmlSheet[] };
 const ENTITY: Record<string, string> = { lt: "<", gt: ">", amp: "&", quot: '"', apos: "'" };
 // XML entities, then Excel's _xHHHH_ escapes for characters XML cannot hold (ECMA-376 ST_Xstring).
 function decodeText(s: string): string {
-  if (s.includes("&")) s = s.replace(/&(#x[0-9a-fA-F]+|#[0-9]+|[a-z]+);/g, (m, e: string) => (e[0] === "#" ? String.fromCodePoint(e[1] === "x" ? parseInt(e.slice(2), 16) : Number(e.slice(1))) : (ENTITY[e] ?? m)));
+  if (s.includes("&"))
+    s = s.replace(/&(#x[0-9a-fA-F]+|#[0-9]+|[a-z]+);/g, (m, e: string) =>
+      e[0] === "#"
+        ? String.fromCodePoint(e[1] === "x" ? parseInt(e.slice(2), 16) : Number(e.slice(1)))
+        : (ENTITY[e] ?? m),
+    );
   if (s.includes("_x")) s = s.replace(/_x([0-9A-Fa-f]{4})_/g, (_, h: string) => String.fromCharCode(parseInt(h, 16)));
   return s;
 }
@@ -48,7 +53,8 @@ const isDateCode = (code: string) => /[ymdhs]/i.test(code.replace(/\[[^\]]*]/g, 
 function dateStyles(xml: string | null): boolean[] {
   if (!xml) return [];
   const custom = new Map<number, string>();
-  for (const m of xml.matchAll(/<numFmt\b([^>]*)\/?>/g)) custom.set(Number(attr(m[1], "numFmtId")), decodeText(attr(m[1], "formatCode") ?? ""));
+  for (const m of xml.matchAll(/<numFmt\b([^>]*)\/?>/g))
+    custom.set(Number(attr(m[1], "numFmtId")), decodeText(attr(m[1], "formatCode") ?? ""));
   const xfs = /<cellXfs\b[^>]*>([\s\S]*?)<\/cellXfs>/.exec(xml)?.[1] ?? "";
   return Array.from(xfs.matchAll(/<xf\b([^>]*?)\/?>/g), (m) => {
     const id = Number(attr(m[1], "numFmtId") ?? 0);
@@ -63,7 +69,8 @@ const columnNumber = (letters: string) => {
 };
 
 // Excel's day numbers count from 1899-12-30 (1904-01-01 in 1904 workbooks); same formula as ExcelJS.
-const serialDate = (serial: number, date1904: boolean) => new Date(Math.round((serial - 25569 + (date1904 ? 1462 : 0)) * 86_400_000)).toISOString().slice(0, 10);
+const serialDate = (serial: number, date1904: boolean) =>
+  new Date(Math.round((serial - 25569 + (date1904 ? 1462 : 0)) * 86_400_000)).toISOString().slice(0, 10);
 
 type Context = { strings: string[]; dates: boolean[]; date1904: boolean };
 
@@ -123,7 +130,8 @@ function readSheetXml(xml: string, ctx: Context) {
 /** More sheet XML than 20,000 rows of every column would need (about 40 MB); a workbook past it is refused. */
 export const MAX_UNZIPPED_BYTES = 256 * 1024 * 1024;
 
-const resolveTarget = (target: string) => (target.startsWith("/") ? target.slice(1) : `xl/${target.replace(/^\.\//, "")}`);
+const resolveTarget = (target: string) =>
+  target.startsWith("/") ? target.slice(1) : `xl/${target.replace(/^\.\//, "")}`;
 
 /**
  * The sheets of a workbook in tab order, each read only when asked. Throws when the bytes are not a
@@ -137,12 +145,18 @@ export function openXmlWorkbook(bytes: Uint8Array, { maxUnzippedBytes = MAX_UNZI
     filter: (f) => {
       if (!f.name.startsWith("xl/") || !(f.name.endsWith(".xml") || f.name.endsWith(".rels"))) return false;
       unzipped += f.originalSize;
-      if (unzipped > maxUnzippedBytes) throw new FileProblem(`This workbook unpacks to more than ${Math.round(maxUnzippedBytes / 1048576)} MB of sheet data, more than a rig needs. Save the rig's sheet on its own, or as CSV.`);
+      if (unzipped > maxUnzippedBytes)
+        throw new FileProblem(
+          `This workbook unpacks to more than ${Math.round(maxUnzippedBytes / 1048576)} MB of sheet data, more than a rig needs. Save the rig's sheet on its own, or as CSV.`,
+        );
       return true;
     },
   });
   // Node's own UTF-8 decoding is several times faster than fflate's strFromU8 on a sheet of megabytes.
-  const text = (name: string) => (files[name] ? Buffer.from(files[name].buffer, files[name].byteOffset, files[name].byteLength).toString("utf8") : null);
+  const text = (name: string) =>
+    files[name]
+      ? Buffer.from(files[name].buffer, files[name].byteOffset, files[name].byteLength).toString("utf8")
+      : null;
   const workbook = text("xl/workbook.xml");
   const rels = text("xl/_rels/workbook.xml.rels");
   if (!workbook || !rels || !workbook.includes("<sheets")) return null;
@@ -152,7 +166,8 @@ export function openXmlWorkbook(bytes: Uint8Array, { maxUnzippedBytes = MAX_UNZI
     const target = attr(m[1], "Target");
     if (id && target) targets.set(id, { type: attr(m[1], "Type") ?? "", path: resolveTarget(decodeText(target)) });
   }
-  const partOf = (kind: string, fallback: string) => [...targets.values()].find((t) => t.type.endsWith(`/${kind}`))?.path ?? fallback;
+  const partOf = (kind: string, fallback: string) =>
+    [...targets.values()].find((t) => t.type.endsWith(`/${kind}`))?.path ?? fallback;
   const ctx: Context = {
     strings: sharedStrings(text(partOf("sharedStrings", "xl/sharedStrings.xml"))),
     dates: dateStyles(text(partOf("styles", "xl/styles.xml"))),

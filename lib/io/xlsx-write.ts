@@ -14,7 +14,8 @@ const sheetName = (name: string, used: Set<string>) => {
 
 const PLAIN: Partial<ExcelJS.Style> = Object.freeze({}) as Partial<ExcelJS.Style>;
 
-const cell = (v: CellOut) => (v == null ? null : typeof v === "boolean" ? (v ? "yes" : "no") : typeof v === "number" ? v : neutraliseCell(v));
+const cell = (v: CellOut) =>
+  v == null ? null : typeof v === "boolean" ? (v ? "yes" : "no") : typeof v === "number" ? v : neutraliseCell(v);
 
 /**
  * A formatted workbook: bold frozen header row, column widths, an autofilter; one sheet per entry.

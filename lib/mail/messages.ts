@@ -3,7 +3,13 @@ import { ROLE_LABELS, type Role } from "@/lib/auth/roles";
 // The words of Throwline's account and team mail, plain text (every mail program shows it the same).
 export type MailText = { subject: string; text: string };
 
-export function invitationMessage(a: { productionName: string; role: Role; inviterName: string; link: string; expiresAt: Date }): MailText {
+export function invitationMessage(a: {
+  productionName: string;
+  role: Role;
+  inviterName: string;
+  link: string;
+  expiresAt: Date;
+}): MailText {
   return {
     subject: `You are invited to ${a.productionName} on Throwline`,
     text: [

@@ -10,7 +10,12 @@ export function mailTransport(): Transporter | null {
   const url = env().SMTP_URL;
   if (!url) return null;
   if (cached?.url !== url) {
-    const transport = nodemailer.createTransport({ url, connectionTimeout: 5_000, greetingTimeout: 5_000, socketTimeout: 10_000 });
+    const transport = nodemailer.createTransport({
+      url,
+      connectionTimeout: 5_000,
+      greetingTimeout: 5_000,
+      socketTimeout: 10_000,
+    });
     cached = { url, transport };
   }
   return cached.transport;

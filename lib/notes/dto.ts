@@ -29,9 +29,21 @@ export type NoteDto = {
 /** The production's current cue, which new notes pick up. */
 export type CurrentCueDto = { cueId: number | null; number: string | null; label: string | null };
 
-export type ShowReportFaultDto = { id: number; fixtureId: number | null; kind: "lamp_out" | "fault"; description: string };
+export type ShowReportFaultDto = {
+  id: number;
+  fixtureId: number | null;
+  kind: "lamp_out" | "fault";
+  description: string;
+};
 /** A filed show report with its fault log and the ids of the notes it wrote. */
 export type ShowReportDto = {
-  id: number; performance: string; performedOn: string; summary: string; authorId: number; version: number; createdAt: string;
-  faults: ShowReportFaultDto[]; noteIds: number[];
+  id: number;
+  performance: string;
+  performedOn: string;
+  summary: string;
+  authorId: number;
+  version: number;
+  createdAt: string;
+  faults: ShowReportFaultDto[];
+  noteIds: number[];
 };

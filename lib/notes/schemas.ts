@@ -3,31 +3,54 @@ import { z } from "zod";
 import { versionSchema } from "@/lib/validation/common";
 import { NOTE_KINDS, NOTE_NEEDS, NOTE_PRIORITIES, NOTE_STATUSES, NOTE_SUBJECTS } from "@/models/note-vocabulary";
 
-const id = (what: string) => z.number({ error: `${what} must be an id` }).int({ error: `${what} must be an id` }).positive({ error: `${what} must be an id` });
+const id = (what: string) =>
+  z
+    .number({ error: `${what} must be an id` })
+    .int({ error: `${what} must be an id` })
+    .positive({ error: `${what} must be an id` });
 const oneOf = <T extends readonly [string, ...string[]]>(values: T, what: string) =>
   z.enum(values, { error: `${what} must be one of: ${values.join(", ")}` });
 
 const noteFields = {
   subject: oneOf(NOTE_SUBJECTS, "Subject"),
   subjectId: id("Subject").nullable(),
-  body: z.string({ error: "Note text is required" }).trim().min(1, { error: "Note text is required" }).max(2000, { error: "Note text is at most 2,000 characters" }),
+  body: z
+    .string({ error: "Note text is required" })
+    .trim()
+    .min(1, { error: "Note text is required" })
+    .max(2000, { error: "Note text is at most 2,000 characters" }),
   kind: oneOf(NOTE_KINDS, "Kind"),
   priority: oneOf(NOTE_PRIORITIES, "Priority"),
   ownerId: id("Owner").nullable(),
   status: oneOf(NOTE_STATUSES, "Status"),
   needs: z.array(oneOf(NOTE_NEEDS, "Each need"), { error: "Needs must be a list" }).max(NOTE_NEEDS.length),
   dueDate: z.iso.date({ error: "Due date must be a date (YYYY-MM-DD)" }).nullable(),
-  dueSession: z.string({ error: "Due session must be text" }).trim().max(80, { error: "Due session is at most 80 characters" }).nullable(),
+  dueSession: z
+    .string({ error: "Due session must be text" })
+    .trim()
+    .max(80, { error: "Due session is at most 80 characters" })
+    .nullable(),
 };
 
 /** The production itself has no subject id; everything else needs one. */
 const subjectHasId = (n: { subject?: string; subjectId?: number | null }) =>
   n.subject === undefined || (n.subject === "production" ? n.subjectId == null : n.subjectId != null);
-const subjectRule = { error: "Choose which one the note is about (or make it a note on the production)", path: ["subjectId"] };
+const subjectRule = {
+  error: "Choose which one the note is about (or make it a note on the production)",
+  path: ["subjectId"],
+};
 
 export const createNoteSchema = z
   .object(noteFields)
-  .partial({ subjectId: true, priority: true, ownerId: true, status: true, needs: true, dueDate: true, dueSession: true })
+  .partial({
+    subjectId: true,
+    priority: true,
+    ownerId: true,
+    status: true,
+    needs: true,
+    dueDate: true,
+    dueSession: true,
+  })
   .strict()
   .refine(subjectHasId, subjectRule);
 export type CreateNoteInput = z.output<typeof createNoteSchema>;
@@ -37,7 +60,10 @@ export const updateNoteSchema = z
   .partial()
   .extend({ version: versionSchema })
   .strict()
-  .refine((n) => (n.subject === undefined) === (n.subjectId === undefined), { error: "Send the subject and its id together", path: ["subjectId"] })
+  .refine((n) => (n.subject === undefined) === (n.subjectId === undefined), {
+    error: "Send the subject and its id together",
+    path: ["subjectId"],
+  })
   .refine(subjectHasId, subjectRule);
 export type UpdateNotePatch = z.output<typeof updateNoteSchema>;
 
@@ -66,15 +92,27 @@ export type ChannelCheckInput = z.output<typeof channelCheckSchema>;
 
 /** A point on the plan (metres from the datum) in a cue's state. */
 const planCoord = (what: string) =>
-  z.number({ error: `${what} must be a number of metres` }).min(-200, { error: `${what} is more than 200 m from the datum` }).max(200, { error: `${what} is more than 200 m from the datum` });
-export const spotRequestSchema = z.object({ x: planCoord("x"), y: planCoord("y"), cueId: id("Cue").optional() }).strict();
+  z
+    .number({ error: `${what} must be a number of metres` })
+    .min(-200, { error: `${what} is more than 200 m from the datum` })
+    .max(200, { error: `${what} is more than 200 m from the datum` });
+export const spotRequestSchema = z
+  .object({ x: planCoord("x"), y: planCoord("y"), cueId: id("Cue").optional() })
+  .strict();
 
 /** The stage manager's report: lighting items become notes; the lamp-out and fault log stays with the report. */
 export const showReportSchema = z
   .object({
-    performance: z.string({ error: "Performance is required" }).trim().min(1, { error: "Performance is required (e.g. \"Evening 3\")" }).max(80, { error: "Performance is at most 80 characters" }),
+    performance: z
+      .string({ error: "Performance is required" })
+      .trim()
+      .min(1, { error: 'Performance is required (e.g. "Evening 3")' })
+      .max(80, { error: "Performance is at most 80 characters" }),
     performedOn: z.iso.date({ error: "Date must be a date (YYYY-MM-DD)" }),
-    summary: z.string({ error: "Summary must be text" }).trim().max(4000, { error: "Summary is at most 4,000 characters" }),
+    summary: z
+      .string({ error: "Summary must be text" })
+      .trim()
+      .max(4000, { error: "Summary is at most 4,000 characters" }),
     items: z
       .array(
         z
@@ -97,7 +135,11 @@ export const showReportSchema = z
           .object({
             fixtureId: id("Fixture").nullable(),
             kind: z.enum(["lamp_out", "fault"], { error: "Each log entry is a lamp out or a fault" }),
-            description: z.string({ error: "Say what happened" }).trim().min(1, { error: "Say what happened" }).max(300, { error: "At most 300 characters" }),
+            description: z
+              .string({ error: "Say what happened" })
+              .trim()
+              .min(1, { error: "Say what happened" })
+              .max(300, { error: "At most 300 characters" }),
           })
           .strict(),
         { error: "The fault log must be a list" },

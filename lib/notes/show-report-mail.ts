@@ -7,8 +7,15 @@ import { requireProduction } from "@/lib/data/productions";
 import type { NoteDto, ShowReportDto } from "./dto";
 import { showReportText } from "./show-report-text";
 
-export async function mailShowReport(productionId: number, report: ShowReportDto, notes: NoteDto[]): Promise<{ sent: number; queued: number }> {
-  const [team, production] = await Promise.all([getTeamByProduction({ productionId }), requireProduction(productionId)]);
+export async function mailShowReport(
+  productionId: number,
+  report: ShowReportDto,
+  notes: NoteDto[],
+): Promise<{ sent: number; queued: number }> {
+  const [team, production] = await Promise.all([
+    getTeamByProduction({ productionId }),
+    requireProduction(productionId),
+  ]);
   const message = showReportText(production.name, report, notes);
   let sent = 0;
   let queued = 0;

@@ -2,7 +2,11 @@
 import type { NoteDto, ShowReportDto } from "./dto";
 import { KIND_LABELS } from "./words";
 
-export function showReportText(productionName: string, report: ShowReportDto, notes: NoteDto[]): { subject: string; text: string } {
+export function showReportText(
+  productionName: string,
+  report: ShowReportDto,
+  notes: NoteDto[],
+): { subject: string; text: string } {
   const lines = [
     `Show report: ${productionName}, ${report.performance} (${report.performedOn})`,
     "",

@@ -11,14 +11,21 @@ const REACHES_LUX = 1e-3;
  * Lux each unit gives on a horizontal surface at `point` (lib/optics' beam model), units that reach it only,
  * ranked by their contribution; `share` is the fraction of the total. Ties keep the units' given order.
  */
-export function rankSpotContributions(point: Vec3, sources: SpotSource[]): { total: number; contributions: SpotContribution[] } {
-  const lit = sources
-    .map((s, i) => ({ s, i, lux: illuminanceAt(point, [s.beam]) }))
-    .filter((c) => c.lux > REACHES_LUX);
+export function rankSpotContributions(
+  point: Vec3,
+  sources: SpotSource[],
+): { total: number; contributions: SpotContribution[] } {
+  const lit = sources.map((s, i) => ({ s, i, lux: illuminanceAt(point, [s.beam]) })).filter((c) => c.lux > REACHES_LUX);
   const total = lit.reduce((sum, c) => sum + c.lux, 0);
   lit.sort((a, b) => b.lux - a.lux || a.i - b.i);
   return {
     total,
-    contributions: lit.map(({ s, lux }) => ({ fixtureId: s.fixtureId, label: s.label, channel: s.channel, lux, share: total > 0 ? lux / total : 0 })),
+    contributions: lit.map(({ s, lux }) => ({
+      fixtureId: s.fixtureId,
+      label: s.label,
+      channel: s.channel,
+      lux,
+      share: total > 0 ? lux / total : 0,
+    })),
   };
 }

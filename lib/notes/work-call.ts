@@ -3,8 +3,25 @@
 import { compareUnitNumbers } from "@/lib/rig/unit-number";
 import type { NoteDto } from "./dto";
 
-export type WorkCallPosition = { id: number; name: string; x1: number; y1: number; x2: number | null; y2: number | null; trimHeight: number; sortOrder: number };
-export type WorkCallFixture = { id: number; positionId: number; unitNumber: string; channel: number | null; x: number; y: number; lensHeight: number | null };
+export type WorkCallPosition = {
+  id: number;
+  name: string;
+  x1: number;
+  y1: number;
+  x2: number | null;
+  y2: number | null;
+  trimHeight: number;
+  sortOrder: number;
+};
+export type WorkCallFixture = {
+  id: number;
+  positionId: number;
+  unitNumber: string;
+  channel: number | null;
+  x: number;
+  y: number;
+  lensHeight: number | null;
+};
 
 export type WorkCallStop = {
   note: NoteDto;
@@ -35,12 +52,17 @@ function along(p: WorkCallPosition, x: number, y: number): number {
  * then the production's own order. Along each position the direction alternates, so the walk snakes from
  * the end of one pipe to the near end of the next. Notes off the rig come last, oldest first.
  */
-export function orderWorkCall(notes: NoteDto[], positions: WorkCallPosition[], fixtures: WorkCallFixture[]): WorkCallStop[] {
+export function orderWorkCall(
+  notes: NoteDto[],
+  positions: WorkCallPosition[],
+  fixtures: WorkCallFixture[],
+): WorkCallStop[] {
   const byPosition = new Map(positions.map((p) => [p.id, p]));
   const byFixture = new Map(fixtures.map((f) => [f.id, f]));
   const midY = (p: WorkCallPosition) => (p.y1 + (p.y2 ?? p.y1)) / 2;
   const posOrder = [...positions].sort(
-    (a, b) => b.trimHeight - a.trimHeight || midY(a) - midY(b) || a.sortOrder - b.sortOrder || a.name.localeCompare(b.name),
+    (a, b) =>
+      b.trimHeight - a.trimHeight || midY(a) - midY(b) || a.sortOrder - b.sortOrder || a.name.localeCompare(b.name),
   );
   const rank = new Map(posOrder.map((p, i) => [p.id, i]));
 
@@ -48,7 +70,11 @@ export function orderWorkCall(notes: NoteDto[], positions: WorkCallPosition[], f
   const offRig: WorkCallStop[] = [];
   for (const note of notes.filter(isOnWorkCall)) {
     const fixture = note.subject === "fixture" && note.subjectId != null ? byFixture.get(note.subjectId) : undefined;
-    const pos = fixture ? byPosition.get(fixture.positionId) : note.subject === "position" && note.subjectId != null ? byPosition.get(note.subjectId) : undefined;
+    const pos = fixture
+      ? byPosition.get(fixture.positionId)
+      : note.subject === "position" && note.subjectId != null
+        ? byPosition.get(note.subjectId)
+        : undefined;
     if (!pos) {
       offRig.push({ note, position: null, fixture: null, height: null });
       continue;

@@ -74,20 +74,39 @@ function median(xs: number[]): number | null {
 function checkThresholds(t: AreaThresholds): void {
   assertFinite("Uniformity threshold", t.minUniformity);
   assertFinite("Mean ratio", t.meanRatio);
-  if (t.minUniformity < 0 || t.minUniformity > 1) throw new RangeError(`The uniformity threshold must be between 0 and 1 (got ${t.minUniformity}).`);
+  if (t.minUniformity < 0 || t.minUniformity > 1)
+    throw new RangeError(`The uniformity threshold must be between 0 and 1 (got ${t.minUniformity}).`);
   if (t.meanRatio < 1) throw new RangeError(`The mean ratio must be 1 or more (got ${t.meanRatio}).`);
 }
 
 /** Minimum, mean, maximum and uniformity of each acting area on a grid, with the areas that need a look flagged. */
-export function areaCoverage(g: GridCells, areas: AreaInput[], thresholds: AreaThresholds = DEFAULT_THRESHOLDS): AreaCoverage[] {
+export function areaCoverage(
+  g: GridCells,
+  areas: AreaInput[],
+  thresholds: AreaThresholds = DEFAULT_THRESHOLDS,
+): AreaCoverage[] {
   checkThresholds(thresholds);
-  const raws = areas.map((a) => (a.polygon.length >= 3 ? rawStats(g, a.polygon) : { count: 0, sum: 0, min: Infinity, max: -Infinity, minAt: null }));
+  const raws = areas.map((a) =>
+    a.polygon.length >= 3 ? rawStats(g, a.polygon) : { count: 0, sum: 0, min: Infinity, max: -Infinity, minAt: null },
+  );
   const means = raws.map((r) => (r.count ? r.sum / r.count : null));
   return areas.map((a, k) => {
     const r = raws[k];
     const mean = means[k];
     if (!r.count || mean === null) {
-      return { id: a.id, name: a.name, count: 0, min: null, mean: null, max: null, minAt: null, uniformity: null, averageToMinimum: null, meanRatio: null, flags: ["no-cells"] };
+      return {
+        id: a.id,
+        name: a.name,
+        count: 0,
+        min: null,
+        mean: null,
+        max: null,
+        minAt: null,
+        uniformity: null,
+        averageToMinimum: null,
+        meanRatio: null,
+        flags: ["no-cells"],
+      };
     }
     // The median, so that one very bright area stands out without making every other area look dim.
     const otherMean = median(means.filter((m, j): m is number => j !== k && m !== null));
@@ -99,8 +118,17 @@ export function areaCoverage(g: GridCells, areas: AreaInput[], thresholds: AreaT
     if (meanRatio !== null && meanRatio > thresholds.meanRatio) flags.push("brighter");
     if (meanRatio !== null && meanRatio < 1 / thresholds.meanRatio) flags.push("dimmer");
     return {
-      id: a.id, name: a.name, count: r.count, min: r.min, mean, max: r.max, minAt: r.minAt, uniformity,
-      averageToMinimum: r.min > 0 ? mean / r.min : null, meanRatio, flags,
+      id: a.id,
+      name: a.name,
+      count: r.count,
+      min: r.min,
+      mean,
+      max: r.max,
+      minAt: r.minAt,
+      uniformity,
+      averageToMinimum: r.min > 0 ? mean / r.min : null,
+      meanRatio,
+      flags,
     };
   });
 }

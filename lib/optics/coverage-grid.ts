@@ -55,7 +55,13 @@ type Layout = { cols: number; rows: number; res: number; ox: number; oy: number;
 
 /** Rows and columns a beam can reach on the plane: its pool's box, or everything when the pool is not closed. */
 function reach(beam: LitBeam, g: Layout): [number, number, number, number] | null {
-  const pool = poolAtPlane({ source: beam.source, focus: beam.focus, coneDeg: beam.coneDeg, softnessDeg: beam.softnessDeg, planeZ: g.pz });
+  const pool = poolAtPlane({
+    source: beam.source,
+    focus: beam.focus,
+    coneDeg: beam.coneDeg,
+    softnessDeg: beam.softnessDeg,
+    planeZ: g.pz,
+  });
   if (pool.status !== "ok" || !pool.outer) return [0, g.rows - 1, 0, g.cols - 1];
   const bb = ellipseBounds(pool.outer);
   const r0 = Math.max(0, Math.floor((bb.minY - g.oy) / g.res) - 1);
@@ -68,7 +74,15 @@ function reach(beam: LitBeam, g: Layout): [number, number, number, number] | nul
 type Acc = { total: Float64Array; keyLux: Float32Array; key: Int32Array };
 
 /** One beam's lux on the vertical faces; the same culling as the deck grid (the cone meets the same plane). */
-function addFaceBeam(acc: Acc, index: number, b: PreparedBeam, beam: LitBeam, g: Layout, cull: boolean, span: Int32Array): number {
+function addFaceBeam(
+  acc: Acc,
+  index: number,
+  b: PreparedBeam,
+  beam: LitBeam,
+  g: Layout,
+  cull: boolean,
+  span: Int32Array,
+): number {
   const h = b.sz - g.pz;
   let [r0, r1, cMin, cMax] = [0, g.rows - 1, 0, g.cols - 1];
   if (cull) {
@@ -128,9 +142,22 @@ function faceGrid(i: CoverageInput, planeZ: number, facingDeg: number): Coverage
   // The deck grid checks bounds and resolution; an empty beam list costs nothing and gives the layout.
   const shape = illuminanceGrid({ bounds: i.bounds, resolution: i.resolution, planeZ, beams: [] });
   const n = facingNormal(facingDeg);
-  const g: Layout = { cols: shape.cols, rows: shape.rows, res: shape.resolution, ox: shape.originX, oy: shape.originY, pz: planeZ, nx: n.x, ny: n.y };
+  const g: Layout = {
+    cols: shape.cols,
+    rows: shape.rows,
+    res: shape.resolution,
+    ox: shape.originX,
+    oy: shape.originY,
+    pz: planeZ,
+    nx: n.x,
+    ny: n.y,
+  };
   const cells = g.cols * g.rows;
-  const acc: Acc = { total: new Float64Array(cells), keyLux: new Float32Array(cells), key: new Int32Array(cells).fill(-1) };
+  const acc: Acc = {
+    total: new Float64Array(cells),
+    keyLux: new Float32Array(cells),
+    key: new Int32Array(cells).fill(-1),
+  };
   const span = new Int32Array(2);
   const cull = i.cull !== false;
   let evaluations = 0;
@@ -142,6 +169,13 @@ function faceGrid(i: CoverageInput, planeZ: number, facingDeg: number): Coverage
   const values = new Float32Array(acc.total);
   const s = zoneStats({ values, cols: g.cols, rows: g.rows, originX: g.ox, originY: g.oy, resolution: g.res });
   return {
-    ...shape, values, min: s.min ?? 0, mean: s.mean ?? 0, max: s.max ?? 0, evaluations, key: acc.key, keyLux: acc.keyLux,
+    ...shape,
+    values,
+    min: s.min ?? 0,
+    mean: s.mean ?? 0,
+    max: s.max ?? 0,
+    evaluations,
+    key: acc.key,
+    keyLux: acc.keyLux,
   };
 }

@@ -45,7 +45,7 @@ export function dimmerCurveOf(family: Family): DimmerCurve {
 export function lightFromLevel(level: number, curve: DimmerCurve): number {
   assertFinite("Level", level);
   if (level < 0 || level > 1) throw new RangeError(`Level must be between 0 and 1 (got ${level}).`);
-  return curve === "linear" ? level : Math.pow(level, TUNGSTEN_EXPONENT);
+  return curve === "linear" ? level : level ** TUNGSTEN_EXPONENT;
 }
 
 /**
@@ -55,6 +55,6 @@ export function lightFromLevel(level: number, curve: DimmerCurve): number {
 export function tungstenColourTemperature(level: number, fullKelvin = 3200): number {
   const light = lightFromLevel(level, "tungsten");
   if (light === 0) return 0;
-  const voltage = Math.pow(light, 1 / LAMP_LUMEN_EXPONENT);
-  return fullKelvin * Math.pow(voltage, LAMP_CCT_EXPONENT);
+  const voltage = light ** (1 / LAMP_LUMEN_EXPONENT);
+  return fullKelvin * voltage ** LAMP_CCT_EXPONENT;
 }

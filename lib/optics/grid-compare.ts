@@ -4,7 +4,13 @@ import type { Point } from "./vector";
 
 /** Cell by cell b − a of two grids over the same cells (positive where b is brighter). */
 export function differenceGrid<G extends GridCells>(a: G, b: G): Float32Array {
-  if (a.cols !== b.cols || a.rows !== b.rows || a.originX !== b.originX || a.originY !== b.originY || a.resolution !== b.resolution) {
+  if (
+    a.cols !== b.cols ||
+    a.rows !== b.rows ||
+    a.originX !== b.originX ||
+    a.originY !== b.originY ||
+    a.resolution !== b.resolution
+  ) {
     throw new RangeError("The two grids cover different cells; compute both over the same area and resolution.");
   }
   const out = new Float32Array(a.values.length);
@@ -35,7 +41,14 @@ export type LineSample = { distance: number; x: number; y: number; value: number
  * default) from a to b, both ends included: the dip an actor walks through between two areas.
  */
 export function lineProfile(g: GridCells, a: Point, b: Point, step = g.resolution): LineSample[] {
-  for (const [k, v] of [["a.x", a.x], ["a.y", a.y], ["b.x", b.x], ["b.y", b.y], ["step", step]] as const) assertFinite(`Line ${k}`, v);
+  for (const [k, v] of [
+    ["a.x", a.x],
+    ["a.y", a.y],
+    ["b.x", b.x],
+    ["b.y", b.y],
+    ["step", step],
+  ] as const)
+    assertFinite(`Line ${k}`, v);
   if (step <= 0) throw new RangeError(`The sampling step must be above 0 m (got ${step}).`);
   const length = Math.hypot(b.x - a.x, b.y - a.y);
   const n = Math.max(1, Math.ceil(length / step - 1e-9));

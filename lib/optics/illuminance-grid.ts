@@ -56,7 +56,11 @@ type Reach = [r0: number, r1: number, minX: number, maxX: number];
  */
 function reachRows(beam: LitBeam, planeZ: number, oy: number, res: number, rows: number): Reach | null {
   const pool = poolAtPlane({
-    source: beam.source, focus: beam.focus, coneDeg: beam.coneDeg, softnessDeg: beam.softnessDeg, planeZ,
+    source: beam.source,
+    focus: beam.focus,
+    coneDeg: beam.coneDeg,
+    softnessDeg: beam.softnessDeg,
+    planeZ,
   });
   if (pool.status !== "ok" || !pool.outer) return [0, rows - 1, -Infinity, Infinity];
   const bb = ellipseBounds(pool.outer);
@@ -67,7 +71,12 @@ function reachRows(beam: LitBeam, planeZ: number, oy: number, res: number, rows:
 
 /** Adds one beam's lux to acc; returns the number of cells evaluated. The loop allocates nothing. */
 function addBeam(
-  acc: Float64Array, b: PreparedBeam, g: Layout, beam: LitBeam, cull: boolean, span: Int32Array,
+  acc: Float64Array,
+  b: PreparedBeam,
+  g: Layout,
+  beam: LitBeam,
+  cull: boolean,
+  span: Int32Array,
 ): number {
   const h = b.sz - g.pz;
   let r0 = 0;
@@ -145,8 +154,17 @@ export function illuminanceGrid(i: GridInput): Grid {
   const values = new Float32Array(acc);
   const s = zoneStats({ values, cols, rows, originX: g.ox, originY: g.oy, resolution: res });
   return {
-    values, cols, rows, resolution: res, planeZ: g.pz, originX: g.ox, originY: g.oy,
-    min: s.min ?? 0, mean: s.mean ?? 0, max: s.max ?? 0, evaluations,
+    values,
+    cols,
+    rows,
+    resolution: res,
+    planeZ: g.pz,
+    originX: g.ox,
+    originY: g.oy,
+    min: s.min ?? 0,
+    mean: s.mean ?? 0,
+    max: s.max ?? 0,
+    evaluations,
   };
 }
 
@@ -186,7 +204,10 @@ export function zoneStats(g: GridCells, polygon?: Point[]): ZoneStats {
   if (count === 0) return { count, min: null, mean: null, max: null, uniformity: null, diversity: null };
   const mean = sum / count;
   return {
-    count, min, mean, max,
+    count,
+    min,
+    mean,
+    max,
     uniformity: mean > 0 ? min / mean : null,
     diversity: max > 0 ? min / max : null,
   };

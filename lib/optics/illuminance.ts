@@ -17,8 +17,12 @@ export type LitBeam = {
 
 /** A beam reduced to the numbers the inner loop needs, so a grid never re-validates or allocates. */
 export type PreparedBeam = {
-  sx: number; sy: number; sz: number;
-  ax: number; ay: number; az: number;
+  sx: number;
+  sy: number;
+  sz: number;
+  ax: number;
+  ay: number;
+  az: number;
   intensity: number;
   prof: Profile;
 };
@@ -33,8 +37,12 @@ export function prepareBeam(b: LitBeam): PreparedBeam {
   if (b.level < 0 || b.level > 1) throw new RangeError(`Level must be between 0 and 1 (got ${b.level}).`);
   const sinPhi = Math.sin(axis.phi);
   return {
-    sx: b.source.x, sy: b.source.y, sz: b.source.z,
-    ax: sinPhi * axis.ux, ay: sinPhi * axis.uy, az: -Math.cos(axis.phi),
+    sx: b.source.x,
+    sy: b.source.y,
+    sz: b.source.z,
+    ax: sinPhi * axis.ux,
+    ay: sinPhi * axis.uy,
+    az: -Math.cos(axis.phi),
     intensity: b.peakCandela * b.level,
     prof: makeProfile(ang, profileShapeOf(b.family ?? "profile")),
   };

@@ -35,7 +35,15 @@ export const REASON_OPEN =
 
 /** The lens's foot on the plane and the axis, shared by the three cones. */
 type Frame = {
-  h: number; phi: number; sinPhi: number; cosPhi: number; ux: number; uy: number; fx: number; fy: number; rot: number;
+  h: number;
+  phi: number;
+  sinPhi: number;
+  cosPhi: number;
+  ux: number;
+  uy: number;
+  fx: number;
+  fy: number;
+  rot: number;
 };
 
 /** One cone's half-angle with the cosines the section and the soft band share. */
@@ -67,8 +75,16 @@ function section(f: Frame, c: Cone): Ellipse | null {
 
 function none(reason: string, warnings: string[]): PlanePool {
   return {
-    status: "none", reason, axisHit: null, outer: null, half: null, core: null,
-    lengthAlong: null, widthAcross: null, band: null, warnings,
+    status: "none",
+    reason,
+    axisHit: null,
+    outer: null,
+    half: null,
+    core: null,
+    lengthAlong: null,
+    widthAcross: null,
+    band: null,
+    warnings,
   };
 }
 
@@ -84,7 +100,14 @@ export function poolAtPlane(i: PoolInput): PlanePool {
   if (phi > HALF_PI + HORIZON_TOL) return none(REASON_AXIS_UP, warnings);
 
   const f: Frame = {
-    h, phi, sinPhi: axis.sinPhi, cosPhi: axis.cosPhi, ux, uy, fx: i.source.x, fy: i.source.y,
+    h,
+    phi,
+    sinPhi: axis.sinPhi,
+    cosPhi: axis.cosPhi,
+    ux,
+    uy,
+    fx: i.source.x,
+    fy: i.source.y,
     rot: noNegZero(Math.atan2(uy, ux) / DEG),
   };
   const level = phi >= HALF_PI - HORIZON_TOL;
@@ -97,8 +120,18 @@ export function poolAtPlane(i: PoolInput): PlanePool {
   const core = ang.core > 0 ? section(f, cc) : null;
   const outer = section(f, co);
   if (!outer) {
-    return { status: "open", reason: REASON_OPEN, axisHit, outer: null, half, core,
-      lengthAlong: null, widthAcross: null, band: null, warnings };
+    return {
+      status: "open",
+      reason: REASON_OPEN,
+      axisHit,
+      outer: null,
+      half,
+      core,
+      lengthAlong: null,
+      widthAcross: null,
+      band: null,
+      warnings,
+    };
   }
   // tan x − tan y = sin(x−y)/(cos x·cos y): exact non-negative band widths without cancelling two tans.
   const sd = f.h * (co.sin * cc.cos - co.cos * cc.sin);
@@ -108,8 +141,15 @@ export function poolAtPlane(i: PoolInput): PlanePool {
     across: outer.semiMinor - (core ? core.semiMinor : 0),
   };
   return {
-    status: "ok", axisHit, outer, half, core,
-    lengthAlong: 2 * outer.semiMajor, widthAcross: 2 * outer.semiMinor, band, warnings,
+    status: "ok",
+    axisHit,
+    outer,
+    half,
+    core,
+    lengthAlong: 2 * outer.semiMajor,
+    widthAcross: 2 * outer.semiMinor,
+    band,
+    warnings,
   };
 }
 

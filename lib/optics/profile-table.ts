@@ -28,9 +28,7 @@ export type ProfileTable = {
 export function profileTable(p: Profile): ProfileTable {
   const range = 1 - p.cosOuter;
   // exp(−ln2·(β/βb)^k) = 1 − ε at β = βb·(ε/ln2)^(1/k); the flat profile is exactly 1 up to its core.
-  const cosStart = p.peaked && p.k !== Infinity
-    ? Math.cos(p.half * Math.pow(FLAT_WITHIN / Math.LN2, 1 / p.k))
-    : p.cosCore;
+  const cosStart = p.peaked && p.k !== Infinity ? Math.cos(p.half * (FLAT_WITHIN / Math.LN2) ** (1 / p.k)) : p.cosCore;
   const sigma0 = Math.min(1, Math.sqrt((1 - cosStart) / range));
   const sinHalfOuter = Math.sin(p.outer / 2);
   const values = new Float64Array(TABLE_STEPS + 1);

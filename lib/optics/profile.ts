@@ -44,7 +44,11 @@ export function makeProfile(ang: BeamAngles, shape: ProfileShape): Profile {
   const peaked = shape === "peaked";
   const k = peaked && ang.outer > ang.half ? LOG_TEN_OVER_HALF / Math.log(ang.outer / ang.half) : Infinity;
   return {
-    peaked, outer: ang.outer, core: ang.core, half: ang.half, k,
+    peaked,
+    outer: ang.outer,
+    core: ang.core,
+    half: ang.half,
+    k,
     cosOuter: Math.cos(ang.outer),
     // A peaked beam with no softness is a plain hard-edged disc: the core spans the whole cone.
     // cosCore: at or inside this the intensity is full, so callers can skip acos and the curve.
@@ -55,7 +59,7 @@ export function makeProfile(ang: BeamAngles, shape: ProfileShape): Profile {
 /** Relative intensity (0..1) at angle beta (radians) off the axis. */
 export function profileAt(p: Profile, beta: number): number {
   if (beta > p.outer) return 0;
-  if (p.peaked) return p.k === Infinity ? 1 : Math.exp(-Math.LN2 * Math.pow(beta / p.half, p.k));
+  if (p.peaked) return p.k === Infinity ? 1 : Math.exp(-Math.LN2 * (beta / p.half) ** p.k);
   if (beta <= p.core) return 1;
   return 0.5 * (1 + Math.cos((Math.PI * (beta - p.core)) / (p.outer - p.core)));
 }
@@ -68,7 +72,10 @@ export function profileAt(p: Profile, beta: number): number {
  * a tenth of the peak is not modelled, so the drawn pool, the grid culling and the light agree).
  */
 export function relativeIntensity(
-  betaDeg: number, coneDeg: number, softnessDeg: number, family: Family = "profile",
+  betaDeg: number,
+  coneDeg: number,
+  softnessDeg: number,
+  family: Family = "profile",
 ): number {
   const prof = makeProfile(beamAngles(coneDeg, softnessDeg), profileShapeOf(family));
   return profileAt(prof, Math.abs(betaDeg) * DEG);
@@ -93,7 +100,9 @@ const FLAT_FIELD_MINUS_BEAM_PER_SOFTNESS = 1 - 2 * (1 - FLAT_TENTH_ACROSS_BAND);
  * the 50 % point no longer lands exactly.
  */
 export function fromDatasheet(d: { beamDeg: number; fieldDeg: number; family?: Family }): {
-  coneDeg: number; softnessDeg: number; warning?: string;
+  coneDeg: number;
+  softnessDeg: number;
+  warning?: string;
 } {
   const { beamDeg, fieldDeg } = d;
   const family = d.family ?? "profile";
@@ -107,10 +116,15 @@ export function fromDatasheet(d: { beamDeg: number; fieldDeg: number; family?: F
   const softnessDeg = flat ? (fieldDeg - beamDeg) / FLAT_FIELD_MINUS_BEAM_PER_SOFTNESS : fieldDeg - beamDeg;
   const out = { coneDeg: flat ? beamDeg + softnessDeg : fieldDeg, softnessDeg };
   if (out.coneDeg >= 180) {
-    throw new RangeError(`A ${beamDeg}° beam with a ${fieldDeg}° field needs a cone of ${out.coneDeg.toFixed(1)}°, past the model's 180°.`);
+    throw new RangeError(
+      `A ${beamDeg}° beam with a ${fieldDeg}° field needs a cone of ${out.coneDeg.toFixed(1)}°, past the model's 180°.`,
+    );
   }
   if (out.softnessDeg > out.coneDeg / 2) {
-    return { ...out, warning: `A beam angle this far under the field angle leaves no even core; modelled with a ${+(out.coneDeg / 2).toFixed(2)}° softness, so the 50 % point falls wider than the datasheet's beam.` };
+    return {
+      ...out,
+      warning: `A beam angle this far under the field angle leaves no even core; modelled with a ${+(out.coneDeg / 2).toFixed(2)}° softness, so the 50 % point falls wider than the datasheet's beam.`,
+    };
   }
   return out;
 }

@@ -72,7 +72,10 @@ function performerOutline(source: Vec3, o: Extract<Occluder, { kind: "performer"
 }
 
 function panelOutline(source: Vec3, o: Extract<Occluder, { kind: "panel" }>): Outline {
-  for (const [k, p] of [["a", o.a], ["b", o.b]] as const) {
+  for (const [k, p] of [
+    ["a", o.a],
+    ["b", o.b],
+  ] as const) {
     assertFinite(`Panel point ${k}.x`, p.x);
     assertFinite(`Panel point ${k}.y`, p.y);
   }
@@ -93,7 +96,10 @@ function panelOutline(source: Vec3, o: Extract<Occluder, { kind: "panel" }>): Ou
   const db = Math.hypot(o.b.x - source.x, o.b.y - source.y);
   const [down, up] = o.a.y <= o.b.y ? [o.a, o.b] : [o.b, o.a];
   return {
-    farthest: db > da ? o.b : o.a, mostUpstage: up, mostDownstage: down, width,
+    farthest: db > da ? o.b : o.a,
+    mostUpstage: up,
+    mostDownstage: down,
+    width,
     insideReason: inside ? "The lens is inside the scenery panel." : null,
   };
 }

@@ -8,8 +8,17 @@
  * missing cell would be a wrong answer.
  */
 export function coneRowSpan(
-  ax: number, ay: number, az: number, c: number, wy: number, h: number,
-  sx: number, ox: number, res: number, cols: number, out: Int32Array,
+  ax: number,
+  ay: number,
+  az: number,
+  c: number,
+  wy: number,
+  h: number,
+  sx: number,
+  ox: number,
+  res: number,
+  cols: number,
+  out: Int32Array,
 ): boolean {
   const A = ax * ax - c * c;
   const k1 = ay * wy - az * h;

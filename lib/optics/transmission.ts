@@ -30,7 +30,10 @@ export function transmissionOf(colour: string | null | undefined, list: ColourLi
   if (OPEN_FRAME.has(text.toLowerCase())) return { factor: 1, missing: [] };
   const whole = list.get(text);
   if (whole !== undefined) return { factor: percentToFactor(whole), missing: [] };
-  const parts = text.split("+").map((p) => p.trim()).filter((p) => !OPEN_FRAME.has(p.toLowerCase()));
+  const parts = text
+    .split("+")
+    .map((p) => p.trim())
+    .filter((p) => !OPEN_FRAME.has(p.toLowerCase()));
   if (parts.length < 2) return { factor: 1, missing: [text] };
   let factor = 1;
   const missing: string[] = [];

@@ -10,9 +10,21 @@ const NUM = String.raw`(\d+(?:\.\d+)?|\.\d+)`;
 const FEET = String.raw`(?:'|ft|foot|feet)`;
 const INCH = String.raw`(?:"|in|inch|inches)`;
 const METRIC: Record<string, number> = {
-  m: 1, metre: 1, metres: 1, meter: 1, meters: 1,
-  cm: 0.01, centimetre: 0.01, centimetres: 0.01, centimeter: 0.01, centimeters: 0.01,
-  mm: 0.001, millimetre: 0.001, millimetres: 0.001, millimeter: 0.001, millimeters: 0.001,
+  m: 1,
+  metre: 1,
+  metres: 1,
+  meter: 1,
+  meters: 1,
+  cm: 0.01,
+  centimetre: 0.01,
+  centimetres: 0.01,
+  centimeter: 0.01,
+  centimeters: 0.01,
+  mm: 0.001,
+  millimetre: 0.001,
+  millimetres: 0.001,
+  millimeter: 0.001,
+  millimeters: 0.001,
 };
 // Inches: a whole or decimal number, optionally with a fraction ("6 1/2", or "6-1/2" as paperwork often
 // writes it), or a fraction alone ("1/2").
@@ -35,7 +47,8 @@ function inchesOf(text: string, g: (string | undefined)[]): number {
   if (fn !== undefined && fd !== undefined) {
     if (Number(fd) === 0) fail(text, `the fraction ${fn}/${fd} divides by zero`);
     // 3/2" is most likely a slip for 1 1/2" or 3 1/2": refuse it rather than guess, as in a mixed number.
-    if (Number(fn) >= Number(fd)) fail(text, `the fraction ${fn}/${fd} of an inch must be less than one (write 1 1/2", not 3/2")`);
+    if (Number(fn) >= Number(fd))
+      fail(text, `the fraction ${fn}/${fd} of an inch must be less than one (write 1 1/2", not 3/2")`);
     return Number(fn) / Number(fd);
   }
   let v = Number(whole);
@@ -54,7 +67,12 @@ function inchesOf(text: string, g: (string | undefined)[]): number {
  */
 export function parseLength(text: string, defaultUnit: "m" | "ft"): number {
   if (typeof text !== "string") throw new RangeError(`Cannot read ${String(text)} as a length: it is not text.`);
-  const norm = text.trim().toLowerCase().replace(/[′’]/g, "'").replace(/[″”]|''/g, '"').replace(/−/g, "-");
+  const norm = text
+    .trim()
+    .toLowerCase()
+    .replace(/[′’]/g, "'")
+    .replace(/[″”]|''/g, '"')
+    .replace(/−/g, "-");
   if (norm === "") fail(text, "it is empty");
   const sign = norm.startsWith("-") ? -1 : 1;
   const body = norm.replace(/^[-+]\s*/, "");

@@ -40,11 +40,16 @@ export function peakCandelaAt(t: ZoomPeakType, zoomConeDeg: number): number {
 export function irisedConeDeg(zoomConeDeg: number, irisPercent: number | null | undefined): number {
   if (irisPercent == null) return zoomConeDeg;
   assertFinite("Iris", irisPercent);
-  if (irisPercent <= 0 || irisPercent > 100) throw new RangeError(`Iris must be more than 0 % and at most 100 % open (got ${irisPercent}).`);
+  if (irisPercent <= 0 || irisPercent > 100)
+    throw new RangeError(`Iris must be more than 0 % and at most 100 % open (got ${irisPercent}).`);
   return (2 * Math.atan((irisPercent / 100) * Math.tan((zoomConeDeg / 2) * DEG))) / DEG;
 }
 
 /** The beam a zoom setting and an iris give: the iris narrows the cone, the zoom alone sets the peak. */
-export function zoomedBeam(t: ZoomPeakType, zoomConeDeg: number, irisPercent?: number | null): { coneDeg: number; peakCandela: number } {
+export function zoomedBeam(
+  t: ZoomPeakType,
+  zoomConeDeg: number,
+  irisPercent?: number | null,
+): { coneDeg: number; peakCandela: number } {
   return { coneDeg: irisedConeDeg(zoomConeDeg, irisPercent), peakCandela: peakCandelaAt(t, zoomConeDeg) };
 }

@@ -9,7 +9,15 @@ import { AppError } from "@/lib/errors";
 
 export const CHROMIUM_PATH = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
 // The same flags the end-to-end tests use: no sandbox (root in a container), nothing fetched from outside.
-export const CHROMIUM_ARGS = ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"];
+export const CHROMIUM_ARGS = [
+  "--no-sandbox",
+  "--disable-gpu",
+  "--disable-quic",
+  "--no-first-run",
+  "--disable-background-networking",
+  "--disable-component-update",
+  "--disable-sync",
+];
 // Flags for the printing browser only:
 // - Headless Chromium 156 still builds the address bar's pop-up as a web page in a renderer of its own
 //   (about 2 CPU-seconds at the first print, for nothing), and keeps a spare renderer ready (20 MiB).
@@ -17,8 +25,13 @@ export const CHROMIUM_ARGS = ["--no-sandbox", "--disable-gpu", "--disable-quic",
 //   --disable-features, so the list repeats the features playwright-core disables itself (1.65).
 // - V8 (whose collector also frees the page's DOM) otherwise lets a print page's heap grow by about
 //   40 MiB a part, to 300 MiB a page by the end of a long print; collecting sooner cost no time in trials.
-const PLAYWRIGHT_DISABLED = "AvoidUnnecessaryBeforeUnloadCheckSync,DestroyProfileOnBrowserClose,HttpsUpgrades,HttpsFirstBalancedModeAutoEnable,LensOverlay,MediaRouter,PaintHolding,ThirdPartyStoragePartitioning,AvoidCorsURLLoaderRestartOnRedirect,OptimizationHints,NetworkTimeServiceQuerying,AimEnabled,PreconnectToSearch";
-const PRINT_ARGS = [...CHROMIUM_ARGS, `--disable-features=${PLAYWRIGHT_DISABLED},WebUIOmniboxPopup,WebUIOmniboxAimPopup,SpareRendererForSitePerProcess`, "--js-flags=--heap-growing-percent=40"];
+const PLAYWRIGHT_DISABLED =
+  "AvoidUnnecessaryBeforeUnloadCheckSync,DestroyProfileOnBrowserClose,HttpsUpgrades,HttpsFirstBalancedModeAutoEnable,LensOverlay,MediaRouter,PaintHolding,ThirdPartyStoragePartitioning,AvoidCorsURLLoaderRestartOnRedirect,OptimizationHints,NetworkTimeServiceQuerying,AimEnabled,PreconnectToSearch";
+const PRINT_ARGS = [
+  ...CHROMIUM_ARGS,
+  `--disable-features=${PLAYWRIGHT_DISABLED},WebUIOmniboxPopup,WebUIOmniboxAimPopup,SpareRendererForSitePerProcess`,
+  "--js-flags=--heap-growing-percent=40",
+];
 
 const IDLE_MS = 60_000;
 /** At most this many prints at once share the browser; the rest wait (2 cores here). */
@@ -38,14 +51,20 @@ export function chromiumMissing(): boolean {
 
 function launch(): Promise<Shared> {
   if (chromiumMissing()) {
-    throw new AppError("unavailable", `PDF printing needs Chromium at ${CHROMIUM_PATH}, which is not installed on this server. Install it (apt-get install chromium; npm start does this) or use the print view and your browser's "Save as PDF".`);
+    throw new AppError(
+      "unavailable",
+      `PDF printing needs Chromium at ${CHROMIUM_PATH}, which is not installed on this server. Install it (apt-get install chromium; npm start does this) or use the print view and your browser's "Save as PDF".`,
+    );
   }
   shared ??= (async () => {
     const browser = await chromium.launch({ executablePath: CHROMIUM_PATH, headless: true, args: PRINT_ARGS });
     return { browser, context: await browser.newContext(), idle: [] };
   })().catch((err) => {
     shared = null;
-    throw new AppError("unavailable", `Chromium could not be started for printing: ${(err as Error).message.split("\n")[0]}`);
+    throw new AppError(
+      "unavailable",
+      `Chromium could not be started for printing: ${(err as Error).message.split("\n")[0]}`,
+    );
   });
   return shared;
 }

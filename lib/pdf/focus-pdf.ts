@@ -22,10 +22,12 @@ import { renderStaticMarkup } from "./static-markup";
 
 /** The document a print page holds between parts: everything but the title and the sheets. */
 function printShell(paper: Paper): string {
-  return `<!doctype html><html lang="en"><head><meta charset="utf-8"><title></title>` +
+  return (
+    `<!doctype html><html lang="en"><head><meta charset="utf-8"><title></title>` +
     `<style>${plexFontFaces()}</style>` +
     `<style>html,body{margin:0;background:#fff}@media screen{body{display:none}}${CHART_CSS}${sheetCss(paper)}</style></head>` +
-    `<body></body></html>`;
+    `<body></body></html>`
+  );
 }
 
 const PRINT_TIMEOUT_MS = 120_000;
@@ -42,11 +44,23 @@ async function loadShell(page: Page, paper: Paper) {
   shellOf.delete(page);
   await page.setContent(printShell(paper), { waitUntil: "load" });
   // Fonts load when text first needs them; loading them now means no part waits for them.
-  await page.evaluate((weights) => Promise.all(weights.map((w) => document.fonts.load(`${w} 10px "IBM Plex Sans"`))).then(() => undefined), [...PLEX_WEIGHTS]);
+  await page.evaluate(
+    (weights) =>
+      Promise.all(weights.map((w) => document.fonts.load(`${w} 10px "IBM Plex Sans"`))).then(() => undefined),
+    [...PLEX_WEIGHTS],
+  );
   shellOf.set(page, paper);
 }
 
-const FOOTER_STYLE = { fontFamily: "sans-serif", fontSize: "7px", color: "#555", width: "100%", padding: "0 8mm", display: "flex", justifyContent: "space-between" };
+const FOOTER_STYLE = {
+  fontFamily: "sans-serif",
+  fontSize: "7px",
+  color: "#555",
+  width: "100%",
+  padding: "0 8mm",
+  display: "flex",
+  justifyContent: "space-between",
+};
 
 function footer(text: string, numbered: boolean): string {
   // Chromium fills pageNumber/totalPages itself; in a print made of parts they would restart, so then
@@ -60,7 +74,13 @@ function footer(text: string, numbered: boolean): string {
 export type PrintTuning = { partSheets?: number; parallel?: number };
 
 /** Prints sheets of static markup (from focusSheetsMarkup) to one PDF. */
-export async function renderPdf(o: { title: string; sheets: string[]; paper: Paper; footerText: string; tuning?: PrintTuning }): Promise<Buffer> {
+export async function renderPdf(o: {
+  title: string;
+  sheets: string[];
+  paper: Paper;
+  footerText: string;
+  tuning?: PrintTuning;
+}): Promise<Buffer> {
   const size = o.tuning?.partSheets ?? PART_SHEETS;
   const parts: string[][] = [];
   for (let i = 0; i < o.sheets.length; i += size) parts.push(o.sheets.slice(i, i + size));
@@ -68,12 +88,18 @@ export async function renderPdf(o: { title: string; sheets: string[]; paper: Pap
   const print = async (page: Page, part: string[], numbered: boolean) => {
     page.setDefaultTimeout(PRINT_TIMEOUT_MS);
     await loadShell(page, o.paper);
-    await page.evaluate(({ title, html }) => {
-      document.title = title;
-      document.body.innerHTML = html;
-      // Pictures (if a chart has any) must be decoded before printing, as the load event used to ensure.
-      return Promise.all([document.fonts.ready, ...Array.from(document.images, (img) => img.decode().catch(() => undefined))]).then(() => undefined);
-    }, { title: o.title, html: part.join("") });
+    await page.evaluate(
+      ({ title, html }) => {
+        document.title = title;
+        document.body.innerHTML = html;
+        // Pictures (if a chart has any) must be decoded before printing, as the load event used to ensure.
+        return Promise.all([
+          document.fonts.ready,
+          ...Array.from(document.images, (img) => img.decode().catch(() => undefined)),
+        ]).then(() => undefined);
+      },
+      { title: o.title, html: part.join("") },
+    );
     try {
       return await page.pdf({
         format: o.paper,
@@ -86,7 +112,9 @@ export async function renderPdf(o: { title: string; sheets: string[]; paper: Pap
       });
     } finally {
       // The page goes back to the pool: it must not keep this print's charts (or their memory).
-      await page.evaluate(() => { document.body.textContent = ""; });
+      await page.evaluate(() => {
+        document.body.textContent = "";
+      });
     }
   };
   if (parts.length === 1) return asBuffer(await withPages(1, ([page]) => print(page, parts[0], true)));

@@ -12,7 +12,15 @@ import { landmarksFromRows, mergeLandmarks, outlineLandmarks, type Landmark } fr
 
 export type FocusSource = { production: ChartProduction & { id: number }; charts: FocusChart[]; landmarks: Landmark[] };
 
-export async function loadFocusCharts({ productionId, filter, timeZone }: { productionId: number; filter: Partial<FocusFilter>; timeZone?: string }): Promise<FocusSource> {
+export async function loadFocusCharts({
+  productionId,
+  filter,
+  timeZone,
+}: {
+  productionId: number;
+  filter: Partial<FocusFilter>;
+  timeZone?: string;
+}): Promise<FocusSource> {
   const [production, fixtures, team, drawn, accessories] = await Promise.all([
     requireProduction(productionId),
     getFixturesByProduction({ productionId }),
@@ -23,6 +31,8 @@ export async function loadFocusCharts({ productionId, filter, timeZone }: { prod
   const userNames = Object.fromEntries(team.map((m) => [m.userId, m.name]));
   const landmarks = mergeLandmarks(landmarksFromRows(drawn), outlineLandmarks(production));
   const extras = extrasByFixture(accessories);
-  const charts = filterFixtures(fixtures, filter).map((f) => buildFocusChart(f, production, { landmarks, userNames, timeZone, extras: extras[f.id] }));
+  const charts = filterFixtures(fixtures, filter).map((f) =>
+    buildFocusChart(f, production, { landmarks, userNames, timeZone, extras: extras[f.id] }),
+  );
   return { production, charts, landmarks };
 }

@@ -19,11 +19,16 @@ export function projectOntoPosition(pos: PositionLine, p: Point): { point: Point
 }
 
 /** The nearest position within `tolerance` metres of p, or null. */
-export function nearestPosition<P extends PositionLine & { id: number }>(positions: P[], p: Point, tolerance: number): { position: P; point: Point } | null {
+export function nearestPosition<P extends PositionLine & { id: number }>(
+  positions: P[],
+  p: Point,
+  tolerance: number,
+): { position: P; point: Point } | null {
   let best: { position: P; point: Point; d: number } | null = null;
   for (const pos of positions) {
     const hit = projectOntoPosition(pos, p);
-    if (hit.distance <= tolerance && (!best || hit.distance < best.d)) best = { position: pos, point: hit.point, d: hit.distance };
+    if (hit.distance <= tolerance && (!best || hit.distance < best.d))
+      best = { position: pos, point: hit.point, d: hit.distance };
   }
   return best && { position: best.position, point: best.point };
 }
@@ -33,7 +38,10 @@ export function nearestPosition<P extends PositionLine & { id: number }>(positio
  * largest x first (common practice, no source: overhead positions numbered from stage left). Along a pipe
  * running up- and downstage the downstage end comes first.
  */
-export function numberingOrder<F extends { id: number; x: number; y: number }>(fixtures: F[], direction: NumberingDirection): F[] {
+export function numberingOrder<F extends { id: number; x: number; y: number }>(
+  fixtures: F[],
+  direction: NumberingDirection,
+): F[] {
   const sign = direction === "from-stage-left" ? -1 : 1;
   return fixtures.slice().sort((a, b) => sign * (a.x - b.x) || a.y - b.y || a.id - b.id);
 }
@@ -79,10 +87,11 @@ function nextLetter(base: string, taken: Set<string>, after: string): string {
     const candidate = base + String.fromCharCode(64 + i);
     if (!taken.has(candidate)) return candidate;
   }
-  for (let i = 1; i <= 26; i++) for (let j = 1; j <= 26; j++) {
-    const candidate = base + String.fromCharCode(64 + i) + String.fromCharCode(64 + j);
-    if (!taken.has(candidate)) return candidate;
-  }
+  for (let i = 1; i <= 26; i++)
+    for (let j = 1; j <= 26; j++) {
+      const candidate = base + String.fromCharCode(64 + i) + String.fromCharCode(64 + j);
+      if (!taken.has(candidate)) return candidate;
+    }
   throw new RangeError(`No unit number left after ${after}.`);
 }
 

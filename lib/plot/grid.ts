@@ -21,10 +21,22 @@ export function gridLines(min: number, max: number, step: number, limit = 400): 
 }
 
 /** A scale bar of a round length close to `targetPx` wide, labelled in the production's units. */
-export function scaleBar(pxPerMetre: number, units: Units, targetPx = 120): { metres: number; px: number; label: string } {
-  const candidates = units === "metric" ? [0.1, 0.2, 0.5, 1, 2, 5, 10, 20, 50, 100] : [1, 2, 5, 10, 20, 50, 100, 200].map((f) => f * METRES_PER_FOOT);
+export function scaleBar(
+  pxPerMetre: number,
+  units: Units,
+  targetPx = 120,
+): { metres: number; px: number; label: string } {
+  const candidates =
+    units === "metric"
+      ? [0.1, 0.2, 0.5, 1, 2, 5, 10, 20, 50, 100]
+      : [1, 2, 5, 10, 20, 50, 100, 200].map((f) => f * METRES_PER_FOOT);
   let best = candidates[0];
   for (const c of candidates) if (c * pxPerMetre <= targetPx) best = c;
-  const label = units === "metric" ? (best < 1 ? `${Math.round(best * 100)} cm` : `${best} m`) : `${Math.round(best / METRES_PER_FOOT)} ft`;
+  const label =
+    units === "metric"
+      ? best < 1
+        ? `${Math.round(best * 100)} cm`
+        : `${best} m`
+      : `${Math.round(best / METRES_PER_FOOT)} ft`;
   return { metres: best, px: best * pxPerMetre, label };
 }

@@ -76,7 +76,8 @@ export function pickTarget(scene: PickScene, at: Point, o: { shift: boolean }): 
   if (layers.fixtures) {
     const reach = symbolPixels(v.scale) * PICK_RADIUS_PX.unitOfSymbol;
     const unit = nearestOnScreen(scene.units, (u) => symbolScreenPoint(v, u), at, reach);
-    if (unit) return { kind: "unit", fixtureId: unit.id, draggable: canEdit && !o.shift && slidesAlongLine(scene, unit.id) };
+    if (unit)
+      return { kind: "unit", fixtureId: unit.id, draggable: canEdit && !o.shift && slidesAlongLine(scene, unit.id) };
   }
   if (canEdit && layers.marks) {
     const mark = nearestOnScreen(scene.units, markOf, at, PICK_RADIUS_PX.mark);
@@ -99,13 +100,20 @@ function pickVertex(scene: PickScene, toScreen: (q: Point) => Point, at: Point):
   const candidates: VertexTarget[] = [];
   if (scene.layers.areas) {
     for (const z of scene.areaZones) {
-      for (let index = 0; index < z.polygon.length; index++) candidates.push({ kind: "area", id: z.id, index, points: z.polygon });
+      for (let index = 0; index < z.polygon.length; index++)
+        candidates.push({ kind: "area", id: z.id, index, points: z.polygon });
     }
   }
   if (scene.layers.landmarks) {
     for (const l of scene.landmarks) {
-      const points = [{ x: l.x1, y: l.y1 }, { x: l.x2, y: l.y2 }];
-      candidates.push({ kind: "landmark", id: l.id, index: 0, points }, { kind: "landmark", id: l.id, index: 1, points });
+      const points = [
+        { x: l.x1, y: l.y1 },
+        { x: l.x2, y: l.y2 },
+      ];
+      candidates.push(
+        { kind: "landmark", id: l.id, index: 0, points },
+        { kind: "landmark", id: l.id, index: 1, points },
+      );
     }
   }
   return nearestOnScreen(candidates, (c) => toScreen(c.points[c.index]), at, PICK_RADIUS_PX.vertex);

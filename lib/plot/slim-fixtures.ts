@@ -8,8 +8,24 @@ import type { FocusPointDto, PositionDto } from "@/lib/dto/plan";
 
 /** The fields the plot keeps; everything else (notes, DMX, circuit …) is read from the fixture route. */
 export const PLOT_FIXTURE_FIELDS = [
-  "id", "positionId", "fixtureTypeId", "focusPointId", "unitNumber", "channel", "x", "y", "lensHeight",
-  "focusX", "focusY", "aim", "coneDeg", "softnessDeg", "shutterCuts", "purpose", "colour", "version",
+  "id",
+  "positionId",
+  "fixtureTypeId",
+  "focusPointId",
+  "unitNumber",
+  "channel",
+  "x",
+  "y",
+  "lensHeight",
+  "focusX",
+  "focusY",
+  "aim",
+  "coneDeg",
+  "softnessDeg",
+  "shutterCuts",
+  "purpose",
+  "colour",
+  "version",
 ] as const;
 type Field = (typeof PLOT_FIXTURE_FIELDS)[number];
 
@@ -37,5 +53,8 @@ type Related = { positions: PositionDto[]; fixtureTypes: FixtureTypeDto[]; focus
 
 /** Names and geometry for every record (the API's own join); fixtures whose position or type is missing are left out. */
 export function expandPlotFixtures(records: PlotFixtureRecord[], rel: Related, headHeight: number): PlotFixture[] {
-  return joinFixtures(records, fixtureJoiner({ positions: rel.positions, types: rel.fixtureTypes, points: rel.focusPoints }, headHeight));
+  return joinFixtures(
+    records,
+    fixtureJoiner({ positions: rel.positions, types: rel.fixtureTypes, points: rel.focusPoints }, headHeight),
+  );
 }

@@ -31,13 +31,45 @@ export function stageOutline(s: StageSettings): StageOutline {
   const back = Math.max(s.backWallY, 0.5);
   const deckBack = Math.min(s.stageDepth, back);
   return {
-    deck: [{ x: -hw, y: 0 }, { x: hw, y: 0 }, { x: hw, y: deckBack }, { x: -hw, y: deckBack }],
-    apron: s.apronDepth > 0 ? [{ x: -po, y: 0 }, { x: po, y: 0 }, { x: po, y: -s.apronDepth }, { x: -po, y: -s.apronDepth }] : [],
-    prosceniumLeft: [{ x: po, y: 0 }, { x: hw + WALL, y: 0 }, { x: hw + WALL, y: -WALL }, { x: po, y: -WALL }],
-    prosceniumRight: [{ x: -po, y: 0 }, { x: -hw - WALL, y: 0 }, { x: -hw - WALL, y: -WALL }, { x: -po, y: -WALL }],
-    backWall: [{ x: -hw, y: back }, { x: hw, y: back }],
-    centreLine: [{ x: 0, y: -s.apronDepth - 1 }, { x: 0, y: back }],
-    datumLine: [{ x: -hw, y: 0 }, { x: hw, y: 0 }],
+    deck: [
+      { x: -hw, y: 0 },
+      { x: hw, y: 0 },
+      { x: hw, y: deckBack },
+      { x: -hw, y: deckBack },
+    ],
+    apron:
+      s.apronDepth > 0
+        ? [
+            { x: -po, y: 0 },
+            { x: po, y: 0 },
+            { x: po, y: -s.apronDepth },
+            { x: -po, y: -s.apronDepth },
+          ]
+        : [],
+    prosceniumLeft: [
+      { x: po, y: 0 },
+      { x: hw + WALL, y: 0 },
+      { x: hw + WALL, y: -WALL },
+      { x: po, y: -WALL },
+    ],
+    prosceniumRight: [
+      { x: -po, y: 0 },
+      { x: -hw - WALL, y: 0 },
+      { x: -hw - WALL, y: -WALL },
+      { x: -po, y: -WALL },
+    ],
+    backWall: [
+      { x: -hw, y: back },
+      { x: hw, y: back },
+    ],
+    centreLine: [
+      { x: 0, y: -s.apronDepth - 1 },
+      { x: 0, y: back },
+    ],
+    datumLine: [
+      { x: -hw, y: 0 },
+      { x: hw, y: 0 },
+    ],
     datumName: s.datumName,
   };
 }

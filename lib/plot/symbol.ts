@@ -39,16 +39,43 @@ export function labelsFit(symbolPx: number): boolean {
 export function symbolOutline(shape: SymbolShape): Array<[number, number]> {
   switch (shape) {
     case "lozenge":
-      return [[-0.5, -0.32], [0.22, -0.32], [0.5, 0], [0.22, 0.32], [-0.5, 0.32]];
+      return [
+        [-0.5, -0.32],
+        [0.22, -0.32],
+        [0.5, 0],
+        [0.22, 0.32],
+        [-0.5, 0.32],
+      ];
     case "square":
-      return [[-0.42, -0.42], [0.42, -0.42], [0.42, 0.42], [-0.42, 0.42]];
+      return [
+        [-0.42, -0.42],
+        [0.42, -0.42],
+        [0.42, 0.42],
+        [-0.42, 0.42],
+      ];
     case "hexagon":
-      return Array.from({ length: 6 }, (_, i) => [0.48 * Math.cos((i * Math.PI) / 3), 0.48 * Math.sin((i * Math.PI) / 3)] as [number, number]);
+      return Array.from(
+        { length: 6 },
+        (_, i) => [0.48 * Math.cos((i * Math.PI) / 3), 0.48 * Math.sin((i * Math.PI) / 3)] as [number, number],
+      );
     case "wide":
-      return [[-0.3, -0.55], [0.3, -0.55], [0.3, 0.55], [-0.3, 0.55]];
+      return [
+        [-0.3, -0.55],
+        [0.3, -0.55],
+        [0.3, 0.55],
+        [-0.3, 0.55],
+      ];
     case "diamond":
-      return [[-0.5, 0], [0, -0.4], [0.5, 0], [0, 0.4]];
+      return [
+        [-0.5, 0],
+        [0, -0.4],
+        [0.5, 0],
+        [0, 0.4],
+      ];
     case "round":
-      return Array.from({ length: 16 }, (_, i) => [0.44 * Math.cos((i * Math.PI) / 8), 0.44 * Math.sin((i * Math.PI) / 8)] as [number, number]);
+      return Array.from(
+        { length: 16 },
+        (_, i) => [0.44 * Math.cos((i * Math.PI) / 8), 0.44 * Math.sin((i * Math.PI) / 8)] as [number, number],
+      );
   }
 }

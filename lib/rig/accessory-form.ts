@@ -14,14 +14,40 @@ export const ACCESSORY_FIELDS = [
 export type AccessoryKey = (typeof ACCESSORY_FIELDS)[number]["key"];
 export type AccessoryText = Record<AccessoryKey, string>;
 
-export const EMPTY_ACCESSORY: AccessoryText = { kind: "", universe: "", address: "", footprint: "", wattage: "", weightKg: "", notes: "" };
+export const EMPTY_ACCESSORY: AccessoryText = {
+  kind: "",
+  universe: "",
+  address: "",
+  footprint: "",
+  wattage: "",
+  weightKg: "",
+  notes: "",
+};
 
-export function accessoryText(a: { kind: string; universe: number | null; address: number | null; footprint: number | null; wattage: number; weightKg: number; notes: string | null }): AccessoryText {
+export function accessoryText(a: {
+  kind: string;
+  universe: number | null;
+  address: number | null;
+  footprint: number | null;
+  wattage: number;
+  weightKg: number;
+  notes: string | null;
+}): AccessoryText {
   const s = (v: number | string | null) => (v === null ? "" : String(v));
-  return { kind: a.kind, universe: s(a.universe), address: s(a.address), footprint: s(a.footprint), wattage: s(a.wattage), weightKg: s(a.weightKg), notes: s(a.notes) };
+  return {
+    kind: a.kind,
+    universe: s(a.universe),
+    address: s(a.address),
+    footprint: s(a.footprint),
+    wattage: s(a.wattage),
+    weightKg: s(a.weightKg),
+    notes: s(a.notes),
+  };
 }
 
-export type AccessoryRead = { ok: true; values: Record<string, unknown> } | { ok: false; errors: Partial<Record<AccessoryKey, string>> };
+export type AccessoryRead =
+  | { ok: true; values: Record<string, unknown> }
+  | { ok: false; errors: Partial<Record<AccessoryKey, string>> };
 
 export function readAccessory(text: AccessoryText): AccessoryRead {
   const errors: Partial<Record<AccessoryKey, string>> = {};
@@ -48,6 +74,10 @@ export function readAccessory(text: AccessoryText): AccessoryRead {
     return { ok: false, errors };
   }
   // ANSI E1.11: the accessory's slots must end by slot 512 of its universe
-  if (values.address !== null && values.address + (values.footprint ?? 1) - 1 > 512) return { ok: false, errors: { address: `A ${values.footprint ?? 1}-slot accessory at ${values.address} runs past slot 512` } };
+  if (values.address !== null && values.address + (values.footprint ?? 1) - 1 > 512)
+    return {
+      ok: false,
+      errors: { address: `A ${values.footprint ?? 1}-slot accessory at ${values.address} runs past slot 512` },
+    };
   return { ok: true, values };
 }

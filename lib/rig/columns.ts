@@ -51,7 +51,13 @@ function storedColumn(f: FileField): RigColumn {
   };
 }
 
-const col = (id: string, header: string, kind: ColumnKind, value: RigColumn["value"], width = 10): RigColumn => ({ id, header, kind, value, width });
+const col = (id: string, header: string, kind: ColumnKind, value: RigColumn["value"], width = 10): RigColumn => ({
+  id,
+  header,
+  kind,
+  value,
+  width,
+});
 const pool = (f: FixtureDto, plane: "deck" | "head") => (f.computed[plane]?.status === "ok" ? f.computed[plane] : null);
 
 export const RIG_COLUMNS: RigColumn[] = [

@@ -16,7 +16,8 @@ export function addressRun(footprints: number[], start: AddressSlot, maxUniverse
   if (start.address < 1 || start.address > 512) throw new RangeError("The first address must be 1–512.");
   let { universe, address } = start;
   return footprints.map((footprint, i) => {
-    if (footprint < 1 || footprint > 512) throw new RangeError(`Fixture ${i + 1} has a footprint of ${footprint}; it must be 1–512 slots.`);
+    if (footprint < 1 || footprint > 512)
+      throw new RangeError(`Fixture ${i + 1} has a footprint of ${footprint}; it must be 1–512 slots.`);
     if (address + footprint - 1 > 512) {
       universe += 1;
       address = 1;

@@ -51,8 +51,14 @@ export function computeFixtureGeometry(f: GeometryInput, headHeight: number): Fi
   const source: Vec3 = { x: f.x, y: f.y, z: lensHeight };
   const mark = f.focusPoint ?? (f.focusX != null && f.focusY != null ? { x: f.focusX, y: f.focusY } : null);
   const base = {
-    lensHeight, lensHeightIsDefault: f.lensHeight == null, coneDeg, coneIsDefault: f.coneDeg == null, softnessDeg, softnessIsDefault: f.softnessDeg == null,
-    coneRange: { min: f.type.coneMinDeg, max: f.type.coneMaxDeg }, source,
+    lensHeight,
+    lensHeightIsDefault: f.lensHeight == null,
+    coneDeg,
+    coneIsDefault: f.coneDeg == null,
+    softnessDeg,
+    softnessIsDefault: f.softnessDeg == null,
+    coneRange: { min: f.type.coneMinDeg, max: f.type.coneMaxDeg },
+    source,
   };
   if (!mark) return { ...base, focus: null, throw: null, tiltDeg: null, panDeg: null, deck: null, head: null };
 

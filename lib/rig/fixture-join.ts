@@ -13,7 +13,10 @@ export type JoinRecord = FixtureAim & { positionId: number; fixtureTypeId: numbe
  * Builds the join for one production's rows; it answers null for a fixture whose position or type is
  * not among them (a row read while its position was being deleted), so callers leave it out.
  */
-export function fixtureJoiner(rel: { positions: Iterable<JoinPosition>; types: Iterable<JoinType>; points: Iterable<JoinPoint> }, headHeight: number) {
+export function fixtureJoiner(
+  rel: { positions: Iterable<JoinPosition>; types: Iterable<JoinType>; points: Iterable<JoinPoint> },
+  headHeight: number,
+) {
   const positions = new Map([...rel.positions].map((p) => [p.id, p]));
   const types = new Map([...rel.types].map((t) => [t.id, t]));
   const points = new Map([...rel.points].map((p) => [p.id, p]));
@@ -34,7 +37,10 @@ export function fixtureJoiner(rel: { positions: Iterable<JoinPosition>; types: I
 }
 
 /** Every record that joins, in the order given. */
-export function joinFixtures<R extends JoinRecord>(records: readonly R[], join: (r: R) => (R & FixtureJoined) | null): Array<R & FixtureJoined> {
+export function joinFixtures<R extends JoinRecord>(
+  records: readonly R[],
+  join: (r: R) => (R & FixtureJoined) | null,
+): Array<R & FixtureJoined> {
   const out: Array<R & FixtureJoined> = [];
   for (const r of records) {
     const joined = join(r);

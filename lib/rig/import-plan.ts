@@ -13,7 +13,15 @@ import { FIELD_BY_KEY, type ImportKey } from "@/lib/io/fields";
 import { attributeOf, keyOfAttribute } from "@/lib/rig/fixture-fields";
 import type { ParsedRow, RowError } from "@/lib/io/rows";
 
-export type SnapshotFixture = Record<string, unknown> & { id: number; version: number; positionId: number; fixtureTypeId: number; unitNumber: string; address: number | null; footprint: number | null };
+export type SnapshotFixture = Record<string, unknown> & {
+  id: number;
+  version: number;
+  positionId: number;
+  fixtureTypeId: number;
+  unitNumber: string;
+  address: number | null;
+  footprint: number | null;
+};
 export type Snapshot = {
   positions: Array<{ id: number; name: string; x1: number; y1: number; x2: number | null; y2: number | null }>;
   types: Array<{ id: number; name: string; dmxModes: Array<{ name: string; footprint: number }> }>;
@@ -23,7 +31,14 @@ export type Snapshot = {
 
 export type RowPlan =
   | { rowNumber: number; action: "create"; values: Record<string, unknown>; positionName: string; typeName: string }
-  | { rowNumber: number; action: "update"; fixtureId: number; version: number; changes: Record<string, unknown>; before: SnapshotFixture }
+  | {
+      rowNumber: number;
+      action: "update";
+      fixtureId: number;
+      version: number;
+      changes: Record<string, unknown>;
+      before: SnapshotFixture;
+    }
   | { rowNumber: number; action: "unchanged"; fixtureId: number };
 
 export type ImportPlanResult = {
@@ -33,7 +48,6 @@ export type ImportPlanResult = {
   newTypes: string[];
   counts: { create: number; update: number; unchanged: number };
 };
-
 
 function same(kind: string, a: unknown, b: unknown): boolean {
   const na = a === "" || a === undefined ? null : a;
@@ -47,7 +61,11 @@ function same(kind: string, a: unknown, b: unknown): boolean {
 
 const lower = (s: unknown) => String(s).trim().toLowerCase();
 
-export function planImport(rows: ParsedRow[], snap: Snapshot, opts: { member: Member; createMissing: boolean; columnOf: (key: string) => string }): ImportPlanResult {
+export function planImport(
+  rows: ParsedRow[],
+  snap: Snapshot,
+  opts: { member: Member; createMissing: boolean; columnOf: (key: string) => string },
+): ImportPlanResult {
   const positions = new Map(snap.positions.map((p) => [lower(p.name), p]));
   const types = new Map(snap.types.map((t) => [lower(t.name), t]));
   const points = new Map(snap.focusPoints.map((p) => [lower(p.name), p]));
@@ -64,16 +82,32 @@ export function planImport(rows: ParsedRow[], snap: Snapshot, opts: { member: Me
     const positionName = String(values.position);
     const position = positions.get(lower(positionName));
     if (!position) {
-      if (!mayPlot) err(rowNumber, "position", `There is no position called "${positionName}"; only the designer can add positions`);
-      else if (!opts.createMissing) err(rowNumber, "position", `There is no position called "${positionName}" (choose "create what is missing" to add it)`);
+      if (!mayPlot)
+        err(
+          rowNumber,
+          "position",
+          `There is no position called "${positionName}"; only the designer can add positions`,
+        );
+      else if (!opts.createMissing)
+        err(
+          rowNumber,
+          "position",
+          `There is no position called "${positionName}" (choose "create what is missing" to add it)`,
+        );
       else newPositions.set(lower(positionName), newPositions.get(lower(positionName)) ?? positionName);
     }
     let typeId: number | null = null;
     if (values.type !== undefined) {
       const type = types.get(lower(values.type));
       if (type) typeId = type.id;
-      else if (!mayPlot) err(rowNumber, "type", `There is no fixture type called "${values.type}"; only the designer can add types`);
-      else if (!opts.createMissing) err(rowNumber, "type", `There is no fixture type called "${values.type}" (choose "create what is missing" to add it)`);
+      else if (!mayPlot)
+        err(rowNumber, "type", `There is no fixture type called "${values.type}"; only the designer can add types`);
+      else if (!opts.createMissing)
+        err(
+          rowNumber,
+          "type",
+          `There is no fixture type called "${values.type}" (choose "create what is missing" to add it)`,
+        );
       else newTypes.set(lower(values.type), newTypes.get(lower(values.type)) ?? String(values.type));
     }
     let focusPointId: number | null | undefined;
@@ -95,7 +129,11 @@ export function planImport(rows: ParsedRow[], snap: Snapshot, opts: { member: Me
 
     if (!existing) {
       if (!mayPlot) {
-        err(rowNumber, "unitNumber", `Unit ${values.unitNumber} on ${positionName} is not in the rig; only the designer can add fixtures`);
+        err(
+          rowNumber,
+          "unitNumber",
+          `Unit ${values.unitNumber} on ${positionName} is not in the rig; only the designer can add fixtures`,
+        );
         continue;
       }
       if (values.type === undefined) {
@@ -116,15 +154,37 @@ export function planImport(rows: ParsedRow[], snap: Snapshot, opts: { member: Me
     const denied = forbiddenFields(opts.member, "fixture", Object.keys(changes));
     if (denied.length) {
       const keyOf = (attr: string) => keyOfAttribute(attr) as ImportKey;
-      for (const attr of denied) err(rowNumber, keyOf(attr), `Your role cannot change ${FIELD_BY_KEY.get(keyOf(attr))?.header ?? attr} (it would go from ${show(existing[attr])} to ${show(changes[attr])})`);
+      for (const attr of denied)
+        err(
+          rowNumber,
+          keyOf(attr),
+          `Your role cannot change ${FIELD_BY_KEY.get(keyOf(attr))?.header ?? attr} (it would go from ${show(existing[attr])} to ${show(changes[attr])})`,
+        );
       continue;
     }
     if (!Object.keys(changes).length) {
       plans.push({ rowNumber, action: "unchanged", fixtureId: existing.id });
       continue;
     }
-    if (!dmxFits(rowNumber, { ...existing, ...changes }, existing, snap, (changes.fixtureTypeId as number) ?? existing.fixtureTypeId, err)) continue;
-    plans.push({ rowNumber, action: "update", fixtureId: existing.id, version: existing.version, changes, before: existing });
+    if (
+      !dmxFits(
+        rowNumber,
+        { ...existing, ...changes },
+        existing,
+        snap,
+        (changes.fixtureTypeId as number) ?? existing.fixtureTypeId,
+        err,
+      )
+    )
+      continue;
+    plans.push({
+      rowNumber,
+      action: "update",
+      fixtureId: existing.id,
+      version: existing.version,
+      changes,
+      before: existing,
+    });
   }
   const counts = { create: 0, update: 0, unchanged: 0 };
   for (const p of plans) counts[p.action]++;
@@ -134,7 +194,14 @@ export function planImport(rows: ParsedRow[], snap: Snapshot, opts: { member: Me
 const show = (v: unknown) => (v === null || v === undefined || v === "" ? "empty" : `"${String(v)}"`);
 
 /** ANSI E1.11 (DMX512-A): a fixture's slots run from its address to address + footprint − 1, within 1–512. */
-function dmxFits(rowNumber: number, f: Record<string, unknown>, _existing: unknown, snap: Snapshot, typeId: number | null, err: (r: number, k: string, m: string) => void): boolean {
+function dmxFits(
+  rowNumber: number,
+  f: Record<string, unknown>,
+  _existing: unknown,
+  snap: Snapshot,
+  typeId: number | null,
+  err: (r: number, k: string, m: string) => void,
+): boolean {
   const address = f.address as number | null | undefined;
   if (address == null) return true;
   const type = snap.types.find((t) => t.id === typeId);

@@ -5,7 +5,16 @@ import { parseColour } from "./colour";
 
 export const SHEET_INCHES = { width: 20, height: 24 } as const; // from memory, common practice
 
-export type StockFixture = { fixtureTypeId: number; typeName: string; colour: string | null; gobo: string | null; circuit: string | null; bodyKey: string | null; positionId: number; unitNumber: string };
+export type StockFixture = {
+  fixtureTypeId: number;
+  typeName: string;
+  colour: string | null;
+  gobo: string | null;
+  circuit: string | null;
+  bodyKey: string | null;
+  positionId: number;
+  unitNumber: string;
+};
 export type StockType = { id: number; frameSize: string | null; goboSize: string | null };
 export type StockAccessory = { kind: string };
 
@@ -53,20 +62,31 @@ export function stockCounts(fixtures: StockFixture[], types: StockType[], access
   }
   const byCount = <T extends { count: number }>(a: T, b: T) => b.count - a.count;
   return {
-    units: [...units].map(([type, count]) => ({ type, count })).sort((a, b) => byCount(a, b) || a.type.localeCompare(b.type)),
+    units: [...units]
+      .map(([type, count]) => ({ type, count }))
+      .sort((a, b) => byCount(a, b) || a.type.localeCompare(b.type)),
     cuts: [...cuts]
       .map(([key, count]) => {
         const [colour, frameSize] = key.split("\u0000");
         const perSheet = cutsPerSheet(frameInches(frameSize));
         return { colour, frameSize, cuts: count, perSheet, sheets: perSheet ? Math.ceil(count / perSheet) : null };
       })
-      .sort((a, b) => a.colour.localeCompare(b.colour, undefined, { numeric: true }) || a.frameSize.localeCompare(b.frameSize)),
+      .sort(
+        (a, b) =>
+          a.colour.localeCompare(b.colour, undefined, { numeric: true }) || a.frameSize.localeCompare(b.frameSize),
+      ),
     gobos: [...gobos].map(([key, count]) => {
       const [gobo, size] = key.split("\u0000");
       return { gobo, size, count };
     }),
-    accessories: [...accessories.reduce((m, a) => bump(m, a.kind), new Map<string, number>())].map(([kind, count]) => ({ kind, count })),
+    accessories: [...accessories.reduce((m, a) => bump(m, a.kind), new Map<string, number>())].map(([kind, count]) => ({
+      kind,
+      count,
+    })),
     // Fixtures sharing a circuit are joined by a chain of two-way splitters: n units need n − 1 (common practice, no source).
-    yCables: [...circuits].filter(([, n]) => n > 1).map(([circuit, n]) => ({ circuit, fixtures: n, yCables: n - 1 })).sort((a, b) => a.circuit.localeCompare(b.circuit, undefined, { numeric: true })),
+    yCables: [...circuits]
+      .filter(([, n]) => n > 1)
+      .map(([circuit, n]) => ({ circuit, fixtures: n, yCables: n - 1 }))
+      .sort((a, b) => a.circuit.localeCompare(b.circuit, undefined, { numeric: true })),
   };
 }

@@ -6,7 +6,12 @@ import { FIXTURE_FAMILIES, formatLength, fromDatasheet, parseLength, type Family
 import { FLAT_TENTH_ACROSS_BAND } from "@/lib/optics/profile";
 import type { FixtureTypeDto } from "@/lib/dto/fixture-type";
 
-export type TypeColumn = { key: string; header: string; fields: Array<keyof FixtureTypeDto>; kind: "text" | "cone" | "number" | "optionalNumber" | "datasheet" | "modes" | "length" | "optionalText" | "readOnly" };
+export type TypeColumn = {
+  key: string;
+  header: string;
+  fields: Array<keyof FixtureTypeDto>;
+  kind: "text" | "cone" | "number" | "optionalNumber" | "datasheet" | "modes" | "length" | "optionalText" | "readOnly";
+};
 
 export const TYPE_COLUMNS: TypeColumn[] = [
   { key: "name", header: "Name", fields: ["name"], kind: "text" },
@@ -14,7 +19,12 @@ export const TYPE_COLUMNS: TypeColumn[] = [
   { key: "cone", header: "Cone (°)", fields: ["coneMinDeg", "coneMaxDeg"], kind: "cone" },
   { key: "defaultSoftnessDeg", header: "Softness (°)", fields: ["defaultSoftnessDeg"], kind: "number" },
   // A datasheet's beam (50 %) and field (10 %) angles, mapped onto the cone and softness (docs/optics.md).
-  { key: "datasheet", header: "Beam / field (°)", fields: ["coneMinDeg", "coneMaxDeg", "defaultSoftnessDeg"], kind: "datasheet" },
+  {
+    key: "datasheet",
+    header: "Beam / field (°)",
+    fields: ["coneMinDeg", "coneMaxDeg", "defaultSoftnessDeg"],
+    kind: "datasheet",
+  },
   // A zoom brightens as it narrows: its peak at each end of the range (one figure for a fixed-angle type).
   { key: "peakCandela", header: "Peak at widest (cd)", fields: ["peakCandela"], kind: "number" },
   { key: "peakCandelaNarrow", header: "Peak at narrowest (cd)", fields: ["peakCandelaNarrow"], kind: "optionalNumber" },
@@ -58,14 +68,25 @@ function familyOf(family: string): "flat" | "peaked" {
 }
 
 /** "22 / 30" → cone and softness for the type's family; a zoom's figures set its widest end. */
-function datasheetPatch(text: string, header: string, type: Pick<FixtureTypeDto, "family" | "coneMinDeg" | "coneMaxDeg"> | undefined): CellParse {
+function datasheetPatch(
+  text: string,
+  header: string,
+  type: Pick<FixtureTypeDto, "family" | "coneMinDeg" | "coneMaxDeg"> | undefined,
+): CellParse {
   const m = /^\s*(\d+(?:[.,]\d+)?)\s*°?\s*[/,]\s*(\d+(?:[.,]\d+)?)\s*°?\s*$/.exec(text);
   if (!m || !type) return { ok: false, message: `${header}: write the beam and field angles, e.g. "22 / 30"` };
   const known = FIXTURE_FAMILIES.some((f) => f.value === type.family);
-  const d = fromDatasheet({ beamDeg: Number(m[1].replace(",", ".")), fieldDeg: Number(m[2].replace(",", ".")), family: (known ? type.family : "profile") as Family });
+  const d = fromDatasheet({
+    beamDeg: Number(m[1].replace(",", ".")),
+    fieldDeg: Number(m[2].replace(",", ".")),
+    family: (known ? type.family : "profile") as Family,
+  });
   const cone = round(d.coneDeg, 2);
   const fixed = type.coneMinDeg === type.coneMaxDeg || cone < type.coneMinDeg;
-  return { ok: true, patch: { ...(fixed ? { coneMinDeg: cone } : {}), coneMaxDeg: cone, defaultSoftnessDeg: round(d.softnessDeg, 2) } };
+  return {
+    ok: true,
+    patch: { ...(fixed ? { coneMinDeg: cone } : {}), coneMaxDeg: cone, defaultSoftnessDeg: round(d.softnessDeg, 2) },
+  };
 }
 
 function number(text: string, header: string): number | string {
@@ -74,26 +95,44 @@ function number(text: string, header: string): number | string {
 }
 
 /** Reads a typed cell into a patch, checked by the fixture-type schema; the message names the column. */
-export function parseTypeCell(column: TypeColumn, text: string, units: "metric" | "imperial", type?: Pick<FixtureTypeDto, "family" | "coneMinDeg" | "coneMaxDeg">): CellParse {
+export function parseTypeCell(
+  column: TypeColumn,
+  text: string,
+  units: "metric" | "imperial",
+  type?: Pick<FixtureTypeDto, "family" | "coneMinDeg" | "coneMaxDeg">,
+): CellParse {
   const header = column.header;
   let patch: Record<string, unknown>;
   try {
     switch (column.kind) {
       case "cone": {
-        const parts = text.split(/\s*[–—-]\s*|\s+to\s+/).filter(Boolean).map((p) => number(p.replace("°", ""), header));
+        const parts = text
+          .split(/\s*[–—-]\s*|\s+to\s+/)
+          .filter(Boolean)
+          .map((p) => number(p.replace("°", ""), header));
         const bad = parts.find((p) => typeof p === "string");
         if (bad) return { ok: false, message: bad as string };
-        if (parts.length < 1 || parts.length > 2) return { ok: false, message: `${header}: write one angle (26) or a zoom range (15–30)` };
+        if (parts.length < 1 || parts.length > 2)
+          return { ok: false, message: `${header}: write one angle (26) or a zoom range (15–30)` };
         patch = { coneMinDeg: parts[0], coneMaxDeg: parts[parts.length - 1] };
-        if ((parts[0] as number) > (parts[parts.length - 1] as number)) return { ok: false, message: `${header}: the narrowest cone comes first` };
+        if ((parts[0] as number) > (parts[parts.length - 1] as number))
+          return { ok: false, message: `${header}: the narrowest cone comes first` };
         break;
       }
       case "modes": {
-        const modes = text.split(",").map((m) => m.trim()).filter(Boolean).map((m) => {
-          const match = /^(.*?)\s*\(?(\d+)\)?$/.exec(m);
-          return match && match[1] ? { name: match[1], footprint: Number(match[2]) } : null;
-        });
-        if (!modes.length || modes.some((m) => m === null)) return { ok: false, message: `${header}: write each mode as a name and its slots, e.g. "dimmer 1, extended 4"` };
+        const modes = text
+          .split(",")
+          .map((m) => m.trim())
+          .filter(Boolean)
+          .map((m) => {
+            const match = /^(.*?)\s*\(?(\d+)\)?$/.exec(m);
+            return match && match[1] ? { name: match[1], footprint: Number(match[2]) } : null;
+          });
+        if (!modes.length || modes.some((m) => m === null))
+          return {
+            ok: false,
+            message: `${header}: write each mode as a name and its slots, e.g. "dimmer 1, extended 4"`,
+          };
         patch = { dmxModes: modes };
         break;
       }

@@ -17,18 +17,37 @@ export function flagWords(flags: AreaCoverage["flags"]): string {
 export function areaTableColumns(units: "metric" | "imperial"): string[] {
   const lx = ["Min (lx)", "Mean (lx)", "Max (lx)"];
   const fc = units === "imperial" ? ["Min (fc)", "Mean (fc)", "Max (fc)"] : [];
-  return ["Area", ...lx, ...fc, "Uniformity Emin/Eavg", "Eavg:Emin", "Mean vs other areas", "Darkest spot x (m)", "Darkest spot y (m)", "Flags"];
+  return [
+    "Area",
+    ...lx,
+    ...fc,
+    "Uniformity Emin/Eavg",
+    "Eavg:Emin",
+    "Mean vs other areas",
+    "Darkest spot x (m)",
+    "Darkest spot y (m)",
+    "Flags",
+  ];
 }
 
-const round = (v: number | null, digits: number) => (v === null || !Number.isFinite(v) ? "" : Number(v.toFixed(digits)));
+const round = (v: number | null, digits: number) =>
+  v === null || !Number.isFinite(v) ? "" : Number(v.toFixed(digits));
 
 export function areaTableRows(areas: AreaCoverage[], units: "metric" | "imperial"): Array<Array<string | number>> {
   return areas.map((a) => {
     const lux = [round(a.min, 1), round(a.mean, 1), round(a.max, 1)];
-    const fc = units === "imperial" ? [a.min, a.mean, a.max].map((v) => round(v === null ? null : luxToFootcandles(v), 2)) : [];
+    const fc =
+      units === "imperial" ? [a.min, a.mean, a.max].map((v) => round(v === null ? null : luxToFootcandles(v), 2)) : [];
     return [
-      neutralise(a.name), ...lux, ...fc, round(a.uniformity, 3), round(a.averageToMinimum, 2), round(a.meanRatio, 2),
-      round(a.minAt?.x ?? null, 2), round(a.minAt?.y ?? null, 2), flagWords(a.flags),
+      neutralise(a.name),
+      ...lux,
+      ...fc,
+      round(a.uniformity, 3),
+      round(a.averageToMinimum, 2),
+      round(a.meanRatio, 2),
+      round(a.minAt?.x ?? null, 2),
+      round(a.minAt?.y ?? null, 2),
+      flagWords(a.flags),
     ];
   });
 }

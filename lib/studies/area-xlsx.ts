@@ -5,7 +5,12 @@ import type { AreaCoverage } from "@/lib/optics";
 import { neutralise } from "@/lib/cues/table-export";
 import { areaTableColumns, areaTableRows } from "./area-table";
 
-export async function areaTableXlsx(o: { title: string; conditions: string[]; areas: AreaCoverage[]; units: "metric" | "imperial" }): Promise<Buffer> {
+export async function areaTableXlsx(o: {
+  title: string;
+  conditions: string[];
+  areas: AreaCoverage[];
+  units: "metric" | "imperial";
+}): Promise<Buffer> {
   const book = new ExcelJS.Workbook();
   book.creator = "Throwline";
   const sheet = book.addWorksheet("Areas");

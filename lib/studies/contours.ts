@@ -25,12 +25,30 @@ export function contourSegments(g: GridCells, level: number, values: ArrayLike<n
       const top = { x: x + r * lerp(v3, v2), y: y + r };
       const left = { x, y: y + r * lerp(v0, v3) };
       switch (idx) {
-        case 1: case 14: out.push([left, bottom]); break;
-        case 2: case 13: out.push([bottom, right]); break;
-        case 3: case 12: out.push([left, right]); break;
-        case 4: case 11: out.push([right, top]); break;
-        case 6: case 9: out.push([bottom, top]); break;
-        case 7: case 8: out.push([left, top]); break;
+        case 1:
+        case 14:
+          out.push([left, bottom]);
+          break;
+        case 2:
+        case 13:
+          out.push([bottom, right]);
+          break;
+        case 3:
+        case 12:
+          out.push([left, right]);
+          break;
+        case 4:
+        case 11:
+          out.push([right, top]);
+          break;
+        case 6:
+        case 9:
+          out.push([bottom, top]);
+          break;
+        case 7:
+        case 8:
+          out.push([left, top]);
+          break;
         case 5: {
           // Saddle: decided by the square's mean, so the two readings of the same data always agree.
           const high = (v0 + v1 + v2 + v3) / 4 >= level;

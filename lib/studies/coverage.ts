@@ -32,15 +32,26 @@ function measureOf(r: CoverageRequest["measure"], s: CoverageScene): Measure {
 }
 
 export function computeCoverage(req: CoverageRequest, s: CoverageScene): CoverageResult {
-  const { lights, beams, warnings } = studyLights(s.fixtures, s.levels, { headHeight: s.headHeight, deckHeight: s.deckHeight, colours: s.colours });
+  const { lights, beams, warnings } = studyLights(s.fixtures, s.levels, {
+    headHeight: s.headHeight,
+    deckHeight: s.deckHeight,
+    colours: s.colours,
+  });
   const measure = measureOf(req.measure, s);
   const t0 = performance.now();
   const g = coverageGrid({ bounds: s.bounds, resolution: req.resolution, deckHeight: s.deckHeight, measure, beams });
   const computeMs = performance.now() - t0;
   const areas = areaCoverage(g, s.areas, { minUniformity: req.minUniformity, meanRatio: req.meanRatio });
   const grid: GridWire = {
-    cols: g.cols, rows: g.rows, resolution: g.resolution, originX: g.originX, originY: g.originY,
-    min: g.min, mean: g.mean, max: g.max, values: typedToBase64(g.values),
+    cols: g.cols,
+    rows: g.rows,
+    resolution: g.resolution,
+    originX: g.originX,
+    originY: g.originY,
+    min: g.min,
+    mean: g.mean,
+    max: g.max,
+    values: typedToBase64(g.values),
     ...(g.key && g.keyLux ? { key: typedToBase64(g.key), keyLux: typedToBase64(g.keyLux) } : {}),
   };
   if (!lights.length) warnings.unshift("Nothing is lit in this state.");

@@ -23,7 +23,13 @@ function ramp(stops: Stop[], t: number): [number, number, number] {
 }
 
 /** RGBA pixels of a grid, one pixel per cell, top row = the grid's last (most upstage) row. */
-export function heatPixels(values: ArrayLike<number>, cols: number, rows: number, scaleMax: number, mode: "light" | "difference"): Uint8ClampedArray {
+export function heatPixels(
+  values: ArrayLike<number>,
+  cols: number,
+  rows: number,
+  scaleMax: number,
+  mode: "light" | "difference",
+): Uint8ClampedArray {
   const px = new Uint8ClampedArray(cols * rows * 4);
   const max = scaleMax > 0 ? scaleMax : 1;
   for (let row = 0; row < rows; row++) {
@@ -33,7 +39,10 @@ export function heatPixels(values: ArrayLike<number>, cols: number, rows: number
       const k = (out + c) * 4;
       if (mode === "light") {
         const [r, g, b] = ramp(LIGHT, Math.sqrt(v / max)); // square root: the eye reads light logarithmically
-        px[k] = r; px[k + 1] = g; px[k + 2] = b; px[k + 3] = 200;
+        px[k] = r;
+        px[k + 1] = g;
+        px[k + 2] = b;
+        px[k + 3] = 200;
       } else {
         const t = Math.max(-1, Math.min(1, v / max));
         px[k] = t > 0 ? 230 : 40;
@@ -56,7 +65,7 @@ export function heatColour(t: number): string {
 export function niceSteps(max: number, count = 4): number[] {
   if (!(max > 0)) return [];
   const raw = max / count;
-  const p = Math.pow(10, Math.floor(Math.log10(raw)));
+  const p = 10 ** Math.floor(Math.log10(raw));
   const step = [1, 2, 5, 10].map((m) => m * p).find((s) => s >= raw) ?? 10 * p;
   const out: number[] = [];
   for (let v = step; v < max; v += step) out.push(Number(v.toPrecision(6)));

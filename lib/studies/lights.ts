@@ -2,7 +2,14 @@
 // the show deck), its level in the chosen state through its family's dimmer curve, times its colour's
 // transmission. Pure, so the server and the browser build the same beams.
 import {
-  dimmerCurveOf, FIXTURE_FAMILIES, lightFromLevel, peakCandelaAt, transmissionOf, type ColourList, type Family, type LitBeam,
+  dimmerCurveOf,
+  FIXTURE_FAMILIES,
+  lightFromLevel,
+  peakCandelaAt,
+  transmissionOf,
+  type ColourList,
+  type Family,
+  type LitBeam,
 } from "@/lib/optics";
 import type { StudyLight } from "@/lib/dto/studies";
 
@@ -21,9 +28,15 @@ export type StudyFixture = {
   coneDeg: number | null;
   softnessDeg: number | null;
   type: {
-    family: string; coneMaxDeg: number; defaultSoftnessDeg: number; lensDropM: number; lensApertureM: number; peakCandela: number;
+    family: string;
+    coneMaxDeg: number;
+    defaultSoftnessDeg: number;
+    lensDropM: number;
+    lensApertureM: number;
+    peakCandela: number;
     /** A zoom's range and its peak at the narrow end: the peak follows the zoom setting (lib/optics/zoom-peak.ts). */
-    coneMinDeg?: number; peakCandelaNarrow?: number | null;
+    coneMinDeg?: number;
+    peakCandelaNarrow?: number | null;
   };
 };
 
@@ -44,7 +57,11 @@ export function levelOf(f: StudyFixture, levels: Levels): number {
 }
 
 /** The lit units with their beams (same order), and the warnings a designer should read. */
-export function studyLights(fixtures: StudyFixture[], levels: Levels, s: StudySetup): { lights: StudyLight[]; beams: LitBeam[]; warnings: string[] } {
+export function studyLights(
+  fixtures: StudyFixture[],
+  levels: Levels,
+  s: StudySetup,
+): { lights: StudyLight[]; beams: LitBeam[]; warnings: string[] } {
   const lights: StudyLight[] = [];
   const beams: LitBeam[] = [];
   const unaimed: string[] = [];
@@ -67,19 +84,44 @@ export function studyLights(fixtures: StudyFixture[], levels: Levels, s: StudySe
     const coneDeg = f.coneDeg ?? f.type.coneMaxDeg;
     const softnessDeg = f.softnessDeg ?? f.type.defaultSoftnessDeg;
     lights.push({
-      fixtureId: f.id, unitLabel: label, channel: f.channel, source, focus, coneDeg, softnessDeg, family,
-      apertureDiameter: f.type.lensApertureM, peakCandela: f.type.peakCandela, level, output, curve, colour: f.colour, missingColours: t.missing,
+      fixtureId: f.id,
+      unitLabel: label,
+      channel: f.channel,
+      source,
+      focus,
+      coneDeg,
+      softnessDeg,
+      family,
+      apertureDiameter: f.type.lensApertureM,
+      peakCandela: f.type.peakCandela,
+      level,
+      output,
+      curve,
+      colour: f.colour,
+      missingColours: t.missing,
     });
     const t0 = f.type;
-    const peakCandela = peakCandelaAt({ coneMinDeg: t0.coneMinDeg ?? t0.coneMaxDeg, coneMaxDeg: t0.coneMaxDeg, peakCandela: t0.peakCandela, peakCandelaNarrow: t0.peakCandelaNarrow }, coneDeg);
+    const peakCandela = peakCandelaAt(
+      {
+        coneMinDeg: t0.coneMinDeg ?? t0.coneMaxDeg,
+        coneMaxDeg: t0.coneMaxDeg,
+        peakCandela: t0.peakCandela,
+        peakCandelaNarrow: t0.peakCandelaNarrow,
+      },
+      coneDeg,
+    );
     beams.push({ source, focus, coneDeg, softnessDeg, peakCandela, level: output, family });
   }
   const warnings: string[] = [];
   if (missing.size) {
-    warnings.push(`No transmission set for ${[...missing].map((m) => `"${m}"`).join(", ")}: counted at 100 %. Add them to the colour list.`);
+    warnings.push(
+      `No transmission set for ${[...missing].map((m) => `"${m}"`).join(", ")}: counted at 100 %. Add them to the colour list.`,
+    );
   }
   if (unaimed.length) {
-    warnings.push(`${unaimed.length} lit unit${unaimed.length === 1 ? " has" : "s have"} no focus mark and ${unaimed.length === 1 ? "is" : "are"} left out: ${unaimed.slice(0, 8).join(", ")}${unaimed.length > 8 ? " …" : ""}.`);
+    warnings.push(
+      `${unaimed.length} lit unit${unaimed.length === 1 ? " has" : "s have"} no focus mark and ${unaimed.length === 1 ? "is" : "are"} left out: ${unaimed.slice(0, 8).join(", ")}${unaimed.length > 8 ? " …" : ""}.`,
+    );
   }
   return { lights, beams, warnings };
 }

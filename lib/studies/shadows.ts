@@ -21,20 +21,50 @@ function shadowFor(light: StudyLight, occluder: Occluder, s: ShadowScene): Fixtu
   const source = { ...light.source, z: light.source.z - s.deckHeight };
   const base = { fixtureId: light.fixtureId, unitLabel: light.unitLabel };
   if (source.z <= 0) {
-    return { ...base, lands: "none", reason: "The lens is at or below the show deck.", length: null, wallHeight: null, penumbraWidth: null, umbraWidth: null, umbra: [], penumbra: [] };
+    return {
+      ...base,
+      lands: "none",
+      reason: "The lens is at or below the show deck.",
+      length: null,
+      wallHeight: null,
+      penumbraWidth: null,
+      umbraWidth: null,
+      umbra: [],
+      penumbra: [],
+    };
   }
   const input = { source, apertureDiameter: light.apertureDiameter, backWallY: s.backWallY, occluder };
   try {
     const sh = shadowOf(input);
-    const poly = s.outlines === false ? { umbra: [], penumbra: [] } : shadowPolygons(input, s.outlines ?? { sides: 16, lensSamples: 8 });
+    const poly =
+      s.outlines === false
+        ? { umbra: [], penumbra: [] }
+        : shadowPolygons(input, s.outlines ?? { sides: 16, lensSamples: 8 });
     return {
-      ...base, lands: sh.lands, reason: sh.reason ?? null, length: sh.length, wallHeight: sh.wallHeight,
-      penumbraWidth: sh.penumbraWidth, umbraWidth: sh.umbraWidth, umbra: poly.umbra, penumbra: poly.penumbra,
+      ...base,
+      lands: sh.lands,
+      reason: sh.reason ?? null,
+      length: sh.length,
+      wallHeight: sh.wallHeight,
+      penumbraWidth: sh.penumbraWidth,
+      umbraWidth: sh.umbraWidth,
+      umbra: poly.umbra,
+      penumbra: poly.penumbra,
     };
   } catch (err) {
     // A lens behind the back wall, or an occluder standing in it: said in words, not a failed study.
     const reason = err instanceof RangeError ? err.message : "This shadow could not be computed.";
-    return { ...base, lands: "none", reason, length: null, wallHeight: null, penumbraWidth: null, umbraWidth: null, umbra: [], penumbra: [] };
+    return {
+      ...base,
+      lands: "none",
+      reason,
+      length: null,
+      wallHeight: null,
+      penumbraWidth: null,
+      umbraWidth: null,
+      umbra: [],
+      penumbra: [],
+    };
   }
 }
 

@@ -6,7 +6,11 @@ export const PASSWORD_MAX_BYTES = 72;
 const utf8Bytes = (s: string) => new TextEncoder().encode(s).length;
 
 export const signInSchema = z.object({
-  email: z.string({ error: "E-mail is required" }).trim().min(1, { error: "E-mail is required" }).max(254, { error: "An e-mail address is at most 254 characters" }),
+  email: z
+    .string({ error: "E-mail is required" })
+    .trim()
+    .min(1, { error: "E-mail is required" })
+    .max(254, { error: "An e-mail address is at most 254 characters" }),
   password: z
     .string({ error: "Password is required" })
     .min(1, { error: "Password is required" })
@@ -14,8 +18,15 @@ export const signInSchema = z.object({
 });
 
 export const signUpSchema = z.object({
-  name: z.string({ error: "Name is required" }).trim().min(1, { error: "Name is required" }).max(120, { error: "Use at most 120 characters for the name" }),
-  email: z.email({ error: "Enter a valid e-mail address" }).trim().max(254, { error: "An e-mail address is at most 254 characters" }),
+  name: z
+    .string({ error: "Name is required" })
+    .trim()
+    .min(1, { error: "Name is required" })
+    .max(120, { error: "Use at most 120 characters for the name" }),
+  email: z
+    .email({ error: "Enter a valid e-mail address" })
+    .trim()
+    .max(254, { error: "An e-mail address is at most 254 characters" }),
   password: z
     .string({ error: "Password is required" })
     .min(10, { error: "Use at least 10 characters" })

@@ -29,7 +29,11 @@ const timeSchema = (what: string) =>
     }
   });
 
-const text = (max: number, what: string) => z.string({ error: `${what} must be text` }).trim().max(max, { error: `${what}: at most ${max} characters` });
+const text = (max: number, what: string) =>
+  z
+    .string({ error: `${what} must be text` })
+    .trim()
+    .max(max, { error: `${what}: at most ${max} characters` });
 
 export const levelSchema = z
   .number({ error: "A level must be a number from 0 to 100" })
@@ -39,20 +43,33 @@ export const levelSchema = z
 
 /** channel → level (0–100), or null to remove the cue's move so the channel tracks. */
 export const levelsSchema = z
-  .record(z.string().regex(/^[1-9]\d{0,4}$/, { error: "Channels are whole numbers from 1 to 99999" }), levelSchema.nullable())
+  .record(
+    z.string().regex(/^[1-9]\d{0,4}$/, { error: "Channels are whole numbers from 1 to 99999" }),
+    levelSchema.nullable(),
+  )
   .refine((r) => Object.keys(r).length <= 5000, { error: "At most 5000 channels in one change" });
 
-const channelSchema = z.number({ error: "A channel is a whole number from 1 to 99999" }).int({ error: "A channel is a whole number from 1 to 99999" }).min(1, { error: "Channels start at 1" }).max(99_999, { error: "Channels run up to 99999" });
+const channelSchema = z
+  .number({ error: "A channel is a whole number from 1 to 99999" })
+  .int({ error: "A channel is a whole number from 1 to 99999" })
+  .min(1, { error: "Channels start at 1" })
+  .max(99_999, { error: "Channels run up to 99999" });
 
 /** One part of a cue: its number, its own times and its channels. */
 export const partSchema = z
   .object({
-    part: z.number({ error: `A part number is a whole number from 1 to ${MAX_PARTS}` }).int({ error: `A part number is a whole number from 1 to ${MAX_PARTS}` }).min(1, { error: "Part numbers start at 1" }).max(MAX_PARTS, { error: `At most part ${MAX_PARTS}` }),
+    part: z
+      .number({ error: `A part number is a whole number from 1 to ${MAX_PARTS}` })
+      .int({ error: `A part number is a whole number from 1 to ${MAX_PARTS}` })
+      .min(1, { error: "Part numbers start at 1" })
+      .max(MAX_PARTS, { error: `At most part ${MAX_PARTS}` }),
     label: text(60, "Part label").default(""),
     upTime: timeSchema("Part up time"),
     downTime: timeSchema("Part down time").nullable().default(null),
     delay: timeSchema("Part delay").default(0),
-    channels: z.array(channelSchema, { error: "A part's channels must be a list of channel numbers" }).max(5000, { error: "At most 5000 channels in a part" }),
+    channels: z
+      .array(channelSchema, { error: "A part's channels must be a list of channel numbers" })
+      .max(5000, { error: "At most 5000 channels in a part" }),
   })
   .strict();
 
@@ -84,18 +101,33 @@ export const cueCreateSchema = z.object(cueFields).partial().required({ number: 
 export type CueCreate = z.infer<typeof cueCreateSchema>;
 
 /** Every field a client may change; who may change which is decided by lib/auth/policy. */
-export const cuePatchSchema = z.object({ ...cueFields, version: versionSchema }).partial().required({ version: true }).strict();
+export const cuePatchSchema = z
+  .object({ ...cueFields, version: versionSchema })
+  .partial()
+  .required({ version: true })
+  .strict();
 export type CuePatch = z.infer<typeof cuePatchSchema>;
 
 export const renumberSchema = z
-  .object({ from: cueNumberSchema("First cue"), to: cueNumberSchema("Last cue"), start: cueNumberSchema("New first number"), step: cueNumberSchema("Step") })
+  .object({
+    from: cueNumberSchema("First cue"),
+    to: cueNumberSchema("Last cue"),
+    start: cueNumberSchema("New first number"),
+    step: cueNumberSchema("Step"),
+  })
   .strict();
 
 export const cueImportSchema = z
   .object({
     text: z.string({ error: "The file's text is required" }).max(5_000_000, { error: "The file is larger than 5 MB" }),
-    mode: z.enum(["state", "moves"], { error: 'mode must be "state" (each cue is a full look) or "moves" (only changes)' }).default("state"),
+    mode: z
+      .enum(["state", "moves"], { error: 'mode must be "state" (each cue is a full look) or "moves" (only changes)' })
+      .default("state"),
   })
   .strict();
 
-export const cueExportQuerySchema = z.object({ format: z.enum(["ascii", "csv", "xlsx", "patch"], { error: "format must be ascii, csv, xlsx or patch (the patch as CSV)" }) });
+export const cueExportQuerySchema = z.object({
+  format: z.enum(["ascii", "csv", "xlsx", "patch"], {
+    error: "format must be ascii, csv, xlsx or patch (the patch as CSV)",
+  }),
+});

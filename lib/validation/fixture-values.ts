@@ -3,7 +3,12 @@
 // Messages name the field in the words on screen, since forms, the rig table and file rows all show them.
 import { z } from "zod";
 
-export const optionalText = (max: number) => z.string().trim().max(max, { error: `at most ${max} characters` }).nullable();
+export const optionalText = (max: number) =>
+  z
+    .string()
+    .trim()
+    .max(max, { error: `at most ${max} characters` })
+    .nullable();
 
 export const planCoord = (what: string) =>
   z
@@ -14,31 +19,67 @@ export const planCoord = (what: string) =>
 export const rowId = () => z.number().int().positive();
 
 export const unitNumber = () =>
-  z.string().trim().regex(/^[0-9]{1,4}[A-Za-z]{0,2}$/, { error: "Unit number is digits with up to two letters, e.g. 7 or 12A" });
+  z
+    .string()
+    .trim()
+    .regex(/^[0-9]{1,4}[A-Za-z]{0,2}$/, { error: "Unit number is digits with up to two letters, e.g. 7 or 12A" });
 
 export const channel = () =>
-  z.number({ error: "Channel must be a whole number" }).int({ error: "Channel must be a whole number" }).min(1).max(99999).nullable();
+  z
+    .number({ error: "Channel must be a whole number" })
+    .int({ error: "Channel must be a whole number" })
+    .min(1)
+    .max(99999)
+    .nullable();
 
-export const universe = () => z.number({ error: "Universe must be a whole number" }).int().min(1, { error: "Universe must be 1 or more" }).max(63999).nullable();
+export const universe = () =>
+  z
+    .number({ error: "Universe must be a whole number" })
+    .int()
+    .min(1, { error: "Universe must be 1 or more" })
+    .max(63999)
+    .nullable();
 
 // ANSI E1.11 (DMX512-A): slots 1–512 in a universe.
 export const dmxAddress = () =>
-  z.number({ error: "Address must be a whole number" }).int().min(1, { error: "DMX address must be 1–512" }).max(512, { error: "DMX address must be 1–512" }).nullable();
+  z
+    .number({ error: "Address must be a whole number" })
+    .int()
+    .min(1, { error: "DMX address must be 1–512" })
+    .max(512, { error: "DMX address must be 1–512" })
+    .nullable();
 
 // ANSI E1.11: a unit takes at least one slot and at most a whole universe.
 export const footprint = () =>
-  z.number({ error: "Footprint must be a whole number of DMX slots" }).int({ error: "Footprint must be a whole number of DMX slots" }).min(1, { error: "Footprint must be 1–512 slots" }).max(512, { error: "Footprint must be 1–512 slots" }).nullable();
+  z
+    .number({ error: "Footprint must be a whole number of DMX slots" })
+    .int({ error: "Footprint must be a whole number of DMX slots" })
+    .min(1, { error: "Footprint must be 1–512 slots" })
+    .max(512, { error: "Footprint must be 1–512 slots" })
+    .nullable();
 
 export const lensHeight = () =>
-  z.number({ error: "Lens height must be a number of metres" }).min(0, { error: "Lens height cannot be below the deck" }).max(60).nullable();
+  z
+    .number({ error: "Lens height must be a number of metres" })
+    .min(0, { error: "Lens height cannot be below the deck" })
+    .max(60)
+    .nullable();
 
 export const aim = () => z.enum(["deck", "head"]);
 
 export const cone = () =>
-  z.number({ error: "Cone must be a number of degrees" }).gt(0, { error: "Cone must be more than 0°" }).lt(180, { error: "Cone must be less than 180°" }).nullable();
+  z
+    .number({ error: "Cone must be a number of degrees" })
+    .gt(0, { error: "Cone must be more than 0°" })
+    .lt(180, { error: "Cone must be less than 180°" })
+    .nullable();
 
 export const softness = () =>
-  z.number({ error: "Softness must be a number of degrees" }).min(0, { error: "Softness cannot be negative" }).max(90).nullable();
+  z
+    .number({ error: "Softness must be a number of degrees" })
+    .min(0, { error: "Softness cannot be negative" })
+    .max(90)
+    .nullable();
 
 const point = z.object({ x: planCoord("x"), y: planCoord("y") });
 

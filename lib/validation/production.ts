@@ -22,10 +22,7 @@ export const productionSettingsSchema = z.object({
 });
 export type ProductionSettings = z.infer<typeof productionSettingsSchema>;
 
-export const updateProductionSchema = productionSettingsSchema
-  .partial()
-  .extend({ version: versionSchema })
-  .strict();
+export const updateProductionSchema = productionSettingsSchema.partial().extend({ version: versionSchema }).strict();
 
 export const createProductionSchema = z
   .object({

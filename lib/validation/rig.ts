@@ -3,7 +3,10 @@ import { POSITION_KINDS } from "@/lib/rig/position-kinds";
 import { versionSchema } from "./common";
 
 const coord = (what: string) =>
-  z.number({ error: `${what} must be a number of metres` }).min(-200, { error: `${what} is more than 200 m from the datum` }).max(200, { error: `${what} is more than 200 m from the datum` });
+  z
+    .number({ error: `${what} must be a number of metres` })
+    .min(-200, { error: `${what} is more than 200 m from the datum` })
+    .max(200, { error: `${what} is more than 200 m from the datum` });
 
 export const positionFieldsSchema = z.object({
   name: z.string({ error: "Name is required" }).trim().min(1, { error: "Name is required" }).max(80),
@@ -12,11 +15,20 @@ export const positionFieldsSchema = z.object({
   y1: coord("y1"),
   x2: coord("x2").nullable(),
   y2: coord("y2").nullable(),
-  trimHeight: z.number({ error: "Trim height must be a number of metres" }).min(0, { error: "Trim height cannot be negative" }).max(60, { error: "Trim height must be at most 60 m" }),
-  ratedLoadKg: z.number({ error: "Rated load must be a number of kilograms" }).min(0, { error: "Rated load cannot be negative" }).max(100000).nullable(),
+  trimHeight: z
+    .number({ error: "Trim height must be a number of metres" })
+    .min(0, { error: "Trim height cannot be negative" })
+    .max(60, { error: "Trim height must be at most 60 m" }),
+  ratedLoadKg: z
+    .number({ error: "Rated load must be a number of kilograms" })
+    .min(0, { error: "Rated load cannot be negative" })
+    .max(100000)
+    .nullable(),
   sortOrder: z.number().int().min(0).max(10000),
 });
-export const createPositionSchema = positionFieldsSchema.partial({ x2: true, y2: true, ratedLoadKg: true, sortOrder: true }).strict();
+export const createPositionSchema = positionFieldsSchema
+  .partial({ x2: true, y2: true, ratedLoadKg: true, sortOrder: true })
+  .strict();
 export const updatePositionSchema = positionFieldsSchema.partial().extend({ version: versionSchema }).strict();
 
 export const focusPointFieldsSchema = z.object({
@@ -29,17 +41,31 @@ export const updateFocusPointSchema = focusPointFieldsSchema.partial().extend({ 
 
 export const dmxModeSchema = z.object({
   name: z.string().trim().min(1).max(40),
-  footprint: z.number().int().min(1, { error: "Footprint must be 1–512 slots" }).max(512, { error: "Footprint must be 1–512 slots" }),
+  footprint: z
+    .number()
+    .int()
+    .min(1, { error: "Footprint must be 1–512 slots" })
+    .max(512, { error: "Footprint must be 1–512 slots" }),
 });
 
 export const fixtureTypeFieldsSchema = z.object({
   name: z.string({ error: "Name is required" }).trim().min(1, { error: "Name is required" }).max(80),
   family: z.enum(["profile", "fresnel", "wash", "par", "led-wash", "cyc", "followspot"]),
-  coneMinDeg: z.number().gt(0, { error: "Cone must be more than 0°" }).lt(180, { error: "Cone must be less than 180°" }),
-  coneMaxDeg: z.number().gt(0, { error: "Cone must be more than 0°" }).lt(180, { error: "Cone must be less than 180°" }),
+  coneMinDeg: z
+    .number()
+    .gt(0, { error: "Cone must be more than 0°" })
+    .lt(180, { error: "Cone must be less than 180°" }),
+  coneMaxDeg: z
+    .number()
+    .gt(0, { error: "Cone must be more than 0°" })
+    .lt(180, { error: "Cone must be less than 180°" }),
   defaultSoftnessDeg: z.number().min(0).max(90),
   peakCandela: z.number().min(0).max(10_000_000),
-  peakCandelaNarrow: z.number({ error: "Peak at the narrowest cone must be a number of candela" }).min(0, { error: "Peak at the narrowest cone cannot be negative" }).max(10_000_000, { error: "Peak at the narrowest cone: at most 10,000,000 cd" }).nullable(),
+  peakCandelaNarrow: z
+    .number({ error: "Peak at the narrowest cone must be a number of candela" })
+    .min(0, { error: "Peak at the narrowest cone cannot be negative" })
+    .max(10_000_000, { error: "Peak at the narrowest cone: at most 10,000,000 cd" })
+    .nullable(),
   wattage: z.number().min(0).max(100_000),
   weightKg: z.number().min(0).max(10_000),
   dmxModes: z.array(dmxModeSchema).min(1, { error: "At least one DMX mode" }).max(20),
@@ -49,9 +75,20 @@ export const fixtureTypeFieldsSchema = z.object({
   lensDropM: z.number().min(0).max(5),
   cells: z.number().int().min(1).max(64),
 });
-const coneOrder = (t: { coneMinDeg?: number; coneMaxDeg?: number }) => t.coneMinDeg === undefined || t.coneMaxDeg === undefined || t.coneMinDeg <= t.coneMaxDeg;
+const coneOrder = (t: { coneMinDeg?: number; coneMaxDeg?: number }) =>
+  t.coneMinDeg === undefined || t.coneMaxDeg === undefined || t.coneMinDeg <= t.coneMaxDeg;
 export const createFixtureTypeSchema = fixtureTypeFieldsSchema
-  .partial({ peakCandelaNarrow: true, defaultSoftnessDeg: true, wattage: true, weightKg: true, lensApertureM: true, frameSize: true, goboSize: true, lensDropM: true, cells: true })
+  .partial({
+    peakCandelaNarrow: true,
+    defaultSoftnessDeg: true,
+    wattage: true,
+    weightKg: true,
+    lensApertureM: true,
+    frameSize: true,
+    goboSize: true,
+    lensDropM: true,
+    cells: true,
+  })
   .strict()
   .refine(coneOrder, { error: "The narrowest cone cannot be wider than the widest", path: ["coneMinDeg"] });
 export const updateFixtureTypeSchema = fixtureTypeFieldsSchema

@@ -18,9 +18,11 @@ export function ensureEnvFile(file) {
   const current = parseEnvFile(file);
   if (current.SESSION_SECRET && current.SESSION_SECRET.length >= 32) return current;
   const secret = randomBytes(36).toString("base64url");
-  const lines = existsSync(file) ? readFileSync(file, "utf8").split(/\r?\n/).filter((l) => !/^\s*SESSION_SECRET\s*=/.test(l)) : [
-    "# Local settings for this checkout. Not committed.",
-  ];
+  const lines = existsSync(file)
+    ? readFileSync(file, "utf8")
+        .split(/\r?\n/)
+        .filter((l) => !/^\s*SESSION_SECRET\s*=/.test(l))
+    : ["# Local settings for this checkout. Not committed."];
   lines.push(`SESSION_SECRET=${secret}`);
   writeFileSync(file, lines.filter((l, i, all) => l !== "" || i < all.length - 1).join("\n") + "\n", { mode: 0o600 });
   log(`Created ${file} with a new session secret.`);

@@ -35,7 +35,11 @@ export async function startMailStandIn({ port, outboxDir }) {
                 to: session.envelope.rcptTo.map((r) => r.address),
                 subject: parsed.subject ?? "",
                 text: parsed.text ?? "",
-                attachments: (parsed.attachments ?? []).map((a) => ({ filename: a.filename, contentType: a.contentType, size: a.size })),
+                attachments: (parsed.attachments ?? []).map((a) => ({
+                  filename: a.filename,
+                  contentType: a.contentType,
+                  size: a.size,
+                })),
               },
               null,
               2,

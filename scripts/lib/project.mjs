@@ -40,7 +40,15 @@ export async function seedWhenEmpty(env) {
 }
 
 const SOURCE_DIRS = ["app", "components", "hooks", "lib", "models", "public"];
-const SOURCE_FILES = ["package-lock.json", "next.config.mjs", "tailwind.config.ts", "postcss.config.mjs", "tsconfig.json", "proxy.ts", "instrumentation.ts"];
+const SOURCE_FILES = [
+  "package-lock.json",
+  "next.config.mjs",
+  "tailwind.config.ts",
+  "postcss.config.mjs",
+  "tsconfig.json",
+  "proxy.ts",
+  "instrumentation.ts",
+];
 
 /** A fingerprint of everything the build reads, to rebuild only when something changed. */
 export function sourceFingerprint() {
@@ -63,7 +71,11 @@ export function sourceFingerprint() {
 export function buildIfStale(distDir, env = {}) {
   const stamp = path.join(ROOT, distDir, "throwline-source.sha256");
   const fingerprint = sourceFingerprint();
-  if (existsSync(path.join(ROOT, distDir, "BUILD_ID")) && existsSync(stamp) && readFileSync(stamp, "utf8") === fingerprint) {
+  if (
+    existsSync(path.join(ROOT, distDir, "BUILD_ID")) &&
+    existsSync(stamp) &&
+    readFileSync(stamp, "utf8") === fingerprint
+  ) {
     log("Build is up to date.");
     return;
   }

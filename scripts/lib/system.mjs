@@ -24,7 +24,9 @@ export function ensurePackages(names) {
   const pkgs = [...new Set(missing.map((p) => p.pkg))];
   if (process.getuid && process.getuid() !== 0) {
     log(`These system packages are missing: ${pkgs.join(" ")}`);
-    log(`Install them as root, then run this again:\n  sudo apt-get update && sudo apt-get install -y ${pkgs.join(" ")}`);
+    log(
+      `Install them as root, then run this again:\n  sudo apt-get update && sudo apt-get install -y ${pkgs.join(" ")}`,
+    );
     process.exit(1);
   }
   log(`Installing system packages: ${pkgs.join(" ")} (apt-get) …`);

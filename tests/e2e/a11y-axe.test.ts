@@ -27,7 +27,12 @@ const PAGES: Array<{ name: string; path: (id: number) => string; signedOut?: boo
   { name: "team", path: (id) => `/productions/${id}/team` },
 ];
 
-type AxeViolation = { id: string; impact: string | null; help: string; nodes: Array<{ target: unknown[]; failureSummary?: string }> };
+type AxeViolation = {
+  id: string;
+  impact: string | null;
+  help: string;
+  nodes: Array<{ target: unknown[]; failureSummary?: string }>;
+};
 
 async function audit(page: Page): Promise<AxeViolation[]> {
   await page.waitForLoadState("networkidle");
@@ -38,7 +43,12 @@ async function audit(page: Page): Promise<AxeViolation[]> {
     // biome-ignore lint/suspicious/noExplicitAny: axe is injected as a page global
     const axe = (window as any).axe;
     const result = await axe.run(document, { resultTypes: ["violations"] });
-    return result.violations.map((v: AxeViolation) => ({ id: v.id, impact: v.impact, help: v.help, nodes: v.nodes.map((n) => ({ target: n.target, failureSummary: n.failureSummary })) }));
+    return result.violations.map((v: AxeViolation) => ({
+      id: v.id,
+      impact: v.impact,
+      help: v.help,
+      nodes: v.nodes.map((n) => ({ target: n.target, failureSummary: n.failureSummary })),
+    }));
   });
 }
 
@@ -81,7 +91,13 @@ for (const viewportName of Object.keys(VIEWPORTS) as ViewportName[]) {
           console.log(line);
           const blocking = violations
             .filter((v) => v.impact === "serious" || v.impact === "critical")
-            .map((v) => `${v.impact} ${v.id} (${v.help}) ×${v.nodes.length}: ${v.nodes.slice(0, 3).map((n) => `${JSON.stringify(n.target)} ${n.failureSummary ?? ""}`).join(" | ")}`);
+            .map(
+              (v) =>
+                `${v.impact} ${v.id} (${v.help}) ×${v.nodes.length}: ${v.nodes
+                  .slice(0, 3)
+                  .map((n) => `${JSON.stringify(n.target)} ${n.failureSummary ?? ""}`)
+                  .join(" | ")}`,
+            );
           expect(blocking, `${target.name} (${viewportName}, ${dark ? "dark" : "light"})`).toEqual([]);
         });
       }

@@ -13,15 +13,22 @@ const MIN_TARGET = 44; // WCAG 2.2 SC 2.5.5 (AAA): 44 by 44 CSS pixels
 /** Every control under `root` whose tap area is smaller than 44 × 44 (a checkbox's tap area is its label). */
 async function smallTargets(root: Locator) {
   return root.evaluate((el, min) => {
-    const controls = el.querySelectorAll<HTMLElement>("button, a[href], input, select, textarea, summary, [role=button]");
+    const controls = el.querySelectorAll<HTMLElement>(
+      "button, a[href], input, select, textarea, summary, [role=button]",
+    );
     const small: string[] = [];
     for (const c of controls) {
       // A checkbox, a radio or a visually hidden file input is tapped through its label.
-      const viaLabel = c instanceof HTMLInputElement && (["checkbox", "radio", "file"].includes(c.type) || c.getBoundingClientRect().width <= 1);
+      const viaLabel =
+        c instanceof HTMLInputElement &&
+        (["checkbox", "radio", "file"].includes(c.type) || c.getBoundingClientRect().width <= 1);
       const area = (viaLabel ? (c.closest("label") ?? c.labels?.[0]) : null) ?? c;
       const r = area.getBoundingClientRect();
       if (r.width === 0 && r.height === 0) continue; // not rendered (a hidden file input behind its label)
-      if (r.width < min - 0.5 || r.height < min - 0.5) small.push(`${c.tagName.toLowerCase()} "${c.getAttribute("aria-label") ?? c.textContent?.trim().slice(0, 30)}" ${r.width.toFixed(0)}×${r.height.toFixed(0)}`);
+      if (r.width < min - 0.5 || r.height < min - 0.5)
+        small.push(
+          `${c.tagName.toLowerCase()} "${c.getAttribute("aria-label") ?? c.textContent?.trim().slice(0, 30)}" ${r.width.toFixed(0)}×${r.height.toFixed(0)}`,
+        );
     }
     return { count: controls.length, small };
   }, MIN_TARGET);
@@ -72,7 +79,10 @@ describe("touch targets on a tablet (800 × 1280, touch)", () => {
         return { unit: seen("Unit"), hung: seen("Hung") };
       });
     for (const to of ["middle", "end"] as const) {
-      await scroller.evaluate((box, where) => box.scrollTo({ left: where === "end" ? box.scrollWidth : box.scrollWidth / 2 }), to);
+      await scroller.evaluate(
+        (box, where) => box.scrollTo({ left: where === "end" ? box.scrollWidth : box.scrollWidth / 2 }),
+        to,
+      );
       await eventually(inView).toEqual({ unit: "in view", hung: "in view" });
     }
     await screenshot(page, "a11y-rig-tablet-dark-scrolled");
@@ -107,7 +117,8 @@ describe("the rig table from the keyboard", () => {
     await context?.close();
   });
 
-  const focused = () => page.evaluate(() => document.activeElement?.getAttribute("aria-label") ?? document.activeElement?.id ?? "");
+  const focused = () =>
+    page.evaluate(() => document.activeElement?.getAttribute("aria-label") ?? document.activeElement?.id ?? "");
 
   it("offers a skip link first that lands on the page's content", async () => {
     await page.locator("body").focus();
@@ -121,12 +132,17 @@ describe("the rig table from the keyboard", () => {
     const circuit = page.getByTestId("rig-table").locator("button[aria-label^='Circuit ']").first();
     const shown = ((await circuit.textContent()) ?? "").trim();
     expect(shown).not.toBe("");
-    expect(await circuit.getAttribute("aria-label")).toMatch(new RegExp(`^Circuit ${shown.replace(/[.*+?^${}()|[\]\\]/g, "\\$&")}, unit .+ on .+, edit$`));
+    expect(await circuit.getAttribute("aria-label")).toMatch(
+      new RegExp(`^Circuit ${shown.replace(/[.*+?^${}()|[\]\\]/g, "\\$&")}, unit .+ on .+, edit$`),
+    );
   });
 
   it("moves with the arrow keys, edits with Enter, cancels with Escape and keeps the focus on the cell", async () => {
     const cells = page.getByTestId("rig-table").locator("button[aria-label^='Circuit ']");
-    const [first, second] = [await cells.nth(0).getAttribute("aria-label"), await cells.nth(1).getAttribute("aria-label")];
+    const [first, second] = [
+      await cells.nth(0).getAttribute("aria-label"),
+      await cells.nth(1).getAttribute("aria-label"),
+    ];
     await cells.nth(0).focus();
     await page.keyboard.press("ArrowDown");
     await eventually(focused).toBe(second);

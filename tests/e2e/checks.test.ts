@@ -15,13 +15,22 @@ describe("checks", () => {
   it("lowering a circuit's rating below its load shows on the checks page and as a badge on the plot", async () => {
     const { page, productionId } = el;
     const api = `/api/productions/${productionId}`;
-    const summary = async () => (await (await page.request.get(`${api}/checks`)).json()).checks.summary as { errors: number; warnings: number };
-    const circuits = (await (await page.request.get(`${api}/circuits`)).json()).circuits as Array<{ id: number; name: string; ratingA: number; power: string }>;
+    const summary = async () =>
+      (await (await page.request.get(`${api}/checks`)).json()).checks.summary as { errors: number; warnings: number };
+    const circuits = (await (await page.request.get(`${api}/circuits`)).json()).circuits as Array<{
+      id: number;
+      name: string;
+      ratingA: number;
+      power: string;
+    }>;
     const target = circuits.find((c) => c.power === "dimmed")!;
     const before = await summary();
 
     await page.goto(`/productions/${productionId}/checks`);
-    await page.getByTestId("checks-cautions").getByText(/planning aids, not an engineering or electrical approval/).waitFor();
+    await page
+      .getByTestId("checks-cautions")
+      .getByText(/planning aids, not an engineering or electrical approval/)
+      .waitFor();
     const row = page.locator(`tr[data-circuit="${target.name}"]`);
     expect(await row.getAttribute("data-status")).toBe("ok");
     // One 750 W lamp at 230 V draws 3.26 A (P = V·I): a 2 A rating is overloaded
@@ -43,8 +52,12 @@ describe("checks", () => {
     await page.waitForURL(/\/checks$/);
 
     // Put the demo back for the other tests
-    const now = (await (await page.request.get(`${api}/circuits`)).json()).circuits.find((c: { id: number }) => c.id === target.id);
-    const back = await page.request.patch(`${api}/circuits/${target.id}`, { data: { version: now.version, ratingA: target.ratingA } });
+    const now = (await (await page.request.get(`${api}/circuits`)).json()).circuits.find(
+      (c: { id: number }) => c.id === target.id,
+    );
+    const back = await page.request.patch(`${api}/circuits/${target.id}`, {
+      data: { version: now.version, ratingA: target.ratingA },
+    });
     expect(back.status()).toBe(200);
   });
 });

@@ -12,7 +12,10 @@ import { setTheme } from "./support/theme";
 let browser: BrowserContext;
 let designer: SignedIn;
 beforeAll(async () => {
-  [browser, designer] = await Promise.all([openBrowser({ width: 1440, height: 1000 }), signedIn("designer", { width: 1440, height: 1000 })]);
+  [browser, designer] = await Promise.all([
+    openBrowser({ width: 1440, height: 1000 }),
+    signedIn("designer", { width: 1440, height: 1000 }),
+  ]);
 });
 afterAll(async () => {
   await Promise.all([browser?.close(), designer?.close()]);
@@ -21,12 +24,13 @@ afterAll(async () => {
 /** Sparse moves as a real show has them; the same file every run (a fixed pseudo-random walk). */
 function bigShowFile(cues = 600, channels = 400): string {
   let seed = 11;
-  const r = () => ((seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31);
+  const r = () => (seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31;
   const lines = ["IDENT 3:0"];
   for (let i = 1; i <= cues; i++) {
     lines.push(`CUE ${i}`, `TEXT Look ${i}`, "UP 3");
     const pairs: string[] = [];
-    for (let k = 0; k < 2 + Math.floor(r() * 12); k++) pairs.push(`${1 + Math.floor(r() * channels)}@${Math.round(r() * 10) * 10}`);
+    for (let k = 0; k < 2 + Math.floor(r() * 12); k++)
+      pairs.push(`${1 + Math.floor(r() * channels)}@${Math.round(r() * 10) * 10}`);
     if (i === 1) pairs.push(`${channels}@5`); // so the rig reaches the last channel
     for (let k = 0; k < pairs.length; k += 8) lines.push(`CHAN ${pairs.slice(k, k + 8).join(" ")}`);
   }
@@ -46,11 +50,21 @@ describe("a show of 600 cues and 400 channels", () => {
     // A fresh account of its own, so the demo designer keeps landing on the one demo production.
     await page.context().clearCookies();
     const email = `large-show-${Date.now()}@example.test`;
-    expect((await page.request.post("/api/auth/sign-up", { data: { name: "Large Show", email, password: "a-long-test-password" } })).status()).toBe(201);
-    const made = await page.request.post("/api/productions", { data: { name: `Large show ${Date.now()}`, venue: "Test Hall", displayUnits: "metric" } });
+    expect(
+      (
+        await page.request.post("/api/auth/sign-up", {
+          data: { name: "Large Show", email, password: "a-long-test-password" },
+        })
+      ).status(),
+    ).toBe(201);
+    const made = await page.request.post("/api/productions", {
+      data: { name: `Large show ${Date.now()}`, venue: "Test Hall", displayUnits: "metric" },
+    });
     expect(made.status()).toBe(201);
     const id = (await made.json()).production.id;
-    const imported = await page.request.post(`/api/productions/${id}/cues/import`, { data: { text: bigShowFile(), mode: "moves" } });
+    const imported = await page.request.post(`/api/productions/${id}/cues/import`, {
+      data: { text: bigShowFile(), mode: "moves" },
+    });
     expect(imported.status()).toBe(200);
     expect((await imported.json()).imported).toBe(600);
 
@@ -117,7 +131,9 @@ describe("parts and the look of a cue", () => {
     await page.getByTestId("cue-plan").screenshot({ path: path.join(SCREENSHOTS, "cues-plan-only-dark.png") });
     await screenshot(page, "cues-plan-dark");
     await setTheme(page, false);
-    await eventually(async () => Number(await page.getByTestId("cue-plan").getAttribute("data-lit"))).toBeGreaterThan(0);
+    await eventually(async () => Number(await page.getByTestId("cue-plan").getAttribute("data-lit"))).toBeGreaterThan(
+      0,
+    );
 
     await page.goto(page.url().split("?")[0] + "?view=sheet");
     await textOf(page.getByTestId("sheet-part-5-1")).toBe("part 1 sky: 12/4 wait 2 · ch 1-3");

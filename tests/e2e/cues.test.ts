@@ -63,7 +63,10 @@ describe("the stage manager calls the show from the cue sheet", () => {
     await signIn(page, DEMO.stageManager);
     expect(new URL(page.url()).pathname).toMatch(/\/productions\/\d+\/cues$/);
     await page.getByRole("heading", { name: "Cue sheet" }).waitFor();
-    await page.getByText(/Standby LX/).first().waitFor();
+    await page
+      .getByText(/Standby LX/)
+      .first()
+      .waitFor();
     expect(await page.getByLabel(/Type levels/).count()).toBe(0); // no level entry for the stage manager
 
     const note = page.getByLabel("Call note for cue 1", { exact: true });
@@ -72,13 +75,17 @@ describe("the stage manager calls the show from the cue sheet", () => {
     await page.getByRole("status").filter({ hasText: "Cue 1: call note saved." }).waitFor();
     await page.reload();
     // The field is filled once the saved notes have loaded, which can come after it first shows.
-    await eventually(() => page.getByLabel("Call note for cue 1", { exact: true }).inputValue()).toBe("GO as the lantern is lifted");
+    await eventually(() => page.getByLabel("Call note for cue 1", { exact: true }).inputValue()).toBe(
+      "GO as the lantern is lifted",
+    );
 
     // Even straight at the API, with the stage manager's own session, a level is refused.
     const productionId = await demoProductionId(page);
     const cues = await (await page.request.get(`/api/productions/${productionId}/cues`)).json();
     const first = cues.cues[0];
-    const denied = await page.request.patch(`/api/productions/${productionId}/cues/${first.id}`, { data: { version: first.version, levels: { 1: 90 } } });
+    const denied = await page.request.patch(`/api/productions/${productionId}/cues/${first.id}`, {
+      data: { version: first.version, levels: { 1: 90 } },
+    });
     expect(denied.status()).toBe(403);
 
     await screenshot(page, "cues-sheet-screen");
@@ -86,7 +93,11 @@ describe("the stage manager calls the show from the cue sheet", () => {
     await page.emulateMedia({ media: "print" });
     await page.getByRole("button", { name: "Print cue sheet" }).waitFor({ state: "hidden" }); // hidden on paper
     await screenshot(page, "cues-sheet-print");
-    const pdf = await page.pdf({ path: path.join(SCREENSHOTS, "cue-sheet-a4.pdf"), format: "A4", printBackground: true });
+    const pdf = await page.pdf({
+      path: path.join(SCREENSHOTS, "cue-sheet-a4.pdf"),
+      format: "A4",
+      printBackground: true,
+    });
     expect(pdf.subarray(0, 5).toString()).toBe("%PDF-");
     await page.emulateMedia({ media: "screen" });
     await page.close();

@@ -14,7 +14,10 @@ const SCREENS = [
 let electrician: SignedIn;
 let designer: SignedIn;
 beforeAll(async () => {
-  [electrician, designer] = await Promise.all([signedIn("electrician", { width: 800, height: 1280 }), signedIn("designer", { width: 800, height: 1280 })]);
+  [electrician, designer] = await Promise.all([
+    signedIn("electrician", { width: 800, height: 1280 }),
+    signedIn("designer", { width: 800, height: 1280 }),
+  ]);
 });
 afterAll(async () => {
   await Promise.all([electrician?.close(), designer?.close()]);
@@ -29,9 +32,37 @@ async function productionWith40(page: Page): Promise<{ id: number; positionId: n
     return r.json();
   };
   const id = (await post("/api/productions", { name: `Forty on a pipe ${Date.now()}` })).production.id as number;
-  const type = (await post(`/api/productions/${id}/fixture-types`, { name: "Wash 40", family: "fresnel", coneMinDeg: 15, coneMaxDeg: 60, peakCandela: 20000, dmxModes: [{ name: "dimmer", footprint: 1 }] })).fixtureType;
-  const position = (await post(`/api/productions/${id}/positions`, { name: "Long pipe", kind: "overhead-pipe", x1: -10, y1: 2, x2: 10, y2: 2, trimHeight: 7 })).position;
-  const fixtures = Array.from({ length: 40 }, (_, i) => ({ positionId: position.id, fixtureTypeId: type.id, unitNumber: String(i + 1), x: -10 + i * (20 / 39), y: 2, channel: i + 101, focusX: -4 + (i % 9), focusY: 1 + (i % 4) }));
+  const type = (
+    await post(`/api/productions/${id}/fixture-types`, {
+      name: "Wash 40",
+      family: "fresnel",
+      coneMinDeg: 15,
+      coneMaxDeg: 60,
+      peakCandela: 20000,
+      dmxModes: [{ name: "dimmer", footprint: 1 }],
+    })
+  ).fixtureType;
+  const position = (
+    await post(`/api/productions/${id}/positions`, {
+      name: "Long pipe",
+      kind: "overhead-pipe",
+      x1: -10,
+      y1: 2,
+      x2: 10,
+      y2: 2,
+      trimHeight: 7,
+    })
+  ).position;
+  const fixtures = Array.from({ length: 40 }, (_, i) => ({
+    positionId: position.id,
+    fixtureTypeId: type.id,
+    unitNumber: String(i + 1),
+    x: -10 + i * (20 / 39),
+    y: 2,
+    channel: i + 101,
+    focusX: -4 + (i % 9),
+    focusY: 1 + (i % 4),
+  }));
   await post(`/api/productions/${id}/fixtures`, { fixtures });
   return { id, positionId: position.id };
 }
@@ -39,9 +70,16 @@ async function productionWith40(page: Page): Promise<{ id: number; positionId: n
 /** Each control's box lies inside the viewport's width, and the document is no wider than the viewport. */
 async function expectControlsOnScreen(page: Page, label: string) {
   const width = page.viewportSize()!.width;
-  const { scrollWidth, clientWidth } = await page.evaluate(() => ({ scrollWidth: document.documentElement.scrollWidth, clientWidth: document.documentElement.clientWidth }));
+  const { scrollWidth, clientWidth } = await page.evaluate(() => ({
+    scrollWidth: document.documentElement.scrollWidth,
+    clientWidth: document.documentElement.clientWidth,
+  }));
   expect(scrollWidth, `${label}: the page scrolls sideways`).toBeLessThanOrEqual(clientWidth);
-  for (const control of [page.getByRole("button", { name: "Next unit" }), page.getByTestId("call-pdf"), page.getByTestId("mark-focused").or(page.getByTestId("unmark-focused"))]) {
+  for (const control of [
+    page.getByRole("button", { name: "Next unit" }),
+    page.getByTestId("call-pdf"),
+    page.getByTestId("mark-focused").or(page.getByTestId("unmark-focused")),
+  ]) {
     const box = await control.first().boundingBox();
     expect(box, `${label}: a control is missing`).not.toBeNull();
     expect(box!.x, label).toBeGreaterThanOrEqual(0);
@@ -66,10 +104,16 @@ async function checkEveryScreen(page: Page, url: string, units: number, shot: st
 describe("the focus call fits the screen", () => {
   it("keeps the controls on screen for the demo's 20-unit 1st Electric", async () => {
     const { page, productionId } = electrician;
-    const list = (await (await page.request.get(`/api/productions/${productionId}/positions`)).json()).positions as Array<{ id: number; name: string }>;
+    const list = (await (await page.request.get(`/api/productions/${productionId}/positions`)).json())
+      .positions as Array<{ id: number; name: string }>;
     const first = list.find((p) => p.name === "1st Electric");
     expect(first, "the demo has a 1st Electric").toBeDefined();
-    await checkEveryScreen(page, `/productions/${productionId}/focus/call?position=${first!.id}`, 20, "deck-focus-call-20");
+    await checkEveryScreen(
+      page,
+      `/productions/${productionId}/focus/call?position=${first!.id}`,
+      20,
+      "deck-focus-call-20",
+    );
   }, 240_000);
 
   it("keeps the controls on screen for a 40-unit pipe, and the last unit can be picked from the strip", async () => {

@@ -19,7 +19,9 @@ describe("focus charts", () => {
     await page.goto(`/productions/${productionId}/focus`);
     await page.getByTestId("chart-list").waitFor();
     await eventually(() => page.getByTestId("focus-chart").count()).toBe(12);
-    await expect(page.getByTestId("chart-window").textContent()).resolves.toContain(`Showing 12 of ${DEMO_FIXTURE_COUNT} charts`);
+    await expect(page.getByTestId("chart-window").textContent()).resolves.toContain(
+      `Showing 12 of ${DEMO_FIXTURE_COUNT} charts`,
+    );
     await page.getByTestId("show-more-charts").click();
     await eventually(() => page.getByTestId("focus-chart").count()).toBe(24);
     await screenshot(page, "deck-focus-list-window");
@@ -57,7 +59,10 @@ describe("deleting a cue", () => {
     const created = await api.post("/api/productions", { data: { name: `Cue delete ${Date.now()}` } });
     expect(created.status()).toBe(201);
     const id = (await created.json()).production.id as number;
-    for (const number of [1, 2]) expect((await api.post(`/api/productions/${id}/cues`, { data: { number, levels: { 1: 50 } } })).status()).toBe(201);
+    for (const number of [1, 2])
+      expect((await api.post(`/api/productions/${id}/cues`, { data: { number, levels: { 1: 50 } } })).status()).toBe(
+        201,
+      );
     const count = async () => ((await (await api.get(`/api/productions/${id}/cues`)).json()).cues as unknown[]).length;
 
     await page.goto(`/productions/${id}/cues`);

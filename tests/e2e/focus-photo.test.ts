@@ -16,16 +16,21 @@ afterAll(async () => {
 
 /** A camera-sized JPEG (3000 × 2250, about 3–4 MB): 10-pixel blocks of colour over a little noise. */
 async function cameraJpeg(): Promise<Buffer> {
-  const w = 3000, h = 2250;
+  const w = 3000,
+    h = 2250;
   const raw = Buffer.alloc(w * h * 3);
   let seed = 7;
   const next = () => (seed = (seed * 1103515245 + 12345) & 0x7fffffff) >> 16;
   const blocks = Array.from({ length: (w / 10) * (h / 10) * 3 }, () => next() % 200);
   for (let i = 0; i < raw.length; i++) {
     const px = Math.floor(i / 3);
-    raw[i] = blocks[(Math.floor(Math.floor(px / w) / 10) * (w / 10) + Math.floor((px % w) / 10)) * 3 + (i % 3)] + (next() % 30);
+    raw[i] =
+      blocks[(Math.floor(Math.floor(px / w) / 10) * (w / 10) + Math.floor((px % w) / 10)) * 3 + (i % 3)] +
+      (next() % 30);
   }
-  return sharp(raw, { raw: { width: w, height: h, channels: 3 } }).jpeg({ quality: 90 }).toBuffer();
+  return sharp(raw, { raw: { width: w, height: h, channels: 3 } })
+    .jpeg({ quality: 90 })
+    .toBuffer();
 }
 
 /** A stand-in for a phone photo of a focused pool: a warm ellipse on a dark deck, drawn as SVG and turned into a PNG. */
@@ -41,7 +46,14 @@ async function deckPhoto(): Promise<Buffer> {
 describe("focus photo from the deck", () => {
   it("the electrician adds a photo on a tablet, sees the thumbnail on the chart and in print, and removes it", async () => {
     const { page, productionId } = electrician;
-    const fixtures = (await (await page.context().request.get(`/api/productions/${productionId}/fixtures`)).json()).fixtures as Array<{ id: number; positionId: number; positionName: string; unitNumber: string; focusPhotoUploadId: number | null }>;
+    const fixtures = (await (await page.context().request.get(`/api/productions/${productionId}/fixtures`)).json())
+      .fixtures as Array<{
+      id: number;
+      positionId: number;
+      positionName: string;
+      unitNumber: string;
+      focusPhotoUploadId: number | null;
+    }>;
     const unit = fixtures.find((f) => f.positionName === "Boom SL 2" && f.unitNumber === "1")!;
     await page.goto(`/productions/${productionId}/focus/call?position=${unit.positionId}&unit=${unit.id}`);
     await page.getByTestId("focus-photo").waitFor();
@@ -53,11 +65,15 @@ describe("focus photo from the deck", () => {
     }
 
     // A non-image file is refused with a message and nothing changes.
-    await page.getByTestId("focus-photo-input").setInputFiles({ name: "notes.jpg", mimeType: "image/jpeg", buffer: Buffer.from("not a photo at all") });
+    await page
+      .getByTestId("focus-photo-input")
+      .setInputFiles({ name: "notes.jpg", mimeType: "image/jpeg", buffer: Buffer.from("not a photo at all") });
     await textOf(page.getByTestId("focus-photo").getByRole("alert")).toMatch(/not a PNG, JPEG or WebP photo/);
     expect(await page.getByTestId("focus-photo-preview").count()).toBe(0);
 
-    await page.getByTestId("focus-photo-input").setInputFiles({ name: "IMG_2231.png", mimeType: "image/png", buffer: await deckPhoto() });
+    await page
+      .getByTestId("focus-photo-input")
+      .setInputFiles({ name: "IMG_2231.png", mimeType: "image/png", buffer: await deckPhoto() });
     await eventually(() => page.getByTestId("focus-photo").getByRole("status").textContent()).toBe("Photo saved.");
     const preview = page.getByTestId("focus-photo-preview");
     await preview.waitFor();
@@ -77,8 +93,12 @@ describe("focus photo from the deck", () => {
         return original(input, init);
       };
     });
-    await page.getByTestId("focus-photo-input").setInputFiles({ name: "IMG_2232.jpg", mimeType: "image/jpeg", buffer: big });
-    await eventually(() => page.getByTestId("focus-photo").getByRole("status").textContent(), { timeout: 30_000 }).toBe("Photo replaced."); // shrunk in the browser first
+    await page
+      .getByTestId("focus-photo-input")
+      .setInputFiles({ name: "IMG_2232.jpg", mimeType: "image/jpeg", buffer: big });
+    await eventually(() => page.getByTestId("focus-photo").getByRole("status").textContent(), { timeout: 30_000 }).toBe(
+      "Photo replaced.",
+    ); // shrunk in the browser first
     const sent = await page.evaluate(() => (window as unknown as { sentPhotoBytes?: number }).sentPhotoBytes ?? 0);
     expect(big.byteLength).toBeGreaterThan(2 * 1024 * 1024);
     expect(sent).toBeGreaterThan(0);
@@ -86,8 +106,12 @@ describe("focus photo from the deck", () => {
     await eventually(() => preview.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBe(320);
     // Back to the picture of the pool for the screenshots.
     const bigSrc = await preview.getAttribute("src");
-    const replaced = page.waitForResponse((r) => r.url().includes(`/fixtures/${unit.id}/photo`) && r.request().method() === "POST");
-    await page.getByTestId("focus-photo-input").setInputFiles({ name: "IMG_2231.png", mimeType: "image/png", buffer: await deckPhoto() });
+    const replaced = page.waitForResponse(
+      (r) => r.url().includes(`/fixtures/${unit.id}/photo`) && r.request().method() === "POST",
+    );
+    await page
+      .getByTestId("focus-photo-input")
+      .setInputFiles({ name: "IMG_2231.png", mimeType: "image/png", buffer: await deckPhoto() });
     expect((await replaced).status()).toBe(201);
     // The screen shows the new photo (its address names the new upload) before anything else is edited.
     await eventually(() => preview.getAttribute("src")).not.toBe(bigSrc);
@@ -97,7 +121,9 @@ describe("focus photo from the deck", () => {
     await page.getByTestId("barn-door-top").fill("in halfway");
     await page.getByTestId("barn-door-left").fill("to the leg");
     await page.getByRole("button", { name: "Save barn doors" }).click();
-    await eventually(() => page.getByTestId("focus-chart").locator('[data-key="barnDoors"] dd').textContent()).toBe("top in halfway · left to the leg");
+    await eventually(() => page.getByTestId("focus-chart").locator('[data-key="barnDoors"] dd').textContent()).toBe(
+      "top in halfway · left to the leg",
+    );
     // The gobo's rotation is the designer's: the electrician reads it, with no field to change it.
     expect(await page.getByTestId("gobo-rotation").count()).toBe(0);
     await screenshot(page, "focus-photo-tablet-light");

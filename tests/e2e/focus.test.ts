@@ -37,12 +37,39 @@ async function productionWith120(page: Page): Promise<number> {
     return r.json();
   };
   const id = (await post("/api/productions", { name: `Focus print ${Date.now()}` })).production.id as number;
-  const type = (await post(`/api/productions/${id}/fixture-types`, { name: "Profile 26", family: "profile", coneMinDeg: 26, coneMaxDeg: 26, peakCandela: 40000, dmxModes: [{ name: "dimmer", footprint: 1 }] })).fixtureType;
+  const type = (
+    await post(`/api/productions/${id}/fixture-types`, {
+      name: "Profile 26",
+      family: "profile",
+      coneMinDeg: 26,
+      coneMaxDeg: 26,
+      peakCandela: 40000,
+      dmxModes: [{ name: "dimmer", footprint: 1 }],
+    })
+  ).fixtureType;
   const point = (await post(`/api/productions/${id}/focus-points`, { name: "Centre", x: 0, y: 3 })).focusPoint;
-  for (const [n, y] of [[1, -7], [2, 2]] as const) {
-    const pos = (await post(`/api/productions/${id}/positions`, { name: `Pipe ${n}`, kind: y < 0 ? "foh-bridge" : "overhead-pipe", x1: -7, y1: y, x2: 7, y2: y, trimHeight: 7.5 })).position;
+  for (const [n, y] of [
+    [1, -7],
+    [2, 2],
+  ] as const) {
+    const pos = (
+      await post(`/api/productions/${id}/positions`, {
+        name: `Pipe ${n}`,
+        kind: y < 0 ? "foh-bridge" : "overhead-pipe",
+        x1: -7,
+        y1: y,
+        x2: 7,
+        y2: y,
+        trimHeight: 7.5,
+      })
+    ).position;
     const fixtures = Array.from({ length: 60 }, (_, i) => ({
-      positionId: pos.id, fixtureTypeId: type.id, unitNumber: String(i + 1), x: -7 + i * (14 / 59), y, channel: (n - 1) * 60 + i + 1,
+      positionId: pos.id,
+      fixtureTypeId: type.id,
+      unitNumber: String(i + 1),
+      x: -7 + i * (14 / 59),
+      y,
+      channel: (n - 1) * 60 + i + 1,
       ...(i % 2 ? { focusPointId: point.id } : { focusX: -4 + (i % 9), focusY: 1 + (i % 5) }),
       ...(i % 3 === 0 ? { shutterCuts: [{ label: "top", a: { x: -6, y: -1.5 }, b: { x: 6, y: -1.5 } }] } : {}),
     }));
@@ -56,14 +83,29 @@ describe("printing 120 focus charts to PDF", () => {
     const { page } = designer;
     const id = await productionWith120(page);
     for (const n of [1, 2, 4, 6]) {
-      const r = await page.context().request.get(`/api/productions/${id}/focus/pdf?perPage=${n}&paper=${n === 2 ? "Letter" : "A4"}&tz=UTC`, { timeout: 120_000 });
+      const r = await page
+        .context()
+        .request.get(`/api/productions/${id}/focus/pdf?perPage=${n}&paper=${n === 2 ? "Letter" : "A4"}&tz=UTC`, {
+          timeout: 120_000,
+        });
       expect(r.status()).toBe(200);
       expect(r.headers()["content-type"]).toBe("application/pdf");
       const file = path.join(PDF_DIR, `focus-120-${n}up.pdf`);
       writeFileSync(file, await r.body());
       // arithmetic: 120 charts, n a page (each position's 60 divides evenly into 1, 2, 4 and 6)
       expect(pdfPages(file)).toBe(Math.ceil(120 / n));
-      execFileSync("pdftoppm", ["-png", "-r", "60", "-f", "1", "-l", "1", "-singlefile", file, path.join(RESULTS, "screenshots", `focus-pdf-${n}up-page1`)]);
+      execFileSync("pdftoppm", [
+        "-png",
+        "-r",
+        "60",
+        "-f",
+        "1",
+        "-l",
+        "1",
+        "-singlefile",
+        file,
+        path.join(RESULTS, "screenshots", `focus-pdf-${n}up-page1`),
+      ]);
     }
     // The print view shows the same sheets for the browser's own print.
     await page.goto(`/productions/${id}/focus/print?perPage=6&paper=A4&tz=UTC`);
@@ -77,7 +119,10 @@ describe("the electrician's focus call on a tablet", () => {
     const { page, productionId } = tablet;
     await page.goto(`/productions/${productionId}/focus`);
     await page.getByTestId("chart-list").waitFor();
-    const boomId = await page.getByTestId("filter-position").locator("option", { hasText: "Boom SR 2" }).getAttribute("value");
+    const boomId = await page
+      .getByTestId("filter-position")
+      .locator("option", { hasText: "Boom SR 2" })
+      .getAttribute("value");
     await page.getByTestId("filter-position").selectOption(boomId!);
     await eventually(() => page.getByTestId("focus-chart").count()).toBe(4);
     await screenshot(page, "focus-list-tablet");
@@ -87,7 +132,9 @@ describe("the electrician's focus call on a tablet", () => {
     await page.getByTestId("mark-focused").waitFor();
     // How many the server holds as focused already (an earlier run on a kept database may have marked some).
     const position = Number(boomId);
-    const onBoom = (await (await page.request.get(`/api/productions/${productionId}/fixtures`)).json()).fixtures.filter((f: { positionId: number }) => f.positionId === position);
+    const onBoom = (await (await page.request.get(`/api/productions/${productionId}/fixtures`)).json()).fixtures.filter(
+      (f: { positionId: number }) => f.positionId === position,
+    );
     const done = onBoom.filter((f: { focused: boolean }) => f.focused).length;
     await textOf(page.getByTestId("call-progress")).toBe(`${done} of 4 focused`);
     await page.getByTestId("mark-focused").click();
@@ -97,7 +144,11 @@ describe("the electrician's focus call on a tablet", () => {
     await textOf(page.getByTestId("focused-line")).toMatch(/^Focused \d{1,2} \w{3} \d{4}, \d\d:\d\d by Teodor Brask$/);
     await page.getByLabel("As-focused notes").fill("Top shutter trimmed off the lip.");
     await page.getByRole("button", { name: "Save as-focused notes" }).click();
-    await page.getByRole("status").filter({ hasText: /^Saved\.$/ }).first().waitFor();
+    await page
+      .getByRole("status")
+      .filter({ hasText: /^Saved\.$/ })
+      .first()
+      .waitFor();
     await expect(page.getByLabel("Designer notes").count()).resolves.toBe(0); // read-only for the electrician
     await screenshot(page, "focus-call-tablet-light");
     await setTheme(page, true);

@@ -29,11 +29,20 @@ describe("notes: show report to work call", () => {
     await unit.selectOption(unitValue!);
     await sm.page.getByLabel("Seen").fill("dark from the top of act two");
     await sm.page.getByRole("button", { name: "File the report" }).click();
-    await sm.page.getByRole("status").filter({ hasText: "Report filed: 1 note written." }).waitFor({ timeout: UI_TIMEOUT });
+    await sm.page
+      .getByRole("status")
+      .filter({ hasText: "Report filed: 1 note written." })
+      .waitFor({ timeout: UI_TIMEOUT });
     await sm.page.getByRole("heading", { name: new RegExp(performance) }).waitFor();
     await screenshot(sm.page, "notes-show-report-filed");
 
-    const notes = (await (await el.page.request.get(`${api}/notes`)).json()).notes as Array<{ id: number; body: string; subjectId: number; kind: string; status: string }>;
+    const notes = (await (await el.page.request.get(`${api}/notes`)).json()).notes as Array<{
+      id: number;
+      body: string;
+      subjectId: number;
+      kind: string;
+      status: string;
+    }>;
     const note = notes.find((n) => n.body.includes(performance))!;
     expect([note.kind, note.status, note.subjectId]).toEqual(["work", "open", Number(unitValue)]);
 
@@ -48,7 +57,11 @@ describe("notes: show report to work call", () => {
 
     const me = (await (await el.page.request.get("/api/auth/me")).json()).user;
     await eventually(async () => {
-      const all = (await (await el.page.request.get(`${api}/notes`)).json()).notes as Array<{ id: number; status: string; closedBy: number | null }>;
+      const all = (await (await el.page.request.get(`${api}/notes`)).json()).notes as Array<{
+        id: number;
+        status: string;
+        closedBy: number | null;
+      }>;
       const n = all.find((x) => x.id === note.id)!;
       return [n.status, n.closedBy];
     }).toEqual(["done", me.id]);

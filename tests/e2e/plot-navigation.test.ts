@@ -15,10 +15,16 @@ afterAll(async () => {
   await browser?.close();
 });
 
-const readView = async (page: Page) => JSON.parse((await page.getByTestId("plot-canvas").getAttribute("data-view"))!) as View;
+const readView = async (page: Page) =>
+  JSON.parse((await page.getByTestId("plot-canvas").getAttribute("data-view"))!) as View;
 const planAt = (v: View, s: { x: number; y: number }) => ({ x: (s.x - v.ox) / v.scale, y: (v.oy - s.y) / v.scale });
 
-async function slowDrag(page: Page, from: { x: number; y: number }, by: { x: number; y: number }, button: "left" | "middle") {
+async function slowDrag(
+  page: Page,
+  from: { x: number; y: number },
+  by: { x: number; y: number },
+  button: "left" | "middle",
+) {
   await page.mouse.move(from.x, from.y);
   await page.mouse.down({ button });
   for (let i = 1; i <= 6; i++) await page.mouse.move(from.x + (by.x * i) / 6, from.y + (by.y * i) / 6);
@@ -30,7 +36,8 @@ describe("moving the view", () => {
     const page = await browser.newPage();
     await signIn(page, DEMO.designer);
     const id = await demoProductionId(page);
-    const stamp = async () => (await (await page.request.get(`/api/productions/${id}/plot?only=stamp`)).json()).stamp as string;
+    const stamp = async () =>
+      (await (await page.request.get(`/api/productions/${id}/plot?only=stamp`)).json()).stamp as string;
     await page.goto(`/productions/${id}/plot`);
     await page.locator("[data-testid=plot-canvas][data-drawn]").waitFor();
     const box = (await page.getByTestId("plot-canvas").boundingBox())!;
@@ -76,11 +83,14 @@ describe("moving the view", () => {
     // The look as first framed, once it has stopped changing (its levels arrive after the canvas).
     let framed = "";
     await expect
-      .poll(async () => {
-        const [a, b] = [await pixels(), await new Promise<string>((r) => setTimeout(() => r(pixels()), 400))];
-        framed = b;
-        return a === b;
-      }, { timeout: 15_000 })
+      .poll(
+        async () => {
+          const [a, b] = [await pixels(), await new Promise<string>((r) => setTimeout(() => r(pixels()), 400))];
+          framed = b;
+          return a === b;
+        },
+        { timeout: 15_000 },
+      )
       .toBe(true);
     const box = (await plan.boundingBox())!;
     await slowDrag(page, { x: box.x + box.width / 2, y: box.y + box.height / 2 }, { x: 90, y: 40 }, "left");

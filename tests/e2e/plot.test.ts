@@ -37,7 +37,8 @@ async function toPage(page: Page, p: { x: number; y: number }) {
 async function drag(page: Page, from: { x: number; y: number }, to: { x: number; y: number }) {
   await page.mouse.move(from.x, from.y);
   await page.mouse.down();
-  for (let i = 1; i <= 8; i++) await page.mouse.move(from.x + ((to.x - from.x) * i) / 8, from.y + ((to.y - from.y) * i) / 8);
+  for (let i = 1; i <= 8; i++)
+    await page.mouse.move(from.x + ((to.x - from.x) * i) / 8, from.y + ((to.y - from.y) * i) / 8);
   await page.mouse.up();
 }
 
@@ -51,7 +52,9 @@ describe("the designer works the plot", () => {
     await screenshot(page, "plot-designer-light");
 
     // Underlay: a 400 × 300 px grid image; calibrate by dragging across 200 px of it and calling that 10 m.
-    await page.getByTestId("underlay-file").setInputFiles({ name: "groundplan.png", mimeType: "image/png", buffer: makePng(400, 300) });
+    await page
+      .getByTestId("underlay-file")
+      .setInputFiles({ name: "groundplan.png", mimeType: "image/png", buffer: makePng(400, 300) });
     await page.getByRole("button", { name: "Upload" }).click();
     await page.getByTestId("underlay-info").filter({ hasText: "groundplan.png" }).waitFor();
     const before = (await plotData(page)).underlays[0];
@@ -80,9 +83,19 @@ describe("the designer works the plot", () => {
     // Hang two units: pick a type on the shelf, click the pipe twice.
     await page.getByTestId("type-shelf").getByRole("button", { name: "Profile 26°" }).click();
     await page.mouse.click(...xy(await toPage(page, { x: 2, y: 7.8 })));
-    await expect.poll(async () => (await plotData(page)).fixtures.filter((f: { positionId: number }) => f.positionId === pipe.id).length).toBe(1);
+    await expect
+      .poll(
+        async () =>
+          (await plotData(page)).fixtures.filter((f: { positionId: number }) => f.positionId === pipe.id).length,
+      )
+      .toBe(1);
     await page.mouse.click(...xy(await toPage(page, { x: -2, y: 7.8 })));
-    await expect.poll(async () => (await plotData(page)).fixtures.filter((f: { positionId: number }) => f.positionId === pipe.id).length).toBe(2);
+    await expect
+      .poll(
+        async () =>
+          (await plotData(page)).fixtures.filter((f: { positionId: number }) => f.positionId === pipe.id).length,
+      )
+      .toBe(2);
     const hung = (await plotData(page)).fixtures.filter((f: { positionId: number }) => f.positionId === pipe.id);
     // numbered from stage left: the unit at x = 2 (stage left of the other) is 1
     expect(hung.find((f: { x: number }) => f.x > 0).unitNumber).toBe("1");
@@ -92,20 +105,30 @@ describe("the designer works the plot", () => {
 
     // Focus: a cyc unit on the 4th Electric has its own mark; select it and drag the mark 3 m downstage.
     const data = await plotData(page);
-    const cyc = data.fixtures.find((f: { positionName: string; focusPointId: number | null }) => f.positionName === "4th Electric" && f.focusPointId === null);
+    const cyc = data.fixtures.find(
+      (f: { positionName: string; focusPointId: number | null }) =>
+        f.positionName === "4th Electric" && f.focusPointId === null,
+    );
     await page.mouse.click(...xy(await toPage(page, cyc)));
-    await page.getByTestId("fixture-title").filter({ hasText: `Unit ${cyc.unitNumber} · 4th Electric` }).waitFor();
+    await page
+      .getByTestId("fixture-title")
+      .filter({ hasText: `Unit ${cyc.unitNumber} · 4th Electric` })
+      .waitFor();
     const throwBefore = await page.getByTestId("num-throw").textContent();
     const mark = cyc.computed.focus;
     await drag(page, await toPage(page, mark), await toPage(page, { x: mark.x, y: mark.y - 3 }));
-    await expect.poll(async () => (await plotData(page)).fixtures.find((f: { id: number }) => f.id === cyc.id).version).toBeGreaterThan(cyc.version);
+    await expect
+      .poll(async () => (await plotData(page)).fixtures.find((f: { id: number }) => f.id === cyc.id).version)
+      .toBeGreaterThan(cyc.version);
     const saved = (await plotData(page)).fixtures.find((f: { id: number }) => f.id === cyc.id);
     expect(saved.focusY).toBeCloseTo(mark.y - 3, 1);
     await page.locator("[data-testid=beam-numbers][data-preview=no]").waitFor();
     const expected = `${saved.computed.throw.toFixed(2)} m`; // metric production: two decimals (lib/optics formatLength)
     await expect.poll(() => page.getByTestId("num-throw").textContent()).toBe(expected);
     expect(expected).not.toBe(throwBefore);
-    expect(await page.getByTestId("num-deck-length").textContent()).toBe(`${saved.computed.deck.lengthAlong.toFixed(2)} m`);
+    expect(await page.getByTestId("num-deck-length").textContent()).toBe(
+      `${saved.computed.deck.lengthAlong.toFixed(2)} m`,
+    );
     await screenshot(page, "plot-designer-focus");
 
     await page.getByTestId("theme-toggle").click();
@@ -140,18 +163,27 @@ describe("the electrician sees the plot read-only", () => {
     expect(await page.getByRole("button", { name: "Pipe", exact: true }).count()).toBe(0);
     expect(await page.getByTestId("type-shelf").count()).toBe(0);
     const data = await plotData(page);
-    const cyc = data.fixtures.find((f: { positionName: string; focusPointId: number | null }) => f.positionName === "4th Electric" && f.focusPointId === null);
+    const cyc = data.fixtures.find(
+      (f: { positionName: string; focusPointId: number | null }) =>
+        f.positionName === "4th Electric" && f.focusPointId === null,
+    );
     await page.mouse.click(...xy(await toPage(page, cyc)));
     await page.getByTestId("fixture-panel").waitFor();
     expect(await page.locator("[data-testid=field-cone]").evaluate((el) => el.tagName)).toBe("SPAN");
     expect(await page.getByTestId("field-throw").count()).toBe(0);
     expect(await page.getByTestId("underlay-file").count()).toBe(0);
     // Dragging the mark only pans the view; nothing is saved.
-    await drag(page, await toPage(page, cyc.computed.focus), await toPage(page, { x: cyc.computed.focus.x, y: cyc.computed.focus.y - 2 }));
+    await drag(
+      page,
+      await toPage(page, cyc.computed.focus),
+      await toPage(page, { x: cyc.computed.focus.x, y: cyc.computed.focus.y - 2 }),
+    );
     await page.waitForTimeout(500);
     const after = (await plotData(page)).fixtures.find((f: { id: number }) => f.id === cyc.id);
     expect(after.version).toBe(cyc.version);
-    const r = await page.request.patch(`/api/productions/${productionId}/fixtures/${cyc.id}`, { data: { version: cyc.version, focusX: 0, focusY: 0 } });
+    const r = await page.request.patch(`/api/productions/${productionId}/fixtures/${cyc.id}`, {
+      data: { version: cyc.version, focusX: 0, focusY: 0 },
+    });
     expect(r.status()).toBe(403);
     await screenshot(page, "plot-electrician");
     await page.close();

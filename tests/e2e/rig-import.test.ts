@@ -43,10 +43,16 @@ describe("rig import and export as the electrician", () => {
     await screenshot(page, "rig-hanging-electrician");
     await page.screenshot({ path: path.join(SCREENSHOTS, "rig-hanging-electrician-viewport.png") });
 
-    const fixtures: Array<{ positionName: string; unitNumber: string; id: number }> = await page.evaluate(async (pid) => (await (await fetch(`/api/productions/${pid}/fixtures`)).json()).fixtures, id);
+    const fixtures: Array<{ positionName: string; unitNumber: string; id: number }> = await page.evaluate(
+      async (pid) => (await (await fetch(`/api/productions/${pid}/fixtures`)).json()).fixtures,
+      id,
+    );
     const [a, b] = fixtures;
     const header = "Position;Unit;Circuit;DMX address;Hung\r\n";
-    const bad = csvFile("patch.csv", `\ufeff${header}${a.positionName};${a.unitNumber};C-101;1;yes\r\n${b.positionName};${b.unitNumber};C-102;600;yes\r\n`);
+    const bad = csvFile(
+      "patch.csv",
+      `\ufeff${header}${a.positionName};${a.unitNumber};C-101;1;yes\r\n${b.positionName};${b.unitNumber};C-102;600;yes\r\n`,
+    );
 
     await page.getByRole("button", { name: "Import a file" }).click();
     await page.getByTestId("import-file").setInputFiles(bad);
@@ -55,7 +61,10 @@ describe("rig import and export as the electrician", () => {
     await screenshot(page, "rig-import-preview-error");
     await page.screenshot({ path: path.join(SCREENSHOTS, "rig-import-preview-error-viewport.png") });
 
-    const good = csvFile("patch-fixed.csv", `\ufeff${header}${a.positionName};${a.unitNumber};C-101;1;yes\r\n${b.positionName};${b.unitNumber};C-102;2;yes\r\n`);
+    const good = csvFile(
+      "patch-fixed.csv",
+      `\ufeff${header}${a.positionName};${a.unitNumber};C-101;1;yes\r\n${b.positionName};${b.unitNumber};C-102;2;yes\r\n`,
+    );
     await page.getByTestId("import-file").setInputFiles(good);
     await page.getByTestId("import-errors").waitFor({ state: "detached" });
     await page.getByTestId("import-summary").filter({ hasText: "2 to update" }).waitFor();
@@ -100,7 +109,10 @@ describe("rig import and export as the electrician", () => {
     const input = page.getByRole("textbox", { name: /^Dimmer of/ });
     await input.fill("D-E2E");
     await input.press("Enter");
-    await page.getByRole("button", { name: /^Edit Dimmer of/ }).filter({ hasText: "D-E2E" }).waitFor();
+    await page
+      .getByRole("button", { name: /^Edit Dimmer of/ })
+      .filter({ hasText: "D-E2E" })
+      .waitFor();
     await page.close();
   });
 });

@@ -16,7 +16,10 @@ describe("fixture types as the electrician", () => {
     const { page, productionId } = electrician;
     await page.goto(`/productions/${productionId}/rig`);
     await page.getByTestId("rig-table").waitFor();
-    await page.getByRole("button", { name: /fixture types/i }).first().click();
+    await page
+      .getByRole("button", { name: /fixture types/i })
+      .first()
+      .click();
     const panel = page.getByRole("region", { name: "Fixture types" });
     await panel.waitFor();
     await textOf(panel.getByTestId("types-from-memory")).toMatch(/from memory/);
@@ -31,7 +34,10 @@ describe("fixture types as the electrician", () => {
     await textOf(panel.getByTestId("type-cell-message").first()).toMatch(/not a number/);
     await input.fill("777");
     await input.press("Enter");
-    await panel.getByRole("button", { name: `Edit Power (W) of ${typeName}` }).filter({ hasText: "777" }).waitFor();
+    await panel
+      .getByRole("button", { name: `Edit Power (W) of ${typeName}` })
+      .filter({ hasText: "777" })
+      .waitFor();
     expect(await panel.getByRole("button", { name: `Edit Cone (°) of ${typeName}` }).count()).toBe(0);
     await screenshot(page, "rig-types-electrician");
 
@@ -39,6 +45,9 @@ describe("fixture types as the electrician", () => {
     await panel.getByRole("button", { name: `Edit Power (W) of ${typeName}` }).click();
     await panel.getByLabel(`Power (W) of ${typeName}`).fill(old);
     await panel.getByLabel(`Power (W) of ${typeName}`).press("Enter");
-    await panel.getByRole("button", { name: `Edit Power (W) of ${typeName}` }).filter({ hasText: old }).waitFor();
+    await panel
+      .getByRole("button", { name: `Edit Power (W) of ${typeName}` })
+      .filter({ hasText: old })
+      .waitFor();
   });
 });

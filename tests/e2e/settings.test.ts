@@ -33,7 +33,8 @@ describe("production settings", () => {
     await signIn(page, DEMO.designer);
     const settingsUrl = `${await openDemoProduction(page)}/settings`;
     const productionApi = `/api/productions/${await demoProductionId(page)}`;
-    const storedHead = async () => (await (await page.request.get(productionApi)).json()).production.headHeight as number;
+    const storedHead = async () =>
+      (await (await page.request.get(productionApi)).json()).production.headHeight as number;
     const seeded = await storedHead();
     await page.goto(settingsUrl);
     const head = page.getByLabel("Head height");

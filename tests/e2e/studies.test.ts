@@ -24,7 +24,12 @@ async function create(path: string, key: string, data: object) {
   return row;
 }
 
-const square = (cx: number, cy: number, r: number) => [{ x: cx - r, y: cy - r }, { x: cx + r, y: cy - r }, { x: cx + r, y: cy + r }, { x: cx - r, y: cy + r }];
+const square = (cx: number, cy: number, r: number) => [
+  { x: cx - r, y: cy - r },
+  { x: cx + r, y: cy - r },
+  { x: cx + r, y: cy + r },
+  { x: cx - r, y: cy + r },
+];
 
 describe("studies", () => {
   it("draws the coverage heat map, the area table and a flagged area's dark spot, then face light", async () => {
@@ -35,7 +40,9 @@ describe("studies", () => {
     const result = page.getByTestId("coverage-result");
     await result.and(page.locator("[data-state=ready]")).waitFor({ timeout: 120_000 });
     const canvas = page.getByTestId("study-canvas").first();
-    await eventually(async () => Number(await canvas.getAttribute("data-draw-ms")) > 0, { timeout: UI_TIMEOUT }).toBe(true);
+    await eventually(async () => Number(await canvas.getAttribute("data-draw-ms")) > 0, { timeout: UI_TIMEOUT }).toBe(
+      true,
+    );
     await page.getByTestId("heat-legend").first().waitFor();
     const row = page.getByTestId("area-table").getByRole("row", { name: /Study DC/ });
     await row.click();
@@ -51,7 +58,10 @@ describe("studies", () => {
     await screenshot(page, "studies-coverage");
 
     await page.getByLabel("Measure").selectOption("face");
-    await eventually(async () => (await page.getByTestId("heat-legend").first().textContent())?.includes("light on faces") ?? false, { timeout: 120_000 }).toBe(true);
+    await eventually(
+      async () => (await page.getByTestId("heat-legend").first().textContent())?.includes("light on faces") ?? false,
+      { timeout: 120_000 },
+    ).toBe(true);
     await screenshot(page, "studies-face-light");
   });
 
@@ -75,11 +85,15 @@ describe("studies", () => {
     await page.mouse.down();
     await page.mouse.move(box.x + to.x, box.y + to.y, { steps: 8 });
     await page.mouse.up();
-    await eventually(async () => {
-      const rows = (await (await page.request.get(`/api/productions/${s.productionId}/performer-marks`)).json()).performerMarks;
-      const now = rows.find((r: { id: number }) => r.id === mark.id);
-      return Math.abs(now.x - 2) < 0.15 && Math.abs(now.y - 4) < 0.15 && now.version === 2;
-    }, { timeout: 60_000, message: "the dragged performer mark was not saved at its new place" }).toBe(true);
+    await eventually(
+      async () => {
+        const rows = (await (await page.request.get(`/api/productions/${s.productionId}/performer-marks`)).json())
+          .performerMarks;
+        const now = rows.find((r: { id: number }) => r.id === mark.id);
+        return Math.abs(now.x - 2) < 0.15 && Math.abs(now.y - 4) < 0.15 && now.version === 2;
+      },
+      { timeout: 60_000, message: "the dragged performer mark was not saved at its new place" },
+    ).toBe(true);
     await page.getByTestId("shadow-result").and(page.locator("[data-state=ready]")).waitFor({ timeout: 60_000 });
     await screenshot(page, "studies-shadows");
   });

@@ -17,7 +17,12 @@ describe("web app manifest and icons", () => {
     expect(r.status).toBe(200);
     expect(r.headers.get("content-type")).toMatch(/manifest\+json|application\/json/);
     const m = await r.json();
-    expect(m).toMatchObject({ name: "Throwline", start_url: "/productions", display: "standalone", theme_color: "#161412" });
+    expect(m).toMatchObject({
+      name: "Throwline",
+      start_url: "/productions",
+      display: "standalone",
+      theme_color: "#161412",
+    });
     const sizes = m.icons.map((i: { sizes: string }) => i.sizes);
     expect(sizes).toEqual(expect.arrayContaining(["192x192", "512x512"]));
     expect(m.icons.some((i: { purpose?: string }) => i.purpose === "maskable")).toBe(true);
@@ -54,6 +59,8 @@ describe("web app manifest and icons", () => {
     expect(html).toMatch(/<link rel="manifest" href="\/manifest.webmanifest"/);
     expect(html).toMatch(/<link rel="apple-touch-icon" href="\/icons\/apple-touch-icon.png"/);
     const themes = [...html.matchAll(/<meta name="theme-color"[^>]*>/g)].map((m) => m[0]);
-    expect(themes.some((t) => t.includes('content="#161412"') && t.includes('media="(prefers-color-scheme: dark)"'))).toBe(true);
+    expect(
+      themes.some((t) => t.includes('content="#161412"') && t.includes('media="(prefers-color-scheme: dark)"')),
+    ).toBe(true);
   });
 });

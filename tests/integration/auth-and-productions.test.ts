@@ -19,8 +19,14 @@ describe("sign-in", () => {
   });
 
   it("gives the same 401 message for an unknown address and a wrong password", async () => {
-    const unknown = await new ApiSession().post("/api/auth/sign-in", { email: "nobody@nowhere.test", password: "whatever-it-is" });
-    const wrong = await new ApiSession().post("/api/auth/sign-in", { email: DEMO_USERS.designer, password: "not-the-password" });
+    const unknown = await new ApiSession().post("/api/auth/sign-in", {
+      email: "nobody@nowhere.test",
+      password: "whatever-it-is",
+    });
+    const wrong = await new ApiSession().post("/api/auth/sign-in", {
+      email: DEMO_USERS.designer,
+      password: "not-the-password",
+    });
     expect(unknown.status).toBe(401);
     expect(wrong.status).toBe(401);
     expect(unknown.json.error.message).toBe(wrong.json.error.message);
@@ -40,8 +46,16 @@ describe("sign-in", () => {
 
   it("signs up once per address", async () => {
     const email = uniqueEmail("dup");
-    const first = await new ApiSession().post("/api/auth/sign-up", { name: "A", email, password: "a-long-test-password" });
-    const second = await new ApiSession().post("/api/auth/sign-up", { name: "B", email, password: "a-long-test-password" });
+    const first = await new ApiSession().post("/api/auth/sign-up", {
+      name: "A",
+      email,
+      password: "a-long-test-password",
+    });
+    const second = await new ApiSession().post("/api/auth/sign-up", {
+      name: "B",
+      email,
+      password: "a-long-test-password",
+    });
     expect(first.status).toBe(201);
     expect(second.status).toBe(409);
     expect(second.json.error.fieldErrors).toHaveProperty("email");
@@ -138,7 +152,10 @@ describe("fixtures", () => {
     const el = await demoSession("electrician");
     const id = await demoProductionId(el);
     const f = (await el.get(`/api/productions/${id}/fixtures`)).json.fixtures[5];
-    const denied = await el.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: f.version, colour: "deep amber" });
+    const denied = await el.patch(`/api/productions/${id}/fixtures/${f.id}`, {
+      version: f.version,
+      colour: "deep amber",
+    });
     expect(denied.status).toBe(403);
     expect(denied.json.error.fieldErrors).toHaveProperty("colour");
     const ok = await el.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: f.version, circuit: "A-17" });
@@ -152,7 +169,10 @@ describe("fixtures", () => {
     const el = await demoSession("electrician");
     const id = await demoProductionId(designer);
     const f = (await designer.get(`/api/productions/${id}/fixtures`)).json.fixtures[7];
-    const a = await designer.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: f.version, colour: "pale amber" });
+    const a = await designer.patch(`/api/productions/${id}/fixtures/${f.id}`, {
+      version: f.version,
+      colour: "pale amber",
+    });
     const b = await el.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: f.version, circuit: "B-2" });
     expect(a.status).toBe(200);
     expect(b.status).toBe(409);

@@ -155,8 +155,11 @@ function routeTree(): string[] {
     const src = readFileSync(path.join(root, rel), "utf8");
     const url = `/api/${path.dirname(rel)}`.replace(/\/\.$/, "").replaceAll(path.sep, "/");
     const methods = new Set<string>();
-    for (const m of src.matchAll(/export\s+(?:const|async function|function)\s+(GET|POST|PUT|PATCH|DELETE)\b/g)) methods.add(m[1]);
-    for (const m of src.matchAll(/export\s+const\s*\{([^}]*)\}/g)) for (const name of m[1].split(",")) if (/^(GET|POST|PUT|PATCH|DELETE)$/.test(name.trim())) methods.add(name.trim());
+    for (const m of src.matchAll(/export\s+(?:const|async function|function)\s+(GET|POST|PUT|PATCH|DELETE)\b/g))
+      methods.add(m[1]);
+    for (const m of src.matchAll(/export\s+const\s*\{([^}]*)\}/g))
+      for (const name of m[1].split(","))
+        if (/^(GET|POST|PUT|PATCH|DELETE)$/.test(name.trim())) methods.add(name.trim());
     for (const method of methods) out.push(`${method} ${url}`);
   }
   return out.sort();
@@ -219,12 +222,18 @@ describe("the route tree and the role table agree", () => {
         if (caller === "anonymous") ok = r.status === 401;
         else if (scope === "signed-in") ok = ![401, 403, 404].includes(r.status);
         else if (caller === "outsider") ok = r.status === 404;
-        else if (scope.includes(caller as Role)) ok = ![401, 403].includes(r.status) && r.status < 500 && (method !== "GET" || r.status === 200 || r.status === 404);
+        else if (scope.includes(caller as Role))
+          ok =
+            ![401, 403].includes(r.status) &&
+            r.status < 500 &&
+            (method !== "GET" || r.status === 200 || r.status === 404);
         else ok = r.status === 403;
         if (!ok) mismatches.push(`${row} as ${caller}: ${r.status} ${JSON.stringify(r.json).slice(0, 120)}`);
       }
     }
-    console.log(`authorization matrix: ${checked} requests (${routeTree().length} route methods × ${callers.length} callers, public routes aside), ${mismatches.length} mismatches`);
+    console.log(
+      `authorization matrix: ${checked} requests (${routeTree().length} route methods × ${callers.length} callers, public routes aside), ${mismatches.length} mismatches`,
+    );
     expect(mismatches).toEqual([]);
   }, 600_000);
 });
@@ -250,9 +259,14 @@ describe("field-level rules on a fixture", () => {
     for (const rule of FIELD_RULES) {
       for (const role of ALL) {
         // A stale version: an allowed write gets 409 (nothing written), a refused one 403 naming the field.
-        const r = await sessions[role].patch(`/api/productions/${productionId}/fixtures/${ids.fixtureId}`, { version: 999_999, [rule.field]: rule.value });
+        const r = await sessions[role].patch(`/api/productions/${productionId}/fixtures/${ids.fixtureId}`, {
+          version: 999_999,
+          [rule.field]: rule.value,
+        });
         const allowed = rule.roles.includes(role);
-        const ok = allowed ? r.status === 409 : r.status === 403 && Object.keys(r.json?.error?.fieldErrors ?? {}).includes(rule.field);
+        const ok = allowed
+          ? r.status === 409
+          : r.status === 403 && Object.keys(r.json?.error?.fieldErrors ?? {}).includes(rule.field);
         if (!ok) mismatches.push(`${rule.field} as ${role}: ${r.status} ${JSON.stringify(r.json).slice(0, 120)}`);
       }
     }

@@ -7,14 +7,54 @@ async function rigged() {
   const { session: s } = await freshUser("checks");
   const id = (await s.post("/api/productions", { name: "Checks test" })).json.production.id as number;
   const p = `/api/productions/${id}`;
-  const pos = (await s.post(`${p}/positions`, { name: "1st electric", kind: "overhead-pipe", x1: -5, y1: 1, x2: 5, y2: 1, trimHeight: 7, ratedLoadKg: 100 })).json.position;
-  const profile = (await s.post(`${p}/fixture-types`, { name: "Test profile", family: "profile", coneMinDeg: 26, coneMaxDeg: 26, peakCandela: 40000, wattage: 750, weightKg: 8, dmxModes: [{ name: "dimmer", footprint: 1 }] })).json.fixtureType;
-  const led = (await s.post(`${p}/fixture-types`, { name: "Test LED wash", family: "led-wash", coneMinDeg: 20, coneMaxDeg: 20, peakCandela: 9000, wattage: 300, weightKg: 10, dmxModes: [{ name: "wide", footprint: 16 }] })).json.fixtureType;
+  const pos = (
+    await s.post(`${p}/positions`, {
+      name: "1st electric",
+      kind: "overhead-pipe",
+      x1: -5,
+      y1: 1,
+      x2: 5,
+      y2: 1,
+      trimHeight: 7,
+      ratedLoadKg: 100,
+    })
+  ).json.position;
+  const profile = (
+    await s.post(`${p}/fixture-types`, {
+      name: "Test profile",
+      family: "profile",
+      coneMinDeg: 26,
+      coneMaxDeg: 26,
+      peakCandela: 40000,
+      wattage: 750,
+      weightKg: 8,
+      dmxModes: [{ name: "dimmer", footprint: 1 }],
+    })
+  ).json.fixtureType;
+  const led = (
+    await s.post(`${p}/fixture-types`, {
+      name: "Test LED wash",
+      family: "led-wash",
+      coneMinDeg: 20,
+      coneMaxDeg: 20,
+      peakCandela: 9000,
+      wattage: 300,
+      weightKg: 10,
+      dmxModes: [{ name: "wide", footprint: 16 }],
+    })
+  ).json.fixtureType;
   expect(profile && led && pos).toBeTruthy();
   return { s, id, p, pos, profile, led };
 }
 
-const unit = (pos: any, type: any, n: string, extra: object) => ({ positionId: pos.id, fixtureTypeId: type.id, unitNumber: n, x: 0, y: 1, ...extra });
+const unit = (pos: any, type: any, n: string, extra: object) => ({
+  positionId: pos.id,
+  fixtureTypeId: type.id,
+  unitNumber: n,
+  x: 0,
+  y: 1,
+  ...extra,
+});
 
 describe("electrical settings", () => {
   it("a new production has no code chosen: no continuous limit, the voltage set by hand; choosing the NEC gives 120 V and 80 %", async () => {
@@ -22,7 +62,11 @@ describe("electrical settings", () => {
     const before = (await s.get(`${p}/checks`)).json.checks;
     expect(before.electrical).toMatchObject({ code: "none", derating: null });
     const settings = (await s.get(`${p}/checks/settings`)).json.settings;
-    const nec = await s.patch(`${p}/checks/settings`, { version: settings.version, electricalCode: "us-nec", supplySystem: "120-208-3ph" });
+    const nec = await s.patch(`${p}/checks/settings`, {
+      version: settings.version,
+      electricalCode: "us-nec",
+      supplySystem: "120-208-3ph",
+    });
     expect(nec.status).toBe(200);
     const after = (await s.get(`${p}/checks`)).json.checks;
     expect(after.electrical).toMatchObject({ code: "us-nec", voltage: 120, derating: 0.8, phases: ["A", "B", "C"] }); // NFPA 70 210.20(A)
@@ -47,7 +91,12 @@ describe("power", () => {
     const { s, p, pos, profile, led } = await rigged();
     const { version } = (await s.get(`${p}/checks/settings`)).json.settings;
     await s.patch(`${p}/checks/settings`, { version, electricalCode: "us-nec", supplySystem: "120-208-3ph" });
-    const batch = await s.post(`${p}/circuits/batch`, { circuits: [{ name: "1", ratingA: 20, phase: "A", power: "dimmed" }, { name: "2", ratingA: 20, phase: "B", power: "constant" }] });
+    const batch = await s.post(`${p}/circuits/batch`, {
+      circuits: [
+        { name: "1", ratingA: 20, phase: "A", power: "dimmed" },
+        { name: "2", ratingA: 20, phase: "B", power: "constant" },
+      ],
+    });
     expect(batch.status).toBe(201);
     expect(batch.json.circuits.map((c: any) => c.name)).toEqual(["1", "2"]);
     await s.post(`${p}/fixtures`, { fixtures: ["1", "2", "3"].map((n) => unit(pos, profile, n, { circuit: "1" })) });
@@ -61,7 +110,10 @@ describe("power", () => {
     const again = checks.power.circuits.find((c: any) => c.name === "1");
     expect(again.amps).toBeCloseTo(2550 / 120, 9); // P = V·I: 3 × 750 + 300 VA
     expect(again.status).toBe("over-rating");
-    const errors = checks.findings.filter((f: any) => f.severity === "error").map((f: any) => f.message).join("\n");
+    const errors = checks.findings
+      .filter((f: any) => f.severity === "error")
+      .map((f: any) => f.message)
+      .join("\n");
     expect(errors).toMatch(/set that dimmer to non-dim or use a constant-power circuit/);
     expect(checks.summary.errors).toBeGreaterThanOrEqual(2);
     // Every fixture on the overloaded circuit carries the error badge
@@ -70,7 +122,16 @@ describe("power", () => {
 
   it("a type with no wattage is 'not counted', never a silent 0", async () => {
     const { s, p, pos } = await rigged();
-    const bare = (await s.post(`${p}/fixture-types`, { name: "Unknown unit", family: "fresnel", coneMinDeg: 20, coneMaxDeg: 50, peakCandela: 9000, dmxModes: [{ name: "dimmer", footprint: 1 }] })).json.fixtureType;
+    const bare = (
+      await s.post(`${p}/fixture-types`, {
+        name: "Unknown unit",
+        family: "fresnel",
+        coneMinDeg: 20,
+        coneMaxDeg: 50,
+        peakCandela: 9000,
+        dmxModes: [{ name: "dimmer", footprint: 1 }],
+      })
+    ).json.fixtureType;
     await s.post(`${p}/circuits`, { name: "7", ratingA: 16 });
     await s.post(`${p}/fixtures`, { fixtures: [unit(pos, bare, "1", { circuit: "7" })] });
     const checks = (await s.get(`${p}/checks`)).json.checks;
@@ -89,7 +150,12 @@ describe("power", () => {
     const stale = await s.patch(`${p}/circuits/${c.id}`, { version: c.version, ratingA: 32 });
     expect(stale.status).toBe(409);
     expect(stale.json.error.current.ratingA).toBe(10);
-    const dup = await s.post(`${p}/circuits/batch`, { circuits: [{ name: "10", ratingA: 16 }, { name: "10", ratingA: 16 }] });
+    const dup = await s.post(`${p}/circuits/batch`, {
+      circuits: [
+        { name: "10", ratingA: 16 },
+        { name: "10", ratingA: 16 },
+      ],
+    });
     expect(dup.status).toBe(400);
     expect(dup.json.error.message).toMatch(/Row 2/);
     expect((await s.get(`${p}/circuits`)).json.circuits.map((x: any) => x.name)).toEqual(["9"]);
@@ -101,7 +167,12 @@ describe("DMX", () => {
   it("a 16-slot unit at 500 does not fit; same type and mode at one start is shared; address 0 and 513 are refused at entry", async () => {
     const { s, p, pos, led, profile } = await rigged();
     await s.post(`${p}/fixtures`, {
-      fixtures: [unit(pos, led, "1", { universe: 1, address: 1 }), unit(pos, led, "2", { universe: 1, address: 1 }), unit(pos, profile, "3", { universe: 1, address: 10 }), unit(pos, led, "4", { universe: 1, address: 12 })],
+      fixtures: [
+        unit(pos, led, "1", { universe: 1, address: 1 }),
+        unit(pos, led, "2", { universe: 1, address: 1 }),
+        unit(pos, profile, "3", { universe: 1, address: 10 }),
+        unit(pos, led, "4", { universe: 1, address: 12 }),
+      ],
     });
     const checks = (await s.get(`${p}/checks`)).json.checks;
     expect(checks.dmx.shared).toHaveLength(1); // units 1 and 2: same type, same mode
@@ -117,15 +188,26 @@ describe("DMX", () => {
       expect(r.status, `address ${address}`).toBe(400); // ANSI E1.11: 1–512
       expect(JSON.stringify(r.json.error)).toMatch(/1–512/);
     }
-    const noSlots = await s.post(`${p}/fixtures`, { fixtures: [unit(pos, profile, "7", { universe: 1, address: 100, footprint: 0 })] });
+    const noSlots = await s.post(`${p}/fixtures`, {
+      fixtures: [unit(pos, profile, "7", { universe: 1, address: 100, footprint: 0 })],
+    });
     expect(noSlots.status).toBe(400);
     expect(JSON.stringify(noSlots.json.error)).toMatch(/Footprint must be 1–512 slots/);
-    expect((await s.get(`${p}/fixtures`)).json.fixtures.map((f: any) => f.unitNumber).sort()).toEqual(["1", "2", "3", "4"]); // nothing half-written
+    expect((await s.get(`${p}/fixtures`)).json.fixtures.map((f: any) => f.unitNumber).sort()).toEqual([
+      "1",
+      "2",
+      "3",
+      "4",
+    ]); // nothing half-written
   });
 
   it("data lines: units in order, the 32-device limit, only this production's fixtures", async () => {
     const { s, p, pos, profile } = await rigged();
-    const made = await s.post(`${p}/fixtures`, { fixtures: Array.from({ length: 33 }, (_, i) => unit(pos, profile, String(i + 1), { universe: 1, address: i + 1 })) });
+    const made = await s.post(`${p}/fixtures`, {
+      fixtures: Array.from({ length: 33 }, (_, i) =>
+        unit(pos, profile, String(i + 1), { universe: 1, address: i + 1 }),
+      ),
+    });
     const ids = made.json.fixtures.map((f: any) => f.id);
     const line = await s.post(`${p}/data-lines`, { name: "SL run", universe: 1, fixtureIds: ids.slice(0, 32) });
     expect(line.status).toBe(201);
@@ -146,7 +228,9 @@ describe("rigging", () => {
     const { s, p, pos, profile } = await rigged();
     const { version } = (await s.get(`${p}/checks/settings`)).json.settings;
     await s.patch(`${p}/checks/settings`, { version, cableKgPerM: 1, hardwareKgPerUnit: 1 });
-    await s.post(`${p}/fixtures`, { fixtures: Array.from({ length: 7 }, (_, i) => unit(pos, profile, String(i + 1), { x: -4.5 + i * 1.5 })) });
+    await s.post(`${p}/fixtures`, {
+      fixtures: Array.from({ length: 7 }, (_, i) => unit(pos, profile, String(i + 1), { x: -4.5 + i * 1.5 })),
+    });
     const lift = await s.patch(`${p}/checks/positions/${pos.id}`, { version: pos.version, liftLines: 3 });
     expect(lift.status).toBe(200);
     const checks = (await s.get(`${p}/checks`)).json.checks;
@@ -183,7 +267,11 @@ describe("who may", () => {
   it("the electrician adds circuits", async () => {
     const el = await demoSession("electrician");
     const id = await demoProductionId(el);
-    const r = await el.post(`/api/productions/${id}/circuits`, { name: `E${Date.now() % 100000}`, ratingA: 10, power: "non-dim" });
+    const r = await el.post(`/api/productions/${id}/circuits`, {
+      name: `E${Date.now() % 100000}`,
+      ratingA: 10,
+      power: "non-dim",
+    });
     expect(r.status).toBe(201);
   });
 });

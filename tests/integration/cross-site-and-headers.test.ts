@@ -35,7 +35,11 @@ describe("cross-site writes are refused before they reach a handler", () => {
   it("a server action posted with a foreign Origin is 403, not a 500", async () => {
     const res = await fetch(`${BASE_URL}/sign-in`, {
       method: "POST",
-      headers: { origin: "http://elsewhere.test", "next-action": "0123456789abcdef", "content-type": "text/plain;charset=UTF-8" },
+      headers: {
+        origin: "http://elsewhere.test",
+        "next-action": "0123456789abcdef",
+        "content-type": "text/plain;charset=UTF-8",
+      },
       body: "[]",
     });
     expect(res.status).toBe(403);

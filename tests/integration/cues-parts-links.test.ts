@@ -2,7 +2,7 @@
 // standbys follow them, the files carry them, and the usual rules (roles, 409, 400 by field) hold.
 import { beforeAll, describe, expect, it } from "vitest";
 import ExcelJS from "exceljs";
-import { ApiSession, BASE_URL, demoProductionId, demoSession, freshUser } from "./support/api";
+import { type ApiSession, BASE_URL, demoProductionId, demoSession, freshUser } from "./support/api";
 
 let own: ApiSession;
 let base: string;
@@ -25,9 +25,15 @@ const file = async (format: string) => fetch(`${BASE_URL}${base}/export?format=$
 describe("parts", () => {
   it("are written and read back with the cue, and bump its version", async () => {
     const cue = await create(1, { upTime: 3, levels: { 1: 60, 2: 60, 3: 60 } });
-    const r = await own.patch(`${base}/${cue.id}`, { version: cue.version, parts: [{ part: 2, label: "sky", upTime: "10", downTime: 4, delay: "1:00", channels: [3, 2] }] });
+    const r = await own.patch(`${base}/${cue.id}`, {
+      version: cue.version,
+      parts: [{ part: 2, label: "sky", upTime: "10", downTime: 4, delay: "1:00", channels: [3, 2] }],
+    });
     expect(r.status).toBe(200);
-    expect(r.json.cue).toMatchObject({ version: 2, parts: [{ part: 2, label: "sky", upTime: 10, downTime: 4, delay: 60, channels: [2, 3] }] });
+    expect(r.json.cue).toMatchObject({
+      version: 2,
+      parts: [{ part: 2, label: "sky", upTime: 10, downTime: 4, delay: 60, channels: [2, 3] }],
+    });
     expect((await own.get(`${base}/${cue.id}`)).json.cue.parts).toHaveLength(1);
   });
 
@@ -40,11 +46,16 @@ describe("parts", () => {
   it("refuse bad parts with the field named, writing nothing", async () => {
     const cue = (await own.get(base)).json.cues[0];
     const bad = async (parts: unknown) => own.patch(`${base}/${cue.id}`, { version: cue.version, parts });
-    const twice = await bad([{ part: 1, upTime: 1, channels: [5] }, { part: 2, upTime: 1, channels: [5] }]);
+    const twice = await bad([
+      { part: 1, upTime: 1, channels: [5] },
+      { part: 2, upTime: 1, channels: [5] },
+    ]);
     expect(twice.status).toBe(400);
     expect(twice.json.error.fieldErrors.parts.join(" ")).toMatch(/channel 5 is in part 1 and part 2/);
     expect((await bad([{ part: 21, upTime: 1, channels: [] }])).status).toBe(400);
-    expect((await bad([{ part: 1, upTime: "abc", channels: [] }])).json.error.fieldErrors).toHaveProperty(["parts.0.upTime"]);
+    expect((await bad([{ part: 1, upTime: "abc", channels: [] }])).json.error.fieldErrors).toHaveProperty([
+      "parts.0.upTime",
+    ]);
     expect((await bad([{ part: 1, upTime: 1, channels: [0] }])).status).toBe(400);
     expect((await own.get(`${base}/${cue.id}`)).json.cue).toMatchObject({ version: cue.version, parts: [{ part: 2 }] });
   });
@@ -96,9 +107,20 @@ describe("links", () => {
 
   it("set the running order of the sheet, its standbys and the linked cue's moves", async () => {
     const sheet = (await own.get(`${base}/summary`)).json;
-    expect(sheet.rows.map((r: { number: number; reached: boolean }) => [r.number, r.reached])).toEqual([[10, true], [20, true], [11, false]]);
+    expect(sheet.rows.map((r: { number: number; reached: boolean }) => [r.number, r.reached])).toEqual([
+      [10, true],
+      [20, true],
+      [11, false],
+    ]);
     expect(sheet.standbys[0]).toEqual({ cueIds: [ids[10].id, ids[20].id], label: "10 and 20" });
-    expect(sheet.rows[1]).toMatchObject({ after: 10, linked: true, startsBy: "follow", up: 1, down: 1, runningTime: 6 });
+    expect(sheet.rows[1]).toMatchObject({
+      after: 10,
+      linked: true,
+      startsBy: "follow",
+      up: 1,
+      down: 1,
+      runningTime: 6,
+    });
   });
 
   it("follow a renumber of the linked cue", async () => {

@@ -2,7 +2,7 @@
 // USITT ASCII details (FOLLOWON, delays on UP and DOWN, Hxx levels) are from memory, as REFERENCE.md says.
 import * as mariadb from "mariadb";
 import { beforeAll, describe, expect, it } from "vitest";
-import { ApiSession, demoProductionId, demoSession, freshUser } from "./support/api";
+import { type ApiSession, demoProductionId, demoSession, freshUser } from "./support/api";
 
 let designer: ApiSession;
 let sm: ApiSession;
@@ -50,17 +50,48 @@ describe("reading", () => {
     // moves, from the seeder's formulas with 116 channels: channel 1 + (23k mod 116) at level ((29k) mod 11)·10 for k = 0…5:
     // ch 1 @ 0, 24 @ 70, 47 @ 30, 70 @ 100, 93 @ 60, 116 @ 20. From dark that is 5 channels up and none down,
     // so only the up fade runs: 0 + 5 = 5 s (the 7 s down fade moves nothing). Common practice, no source.
-    expect(cue(0.5)).toMatchObject({ label: "House to half", upTime: 5, downTime: 7, delay: 0, up: 5, down: 0, runningTime: 5 });
+    expect(cue(0.5)).toMatchObject({
+      label: "House to half",
+      upTime: 5,
+      downTime: 7,
+      delay: 0,
+      up: 5,
+      down: 0,
+      runningTime: 5,
+    });
     expect(cue(0.5).summary).toMatch(/^5 up · from dark · brighter: /);
     const list = (await sm.get(base)).json.cues;
-    expect(list.find((c: { number: number }) => c.number === 0.5).levels).toEqual({ 1: 0, 24: 70, 47: 30, 70: 100, 93: 60, 116: 20 });
+    expect(list.find((c: { number: number }) => c.number === 0.5).levels).toEqual({
+      1: 0,
+      24: 70,
+      47: 30,
+      70: 100,
+      93: 60,
+      116: 20,
+    });
     // Cue 1 "Dawn on the harbour" (inserted as i = 2): up 8 s, no down time. The seeder gives levels by the
     // cue's place in number order, j = 1 here (0.5, 1, 1.5, …), for k = 0…6: channel 1 + ((17j + 23k) mod 116)
     // at ((13j + 29k) mod 11)·10 → 18 @ 20, 41 @ 90, 64 @ 50, 87 @ 10, 110 @ 80, 17 @ 40, 40 @ 0. None of these
     // is lit in cue 0.5, so six go up and 40 stays out: 6 up, 0 down, running 0 + 8 = 8 s.
-    expect(cue(1)).toMatchObject({ label: "Dawn on the harbour", upTime: 8, downTime: null, up: 6, down: 0, runningTime: 8, callNote: "Standby on the foghorn" });
+    expect(cue(1)).toMatchObject({
+      label: "Dawn on the harbour",
+      upTime: 8,
+      downTime: null,
+      up: 6,
+      down: 0,
+      runningTime: 8,
+      callNote: "Standby on the foghorn",
+    });
     expect(cue(1).summary).toMatch(/^6 up · brighter: /);
-    expect(list.find((c: { number: number }) => c.number === 1).levels).toEqual({ 17: 40, 18: 20, 40: 0, 41: 90, 64: 50, 87: 10, 110: 80 });
+    expect(list.find((c: { number: number }) => c.number === 1).levels).toEqual({
+      17: 40,
+      18: 20,
+      40: 0,
+      41: 90,
+      64: 50,
+      87: 10,
+      110: 80,
+    });
     // Cue 7 "Lightning" (i = 8) follows on after 2 s, within the 5 s standby window (Throwline's choice), so
     // it and cue 8 are called as one standby; so are cue 16 (i = 17, follow 2 s) and cue 17.
     const groupOf = (n: number) => r.json.standbys.find((g: { cueIds: number[] }) => g.cueIds.includes(cue(n).id));
@@ -98,7 +129,11 @@ describe("writing, by role", () => {
 
   it("lets the stage manager edit a call note and a page, but not a level or a time", async () => {
     const cue = await newCue(902);
-    const ok = await sm.patch(`${base}/${cue.id}`, { version: cue.version, callNote: "GO on the door slam", page: "41" });
+    const ok = await sm.patch(`${base}/${cue.id}`, {
+      version: cue.version,
+      callNote: "GO on the door slam",
+      page: "41",
+    });
     expect(ok.status).toBe(200);
     expect(ok.json.cue).toMatchObject({ callNote: "GO on the door slam", page: "41", version: 2 });
     const level = await sm.patch(`${base}/${cue.id}`, { version: 2, levels: { 5: 80 } });
@@ -167,7 +202,23 @@ describe("renumbering and import in a production of one's own", () => {
     ownBase = `/api/productions/${ownId}/cues`;
   });
 
-  const FILE = ["IDENT 3:0", "CUE 1", "TEXT Opening", "UP 5", "CHAN 1@50 2@FL", "CUE 2", "UP 3 1", "DOWN 8", "FOLLOWON 2", "CHAN 1@0 2@FL 3@H80", "CUE 3", "DOWN 4 2.5", "CHAN 3@40", "ENDDATA", ""].join("\r\n");
+  const FILE = [
+    "IDENT 3:0",
+    "CUE 1",
+    "TEXT Opening",
+    "UP 5",
+    "CHAN 1@50 2@FL",
+    "CUE 2",
+    "UP 3 1",
+    "DOWN 8",
+    "FOLLOWON 2",
+    "CHAN 1@0 2@FL 3@H80",
+    "CUE 3",
+    "DOWN 4 2.5",
+    "CHAN 3@40",
+    "ENDDATA",
+    "",
+  ].join("\r\n");
 
   it("imports a USITT ASCII file, then exports it so it reads back the same", async () => {
     const r = await own.post(`${ownBase}/import`, { text: FILE });
@@ -178,11 +229,24 @@ describe("renumbering and import in a production of one's own", () => {
     // Full-state reading: cue 3 lists only channel 3, so 2 goes out there (an explicit move to 0).
     expect(list[2].levels).toEqual({ 2: 0, 3: 40 });
     // H80 = 128/255 = 50.196 % (from memory), stored as 50; the import says it rounded.
-    expect(list[1]).toMatchObject({ upTime: 3, delay: 1, downDelay: null, downTime: 8, follow: 2, levels: { 1: 0, 3: 50 } });
-    expect(r.json.notices).toContainEqual({ line: 10, message: "1 level was rounded to whole percentages (Throwline keeps whole percentages), the first on line 10: H80 → 50" });
+    expect(list[1]).toMatchObject({
+      upTime: 3,
+      delay: 1,
+      downDelay: null,
+      downTime: 8,
+      follow: 2,
+      levels: { 1: 0, 3: 50 },
+    });
+    expect(r.json.notices).toContainEqual({
+      line: 10,
+      message:
+        "1 level was rounded to whole percentages (Throwline keeps whole percentages), the first on line 10: H80 → 50",
+    });
     // `DOWN 4 2.5` with no delay on UP: the down fade waits 2.5 s on its own; the up fade does not wait.
     expect(list[2]).toMatchObject({ delay: 0, downDelay: 2.5, downTime: 4 });
-    const out = await fetch(`${process.env.APP_URL ?? "http://127.0.0.1:3000"}${ownBase}/export?format=ascii`, { headers: { cookie: own.cookie } });
+    const out = await fetch(`${process.env.APP_URL ?? "http://127.0.0.1:3000"}${ownBase}/export?format=ascii`, {
+      headers: { cookie: own.cookie },
+    });
     const text = await out.text();
     expect(text.startsWith("IDENT 3:0\r\n")).toBe(true);
     expect(text).toContain("\r\nFOLLOWON 2\r\n"); // from memory: the standard's follow keyword
@@ -206,9 +270,18 @@ describe("renumbering and import in a production of one's own", () => {
     const r = await own.post(`${ownBase}/import`, { text: FILE });
     expect(r.status).toBe(200);
     const u = new URL(process.env.DATABASE_URL!);
-    const db = await mariadb.createConnection({ host: u.hostname, port: Number(u.port), user: decodeURIComponent(u.username), password: decodeURIComponent(u.password), database: u.pathname.slice(1) });
+    const db = await mariadb.createConnection({
+      host: u.hostname,
+      port: Number(u.port),
+      user: decodeURIComponent(u.username),
+      password: decodeURIComponent(u.password),
+      database: u.pathname.slice(1),
+    });
     try {
-      const [row] = await db.query("SELECT `before` FROM change_entries WHERE production_id = ? AND entity = 'cue' ORDER BY id DESC LIMIT 1", [ownId]);
+      const [row] = await db.query(
+        "SELECT `before` FROM change_entries WHERE production_id = ? AND entity = 'cue' ORDER BY id DESC LIMIT 1",
+        [ownId],
+      );
       const logged = typeof row.before === "string" ? JSON.parse(row.before) : row.before;
       expect(logged.cues).toBe(before.length);
       const strip = ({ id: _i, version: _v, updatedAt: _u, ...c }: Record<string, unknown>) => c;
@@ -257,7 +330,11 @@ describe("renumbering and import in a production of one's own", () => {
     expect(csv).toContain("'=HYPERLINK(1)"); // OWASP CSV injection: leading = is neutralised
     const xlsx = await fetch(`${url}?format=xlsx`, { headers: { cookie } });
     expect(xlsx.headers.get("content-type")).toMatch(/spreadsheetml/);
-    expect(Buffer.from(await xlsx.arrayBuffer()).subarray(0, 2).toString()).toBe("PK"); // .xlsx is a zip (ECMA-376)
+    expect(
+      Buffer.from(await xlsx.arrayBuffer())
+        .subarray(0, 2)
+        .toString(),
+    ).toBe("PK"); // .xlsx is a zip (ECMA-376)
     expect((await fetch(`${url}?format=pdf`, { headers: { cookie } })).status).toBe(400);
   });
 });

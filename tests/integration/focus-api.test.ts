@@ -7,17 +7,28 @@ import { ApiSession, BASE_URL, DEMO_USERS, demoProductionId, demoSession, freshU
 async function download(s: ApiSession, path: string) {
   const cookie = s.cookie;
   const res = await fetch(BASE_URL + path, { headers: { cookie } });
-  return { status: res.status, type: res.headers.get("content-type") ?? "", sheets: res.headers.get("x-sheet-count"), body: Buffer.from(await res.arrayBuffer()) };
+  return {
+    status: res.status,
+    type: res.headers.get("content-type") ?? "",
+    sheets: res.headers.get("x-sheet-count"),
+    body: Buffer.from(await res.arrayBuffer()),
+  };
 }
 
 describe("focus chart downloads", () => {
   it("the electrician gets one position's charts as a PDF with ceil(n/4) pages", async () => {
     const s = await demoSession("electrician");
     const id = await demoProductionId(s);
-    const fixtures = (await s.get(`/api/productions/${id}/fixtures`)).json.fixtures as Array<{ positionId: number; positionName: string }>;
+    const fixtures = (await s.get(`/api/productions/${id}/fixtures`)).json.fixtures as Array<{
+      positionId: number;
+      positionName: string;
+    }>;
     const boom = fixtures.find((f) => f.positionName === "Boom SL 1")!;
     const count = fixtures.filter((f) => f.positionId === boom.positionId).length;
-    const r = await download(s, `/api/productions/${id}/focus/pdf?position=${boom.positionId}&perPage=4&paper=Letter&tz=Europe/London`);
+    const r = await download(
+      s,
+      `/api/productions/${id}/focus/pdf?position=${boom.positionId}&perPage=4&paper=Letter&tz=Europe/London`,
+    );
     expect(r.status).toBe(200);
     expect(r.type).toBe("application/pdf");
     expect(r.body.subarray(0, 5).toString()).toBe("%PDF-");
@@ -60,7 +71,9 @@ describe("focus chart downloads", () => {
     const ws = wb.getWorksheet("Focus charts")!;
     expect(ws.rowCount).toBe(total + 1);
     const headers = (ws.getRow(1).values as string[]).filter(Boolean);
-    expect(headers).toEqual(expect.arrayContaining(["Position", "Unit", "Focus mark", "Pool at deck", "Cuts", "Status"]));
+    expect(headers).toEqual(
+      expect.arrayContaining(["Position", "Unit", "Focus mark", "Pool at deck", "Cuts", "Status"]),
+    );
   });
 });
 
@@ -68,13 +81,22 @@ describe("focus fields by role", () => {
   it("the electrician marks focused (time and who) and writes as-focused notes, not designer notes", async () => {
     const s = await demoSession("electrician");
     const id = await demoProductionId(s);
-    const f = (await s.get(`/api/productions/${id}/fixtures`)).json.fixtures.find((x: { positionName: string; focused: boolean }) => x.positionName === "3rd Electric" && !x.focused);
-    const marked = await s.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: f.version, focused: true, focusNotes: "Shuttered off the border." });
+    const f = (await s.get(`/api/productions/${id}/fixtures`)).json.fixtures.find(
+      (x: { positionName: string; focused: boolean }) => x.positionName === "3rd Electric" && !x.focused,
+    );
+    const marked = await s.patch(`/api/productions/${id}/fixtures/${f.id}`, {
+      version: f.version,
+      focused: true,
+      focusNotes: "Shuttered off the border.",
+    });
     expect(marked.status).toBe(200);
     expect(marked.json.fixture.focused).toBe(true);
     expect(marked.json.fixture.focusedBy).toBeGreaterThan(0);
     expect(Date.now() - Date.parse(marked.json.fixture.focusedAt)).toBeLessThan(5 * 60_000);
-    const notes = await s.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: marked.json.fixture.version, notes: "designer words" });
+    const notes = await s.patch(`/api/productions/${id}/fixtures/${f.id}`, {
+      version: marked.json.fixture.version,
+      notes: "designer words",
+    });
     expect(notes.status).toBe(403);
     const stale = await s.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: f.version, focused: false });
     expect(stale.status).toBe(409);
@@ -86,7 +108,9 @@ describe("focus fields by role", () => {
       const s = await new ApiSession().signIn(email);
       const id = await demoProductionId(s);
       const f = (await s.get(`/api/productions/${id}/fixtures`)).json.fixtures[0];
-      expect((await s.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: f.version, focused: !f.focused })).status).toBe(403);
+      expect(
+        (await s.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: f.version, focused: !f.focused })).status,
+      ).toBe(403);
     }
   });
 });

@@ -2,18 +2,32 @@
 // and the gobo-rotation and barn-door fields' validation.
 import { describe, expect, it } from "vitest";
 import sharp from "sharp";
-import { ApiSession, demoProductionId, demoSession, freshUser, getBytes, postForm } from "./support/api";
+import { type ApiSession, demoProductionId, demoSession, freshUser, getBytes, postForm } from "./support/api";
 import { makePng } from "../support/png";
 
-type Fx = { id: number; version: number; positionName: string; unitNumber: string; focusPhotoUploadId: number | null; goboRotationDeg: number | null };
+type Fx = {
+  id: number;
+  version: number;
+  positionName: string;
+  unitNumber: string;
+  focusPhotoUploadId: number | null;
+  goboRotationDeg: number | null;
+};
 
 async function boomUnit(s: ApiSession, unit: string) {
   const id = await demoProductionId(s);
-  const f = ((await s.get(`/api/productions/${id}/fixtures`)).json.fixtures as Fx[]).find((x) => x.positionName === "Boom SR 2" && x.unitNumber === unit)!;
+  const f = ((await s.get(`/api/productions/${id}/fixtures`)).json.fixtures as Fx[]).find(
+    (x) => x.positionName === "Boom SR 2" && x.unitNumber === unit,
+  )!;
   return { id, f, photoPath: `/api/productions/${id}/fixtures/${f.id}/photo` };
 }
 
-async function postPhoto(s: ApiSession, path: string, body: Uint8Array, o: { version?: number | string; name?: string; type?: string } = {}) {
+async function postPhoto(
+  s: ApiSession,
+  path: string,
+  body: Uint8Array,
+  o: { version?: number | string; name?: string; type?: string } = {},
+) {
   const form = new FormData();
   form.set("file", new File([body as BlobPart], o.name ?? "deck.png", { type: o.type ?? "image/png" }));
   if (o.version !== undefined) form.set("version", String(o.version));
@@ -29,7 +43,10 @@ describe("focus photo upload", () => {
     const s = await demoSession("electrician");
     const { f, photoPath } = await boomUnit(s, "1");
     // A 2400 × 1200 JPEG tagged EXIF orientation 6 ("rotate 90° clockwise to view", EXIF 2.32 §4.6.4 Table 4).
-    const jpeg = await sharp(makePng(2400, 1200, 100)).jpeg().withMetadata({ orientation: 6 }).toBuffer();
+    const jpeg = await sharp(makePng(2400, 1200, 100))
+      .jpeg()
+      .withMetadata({ orientation: 6 })
+      .toBuffer();
     const r = await postPhoto(s, photoPath, jpeg, { version: f.version, name: "IMG_0042.jpg", type: "image/jpeg" });
     expect(r.status).toBe(201);
     expect(r.json.fixture.focusPhotoUploadId).toEqual(expect.any(Number));
@@ -75,7 +92,11 @@ describe("focus photo upload", () => {
   it("refuses a file that is not an image, a damaged image, an empty file and a missing version; nothing is written", async () => {
     const s = await demoSession("electrician");
     const { f, photoPath } = await boomUnit(s, "3");
-    const text = await postPhoto(s, photoPath, new TextEncoder().encode("just some text, named like a photo"), { version: f.version, name: "photo.jpg", type: "image/jpeg" });
+    const text = await postPhoto(s, photoPath, new TextEncoder().encode("just some text, named like a photo"), {
+      version: f.version,
+      name: "photo.jpg",
+      type: "image/jpeg",
+    });
     expect(text.status).toBe(415);
     expect(text.json.error.message).toMatch(/not a PNG, JPEG or WebP/);
     expect(text.json.error.fieldErrors).toHaveProperty("file");
@@ -124,8 +145,12 @@ describe("focus photo upload", () => {
     const s = await demoSession("electrician");
     const { id, f, photoPath } = await boomUnit(s, "4");
     // The test above leaves a photo here; add one when this test runs on its own.
-    if (f.focusPhotoUploadId == null) expect((await postPhoto(s, photoPath, makePng(64, 48), { version: f.version })).status).toBe(201);
-    const fixtures = (await s.get(`/api/productions/${id}/fixtures`)).json.fixtures as Array<{ positionId: number; id: number }>;
+    if (f.focusPhotoUploadId == null)
+      expect((await postPhoto(s, photoPath, makePng(64, 48), { version: f.version })).status).toBe(201);
+    const fixtures = (await s.get(`/api/productions/${id}/fixtures`)).json.fixtures as Array<{
+      positionId: number;
+      id: number;
+    }>;
     const positionId = fixtures.find((x) => x.id === f.id)!.positionId;
     const res = await getBytes(s, `/api/productions/${id}/focus/pdf?position=${positionId}&perPage=4&paper=A4`);
     expect(res.status).toBe(200);
@@ -165,7 +190,11 @@ describe("gobo rotation and barn doors", () => {
     expect(long.json.error.fieldErrors.barnDoorTop[0]).toMatch(/Barn door \(top\) is at most 60 characters/);
     const ok = await s.patch(path, { version: f.version, barnDoorTop: "in halfway", barnDoorLeft: "to the leg" });
     expect(ok.status).toBe(200);
-    expect(ok.json.fixture).toMatchObject({ barnDoorTop: "in halfway", barnDoorLeft: "to the leg", barnDoorBottom: null });
+    expect(ok.json.fixture).toMatchObject({
+      barnDoorTop: "in halfway",
+      barnDoorLeft: "to the leg",
+      barnDoorBottom: null,
+    });
 
     const viewer = await demoSession("viewer");
     expect((await viewer.patch(path, { version: ok.json.fixture.version, barnDoorTop: "out" })).status).toBe(403);

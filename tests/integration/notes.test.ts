@@ -22,7 +22,12 @@ async function write(s: ApiSession, body: Record<string, unknown>) {
 }
 
 beforeAll(async () => {
-  [designer, electrician, stageManager, viewer] = await Promise.all([demoSession("designer"), demoSession("electrician"), demoSession("stageManager"), demoSession("viewer")]);
+  [designer, electrician, stageManager, viewer] = await Promise.all([
+    demoSession("designer"),
+    demoSession("electrician"),
+    demoSession("stageManager"),
+    demoSession("viewer"),
+  ]);
   base = `/api/productions/${await demoProductionId(designer)}`;
   fixtures = (await designer.get(`${base}/fixtures`)).json.fixtures;
   positions = (await designer.get(`${base}/positions`)).json.positions;
@@ -41,7 +46,9 @@ describe("closing notes by kind", () => {
     expect(note.status).toBe("open");
     const refused = await stageManager.patch(`${base}/notes/${note.id}`, { version: note.version, status: "done" });
     expect(refused.status).toBe(403);
-    expect((await electrician.patch(`${base}/notes/${note.id}`, { version: note.version, status: "done" })).status).toBe(403);
+    expect(
+      (await electrician.patch(`${base}/notes/${note.id}`, { version: note.version, status: "done" })).status,
+    ).toBe(403);
     const done = await designer.patch(`${base}/notes/${note.id}`, { version: note.version, status: "done" });
     expect(done.status).toBe(200);
     expect(done.json.note.status).toBe("done");
@@ -51,9 +58,15 @@ describe("closing notes by kind", () => {
   });
 
   it("a viewer may write a general note but not close it; the stage manager may", async () => {
-    const r = await write(viewer, { subject: "production", kind: "general", body: "Programme credits misspell the board op" });
+    const r = await write(viewer, {
+      subject: "production",
+      kind: "general",
+      body: "Programme credits misspell the board op",
+    });
     expect(r.status).toBe(201);
-    expect((await viewer.patch(`${base}/notes/${r.json.note.id}`, { version: 1, status: "cannot_do" })).status).toBe(403);
+    expect((await viewer.patch(`${base}/notes/${r.json.note.id}`, { version: 1, status: "cannot_do" })).status).toBe(
+      403,
+    );
     const closed = await stageManager.patch(`${base}/notes/${r.json.note.id}`, { version: 1, status: "cannot_do" });
     expect(closed.status).toBe(200);
     // Reopening is closing's twin: the viewer may not, and the row is unchanged.
@@ -61,8 +74,17 @@ describe("closing notes by kind", () => {
   });
 
   it("anyone may move an open note along; a stale version gets 409 with the current row", async () => {
-    const r = await write(viewer, { subject: "fixture", subjectId: fixtures[0].id, kind: "work", body: "Hum from this unit" });
-    const moved = await stageManager.patch(`${base}/notes/${r.json.note.id}`, { version: 1, status: "in_progress", needs: ["access", "isolated"] });
+    const r = await write(viewer, {
+      subject: "fixture",
+      subjectId: fixtures[0].id,
+      kind: "work",
+      body: "Hum from this unit",
+    });
+    const moved = await stageManager.patch(`${base}/notes/${r.json.note.id}`, {
+      version: 1,
+      status: "in_progress",
+      needs: ["access", "isolated"],
+    });
     expect(moved.status).toBe(200);
     expect(moved.json.note.needs).toEqual(["access", "isolated"]);
     const stale = await electrician.patch(`${base}/notes/${r.json.note.id}`, { version: 1, status: "done" });
@@ -96,7 +118,11 @@ describe("current cue", () => {
     const set = await stageManager.request("PUT", `${base}/notes/current-cue`, { cueId: cue.id });
     expect(set.status).toBe(200);
     expect(set.json.currentCue.cueId).toBe(cue.id);
-    const r = await write(electrician, { subject: "production", kind: "focus", body: "Spill on the portal in this state" });
+    const r = await write(electrician, {
+      subject: "production",
+      kind: "focus",
+      body: "Spill on the portal in this state",
+    });
     expect(r.json.note.runningCueId).toBe(cue.id);
     expect(Number(r.json.note.runningCueNumber)).toBe(Number(cue.number));
   });
@@ -111,10 +137,19 @@ describe("work call", () => {
     const mine: number[] = [];
     // Written low first, interleaved, so the order cannot come from the order of writing.
     for (const f of [on(low)[0], on(high)[1], on(low)[1], on(high)[0]]) {
-      const r = await write(designer, { subject: "fixture", subjectId: f.id, kind: "work", body: `Re-gel ${f.unitNumber}` });
+      const r = await write(designer, {
+        subject: "fixture",
+        subjectId: f.id,
+        kind: "work",
+        body: `Re-gel ${f.unitNumber}`,
+      });
       mine.push(r.json.note.id);
     }
-    const stops = (await electrician.get(`${base}/notes/work-call`)).json.stops as Array<{ note: { id: number; version: number }; position: { id: number } | null; height: number }>;
+    const stops = (await electrician.get(`${base}/notes/work-call`)).json.stops as Array<{
+      note: { id: number; version: number };
+      position: { id: number } | null;
+      height: number;
+    }>;
     const ours = stops.filter((s) => mine.includes(s.note.id));
     expect(ours.map((s) => s.position?.id)).toEqual([high.id, high.id, low.id, low.id]);
     // Positions come highest trim first, each visited once.
@@ -125,8 +160,14 @@ describe("work call", () => {
     expect(posOrder.length).toBe(new Set(onRig.map((s) => s.position!.id)).size); // each position visited once
 
     const first = ours[0];
-    expect((await stageManager.patch(`${base}/notes/${first.note.id}`, { version: first.note.version, status: "done" })).status).toBe(403);
-    const done = await electrician.patch(`${base}/notes/${first.note.id}`, { version: first.note.version, status: "done" });
+    expect(
+      (await stageManager.patch(`${base}/notes/${first.note.id}`, { version: first.note.version, status: "done" }))
+        .status,
+    ).toBe(403);
+    const done = await electrician.patch(`${base}/notes/${first.note.id}`, {
+      version: first.note.version,
+      status: "done",
+    });
     expect(done.status).toBe(200);
     const after = (await electrician.get(`${base}/notes/work-call`)).json.stops as Array<{ note: { id: number } }>;
     expect(after.some((s) => s.note.id === first.note.id)).toBe(false);
@@ -137,18 +178,37 @@ describe("channel check", () => {
   it("each faulty fixture becomes an open work note on it; a fixture outside the production refuses the whole check", async () => {
     const [a, b] = fixtures;
     const before = (await designer.get(`${base}/notes`)).json.notes.length;
-    const refused = await electrician.post(`${base}/notes/channel-check`, { results: [{ fixtureId: a.id, result: "faulty" }, { fixtureId: 2_147_483_000, result: "faulty" }] });
+    const refused = await electrician.post(`${base}/notes/channel-check`, {
+      results: [
+        { fixtureId: a.id, result: "faulty" },
+        { fixtureId: 2_147_483_000, result: "faulty" },
+      ],
+    });
     expect(refused.status).toBe(400);
     expect(refused.json.error.fieldErrors["results.1.fixtureId"]).toBeTruthy();
     expect((await designer.get(`${base}/notes`)).json.notes.length).toBe(before);
-    expect((await stageManager.post(`${base}/notes/channel-check`, { results: [{ fixtureId: a.id, result: "good" }] })).status).toBe(403);
+    expect(
+      (await stageManager.post(`${base}/notes/channel-check`, { results: [{ fixtureId: a.id, result: "good" }] }))
+        .status,
+    ).toBe(403);
 
-    const r = await electrician.post(`${base}/notes/channel-check`, { results: [{ fixtureId: a.id, result: "good" }, { fixtureId: b.id, result: "faulty", fault: "no output" }] });
+    const r = await electrician.post(`${base}/notes/channel-check`, {
+      results: [
+        { fixtureId: a.id, result: "good" },
+        { fixtureId: b.id, result: "faulty", fault: "no output" },
+      ],
+    });
     expect(r.status).toBe(201);
     expect([r.json.good, r.json.faulty]).toEqual([1, 1]);
     const note = r.json.notes[0];
     created.push(note.id);
-    expect([note.subject, note.subjectId, note.kind, note.status, note.origin]).toEqual(["fixture", b.id, "work", "open", "channel_check"]);
+    expect([note.subject, note.subjectId, note.kind, note.status, note.origin]).toEqual([
+      "fixture",
+      b.id,
+      "work",
+      "open",
+      "channel_check",
+    ]);
     expect(note.body).toContain("no output");
     const stops = (await electrician.get(`${base}/notes/work-call`)).json.stops as Array<{ note: { id: number } }>;
     expect(stops.some((s) => s.note.id === note.id)).toBe(true);
@@ -157,11 +217,28 @@ describe("channel check", () => {
 
 describe("what lights this spot", () => {
   it("ranks the units reaching a lit unit's focus in a cue, largest first, shares adding to one", async () => {
-    const cues = (await designer.get(`${base}/cues`)).json.cues as Array<{ id: number; levels: Record<string, number> }>;
+    const cues = (await designer.get(`${base}/cues`)).json.cues as Array<{
+      id: number;
+      levels: Record<string, number>;
+    }>;
     const cue = cues.find((c) => Object.values(c.levels).some((l) => l > 0)) ?? cues[0];
-    const all = (await designer.get(`${base}/fixtures`)).json.fixtures as Array<{ channel: number | null; focusX: number | null; focusY: number | null; focusPointId: number | null }>;
-    const points = new Map(((await designer.get(`${base}/focus-points`)).json.focusPoints as Array<{ id: number; x: number; y: number }>).map((p) => [p.id, p]));
-    const markOf = (f: (typeof all)[number]) => (f.focusPointId != null ? points.get(f.focusPointId) : f.focusX != null && f.focusY != null ? { x: f.focusX, y: f.focusY } : undefined);
+    const all = (await designer.get(`${base}/fixtures`)).json.fixtures as Array<{
+      channel: number | null;
+      focusX: number | null;
+      focusY: number | null;
+      focusPointId: number | null;
+    }>;
+    const points = new Map(
+      (
+        (await designer.get(`${base}/focus-points`)).json.focusPoints as Array<{ id: number; x: number; y: number }>
+      ).map((p) => [p.id, p]),
+    );
+    const markOf = (f: (typeof all)[number]) =>
+      f.focusPointId != null
+        ? points.get(f.focusPointId)
+        : f.focusX != null && f.focusY != null
+          ? { x: f.focusX, y: f.focusY }
+          : undefined;
     const lit = all.find((f) => f.channel != null && (cue.levels?.[f.channel] ?? 0) > 0 && markOf(f));
     const mark = lit ? markOf(lit)! : { x: 0, y: 2 };
     const r = await viewer.post(`${base}/notes/spot`, { x: mark.x, y: mark.y, cueId: cue.id });
@@ -171,7 +248,8 @@ describe("what lights this spot", () => {
     if (lit) expect(lux.length).toBeGreaterThan(0);
     expect(lux).toEqual([...lux].sort((a, b) => b - a));
     expect(lux.reduce((s, v) => s + v, 0)).toBeCloseTo(r.json.total, 6);
-    if (lux.length) expect((r.json.contributions as Array<{ share: number }>).reduce((s, c) => s + c.share, 0)).toBeCloseTo(1, 9);
+    if (lux.length)
+      expect((r.json.contributions as Array<{ share: number }>).reduce((s, c) => s + c.share, 0)).toBeCloseTo(1, 9);
     expect((await viewer.post(`${base}/notes/spot`, { x: "centre", y: 0 })).status).toBe(400);
   });
 });
@@ -184,7 +262,9 @@ describe("show reports", () => {
     const designerId = members.find((m) => m.role === "designer")?.userId;
     const unit = fixtures[2];
     const body = {
-      performance: "Matinee 2", performedOn: "2026-12-05", summary: "Smooth; one unit dark.",
+      performance: "Matinee 2",
+      performedOn: "2026-12-05",
+      summary: "Smooth; one unit dark.",
       items: [
         { body: "Cue 30 fade felt slow", kind: "cue", subject: "production" },
         { body: "Boom base rattles on the revolve", kind: "work", subject: "fixture", subjectId: unit.id },
@@ -193,13 +273,24 @@ describe("show reports", () => {
     };
     expect((await electrician.post(`${base}/notes/show-reports`, body)).status).toBe(403);
     const before = (await designer.get(`${base}/notes`)).json.notes.length;
-    const bad = await stageManager.post(`${base}/notes/show-reports`, { ...body, faults: [{ fixtureId: 2_147_483_000, kind: "fault", description: "x" }] });
+    const bad = await stageManager.post(`${base}/notes/show-reports`, {
+      ...body,
+      faults: [{ fixtureId: 2_147_483_000, kind: "fault", description: "x" }],
+    });
     expect(bad.status).toBe(400);
     expect(bad.json.error.fieldErrors["faults.0.fixtureId"]).toBeTruthy();
-    const badItem = await stageManager.post(`${base}/notes/show-reports`, { ...body, items: [{ body: "x", kind: "work", subject: "fixture", subjectId: 2_147_483_000 }] });
+    const badItem = await stageManager.post(`${base}/notes/show-reports`, {
+      ...body,
+      items: [{ body: "x", kind: "work", subject: "fixture", subjectId: 2_147_483_000 }],
+    });
     expect(badItem.status).toBe(400);
     expect((await designer.get(`${base}/notes`)).json.notes.length).toBe(before);
-    expect((await designer.get(`${base}/notes/show-reports`)).json.showReports.some((r: { performance: string; summary: string }) => r.summary === "Smooth; one unit dark." && r.performance === "Matinee 2")).toBe(false);
+    expect(
+      (await designer.get(`${base}/notes/show-reports`)).json.showReports.some(
+        (r: { performance: string; summary: string }) =>
+          r.summary === "Smooth; one unit dark." && r.performance === "Matinee 2",
+      ),
+    ).toBe(false);
 
     const r = await stageManager.post(`${base}/notes/show-reports`, body);
     expect(r.status).toBe(201);
@@ -209,7 +300,9 @@ describe("show reports", () => {
     if (designerId) expect(cueNote.ownerId).toBe(designerId);
     if (electricianId) expect([workNote.ownerId, lampNote.ownerId]).toEqual([electricianId, electricianId]);
     expect([lampNote.kind, lampNote.subjectId, lampNote.status]).toEqual(["work", unit.id, "open"]);
-    expect(r.json.report.faults).toEqual([expect.objectContaining({ fixtureId: unit.id, kind: "lamp_out", description: "dark all second half" })]);
+    expect(r.json.report.faults).toEqual([
+      expect.objectContaining({ fixtureId: unit.id, kind: "lamp_out", description: "dark all second half" }),
+    ]);
     const stops = (await electrician.get(`${base}/notes/work-call`)).json.stops as Array<{ note: { id: number } }>;
     expect(stops.some((s) => s.note.id === lampNote.id)).toBe(true);
     // One e-mail to each member of the team, sent or queued for retry.

@@ -1,6 +1,6 @@
 // The plot's own routes: acting areas, landmarks, underlay uploads, the change token; and the role rules.
 import { describe, expect, it } from "vitest";
-import { ApiSession, BASE_URL, demoProductionId, demoSession, freshUser } from "./support/api";
+import { type ApiSession, BASE_URL, demoProductionId, demoSession, freshUser } from "./support/api";
 import { DEMO_FIXTURE_COUNT } from "../support/demo";
 import { makePng } from "../support/png";
 import { fromPlotFixtureWire } from "@/lib/plot/slim-fixtures";
@@ -14,22 +14,37 @@ async function ownProduction() {
 async function upload(s: ApiSession, id: number, bytes: Uint8Array, name: string, type = "image/png") {
   const form = new FormData();
   form.set("file", new Blob([bytes as unknown as ArrayBuffer], { type }), name);
-  const res = await fetch(`${BASE_URL}/api/productions/${id}/uploads`, { method: "POST", body: form, headers: { cookie: s.cookie } });
+  const res = await fetch(`${BASE_URL}/api/productions/${id}/uploads`, {
+    method: "POST",
+    body: form,
+    headers: { cookie: s.cookie },
+  });
   return { status: res.status, json: await res.json() };
 }
 
 describe("acting areas", () => {
   it("creates, lists, updates with a version, 409s a stale write, deletes", async () => {
     const { s, id } = await ownProduction();
-    const polygon = [{ x: -2, y: 1 }, { x: 2, y: 1 }, { x: 2, y: 4 }, { x: -2, y: 4 }];
+    const polygon = [
+      { x: -2, y: 1 },
+      { x: 2, y: 1 },
+      { x: 2, y: 4 },
+      { x: -2, y: 4 },
+    ];
     const made = await s.post(`/api/productions/${id}/area-zones`, { name: "Centre", polygon });
     expect(made.status).toBe(201);
     const zone = made.json.areaZone;
     expect(zone.polygon).toEqual(polygon);
     expect((await s.get(`/api/productions/${id}/area-zones`)).json.areaZones).toHaveLength(1);
-    const renamed = await s.patch(`/api/productions/${id}/area-zones/${zone.id}`, { version: zone.version, name: "Centre stage" });
+    const renamed = await s.patch(`/api/productions/${id}/area-zones/${zone.id}`, {
+      version: zone.version,
+      name: "Centre stage",
+    });
     expect(renamed.json.areaZone.name).toBe("Centre stage");
-    const stale = await s.patch(`/api/productions/${id}/area-zones/${zone.id}`, { version: zone.version, name: "Nope" });
+    const stale = await s.patch(`/api/productions/${id}/area-zones/${zone.id}`, {
+      version: zone.version,
+      name: "Nope",
+    });
     expect(stale.status).toBe(409);
     expect(stale.json.error.current.name).toBe("Centre stage");
     expect((await s.request("DELETE", `/api/productions/${id}/area-zones/${zone.id}`)).status).toBe(200);
@@ -38,7 +53,13 @@ describe("acting areas", () => {
 
   it("names the field for bad input and saves nothing", async () => {
     const { s, id } = await ownProduction();
-    const r = await s.post(`/api/productions/${id}/area-zones`, { name: "", polygon: [{ x: 0, y: 0 }, { x: 500, y: "a" }] });
+    const r = await s.post(`/api/productions/${id}/area-zones`, {
+      name: "",
+      polygon: [
+        { x: 0, y: 0 },
+        { x: 500, y: "a" },
+      ],
+    });
     expect(r.status).toBe(400);
     expect(Object.keys(r.json.error.fieldErrors)).toEqual(expect.arrayContaining(["name", "polygon"]));
     expect((await s.get(`/api/productions/${id}/area-zones`)).json.areaZones).toHaveLength(0);
@@ -71,22 +92,46 @@ describe("underlay uploads", () => {
     expect(file.headers.get("content-type")).toBe("image/png");
     // What is served is the stored copy sharp wrote again (tests/integration/underlay-decode.test.ts).
     expect((await file.arrayBuffer()).byteLength).toBe(u.sizeBytes);
-    const cal = await s.patch(`/api/productions/${id}/uploads/${u.id}`, { version: u.version, metresPerPixel: 0.05, offsetX: -3, offsetY: 4, opacity: 0.3, locked: true });
+    const cal = await s.patch(`/api/productions/${id}/uploads/${u.id}`, {
+      version: u.version,
+      metresPerPixel: 0.05,
+      offsetX: -3,
+      offsetY: 4,
+      opacity: 0.3,
+      locked: true,
+    });
     expect(cal.status).toBe(200);
-    expect(cal.json.upload).toMatchObject({ metresPerPixel: 0.05, offsetX: -3, offsetY: 4, opacity: 0.3, locked: true });
-    const moveLocked = await s.patch(`/api/productions/${id}/uploads/${u.id}`, { version: cal.json.upload.version, offsetX: 1 });
+    expect(cal.json.upload).toMatchObject({
+      metresPerPixel: 0.05,
+      offsetX: -3,
+      offsetY: 4,
+      opacity: 0.3,
+      locked: true,
+    });
+    const moveLocked = await s.patch(`/api/productions/${id}/uploads/${u.id}`, {
+      version: cal.json.upload.version,
+      offsetX: 1,
+    });
     expect(moveLocked.status).toBe(400);
     expect(moveLocked.json.error.fieldErrors).toHaveProperty("offsetX");
     const stale = await s.patch(`/api/productions/${id}/uploads/${u.id}`, { version: u.version, opacity: 0.9 });
     expect(stale.status).toBe(409);
-    const bad = await s.patch(`/api/productions/${id}/uploads/${u.id}`, { version: cal.json.upload.version, opacity: 2 });
+    const bad = await s.patch(`/api/productions/${id}/uploads/${u.id}`, {
+      version: cal.json.upload.version,
+      opacity: 2,
+    });
     expect(bad.status).toBe(400);
     expect(bad.json.error.fieldErrors).toHaveProperty("opacity");
   });
 
   it("refuses a file that only claims to be a PNG, with a clear message", async () => {
     const { s, id } = await ownProduction();
-    const r = await upload(s, id, new TextEncoder().encode("<svg xmlns='http://www.w3.org/2000/svg'></svg>"), "sneaky.png");
+    const r = await upload(
+      s,
+      id,
+      new TextEncoder().encode("<svg xmlns='http://www.w3.org/2000/svg'></svg>"),
+      "sneaky.png",
+    );
     expect(r.status).toBe(415);
     expect(r.json.error.message).toMatch(/not a PNG, JPEG or WebP/);
     expect((await s.get(`/api/productions/${id}/uploads`)).json.uploads).toHaveLength(0);
@@ -116,10 +161,27 @@ describe("roles on the plot", () => {
     expect(plot.json.fixtures.length).toBe(rig.length);
     expect(typeof plot.json.stamp).toBe("string");
     const f = plot.json.fixtures[0];
-    const focus = await electrician.patch(`/api/productions/${id}/fixtures/${f.id}`, { version: f.version, focusX: 1, focusY: 2 });
+    const focus = await electrician.patch(`/api/productions/${id}/fixtures/${f.id}`, {
+      version: f.version,
+      focusX: 1,
+      focusY: 2,
+    });
     expect(focus.status).toBe(403);
-    expect((await electrician.post(`/api/productions/${id}/area-zones`, { name: "X", polygon: [{ x: 0, y: 0 }, { x: 1, y: 0 }, { x: 1, y: 1 }] })).status).toBe(403);
-    expect((await viewer.post(`/api/productions/${id}/landmarks`, { name: "lip", x1: 0, y1: 0, x2: 1, y2: 0 })).status).toBe(403);
+    expect(
+      (
+        await electrician.post(`/api/productions/${id}/area-zones`, {
+          name: "X",
+          polygon: [
+            { x: 0, y: 0 },
+            { x: 1, y: 0 },
+            { x: 1, y: 1 },
+          ],
+        })
+      ).status,
+    ).toBe(403);
+    expect(
+      (await viewer.post(`/api/productions/${id}/landmarks`, { name: "lip", x1: 0, y1: 0, x2: 1, y2: 0 })).status,
+    ).toBe(403);
     const { session: outsider } = await freshUser("outsider");
     expect((await outsider.get(`/api/productions/${id}/plot`)).status).toBe(404);
     expect((await upload(outsider, id, makePng(4, 4), "x.png")).status).toBe(404);

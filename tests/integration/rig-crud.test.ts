@@ -1,6 +1,6 @@
 // Positions, focus points, fixture types and fixtures through the route handlers.
 import { describe, expect, it } from "vitest";
-import { ApiSession, demoProductionId, demoSession, freshUser } from "./support/api";
+import { demoProductionId, demoSession, freshUser } from "./support/api";
 
 async function ownProduction() {
   const { session } = await freshUser("rig");
@@ -11,7 +11,15 @@ async function ownProduction() {
 describe("positions", () => {
   it("creates, renames with a version, and answers a stale rename with 409", async () => {
     const { s, id } = await ownProduction();
-    const created = await s.post(`/api/productions/${id}/positions`, { name: "1st Electric", kind: "overhead-pipe", x1: -6, y1: 1, x2: 6, y2: 1, trimHeight: 7 });
+    const created = await s.post(`/api/productions/${id}/positions`, {
+      name: "1st Electric",
+      kind: "overhead-pipe",
+      x1: -6,
+      y1: 1,
+      x2: 6,
+      y2: 1,
+      trimHeight: 7,
+    });
     expect(created.status).toBe(201);
     const pos = created.json.position;
     const renamed = await s.patch(`/api/productions/${id}/positions/${pos.id}`, { version: pos.version, name: "LX1" });
@@ -23,7 +31,13 @@ describe("positions", () => {
 
   it("refuses a negative trim and an unknown kind, naming the fields", async () => {
     const { s, id } = await ownProduction();
-    const r = await s.post(`/api/productions/${id}/positions`, { name: "Bad", kind: "rafter", x1: 0, y1: 0, trimHeight: -1 });
+    const r = await s.post(`/api/productions/${id}/positions`, {
+      name: "Bad",
+      kind: "rafter",
+      x1: 0,
+      y1: 0,
+      trimHeight: -1,
+    });
     expect(r.status).toBe(400);
     expect(Object.keys(r.json.error.fieldErrors)).toEqual(expect.arrayContaining(["kind", "trimHeight"]));
   });
@@ -40,7 +54,13 @@ describe("positions", () => {
   it("does not let the electrician draw positions", async () => {
     const el = await demoSession("electrician");
     const id = await demoProductionId(el);
-    const r = await el.post(`/api/productions/${id}/positions`, { name: "Rogue", kind: "boom", x1: 0, y1: 0, trimHeight: 3 });
+    const r = await el.post(`/api/productions/${id}/positions`, {
+      name: "Rogue",
+      kind: "boom",
+      x1: 0,
+      y1: 0,
+      trimHeight: 3,
+    });
     expect(r.status).toBe(403);
   });
 });
@@ -48,9 +68,26 @@ describe("positions", () => {
 describe("fixtures on a position", () => {
   it("hangs fixtures, aims them at a focus point, and moving the point moves every mark", async () => {
     const { s, id } = await ownProduction();
-    const pos = (await s.post(`/api/productions/${id}/positions`, { name: "FOH", kind: "foh-bridge", x1: -4, y1: -8, x2: 4, y2: -8, trimHeight: 8 })).json.position;
+    const pos = (
+      await s.post(`/api/productions/${id}/positions`, {
+        name: "FOH",
+        kind: "foh-bridge",
+        x1: -4,
+        y1: -8,
+        x2: 4,
+        y2: -8,
+        trimHeight: 8,
+      })
+    ).json.position;
     const type = (
-      await s.post(`/api/productions/${id}/fixture-types`, { name: "Profile 26", family: "profile", coneMinDeg: 26, coneMaxDeg: 26, peakCandela: 40000, dmxModes: [{ name: "dimmer", footprint: 1 }] })
+      await s.post(`/api/productions/${id}/fixture-types`, {
+        name: "Profile 26",
+        family: "profile",
+        coneMinDeg: 26,
+        coneMaxDeg: 26,
+        peakCandela: 40000,
+        dmxModes: [{ name: "dimmer", footprint: 1 }],
+      })
     ).json.fixtureType;
     const point = (await s.post(`/api/productions/${id}/focus-points`, { name: "Area 1", x: 0, y: 2 })).json.focusPoint;
     const hung = await s.post(`/api/productions/${id}/fixtures`, {
@@ -69,8 +106,27 @@ describe("fixtures on a position", () => {
 
   it("refuses a duplicate unit number on a position and writes none of the batch", async () => {
     const { s, id } = await ownProduction();
-    const pos = (await s.post(`/api/productions/${id}/positions`, { name: "LX2", kind: "overhead-pipe", x1: -4, y1: 3, x2: 4, y2: 3, trimHeight: 7 })).json.position;
-    const type = (await s.post(`/api/productions/${id}/fixture-types`, { name: "Wash", family: "fresnel", coneMinDeg: 15, coneMaxDeg: 60, peakCandela: 20000, dmxModes: [{ name: "dimmer", footprint: 1 }] })).json.fixtureType;
+    const pos = (
+      await s.post(`/api/productions/${id}/positions`, {
+        name: "LX2",
+        kind: "overhead-pipe",
+        x1: -4,
+        y1: 3,
+        x2: 4,
+        y2: 3,
+        trimHeight: 7,
+      })
+    ).json.position;
+    const type = (
+      await s.post(`/api/productions/${id}/fixture-types`, {
+        name: "Wash",
+        family: "fresnel",
+        coneMinDeg: 15,
+        coneMaxDeg: 60,
+        peakCandela: 20000,
+        dmxModes: [{ name: "dimmer", footprint: 1 }],
+      })
+    ).json.fixtureType;
     const r = await s.post(`/api/productions/${id}/fixtures`, {
       fixtures: [
         { positionId: pos.id, fixtureTypeId: type.id, unitNumber: "7", x: 0, y: 3 },
@@ -83,7 +139,14 @@ describe("fixtures on a position", () => {
 
   it("refuses a type's cone range that runs backwards", async () => {
     const { s, id } = await ownProduction();
-    const r = await s.post(`/api/productions/${id}/fixture-types`, { name: "Odd", family: "profile", coneMinDeg: 50, coneMaxDeg: 25, peakCandela: 1000, dmxModes: [{ name: "d", footprint: 1 }] });
+    const r = await s.post(`/api/productions/${id}/fixture-types`, {
+      name: "Odd",
+      family: "profile",
+      coneMinDeg: 50,
+      coneMaxDeg: 25,
+      peakCandela: 1000,
+      dmxModes: [{ name: "d", footprint: 1 }],
+    });
     expect(r.status).toBe(400);
     expect(r.json.error.fieldErrors).toHaveProperty("coneMinDeg");
   });
@@ -92,10 +155,32 @@ describe("fixtures on a position", () => {
 describe("deleting plan objects", () => {
   async function smallRig() {
     const { s, id } = await ownProduction();
-    const pos = (await s.post(`/api/productions/${id}/positions`, { name: "LX3", kind: "overhead-pipe", x1: -4, y1: 5, x2: 4, y2: 5, trimHeight: 7 })).json.position;
-    const type = (await s.post(`/api/productions/${id}/fixture-types`, { name: "Par", family: "par", coneMinDeg: 30, coneMaxDeg: 30, peakCandela: 9000, dmxModes: [{ name: "dimmer", footprint: 1 }] })).json.fixtureType;
-    const point = (await s.post(`/api/productions/${id}/focus-points`, { name: "Area 9", x: 1.5, y: 3 })).json.focusPoint;
-    await s.post(`/api/productions/${id}/fixtures`, { fixtures: [{ positionId: pos.id, fixtureTypeId: type.id, unitNumber: "1", x: 0, y: 5, focusPointId: point.id }] });
+    const pos = (
+      await s.post(`/api/productions/${id}/positions`, {
+        name: "LX3",
+        kind: "overhead-pipe",
+        x1: -4,
+        y1: 5,
+        x2: 4,
+        y2: 5,
+        trimHeight: 7,
+      })
+    ).json.position;
+    const type = (
+      await s.post(`/api/productions/${id}/fixture-types`, {
+        name: "Par",
+        family: "par",
+        coneMinDeg: 30,
+        coneMaxDeg: 30,
+        peakCandela: 9000,
+        dmxModes: [{ name: "dimmer", footprint: 1 }],
+      })
+    ).json.fixtureType;
+    const point = (await s.post(`/api/productions/${id}/focus-points`, { name: "Area 9", x: 1.5, y: 3 })).json
+      .focusPoint;
+    await s.post(`/api/productions/${id}/fixtures`, {
+      fixtures: [{ positionId: pos.id, fixtureTypeId: type.id, unitNumber: "1", x: 0, y: 5, focusPointId: point.id }],
+    });
     return { s, id, pos, type, point };
   }
 
@@ -120,7 +205,11 @@ describe("deleting plan objects", () => {
 
   it("words a duplicate name with the right article", async () => {
     const { s, id } = await ownProduction();
-    const polygon = [{ x: 0, y: 0 }, { x: 1, y: 0 }, { x: 1, y: 1 }];
+    const polygon = [
+      { x: 0, y: 0 },
+      { x: 1, y: 0 },
+      { x: 1, y: 1 },
+    ];
     expect((await s.post(`/api/productions/${id}/area-zones`, { name: "DSC", polygon })).status).toBe(201);
     const again = await s.post(`/api/productions/${id}/area-zones`, { name: "DSC", polygon });
     expect(again.status).toBe(400);

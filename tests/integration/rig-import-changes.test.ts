@@ -8,15 +8,31 @@ let db: mariadb.Connection;
 
 beforeAll(async () => {
   const u = new URL(process.env.DATABASE_URL!);
-  db = await mariadb.createConnection({ host: u.hostname, port: Number(u.port), user: decodeURIComponent(u.username), password: decodeURIComponent(u.password), database: u.pathname.slice(1) });
+  db = await mariadb.createConnection({
+    host: u.hostname,
+    port: Number(u.port),
+    user: decodeURIComponent(u.username),
+    password: decodeURIComponent(u.password),
+    database: u.pathname.slice(1),
+  });
 });
 afterAll(() => db?.end());
 
-type Entry = { entity: string; entity_id: number; action: string; before: Record<string, unknown> | null; after: Record<string, unknown> | null; user_id: number };
+type Entry = {
+  entity: string;
+  entity_id: number;
+  action: string;
+  before: Record<string, unknown> | null;
+  after: Record<string, unknown> | null;
+  user_id: number;
+};
 const asJson = (v: unknown) => (typeof v === "string" ? JSON.parse(v) : v);
 
 async function fixtureChanges(productionId: number): Promise<Entry[]> {
-  const rows = await db.query("SELECT entity, entity_id, action, `before`, `after`, user_id FROM change_entries WHERE production_id = ? AND entity = 'fixture' ORDER BY id", [productionId]);
+  const rows = await db.query(
+    "SELECT entity, entity_id, action, `before`, `after`, user_id FROM change_entries WHERE production_id = ? AND entity = 'fixture' ORDER BY id",
+    [productionId],
+  );
   return rows.map((r: Entry) => ({ ...r, before: asJson(r.before), after: asJson(r.after) }));
 }
 
@@ -32,7 +48,13 @@ describe("an import's change records", () => {
       const entry = created.find((e) => e.entity_id === f.id)!;
       expect(entry.action).toBe("create");
       expect(entry.before).toBeNull();
-      expect(entry.after).toMatchObject({ id: f.id, unitNumber: f.unitNumber, channel: f.channel, colour: f.colour, version: 1 });
+      expect(entry.after).toMatchObject({
+        id: f.id,
+        unitNumber: f.unitNumber,
+        channel: f.channel,
+        colour: f.colour,
+        version: 1,
+      });
       expect(entry.after).not.toHaveProperty("notes"); // left empty by the file, so not written into the record
     }
 
@@ -43,7 +65,11 @@ describe("an import's change records", () => {
     const unit2 = made.find((f) => f.unitNumber === "2");
     const updates = (await fixtureChanges(id)).filter((e) => e.action === "update");
     expect(updates).toHaveLength(1);
-    expect(updates[0]).toMatchObject({ entity_id: unit2.id, before: { colour: "pale amber" }, after: { id: unit2.id, colour: "deep blue", version: unit2.version + 1 } });
+    expect(updates[0]).toMatchObject({
+      entity_id: unit2.id,
+      before: { colour: "pale amber" },
+      after: { id: unit2.id, colour: "deep blue", version: unit2.version + 1 },
+    });
     expect(updates[0].after).not.toHaveProperty("channel");
   });
 });

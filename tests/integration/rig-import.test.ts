@@ -1,6 +1,6 @@
 // The import matrix against the real MariaDB, through the route handler.
 import { describe, expect, it } from "vitest";
-import { ApiSession, demoProductionId, demoSession, freshUser } from "./support/api";
+import { demoProductionId, demoSession, freshUser } from "./support/api";
 import { fixturesOf, rigProduction, upload, xlsxBytes } from "./support/rig";
 
 const preview = { mode: "preview" };
@@ -10,25 +10,40 @@ describe("real-world CSV files", () => {
   it("reads a BOM, semicolons, CRLF, quoted line breaks, empty rows, feet and inches and numbers as text", async () => {
     const { s, id } = await rigProduction();
     const csv =
-      '\ufeffPosition;Unit;Type;Channel;Address;Lens height;X;Notes\r\n' +
+      "\ufeffPosition;Unit;Type;Channel;Address;Lens height;X;Notes\r\n" +
       'LX1;1;Profile 26;"0101";1;21\' 4";-2,5;"check frame; tight\r\nsecond line"\r\n' +
-      ';;;;;;;\r\n\r\n' +
-      'lx1;2;profile 26;102;2;6.5 m;2.5;\r\n';
+      ";;;;;;;\r\n\r\n" +
+      "lx1;2;profile 26;102;2;6.5 m;2.5;\r\n";
     const p = await upload(s, id, { name: "rig.csv", body: csv }, preview);
     expect(p.status).toBe(200);
-    expect(p.json.preview).toMatchObject({ rowCount: 2, errorCount: 0, counts: { create: 2, update: 0, unchanged: 0 } });
+    expect(p.json.preview).toMatchObject({
+      rowCount: 2,
+      errorCount: 0,
+      counts: { create: 2, update: 0, unchanged: 0 },
+    });
     const c = await upload(s, id, { name: "rig.csv", body: csv }, commit);
     expect(c.status).toBe(200);
     const fx = await fixturesOf(s, id);
     const one = fx.find((f) => f.unitNumber === "1");
-    expect(one).toMatchObject({ channel: 101, address: 1, x: -2.5, notes: "check frame; tight\r\nsecond line", positionName: "LX1" });
+    expect(one).toMatchObject({
+      channel: 101,
+      address: 1,
+      x: -2.5,
+      notes: "check frame; tight\r\nsecond line",
+      positionName: "LX1",
+    });
     expect(one.lensHeight).toBeCloseTo(21 * 0.3048 + 4 * 0.0254, 12); // NIST SP 811: 1 ft = 0.3048 m, 1 in = 0.0254 m
     expect(fx.find((f) => f.unitNumber === "2").lensHeight).toBe(6.5);
   });
 
   it("renames duplicated headers, says so, and maps the first copy", async () => {
     const { s, id } = await rigProduction();
-    const r = await upload(s, id, { name: "dup.csv", body: "Position,Unit,Type,Colour,Colour\nLX1,5,Profile 26,pale blue,straw\n" }, preview);
+    const r = await upload(
+      s,
+      id,
+      { name: "dup.csv", body: "Position,Unit,Type,Colour,Colour\nLX1,5,Profile 26,pale blue,straw\n" },
+      preview,
+    );
     expect(r.json.preview.headers).toEqual(["Position", "Unit", "Type", "Colour", "Colour (2)"]);
     expect(r.json.preview.mapping).toEqual(["position", "unitNumber", "type", "colour", "ignore"]);
     expect(r.json.preview.notes[0]).toMatch(/more than once/);
@@ -57,10 +72,18 @@ describe("workbooks", () => {
       ws.mergeCells("A2:A3");
     });
     const p = await upload(s, id, { name: "tour.xlsx", body }, preview);
-    expect(p.json.preview).toMatchObject({ sheet: "Hang", sheetNames: ["Notes", "Hang"], errorCount: 0, counts: { create: 2 } });
+    expect(p.json.preview).toMatchObject({
+      sheet: "Hang",
+      sheetNames: ["Notes", "Hang"],
+      errorCount: 0,
+      counts: { create: 2 },
+    });
     await upload(s, id, { name: "tour.xlsx", body }, commit);
     const fx = await fixturesOf(s, id);
-    expect(fx.map((f) => [f.positionName, f.unitNumber, f.circuit, f.coneDeg])).toEqual([["LX1", "1", "A12", 26], ["LX1", "2", "14", 19]]);
+    expect(fx.map((f) => [f.positionName, f.unitNumber, f.circuit, f.coneDeg])).toEqual([
+      ["LX1", "1", "A12", 26],
+      ["LX1", "2", "14", 19],
+    ]);
   });
 
   it("reads a sheet the user names, and refuses a name that is not there", async () => {
@@ -82,10 +105,20 @@ describe("files that are not what they say", () => {
     const empty = await upload(s, id, { name: "empty.csv", body: "" }, preview);
     expect(empty.status).toBe(400);
     expect(empty.json.error.message).toMatch(/empty/);
-    const png = await upload(s, id, { name: "photo.csv", body: new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13]) }, preview);
+    const png = await upload(
+      s,
+      id,
+      { name: "photo.csv", body: new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13]) },
+      preview,
+    );
     expect(png.status).toBe(400);
     expect(png.json.error.message).toMatch(/binary/);
-    const xls = await upload(s, id, { name: "old.csv", body: new Uint8Array([0xd0, 0xcf, 0x11, 0xe0, 0xa1, 0xb1, 0x1a, 0xe1]) }, preview);
+    const xls = await upload(
+      s,
+      id,
+      { name: "old.csv", body: new Uint8Array([0xd0, 0xcf, 0x11, 0xe0, 0xa1, 0xb1, 0x1a, 0xe1]) },
+      preview,
+    );
     expect(xls.json.error.message).toMatch(/\.xls/);
     const big = await upload(s, id, { name: "huge.csv", body: "x".repeat(9 * 1024 * 1024) }, preview);
     expect(big.status).toBe(413);
@@ -98,7 +131,15 @@ describe("files that are not what they say", () => {
 describe("row errors and all-or-nothing", () => {
   it("lists every bad row with its column, and a commit with any error writes nothing", async () => {
     const { s, id } = await rigProduction();
-    const csv = ["Position,Unit,Type,Address,Hung,Lens height", "LX1,1,Profile 26,1,yes,6", "LX1,2,Profile 26,513,yes,6", "LX1,3,Profile 26,4,perhaps,6", "LX1,4,Profile 26,5,no,tall", "Nowhere,5,Profile 26,6,no,6", "LX1,6,Profile 26,7,no,6"].join("\n");
+    const csv = [
+      "Position,Unit,Type,Address,Hung,Lens height",
+      "LX1,1,Profile 26,1,yes,6",
+      "LX1,2,Profile 26,513,yes,6",
+      "LX1,3,Profile 26,4,perhaps,6",
+      "LX1,4,Profile 26,5,no,tall",
+      "Nowhere,5,Profile 26,6,no,6",
+      "LX1,6,Profile 26,7,no,6",
+    ].join("\n");
     const p = await upload(s, id, { name: "bad.csv", body: csv }, preview);
     expect(p.json.preview.errors).toEqual([
       { row: 3, column: "Address", message: "DMX address must be 1–512" }, // ANSI E1.11: slots 1–512
@@ -114,9 +155,16 @@ describe("row errors and all-or-nothing", () => {
 
   it("refuses a fixture that would straddle two universes", async () => {
     const { s, id } = await rigProduction();
-    const r = await upload(s, id, { name: "dmx.csv", body: "Position,Unit,Type,Address\nLX1,1,Wash 13,500\nLX1,2,Wash 13,501\n" }, preview);
+    const r = await upload(
+      s,
+      id,
+      { name: "dmx.csv", body: "Position,Unit,Type,Address\nLX1,1,Wash 13,500\nLX1,2,Wash 13,501\n" },
+      preview,
+    );
     // ANSI E1.11: a 13-slot fixture fits at 500 (500–512) but not at 501
-    expect(r.json.preview.errors).toEqual([{ row: 3, column: "Address", message: "A 13-slot fixture at address 501 runs past slot 512" }]);
+    expect(r.json.preview.errors).toEqual([
+      { row: 3, column: "Address", message: "A 13-slot fixture at address 501 runs past slot 512" },
+    ]);
   });
 
   it("creates missing positions and types only when asked", async () => {
@@ -125,21 +173,48 @@ describe("row errors and all-or-nothing", () => {
     const reported = await upload(s, id, { name: "new.csv", body: csv }, preview);
     expect(reported.json.preview.errorCount).toBe(4);
     const created = await upload(s, id, { name: "new.csv", body: csv }, { ...commit, createMissing: true });
-    expect(created.json.result).toMatchObject({ newPositions: ["Boom SR"], newTypes: ["Generic fresnel 150 mm", "Mystery box"] });
+    expect(created.json.result).toMatchObject({
+      newPositions: ["Boom SR"],
+      newTypes: ["Generic fresnel 150 mm", "Mystery box"],
+    });
     const types = (await s.get(`/api/productions/${id}/fixture-types`)).json.fixtureTypes;
-    expect(types.find((t: any) => t.name === "Generic fresnel 150 mm")).toMatchObject({ family: "fresnel", coneMaxDeg: 60 });
+    expect(types.find((t: any) => t.name === "Generic fresnel 150 mm")).toMatchObject({
+      family: "fresnel",
+      coneMaxDeg: 60,
+    });
     const positions = (await s.get(`/api/productions/${id}/positions`)).json.positions;
     expect(positions.find((p: any) => p.name === "Boom SR").kind).toBe("boom");
   });
 
   it("updates matched fixtures with a version bump, leaves equal rows alone, and remembers the mapping", async () => {
     const { s, id } = await rigProduction();
-    await upload(s, id, { name: "a.csv", body: "Where,No.,Kind,Gel\nLX1,1,Profile 26,pale blue\nLX1,2,Profile 26,pale amber\n" }, { ...commit, mapping: ["position", "unitNumber", "type", "colour"] });
+    await upload(
+      s,
+      id,
+      { name: "a.csv", body: "Where,No.,Kind,Gel\nLX1,1,Profile 26,pale blue\nLX1,2,Profile 26,pale amber\n" },
+      { ...commit, mapping: ["position", "unitNumber", "type", "colour"] },
+    );
     const before = await fixturesOf(s, id);
-    const again = await upload(s, id, { name: "b.csv", body: "where,no.,kind,gel\nLX1,1,Profile 26,pale blue + light frost\nLX1,2,Profile 26,pale amber\n" }, preview);
+    const again = await upload(
+      s,
+      id,
+      {
+        name: "b.csv",
+        body: "where,no.,kind,gel\nLX1,1,Profile 26,pale blue + light frost\nLX1,2,Profile 26,pale amber\n",
+      },
+      preview,
+    );
     expect(again.json.preview.mapping).toEqual(["position", "unitNumber", "type", "colour"]);
     expect(again.json.preview.counts).toEqual({ create: 0, update: 1, unchanged: 1 });
-    await upload(s, id, { name: "b.csv", body: "where,no.,kind,gel\nLX1,1,Profile 26,pale blue + light frost\nLX1,2,Profile 26,pale amber\n" }, commit);
+    await upload(
+      s,
+      id,
+      {
+        name: "b.csv",
+        body: "where,no.,kind,gel\nLX1,1,Profile 26,pale blue + light frost\nLX1,2,Profile 26,pale amber\n",
+      },
+      commit,
+    );
     const after = await fixturesOf(s, id);
     const one = (list: any[], u: string) => list.find((f) => f.unitNumber === u);
     expect(one(after, "1")).toMatchObject({ colour: "pale blue + light frost", version: one(before, "1").version + 1 });
@@ -154,11 +229,34 @@ describe("roles", () => {
     const fx = await fixturesOf(el, id);
     const target = fx[0];
     const other = fx[1];
-    const refused = await upload(el, id, { name: "el.csv", body: `Position,Unit,Circuit,Colour\n${target.positionName},${target.unitNumber},E-77,deep amber\n` }, preview);
-    expect(refused.json.preview.errors).toEqual([{ row: 2, column: "Colour", message: expect.stringMatching(/^Your role cannot change Colour/) }]);
-    const newUnit = await upload(el, id, { name: "el.csv", body: `Position,Unit,Circuit\n${target.positionName},999,E-1\n` }, preview);
+    const refused = await upload(
+      el,
+      id,
+      {
+        name: "el.csv",
+        body: `Position,Unit,Circuit,Colour\n${target.positionName},${target.unitNumber},E-77,deep amber\n`,
+      },
+      preview,
+    );
+    expect(refused.json.preview.errors).toEqual([
+      { row: 2, column: "Colour", message: expect.stringMatching(/^Your role cannot change Colour/) },
+    ]);
+    const newUnit = await upload(
+      el,
+      id,
+      { name: "el.csv", body: `Position,Unit,Circuit\n${target.positionName},999,E-1\n` },
+      preview,
+    );
     expect(newUnit.json.preview.errors[0].message).toMatch(/only the designer can add fixtures/);
-    const ok = await upload(el, id, { name: "el.csv", body: `Position,Unit,Dimmer,Colour\n${other.positionName},${other.unitNumber},D-${other.id},${other.colour ?? ""}\n` }, commit);
+    const ok = await upload(
+      el,
+      id,
+      {
+        name: "el.csv",
+        body: `Position,Unit,Dimmer,Colour\n${other.positionName},${other.unitNumber},D-${other.id},${other.colour ?? ""}\n`,
+      },
+      commit,
+    );
     expect(ok.status).toBe(200);
     expect((await fixturesOf(el, id)).find((f) => f.id === other.id).dimmer).toBe(`D-${other.id}`);
   });

@@ -13,9 +13,16 @@ describe("import progress", () => {
     const form = new FormData();
     form.set("file", new File([lines.join("\n")], "big.csv"));
     form.set("options", JSON.stringify({ mode: "preview" }));
-    const res = await fetch(`${BASE_URL}/api/productions/${id}/import?stream=1`, { method: "POST", headers: { cookie: cookieOf(s) }, body: form });
+    const res = await fetch(`${BASE_URL}/api/productions/${id}/import?stream=1`, {
+      method: "POST",
+      headers: { cookie: cookieOf(s) },
+      body: form,
+    });
     expect(res.status).toBe(200);
-    const messages = (await res.text()).split("\n").filter(Boolean).map((l) => JSON.parse(l));
+    const messages = (await res.text())
+      .split("\n")
+      .filter(Boolean)
+      .map((l) => JSON.parse(l));
     const stages = messages.filter((m) => m.progress).map((m) => m.progress);
     expect(stages[0].stage).toBe("reading");
     const checking = stages.filter((p) => p.stage === "checking");

@@ -9,7 +9,9 @@ const cookieOf = (s: unknown) => (s as { cookie: string }).cookie;
 function chunkedMultipart(totalBytes: number) {
   const boundary = "----throwline-cap-test";
   const encoder = new TextEncoder();
-  const head = encoder.encode(`--${boundary}\r\nContent-Disposition: form-data; name="options"\r\n\r\n{"mode":"preview"}\r\n--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="huge.csv"\r\nContent-Type: text/csv\r\n\r\nPosition,Unit\r\n`);
+  const head = encoder.encode(
+    `--${boundary}\r\nContent-Disposition: form-data; name="options"\r\n\r\n{"mode":"preview"}\r\n--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="huge.csv"\r\nContent-Type: text/csv\r\n\r\nPosition,Unit\r\n`,
+  );
   const chunk = encoder.encode("LX1,1\r\n".repeat(9362)); // about 64 KiB
   let sent = 0;
   let pulls = 0;

@@ -13,7 +13,12 @@ async function signIn(email: string, password: string, from: string) {
     headers: { "content-type": "application/json", "x-forwarded-for": from },
     body: JSON.stringify({ email, password }),
   });
-  return { status: res.status, retryAfter: res.headers.get("retry-after"), json: await res.json(), cookie: res.headers.getSetCookie()[0]?.split(";")[0] ?? "" };
+  return {
+    status: res.status,
+    retryAfter: res.headers.get("retry-after"),
+    json: await res.json(),
+    cookie: res.headers.getSetCookie()[0]?.split(";")[0] ?? "",
+  };
 }
 
 describe("signing out ends the session on the server", () => {
@@ -53,7 +58,8 @@ describe("sign-in limits", () => {
     const from = address();
     const ghost = `nobody-${Date.now()}@example.test`;
     const statuses = [];
-    for (let i = 0; i <= SIGN_IN_LIMITS.account.failures; i++) statuses.push((await signIn(ghost, "whatever-it-is", from)).status);
+    for (let i = 0; i <= SIGN_IN_LIMITS.account.failures; i++)
+      statuses.push((await signIn(ghost, "whatever-it-is", from)).status);
     expect(statuses).toEqual([...Array(SIGN_IN_LIMITS.account.failures).fill(401), 429]);
   });
 
@@ -71,7 +77,11 @@ describe("sign-in limits", () => {
 describe("bodies and passwords", () => {
   it("a 50 MB sign-in body is refused from its declared length, before it is read", async () => {
     const big = "x".repeat(50 * 1024 * 1024);
-    const res = await fetch(`${BASE_URL}/api/auth/sign-in`, { method: "POST", headers: { "content-type": "application/json" }, body: big });
+    const res = await fetch(`${BASE_URL}/api/auth/sign-in`, {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: big,
+    });
     expect(res.status).toBe(413);
   });
 
@@ -84,17 +94,30 @@ describe("bodies and passwords", () => {
         else controller.enqueue(chunk);
       },
     });
-    const res = await fetch(`${BASE_URL}/api/auth/sign-in`, { method: "POST", headers: { "content-type": "application/json" }, body, duplex: "half" } as RequestInit);
+    const res = await fetch(`${BASE_URL}/api/auth/sign-in`, {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body,
+      duplex: "half",
+    } as RequestInit);
     expect(res.status).toBe(413);
     expect((await res.json()).error.message).toMatch(/over 1024 KB/);
   });
 
   it("a password longer than bcrypt can check gets its own message at sign-up, naming the field", async () => {
-    const r = await new ApiSession().post("/api/auth/sign-up", { name: "Long", email: `long-${Date.now()}@example.test`, password: "p".repeat(73) });
+    const r = await new ApiSession().post("/api/auth/sign-up", {
+      name: "Long",
+      email: `long-${Date.now()}@example.test`,
+      password: "p".repeat(73),
+    });
     expect(r.status).toBe(400);
     expect(r.json.error.fieldErrors.password[0]).toMatch(/at most 72 characters/);
     // 72 ASCII characters are exactly 72 bytes: accepted.
-    const ok = await new ApiSession().post("/api/auth/sign-up", { name: "Long", email: `long-ok-${Date.now()}@example.test`, password: "p".repeat(72) });
+    const ok = await new ApiSession().post("/api/auth/sign-up", {
+      name: "Long",
+      email: `long-ok-${Date.now()}@example.test`,
+      password: "p".repeat(72),
+    });
     expect(ok.status).toBe(201);
   });
 });

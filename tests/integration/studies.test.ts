@@ -12,18 +12,64 @@ async function studied() {
   const { session: s } = await freshUser("studies");
   const id = (await s.post("/api/productions", { name: "Studies test" })).json.production.id as number;
   const p = `/api/productions/${id}`;
-  const pos = (await s.post(`${p}/positions`, { name: "LX1", kind: "overhead-pipe", x1: -7, y1: 2, x2: 7, y2: 2, trimHeight: 7 })).json.position;
-  const profile = (await s.post(`${p}/fixture-types`, { name: "Test profile", family: "profile", coneMinDeg: 30, coneMaxDeg: 30, defaultSoftnessDeg: 5, peakCandela: 10_000, lensApertureM: 0.15, dmxModes: [{ name: "dimmer", footprint: 1 }] })).json.fixtureType;
-  const led = (await s.post(`${p}/fixture-types`, { name: "Test LED", family: "led-wash", coneMinDeg: 30, coneMaxDeg: 30, defaultSoftnessDeg: 5, peakCandela: 10_000, lensApertureM: 0.15, dmxModes: [{ name: "wide", footprint: 8 }] })).json.fixtureType;
-  const unit = (n: string, type: any, at: { x: number; y: number; z: number }, focus: { x: number; y: number }, extra: object = {}) => ({
-    positionId: pos.id, fixtureTypeId: type.id, unitNumber: n, x: at.x, y: at.y, lensHeight: at.z, focusX: focus.x, focusY: focus.y, coneDeg: 30, softnessDeg: 5, ...extra,
+  const pos = (
+    await s.post(`${p}/positions`, { name: "LX1", kind: "overhead-pipe", x1: -7, y1: 2, x2: 7, y2: 2, trimHeight: 7 })
+  ).json.position;
+  const profile = (
+    await s.post(`${p}/fixture-types`, {
+      name: "Test profile",
+      family: "profile",
+      coneMinDeg: 30,
+      coneMaxDeg: 30,
+      defaultSoftnessDeg: 5,
+      peakCandela: 10_000,
+      lensApertureM: 0.15,
+      dmxModes: [{ name: "dimmer", footprint: 1 }],
+    })
+  ).json.fixtureType;
+  const led = (
+    await s.post(`${p}/fixture-types`, {
+      name: "Test LED",
+      family: "led-wash",
+      coneMinDeg: 30,
+      coneMaxDeg: 30,
+      defaultSoftnessDeg: 5,
+      peakCandela: 10_000,
+      lensApertureM: 0.15,
+      dmxModes: [{ name: "wide", footprint: 8 }],
+    })
+  ).json.fixtureType;
+  const unit = (
+    n: string,
+    type: any,
+    at: { x: number; y: number; z: number },
+    focus: { x: number; y: number },
+    extra: object = {},
+  ) => ({
+    positionId: pos.id,
+    fixtureTypeId: type.id,
+    unitNumber: n,
+    x: at.x,
+    y: at.y,
+    lensHeight: at.z,
+    focusX: focus.x,
+    focusY: focus.y,
+    coneDeg: 30,
+    softnessDeg: 5,
+    ...extra,
   });
   const hung = await s.post(`${p}/fixtures`, {
     fixtures: [
       unit("1", profile, { x: 0.05, y: 2.05, z: 5 }, { x: 0.05, y: 2.05 }, { channel: 1, colour: "pale lavender" }),
       unit("2", led, { x: -4.95, y: 2.05, z: 5 }, { x: -4.95, y: 2.05 }, { channel: 2 }),
       // 45° up and 45° off the audience direction from the face at (0.05, 2.05, 1.55), 5 m out in plan
-      unit("3", profile, { x: 0.05 + 5 / R2, y: 2.05 - 5 / R2, z: 6.55 }, { x: 0.05, y: 2.05 }, { channel: 3, coneDeg: 40 }),
+      unit(
+        "3",
+        profile,
+        { x: 0.05 + 5 / R2, y: 2.05 - 5 / R2, z: 6.55 },
+        { x: 0.05, y: 2.05 },
+        { channel: 3, coneDeg: 40 },
+      ),
       // a high steep light and a low front light on the performer at (0.05, 4)
       unit("4", profile, { x: 0.05, y: 3, z: 8 }, { x: 0.05, y: 4 }, { channel: 4 }),
       unit("5", profile, { x: 0.05, y: -6, z: 2.2 }, { x: 0.05, y: 4 }, { channel: 5 }),
@@ -33,7 +79,8 @@ async function studied() {
   return { s, id, p };
 }
 
-const coverage = (s: ApiSession, p: string, body: object) => s.post(`${p}/studies/coverage`, { resolution: 0.1, ...body });
+const coverage = (s: ApiSession, p: string, body: object) =>
+  s.post(`${p}/studies/coverage`, { resolution: 0.1, ...body });
 
 function cell(grid: any, x: number, y: number): number {
   const bytes = Buffer.from(grid.values, "base64");
@@ -57,7 +104,7 @@ describe("coverage study", () => {
 
     const half = await coverage(s, p, { source: { kind: "channels", levels: { "1": 50, "2": 50 } } });
     // tungsten from memory: light ∝ level^2.3 → 400·0.5^2.3 = 81.2 lx; the LED wash is linear → 200 lx
-    expect(cell(half.json.grid, 0.05, 2.05)).toBeCloseTo(400 * Math.pow(0.5, 2.3), 2);
+    expect(cell(half.json.grid, 0.05, 2.05)).toBeCloseTo(400 * 0.5 ** 2.3, 2);
     expect(cell(half.json.grid, -4.95, 2.05)).toBeCloseTo(200, 2);
     expect(half.json.curves).toEqual(["linear", "tungsten"]);
 
@@ -85,7 +132,12 @@ describe("coverage study", () => {
 
   it("reports each acting area's min, mean, max and uniformity; a dark area gets 0, never a division by zero", async () => {
     const { s, p } = await studied();
-    const sq = (cx: number, cy: number, r: number) => [{ x: cx - r, y: cy - r }, { x: cx + r, y: cy - r }, { x: cx + r, y: cy + r }, { x: cx - r, y: cy + r }];
+    const sq = (cx: number, cy: number, r: number) => [
+      { x: cx - r, y: cy - r },
+      { x: cx + r, y: cy - r },
+      { x: cx + r, y: cy + r },
+      { x: cx - r, y: cy + r },
+    ];
     await s.post(`${p}/area-zones`, { name: "Centre", polygon: sq(0.05, 2.05, 0.12) }); // 3 × 3 cells
     await s.post(`${p}/area-zones`, { name: "Far corner", polygon: sq(6, 8, 0.5) });
     const r = await coverage(s, p, { source: { kind: "channels", levels: { "1": 100 } } });
@@ -93,7 +145,7 @@ describe("coverage study", () => {
     const dark = r.json.areas.find((a: any) => a.name === "Far corner");
     expect(centre.count).toBe(9);
     // hand-worked: corners 0.1414 m off the axis → E = I·h/d³ with d² = 25.02; edges d² = 25.01; centre 400 lx (cosine law)
-    const e = (d2: number) => (10_000 * 5) / Math.pow(d2, 1.5);
+    const e = (d2: number) => (10_000 * 5) / d2 ** 1.5;
     const mean = (400 + 4 * e(25.01) + 4 * e(25.02)) / 9;
     expect(centre.max).toBeCloseTo(400, 2);
     expect(centre.min).toBeCloseTo(e(25.02), 2);
@@ -104,11 +156,18 @@ describe("coverage study", () => {
     expect(dark.averageToMinimum).toBeNull();
     expect(dark.flags).toEqual(expect.arrayContaining(["uniformity", "dimmer"]));
 
-    const csv = await s.request("POST", `${p}/studies/coverage/areas`, { source: { kind: "channels", levels: { "1": 100 } }, format: "csv" });
+    const csv = await s.request("POST", `${p}/studies/coverage/areas`, {
+      source: { kind: "channels", levels: { "1": 100 } },
+      format: "csv",
+    });
     expect(csv.status).toBe(200);
     expect(csv.json.raw.split("\n")[0]).toMatch(/^Area,Min \(lx\),Mean \(lx\),Max \(lx\),Uniformity/);
     expect(csv.json.raw).toMatch(/Far corner,0,0,0,0,/);
-    const res = await fetch(BASE_URL + `${p}/studies/coverage/areas`, { method: "POST", headers: { cookie: s.cookie, "content-type": "application/json" }, body: JSON.stringify({ source: { kind: "channels", levels: { "1": 100 } }, format: "xlsx" }) });
+    const res = await fetch(BASE_URL + `${p}/studies/coverage/areas`, {
+      method: "POST",
+      headers: { cookie: s.cookie, "content-type": "application/json" },
+      body: JSON.stringify({ source: { kind: "channels", levels: { "1": 100 } }, format: "xlsx" }),
+    });
     expect(res.headers.get("content-type")).toMatch(/spreadsheetml/);
     const book = new ExcelJS.Workbook();
     await book.xlsx.load(await res.arrayBuffer());
@@ -123,7 +182,10 @@ describe("coverage study", () => {
 
   it("lights a face by the hand-worked 45° up, 45° off case and names the key", async () => {
     const { s, p } = await studied();
-    const r = await coverage(s, p, { source: { kind: "channels", levels: { "3": 100 } }, measure: { kind: "face", facingDeg: -90 } });
+    const r = await coverage(s, p, {
+      source: { kind: "channels", levels: { "3": 100 } },
+      measure: { kind: "face", facingDeg: -90 },
+    });
     expect(r.status).toBe(200);
     expect(r.json.measure).toEqual({ kind: "face", planeHeight: 1.55, facingDeg: -90 });
     // E_v = I·cos(incidence)/d²: S − P = (5/√2, −5/√2, 5), d² = 50, cos = (5/√2)/(5√2) = ½ → 10,000·½/50 = 100 lx
@@ -133,7 +195,10 @@ describe("coverage study", () => {
     const k = Math.round((2.05 - g.originY) / g.resolution) * g.cols + Math.round((0.05 - g.originX) / g.resolution);
     expect(r.json.lights[key[k]].unitLabel).toBe("LX1 3");
     // facing upstage, the same unit is behind the face
-    const back = await coverage(s, p, { source: { kind: "channels", levels: { "3": 100 } }, measure: { kind: "face", facingDeg: 90 } });
+    const back = await coverage(s, p, {
+      source: { kind: "channels", levels: { "3": 100 } },
+      measure: { kind: "face", facingDeg: 90 },
+    });
     expect(cell(back.json.grid, 0.05, 2.05)).toBe(0);
   });
 
@@ -202,9 +267,13 @@ describe("roles", () => {
     expect(r.status).toBe(200);
     expect(r.json.lights.length).toBeGreaterThan(0);
     const viewer = await demoSession("viewer");
-    expect((await viewer.post(`/api/productions/${id}/performer-marks`, { name: "Nope", x: 0, y: 0 })).status).toBe(403);
+    expect((await viewer.post(`/api/productions/${id}/performer-marks`, { name: "Nope", x: 0, y: 0 })).status).toBe(
+      403,
+    );
     const { session: outsider } = await freshUser("outsider");
-    expect((await outsider.post(`/api/productions/${id}/studies/coverage`, { source: { kind: "full" } })).status).toBe(404);
+    expect((await outsider.post(`/api/productions/${id}/studies/coverage`, { source: { kind: "full" } })).status).toBe(
+      404,
+    );
     expect((await sm.get(`/api/productions/${id}/studies/colours`)).status).toBe(200);
   });
 });

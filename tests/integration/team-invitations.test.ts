@@ -15,7 +15,13 @@ beforeAll(async () => {
   owner = await demoSession("designer"); // the demo's owner
   pid = await demoProductionId(owner);
   const u = new URL(process.env.DATABASE_URL!);
-  db = await mariadb.createConnection({ host: u.hostname, port: Number(u.port), user: decodeURIComponent(u.username), password: decodeURIComponent(u.password), database: u.pathname.slice(1) });
+  db = await mariadb.createConnection({
+    host: u.hostname,
+    port: Number(u.port),
+    user: decodeURIComponent(u.username),
+    password: decodeURIComponent(u.password),
+    database: u.pathname.slice(1),
+  });
 }, 60_000);
 afterAll(async () => db?.end());
 
@@ -30,7 +36,14 @@ async function tokenFor(email: string, nth = 1) {
   return { mail, token: linkIn(mail, "/invite/").pathname.split("/").pop()! };
 }
 
-const team = async (s: ApiSession) => (await s.get(`/api/productions/${pid}/team`)).json?.members as Array<{ userId: number; email: string; role: string; isOwner: boolean; version: number }>;
+const team = async (s: ApiSession) =>
+  (await s.get(`/api/productions/${pid}/team`)).json?.members as Array<{
+    userId: number;
+    email: string;
+    role: string;
+    isOwner: boolean;
+    version: number;
+  }>;
 
 describe("an invitation by e-mail", () => {
   it("reaches the invited address with a link that signs up a new stage manager once, landing on the cues", async () => {
@@ -46,7 +59,11 @@ describe("an invitation by e-mail", () => {
     expect(page.status).toBe(200);
 
     const newcomer = new ApiSession();
-    const r = await newcomer.post("/api/invitations/accept", { token, name: "Nell Quarry", password: "a-long-test-password" });
+    const r = await newcomer.post("/api/invitations/accept", {
+      token,
+      name: "Nell Quarry",
+      password: "a-long-test-password",
+    });
     expect(r.status, JSON.stringify(r.json)).toBe(201);
     expect(r.json.landing).toBe(`/productions/${pid}/cues`); // the stage manager's landing tab (DESIGN.md)
     const me = await newcomer.get("/api/auth/me");
@@ -57,7 +74,11 @@ describe("an invitation by e-mail", () => {
 
     // Twice: refused, and whoever tried is not signed in.
     const again = new ApiSession();
-    const second = await again.post("/api/invitations/accept", { token, name: "Someone Else", password: "another-long-password" });
+    const second = await again.post("/api/invitations/accept", {
+      token,
+      name: "Someone Else",
+      password: "another-long-password",
+    });
     expect(second.status).toBe(409);
     expect(second.json.error.message).toMatch(/already been used/);
     expect((await again.get("/api/auth/me")).status).toBe(401);
@@ -70,13 +91,21 @@ describe("an invitation by e-mail", () => {
     const { token } = await tokenFor(email);
     const altered = (token[0] === "A" ? "B" : "A") + token.slice(1);
     const s = new ApiSession();
-    const bad = await s.post("/api/invitations/accept", { token: altered, name: "Mallory", password: "a-long-test-password" });
+    const bad = await s.post("/api/invitations/accept", {
+      token: altered,
+      name: "Mallory",
+      password: "a-long-test-password",
+    });
     expect(bad.status).toBe(404);
     expect(bad.json.error.message).toMatch(/not valid/);
     expect((await s.get("/api/auth/me")).status).toBe(401);
 
     await db.query("UPDATE invitations SET expires_at = NOW(3) - INTERVAL 1 MINUTE WHERE email = ?", [email]);
-    const late = await s.post("/api/invitations/accept", { token, name: "Late Comer", password: "a-long-test-password" });
+    const late = await s.post("/api/invitations/accept", {
+      token,
+      name: "Late Comer",
+      password: "a-long-test-password",
+    });
     expect(late.status).toBe(409);
     expect(late.json.error.message).toMatch(/expired/);
     expect((await s.get("/api/auth/me")).status).toBe(401);
@@ -85,7 +114,10 @@ describe("an invitation by e-mail", () => {
   }, 60_000);
 
   it("an address already on the team gets a message, and a second invitation to an open address is the same one with a new link", async () => {
-    const already = await owner.post(`/api/productions/${pid}/invitations`, { email: DEMO_USERS.electrician.toUpperCase(), role: "viewer" });
+    const already = await owner.post(`/api/productions/${pid}/invitations`, {
+      email: DEMO_USERS.electrician.toUpperCase(),
+      role: "viewer",
+    });
     expect(already.status).toBe(409);
     expect(already.json.error.message).toMatch(/already on this production's team/);
     const [{ n }] = await db.query("SELECT COUNT(*) AS n FROM invitations WHERE email = ?", [DEMO_USERS.electrician]);
@@ -100,11 +132,23 @@ describe("an invitation by e-mail", () => {
     const { token: newToken } = await tokenFor(email, 2);
     const open = (await owner.get(`/api/productions/${pid}/invitations`)).json.invitations as Array<{ email: string }>;
     expect(open.filter((i) => i.email === email)).toHaveLength(1);
-    expect((await new ApiSession().post("/api/invitations/accept", { token: oldToken, name: "Old Link", password: "a-long-test-password" })).status).toBe(404);
+    expect(
+      (
+        await new ApiSession().post("/api/invitations/accept", {
+          token: oldToken,
+          name: "Old Link",
+          password: "a-long-test-password",
+        })
+      ).status,
+    ).toBe(404);
 
     // Withdrawn: the new link stops working too.
     expect((await owner.request("DELETE", `/api/productions/${pid}/invitations/${first.id}`)).status).toBe(200);
-    const withdrawn = await new ApiSession().post("/api/invitations/accept", { token: newToken, name: "Withdrawn", password: "a-long-test-password" });
+    const withdrawn = await new ApiSession().post("/api/invitations/accept", {
+      token: newToken,
+      name: "Withdrawn",
+      password: "a-long-test-password",
+    });
     expect(withdrawn.status).toBe(409);
     expect(withdrawn.json.error.message).toMatch(/withdrawn/);
   }, 60_000);
@@ -112,7 +156,9 @@ describe("an invitation by e-mail", () => {
   it("a signed-in user with an account joins with it (no second account)", async () => {
     const email = uniqueEmail("existing");
     const s = new ApiSession();
-    expect((await s.post("/api/auth/sign-up", { name: "Has Account", email, password: "a-long-test-password" })).status).toBe(201);
+    expect(
+      (await s.post("/api/auth/sign-up", { name: "Has Account", email, password: "a-long-test-password" })).status,
+    ).toBe(201);
     await invite(email, "electrician");
     const { token } = await tokenFor(email);
     const r = await s.post("/api/invitations/accept", { token });
@@ -127,7 +173,11 @@ describe("the team is the owner's to manage", () => {
     const email = uniqueEmail("role");
     await invite(email, "viewer");
     const { token } = await tokenFor(email);
-    const joined = await new ApiSession().post("/api/invitations/accept", { token, name: "Rolf Change", password: "a-long-test-password" });
+    const joined = await new ApiSession().post("/api/invitations/accept", {
+      token,
+      name: "Rolf Change",
+      password: "a-long-test-password",
+    });
     const userId = joined.json.membership.userId as number;
     const row = (await team(owner)).find((m) => m.userId === userId)!;
 
@@ -137,10 +187,16 @@ describe("the team is the owner's to manage", () => {
       expect(r.status, who).toBe(403);
       expect((await s.request("DELETE", `/api/productions/${pid}/team/${userId}`)).status, who).toBe(403);
     }
-    const stale = await owner.patch(`/api/productions/${pid}/team/${userId}`, { role: "designer", version: row.version + 5 });
+    const stale = await owner.patch(`/api/productions/${pid}/team/${userId}`, {
+      role: "designer",
+      version: row.version + 5,
+    });
     expect(stale.status).toBe(409);
     expect(stale.json.error.current.role).toBe("viewer");
-    const ok = await owner.patch(`/api/productions/${pid}/team/${userId}`, { role: "electrician", version: row.version });
+    const ok = await owner.patch(`/api/productions/${pid}/team/${userId}`, {
+      role: "electrician",
+      version: row.version,
+    });
     expect(ok.status, JSON.stringify(ok.json)).toBe(200);
     expect(ok.json.member.role).toBe("electrician");
 

@@ -7,7 +7,15 @@ import { ApiSession, uniqueEmail } from "./support/api";
 describe("password reset", () => {
   it("answers the same for an unknown address, and mails it too", async () => {
     const known = uniqueEmail("reset-known");
-    expect((await new ApiSession().post("/api/auth/sign-up", { name: "Known", email: known, password: "the-first-password" })).status).toBe(201);
+    expect(
+      (
+        await new ApiSession().post("/api/auth/sign-up", {
+          name: "Known",
+          email: known,
+          password: "the-first-password",
+        })
+      ).status,
+    ).toBe(201);
     const unknown = uniqueEmail("reset-unknown");
     const a = await new ApiSession().post("/api/auth/password-reset", { email: known });
     const b = await new ApiSession().post("/api/auth/password-reset", { email: unknown });
@@ -15,20 +23,33 @@ describe("password reset", () => {
     expect(a.json).toEqual(b.json);
     const toUnknown = await waitForMail(unknown);
     expect(toUnknown.text).not.toMatch(/\/reset-password\/[A-Za-z0-9_-]{43}/);
-    expect(linkIn(await waitForMail(known), "/reset-password/").pathname).toMatch(/^\/reset-password\/[A-Za-z0-9_-]{43}$/);
+    expect(linkIn(await waitForMail(known), "/reset-password/").pathname).toMatch(
+      /^\/reset-password\/[A-Za-z0-9_-]{43}$/,
+    );
   }, 60_000);
 
   it("the link sets a new password once and signs the account out everywhere else", async () => {
     const email = uniqueEmail("reset-use");
     const laptop = new ApiSession();
-    expect((await laptop.post("/api/auth/sign-up", { name: "Reset Me", email, password: "the-first-password" })).status).toBe(201);
+    expect(
+      (await laptop.post("/api/auth/sign-up", { name: "Reset Me", email, password: "the-first-password" })).status,
+    ).toBe(201);
     expect((await laptop.get("/api/auth/me")).status).toBe(200);
 
     await new ApiSession().post("/api/auth/password-reset", { email });
-    const token = linkIn(await waitForMail(email), "/reset-password/").pathname.split("/").pop()!;
+    const token = linkIn(await waitForMail(email), "/reset-password/")
+      .pathname.split("/")
+      .pop()!;
 
     const altered = (token[0] === "A" ? "B" : "A") + token.slice(1);
-    expect((await new ApiSession().post("/api/auth/password-reset/confirm", { token: altered, password: "a-hijacked-password" })).status).toBe(404);
+    expect(
+      (
+        await new ApiSession().post("/api/auth/password-reset/confirm", {
+          token: altered,
+          password: "a-hijacked-password",
+        })
+      ).status,
+    ).toBe(404);
 
     const phone = new ApiSession();
     const r = await phone.post("/api/auth/password-reset/confirm", { token, password: "the-second-password" });
@@ -36,10 +57,17 @@ describe("password reset", () => {
     expect((await phone.get("/api/auth/me")).json.user.email).toBe(email);
     expect((await laptop.get("/api/auth/me")).status).toBe(401); // the other session ended
 
-    expect((await new ApiSession().post("/api/auth/sign-in", { email, password: "the-first-password" })).status).toBe(401);
-    expect((await new ApiSession().post("/api/auth/sign-in", { email, password: "the-second-password" })).status).toBe(200);
+    expect((await new ApiSession().post("/api/auth/sign-in", { email, password: "the-first-password" })).status).toBe(
+      401,
+    );
+    expect((await new ApiSession().post("/api/auth/sign-in", { email, password: "the-second-password" })).status).toBe(
+      200,
+    );
 
-    const twice = await new ApiSession().post("/api/auth/password-reset/confirm", { token, password: "the-third-password-x" });
+    const twice = await new ApiSession().post("/api/auth/password-reset/confirm", {
+      token,
+      password: "the-third-password-x",
+    });
     expect(twice.status).toBe(409);
     expect(twice.json.error.message).toMatch(/already been used/);
   }, 60_000);

@@ -2,7 +2,7 @@
 // pixels are refused with a clear message and nothing stored; a good one is stored as sharp writes it again.
 import sharp from "sharp";
 import { describe, expect, it } from "vitest";
-import { ApiSession, BASE_URL, freshUser } from "./support/api";
+import { type ApiSession, BASE_URL, freshUser } from "./support/api";
 import { makePng, pngClaiming } from "../support/png";
 
 async function ownProduction() {
@@ -14,11 +14,16 @@ async function ownProduction() {
 async function upload(s: ApiSession, id: number, bytes: Uint8Array, name: string) {
   const form = new FormData();
   form.set("file", new Blob([bytes as unknown as ArrayBuffer], { type: "image/png" }), name);
-  const res = await fetch(`${BASE_URL}/api/productions/${id}/uploads`, { method: "POST", body: form, headers: { cookie: s.cookie } });
+  const res = await fetch(`${BASE_URL}/api/productions/${id}/uploads`, {
+    method: "POST",
+    body: form,
+    headers: { cookie: s.cookie },
+  });
   return { status: res.status, json: await res.json() };
 }
 
-const uploadsOf = async (s: ApiSession, id: number) => (await s.get(`/api/productions/${id}/uploads`)).json.uploads as unknown[];
+const uploadsOf = async (s: ApiSession, id: number) =>
+  (await s.get(`/api/productions/${id}/uploads`)).json.uploads as unknown[];
 
 describe("underlay images are decoded before they are kept", () => {
   it("stores a good PNG as sharp re-encodes it: same pixels, sizes from the decoded image", async () => {

@@ -49,7 +49,10 @@ describe("the WCAG contrast formula itself", () => {
 const TEXT = ["ink", "muted", "accent", "danger", "caution", "success"];
 const BACKGROUNDS = ["canvas", "surface", "raised"];
 
-for (const [name, selector] of [["light", ":root"], ["dark", ".dark"]] as const) {
+for (const [name, selector] of [
+  ["light", ":root"],
+  ["dark", ".dark"],
+] as const) {
   describe(`${name} theme tokens`, () => {
     const t = tokens(selector);
 
@@ -87,7 +90,13 @@ describe("dark theme glare", () => {
     const bg = rgb(t.surface);
     const composite = (dim: number) => {
       const a = core.alpha * dim;
-      const hex = core.rgb.map((c, i) => Math.round(c * a + bg[i] * (1 - a)).toString(16).padStart(2, "0")).join("");
+      const hex = core.rgb
+        .map((c, i) =>
+          Math.round(c * a + bg[i] * (1 - a))
+            .toString(16)
+            .padStart(2, "0"),
+        )
+        .join("");
       return luminance(`#${hex}`) / luminance(t.surface);
     };
     expect(composite(1)).toBeGreaterThan(40); // as the issue measured, undimmed

@@ -12,7 +12,10 @@ export const metadata: Metadata = { title: "Productions" };
 export default async function ProductionsPage() {
   const user = await userForPage();
   const queryClient = makeQueryClient();
-  await queryClient.prefetchQuery({ queryKey: productionKeys.list(), queryFn: () => getProductionsByUser({ userId: user.id }) });
+  await queryClient.prefetchQuery({
+    queryKey: productionKeys.list(),
+    queryFn: () => getProductionsByUser({ userId: user.id }),
+  });
   return (
     <main className="mx-auto flex max-w-5xl flex-col gap-6 px-4 py-6">
       <h1 className="text-2xl font-semibold">Your productions</h1>

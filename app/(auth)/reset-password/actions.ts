@@ -6,7 +6,9 @@ import { completePasswordReset, requestPasswordReset } from "@/lib/auth/password
 import { landingPathFor } from "@/lib/auth/landing";
 import { resetConfirmSchema, resetRequestSchema } from "@/lib/validation/team";
 
-export const requestResetAction = formAction(resetRequestSchema, async ({ email }) => ({ message: await requestPasswordReset(email) }));
+export const requestResetAction = formAction(resetRequestSchema, async ({ email }) => ({
+  message: await requestPasswordReset(email),
+}));
 
 export const completeResetAction = formAction(resetConfirmSchema, async (input) => {
   const { userId } = await completePasswordReset(input);

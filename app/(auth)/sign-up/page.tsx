@@ -8,7 +8,9 @@ export default function SignUpPage() {
   return (
     <section className="rounded-lg border border-line bg-surface p-6">
       <h1 className="mb-1 text-xl font-semibold">Create an account</h1>
-      <p className="mb-5 text-sm text-muted">Start a production of your own, or wait for an invitation to someone else&apos;s.</p>
+      <p className="mb-5 text-sm text-muted">
+        Start a production of your own, or wait for an invitation to someone else&apos;s.
+      </p>
       <SignUpForm />
       <p className="mt-5 text-sm text-muted">
         Already have an account?{" "}

@@ -16,16 +16,30 @@ export async function openThemed(name: ViewportName, dark: boolean): Promise<Bro
   const browser = await chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
     headless: true,
-    args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+    args: [
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-quic",
+      "--no-first-run",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+    ],
   });
   const context = await browser.newContext({ ...VIEWPORTS[name], baseURL: BASE_URL });
   context.on("close", () => void browser.close());
-  await context.addInitScript(([key, value]) => localStorage.setItem(key, value), [THEME_STORAGE_KEY, dark ? "dark" : "light"] as const);
+  await context.addInitScript(([key, value]) => localStorage.setItem(key, value), [
+    THEME_STORAGE_KEY,
+    dark ? "dark" : "light",
+  ] as const);
   return context;
 }
 
 /** Signs the context in as a demo account through the sign-in route. */
 export async function signInAs(context: BrowserContext, role: DemoRole) {
-  const r = await context.request.post("/api/auth/sign-in", { data: { email: DEMO[role], password: DEMO_PASSWORD }, timeout: 120_000 });
+  const r = await context.request.post("/api/auth/sign-in", {
+    data: { email: DEMO[role], password: DEMO_PASSWORD },
+    timeout: 120_000,
+  });
   if (!r.ok()) throw new Error(`sign-in as the demo ${role} answered ${r.status()}: ${await r.text()}`);
 }

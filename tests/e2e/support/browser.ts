@@ -13,7 +13,15 @@ export async function openBrowser(viewport = { width: 1366, height: 900 }): Prom
   const browser = await chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
     headless: true,
-    args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+    args: [
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-quic",
+      "--no-first-run",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+    ],
   });
   const context = await browser.newContext({ viewport, baseURL: BASE_URL });
   context.on("close", () => void browser.close());
@@ -68,7 +76,9 @@ export type SignedIn = { context: BrowserContext; page: Page; productionId: numb
 export async function signedIn(role: DemoRole, viewport?: { width: number; height: number }): Promise<SignedIn> {
   const context = await openBrowser(viewport);
   try {
-    const r = await context.request.post("/api/auth/sign-in", { data: { email: DEMO_USERS[role], password: DEMO_PASSWORD } });
+    const r = await context.request.post("/api/auth/sign-in", {
+      data: { email: DEMO_USERS[role], password: DEMO_PASSWORD },
+    });
     if (!r.ok()) throw new Error(`sign-in as the demo ${role} answered ${r.status()}: ${await r.text()}`);
     const page = await context.newPage();
     return { context, page, productionId: await demoProductionId(page), close: () => context.close() };

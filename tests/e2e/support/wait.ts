@@ -20,8 +20,12 @@ export function textOf(locator: Locator) {
 
 /** Resolves after the page has painted `frames` more frames (for a screenshot after a redraw, never for a check). */
 export async function nextFrames(page: Page, frames = 2) {
-  await page.evaluate((n) => new Promise<void>((done) => {
-    const step = (left: number) => (left === 0 ? done() : requestAnimationFrame(() => step(left - 1)));
-    step(n);
-  }), frames);
+  await page.evaluate(
+    (n) =>
+      new Promise<void>((done) => {
+        const step = (left: number) => (left === 0 ? done() : requestAnimationFrame(() => step(left - 1)));
+        step(n);
+      }),
+    frames,
+  );
 }

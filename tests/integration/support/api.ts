@@ -79,7 +79,12 @@ export async function demoProductionId(session: ApiSession): Promise<number> {
 /** A raw GET with the session's cookie, for binary bodies. */
 export async function getBytes(s: ApiSession, path: string) {
   const res = await fetchOnce(BASE_URL + path, { headers: { cookie: s.cookie } });
-  return { status: res.status, headers: res.headers, type: res.headers.get("content-type") ?? "", bytes: Buffer.from(await res.arrayBuffer()) };
+  return {
+    status: res.status,
+    headers: res.headers,
+    type: res.headers.get("content-type") ?? "",
+    bytes: Buffer.from(await res.arrayBuffer()),
+  };
 }
 
 /** A multipart POST with the session's cookie; the body is any form the route reads. */

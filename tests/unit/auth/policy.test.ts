@@ -1,5 +1,14 @@
 import { describe, expect, it } from "vitest";
-import { can, canCloseNote, canEditField, closableNoteKinds, forbiddenFields, PERMISSIONS, type Member, type Permission } from "@/lib/auth/policy";
+import {
+  can,
+  canCloseNote,
+  canEditField,
+  closableNoteKinds,
+  forbiddenFields,
+  PERMISSIONS,
+  type Member,
+  type Permission,
+} from "@/lib/auth/policy";
 import { NOTE_KINDS, type NoteKind } from "@/models/note-vocabulary";
 import { ROLES, type Role } from "@/lib/auth/roles";
 
@@ -52,8 +61,31 @@ describe("field-level rules for fixtures", () => {
   const designer: Member = { role: "designer", isOwner: false };
   const electrician: Member = { role: "electrician", isOwner: false };
   const stageManager: Member = { role: "stage_manager", isOwner: false };
-  const designerFields = ["channel", "colour", "purpose", "focusX", "focusY", "focusPointId", "coneDeg", "softnessDeg", "shutterCuts", "x", "y", "positionId"];
-  const electricsFields = ["circuit", "dimmer", "universe", "address", "dmxMode", "fixtureTypeId", "hung", "focused", "focusNotes"];
+  const designerFields = [
+    "channel",
+    "colour",
+    "purpose",
+    "focusX",
+    "focusY",
+    "focusPointId",
+    "coneDeg",
+    "softnessDeg",
+    "shutterCuts",
+    "x",
+    "y",
+    "positionId",
+  ];
+  const electricsFields = [
+    "circuit",
+    "dimmer",
+    "universe",
+    "address",
+    "dmxMode",
+    "fixtureTypeId",
+    "hung",
+    "focused",
+    "focusNotes",
+  ];
 
   it("the designer edits both groups", () => {
     expect(forbiddenFields(designer, "fixture", [...designerFields, ...electricsFields])).toEqual([]);
@@ -64,7 +96,9 @@ describe("field-level rules for fixtures", () => {
   });
   it("the stage manager and viewer edit no fixture field", () => {
     for (const m of [stageManager, { role: "viewer", isOwner: true } as Member]) {
-      expect(forbiddenFields(m, "fixture", [...designerFields, ...electricsFields])).toHaveLength(designerFields.length + electricsFields.length);
+      expect(forbiddenFields(m, "fixture", [...designerFields, ...electricsFields])).toHaveLength(
+        designerFields.length + electricsFields.length,
+      );
     }
   });
   // The gobo's orientation is part of the design (like the gobo); barn doors as focused and the
@@ -87,7 +121,12 @@ describe("field-level rules for cues and types", () => {
   it("the stage manager edits page and call note only", () => {
     const sm: Member = { role: "stage_manager", isOwner: false };
     expect(forbiddenFields(sm, "cue", ["page", "callNote"])).toEqual([]);
-    expect(forbiddenFields(sm, "cue", ["number", "upTime", "label", "follow"])).toEqual(["number", "upTime", "label", "follow"]);
+    expect(forbiddenFields(sm, "cue", ["number", "upTime", "label", "follow"])).toEqual([
+      "number",
+      "upTime",
+      "label",
+      "follow",
+    ]);
   });
   it("the electrician edits a type's wattage and weight but not its optics", () => {
     const el: Member = { role: "electrician", isOwner: false };

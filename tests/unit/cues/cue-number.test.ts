@@ -48,7 +48,11 @@ describe("cue numbers", () => {
   it("plans a renumber and refuses one that would change the running order", () => {
     const cues = [1, 2, 2.5, 3, 10].map((n, i) => ({ id: i + 1, number: n }));
     const plan = planRenumber(cues, { from: 2, to: 3, start: 4, step: 1 });
-    expect(plan.moves.map((m) => [m.id, m.to])).toEqual([[2, 4], [3, 5], [4, 6]]);
+    expect(plan.moves.map((m) => [m.id, m.to])).toEqual([
+      [2, 4],
+      [3, 5],
+      [4, 6],
+    ]);
     expect(() => planRenumber(cues, { from: 2, to: 3, start: 9, step: 1 })).toThrow(/reach cue 10/);
     expect(() => planRenumber(cues, { from: 2, to: 3, start: 1, step: 1 })).toThrow(/before the range/);
     expect(() => planRenumber(cues, { from: 4, to: 5, start: 1, step: 1 })).toThrow(/No cues/);

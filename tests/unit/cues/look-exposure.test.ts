@@ -26,7 +26,10 @@ describe("exposure", () => {
   });
 
   it("counts only pools that overlap at one spot", () => {
-    const apart = [{ outer: circle(-3, 4, 1), level: 1 }, { outer: circle(3, 4, 1), level: 1 }];
+    const apart = [
+      { outer: circle(-3, 4, 1), level: 1 },
+      { outer: circle(3, 4, 1), level: 1 },
+    ];
     expect(peakLevelSum(apart, stage)).toBe(1);
     expect(peakLevelSum([{ outer: circle(0, 4, 1), level: 0 }], stage)).toBe(0); // a pool at 0 adds no light
   });

@@ -1,22 +1,54 @@
 // Parts: channels of one cue that fade with their own times, and the running time they give.
 import { describe, expect, it } from "vitest";
-import { checkParts, computeTracking, formatChannels, movesByPart, normaliseParts, parseChannels, runningTimeWithParts, countMoves } from "@/lib/cues";
+import {
+  checkParts,
+  computeTracking,
+  formatChannels,
+  movesByPart,
+  normaliseParts,
+  parseChannels,
+  runningTimeWithParts,
+  countMoves,
+} from "@/lib/cues";
 
 describe("checking a cue's parts", () => {
   it("accepts parts with distinct numbers and channels", () => {
-    expect(checkParts([{ part: 1, channels: [1, 2] }, { part: 2, channels: [3] }])).toEqual([]);
+    expect(
+      checkParts([
+        { part: 1, channels: [1, 2] },
+        { part: 2, channels: [3] },
+      ]),
+    ).toEqual([]);
   });
 
   it("names a part number out of range or used twice, and a channel in two parts", () => {
     expect(checkParts([{ part: 0, channels: [] }])).toEqual(["part 0: part numbers run from 1 to 20"]);
     expect(checkParts([{ part: 21, channels: [] }])).toEqual(["part 21: part numbers run from 1 to 20"]);
-    expect(checkParts([{ part: 2, channels: [1] }, { part: 2, channels: [5] }])).toEqual(["part 2 appears twice"]);
-    expect(checkParts([{ part: 1, channels: [4, 7] }, { part: 3, channels: [7] }])).toEqual(["channel 7 is in part 1 and part 3; a channel can be in one part only"]);
+    expect(
+      checkParts([
+        { part: 2, channels: [1] },
+        { part: 2, channels: [5] },
+      ]),
+    ).toEqual(["part 2 appears twice"]);
+    expect(
+      checkParts([
+        { part: 1, channels: [4, 7] },
+        { part: 3, channels: [7] },
+      ]),
+    ).toEqual(["channel 7 is in part 1 and part 3; a channel can be in one part only"]);
   });
 
   it("sorts parts and their channels", () => {
     const p = { label: "", upTime: 1, downTime: null, delay: 0 };
-    expect(normaliseParts([{ ...p, part: 3, channels: [9, 2, 9] }, { ...p, part: 1, channels: [] }]).map((x) => [x.part, x.channels])).toEqual([[1, []], [3, [2, 9]]]);
+    expect(
+      normaliseParts([
+        { ...p, part: 3, channels: [9, 2, 9] },
+        { ...p, part: 1, channels: [] },
+      ]).map((x) => [x.part, x.channels]),
+    ).toEqual([
+      [1, []],
+      [3, [2, 9]],
+    ]);
   });
 });
 
@@ -39,8 +71,17 @@ describe("running time with parts", () => {
   const changed = countMoves(show, 1).changed;
 
   it("counts up and down moves in each part and in the rest of the cue", () => {
-    const parts = [{ part: 1, upTime: 10, downTime: null, delay: 0, channels: [1] }, { part: 2, upTime: 2, downTime: null, delay: 6, channels: [4] }];
-    expect(movesByPart(show, 1, 0, changed, parts)).toEqual({ base: { up: 1, down: 1 }, parts: [{ up: 0, down: 1 }, { up: 0, down: 0 }] });
+    const parts = [
+      { part: 1, upTime: 10, downTime: null, delay: 0, channels: [1] },
+      { part: 2, upTime: 2, downTime: null, delay: 6, channels: [4] },
+    ];
+    expect(movesByPart(show, 1, 0, changed, parts)).toEqual({
+      base: { up: 1, down: 1 },
+      parts: [
+        { up: 0, down: 1 },
+        { up: 0, down: 0 },
+      ],
+    });
   });
 
   // common practice, no source: a part runs for its delay plus its time, the cue until its slowest part arrives
@@ -53,8 +94,15 @@ describe("running time with parts", () => {
   });
 
   it("counts every timer when nothing moves, and the cue's own time without parts", () => {
-    const cue = { upTime: 3, downTime: null, delay: 0, parts: [{ part: 1, upTime: 2, downTime: 9, delay: 1, channels: [8] }] };
+    const cue = {
+      upTime: 3,
+      downTime: null,
+      delay: 0,
+      parts: [{ part: 1, upTime: 2, downTime: 9, delay: 1, channels: [8] }],
+    };
     expect(runningTimeWithParts(cue, { base: { up: 0, down: 0 }, parts: [{ up: 0, down: 0 }] })).toBe(10);
-    expect(runningTimeWithParts({ upTime: 3, downTime: 8, delay: 0, parts: [] }, { base: { up: 1, down: 0 }, parts: [] })).toBe(3);
+    expect(
+      runningTimeWithParts({ upTime: 3, downTime: 8, delay: 0, parts: [] }, { base: { up: 1, down: 0 }, parts: [] }),
+    ).toBe(3);
   });
 });

@@ -3,7 +3,19 @@
 import { describe, expect, it } from "vitest";
 import { buildCueSheet, runningOrder, type SheetCue } from "@/lib/cues";
 
-const cue = (id: number, number: number, extra: Partial<SheetCue> = {}): SheetCue => ({ id, number, upTime: 3, downTime: null, delay: 0, follow: null, link: null, block: false, levels: {}, parts: [], ...extra });
+const cue = (id: number, number: number, extra: Partial<SheetCue> = {}): SheetCue => ({
+  id,
+  number,
+  upTime: 3,
+  downTime: null,
+  delay: 0,
+  follow: null,
+  link: null,
+  block: false,
+  levels: {},
+  parts: [],
+  ...extra,
+});
 
 describe("running order", () => {
   it("is the numeric order when no cue links", () => {
@@ -43,7 +55,10 @@ describe("running order", () => {
 });
 
 describe("the cue sheet along links", () => {
-  const info = new Map([[1, { purposes: ["front light"], areas: ["Area 1"] }], [2, { purposes: ["cyc"], areas: [] }]]);
+  const info = new Map([
+    [1, { purposes: ["front light"], areas: ["Area 1"] }],
+    [2, { purposes: ["cyc"], areas: [] }],
+  ]);
   // 10 lights channel 1 and follows on after 2 s, linking past 11 to 20; 11 would light the cyc; 20 fades 1 out.
   const cues = [
     cue(1, 10, { levels: { 1: 80 }, follow: 2, link: 20 }),
@@ -71,9 +86,19 @@ describe("the cue sheet along links", () => {
   it("computes the linked cue's moves from the look that ran before it", () => {
     // Tracking follows the numbers, so cue 20 holds the cyc that 11 brought up; run after 10 (not
     // 11), the cyc comes up in 20 and channel 1 goes out: 1 up in 1 s, 1 down in 6 s.
-    expect(sheet.rows[1]).toMatchObject({ up: 1, down: 1, summary: "1 up, 1 down · brighter: cyc · darker: Area 1, front light", runningTime: 6 });
+    expect(sheet.rows[1]).toMatchObject({
+      up: 1,
+      down: 1,
+      summary: "1 up, 1 down · brighter: cyc · darker: Area 1, front light",
+      runningTime: 6,
+    });
     // Read in number order (after 11) the same cue would only take channel 1 out.
-    expect(buildCueSheet(cues.map((c) => ({ ...c, link: null })), info).rows[2]).toMatchObject({ up: 0, down: 1 });
+    expect(
+      buildCueSheet(
+        cues.map((c) => ({ ...c, link: null })),
+        info,
+      ).rows[2],
+    ).toMatchObject({ up: 0, down: 1 });
   });
 
   it("names links that loop back and links to no cue", () => {
@@ -84,7 +109,10 @@ describe("the cue sheet along links", () => {
   });
 
   it("names a standby that jumps cue by cue", () => {
-    const three = buildCueSheet([cue(1, 1, { follow: 0, link: 5 }), cue(2, 2), cue(3, 5, { follow: 1 }), cue(4, 6)], info);
+    const three = buildCueSheet(
+      [cue(1, 1, { follow: 0, link: 5 }), cue(2, 2), cue(3, 5, { follow: 1 }), cue(4, 6)],
+      info,
+    );
     expect(three.standbys[0]).toEqual({ cueIds: [1, 3, 4], label: "1, 5 and 6" });
   });
 });

@@ -17,7 +17,11 @@ describe("one-line summary", () => {
 
   it("counts channels up and down and names what gets brighter and darker", () => {
     expect(summarizeCue(show, 0, info).text).toBe("2 up · from dark · brighter: Area 1, Area 2, front light");
-    expect(summarizeCue(show, 1, info)).toMatchObject({ up: 2, down: 1, text: "2 up, 1 down · brighter: Area 1, cyc, front light · darker: Area 2, front light" });
+    expect(summarizeCue(show, 1, info)).toMatchObject({
+      up: 2,
+      down: 1,
+      text: "2 up, 1 down · brighter: Area 1, cyc, front light · darker: Area 2, front light",
+    });
     expect(summarizeCue(show, 2, info).text).toBe("no level changes");
     expect(summarizeCue(show, 3, info).text).toBe("3 down · to blackout");
   });

@@ -4,7 +4,12 @@
 import { describe, expect, it } from "vitest";
 import { classifyMoves, computeTracking, levelAt, movesToReach, stateOf, type CueMoves } from "@/lib/cues";
 
-const cue = (id: number, number: number, levels: Record<number, number>, block = false): CueMoves => ({ id, number, levels, block });
+const cue = (id: number, number: number, levels: Record<number, number>, block = false): CueMoves => ({
+  id,
+  number,
+  levels,
+  block,
+});
 
 describe("tracking", () => {
   const show = computeTracking([
@@ -28,7 +33,12 @@ describe("tracking", () => {
       [0, 0, 60], // cue 5 records nothing: everything tracks
     ]);
     expect(levelAt(show, 0, 999)).toBe(0);
-    expect(stateOf(show, 1)).toEqual(new Map([[1, 70], [2, 80]]));
+    expect(stateOf(show, 1)).toEqual(
+      new Map([
+        [1, 70],
+        [2, 80],
+      ]),
+    );
   });
 
   it("classifies up, down, tracked and held", () => {
@@ -49,7 +59,7 @@ describe("tracking", () => {
 
   it("matches a direct replay on a random show", () => {
     let seed = 7;
-    const rnd = () => ((seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31);
+    const rnd = () => (seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31;
     const cues: CueMoves[] = Array.from({ length: 60 }, (_, i) => {
       const levels: Record<number, number> = {};
       for (let k = 0; k < 5; k++) levels[1 + Math.floor(rnd() * 30)] = Math.floor(rnd() * 101);
@@ -65,8 +75,15 @@ describe("tracking", () => {
   });
 
   it("finds the moves that reach a target state", () => {
-    const before = new Map([[1, 50], [2, 30], [3, 0]]);
-    const target = new Map([[1, 50], [4, 100]]);
+    const before = new Map([
+      [1, 50],
+      [2, 30],
+      [3, 0],
+    ]);
+    const target = new Map([
+      [1, 50],
+      [4, 100],
+    ]);
     expect(movesToReach(before, target)).toEqual({ 2: 0, 4: 100 });
   });
 });

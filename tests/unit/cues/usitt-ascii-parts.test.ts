@@ -34,7 +34,12 @@ describe("reading parts", () => {
   it("puts each part's times and channels into the part, and its levels into the cue", () => {
     expect(r.errors).toEqual([]);
     const [c7, c8] = r.cues;
-    expect(c7).toMatchObject({ label: "Sunrise in two parts", upTime: 4, follow: 2, levels: { 1: 40, 2: 40, 20: 100, 21: 80, 30: 50 } });
+    expect(c7).toMatchObject({
+      label: "Sunrise in two parts",
+      upTime: 4,
+      follow: 2,
+      levels: { 1: 40, 2: 40, 20: 100, 21: 80, 30: 50 },
+    });
     expect(c7.parts).toEqual([
       { part: 2, label: "sky", upTime: 10, downTime: 6, delay: 3, channels: [20, 21] },
       { part: 3, label: "", upTime: 1, downTime: null, delay: 0, channels: [30] },
@@ -46,7 +51,10 @@ describe("reading parts", () => {
     const bad = (...l: string[]) => readUsittAscii(["IDENT 3:0", "CUE 1", ...l, "ENDDATA"].join("\r\n")).errors[0];
     expect(bad("PART 0")).toEqual({ line: 3, message: 'PART "0": a part number is a whole number from 1 to 20' });
     expect(bad("PART 21")?.message).toMatch(/from 1 to 20/);
-    expect(bad("PART 2", "CHAN 5@10", "PART 3", "CHAN 5@20")).toEqual({ line: 2, message: "cue 1: channel 5 is in part 2 and part 3; a channel can be in one part only" });
+    expect(bad("PART 2", "CHAN 5@10", "PART 3", "CHAN 5@20")).toEqual({
+      line: 2,
+      message: "cue 1: channel 5 is in part 2 and part 3; a channel can be in one part only",
+    });
     expect(bad("PART 2", "PART 2")?.message).toMatch(/part 2 appears twice/);
   });
 });
@@ -85,7 +93,8 @@ describe("writing parts, then reading them back", () => {
     const a = computeTracking(show.map((c, i) => ({ ...c, id: i })));
     for (const mode of ["state", "moves"] as const) {
       const b = computeTracking(toStoredMoves(read.cues, mode).map((c, i) => ({ ...c, id: i })));
-      for (let i = 0; i < show.length; i++) for (const ch of a.channels) expect(levelAt(b, i, ch)).toBe(levelAt(a, i, ch));
+      for (let i = 0; i < show.length; i++)
+        for (const ch of a.channels) expect(levelAt(b, i, ch)).toBe(levelAt(a, i, ch));
     }
   });
 });

@@ -13,8 +13,23 @@ const file = (...l: string[]) => ["IDENT 3:0", ...l, "ENDDATA"].join("\r\n");
 
 // From memory (REFERENCE.md, USITT ASCII): the keywords of the standard. `$` keywords are the makers' own.
 const STANDARD = new Set([
-  "IDENT", "MANUFACTURER", "CONSOLE", "CLEAR", "SET", "PATCH", "GROUP", "SUB", "CUE", "PART", "UP", "DOWN",
-  "FOLLOWON", "LINK", "TEXT", "CHAN", "ENDDATA",
+  "IDENT",
+  "MANUFACTURER",
+  "CONSOLE",
+  "CLEAR",
+  "SET",
+  "PATCH",
+  "GROUP",
+  "SUB",
+  "CUE",
+  "PART",
+  "UP",
+  "DOWN",
+  "FOLLOWON",
+  "LINK",
+  "TEXT",
+  "CHAN",
+  "ENDDATA",
 ]);
 
 describe("the follow time keyword", () => {
@@ -40,13 +55,38 @@ describe("no keyword the standard does not define", () => {
     const text = writeUsittAscii({
       title: "Salt and Lantern",
       cues: [
-        cue({ number: 1, label: "Dawn", upTime: 8, downTime: 12, delay: 1.5, downDelay: 4, follow: 3, link: 3, page: "2", callNote: "warn", block: true, levels: { 1: 80 } }),
-        cue({ number: 2, upTime: 3, downDelay: 2, levels: { 2: 40 }, parts: [{ part: 2, label: "sky", upTime: 6, downTime: 2, delay: 1, channels: [2] }] }),
+        cue({
+          number: 1,
+          label: "Dawn",
+          upTime: 8,
+          downTime: 12,
+          delay: 1.5,
+          downDelay: 4,
+          follow: 3,
+          link: 3,
+          page: "2",
+          callNote: "warn",
+          block: true,
+          levels: { 1: 80 },
+        }),
+        cue({
+          number: 2,
+          upTime: 3,
+          downDelay: 2,
+          levels: { 2: 40 },
+          parts: [{ part: 2, label: "sky", upTime: 6, downTime: 2, delay: 1, channels: [2] }],
+        }),
         cue({ number: 3, levels: { 1: 0 } }),
       ],
-      patch: [{ channel: 1, universe: 1, address: 1 }, { channel: 2, universe: 2, address: 5 }],
+      patch: [
+        { channel: 1, universe: 1, address: 1 },
+        { channel: 2, universe: 2, address: 5 },
+      ],
     });
-    const keywords = text.split("\r\n").filter((l) => l && !l.startsWith("!")).map((l) => l.split(/[\s,/<>=@]+/)[0]);
+    const keywords = text
+      .split("\r\n")
+      .filter((l) => l && !l.startsWith("!"))
+      .map((l) => l.split(/[\s,/<>=@]+/)[0]);
     for (const k of keywords) expect(k.startsWith("$") || STANDARD.has(k), k).toBe(true);
     expect(text).not.toMatch(/^(WAIT|DELAY)\b/m);
   });
@@ -83,14 +123,22 @@ describe("a down-only delay", () => {
     expect(text).toContain("CUE 1\r\nUP 3\r\nDOWN 6 2\r\n");
     expect(text).toContain("CUE 2\r\nUP 4 1\r\nDOWN 5 0\r\n");
     const back = toStoredMoves(readUsittAscii(text).cues, "state");
-    expect(back.map((c) => [c.delay, c.downDelay ?? null])).toEqual([[0, 2], [1, 0], [1, null]]);
+    expect(back.map((c) => [c.delay, c.downDelay ?? null])).toEqual([
+      [0, 2],
+      [1, 0],
+      [1, null],
+    ]);
   });
 
   it("a part's separate down delay cannot be kept, and the import says so", () => {
     // Parts carry one wait (Throwline's model): never drop a different down delay silently.
     const r = readUsittAscii(file("CUE 1", "CHAN 1@10", "PART 2", "UP 4 1", "DOWN 6 3", "CHAN 2@50"));
     expect(r.cues[0].parts[0]).toMatchObject({ upTime: 4, downTime: 6, delay: 1 });
-    expect(r.notices).toContainEqual({ line: 6, message: "part 2 of cue 1: its down delay (3 s) differs from its up delay (1 s); a part keeps one wait, so it waits 1 s" });
+    expect(r.notices).toContainEqual({
+      line: 6,
+      message:
+        "part 2 of cue 1: its down delay (3 s) differs from its up delay (1 s); a part keeps one wait, so it waits 1 s",
+    });
   });
 });
 
@@ -105,11 +153,19 @@ describe("levels Throwline rounds", () => {
     expect(r.cues[0].levels).toEqual({ 1: 50, 2: 50 });
     expect(r.cues[1].levels).toEqual({ 3: 34, 4: 12, 5: 100 });
     const rounding = r.notices.filter((n) => /rounded/.test(n.message));
-    expect(rounding).toEqual([{ line: 3, message: "3 levels were rounded to whole percentages (Throwline keeps whole percentages), the first on line 3: H80 → 50" }]);
+    expect(rounding).toEqual([
+      {
+        line: 3,
+        message:
+          "3 levels were rounded to whole percentages (Throwline keeps whole percentages), the first on line 3: H80 → 50",
+      },
+    ]);
   });
 
   it("whole levels give no notice", () => {
-    expect(readUsittAscii(file("CUE 1", "CHAN 1@50 2@FL 3@H00")).notices.filter((n) => /rounded/.test(n.message))).toEqual([]);
+    expect(
+      readUsittAscii(file("CUE 1", "CHAN 1@50 2@FL 3@H00")).notices.filter((n) => /rounded/.test(n.message)),
+    ).toEqual([]);
   });
 });
 
@@ -136,7 +192,11 @@ describe("the patch", () => {
 
   it("keeps PATCH lines within 80 characters", () => {
     // USITT ASCII 3.0: at most 80 characters a line
-    const many = Array.from({ length: 200 }, (_, i) => ({ channel: i + 1, universe: 1 + Math.floor(i / 100), address: 1 + (i % 100) * 5 }));
+    const many = Array.from({ length: 200 }, (_, i) => ({
+      channel: i + 1,
+      universe: 1 + Math.floor(i / 100),
+      address: 1 + (i % 100) * 5,
+    }));
     const text = writeUsittAscii({ title: "t", cues: [], patch: many });
     const lines = text.split("\r\n");
     expect(Math.max(...lines.map((l) => l.length))).toBeLessThanOrEqual(80);
@@ -145,7 +205,12 @@ describe("the patch", () => {
 
   it("names the line of a bad PATCH entry", () => {
     const r = readUsittAscii(file("PATCH 1 5<0@FL"));
-    expect(r.errors).toEqual([{ line: 2, message: "PATCH: address 0 for channel 5 is not a DMX address (1 to 32,767,488 counted across universes)" }]);
+    expect(r.errors).toEqual([
+      {
+        line: 2,
+        message: "PATCH: address 0 for channel 5 is not a DMX address (1 to 32,767,488 counted across universes)",
+      },
+    ]);
     expect(readUsittAscii(file("PATCH 1 5<7")).errors[0]?.message).toMatch(/channel, address and level/);
   });
 

@@ -67,22 +67,37 @@ describe("bad files", () => {
   const firstError = (text: string) => readUsittAscii(text).errors[0];
 
   it("names the line of a level out of range", () => {
-    expect(firstError(lines("CUE 1", "CHAN 5@120", "ENDDATA"))).toEqual({ line: 3, message: "level 120 for channel 5 is above 100" });
-    expect(firstError(lines("CUE 1", "CHAN 5@-5", "ENDDATA"))).toEqual({ line: 3, message: "level -5 for channel 5 is below 0" });
+    expect(firstError(lines("CUE 1", "CHAN 5@120", "ENDDATA"))).toEqual({
+      line: 3,
+      message: "level 120 for channel 5 is above 100",
+    });
+    expect(firstError(lines("CUE 1", "CHAN 5@-5", "ENDDATA"))).toEqual({
+      line: 3,
+      message: "level -5 for channel 5 is below 0",
+    });
     expect(firstError(lines("CUE 1", "CHAN 5@abc", "ENDDATA"))?.message).toMatch(/not a level/);
     expect(firstError(lines("CUE 1", "CHAN 5", "ENDDATA"))?.message).toMatch(/channel 5 has no level/);
   });
 
   it("names the line of a bad time", () => {
-    expect(firstError(lines("CUE 1", "UP abc", "ENDDATA"))).toMatchObject({ line: 3, message: expect.stringMatching(/UP time "abc" is not a time/) });
+    expect(firstError(lines("CUE 1", "UP abc", "ENDDATA"))).toMatchObject({
+      line: 3,
+      message: expect.stringMatching(/UP time "abc" is not a time/),
+    });
   });
 
   it("names both lines of a duplicate cue", () => {
-    expect(firstError(lines("CUE 4", "CUE 5", "CUE 4.000", "ENDDATA"))).toEqual({ line: 4, message: "cue 4 appears twice (first on line 2)" });
+    expect(firstError(lines("CUE 4", "CUE 5", "CUE 4.000", "ENDDATA"))).toEqual({
+      line: 4,
+      message: "cue 4 appears twice (first on line 2)",
+    });
   });
 
   it("refuses a file cut short before ENDDATA", () => {
-    expect(firstError(lines("CUE 1", "CHAN 1@50", ""))).toMatchObject({ line: 3, message: expect.stringMatching(/without ENDDATA/) });
+    expect(firstError(lines("CUE 1", "CHAN 1@50", ""))).toMatchObject({
+      line: 3,
+      message: expect.stringMatching(/without ENDDATA/),
+    });
   });
 
   it("refuses carriage returns without line feeds", () => {
@@ -116,7 +131,15 @@ describe("export, then import", () => {
   const cue = (c: Partial<CueWithMoves> & { number: number }): CueWithMoves => ({ ...CUE_DEFAULTS, levels: {}, ...c });
   const show: CueWithMoves[] = [
     cue({ number: 0.5, label: "Preset", upTime: 0, levels: { 1: 30, 2: 30 }, page: "1" }),
-    cue({ number: 1, label: "Dawn — on the harbour", upTime: 8, downTime: 12, delay: 1.5, levels: { 1: 80, 3: 100 }, callNote: "Standby on the foghorn\nwarn sound" }),
+    cue({
+      number: 1,
+      label: "Dawn — on the harbour",
+      upTime: 8,
+      downTime: 12,
+      delay: 1.5,
+      levels: { 1: 80, 3: 100 },
+      callNote: "Standby on the foghorn\nwarn sound",
+    }),
     cue({ number: 1.5, label: "x".repeat(120), upTime: 90, follow: 2, levels: { 2: 0 } }),
     cue({ number: 2, upTime: 3, levels: { 5: 45 }, block: true, link: 0.5 }),
     cue({ number: 3, upTime: 4, levels: {} }),
@@ -141,13 +164,15 @@ describe("export, then import", () => {
     expect(stored.map(fields)).toEqual(show.map(fields));
     const a = computeTracking(show.map((c, i) => ({ ...c, id: i })));
     const b = computeTracking(stored.map((c, i) => ({ ...c, id: i })));
-    for (let i = 0; i < show.length; i++) for (const ch of a.channels) expect(levelAt(b, i, ch)).toBe(levelAt(a, i, ch));
+    for (let i = 0; i < show.length; i++)
+      for (const ch of a.channels) expect(levelAt(b, i, ch)).toBe(levelAt(a, i, ch));
   });
 
   it("reads the same looks when the file is taken as changes only", () => {
     const stored = toStoredMoves(readUsittAscii(text).cues, "moves");
     const a = computeTracking(show.map((c, i) => ({ ...c, id: i })));
     const b = computeTracking(stored.map((c, i) => ({ ...c, id: i })));
-    for (let i = 0; i < show.length; i++) for (const ch of a.channels) expect(levelAt(b, i, ch)).toBe(levelAt(a, i, ch));
+    for (let i = 0; i < show.length; i++)
+      for (const ch of a.channels) expect(levelAt(b, i, ch)).toBe(levelAt(a, i, ch));
   });
 });

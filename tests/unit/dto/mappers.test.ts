@@ -13,13 +13,27 @@ describe("plain(row, keys)", () => {
   // A stand-in for a model instance: fields behind getters, plus things that must not leak.
   class Row {
     #secret = "hash";
-    get id() { return 7; }
-    get name() { return "Pipe 1"; }
-    get x2() { return null; }
-    get sortOrder() { return undefined; }
-    get updatedAt() { return new Date(Date.UTC(2026, 11, 5, 14, 3, 9, 120)); }
-    get focusedAt() { return null as Date | null; }
-    get passwordHash() { return this.#secret; }
+    get id() {
+      return 7;
+    }
+    get name() {
+      return "Pipe 1";
+    }
+    get x2() {
+      return null;
+    }
+    get sortOrder() {
+      return undefined;
+    }
+    get updatedAt() {
+      return new Date(Date.UTC(2026, 11, 5, 14, 3, 9, 120));
+    }
+    get focusedAt() {
+      return null as Date | null;
+    }
+    get passwordHash() {
+      return this.#secret;
+    }
   }
 
   it("copies only the listed fields, dates as ISO 8601 UTC strings", () => {
@@ -60,11 +74,33 @@ const positions = [
   { id: 1, name: "Pipe 1", kind: "overhead-pipe", trimHeight: 7.5 },
   { id: 2, name: "SL boom", kind: "boom", trimHeight: 4 },
 ] as unknown as PositionDto[];
-const types = [{ id: 5, name: "Profile 26", family: "profile", coneMinDeg: 26, coneMaxDeg: 26, defaultSoftnessDeg: 3, lensDropM: 0.3 }] as unknown as FixtureTypeDto[];
+const types = [
+  {
+    id: 5,
+    name: "Profile 26",
+    family: "profile",
+    coneMinDeg: 26,
+    coneMaxDeg: 26,
+    defaultSoftnessDeg: 3,
+    lensDropM: 0.3,
+  },
+] as unknown as FixtureTypeDto[];
 const points = [{ id: 9, name: "Area C", x: 0.5, y: 2 }] as unknown as FocusPointDto[];
 
 const record = (over: Partial<FixtureRecord>): FixtureRecord =>
-  ({ ...emptyFixture(), id: 1, productionId: 1, positionId: 1, fixtureTypeId: 5, unitNumber: "1", x: 0, y: 0, version: 1, updatedAt: "2026-12-05T00:00:00.000Z", ...over }) as FixtureRecord;
+  ({
+    ...emptyFixture(),
+    id: 1,
+    productionId: 1,
+    positionId: 1,
+    fixtureTypeId: 5,
+    unitNumber: "1",
+    x: 0,
+    y: 0,
+    version: 1,
+    updatedAt: "2026-12-05T00:00:00.000Z",
+    ...over,
+  }) as FixtureRecord;
 
 const rig = [
   record({ id: 1, unitNumber: "1", x: -2, y: -4, focusPointId: 9 }),
@@ -83,7 +119,12 @@ describe("one fixture join for the API and the plot", () => {
     expect(plot.map((f) => f.id)).toEqual(api.map((f) => f.id));
     for (const [i, f] of plot.entries()) {
       const a = api[i];
-      expect([f.positionName, f.typeName, f.family, f.focusPointName]).toEqual([a.positionName, a.typeName, a.family, a.focusPointName]);
+      expect([f.positionName, f.typeName, f.family, f.focusPointName]).toEqual([
+        a.positionName,
+        a.typeName,
+        a.family,
+        a.focusPointName,
+      ]);
       expect(f.computed).toEqual(a.computed);
     }
   });
@@ -91,7 +132,12 @@ describe("one fixture join for the API and the plot", () => {
   it("names the position, type and focus point, and leaves out a fixture whose position is gone", () => {
     const out = joinFixtures(rig, join);
     expect(out.map((f) => f.id)).toEqual([1, 2, 3]);
-    expect(out[0]).toMatchObject({ positionName: "Pipe 1", typeName: "Profile 26", family: "profile", focusPointName: "Area C" });
+    expect(out[0]).toMatchObject({
+      positionName: "Pipe 1",
+      typeName: "Profile 26",
+      family: "profile",
+      focusPointName: "Area C",
+    });
     expect(out[1].focusPointName).toBeNull();
     expect(join(rig[3])).toBeNull();
   });

@@ -16,9 +16,17 @@ const tags = (html: string) => html.match(/<[a-zA-Z][^>]*>/g) ?? [];
 
 function hostileChart() {
   const fixture = makeFixture({
-    id: 41, productionId: 2, focusPhotoUploadId: 5,
-    purpose: SCRIPT, notes: BREAKOUT, focusNotes: SCRIPT, colour: BREAKOUT, gobo: SCRIPT,
-    positionName: BREAKOUT, unitNumber: SCRIPT, focusPointName: BREAKOUT,
+    id: 41,
+    productionId: 2,
+    focusPhotoUploadId: 5,
+    purpose: SCRIPT,
+    notes: BREAKOUT,
+    focusNotes: SCRIPT,
+    colour: BREAKOUT,
+    gobo: SCRIPT,
+    positionName: BREAKOUT,
+    unitNumber: SCRIPT,
+    focusPointName: BREAKOUT,
     shutterCuts: [{ label: "top", a: { x: -4, y: 1.5 }, b: { x: 4, y: 1.5 } }],
   });
   const landmarks = [{ name: SCRIPT, a: { x: -6, y: 2 }, b: { x: 6, y: 2 } }, ...outlineLandmarks(PRODUCTION)];
@@ -42,13 +50,21 @@ describe("a focus chart shows hostile text as text", () => {
     const html = chartMarkup(chart, { landmarks, units: "metric" });
     expectInert(html);
     // The alt text and the photo link are attributes: quotes inside them stay escaped.
-    expect(html).toContain(`alt="Focus photo of &quot;&gt;&lt;img src=x onerror=alert(1)&gt; unit &lt;script&gt;alert(1)&lt;/script&gt;"`);
+    expect(html).toContain(
+      `alt="As focused: &quot;&gt;&lt;img src=x onerror=alert(1)&gt; unit &lt;script&gt;alert(1)&lt;/script&gt;"`,
+    );
   });
 
   it("in the server's PDF sheets (static markup), header included", () => {
     const { chart, landmarks } = hostileChart();
     const sheets = paginate([chart], 4, { newPagePerPosition: true });
-    const [html] = focusSheetsMarkup(sheets, { productionName: SCRIPT, printedAt: BREAKOUT, perPage: 4, units: "metric", landmarks });
+    const [html] = focusSheetsMarkup(sheets, {
+      productionName: SCRIPT,
+      printedAt: BREAKOUT,
+      perPage: 4,
+      units: "metric",
+      landmarks,
+    });
     expectInert(html);
     expect(html).toContain("<b>&lt;script&gt;alert(1)&lt;/script&gt;</b>");
   });
@@ -56,6 +72,10 @@ describe("a focus chart shows hostile text as text", () => {
   it("the check itself catches markup that is not escaped", () => {
     // The same assertions fail on a chart built by joining strings, as the old renderer would without its escape.
     expect(() => expectInert(`<p>${SCRIPT}</p><img src="a"><p>${BREAKOUT}</p>`)).toThrow();
-    expect(() => expectInert(`<img alt="${BREAKOUT}"> &lt;script&gt;alert(1)&lt;/script&gt; &quot;&gt;&lt;img src=x onerror=alert(1)&gt;`)).toThrow();
+    expect(() =>
+      expectInert(
+        `<img alt="${BREAKOUT}"> &lt;script&gt;alert(1)&lt;/script&gt; &quot;&gt;&lt;img src=x onerror=alert(1)&gt;`,
+      ),
+    ).toThrow();
   });
 });

@@ -9,7 +9,12 @@ import { makeFixture, PRODUCTION } from "./fixture-builder";
 function unitOf(family: string, min: number, max: number, coneDeg: number | null = null): FixtureDto {
   const base = makeFixture({ family, coneDeg, softnessDeg: null });
   const computed = computeFixtureGeometry(
-    { ...base, focusPoint: null, position: { trimHeight: 8 }, type: { coneMinDeg: min, coneMaxDeg: max, defaultSoftnessDeg: 2, lensDropM: 0.4 } },
+    {
+      ...base,
+      focusPoint: null,
+      position: { trimHeight: 8 },
+      type: { coneMinDeg: min, coneMaxDeg: max, defaultSoftnessDeg: 2, lensDropM: 0.4 },
+    },
     PRODUCTION.headHeight,
   );
   return { ...base, computed };
@@ -39,7 +44,9 @@ describe("the chart's beam fields follow the unit's family", () => {
     for (const gone of ["zoom", "iris", "edge", "goboOrientation"]) expect(k).not.toContain(gone);
     // arithmetic: (33 − 15) / (60 − 15) = 40 % of the travel
     expect(value(f, "spotFlood")).toBe("40 % toward flood, 33° cone");
-    const words = buildFocusChart(f, PRODUCTION).beam.map((r) => `${r.label} ${r.value}`).join(" | ");
+    const words = buildFocusChart(f, PRODUCTION)
+      .beam.map((r) => `${r.label} ${r.value}`)
+      .join(" | ");
     expect(words).not.toMatch(/Zoom|Iris|Edge/);
   });
 
@@ -58,7 +65,9 @@ describe("the chart's beam fields follow the unit's family", () => {
   });
 
   it("the Excel sheet has a column for every family's fields, filled where the family has them", () => {
-    const charts = [unitOf("profile", 25, 50), unitOf("fresnel", 15, 60, 60)].map((f) => buildFocusChart(f, PRODUCTION));
+    const charts = [unitOf("profile", 25, 50), unitOf("fresnel", 15, 60, 60)].map((f) =>
+      buildFocusChart(f, PRODUCTION),
+    );
     const columns = focusColumns(charts).map((c) => c.key);
     expect(columns).toEqual(expect.arrayContaining(["zoom", "iris", "spotFlood"]));
     expect(new Set(columns).size).toBe(columns.length);

@@ -37,9 +37,14 @@ export async function loadDemoTables(): Promise<DemoTables> {
 export function demoProduction(t: DemoTables): ChartProduction {
   const p = t.productions[0] as Record<string, unknown>;
   return {
-    name: String(p.name), displayUnits: p.display_units as "metric", datumName: String(p.datum_name),
-    headHeight: Number(p.head_height), prosceniumWidth: Number(p.proscenium_width), apronDepth: Number(p.apron_depth),
-    backWallY: Number(p.back_wall_y), stageWidth: Number(p.stage_width),
+    name: String(p.name),
+    displayUnits: p.display_units as "metric",
+    datumName: String(p.datum_name),
+    headHeight: Number(p.head_height),
+    prosceniumWidth: Number(p.proscenium_width),
+    apronDepth: Number(p.apron_depth),
+    backWallY: Number(p.back_wall_y),
+    stageWidth: Number(p.stage_width),
   };
 }
 
@@ -53,23 +58,36 @@ export function demoFixtures(t: DemoTables): FixtureDto[] {
     const position = t.positions.find((x) => x.id === r.positionId)!;
     const type = t.fixture_types.find((x) => x.id === r.fixtureTypeId)!;
     const point = t.focus_points.find((x) => x.id === r.focusPointId) ?? null;
-    const cuts = typeof r.shutterCuts === "string" ? JSON.parse(r.shutterCuts) : r.shutterCuts ?? null;
-    const record = { ...r, shutterCuts: cuts, productionId: row.production_id, focusedAt: null, focusedBy: null, updatedAt: "2026-12-02T10:00:00.000Z" };
+    const cuts = typeof r.shutterCuts === "string" ? JSON.parse(r.shutterCuts) : (r.shutterCuts ?? null);
+    const record = {
+      ...r,
+      shutterCuts: cuts,
+      productionId: row.production_id,
+      focusedAt: null,
+      focusedBy: null,
+      updatedAt: "2026-12-02T10:00:00.000Z",
+    };
     const computed = computeFixtureGeometry(
       {
         ...(record as never as FixtureDto),
         focusPoint: point ? { x: Number(point.x), y: Number(point.y) } : null,
         position: { trimHeight: Number(position.trim_height) },
         type: {
-          coneMinDeg: Number(type.cone_min_deg), coneMaxDeg: Number(type.cone_max_deg),
-          defaultSoftnessDeg: Number(type.default_softness_deg), lensDropM: Number(type.lens_drop_m),
+          coneMinDeg: Number(type.cone_min_deg),
+          coneMaxDeg: Number(type.cone_max_deg),
+          defaultSoftnessDeg: Number(type.default_softness_deg),
+          lensDropM: Number(type.lens_drop_m),
         },
       },
       p.headHeight,
     );
     return {
-      ...record, positionName: String(position.name), typeName: String(type.name), family: String(type.family),
-      focusPointName: point ? String(point.name) : null, computed,
+      ...record,
+      positionName: String(position.name),
+      typeName: String(type.name),
+      family: String(type.family),
+      focusPointName: point ? String(point.name) : null,
+      computed,
     } as unknown as FixtureDto;
   });
 }

@@ -10,7 +10,8 @@ function sentences(chart: FocusChart): string[] {
   return [
     ...[...chart.identity, ...chart.focus, ...chart.beam].map((r) => `${r.label} ${r.value}`),
     ...chart.cuts.map((c) => `${c.words} — ${c.cutterWords}`),
-    chart.focusedLine, ...chart.warnings,
+    chart.focusedLine,
+    ...chart.warnings,
   ];
 }
 

@@ -6,7 +6,9 @@ import { diagramMarkup } from "./render-markup";
 
 /** The x extent of the dashed outer outline (an unrotated <ellipse>), in plan metres (1 SVG unit = 1 m). */
 function outlineXs(svg: string): number[] {
-  const [, cx, rx] = svg.match(/<ellipse cx="([^"]+)" cy="[^"]+" rx="([^"]+)" ry="[^"]+" class="fc-outline"(?:\/>|><\/ellipse>)/)!.map(Number);
+  const [, cx, rx] = svg
+    .match(/<ellipse cx="([^"]+)" cy="[^"]+" rx="([^"]+)" ry="[^"]+" class="fc-outline"(?:\/>|><\/ellipse>)/)!
+    .map(Number);
   return [cx - rx, cx + rx];
 }
 
@@ -20,8 +22,18 @@ describe("the chart diagram is drawn to scale", () => {
   });
 
   it("draws the mark, the cut, the arrow and the stage lines, and escapes names", () => {
-    const f = makeFixture({ lens: { x: 0, y: -8, z: 7 }, mark: { x: 0, y: 0.5 }, focusPointName: "<Area & 1>", shutterCuts: [{ label: "bottom", a: { x: -4, y: -1.5 }, b: { x: 4, y: -1.5 } }] });
-    const svg = diagramMarkup({ fixture: f, landmarks: outlineLandmarks(PRODUCTION), units: "metric", cutLabels: ["T"] });
+    const f = makeFixture({
+      lens: { x: 0, y: -8, z: 7 },
+      mark: { x: 0, y: 0.5 },
+      focusPointName: "<Area & 1>",
+      shutterCuts: [{ label: "bottom", a: { x: -4, y: -1.5 }, b: { x: 4, y: -1.5 } }],
+    });
+    const svg = diagramMarkup({
+      fixture: f,
+      landmarks: outlineLandmarks(PRODUCTION),
+      units: "metric",
+      cutLabels: ["T"],
+    });
     expect(svg).toContain('class="fc-cut"');
     expect(svg).toContain('marker-end="url(#fc-head)"');
     expect(svg).toContain("&lt;Area &amp; 1&gt;");
@@ -44,12 +56,21 @@ describe("stage lines are cut to the diagram's view", () => {
   const box = { minX: 0, minY: 0, maxX: 4, maxY: 4 };
   it("keeps the part of a long line inside the box", () => {
     // plane geometry (Liang–Barsky clipping): y = 2 from x −10 to 10 meets the box at x 0 and 4
-    expect(clipSegment({ x: -10, y: 2 }, { x: 10, y: 2 }, box)).toEqual([{ x: 0, y: 2 }, { x: 4, y: 2 }]);
+    expect(clipSegment({ x: -10, y: 2 }, { x: 10, y: 2 }, box)).toEqual([
+      { x: 0, y: 2 },
+      { x: 4, y: 2 },
+    ]);
     // the diagonal y = x from (−2,−2) to (6,6) enters at (0,0) and leaves at (4,4)
-    expect(clipSegment({ x: -2, y: -2 }, { x: 6, y: 6 }, box)).toEqual([{ x: 0, y: 0 }, { x: 4, y: 4 }]);
+    expect(clipSegment({ x: -2, y: -2 }, { x: 6, y: 6 }, box)).toEqual([
+      { x: 0, y: 0 },
+      { x: 4, y: 4 },
+    ]);
   });
   it("drops a line that misses the box and keeps one wholly inside", () => {
     expect(clipSegment({ x: -5, y: 5 }, { x: 10, y: 5 }, box)).toBeNull(); // plane geometry: y = 5 is above the box
-    expect(clipSegment({ x: 1, y: 1 }, { x: 3, y: 2 }, box)).toEqual([{ x: 1, y: 1 }, { x: 3, y: 2 }]);
+    expect(clipSegment({ x: 1, y: 1 }, { x: 3, y: 2 }, box)).toEqual([
+      { x: 1, y: 1 },
+      { x: 3, y: 2 },
+    ]);
   });
 });

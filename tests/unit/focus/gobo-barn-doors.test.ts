@@ -47,13 +47,22 @@ describe("barn doors in words", () => {
 
 describe("the chart's rows", () => {
   it("uses the fixture's own gobo rotation and barn doors before an accessory's note", () => {
-    const f = makeFixture({ gobo: "leaf breakup", goboRotationDeg: 90, barnDoorBottom: "off the lip", family: "profile" }); // a fresnel takes no gobo, so its chart has no gobo row
-    const chart = buildFocusChart(f, PRODUCTION, { extras: { accessories: ["barn doors"], barnDoors: "fitted", goboOrientation: "slot A" } });
+    const f = makeFixture({
+      gobo: "leaf breakup",
+      goboRotationDeg: 90,
+      barnDoorBottom: "off the lip",
+      family: "profile",
+    }); // a fresnel takes no gobo, so its chart has no gobo row
+    const chart = buildFocusChart(f, PRODUCTION, {
+      extras: { accessories: ["barn doors"], barnDoors: "fitted", goboOrientation: "slot A" },
+    });
     expect(value(chart.beam, "goboOrientation")).toBe("90° clockwise, looking along the beam");
     expect(value(chart.beam, "barnDoors")).toBe("bottom off the lip");
   });
   it("falls back to the accessory's note, and says so when nothing is recorded", () => {
-    const withAccessory = buildFocusChart(makeFixture({ gobo: "breakup" }), PRODUCTION, { extras: { barnDoors: "fitted", goboOrientation: "slot A" } });
+    const withAccessory = buildFocusChart(makeFixture({ gobo: "breakup" }), PRODUCTION, {
+      extras: { barnDoors: "fitted", goboOrientation: "slot A" },
+    });
     expect(value(withAccessory.beam, "goboOrientation")).toBe("slot A");
     expect(value(withAccessory.beam, "barnDoors")).toBe("fitted");
     const bare = buildFocusChart(makeFixture(), PRODUCTION);
@@ -65,13 +74,20 @@ describe("the chart's rows", () => {
   it("shows the focus photo's small copy beside the notes and notes it in the workbook", () => {
     const f = makeFixture({ id: 31, productionId: 4, focusPhotoUploadId: 9 });
     const chart = buildFocusChart(f, PRODUCTION);
-    expect(chart.photo).toEqual({ uploadId: 9, thumbSrc: "/api/productions/4/fixtures/31/photo?u=9&size=thumb", href: "/api/productions/4/fixtures/31/photo?u=9" });
+    expect(chart.photo).toEqual({
+      uploadId: 9,
+      thumbSrc: "/api/productions/4/fixtures/31/photo?u=9&size=thumb",
+      href: "/api/productions/4/fixtures/31/photo?u=9",
+    });
     const html = chartMarkup(chart, { landmarks: outlineLandmarks(PRODUCTION), units: "metric" });
     expect(html).toContain('class="fc-photo" href="/api/productions/4/fixtures/31/photo?u=9"');
     expect(html).toContain('src="/api/productions/4/fixtures/31/photo?u=9&amp;size=thumb"');
     expect(focusRow(chart).photo).toBe("taken");
     // In the PDF the small copy is inline and there is no link to follow.
-    const inline = chartMarkup({ ...chart, photo: { ...chart.photo!, thumbSrc: "data:image/jpeg;base64,AAAA", href: "" } }, { landmarks: [], units: "metric" });
+    const inline = chartMarkup(
+      { ...chart, photo: { ...chart.photo!, thumbSrc: "data:image/jpeg;base64,AAAA", href: "" } },
+      { landmarks: [], units: "metric" },
+    );
     expect(inline).toContain('<span class="fc-photo"><img src="data:image/jpeg;base64,AAAA"');
     expect(buildFocusChart(makeFixture(), PRODUCTION).photo).toBeNull();
   });

@@ -16,7 +16,18 @@ describe("landmarks from the plot and from the stage outline", () => {
     // A leg drawn in plan as a short line across the stage, its onstage end at x = 4.2 m.
     const drawn = landmarksFromRows([{ name: "SL leg 1", x1: 4.2, y1: 1, x2: 6, y2: 1 }]);
     const landmarks = mergeLandmarks(drawn, outlineLandmarks(PRODUCTION));
-    const r = readCut({ label: "left", a: { x: 4.25, y: -1 }, b: { x: 4.25, y: 4 } }, { mark: { x: 2, y: 1 }, panDeg: 90, tiltDeg: 40, family: "profile", landmarks, units: "metric", datumName: "setting line" });
+    const r = readCut(
+      { label: "left", a: { x: 4.25, y: -1 }, b: { x: 4.25, y: 4 } },
+      {
+        mark: { x: 2, y: 1 },
+        panDeg: 90,
+        tiltDeg: 40,
+        family: "profile",
+        landmarks,
+        units: "metric",
+        datumName: "setting line",
+      },
+    );
     expect(r.words).toBe("stage-left edge to the SL leg 1");
     // common practice, no source: light is cut "off" an edge, "to" a leg
     expect(cutPreposition("lip")).toBe("off");

@@ -7,8 +7,17 @@ import { filterFixtures } from "@/lib/focus/filters";
 import { makeFixture, PRODUCTION } from "./fixture-builder";
 
 const charts = (n: number, positions = 1) =>
-  Array.from({ length: n }, (_, i) => buildFocusChart(makeFixture({ id: i + 1, unitNumber: String(i + 1), positionId: (i % positions) + 1, positionName: `P${(i % positions) + 1}` }), PRODUCTION))
-    .sort((a, b) => a.positionId - b.positionId);
+  Array.from({ length: n }, (_, i) =>
+    buildFocusChart(
+      makeFixture({
+        id: i + 1,
+        unitNumber: String(i + 1),
+        positionId: (i % positions) + 1,
+        positionName: `P${(i % positions) + 1}`,
+      }),
+      PRODUCTION,
+    ),
+  ).sort((a, b) => a.positionId - b.positionId);
 
 describe("paging", () => {
   it.each([1, 2, 4, 6] as const)("120 charts at %i a page fill ceil(120/n) pages", (n) => {
@@ -48,16 +57,29 @@ describe("Excel export", () => {
 
   it("writes one row a fixture with every chart value", async () => {
     const list = charts(3);
-    list[0].notes = "=HYPERLINK(\"http://x\")";
+    list[0].notes = '=HYPERLINK("http://x")';
     const buf = await focusWorkbook(list, { productionName: "Test" });
     const wb = new ExcelJS.Workbook();
     await wb.xlsx.load(buf as unknown as ArrayBuffer);
     const ws = wb.getWorksheet("Focus charts")!;
     expect(ws.rowCount).toBe(4);
     const headers = (ws.getRow(1).values as string[]).filter(Boolean);
-    for (const h of ["Channel", "Focus mark", "Hot spot", "Pool at deck", "Soft band at deck", "Edge", "Iris", "Cuts", "As-focused notes"]) expect(headers).toContain(h);
+    for (const h of [
+      "Channel",
+      "Focus mark",
+      "Hot spot",
+      "Pool at deck",
+      "Soft band at deck",
+      "Edge",
+      "Iris",
+      "Cuts",
+      "As-focused notes",
+    ])
+      expect(headers).toContain(h);
     const notesCol = headers.indexOf("Designer notes") + 1;
     expect(ws.getRow(2).getCell(notesCol).value).toBe(`'=HYPERLINK("http://x")`);
-    expect(ws.getRow(2).getCell(headers.indexOf("Focus mark") + 1).value).toBe("1.20 m SL of CL, 2.50 m US of the setting line");
+    expect(ws.getRow(2).getCell(headers.indexOf("Focus mark") + 1).value).toBe(
+      "1.20 m SL of CL, 2.50 m US of the setting line",
+    );
   });
 });

@@ -28,7 +28,10 @@ describe("shutter inversion", () => {
     // Geometry: the cut y = −1.5 lies downstage of the mark (0, 1), so it removes the downstage side, which for a
     // beam travelling upstage (pan 90°) is its near side; the lens inverts the image, so the top shutter cuts
     // the near edge (thin-lens inversion, from memory). The line coincides with the lip (y = −apron depth).
-    const r = readCut({ label: "bottom", a: { x: -3, y: -1.5 }, b: { x: 3, y: -1.5 } }, { ...base, mark: { x: 0, y: 1 }, panDeg: 90, tiltDeg: 35, family: "profile" });
+    const r = readCut(
+      { label: "bottom", a: { x: -3, y: -1.5 }, b: { x: 3, y: -1.5 } },
+      { ...base, mark: { x: 0, y: 1 }, panDeg: 90, tiltDeg: 35, family: "profile" },
+    );
     expect(r.words).toBe("downstage edge off the lip");
     expect(r.beamSide).toBe("near");
     expect(r.physical).toBe("top");
@@ -38,7 +41,10 @@ describe("shutter inversion", () => {
   it("front light: upstage edge off the back wall is the bottom shutter", () => {
     // Geometry: the cut y = 9.45 is upstage of the mark (0, 7): it removes the far side of an upstage-travelling
     // beam, which the inverted image puts on the bottom shutter; it runs 0.05 m from the back wall (y = 9.5).
-    const r = readCut({ label: "top", a: { x: -3, y: 9.45 }, b: { x: 3, y: 9.45 } }, { ...base, mark: { x: 0, y: 7 }, panDeg: 90, tiltDeg: 35, family: "profile" });
+    const r = readCut(
+      { label: "top", a: { x: -3, y: 9.45 }, b: { x: 3, y: 9.45 } },
+      { ...base, mark: { x: 0, y: 7 }, panDeg: 90, tiltDeg: 35, family: "profile" },
+    );
     expect(r.words).toBe("upstage edge off the back wall");
     expect(r.physical).toBe("bottom");
   });
@@ -47,7 +53,10 @@ describe("shutter inversion", () => {
     // Geometry: the cut x = 5.1 is stage left (+x) of the mark (3, 2); facing upstage (+y), +x is on your right,
     // so it removes the beam's right side, which the inverted image puts on the left shutter. The SL
     // proscenium (x = 5) runs parallel 0.1 m away, within the pool's reach, so it names the cut.
-    const r = readCut({ label: "left", a: { x: 5.1, y: -1 }, b: { x: 5.1, y: 4 } }, { ...base, mark: { x: 3, y: 2 }, panDeg: 90, tiltDeg: 40, family: "profile" });
+    const r = readCut(
+      { label: "left", a: { x: 5.1, y: -1 }, b: { x: 5.1, y: 4 } },
+      { ...base, mark: { x: 3, y: 2 }, panDeg: 90, tiltDeg: 40, family: "profile" },
+    );
     expect(r.words).toBe("stage-left edge to the SL proscenium");
     expect(r.beamSide).toBe("right");
     expect(r.physical).toBe("left");
@@ -55,18 +64,24 @@ describe("shutter inversion", () => {
 
   it("side light from a stage-left boom: the upstage edge is the beam's right side, so the left shutter", () => {
     // beam travels toward stage right (pan 180°): facing −x, upstage (+y) is on the right
-    const r = readCut({ label: "right", a: { x: -2, y: 3.2 }, b: { x: 2, y: 3.2 } }, { ...base, mark: { x: 0, y: 2 }, panDeg: 180, tiltDeg: 20, family: "profile" });
+    const r = readCut(
+      { label: "right", a: { x: -2, y: 3.2 }, b: { x: 2, y: 3.2 } },
+      { ...base, mark: { x: 0, y: 2 }, panDeg: 180, tiltDeg: 20, family: "profile" },
+    );
     expect(r.deckEdge).toBe("upstage");
     expect(r.beamSide).toBe("right");
     expect(r.physical).toBe("left");
     expect(r.words).toBe("upstage edge cut at 3.20 m US of the setting line");
   });
 
-  it("a cut whose nearest point to the mark lies on the datum reads \"cut on the setting line\"", () => {
+  it('a cut whose nearest point to the mark lies on the datum reads "cut on the setting line"', () => {
     // plan geometry, worked by hand: the cut runs (0.5, 0)→(2.5, 1), direction (2, 1); the mark (0, 1) projects
     // onto it at t = ((−0.5)·2 + 1·1)/5 = 0, i.e. at (0.5, 0), which lies on the setting line (y = 0). The mark
     // is on the (−1, 2) side of the line, so the cut removes the (1, −2) side: mostly downstage.
-    const r = readCut({ label: "top", a: { x: 0.5, y: 0 }, b: { x: 2.5, y: 1 } }, { ...base, mark: { x: 0, y: 1 }, panDeg: 90, tiltDeg: 40, family: "profile" });
+    const r = readCut(
+      { label: "top", a: { x: 0.5, y: 0 }, b: { x: 2.5, y: 1 } },
+      { ...base, mark: { x: 0, y: 1 }, panDeg: 90, tiltDeg: 40, family: "profile" },
+    );
     expect(r.words).toBe("downstage edge cut on the setting line");
   });
 
@@ -100,14 +115,20 @@ describe("shutter inversion", () => {
   it("a fresnel's barn door cuts its own side", () => {
     // Geometry as the lip case: the near (downstage) side of the beam. Barn doors are outside the lens, so no
     // inversion: the door on the near side is the bottom door (common practice, no source).
-    const r = readCut({ label: "top", a: { x: -3, y: -1.5 }, b: { x: 3, y: -1.5 } }, { ...base, mark: { x: 0, y: 1 }, panDeg: 90, tiltDeg: 35, family: "fresnel" });
+    const r = readCut(
+      { label: "top", a: { x: -3, y: -1.5 }, b: { x: 3, y: -1.5 } },
+      { ...base, mark: { x: 0, y: 1 }, panDeg: 90, tiltDeg: 35, family: "fresnel" },
+    );
     expect(r.cutterWords).toBe("bottom barn door");
   });
 
   it("straight down: no top to the beam, so the stored label stands", () => {
     // Geometry: at a 90° tilt the beam has no near or far side (its cross-section is symmetric about the axis),
     // so which shutter cuts which deck edge depends only on how the unit is turned in its yoke: keep the label.
-    const r = readCut({ label: "left", a: { x: -3, y: -1.5 }, b: { x: 3, y: -1.5 } }, { ...base, mark: { x: 0, y: 1 }, panDeg: 0, tiltDeg: 90, family: "profile" });
+    const r = readCut(
+      { label: "left", a: { x: -3, y: -1.5 }, b: { x: 3, y: -1.5 } },
+      { ...base, mark: { x: 0, y: 1 }, panDeg: 0, tiltDeg: 90, family: "profile" },
+    );
     expect(r.physical).toBeNull();
     expect(r.cutterWords).toMatch(/^left shutter \(as labelled/);
   });
@@ -115,14 +136,23 @@ describe("shutter inversion", () => {
   it("a chart computes pan and tilt itself and words its cuts", () => {
     // Geometry: lens (0, −8, 7) to mark (0, 0.5) pans 90° (straight upstage) and tilts 39.5° down
     // (atan(7/8.5)); the lip cut is then the near side, as in the lip case above.
-    const f = makeFixture({ lens: { x: 0, y: -8, z: 7 }, mark: { x: 0, y: 0.5 }, shutterCuts: [{ label: "bottom", a: { x: -4, y: -1.5 }, b: { x: 4, y: -1.5 } }] });
+    const f = makeFixture({
+      lens: { x: 0, y: -8, z: 7 },
+      mark: { x: 0, y: 0.5 },
+      shutterCuts: [{ label: "bottom", a: { x: -4, y: -1.5 }, b: { x: 4, y: -1.5 } }],
+    });
     const chart = buildFocusChart(f, PRODUCTION);
-    expect(chart.cuts.map((c) => `${c.words} — ${c.cutterWords}`)).toEqual(["downstage edge off the lip — top shutter"]);
+    expect(chart.cuts.map((c) => `${c.words} — ${c.cutterWords}`)).toEqual([
+      "downstage edge off the lip — top shutter",
+    ]);
   });
 
   it("a cut through the mark is a warning on the chart, not a crash", () => {
     // Geometry: the mark (0, 1) lies on the cut y = 1, so neither side of the line is "the side with the mark".
-    const f = makeFixture({ mark: { x: 0, y: 1 }, shutterCuts: [{ label: "top", a: { x: -1, y: 1 }, b: { x: 1, y: 1 } }] });
+    const f = makeFixture({
+      mark: { x: 0, y: 1 },
+      shutterCuts: [{ label: "top", a: { x: -1, y: 1 }, b: { x: 1, y: 1 } }],
+    });
     const chart = buildFocusChart(f, PRODUCTION);
     expect(chart.cuts).toHaveLength(0);
     expect(chart.warnings.join(" ")).toMatch(/Cut 1: The focus mark lies on a shutter cut/);

@@ -11,13 +11,26 @@ function run(csv: string, lengthUnit: "m" | "ft" = "m") {
 
 describe("column mapping", () => {
   it("matches headers case-insensitively, with units and our aliases, each field once", () => {
-    expect(suggestMapping(["POSITION", "unit #", "X (m)", "Gel", "Throw (m)", "Colour", "Mystery"])).toEqual(["position", "unitNumber", "x", "colour", "ignore", "ignore", "ignore"]);
+    expect(suggestMapping(["POSITION", "unit #", "X (m)", "Gel", "Throw (m)", "Colour", "Mystery"])).toEqual([
+      "position",
+      "unitNumber",
+      "x",
+      "colour",
+      "ignore",
+      "ignore",
+      "ignore",
+    ]);
     expect(normaliseHeader("Lens height (ft)")).toBe("lens height");
     expect(headerUnit("Lens height (ft)")).toBe("ft");
   });
 
   it("prefers the production's remembered choice", () => {
-    expect(suggestMapping(["Hook", "No."], { [normaliseHeader("Hook")]: "position", [normaliseHeader("No.")]: "unitNumber" })).toEqual(["position", "unitNumber"]);
+    expect(
+      suggestMapping(["Hook", "No."], {
+        [normaliseHeader("Hook")]: "position",
+        [normaliseHeader("No.")]: "unitNumber",
+      }),
+    ).toEqual(["position", "unitNumber"]);
   });
 
   it("names the columns a file must have", () => {

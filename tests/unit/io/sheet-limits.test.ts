@@ -5,13 +5,20 @@ import { MAX_IMPORT_ROWS } from "@/lib/io/raw-table";
 import { readXlsx } from "@/lib/io/xlsx-read";
 
 // A minimal SpreadsheetML package (ECMA-376 Part 1): workbook, its relationships and one sheet.
-const ns = 'xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main" xmlns:r="http://schemas.openxmlformats.org/officeDocument/2006/relationships"';
+const ns =
+  'xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main" xmlns:r="http://schemas.openxmlformats.org/officeDocument/2006/relationships"';
 const rel = "http://schemas.openxmlformats.org/officeDocument/2006/relationships";
 function workbook(sheetData: string, extra = "", dimension = "") {
   return zipSync({
-    "xl/workbook.xml": strToU8(`<workbook ${ns}><sheets><sheet name="Rig" sheetId="1" r:id="rId1"/></sheets></workbook>`),
-    "xl/_rels/workbook.xml.rels": strToU8(`<Relationships xmlns="http://schemas.openxmlformats.org/package/2006/relationships"><Relationship Id="rId1" Type="${rel}/worksheet" Target="worksheets/sheet1.xml"/></Relationships>`),
-    "xl/worksheets/sheet1.xml": strToU8(`<worksheet ${ns}>${dimension}<sheetData>${sheetData}</sheetData>${extra}</worksheet>`),
+    "xl/workbook.xml": strToU8(
+      `<workbook ${ns}><sheets><sheet name="Rig" sheetId="1" r:id="rId1"/></sheets></workbook>`,
+    ),
+    "xl/_rels/workbook.xml.rels": strToU8(
+      `<Relationships xmlns="http://schemas.openxmlformats.org/package/2006/relationships"><Relationship Id="rId1" Type="${rel}/worksheet" Target="worksheets/sheet1.xml"/></Relationships>`,
+    ),
+    "xl/worksheets/sheet1.xml": strToU8(
+      `<worksheet ${ns}>${dimension}<sheetData>${sheetData}</sheetData>${extra}</worksheet>`,
+    ),
   });
 }
 const inline = (ref: string, text: string) => `<c r="${ref}" t="inlineStr"><is><t>${text}</t></is></c>`;
@@ -19,7 +26,10 @@ const header = `<row r="1">${inline("A1", "Position")}${inline("B1", "Unit")}</r
 
 describe("merged cells are clipped to the sheet's data before they are expanded", () => {
   it("a block declared 20,000 rows by 1,600 columns fills only the cells that hold data (a 1 KB file)", async () => {
-    const file = workbook(`${header}<row r="2">${inline("A2", "1st Electric")}${inline("B2", "7")}</row>`, '<mergeCells count="1"><mergeCell ref="A2:BHJ20001"/></mergeCells>');
+    const file = workbook(
+      `${header}<row r="2">${inline("A2", "1st Electric")}${inline("B2", "7")}</row>`,
+      '<mergeCells count="1"><mergeCell ref="A2:BHJ20001"/></mergeCells>',
+    );
     expect(file.length).toBeLessThan(1500);
     const t = await readXlsx(file);
     // Data ends at row 2, column B: the block fills A2:B2 and nothing past it.
@@ -27,7 +37,10 @@ describe("merged cells are clipped to the sheet's data before they are expanded"
   });
 
   it("a block to the sheet's last cell (A2:XFD1048576) is read in bounded time and memory", async () => {
-    const file = workbook(`${header}<row r="2">${inline("A2", "Boom SL")}</row><row r="3">${inline("B3", "4")}</row>`, '<mergeCells count="1"><mergeCell ref="A2:XFD1048576"/></mergeCells>');
+    const file = workbook(
+      `${header}<row r="2">${inline("A2", "Boom SL")}</row><row r="3">${inline("B3", "4")}</row>`,
+      '<mergeCells count="1"><mergeCell ref="A2:XFD1048576"/></mergeCells>',
+    );
     const before = process.memoryUsage().heapUsed;
     const t = await readXlsx(file);
     expect(process.memoryUsage().heapUsed - before).toBeLessThan(50 * 1024 * 1024);
@@ -80,7 +93,11 @@ describe("columns and declared sizes", () => {
     const file = workbook(header, "", '<dimension ref="A1:XFE2000000"/>');
     await expect(readXlsx(file)).rejects.toThrow(/larger than a spreadsheet can be/);
     // A loose but possible declared size is not a reason to refuse (many programs write one).
-    const loose = workbook(`${header}<row r="2">${inline("A2", "FOH")}${inline("B2", "3")}</row>`, "", '<dimension ref="A1:XFD1048576"/>');
+    const loose = workbook(
+      `${header}<row r="2">${inline("A2", "FOH")}${inline("B2", "3")}</row>`,
+      "",
+      '<dimension ref="A1:XFD1048576"/>',
+    );
     expect((await readXlsx(loose)).rows).toHaveLength(1);
   });
 });

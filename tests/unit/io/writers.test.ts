@@ -20,13 +20,27 @@ describe("neutraliseCell", () => {
 });
 
 describe("writers", () => {
-  const sheet = { name: "Hang", columns: [{ header: "Position", width: 12 }, { header: "X (m)", width: 8 }, { header: "Notes", width: 20 }], rows: [["LX1", -3.5, '=cmd|"/c calc"!A0'], ["Boom, SL", 2, "line\nbreak"]] };
+  const sheet = {
+    name: "Hang",
+    columns: [
+      { header: "Position", width: 12 },
+      { header: "X (m)", width: 8 },
+      { header: "Notes", width: 20 },
+    ],
+    rows: [
+      ["LX1", -3.5, '=cmd|"/c calc"!A0'],
+      ["Boom, SL", 2, "line\nbreak"],
+    ],
+  };
 
   it("writes CSV that reads back cell for cell", () => {
     const csv = writeCsv(sheet);
     expect(csv.startsWith("\ufeffPosition,X (m),Notes\r\n")).toBe(true);
     const back = readCsv(csv);
-    expect(back.rows.map((r) => r.cells)).toEqual([["LX1", "-3.5", `'=cmd|"/c calc"!A0`], ["Boom, SL", "2", "line\nbreak"]]);
+    expect(back.rows.map((r) => r.cells)).toEqual([
+      ["LX1", "-3.5", `'=cmd|"/c calc"!A0`],
+      ["Boom, SL", "2", "line\nbreak"],
+    ]);
   });
 
   it("writes a workbook with a frozen bold header, widths and numbers as numbers", async () => {

@@ -5,7 +5,17 @@ describe("show report e-mail text", () => {
   it("carries the performance, summary, every logged fault and every note written", () => {
     const m = showReportText(
       "Invented Play",
-      { id: 1, performance: "Evening 3", performedOn: "2026-12-05", summary: "Smooth.", authorId: 1, version: 1, createdAt: "", noteIds: [5], faults: [{ id: 1, fixtureId: 2, kind: "lamp_out", description: "unit dark in act two" }] },
+      {
+        id: 1,
+        performance: "Evening 3",
+        performedOn: "2026-12-05",
+        summary: "Smooth.",
+        authorId: 1,
+        version: 1,
+        createdAt: "",
+        noteIds: [5],
+        faults: [{ id: 1, fixtureId: 2, kind: "lamp_out", description: "unit dark in act two" }],
+      },
       [{ body: "Lamp out in Evening 3", kind: "work" } as never],
     );
     expect(m.subject).toBe("Show report: Invented Play, Evening 3");

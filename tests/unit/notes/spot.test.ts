@@ -35,8 +35,15 @@ describe("what lights this spot: ranking by lux", () => {
 
   it("leaves out a unit aimed elsewhere whose beam does not reach the point, and one at level 0", () => {
     // Aimed 4 m away from 5 m up: the point is ~38.7° off axis (atan(4/5)), far outside a 20° cone.
-    const elsewhere: SpotSource = { ...aimedAt(5, 0, 0, 5, 10_000), beam: { ...aimedAt(5, 0, 0, 5, 10_000).beam, focus: { x: 4, y: 0, z: 0 } } };
-    const { contributions, total } = rankSpotContributions(point, [elsewhere, aimedAt(6, 0, 0, 5, 10_000, 0), aimedAt(7, 0, 0, 2, 1_000)]);
+    const elsewhere: SpotSource = {
+      ...aimedAt(5, 0, 0, 5, 10_000),
+      beam: { ...aimedAt(5, 0, 0, 5, 10_000).beam, focus: { x: 4, y: 0, z: 0 } },
+    };
+    const { contributions, total } = rankSpotContributions(point, [
+      elsewhere,
+      aimedAt(6, 0, 0, 5, 10_000, 0),
+      aimedAt(7, 0, 0, 2, 1_000),
+    ]);
     // Only unit 7: 1,000 / 2² = 250 lx.
     expect(contributions.map((c) => c.fixtureId)).toEqual([7]);
     expect(total).toBeCloseTo(250, 6);

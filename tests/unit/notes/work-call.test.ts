@@ -22,9 +22,28 @@ let nextId = 100;
 function note(over: Partial<NoteDto>): NoteDto {
   const id = nextId++;
   return {
-    id, productionId: 1, subject: "fixture", subjectId: null, body: `note ${id}`, kind: "work", priority: "normal", ownerId: null,
-    status: "open", needs: [], dueDate: null, dueSession: null, authorId: 1, runningCueId: null, runningCueNumber: null, origin: "written",
-    showReportId: null, closedBy: null, closedAt: null, version: 1, createdAt: `2026-12-05T10:00:${String(id % 60).padStart(2, "0")}.000Z`, updatedAt: "2026-12-05T10:00:00.000Z",
+    id,
+    productionId: 1,
+    subject: "fixture",
+    subjectId: null,
+    body: `note ${id}`,
+    kind: "work",
+    priority: "normal",
+    ownerId: null,
+    status: "open",
+    needs: [],
+    dueDate: null,
+    dueSession: null,
+    authorId: 1,
+    runningCueId: null,
+    runningCueNumber: null,
+    origin: "written",
+    showReportId: null,
+    closedBy: null,
+    closedAt: null,
+    version: 1,
+    createdAt: `2026-12-05T10:00:${String(id % 60).padStart(2, "0")}.000Z`,
+    updatedAt: "2026-12-05T10:00:00.000Z",
     ...over,
   };
 }
@@ -45,7 +64,17 @@ describe("work call order", () => {
     const order = orderWorkCall(notes, positions, fixtures).map((s) => s.note.body);
     // Front pipe (7 m, y = 1) left to right; Mid pipe (7 m, y = 5): its own note at its first end, then
     // right to left (the walk comes back); Low ladder (4 m); Boom (2 m); then the production note.
-    expect(order).toEqual(["front 1", "front 2", "front 3", "mid pipe cable", "mid 2", "mid 1", "ladder unit", "boom base loose", "sweep the deck"]);
+    expect(order).toEqual([
+      "front 1",
+      "front 2",
+      "front 3",
+      "mid pipe cable",
+      "mid 2",
+      "mid 1",
+      "ladder unit",
+      "boom base loose",
+      "sweep the deck",
+    ]);
   });
 
   it("keeps only open and in-progress work notes", () => {
@@ -62,7 +91,10 @@ describe("work call order", () => {
 
   it("gives each stop its position and working height (the lens if set, else the trim)", () => {
     const stops = orderWorkCall([note({ subjectId: 31 }), note({ subjectId: 12 })], positions, fixtures);
-    expect(stops.map((s) => [s.position?.name, s.height])).toEqual([["Front pipe", 7], ["Low ladder", 3.5]]);
+    expect(stops.map((s) => [s.position?.name, s.height])).toEqual([
+      ["Front pipe", 7],
+      ["Low ladder", 3.5],
+    ]);
   });
 
   it("a note whose fixture is gone goes with the jobs off the rig", () => {

@@ -57,7 +57,11 @@ describe("clipPoolByCuts", () => {
 
   it("refuses a cut with one point or a mark lying on the cut", () => {
     // house rule: readable errors rather than a guess
-    expect(() => clipPoolByCuts(circle, [{ a: { x: 1, y: 1 }, b: { x: 1, y: 1 } }], { x: 0, y: 0 })).toThrow(/two different points/);
-    expect(() => clipPoolByCuts(circle, [{ a: { x: -1, y: 0 }, b: { x: 1, y: 0 } }], { x: 0, y: 0 })).toThrow(/lies on shutter cut 1/);
+    expect(() => clipPoolByCuts(circle, [{ a: { x: 1, y: 1 }, b: { x: 1, y: 1 } }], { x: 0, y: 0 })).toThrow(
+      /two different points/,
+    );
+    expect(() => clipPoolByCuts(circle, [{ a: { x: -1, y: 0 }, b: { x: 1, y: 0 } }], { x: 0, y: 0 })).toThrow(
+      /lies on shutter cut 1/,
+    );
   });
 });

@@ -29,7 +29,12 @@ describe("a datasheet's beam and field angles mapped onto the model", () => {
   it("a profile's 50 % point lands on the beam angle and its 10 % point on the field angle", () => {
     // REFERENCE.md: beam angle = 50 % of the peak, field angle = 10 % (IES definitions);
     // DESIGN.md beam model: s = (F − B)/0.59, θ = B + s
-    for (const [beam, field] of [[19, 26], [22, 30], [30, 36], [25, 33]] as const) {
+    for (const [beam, field] of [
+      [19, 26],
+      [22, 30],
+      [30, 36],
+      [25, 33],
+    ] as const) {
       const d = fromDatasheet({ beamDeg: beam, fieldDeg: field, family: "profile" });
       expect(d.warning).toBeUndefined();
       expect(fullAngleAt(0.5, d.coneDeg, d.softnessDeg)).toBeCloseTo(beam, 9);

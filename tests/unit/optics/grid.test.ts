@@ -1,10 +1,15 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import {
-  gridPoint, illuminanceAt, illuminanceGrid, zoneStats, type Family, type GridCells, type LitBeam,
+  gridPoint,
+  illuminanceAt,
+  illuminanceGrid,
+  zoneStats,
+  type Family,
+  type GridCells,
+  type LitBeam,
 } from "@/lib/optics";
 import { seededRandom } from "@/bench/support/numbers";
-
 
 const FAMILIES: Family[] = ["profile", "fresnel", "wash", "par", "led-wash", "cyc", "followspot"];
 
@@ -15,14 +20,38 @@ function rig(n: number, seed: number): LitBeam[] {
     beams.push({
       source: { x: -9 + 18 * r(), y: -6 + 14 * r(), z: 4 + 5 * r() },
       focus: { x: -8 + 16 * r(), y: -6 + 12 * r(), z: r() < 0.3 ? 1.7 : 0 },
-      coneDeg: 8 + 50 * r(), softnessDeg: 10 * r(), peakCandela: 2000 + 60_000 * r(), level: r(),
+      coneDeg: 8 + 50 * r(),
+      softnessDeg: 10 * r(),
+      peakCandela: 2000 + 60_000 * r(),
+      level: r(),
       family: FAMILIES[k % FAMILIES.length],
     });
   }
   // Awkward beams on purpose: an open pool, an upward axis that still spills on the deck, a lens under the plane.
-  beams.push({ source: { x: 0, y: -8, z: 6 }, focus: { x: 0, y: 20, z: 1 }, coneDeg: 40, softnessDeg: 4, peakCandela: 30_000, level: 1 });
-  beams.push({ source: { x: 7, y: 0, z: 2 }, focus: { x: -5, y: 0, z: 2.5 }, coneDeg: 60, softnessDeg: 10, peakCandela: 20_000, level: 1 });
-  beams.push({ source: { x: 0, y: 0, z: -1 }, focus: { x: 0, y: 0, z: 3 }, coneDeg: 30, softnessDeg: 3, peakCandela: 10_000, level: 1 });
+  beams.push({
+    source: { x: 0, y: -8, z: 6 },
+    focus: { x: 0, y: 20, z: 1 },
+    coneDeg: 40,
+    softnessDeg: 4,
+    peakCandela: 30_000,
+    level: 1,
+  });
+  beams.push({
+    source: { x: 7, y: 0, z: 2 },
+    focus: { x: -5, y: 0, z: 2.5 },
+    coneDeg: 60,
+    softnessDeg: 10,
+    peakCandela: 20_000,
+    level: 1,
+  });
+  beams.push({
+    source: { x: 0, y: 0, z: -1 },
+    focus: { x: 0, y: 0, z: 3 },
+    coneDeg: 30,
+    softnessDeg: 3,
+    peakCandela: 10_000,
+    level: 1,
+  });
   return beams;
 }
 
@@ -83,7 +112,9 @@ describe("illuminance grid", () => {
   it("rejects a zero resolution or an empty area", () => {
     // house rule: readable RangeError for invalid input
     expect(() => illuminanceGrid({ bounds, resolution: 0, planeZ: 0, beams: [] })).toThrow(/resolution/);
-    expect(() => illuminanceGrid({ bounds: { ...bounds, maxX: -8 }, resolution: 0.1, planeZ: 0, beams: [] })).toThrow(/empty/);
+    expect(() => illuminanceGrid({ bounds: { ...bounds, maxX: -8 }, resolution: 0.1, planeZ: 0, beams: [] })).toThrow(
+      /empty/,
+    );
   });
 });
 
@@ -95,11 +126,15 @@ describe("culling is exact for any beam", () => {
       fc.property(
         fc.record({ x: coord, y: coord, z: fc.double({ min: 0.2, max: 12, noNaN: true }) }),
         fc.record({ x: coord, y: coord, z: fc.double({ min: -3, max: 12, noNaN: true }) }),
-        fc.double({ min: 0.5, max: 170, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }),
-        fc.constantFrom<Family>("profile", "wash"), fc.constantFrom(0, 1.7),
+        fc.double({ min: 0.5, max: 170, noNaN: true }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        fc.constantFrom<Family>("profile", "wash"),
+        fc.constantFrom(0, 1.7),
         (source, focus, coneDeg, share, family, planeZ) => {
           fc.pre(Math.hypot(focus.x - source.x, focus.y - source.y, focus.z - source.z) > 0.01);
-          const beams = [{ source, focus, coneDeg, softnessDeg: (coneDeg / 2) * share, peakCandela: 1e4, level: 1, family }];
+          const beams = [
+            { source, focus, coneDeg, softnessDeg: (coneDeg / 2) * share, peakCandela: 1e4, level: 1, family },
+          ];
           const input = { bounds: { minX: -6, minY: -4, maxX: 6, maxY: 4 }, resolution: 0.25, planeZ, beams };
           const a = illuminanceGrid(input);
           const b = illuminanceGrid({ ...input, cull: false });
@@ -113,7 +148,12 @@ describe("culling is exact for any beam", () => {
 
 describe("zone statistics", () => {
   const cells: GridCells = {
-    values: Float32Array.from([100, 200, 300, 400]), cols: 2, rows: 2, originX: 0.5, originY: 0.5, resolution: 1,
+    values: Float32Array.from([100, 200, 300, 400]),
+    cols: 2,
+    rows: 2,
+    originX: 0.5,
+    originY: 0.5,
+    resolution: 1,
   };
 
   it("grid {100, 200, 300, 400} lx gives U0 0.40 and Emin/Emax 0.25", () => {
@@ -127,9 +167,25 @@ describe("zone statistics", () => {
 
   it("counts only cells whose centres are in the polygon", () => {
     // house rule: statistics for any polygon zone
-    const bottomRow = [{ x: 0, y: 0 }, { x: 2, y: 0 }, { x: 2, y: 1 }, { x: 0, y: 1 }];
-    expect(zoneStats(cells, bottomRow)).toEqual({ count: 2, min: 100, mean: 150, max: 200, uniformity: 100 / 150, diversity: 0.5 });
-    const none = zoneStats(cells, [{ x: 5, y: 5 }, { x: 6, y: 5 }, { x: 6, y: 6 }]);
+    const bottomRow = [
+      { x: 0, y: 0 },
+      { x: 2, y: 0 },
+      { x: 2, y: 1 },
+      { x: 0, y: 1 },
+    ];
+    expect(zoneStats(cells, bottomRow)).toEqual({
+      count: 2,
+      min: 100,
+      mean: 150,
+      max: 200,
+      uniformity: 100 / 150,
+      diversity: 0.5,
+    });
+    const none = zoneStats(cells, [
+      { x: 5, y: 5 },
+      { x: 6, y: 5 },
+      { x: 6, y: 6 },
+    ]);
     expect(none).toEqual({ count: 0, min: null, mean: null, max: null, uniformity: null, diversity: null });
     const dark = zoneStats({ ...cells, values: new Float32Array(4) });
     expect(dark.uniformity).toBeNull();

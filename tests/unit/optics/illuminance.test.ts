@@ -1,6 +1,11 @@
 import { describe, expect, it } from "vitest";
 import {
-  FIXTURE_FAMILIES, fromDatasheet, illuminanceAt, luxToFootcandles, relativeIntensity, type LitBeam,
+  FIXTURE_FAMILIES,
+  fromDatasheet,
+  illuminanceAt,
+  luxToFootcandles,
+  relativeIntensity,
+  type LitBeam,
 } from "@/lib/optics";
 import { D2R } from "./helpers";
 
@@ -8,8 +13,13 @@ const FT = 0.3048;
 
 function beam(over: Partial<LitBeam> = {}): LitBeam {
   return {
-    source: { x: 0, y: 0, z: 5 }, focus: { x: 0, y: 0, z: 0 },
-    coneDeg: 30, softnessDeg: 5, peakCandela: 10_000, level: 1, ...over,
+    source: { x: 0, y: 0, z: 5 },
+    focus: { x: 0, y: 0, z: 0 },
+    coneDeg: 30,
+    softnessDeg: 5,
+    peakCandela: 10_000,
+    level: 1,
+    ...over,
   };
 }
 
@@ -85,7 +95,7 @@ describe("intensity profiles", () => {
     expect(relativeIntensity(0, cone, soft)).toBe(1);
     expect(relativeIntensity(9.999, cone, soft)).toBe(1); // core half-angle (36 − 16)/2 = 10°
     expect(relativeIntensity((cone - soft) / 2, cone, soft)).toBeCloseTo(0.5, 12);
-    expect(relativeIntensity(12, cone, soft)).toBeCloseTo(0.5 * (1 + Math.cos(Math.PI * 2 / 8)), 12);
+    expect(relativeIntensity(12, cone, soft)).toBeCloseTo(0.5 * (1 + Math.cos((Math.PI * 2) / 8)), 12);
     expect(relativeIntensity(18, cone, soft)).toBeCloseTo(0, 12);
     expect(relativeIntensity(18.01, cone, soft)).toBe(0);
   });
@@ -124,9 +134,15 @@ describe("intensity profiles", () => {
 
   it("lists every family with a plain label", () => {
     // house rule: Family union and FIXTURE_FAMILIES list
-    expect(FIXTURE_FAMILIES.map((f) => f.value).sort()).toEqual(
-      ["cyc", "followspot", "fresnel", "led-wash", "par", "profile", "wash"],
-    );
+    expect(FIXTURE_FAMILIES.map((f) => f.value).sort()).toEqual([
+      "cyc",
+      "followspot",
+      "fresnel",
+      "led-wash",
+      "par",
+      "profile",
+      "wash",
+    ]);
     for (const f of FIXTURE_FAMILIES) expect(f.label).toMatch(/^[A-Z][A-Za-z ]+$/);
   });
 });

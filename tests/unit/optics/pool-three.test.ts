@@ -19,7 +19,9 @@ function makeCone(source: Vec3, focus: Vec3, alpha: number, planeZ: number) {
   const plane = new Plane(new Vector3(0, 0, 1), -planeZ);
   const ray = new Ray();
   return (t: number): Vector3 | null => {
-    const dir = axis.clone().multiplyScalar(Math.cos(alpha))
+    const dir = axis
+      .clone()
+      .multiplyScalar(Math.cos(alpha))
       .addScaledVector(e1, Math.sin(alpha) * Math.cos(t))
       .addScaledVector(e2, Math.sin(alpha) * Math.sin(t));
     ray.set(origin, dir);
@@ -96,7 +98,12 @@ for (const h of [1.2, 6, 14]) {
   }
 }
 // Near the horizon: φ + α just below 90°, the hardest case for the closed form and for the rays.
-const horizon: Case[] = [[6, 80, 9.9, 20], [5, 60, 29.99, 200], [8, 45, 44.999, -75], [3, 89, 0.9, 90]];
+const horizon: Case[] = [
+  [6, 80, 9.9, 20],
+  [5, 60, 29.99, 200],
+  [8, 45, 44.999, -75],
+  [3, 89, 0.9, 90],
+];
 
 describe("pool ellipse against three.js rays", () => {
   it.each([...sweep, ...horizon])("h %f m, φ %f°, α %f°, pan %f°", (h, phi, alpha, pan) => {
@@ -107,11 +114,13 @@ describe("pool ellipse against three.js rays", () => {
     // Near and far edges as the closed forms h·tan(φ−α) and h·tan(φ+α) (REFERENCE.md), from the rays.
     expect(Math.abs(rOuter.near - h * Math.tan((phi - alpha) * D2R))).toBeLessThan(TOL * p.outer!.semiMajor);
     expect(Math.abs(rOuter.far - h * Math.tan((phi + alpha) * D2R))).toBeLessThan(TOL * p.outer!.semiMajor);
-    compareCone(source, focus, (alpha * 0.75) * D2R, 0, p.half!);
-    compareCone(source, focus, (alpha * 0.5) * D2R, 0, p.core!);
+    compareCone(source, focus, alpha * 0.75 * D2R, 0, p.half!);
+    compareCone(source, focus, alpha * 0.5 * D2R, 0, p.core!);
     // The axis ray lands on axisHit, which differs from the centre when tilted.
-    const axisRay = new Ray(new Vector3(source.x, source.y, source.z),
-      new Vector3(focus.x - source.x, focus.y - source.y, focus.z - source.z).normalize());
+    const axisRay = new Ray(
+      new Vector3(source.x, source.y, source.z),
+      new Vector3(focus.x - source.x, focus.y - source.y, focus.z - source.z).normalize(),
+    );
     const hit = axisRay.intersectPlane(new Plane(new Vector3(0, 0, 1), 0), new Vector3())!;
     const scale = Math.max(1, Math.hypot(hit.x, hit.y));
     expect(Math.abs(hit.x - p.axisHit!.x)).toBeLessThan(TOL * scale);

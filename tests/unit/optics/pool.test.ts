@@ -7,8 +7,15 @@ const FT = 0.3048;
 describe("pool on a surface square to the beam", () => {
   // REFERENCE.md: beam spread table, lighting handbooks' multiplying factor (trigonometry), rounded to 5 places
   const table: Array<[number, number]> = [
-    [5, 0.08732], [10, 0.17498], [14, 0.24557], [19, 0.33469], [26, 0.46174],
-    [36, 0.64984], [50, 0.93262], [70, 1.40042], [90, 2],
+    [5, 0.08732],
+    [10, 0.17498],
+    [14, 0.24557],
+    [19, 0.33469],
+    [26, 0.46174],
+    [36, 0.64984],
+    [50, 0.93262],
+    [70, 1.40042],
+    [90, 2],
   ];
   it.each(table)("cone %i° spreads %f × the throw", (cone, factor) => {
     const d = 7.5;
@@ -125,7 +132,13 @@ describe("edge cases", () => {
 
   it("a level axis is open with no axis hit", () => {
     // trigonometry: a horizontal axis never meets the plane, while the lower half of the cone does
-    const p = poolAtPlane({ source: { x: 0, y: 0, z: 6 }, focus: { x: 5, y: 0, z: 6 }, coneDeg: 20, softnessDeg: 2, planeZ: 0 });
+    const p = poolAtPlane({
+      source: { x: 0, y: 0, z: 6 },
+      focus: { x: 5, y: 0, z: 6 },
+      coneDeg: 20,
+      softnessDeg: 2,
+      planeZ: 0,
+    });
     expect(p.status).toBe("open");
     expect(p.axisHit).toBeNull();
   });
@@ -142,7 +155,13 @@ describe("edge cases", () => {
 
   it("an axis pointing up has no pool", () => {
     // DESIGN.md: the beam model, edge cases
-    const p = poolAtPlane({ source: { x: 0, y: 0, z: 1 }, focus: { x: 2, y: 1, z: 4 }, coneDeg: 20, softnessDeg: 2, planeZ: 0 });
+    const p = poolAtPlane({
+      source: { x: 0, y: 0, z: 1 },
+      focus: { x: 2, y: 1, z: 4 },
+      coneDeg: 20,
+      softnessDeg: 2,
+      planeZ: 0,
+    });
     expect(p.status).toBe("none");
     expect(p.reason).toMatch(/upward/);
   });
@@ -150,7 +169,9 @@ describe("edge cases", () => {
   it("rejects a zero-length throw", () => {
     // DESIGN.md: throw = |F − S| must be > 0 to give the axis a direction
     const s = { x: 1, y: 2, z: 6 };
-    expect(() => poolAtPlane({ source: s, focus: { ...s }, coneDeg: 20, softnessDeg: 2, planeZ: 0 })).toThrow(RangeError);
+    expect(() => poolAtPlane({ source: s, focus: { ...s }, coneDeg: 20, softnessDeg: 2, planeZ: 0 })).toThrow(
+      RangeError,
+    );
     expect(() => beamAim({ source: s, focus: { ...s } })).toThrow(/throw longer than zero/);
   });
 
@@ -163,9 +184,12 @@ describe("edge cases", () => {
     // house rule: softness ≥ 0; never NaN in output
     expect(() => poolAtPlane({ ...aimed(6, 20), coneDeg: 20, softnessDeg: -1, planeZ: 0 })).toThrow(/softness/);
     const nan = { x: Number.NaN, y: 0, z: 6 };
-    expect(() => poolAtPlane({ source: nan, focus: { x: 0, y: 0, z: 0 }, coneDeg: 20, softnessDeg: 1, planeZ: 0 }))
-      .toThrow(RangeError);
-    expect(() => poolAtPlane({ ...aimed(6, 20), coneDeg: 20, softnessDeg: 1, planeZ: Number.NaN })).toThrow(/Plane height/);
+    expect(() =>
+      poolAtPlane({ source: nan, focus: { x: 0, y: 0, z: 0 }, coneDeg: 20, softnessDeg: 1, planeZ: 0 }),
+    ).toThrow(RangeError);
+    expect(() => poolAtPlane({ ...aimed(6, 20), coneDeg: 20, softnessDeg: 1, planeZ: Number.NaN })).toThrow(
+      /Plane height/,
+    );
   });
 
   it("clamps softness above half the cone, with a warning and no core", () => {

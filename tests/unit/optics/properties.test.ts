@@ -2,7 +2,13 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import {
-  formatLength, illuminanceAt, parseLength, poolAtPlane, relativeIntensity, shadowOf, type Ellipse,
+  formatLength,
+  illuminanceAt,
+  parseLength,
+  poolAtPlane,
+  relativeIntensity,
+  shadowOf,
+  type Ellipse,
 } from "@/lib/optics";
 import { aimed, D2R, numbersIn } from "./helpers";
 
@@ -46,7 +52,11 @@ describe("pool invariants", () => {
   it("as tilt → 0 the ellipse becomes the circle of radius h·tan(α)", () => {
     // REFERENCE.md: a = h·sinα·cosα/A → h·tanα as φ → 0 (trigonometry)
     fc.assert(
-      fc.property(height, fc.double({ min: 0, max: 1e-4, noNaN: true }), fc.double({ min: 0.5, max: 150, noNaN: true }), pan,
+      fc.property(
+        height,
+        fc.double({ min: 0, max: 1e-4, noNaN: true }),
+        fc.double({ min: 0.5, max: 150, noNaN: true }),
+        pan,
         (h, phiRad, c, p) => {
           const pool = poolAtPlane({ ...aimed(h, phiRad / D2R, p), coneDeg: c, softnessDeg: 0, planeZ: 0 });
           const r = h * Math.tan((c / 2) * D2R);
@@ -54,7 +64,8 @@ describe("pool invariants", () => {
           expect(Math.abs(pool.outer!.semiMinor - r)).toBeLessThanOrEqual(1e-6 * r);
           // The centre's offset vanishes with the tilt (linearly: h·sinφ·cosφ/K ≤ 15·h·φ for α ≤ 75°).
           expect(Math.hypot(pool.outer!.centre.x, pool.outer!.centre.y)).toBeLessThanOrEqual(20 * h * phiRad);
-        }),
+        },
+      ),
       { numRuns: 300 },
     );
   });
@@ -77,21 +88,32 @@ describe("pool invariants", () => {
     const coord = fc.double({ min: -50, max: 50, noNaN: true });
     const point = fc.record({ x: coord, y: coord, z: coord });
     fc.assert(
-      fc.property(point, point, fc.double({ min: 1e-6, max: 179.999, noNaN: true }), fc.double({ min: 0, max: 200, noNaN: true }),
-        fc.double({ min: -5, max: 60, noNaN: true }), fc.constantFrom("profile", "fresnel", "wash", "cyc" as const),
+      fc.property(
+        point,
+        point,
+        fc.double({ min: 1e-6, max: 179.999, noNaN: true }),
+        fc.double({ min: 0, max: 200, noNaN: true }),
+        fc.double({ min: -5, max: 60, noNaN: true }),
+        fc.constantFrom("profile", "fresnel", "wash", "cyc" as const),
         (source, focus, c, s, planeZ, family) => {
           fc.pre(Math.hypot(focus.x - source.x, focus.y - source.y, focus.z - source.z) > 1e-3);
           const pool = poolAtPlane({ source, focus, coneDeg: c, softnessDeg: s, planeZ });
           expect(numbersIn(pool).every(Number.isFinite)).toBe(true);
-          const e = illuminanceAt({ x: focus.x, y: focus.y, z: planeZ },
-            [{ source, focus, coneDeg: c, softnessDeg: s, peakCandela: 50_000, level: 1, family }]);
+          const e = illuminanceAt({ x: focus.x, y: focus.y, z: planeZ }, [
+            { source, focus, coneDeg: c, softnessDeg: s, peakCandela: 50_000, level: 1, family },
+          ]);
           expect(Number.isFinite(e) && e >= 0).toBe(true);
           expect(Number.isFinite(relativeIntensity(c / 3, c, s, family))).toBe(true);
           fc.pre(source.y < 60 && Math.hypot(source.x - 1, source.y - 1) > 0.3);
-          const sh = shadowOf({ source, apertureDiameter: 0.15, backWallY: 60,
-            occluder: { kind: "performer", x: 1, y: 1, height: 1.75, radius: 0.25 } });
+          const sh = shadowOf({
+            source,
+            apertureDiameter: 0.15,
+            backWallY: 60,
+            occluder: { kind: "performer", x: 1, y: 1, height: 1.75, radius: 0.25 },
+          });
           expect(numbersIn(sh).every(Number.isFinite)).toBe(true);
-        }),
+        },
+      ),
       { numRuns: 1000 },
     );
   });

@@ -81,7 +81,9 @@ describe("shadowOf against rays sampled over the occluder's silhouette", () => {
     // similar triangles, worked by hand: the ray from the lens (y −8, z 0.5) over the near side of the head
     // (y −0.25, z 1.75) rises 1.25 m in 7.75 m; at the wall (y 8, 16 m from the lens) it is 0.5 + 1.25·16/7.75 up.
     const s = shadowOf({
-      source: { x: 0, y: -8, z: 0.5 }, apertureDiameter: 0.15, backWallY: 8,
+      source: { x: 0, y: -8, z: 0.5 },
+      apertureDiameter: 0.15,
+      backWallY: 8,
       occluder: { kind: "performer", x: 0, y: 0, height: 1.75, radius: 0.25 },
     });
     expect(s.lands).toBe("wall");
@@ -95,7 +97,9 @@ describe("shadowOf against rays sampled over the occluder's silhouette", () => {
     // The ray from the lens through (2, 2, 2) runs (2, 7, −4); it meets y = 5 after 10/7 of that step,
     // at x = 20/7 and z = 6 − 40/7 = 2/7 ≈ 0.29 m up the wall.
     const s = shadowOf({
-      source: { x: 0, y: -5, z: 6 }, apertureDiameter: 0.15, backWallY: 5,
+      source: { x: 0, y: -5, z: 6 },
+      apertureDiameter: 0.15,
+      backWallY: 5,
       occluder: { kind: "panel", a: { x: -2, y: 0 }, b: { x: 2, y: 2 }, height: 2 },
     });
     expect(s.lands).toBe("wall");
@@ -110,7 +114,9 @@ describe("shadowOf against rays sampled over the occluder's silhouette", () => {
     // similar triangles as above: corner (2, 2) lands at (3, 5.5); the middle of the top edge (0, 1) would
     // land at (0, 4), nearer to the lens's foot (0, −5) than (3, 5.5) is.
     const s = shadowOf({
-      source: { x: 0, y: -5, z: 6 }, apertureDiameter: 0.15, backWallY: 20,
+      source: { x: 0, y: -5, z: 6 },
+      apertureDiameter: 0.15,
+      backWallY: 20,
       occluder: { kind: "panel", a: { x: -2, y: 0 }, b: { x: 2, y: 2 }, height: 2 },
     });
     expect(s.lands).toBe("deck");
@@ -126,12 +132,15 @@ describe("shadowOf against rays sampled over the occluder's silhouette", () => {
     for (let k = 0; k < 120; k++) {
       const wallY = 4 + 6 * r();
       const source = { x: -8 + 16 * r(), y: -10 + 8 * r(), z: 0.3 + 7 * r() };
-      const occluder: Occluder = k % 2 === 0
-        ? { kind: "performer", x: -3 + 6 * r(), y: -1 + 3 * r(), height: 1.5 + 0.4 * r(), radius: 0.15 + 0.2 * r() }
-        : {
-            kind: "panel", a: { x: -3 + 3 * r(), y: -1 + 2 * r() }, b: { x: 3 * r(), y: -1 + 3 * r() },
-            height: 1 + 2 * r(),
-          };
+      const occluder: Occluder =
+        k % 2 === 0
+          ? { kind: "performer", x: -3 + 6 * r(), y: -1 + 3 * r(), height: 1.5 + 0.4 * r(), radius: 0.15 + 0.2 * r() }
+          : {
+              kind: "panel",
+              a: { x: -3 + 3 * r(), y: -1 + 2 * r() },
+              b: { x: 3 * r(), y: -1 + 3 * r() },
+              height: 1 + 2 * r(),
+            };
       const input: ShadowInput = { source, apertureDiameter: 0.15, backWallY: wallY, occluder };
       const got = shadowOf(input);
       const ref = reference(source, occluder, wallY);
@@ -162,7 +171,9 @@ describe("shadowOf against rays sampled over the occluder's silhouette", () => {
     // Independent reference: brute-force rays (geometry). The highest wall point comes from the most upstage
     // point of the head's rim, (x, y + r), not from the far side along the line of sight in plan.
     const input: ShadowInput = {
-      source: { x: -6, y: -6, z: 4 }, apertureDiameter: 0.15, backWallY: 3,
+      source: { x: -6, y: -6, z: 4 },
+      apertureDiameter: 0.15,
+      backWallY: 3,
       occluder: { kind: "performer", x: 0, y: 0, height: 1.75, radius: 0.25 },
     };
     const ref = reference(input.source, input.occluder, 3)!;
@@ -181,7 +192,9 @@ describe("shadowOf against rays sampled over the occluder's silhouette", () => {
     // penumbra; on the wall it is D·b/a stretched by 1/cos(incidence) (REFERENCE.md, shadows). First order in D/a.
     for (const z of [0.5, 1.0, 3, 4]) {
       const input: ShadowInput = {
-        source: { x: 0, y: -8, z }, apertureDiameter: 0.15, backWallY: 6,
+        source: { x: 0, y: -8, z },
+        apertureDiameter: 0.15,
+        backWallY: 6,
         occluder: { kind: "performer", x: 0, y: 0, height: 1.75, radius: 0.25 },
       };
       const got = shadowOf(input);

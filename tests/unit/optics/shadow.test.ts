@@ -1,6 +1,12 @@
 import { describe, expect, it } from "vitest";
 import {
-  penumbraWidth, pointInPolygon, polygonArea, shadowOf, shadowPolygons, umbraWidth, type ShadowInput,
+  penumbraWidth,
+  pointInPolygon,
+  polygonArea,
+  shadowOf,
+  shadowPolygons,
+  umbraWidth,
+  type ShadowInput,
 } from "@/lib/optics";
 import { D2R, numbersIn } from "./helpers";
 
@@ -35,7 +41,9 @@ describe("umbra and penumbra widths (similar triangles)", () => {
     // REFERENCE.md: Sun's angular diameter 0.533° (NASA Sun fact sheet, from memory) → 0.93 % of 2.5 m ≈ 23 mm
     const a = 1.496e11;
     const sun: ShadowInput = {
-      source: { x: 0, y: 0, z: a }, apertureDiameter: 2 * a * Math.tan((0.533 / 2) * D2R), backWallY: Infinity,
+      source: { x: 0, y: 0, z: a },
+      apertureDiameter: 2 * a * Math.tan((0.533 / 2) * D2R),
+      backWallY: Infinity,
       occluder: { kind: "panel", a: { x: -1, y: 0 }, b: { x: 1, y: 0 }, height: 2.5 },
     };
     const s = shadowOf(sun);
@@ -100,7 +108,9 @@ describe("shadowOf", () => {
   it("a panel's umbra uses its width as seen from the lens", () => {
     // similar triangles: 2 m panel square to the line of sight, lens 6 m downstage and 7 m up
     const s = shadowOf({
-      source: { x: 0, y: -6, z: 7 }, apertureDiameter: 0.2, backWallY: Infinity,
+      source: { x: 0, y: -6, z: 7 },
+      apertureDiameter: 0.2,
+      backWallY: Infinity,
       occluder: { kind: "panel", a: { x: -1, y: 0 }, b: { x: 1, y: 0 }, height: 2.5 },
     });
     expect(s.tip!.y).toBeCloseTo((6 * 7) / 4.5 - 6, 12);
@@ -108,7 +118,9 @@ describe("shadowOf", () => {
     const b = (a * 2.5) / 4.5;
     expect(s.umbraWidth).toBeCloseTo(2 + ((2 - 0.2) * b) / a, 12);
     const edgeOn = shadowOf({
-      source: { x: 0, y: -6, z: 7 }, apertureDiameter: 0.2, backWallY: Infinity,
+      source: { x: 0, y: -6, z: 7 },
+      apertureDiameter: 0.2,
+      backWallY: Infinity,
       occluder: { kind: "panel", a: { x: 0, y: -1 }, b: { x: 0, y: 1 }, height: 2.5 },
     });
     expect(edgeOn.umbraWidth).toBe(0);

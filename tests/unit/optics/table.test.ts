@@ -5,7 +5,17 @@ import { profileTable, tableAt } from "@/lib/optics/profile-table";
 import { beamAngles } from "@/lib/optics/validate";
 
 describe("profile table", () => {
-  const cases: Array<[number, number]> = [[2, 0.5], [10, 0], [19, 3], [30, 0.01], [30, 0.3], [36, 8], [50, 20], [90, 45], [170, 85]];
+  const cases: Array<[number, number]> = [
+    [2, 0.5],
+    [10, 0],
+    [19, 3],
+    [30, 0.01],
+    [30, 0.3],
+    [36, 8],
+    [50, 20],
+    [90, 45],
+    [170, 85],
+  ];
   it.each(cases)("cone %f°, softness %f°: within 2e-4 of the exact flat and peaked curves", (cone, soft) => {
     // DESIGN.md: the profile-spot formula; lib/optics/profile.ts: the peaked curve (exact closed forms)
     for (const shape of ["flat", "peaked"] as const) {

@@ -5,32 +5,41 @@ import { D2R } from "./helpers";
 describe("describePoint", () => {
   it("words the datum one way, with its article, as DESIGN.md's example does", () => {
     // DESIGN.md, coordinates: "3.20 m SL of CL, 1.50 m US of the setting line"
-    expect(describePoint({ x: 3.2, y: 1.5 }, { units: "metric", datumName: "setting line" }))
-      .toBe("3.20 m SL of CL, 1.50 m US of the setting line");
+    expect(describePoint({ x: 3.2, y: 1.5 }, { units: "metric", datumName: "setting line" })).toBe(
+      "3.20 m SL of CL, 1.50 m US of the setting line",
+    );
     // A name that already has its article, or begins with a number, is left alone (English usage).
-    expect(describePoint({ x: 0, y: 1.5 }, { units: "metric", datumName: "The stage edge" })).toBe("on CL, 1.50 m US of The stage edge");
-    expect(describePoint({ x: 0, y: -1 }, { units: "metric", datumName: "2nd line" })).toBe("on CL, 1.00 m DS of 2nd line");
+    expect(describePoint({ x: 0, y: 1.5 }, { units: "metric", datumName: "The stage edge" })).toBe(
+      "on CL, 1.50 m US of The stage edge",
+    );
+    expect(describePoint({ x: 0, y: -1 }, { units: "metric", datumName: "2nd line" })).toBe(
+      "on CL, 1.00 m DS of 2nd line",
+    );
   });
 
   it("names side and depth in deck words", () => {
     // DESIGN.md: coordinates (x > 0 stage left, y > 0 upstage) and deck words
-    expect(describePoint({ x: 1.2, y: 2.5 }, { units: "metric", datumName: "setting line" }))
-      .toBe("1.20 m SL of CL, 2.50 m US of the setting line");
-    expect(describePoint({ x: -3.2, y: -1.5 }, { units: "metric", datumName: "the plaster line" }))
-      .toBe("3.20 m SR of CL, 1.50 m DS of the plaster line");
+    expect(describePoint({ x: 1.2, y: 2.5 }, { units: "metric", datumName: "setting line" })).toBe(
+      "1.20 m SL of CL, 2.50 m US of the setting line",
+    );
+    expect(describePoint({ x: -3.2, y: -1.5 }, { units: "metric", datumName: "the plaster line" })).toBe(
+      "3.20 m SR of CL, 1.50 m DS of the plaster line",
+    );
   });
 
   it("says 'on' when the value shows as zero", () => {
     // house rule: on the line say "on CL"; the datum always with its article (DESIGN.md's example)
-    expect(describePoint({ x: 0.004, y: 0 }, { units: "metric", datumName: "setting line" }))
-      .toBe("on CL, on the setting line");
+    expect(describePoint({ x: 0.004, y: 0 }, { units: "metric", datumName: "setting line" })).toBe(
+      "on CL, on the setting line",
+    );
     expect(describePoint({ x: 0.006, y: 0 }, { units: "metric" })).toBe("0.01 m SL of CL, on the setting line");
   });
 
   it("uses feet and inches for imperial productions", () => {
     // NIST SP 811: 3.2131 m = 10 ft 6.5 in
-    expect(describePoint({ x: -3.2131, y: 0.3048 }, { units: "imperial", datumName: "proscenium line" }))
-      .toBe(`10' 6 1/2" SR of CL, 1' 0" US of the proscenium line`);
+    expect(describePoint({ x: -3.2131, y: 0.3048 }, { units: "imperial", datumName: "proscenium line" })).toBe(
+      `10' 6 1/2" SR of CL, 1' 0" US of the proscenium line`,
+    );
   });
 });
 

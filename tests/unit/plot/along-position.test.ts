@@ -1,5 +1,14 @@
 import { describe, expect, it } from "vitest";
-import { nearestPosition, numberingOrder, numberingOrderVertical, projectOntoPosition, renumber, snap, spreadAlong, unitNumberForInsert } from "@/lib/plot/along-position";
+import {
+  nearestPosition,
+  numberingOrder,
+  numberingOrderVertical,
+  projectOntoPosition,
+  renumber,
+  snap,
+  spreadAlong,
+  unitNumberForInsert,
+} from "@/lib/plot/along-position";
 
 const pipe = { id: 1, x1: -7, y1: 1, x2: 7, y2: 1 };
 const boom = { id: 2, x1: 6.5, y1: 2, x2: null, y2: null };
@@ -22,7 +31,11 @@ describe("projection onto a position", () => {
 });
 
 describe("numbering along a position", () => {
-  const units = [{ id: 10, x: -3, y: 1 }, { id: 11, x: 4, y: 1 }, { id: 12, x: 0, y: 1 }];
+  const units = [
+    { id: 10, x: -3, y: 1 },
+    { id: 11, x: 4, y: 1 },
+    { id: 12, x: 0, y: 1 },
+  ];
   it("from stage left puts the unit with the largest x first", () => {
     // DESIGN.md, common practice: overhead positions numbered from stage left (+x).
     expect(numberingOrder(units, "from-stage-left").map((u) => u.id)).toEqual([11, 12, 10]);
@@ -30,11 +43,19 @@ describe("numbering along a position", () => {
   });
   it("booms number from the top", () => {
     // DESIGN.md, common practice: booms from the top.
-    const onBoom = [{ id: 1, lensHeight: 0.6 }, { id: 2, lensHeight: 3.3 }, { id: 3, lensHeight: 1.5 }];
+    const onBoom = [
+      { id: 1, lensHeight: 0.6 },
+      { id: 2, lensHeight: 3.3 },
+      { id: 3, lensHeight: 1.5 },
+    ];
     expect(numberingOrderVertical(onBoom).map((u) => u.id)).toEqual([2, 3, 1]);
   });
   it("renumbers 1…n in order", () => {
-    expect([...renumber([7, 3, 9])]).toEqual([[7, "1"], [3, "2"], [9, "3"]]);
+    expect([...renumber([7, 3, 9])]).toEqual([
+      [7, "1"],
+      [3, "2"],
+      [9, "3"],
+    ]);
   });
 });
 
@@ -61,7 +82,10 @@ describe("a unit slotted in never renumbers the others", () => {
 
 describe("spreading and snapping", () => {
   it("spreads units evenly inset from the ends", () => {
-    expect(spreadAlong(pipe, 2)).toEqual([{ x: -3.5, y: 1 }, { x: 3.5, y: 1 }]);
+    expect(spreadAlong(pipe, 2)).toEqual([
+      { x: -3.5, y: 1 },
+      { x: 3.5, y: 1 },
+    ]);
   });
   it("snaps to the step", () => {
     expect(snap(1.234, 0.05)).toBeCloseTo(1.25, 12);

@@ -25,10 +25,20 @@ describe("grid and scale bar in the production's units", () => {
 
 describe("stage outline from the settings", () => {
   it("puts the opening on the datum and the back wall at its depth", () => {
-    const o = stageOutline({ prosceniumWidth: 10, stageWidth: 17, stageDepth: 9, apronDepth: 1.5, backWallY: 9.5, datumName: "setting line" });
+    const o = stageOutline({
+      prosceniumWidth: 10,
+      stageWidth: 17,
+      stageDepth: 9,
+      apronDepth: 1.5,
+      backWallY: 9.5,
+      datumName: "setting line",
+    });
     expect(o.apron).toContainEqual({ x: 5, y: -1.5 });
     expect(o.prosceniumLeft[0]).toEqual({ x: 5, y: 0 });
-    expect(o.backWall).toEqual([{ x: -8.5, y: 9.5 }, { x: 8.5, y: 9.5 }]);
+    expect(o.backWall).toEqual([
+      { x: -8.5, y: 9.5 },
+      { x: 8.5, y: 9.5 },
+    ]);
     expect(o.deck[2]).toEqual({ x: 8.5, y: 9 });
   });
 });
@@ -41,7 +51,10 @@ describe("symbols stay readable", () => {
     expect(labelsFit(symbolPixels(60))).toBe(true);
   });
   it("picks the nearest item within the radius", () => {
-    const items = [{ id: 1, p: { x: 0, y: 0 } }, { id: 2, p: { x: 10, y: 0 } }];
+    const items = [
+      { id: 1, p: { x: 0, y: 0 } },
+      { id: 2, p: { x: 10, y: 0 } },
+    ];
     expect(nearestOnScreen(items, (i) => i.p, { x: 7, y: 1 }, 5)?.id).toBe(2);
     expect(nearestOnScreen(items, (i) => i.p, { x: 5, y: 9 }, 5)).toBeNull();
     expect(distanceToSegment({ x: 5, y: 3 }, { x: 0, y: 0 }, { x: 10, y: 0 })).toBe(3);

@@ -44,7 +44,9 @@ function importGraph(starts: string[]): Map<string, string[]> {
     const file = todo.pop()!;
     if (graph.has(file)) continue;
     const info = ts.preProcessFile(readFileSync(file, "utf8"), true, true);
-    const deps = [...new Set(info.importedFiles.map((i) => resolve(i.fileName, file)).filter((f): f is string => f !== null))];
+    const deps = [
+      ...new Set(info.importedFiles.map((i) => resolve(i.fileName, file)).filter((f): f is string => f !== null)),
+    ];
     graph.set(file, deps);
     todo.push(...deps);
   }
@@ -88,7 +90,13 @@ function cycles(graph: Map<string, string[]>): string[][] {
 describe("import cycles", () => {
   it("finds a cycle when there is one (the finder itself works)", () => {
     // hand-made graph: a → b → c → a, and d → a (d is outside the loop)
-    const g = new Map([["/a", ["/b"]], ["/b", ["/c"]], ["/c", ["/a"]], ["/d", ["/a"]], ["/e", ["/e"]]]);
+    const g = new Map([
+      ["/a", ["/b"]],
+      ["/b", ["/c"]],
+      ["/c", ["/a"]],
+      ["/d", ["/a"]],
+      ["/e", ["/e"]],
+    ]);
     const found = cycles(g).map((c) => c.map((f) => path.basename(f)).sort());
     expect(found).toContainEqual(["a", "b", "c"]);
     expect(found).toContainEqual(["e"]);

@@ -21,7 +21,9 @@ describe("over (one colour for a translucent fill painted on another)", () => {
     const white = [255, 255, 255];
     const paint = (ground: number[], c: number[], a: number) => ground.map((g, i) => g * (1 - a) + c[i] * a);
     const twice = paint(paint(white, [230, 150, 30], 0.035), [240, 170, 40], 0.06);
-    const m = /rgba\((\d+), (\d+), (\d+), ([\d.]+)\)/.exec(over("rgba(240, 170, 40, 0.06)", "rgba(230, 150, 30, 0.035)"))!;
+    const m = /rgba\((\d+), (\d+), (\d+), ([\d.]+)\)/.exec(
+      over("rgba(240, 170, 40, 0.06)", "rgba(230, 150, 30, 0.035)"),
+    )!;
     const once = paint(white, [Number(m[1]), Number(m[2]), Number(m[3])], Number(m[4]));
     for (const [i, c] of once.entries()) expect(c).toBeCloseTo(twice[i], 0);
   });

@@ -16,7 +16,12 @@ const far = (dx: number, dy: number) => ({ x: P.x + dx, y: P.y + dy }); // metre
 
 const PIPE_FAR = { id: 90, kind: "overhead-pipe", x1: -6, y1: 8, x2: -2, y2: 8 };
 const BOOM_FAR = { id: 91, kind: "boom", x1: -7, y1: -4, x2: null, y2: null };
-const unit = (id: number, p: { x: number; y: number }, mark: { x: number; y: number } | null, index = 0) => ({ id, ...p, stack: { index, dir: 1 }, mark });
+const unit = (id: number, p: { x: number; y: number }, mark: { x: number; y: number } | null, index = 0) => ({
+  id,
+  ...p,
+  stack: { index, dir: 1 },
+  mark,
+});
 
 /** One thing of each kind, each exactly under the pointer, the rest of it far away. */
 function sceneWith(kinds: readonly Kind[], over: Partial<PickScene> = {}): PickScene {
@@ -49,7 +54,8 @@ function sceneWith(kinds: readonly Kind[], over: Partial<PickScene> = {}): PickS
     units.push(unit(31, far(4, -3), P));
     fixtures.push({ id: 31, positionId: PIPE_FAR.id });
   }
-  if (kinds.includes("position")) s.positions = [...s.positions, { id: 40, kind: "overhead-pipe", x1: P.x - 2, y1: P.y, x2: P.x + 2, y2: P.y }];
+  if (kinds.includes("position"))
+    s.positions = [...s.positions, { id: 40, kind: "overhead-pipe", x1: P.x - 2, y1: P.y, x2: P.x + 2, y2: P.y }];
   return { ...s, units, fixtures, ...over };
 }
 
@@ -95,7 +101,9 @@ describe("pickTarget: who may grab what", () => {
   it("gives a read-only member units and positions only (no focus point, mark or corner to drag)", () => {
     const s = sceneWith(ORDER, { canEdit: false });
     expect(pick(s)).toEqual({ kind: "unit", fixtureId: 30, draggable: false });
-    expect(pick(sceneWith(["focusPoint", "selectedMark", "vertex", "mark", "position"], { canEdit: false })).kind).toBe("position");
+    expect(pick(sceneWith(["focusPoint", "selectedMark", "vertex", "mark", "position"], { canEdit: false })).kind).toBe(
+      "position",
+    );
     expect(pick(sceneWith(["focusPoint", "selectedMark", "vertex", "mark"], { canEdit: false })).kind).toBe("none");
   });
 
@@ -155,7 +163,10 @@ describe("pickTarget: reach in screen pixels", () => {
     // drawn 1.15 symbols (22.5 px) to the side per place in the stack: 25.875 px
     const s = sceneWith([], {
       units: [unit(60, P, null, 0), unit(61, P, null, 1)],
-      fixtures: [{ id: 60, positionId: BOOM_FAR.id }, { id: 61, positionId: BOOM_FAR.id }],
+      fixtures: [
+        { id: 60, positionId: BOOM_FAR.id },
+        { id: 61, positionId: BOOM_FAR.id },
+      ],
     });
     expect(pick(s)).toMatchObject({ kind: "unit", fixtureId: 60 });
     expect(pick(s, { shift: false }, { x: at.x + 25.875, y: at.y })).toMatchObject({ kind: "unit", fixtureId: 61 });
@@ -164,7 +175,10 @@ describe("pickTarget: reach in screen pixels", () => {
   it("takes the nearest of two marks, not the first listed", () => {
     const s = sceneWith([], {
       units: [unit(70, far(-4, -3), { x: P.x + 0.1, y: P.y }), unit(71, far(4, -3), { x: P.x + 0.02, y: P.y })],
-      fixtures: [{ id: 70, positionId: PIPE_FAR.id }, { id: 71, positionId: PIPE_FAR.id }],
+      fixtures: [
+        { id: 70, positionId: PIPE_FAR.id },
+        { id: 71, positionId: PIPE_FAR.id },
+      ],
     });
     expect(pick(s)).toEqual({ kind: "mark", fixtureId: 71 }); // 1 px away beats 5 px away
   });

@@ -3,7 +3,16 @@
 // repeats) against what the hand expects, computed here from plan ↔ screen alone.
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { MAX_SCALE, MIN_SCALE, pinchStep, planToScreen, screenToPlan, wheelZoomFactor, zoomAbout, type View } from "@/lib/plot/view";
+import {
+  MAX_SCALE,
+  MIN_SCALE,
+  pinchStep,
+  planToScreen,
+  screenToPlan,
+  wheelZoomFactor,
+  zoomAbout,
+  type View,
+} from "@/lib/plot/view";
 
 const SEED = 20261205;
 const viewArb = fc.record({
@@ -11,8 +20,12 @@ const viewArb = fc.record({
   ox: fc.double({ min: -2000, max: 2000, noNaN: true }),
   oy: fc.double({ min: -2000, max: 2000, noNaN: true }),
 });
-const screenArb = fc.record({ x: fc.double({ min: 0, max: 1600, noNaN: true }), y: fc.double({ min: 0, max: 1000, noNaN: true }) });
-const near = (a: { x: number; y: number }, b: { x: number; y: number }, tol: number) => Math.hypot(a.x - b.x, a.y - b.y) <= tol;
+const screenArb = fc.record({
+  x: fc.double({ min: 0, max: 1600, noNaN: true }),
+  y: fc.double({ min: 0, max: 1000, noNaN: true }),
+});
+const near = (a: { x: number; y: number }, b: { x: number; y: number }, tol: number) =>
+  Math.hypot(a.x - b.x, a.y - b.y) <= tol;
 
 describe("zoom about a point keeps that point fixed", () => {
   it("leaves the plan point under the pointer under the pointer, for any view, pointer and wheel turn", () => {
@@ -21,7 +34,11 @@ describe("zoom about a point keeps that point fixed", () => {
         const before = screenToPlan(v, s);
         const z = zoomAbout(v, s, wheelZoomFactor(deltaY, ctrl));
         // back on screen, the same plan point lands where the pointer is (to a thousandth of a pixel)
-        return near(planToScreen(z, before), s, 1e-6 * Math.max(1, Math.abs(s.x) + Math.abs(s.y) + Math.abs(v.ox) + Math.abs(v.oy)));
+        return near(
+          planToScreen(z, before),
+          s,
+          1e-6 * Math.max(1, Math.abs(s.x) + Math.abs(s.y) + Math.abs(v.ox) + Math.abs(v.oy)),
+        );
       }),
       { seed: SEED, numRuns: 2000 },
     );
@@ -41,7 +58,11 @@ describe("zoom about a point keeps that point fixed", () => {
     fc.assert(
       fc.property(viewArb, screenArb, fc.integer({ min: -300, max: 300 }), (v, s, d) => {
         const back = zoomAbout(zoomAbout(v, s, wheelZoomFactor(d, false)), s, wheelZoomFactor(-d, false));
-        return Math.abs(back.scale - v.scale) < 1e-9 * v.scale && Math.abs(back.ox - v.ox) < 1e-6 && Math.abs(back.oy - v.oy) < 1e-6;
+        return (
+          Math.abs(back.scale - v.scale) < 1e-9 * v.scale &&
+          Math.abs(back.ox - v.ox) < 1e-6 &&
+          Math.abs(back.oy - v.oy) < 1e-6
+        );
       }),
       { seed: SEED, numRuns: 500 },
     );
@@ -57,7 +78,10 @@ describe("zoom about a point keeps that point fixed", () => {
 });
 
 describe("two-finger pinch", () => {
-  const finger = fc.record({ x: fc.double({ min: 0, max: 1200, noNaN: true }), y: fc.double({ min: 0, max: 900, noNaN: true }) });
+  const finger = fc.record({
+    x: fc.double({ min: 0, max: 1200, noNaN: true }),
+    y: fc.double({ min: 0, max: 900, noNaN: true }),
+  });
 
   it("keeps each finger on its own plan point when the hand only spreads and moves (no turn)", () => {
     // Independent reference: each finger's plan point, read before, must be under that finger after.
@@ -73,11 +97,17 @@ describe("two-finger pinch", () => {
           fc.pre(Math.hypot(b.x - a.x, b.y - a.y) > 20); // two distinct fingers
           fc.pre(v.scale * k > MIN_SCALE && v.scale * k < MAX_SCALE);
           const c = { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 };
-          const moved = (p: { x: number; y: number }) => ({ x: c.x + k * (p.x - c.x) + dx, y: c.y + k * (p.y - c.y) + dy });
+          const moved = (p: { x: number; y: number }) => ({
+            x: c.x + k * (p.x - c.x) + dx,
+            y: c.y + k * (p.y - c.y) + dy,
+          });
           const [a2, b2] = [moved(a), moved(b)];
           const next = pinchStep(v, [a, b], [a2, b2]);
           const tol = 1e-6 * (1 + Math.abs(v.ox) + Math.abs(v.oy));
-          return near(planToScreen(next, screenToPlan(v, a)), a2, tol) && near(planToScreen(next, screenToPlan(v, b)), b2, tol);
+          return (
+            near(planToScreen(next, screenToPlan(v, a)), a2, tol) &&
+            near(planToScreen(next, screenToPlan(v, b)), b2, tol)
+          );
         },
       ),
       { seed: SEED, numRuns: 1000 },
@@ -86,7 +116,17 @@ describe("two-finger pinch", () => {
 
   it("scales by how far the fingers spread: 200 px apart to 300 px is 1.5 times the scale", () => {
     const v: View = { scale: 40, ox: 500, oy: 400 };
-    const next = pinchStep(v, [{ x: 400, y: 300 }, { x: 600, y: 300 }], [{ x: 350, y: 300 }, { x: 650, y: 300 }]);
+    const next = pinchStep(
+      v,
+      [
+        { x: 400, y: 300 },
+        { x: 600, y: 300 },
+      ],
+      [
+        { x: 350, y: 300 },
+        { x: 650, y: 300 },
+      ],
+    );
     expect(next.scale).toBeCloseTo(60, 12);
     // the midpoint (500, 300) did not move, so its plan point stays put
     const m = screenToPlan(v, { x: 500, y: 300 });
@@ -112,7 +152,14 @@ describe("two-finger pinch", () => {
     const a = { x: 10, y: 20 };
     const b = { x: 210, y: 20 };
     expect(pinchStep(v, [a, b], [a, b])).toEqual(v);
-    const touching = pinchStep(v, [a, a], [{ x: 15, y: 25 }, { x: 15, y: 25 }]);
+    const touching = pinchStep(
+      v,
+      [a, a],
+      [
+        { x: 15, y: 25 },
+        { x: 15, y: 25 },
+      ],
+    );
     expect(touching.scale).toBe(33);
     expect(touching.ox).toBeCloseTo(125, 12);
     expect(touching.oy).toBeCloseTo(645, 12);

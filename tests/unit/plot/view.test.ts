@@ -1,5 +1,13 @@
 import { describe, expect, it } from "vitest";
-import { fitBounds, planToScreen, screenToPlan, visiblePlanBounds, zoomAbout, MAX_SCALE, MIN_SCALE } from "@/lib/plot/view";
+import {
+  fitBounds,
+  planToScreen,
+  screenToPlan,
+  visiblePlanBounds,
+  zoomAbout,
+  MAX_SCALE,
+  MIN_SCALE,
+} from "@/lib/plot/view";
 
 const v = { scale: 50, ox: 400, oy: 300 };
 
@@ -15,7 +23,11 @@ describe("plan ↔ screen with the audience at the bottom", () => {
     expect(us).toEqual({ x: 400, y: 150 });
   });
   it("round-trips any point", () => {
-    for (const p of [{ x: -7.25, y: 11.5 }, { x: 0.001, y: -12 }, { x: 3, y: 3 }]) {
+    for (const p of [
+      { x: -7.25, y: 11.5 },
+      { x: 0.001, y: -12 },
+      { x: 3, y: 3 },
+    ]) {
       const back = screenToPlan(v, planToScreen(v, p));
       expect(back.x).toBeCloseTo(p.x, 12);
       expect(back.y).toBeCloseTo(p.y, 12);

@@ -3,7 +3,14 @@ import { describe, expect, it } from "vitest";
 import { Sequelize } from "sequelize";
 import * as mariadb from "mariadb";
 import { Fixture, initFixture } from "@/models/fixture";
-import { emptyFixture, FIXTURE_FIELDS, FIXTURE_SYSTEM_ATTRIBUTES, attributeOf, copyOfFixture, keyOfAttribute } from "@/lib/rig/fixture-fields";
+import {
+  emptyFixture,
+  FIXTURE_FIELDS,
+  FIXTURE_SYSTEM_ATTRIBUTES,
+  attributeOf,
+  copyOfFixture,
+  keyOfAttribute,
+} from "@/lib/rig/fixture-fields";
 import { IMPORT_FIELDS, suggestMapping } from "@/lib/io/fields";
 import { RIG_COLUMNS, headerWithUnit } from "@/lib/rig/columns";
 import { permissionForField } from "@/lib/auth/policy";
@@ -43,14 +50,20 @@ describe("fixture field registry and the Fixture model", () => {
   });
 
   it("text the API accepts fits its column", () => {
-    const shape = fixtureFieldsSchema.shape as unknown as Record<string, { maxLength?: number | null; unwrap?: () => { maxLength?: number | null } }>;
+    const shape = fixtureFieldsSchema.shape as unknown as Record<
+      string,
+      { maxLength?: number | null; unwrap?: () => { maxLength?: number | null } }
+    >;
     for (const [attribute, schema] of Object.entries(shape)) {
       const length = MODEL[attribute].type.options?.length;
       if (MODEL[attribute].type.key !== "STRING" || !length) continue;
       const max = schema.maxLength ?? schema.unwrap?.().maxLength ?? null;
-      if (max != null) expect(max, `${attribute} accepts ${max} characters into STRING(${length})`).toBeLessThanOrEqual(length);
+      if (max != null)
+        expect(max, `${attribute} accepts ${max} characters into STRING(${length})`).toBeLessThanOrEqual(length);
       // Brute force as well: one character over the column's length is refused.
-      expect(fixtureFieldsSchema.partial().safeParse({ [attribute]: "1".repeat(length + 1) }).success, attribute).toBe(false);
+      expect(fixtureFieldsSchema.partial().safeParse({ [attribute]: "1".repeat(length + 1) }).success, attribute).toBe(
+        false,
+      );
     }
   });
 });
@@ -92,15 +105,35 @@ describe("lists derived from the registry", () => {
 // shared/DESIGN.md, "Roles": the electrics row (circuit, dimmer, universe, address, mode, a swap of type,
 // hung/focused status, as-focused notes) plus the crew's records of the focus call (barn doors as focused,
 // the focus photo); every other fixture field is the designer's plot row. Written out independently.
-const ELECTRICS = new Set(["circuit", "dimmer", "universe", "address", "dmxMode", "footprint", "fixtureTypeId", "hung", "focused", "focusNotes", "barnDoorTop", "barnDoorBottom", "barnDoorLeft", "barnDoorRight", "focusPhotoUploadId"]);
+const ELECTRICS = new Set([
+  "circuit",
+  "dimmer",
+  "universe",
+  "address",
+  "dmxMode",
+  "footprint",
+  "fixtureTypeId",
+  "hung",
+  "focused",
+  "focusNotes",
+  "barnDoorTop",
+  "barnDoorBottom",
+  "barnDoorLeft",
+  "barnDoorRight",
+  "focusPhotoUploadId",
+]);
 
 describe("the policy's fixture field rights come from the registry", () => {
   it("each registry field needs the right the design gives it", () => {
-    for (const f of FIXTURE_FIELDS) expect(permissionForField("fixture", f.attribute), f.attribute).toBe(ELECTRICS.has(f.attribute) ? "rig.editElectrics" : "plot.edit");
+    for (const f of FIXTURE_FIELDS)
+      expect(permissionForField("fixture", f.attribute), f.attribute).toBe(
+        ELECTRICS.has(f.attribute) ? "rig.editElectrics" : "plot.edit",
+      );
   });
 
   it("bookkeeping attributes and unknown names cannot be written", () => {
-    for (const a of [...system, "constructor", "__proto__", "nonsense"]) expect(permissionForField("fixture", a), a).toBeNull();
+    for (const a of [...system, "constructor", "__proto__", "nonsense"])
+      expect(permissionForField("fixture", a), a).toBeNull();
   });
 });
 
@@ -108,25 +141,64 @@ describe("a new fixture's empty values", () => {
   const empty = emptyFixture() as Record<string, unknown>;
 
   it("cover every field with a default, including gobo rotation and the barn doors", () => {
-    for (const f of FIXTURE_FIELDS) if ("default" in f) expect(empty, f.attribute).toHaveProperty(f.attribute, f.default);
-    for (const a of ["goboRotationDeg", "barnDoorTop", "barnDoorBottom", "barnDoorLeft", "barnDoorRight", "focusPhotoUploadId"]) expect(empty[a], a).toBeNull();
+    for (const f of FIXTURE_FIELDS)
+      if ("default" in f) expect(empty, f.attribute).toHaveProperty(f.attribute, f.default);
+    for (const a of [
+      "goboRotationDeg",
+      "barnDoorTop",
+      "barnDoorBottom",
+      "barnDoorLeft",
+      "barnDoorRight",
+      "focusPhotoUploadId",
+    ])
+      expect(empty[a], a).toBeNull();
     expect(empty).toMatchObject({ aim: "deck", hung: false, focused: false, focusedAt: null, focusedBy: null });
   });
 
   it("pass the API's own checks, with only the required fields added", () => {
     const writable = Object.fromEntries(Object.entries(empty).filter(([a]) => a in fixtureFieldsSchema.shape));
-    const parsed = fixtureCreateSchema.safeParse({ ...writable, positionId: 1, fixtureTypeId: 2, unitNumber: "7A", x: -1.5, y: 3 });
+    const parsed = fixtureCreateSchema.safeParse({
+      ...writable,
+      positionId: 1,
+      fixtureTypeId: 2,
+      unitNumber: "7A",
+      x: -1.5,
+      y: 3,
+    });
     expect(parsed.success, JSON.stringify(parsed.error?.issues)).toBe(true);
     expect(fixtureCreateSchema.safeParse(writable).success).toBe(false);
   });
 });
 
 describe("a copy of a unit", () => {
-  const unit = { ...emptyFixture(), id: 9, version: 4, positionId: 1, fixtureTypeId: 2, unitNumber: "7", x: 1, y: 2, colour: "pale lavender", goboRotationDeg: 45, barnDoorTop: "in halfway", hung: true, focused: true };
+  const unit = {
+    ...emptyFixture(),
+    id: 9,
+    version: 4,
+    positionId: 1,
+    fixtureTypeId: 2,
+    unitNumber: "7",
+    x: 1,
+    y: 2,
+    colour: "pale lavender",
+    goboRotationDeg: 45,
+    barnDoorTop: "in halfway",
+    hung: true,
+    focused: true,
+  };
 
   it("carries the designer's intent and leaves the crew's records of this one unit behind", () => {
     const copy = copyOfFixture(unit);
-    expect(copy).toEqual({ positionId: 1, unitNumber: "7", fixtureTypeId: 2, colour: "pale lavender", x: 1, y: 2, aim: "deck", goboRotationDeg: 45 });
+    expect(copy).toEqual({
+      positionId: 1,
+      unitNumber: "7",
+      fixtureTypeId: 2,
+      colour: "pale lavender",
+      x: 1,
+      y: 2,
+      aim: "deck",
+      goboRotationDeg: 45,
+    });
     expect(fixtureCreateSchema.safeParse(copy).success).toBe(true);
   });
 });

@@ -6,7 +6,19 @@ import { describe, expect, it } from "vitest";
 import { loadDemoTables } from "../focus/demo-production";
 
 const ROOT = process.cwd();
-const DIRS = ["app", "components", "hooks", "lib", "models", "seeders", "migrations", "tests", "bench", "docs", "scripts"];
+const DIRS = [
+  "app",
+  "components",
+  "hooks",
+  "lib",
+  "models",
+  "seeders",
+  "migrations",
+  "tests",
+  "bench",
+  "docs",
+  "scripts",
+];
 const TEXT = /\.(ts|tsx|cjs|mjs|js|md|css|json)$/;
 
 function files(dir: string): string[] {
@@ -32,17 +44,21 @@ describe("our own colour words", () => {
     const hits: string[] = [];
     for (const f of DIRS.flatMap((d) => files(d))) {
       if (f.endsWith("own-words.test.ts")) continue;
-      readFileSync(path.join(ROOT, f), "utf8").split("\n").forEach((line, i) => {
-        if (/\bd="|path d=|points="|viewBox/.test(line)) return;
-        if (CATALOGUE.test(line)) hits.push(`${f}:${i + 1}: ${line.trim().slice(0, 100)}`);
-      });
+      readFileSync(path.join(ROOT, f), "utf8")
+        .split("\n")
+        .forEach((line, i) => {
+          if (/\bd="|path d=|points="|viewBox/.test(line)) return;
+          if (CATALOGUE.test(line)) hits.push(`${f}:${i + 1}: ${line.trim().slice(0, 100)}`);
+        });
     }
     expect(hits).toEqual([]);
   });
 
   it("the pattern catches the kinds of entry it is meant to catch", () => {
-    for (const s of ['colour: "L201"', "L201 + #132", "R02+L119", 'colour: "R80"']) expect(CATALOGUE.test(s), s).toBe(true);
-    for (const s of ['colour: "full CTB + light frost"', "M6 7 L13 25", "Profile 26", "DMX 512"]) expect(CATALOGUE.test(s), s).toBe(false);
+    for (const s of ['colour: "L201"', "L201 + #132", "R02+L119", 'colour: "R80"'])
+      expect(CATALOGUE.test(s), s).toBe(true);
+    for (const s of ['colour: "full CTB + light frost"', "M6 7 L13 25", "Profile 26", "DMX 512"])
+      expect(CATALOGUE.test(s), s).toBe(false);
   });
 });
 

@@ -19,7 +19,8 @@ describe("point-hung position kinds", () => {
 
   it("spreads units along pipes, electrics, trusses, bridges and rails", () => {
     // common practice, no source: these are hung between two ends and units are clamped along them.
-    for (const kind of ["overhead-pipe", "flying-electric", "truss", "foh-bridge", "foh-rail"]) expect(isPointHung(kind), kind).toBe(false);
+    for (const kind of ["overhead-pipe", "flying-electric", "truss", "foh-bridge", "foh-rail"])
+      expect(isPointHung(kind), kind).toBe(false);
   });
 
   it("classifies every kind, and nothing else", () => {

@@ -32,25 +32,51 @@ describe("frame sizes and cuts per sheet", () => {
 });
 
 describe("stockCounts", () => {
-  const f = (over: Partial<Parameters<typeof stockCounts>[0][number]>) => ({ fixtureTypeId: 1, typeName: "Profile 26", colour: null, gobo: null, circuit: null, bodyKey: null, positionId: 1, unitNumber: "1", ...over });
-  const types = [{ id: 1, frameSize: "6.25 in", goboSize: "B" }, { id: 2, frameSize: "7.5 in", goboSize: null }];
+  const f = (over: Partial<Parameters<typeof stockCounts>[0][number]>) => ({
+    fixtureTypeId: 1,
+    typeName: "Profile 26",
+    colour: null,
+    gobo: null,
+    circuit: null,
+    bodyKey: null,
+    positionId: 1,
+    unitNumber: "1",
+    ...over,
+  });
+  const types = [
+    { id: 1, frameSize: "6.25 in", goboSize: "B" },
+    { id: 2, frameSize: "7.5 in", goboSize: null },
+  ];
 
   it("counts units, cuts by colour and frame, sheets, gobos, accessories and Y-cables", () => {
     const fixtures = [
-      ...Array.from({ length: 10 }, (_, i) => f({ unitNumber: String(i + 1), colour: "pale blue + light frost", circuit: i < 3 ? "12" : String(100 + i) })),
+      ...Array.from({ length: 10 }, (_, i) =>
+        f({ unitNumber: String(i + 1), colour: "pale blue + light frost", circuit: i < 3 ? "12" : String(100 + i) }),
+      ),
       f({ fixtureTypeId: 2, typeName: "Fresnel", colour: "pale blue", gobo: "breakup", circuit: "7" }),
       f({ gobo: "breakup" }),
     ];
     const s = stockCounts(fixtures, types, [{ kind: "scroller" }, { kind: "scroller" }, { kind: "iris" }]);
-    expect(s.units).toEqual([{ type: "Profile 26", count: 11 }, { type: "Fresnel", count: 1 }]);
+    expect(s.units).toEqual([
+      { type: "Profile 26", count: 11 },
+      { type: "Fresnel", count: 1 },
+    ]);
     // common practice, from memory: 9 cuts of 6.25 in per sheet → 10 cuts need 2 sheets
     expect(s.cuts).toEqual([
       { colour: "light frost", frameSize: "6.25 in", cuts: 10, perSheet: 9, sheets: 2 },
       { colour: "pale blue", frameSize: "6.25 in", cuts: 10, perSheet: 9, sheets: 2 },
       { colour: "pale blue", frameSize: "7.5 in", cuts: 1, perSheet: 6, sheets: 1 },
     ]);
-    expect(s.gobos).toEqual(expect.arrayContaining([{ gobo: "breakup", size: "B", count: 1 }, { gobo: "breakup", size: "size not set", count: 1 }]));
-    expect(s.accessories).toEqual([{ kind: "scroller", count: 2 }, { kind: "iris", count: 1 }]);
+    expect(s.gobos).toEqual(
+      expect.arrayContaining([
+        { gobo: "breakup", size: "B", count: 1 },
+        { gobo: "breakup", size: "size not set", count: 1 },
+      ]),
+    );
+    expect(s.accessories).toEqual([
+      { kind: "scroller", count: 2 },
+      { kind: "iris", count: 1 },
+    ]);
     // common practice, no source: three units on one circuit need two Y-cables
     expect(s.yCables).toEqual([{ circuit: "12", fixtures: 3, yCables: 2 }]);
   });

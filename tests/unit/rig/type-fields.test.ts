@@ -6,12 +6,23 @@ const col = (key: string) => TYPE_COLUMNS.find((c) => c.key === key)!;
 describe("typed fixture-type cells", () => {
   it("reads a fixed cone and a zoom range", () => {
     expect(parseTypeCell(col("cone"), "26", "metric")).toEqual({ ok: true, patch: { coneMinDeg: 26, coneMaxDeg: 26 } });
-    expect(parseTypeCell(col("cone"), "15–30°", "metric")).toEqual({ ok: true, patch: { coneMinDeg: 15, coneMaxDeg: 30 } });
+    expect(parseTypeCell(col("cone"), "15–30°", "metric")).toEqual({
+      ok: true,
+      patch: { coneMinDeg: 15, coneMaxDeg: 30 },
+    });
     const backwards = parseTypeCell(col("cone"), "30-15", "metric");
     expect(backwards.ok).toBe(false);
   });
   it("reads DMX modes and refuses a footprint past 512 slots", () => {
-    expect(parseTypeCell(col("dmxModes"), "dimmer 1, extended (4)", "metric")).toEqual({ ok: true, patch: { dmxModes: [{ name: "dimmer", footprint: 1 }, { name: "extended", footprint: 4 }] } });
+    expect(parseTypeCell(col("dmxModes"), "dimmer 1, extended (4)", "metric")).toEqual({
+      ok: true,
+      patch: {
+        dmxModes: [
+          { name: "dimmer", footprint: 1 },
+          { name: "extended", footprint: 4 },
+        ],
+      },
+    });
     // ANSI E1.11: a universe has 512 slots
     const big = parseTypeCell(col("dmxModes"), "huge 600", "metric");
     expect(big.ok ? "" : big.message).toMatch(/1–512/);
@@ -29,8 +40,14 @@ describe("typed fixture-type cells", () => {
 
 describe("a zoom's peak at both ends of its range", () => {
   it("reads the narrow-end peak, clears it when emptied, and refuses a negative one", () => {
-    expect(parseTypeCell(col("peakCandelaNarrow"), "90000", "metric")).toEqual({ ok: true, patch: { peakCandelaNarrow: 90000 } });
-    expect(parseTypeCell(col("peakCandelaNarrow"), " ", "metric")).toEqual({ ok: true, patch: { peakCandelaNarrow: null } });
+    expect(parseTypeCell(col("peakCandelaNarrow"), "90000", "metric")).toEqual({
+      ok: true,
+      patch: { peakCandelaNarrow: 90000 },
+    });
+    expect(parseTypeCell(col("peakCandelaNarrow"), " ", "metric")).toEqual({
+      ok: true,
+      patch: { peakCandelaNarrow: null },
+    });
     const neg = parseTypeCell(col("peakCandelaNarrow"), "-5", "metric");
     expect(neg.ok ? "" : neg.message).toMatch(/^Peak at narrowest \(cd\): .*cannot be negative/);
     expect(col("peakCandela").header).toBe("Peak at widest (cd)");
@@ -38,7 +55,27 @@ describe("a zoom's peak at both ends of its range", () => {
 });
 
 describe("a datasheet's beam and field angles typed into the types table", () => {
-  const base = { id: 1, productionId: 1, name: "Profile 26", family: "profile", coneMinDeg: 26, coneMaxDeg: 26, defaultSoftnessDeg: 2, peakCandela: 40000, peakCandelaNarrow: null, wattage: 750, weightKg: 7, dmxModes: [{ name: "dimmer", footprint: 1 }], lensApertureM: 0.13, frameSize: null, goboSize: null, lensDropM: 0.45, cells: 1, version: 1, updatedAt: "2026-12-05T10:00:00.000Z" };
+  const base = {
+    id: 1,
+    productionId: 1,
+    name: "Profile 26",
+    family: "profile",
+    coneMinDeg: 26,
+    coneMaxDeg: 26,
+    defaultSoftnessDeg: 2,
+    peakCandela: 40000,
+    peakCandelaNarrow: null,
+    wattage: 750,
+    weightKg: 7,
+    dmxModes: [{ name: "dimmer", footprint: 1 }],
+    lensApertureM: 0.13,
+    frameSize: null,
+    goboSize: null,
+    lensDropM: 0.45,
+    cells: 1,
+    version: 1,
+    updatedAt: "2026-12-05T10:00:00.000Z",
+  };
 
   it("maps beam/field onto cone and softness so the model's 50 % and 10 % points land on them", () => {
     // DESIGN.md beam model: s = (F − B)/0.59, θ = B + s; hand-worked for B 22°, F 30°: s = 8/0.590334 = 13.55°,
@@ -50,7 +87,10 @@ describe("a datasheet's beam and field angles typed into the types table", () =>
   it("a zoom's datasheet figures set its widest end; a peaked family keeps cone = field", () => {
     // DESIGN.md: peaked families are ½ at (θ − s)/2 and 1/10 at θ/2 by construction
     const fresnel = { ...base, family: "fresnel", coneMinDeg: 15, coneMaxDeg: 60 };
-    expect(parseTypeCell(col("datasheet"), "40/55", "metric", fresnel)).toEqual({ ok: true, patch: { coneMaxDeg: 55, defaultSoftnessDeg: 15 } });
+    expect(parseTypeCell(col("datasheet"), "40/55", "metric", fresnel)).toEqual({
+      ok: true,
+      patch: { coneMaxDeg: 55, defaultSoftnessDeg: 15 },
+    });
   });
 
   it("shows the model's own 50 % and 10 % angles and refuses text that is not two angles", () => {

@@ -7,7 +7,10 @@ import { readImageHeader, reencodeUnderlay } from "@/lib/storage/image-decode";
 import { makePng, pngClaiming } from "../../support/png";
 
 async function refusedWith(p: Promise<unknown>): Promise<AppError> {
-  const err = await p.then(() => null, (e: unknown) => e);
+  const err = await p.then(
+    () => null,
+    (e: unknown) => e,
+  );
   expect(err).toBeInstanceOf(AppError);
   return err as AppError;
 }
@@ -21,8 +24,15 @@ describe("reading an uploaded picture's header", () => {
   });
 
   it("refuses what is not a PNG, JPEG or WebP (415), naming the kind of picture", async () => {
-    const svgs = ["<svg xmlns='http://www.w3.org/2000/svg' width='9' height='9'/>", "<svg xmlns='http://www.w3.org/2000/svg'></svg>"];
-    for (const bytes of [...svgs.map((t) => new TextEncoder().encode(t)), new TextEncoder().encode("just text"), await sharp(makePng(8, 8)).gif().toBuffer()]) {
+    const svgs = [
+      "<svg xmlns='http://www.w3.org/2000/svg' width='9' height='9'/>",
+      "<svg xmlns='http://www.w3.org/2000/svg'></svg>",
+    ];
+    for (const bytes of [
+      ...svgs.map((t) => new TextEncoder().encode(t)),
+      new TextEncoder().encode("just text"),
+      await sharp(makePng(8, 8)).gif().toBuffer(),
+    ]) {
       const err = await refusedWith(readImageHeader(bytes, "photo"));
       expect(err.status).toBe(415);
       expect(err.message).toMatch(/not a PNG, JPEG or WebP photo/);

@@ -1,13 +1,28 @@
 import { describe, expect, it } from "vitest";
 import {
-  areaCoverage, coverageGrid, faceLightAt, gridPoint, illuminanceAt, type Bounds, type CoverageGrid, type LitBeam,
+  areaCoverage,
+  coverageGrid,
+  faceLightAt,
+  gridPoint,
+  illuminanceAt,
+  type Bounds,
+  type CoverageGrid,
+  type LitBeam,
 } from "@/lib/optics";
 import { seededRandom } from "@/bench/support/numbers";
 
 const SQRT2 = Math.SQRT2;
 
 function beam(over: Partial<LitBeam> = {}): LitBeam {
-  return { source: { x: 0, y: 0, z: 5 }, focus: { x: 0, y: 0, z: 0 }, coneDeg: 30, softnessDeg: 5, peakCandela: 10_000, level: 1, ...over };
+  return {
+    source: { x: 0, y: 0, z: 5 },
+    focus: { x: 0, y: 0, z: 0 },
+    coneDeg: 30,
+    softnessDeg: 5,
+    peakCandela: 10_000,
+    level: 1,
+    ...over,
+  };
 }
 
 /** Cells of 0.5 m with a centre exactly on the origin: bounds start half a cell off a whole metre. */
@@ -32,7 +47,7 @@ describe("deck coverage: one unit straight down", () => {
   it("falls off by the cosine law off the axis, inside the flat core", () => {
     // E = I·cos(inc)/d² = I·h/d³ (cosine law); at 0.5 m off the axis (5.7°, inside the 10° core), d² = 25.25;
     // hand-worked: 50,000/25.25^1.5 = 394.07 lx
-    const expected = (10_000 * 5) / Math.pow(25.25, 1.5);
+    const expected = (10_000 * 5) / 25.25 ** 1.5;
     expect(Math.abs(expected - 394.07)).toBeLessThan(1e-2);
     expect(Math.abs(valueAt(g, 0.5, 0) - expected)).toBeLessThanOrEqual(1e-6 * expected);
   });
@@ -41,7 +56,12 @@ describe("deck coverage: one unit straight down", () => {
     // symmetry of a straight-down cone (geometry, no source needed)
     const e = valueAt(g, 1, 0);
     expect(e).toBeGreaterThan(0);
-    for (const [x, y] of [[-1, 0], [0, 1], [0, -1]]) expect(Math.abs(valueAt(g, x, y) - e)).toBeLessThanOrEqual(1e-6 * e);
+    for (const [x, y] of [
+      [-1, 0],
+      [0, 1],
+      [0, -1],
+    ])
+      expect(Math.abs(valueAt(g, x, y) - e)).toBeLessThanOrEqual(1e-6 * e);
     // 30° cone from 5 m: pool radius 5·tan 15° = 1.34 m (REFERENCE.md beam spread), so 1.5 m out is dark
     expect(valueAt(g, 1.5, 0)).toBe(0);
     expect(valueAt(g, 0, -1.5)).toBe(0);
@@ -49,10 +69,22 @@ describe("deck coverage: one unit straight down", () => {
 
   it("measures every plane from the show deck", () => {
     // A lens 6 m over the stage floor and a show deck 1 m up: 5 m above the deck → 400 lx (inverse-square law)
-    const raised = coverageGrid({ bounds, resolution: 0.5, deckHeight: 1, measure: { kind: "deck" }, beams: [beam({ source: { x: 0, y: 0, z: 6 }, focus: { x: 0, y: 0, z: 1 } })] });
+    const raised = coverageGrid({
+      bounds,
+      resolution: 0.5,
+      deckHeight: 1,
+      measure: { kind: "deck" },
+      beams: [beam({ source: { x: 0, y: 0, z: 6 }, focus: { x: 0, y: 0, z: 1 } })],
+    });
     expect(Math.abs(valueAt(raised, 0, 0) - 400)).toBeLessThanOrEqual(1e-6 * 400);
     // Head height 1 m above that deck: 4 m from the lens → 10,000/16 = 625 lx (inverse-square law)
-    const head = coverageGrid({ bounds, resolution: 0.5, deckHeight: 1, measure: { kind: "plane", height: 1 }, beams: [beam({ source: { x: 0, y: 0, z: 6 }, focus: { x: 0, y: 0, z: 1 } })] });
+    const head = coverageGrid({
+      bounds,
+      resolution: 0.5,
+      deckHeight: 1,
+      measure: { kind: "plane", height: 1 },
+      beams: [beam({ source: { x: 0, y: 0, z: 6 }, focus: { x: 0, y: 0, z: 1 } })],
+    });
     expect(Math.abs(valueAt(head, 0, 0) - 625)).toBeLessThanOrEqual(1e-6 * 625);
   });
 
@@ -71,10 +103,10 @@ describe("two overlapping pools", () => {
 
   it("adds the two pools where they overlap", () => {
     // Midway both lenses are 1 m off: 2·I·h/d³ = 2·377.146 = 754.29 lx (inverse-square and cosine law, hand-worked)
-    const expected = (2 * 10_000 * 5) / Math.pow(26, 1.5);
+    const expected = (2 * 10_000 * 5) / 26 ** 1.5;
     expect(Math.abs(valueAt(g, 0, 0) - expected)).toBeLessThanOrEqual(1e-6 * expected);
     // Under one lens: its own 400 lx plus the other's at 2 m off, 50,000/29^1.5 (hand-worked)
-    const under = 400 + 50_000 / Math.pow(29, 1.5);
+    const under = 400 + 50_000 / 29 ** 1.5;
     expect(Math.abs(valueAt(g, 1, 0) - under)).toBeLessThanOrEqual(1e-6 * under);
   });
 
@@ -93,7 +125,10 @@ describe("two overlapping pools", () => {
 describe("acting areas", () => {
   const g = coverageGrid({ bounds, resolution: 0.5, deckHeight: 0, measure: { kind: "deck" }, beams: [beam()] });
   const square = (cx: number, cy: number, r: number) => [
-    { x: cx - r, y: cy - r }, { x: cx + r, y: cy - r }, { x: cx + r, y: cy + r }, { x: cx - r, y: cy + r },
+    { x: cx - r, y: cy - r },
+    { x: cx + r, y: cy - r },
+    { x: cx + r, y: cy + r },
+    { x: cx - r, y: cy + r },
   ];
 
   it("gives a zone in full darkness uniformity 0, with no division by zero", () => {
@@ -114,7 +149,7 @@ describe("acting areas", () => {
     const vals: number[] = [];
     for (const x of [-0.5, 0, 0.5]) for (const y of [-0.5, 0, 0.5]) vals.push(illuminanceAt({ x, y, z: 0 }, [beam()]));
     // hand-worked corner: d² = 25.5, E = I·h/d³ = 50,000/25.5^1.5 = 388.28 lx (cosine law)
-    expect(Math.min(...vals)).toBeCloseTo(50_000 / Math.pow(25.5, 1.5), 9);
+    expect(Math.min(...vals)).toBeCloseTo(50_000 / 25.5 ** 1.5, 9);
     const mean = vals.reduce((s, v) => s + v, 0) / vals.length;
     const min = Math.min(...vals);
     expect(Math.abs(a.mean! - mean)).toBeLessThan(0.05);
@@ -128,7 +163,14 @@ describe("acting areas", () => {
 
   it("reproduces the published uniformity example {100, 200, 300, 400} lx → U0 0.40", () => {
     // REFERENCE.md: U0 = Emin/Eavg = 100/250 = 0.40 (EN 12464-1, CIBSE); IES form Eavg:Emin = 2.5
-    const grid = { values: new Float32Array([100, 200, 300, 400]), cols: 2, rows: 2, originX: 0.5, originY: 0.5, resolution: 1 };
+    const grid = {
+      values: new Float32Array([100, 200, 300, 400]),
+      cols: 2,
+      rows: 2,
+      originX: 0.5,
+      originY: 0.5,
+      resolution: 1,
+    };
     const [a] = areaCoverage(grid, [{ id: 1, name: "Four", polygon: square(1, 1, 1) }]);
     expect(a.count).toBe(4);
     expect(a.uniformity).toBeCloseTo(0.4, 12);
@@ -138,17 +180,34 @@ describe("acting areas", () => {
 
   it("flags an area whose mean differs from the others by more than the chosen ratio", () => {
     // common practice, no source: a mean over twice (or under half) the other areas' stands out
-    const grid = { values: new Float32Array([100, 100, 100, 500]), cols: 4, rows: 1, originX: 0.5, originY: 0.5, resolution: 1 };
+    const grid = {
+      values: new Float32Array([100, 100, 100, 500]),
+      cols: 4,
+      rows: 1,
+      originX: 0.5,
+      originY: 0.5,
+      resolution: 1,
+    };
     const cell = (x: number) => square(x, 0.5, 0.4);
-    const rows = areaCoverage(grid, [1, 2, 3, 4].map((k) => ({ id: k, name: `A${k}`, polygon: cell(k - 0.5) })));
+    const rows = areaCoverage(
+      grid,
+      [1, 2, 3, 4].map((k) => ({ id: k, name: `A${k}`, polygon: cell(k - 0.5) })),
+    );
     expect(rows[3].meanRatio).toBeCloseTo(5, 9);
     expect(rows[3].flags).toEqual(["brighter"]);
     // against the median of the others (100, 100, 500 → 100), one bright area does not make the rest look dim
     expect(rows[0].meanRatio).toBeCloseTo(1, 9);
     expect(rows[0].flags).toEqual([]);
-    const dim = areaCoverage({ ...grid, values: new Float32Array([100, 100, 100, 40]) }, [1, 2, 3, 4].map((k) => ({ id: k, name: `A${k}`, polygon: cell(k - 0.5) })));
+    const dim = areaCoverage(
+      { ...grid, values: new Float32Array([100, 100, 100, 40]) },
+      [1, 2, 3, 4].map((k) => ({ id: k, name: `A${k}`, polygon: cell(k - 0.5) })),
+    );
     expect(dim[3].flags).toEqual(["dimmer"]);
-    const loose = areaCoverage(grid, [1, 2, 3, 4].map((k) => ({ id: k, name: `A${k}`, polygon: cell(k - 0.5) })), { minUniformity: 0.5, meanRatio: 6 });
+    const loose = areaCoverage(
+      grid,
+      [1, 2, 3, 4].map((k) => ({ id: k, name: `A${k}`, polygon: cell(k - 0.5) })),
+      { minUniformity: 0.5, meanRatio: 6 },
+    );
     expect(loose[3].flags).toEqual([]);
   });
 });
@@ -191,12 +250,17 @@ describe("face light (vertical illuminance)", () => {
     const r = seededRandom(16);
     const beams: LitBeam[] = [];
     for (let k = 0; k < 40; k++) {
-      beams.push(beam({
-        source: { x: -7 + 14 * r(), y: -8 + 14 * r(), z: 0.3 + 8 * r() }, // some below face height: footlights
-        focus: { x: -6 + 12 * r(), y: -6 + 12 * r(), z: r() < 0.5 ? 1.7 : 0 },
-        coneDeg: 10 + 50 * r(), softnessDeg: 8 * r(), peakCandela: 5000 + 40_000 * r(), level: r(),
-        family: k % 2 ? "fresnel" : "profile",
-      }));
+      beams.push(
+        beam({
+          source: { x: -7 + 14 * r(), y: -8 + 14 * r(), z: 0.3 + 8 * r() }, // some below face height: footlights
+          focus: { x: -6 + 12 * r(), y: -6 + 12 * r(), z: r() < 0.5 ? 1.7 : 0 },
+          coneDeg: 10 + 50 * r(),
+          softnessDeg: 8 * r(),
+          peakCandela: 5000 + 40_000 * r(),
+          level: r(),
+          family: k % 2 ? "fresnel" : "profile",
+        }),
+      );
     }
     const m = { kind: "face" as const, height: 1.55, facingDeg: -60 };
     const g = coverageGrid({ bounds, resolution: 0.5, deckHeight: 0, measure: m, beams });

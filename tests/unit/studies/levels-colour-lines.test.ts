@@ -1,7 +1,14 @@
 import { describe, expect, it } from "vitest";
 import {
-  coverageGrid, differenceGrid, dimmerCurveOf, illuminanceAt, lightFromLevel, lineProfile, transmissionOf,
-  tungstenColourTemperature, type LitBeam,
+  coverageGrid,
+  differenceGrid,
+  dimmerCurveOf,
+  illuminanceAt,
+  lightFromLevel,
+  lineProfile,
+  transmissionOf,
+  tungstenColourTemperature,
+  type LitBeam,
 } from "@/lib/optics";
 
 describe("level → light per type family", () => {
@@ -14,7 +21,7 @@ describe("level → light per type family", () => {
   it("rises much faster than the level for tungsten, as the stated power law", () => {
     // from memory: light ∝ level^2.3 (between a square law and the lamp law's V^3.4)
     expect(dimmerCurveOf("profile")).toBe("tungsten");
-    expect(lightFromLevel(0.5, "tungsten")).toBeCloseTo(Math.pow(0.5, 2.3), 12);
+    expect(lightFromLevel(0.5, "tungsten")).toBeCloseTo(0.5 ** 2.3, 12);
     expect(lightFromLevel(0.5, "tungsten")).toBeLessThan(0.21);
     expect(lightFromLevel(1, "tungsten")).toBe(1);
     expect(lightFromLevel(0, "tungsten")).toBe(0);
@@ -25,14 +32,18 @@ describe("level → light per type family", () => {
     // lamp law, from memory: CCT ∝ V^0.42, lumens ∝ V^3.4; at a quarter of the light V = 0.25^(1/3.4) = 0.665,
     // so 3200 K · 0.665^0.42 = 2697 K
     expect(tungstenColourTemperature(1)).toBeCloseTo(3200, 9);
-    const quarter = Math.pow(0.25, 1 / 2.3); // the level that gives a quarter of the light
-    expect(tungstenColourTemperature(quarter)).toBeCloseTo(3200 * Math.pow(Math.pow(0.25, 1 / 3.4), 0.42), 6);
+    const quarter = 0.25 ** (1 / 2.3); // the level that gives a quarter of the light
+    expect(tungstenColourTemperature(quarter)).toBeCloseTo(3200 * (0.25 ** (1 / 3.4)) ** 0.42, 6);
     expect(Math.abs(tungstenColourTemperature(quarter) - 2697)).toBeLessThan(1);
   });
 });
 
 describe("colour transmission", () => {
-  const list = new Map([["pale lavender", 60], ["light frost", 90], ["full CTB", 36]]);
+  const list = new Map([
+    ["pale lavender", 60],
+    ["light frost", 90],
+    ["full CTB", 36],
+  ]);
 
   it("uses the colour text exactly as typed", () => {
     expect(transmissionOf("pale lavender", list)).toEqual({ factor: 0.6, missing: [] });
@@ -54,10 +65,23 @@ describe("colour transmission", () => {
 
 describe("difference map and line profile", () => {
   const bounds = { minX: -6, minY: -1, maxX: 6, maxY: 1 };
-  const unit = (x: number): LitBeam => ({ source: { x, y: 0, z: 5 }, focus: { x, y: 0, z: 0 }, coneDeg: 36, softnessDeg: 8, peakCandela: 10_000, level: 1 });
+  const unit = (x: number): LitBeam => ({
+    source: { x, y: 0, z: 5 },
+    focus: { x, y: 0, z: 0 },
+    coneDeg: 36,
+    softnessDeg: 8,
+    peakCandela: 10_000,
+    level: 1,
+  });
 
   it("shows the dip an actor walks through between two pools", () => {
-    const g = coverageGrid({ bounds, resolution: 0.1, deckHeight: 0, measure: { kind: "deck" }, beams: [unit(-2.5), unit(2.5)] });
+    const g = coverageGrid({
+      bounds,
+      resolution: 0.1,
+      deckHeight: 0,
+      measure: { kind: "deck" },
+      beams: [unit(-2.5), unit(2.5)],
+    });
     const line = lineProfile(g, { x: -2.5, y: 0.05 }, { x: 2.5, y: 0.05 });
     expect(line.length).toBe(51);
     expect(line[0].distance).toBe(0);
@@ -74,7 +98,8 @@ describe("difference map and line profile", () => {
 
   it("interpolates a linear field exactly (bilinear reference)", () => {
     // a plane E = 10x + 3y + 50 is reproduced exactly by bilinear interpolation (numerical analysis, no source)
-    const cols = 5, rows = 4;
+    const cols = 5,
+      rows = 4;
     const values = new Float32Array(cols * rows);
     for (let r = 0; r < rows; r++) for (let c = 0; c < cols; c++) values[r * cols + c] = 10 * c + 3 * r + 50;
     const g = { values, cols, rows, originX: 0, originY: 0, resolution: 1 };
@@ -85,9 +110,21 @@ describe("difference map and line profile", () => {
 
   it("subtracts cue A from cue B cell by cell", () => {
     const a = coverageGrid({ bounds, resolution: 0.5, deckHeight: 0, measure: { kind: "deck" }, beams: [unit(-2.5)] });
-    const b = coverageGrid({ bounds, resolution: 0.5, deckHeight: 0, measure: { kind: "deck" }, beams: [unit(-2.5), unit(2.5)] });
+    const b = coverageGrid({
+      bounds,
+      resolution: 0.5,
+      deckHeight: 0,
+      measure: { kind: "deck" },
+      beams: [unit(-2.5), unit(2.5)],
+    });
     const diff = differenceGrid(a, b);
-    const only = coverageGrid({ bounds, resolution: 0.5, deckHeight: 0, measure: { kind: "deck" }, beams: [unit(2.5)] });
+    const only = coverageGrid({
+      bounds,
+      resolution: 0.5,
+      deckHeight: 0,
+      measure: { kind: "deck" },
+      beams: [unit(2.5)],
+    });
     for (let k = 0; k < diff.length; k++) expect(Math.abs(diff[k] - only.values[k])).toBeLessThan(1e-3);
     const coarse = coverageGrid({ bounds, resolution: 1, deckHeight: 0, measure: { kind: "deck" }, beams: [] });
     expect(() => differenceGrid(a, coarse)).toThrow(/different cells/);

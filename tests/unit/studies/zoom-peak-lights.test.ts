@@ -2,9 +2,29 @@ import { describe, expect, it } from "vitest";
 import { studyLights, type StudyFixture } from "@/lib/studies/lights";
 
 const zoomUnit = (coneDeg: number | null): StudyFixture => ({
-  id: 1, unitNumber: "1", positionName: "1st Electric", channel: 1, colour: null, x: 0, y: 0, lensHeight: 6, trimHeight: 7,
-  focus: { x: 0, y: 0 }, aim: "deck", coneDeg, softnessDeg: null,
-  type: { family: "profile", coneMinDeg: 15, coneMaxDeg: 40, defaultSoftnessDeg: 3, lensDropM: 0.5, lensApertureM: 0.12, peakCandela: 20_000, peakCandelaNarrow: 90_000 },
+  id: 1,
+  unitNumber: "1",
+  positionName: "1st Electric",
+  channel: 1,
+  colour: null,
+  x: 0,
+  y: 0,
+  lensHeight: 6,
+  trimHeight: 7,
+  focus: { x: 0, y: 0 },
+  aim: "deck",
+  coneDeg,
+  softnessDeg: null,
+  type: {
+    family: "profile",
+    coneMinDeg: 15,
+    coneMaxDeg: 40,
+    defaultSoftnessDeg: 3,
+    lensDropM: 0.5,
+    lensApertureM: 0.12,
+    peakCandela: 20_000,
+    peakCandelaNarrow: 90_000,
+  },
 });
 const setup = { headHeight: 1.7, deckHeight: 0, colours: new Map<string, number>() };
 

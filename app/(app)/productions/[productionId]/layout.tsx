@@ -11,7 +11,13 @@ export async function generateMetadata({ params }: { params: Promise<{ productio
   return { title: { template: `%s · ${production.name} · Throwline`, default: `${production.name} · Throwline` } };
 }
 
-export default async function ProductionLayout({ children, params }: { children: React.ReactNode; params: Promise<{ productionId: string }> }) {
+export default async function ProductionLayout({
+  children,
+  params,
+}: {
+  children: React.ReactNode;
+  params: Promise<{ productionId: string }>;
+}) {
   const { productionId, member } = await memberForPage((await params).productionId);
   const production = await requireProduction(productionId);
   // A page's <main> centres itself with auto margins, which in a flex column turns off stretching: without

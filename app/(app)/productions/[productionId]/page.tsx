@@ -24,7 +24,10 @@ export default async function OverviewPage({ params }: { params: Promise<{ produ
     requireChecksReport({ productionId }),
   ]);
   // What the checks found, or which of them have nothing to check yet: never a bare all-clear.
-  const checkLines = checksStatusLines(checks, { fixtures: checks.summary.fixtures, patched: checks.summary.fixtures - checks.dmx.unpatched.length });
+  const checkLines = checksStatusLines(checks, {
+    fixtures: checks.summary.fixtures,
+    patched: checks.summary.fixtures - checks.dmx.unpatched.length,
+  });
   const TONE = { error: "text-danger", warning: "text-caution", muted: "text-muted", ok: "text-success" } as const;
   const { counts } = overview;
   const len = (m: number) => formatLength(m, production.displayUnits);
@@ -43,7 +46,10 @@ export default async function OverviewPage({ params }: { params: Promise<{ produ
         <ul className="grid grid-cols-2 gap-3 sm:grid-cols-3" data-testid="overview-counts">
           {stats.map(([label, value, tab]) => (
             <li key={label}>
-              <Link href={`/productions/${productionId}/${tab}`} className="block rounded-md border border-line p-3 hover:border-accent">
+              <Link
+                href={`/productions/${productionId}/${tab}`}
+                className="block rounded-md border border-line p-3 hover:border-accent"
+              >
                 <span className="block text-xs uppercase tracking-wide text-muted">{label}</span>
                 <span className="block text-2xl font-semibold tabular-nums">{value}</span>
               </Link>
@@ -55,20 +61,28 @@ export default async function OverviewPage({ params }: { params: Promise<{ produ
         <ul className="list-disc pl-5 text-sm" data-testid="overview-warnings">
           {checkLines.map((l) => (
             <li key={l.text} className={TONE[l.tone]}>
-              {l.tone === "error" || l.tone === "warning" ? <Link href={`/productions/${productionId}/checks`} className="underline">{l.text}</Link> : l.text}
+              {l.tone === "error" || l.tone === "warning" ? (
+                <Link href={`/productions/${productionId}/checks`} className="underline">
+                  {l.text}
+                </Link>
+              ) : (
+                l.text
+              )}
             </li>
           ))}
           {overview.warnings.map((w) => (
-            <li key={w} className="text-caution">{w}</li>
+            <li key={w} className="text-caution">
+              {w}
+            </li>
           ))}
         </ul>
         <p className="mt-3 text-xs text-muted">Latest revision: none issued yet.</p>
       </Card>
       <Card title="Stage" className="lg:col-span-2">
         <p className="text-sm">
-          Proscenium {len(production.prosceniumWidth)} wide × {len(production.prosceniumHeight)} high; stage {len(production.stageWidth)} wide and{" "}
-          {len(production.stageDepth)} deep from the {production.datumName}; back wall {len(production.backWallY)} upstage of it. Head height for
-          focusing {len(production.headHeight)}.
+          Proscenium {len(production.prosceniumWidth)} wide × {len(production.prosceniumHeight)} high; stage{" "}
+          {len(production.stageWidth)} wide and {len(production.stageDepth)} deep from the {production.datumName}; back
+          wall {len(production.backWallY)} upstage of it. Head height for focusing {len(production.headHeight)}.
         </p>
       </Card>
       <Card title="Team">

@@ -16,7 +16,13 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
     return (
       <section className="rounded-lg border border-line bg-surface p-6" aria-labelledby="invite-title">
         <h1 id="invite-title" className="mb-2 text-xl font-semibold">
-          {look.state === "expired" ? "This invitation has expired" : look.state === "used" ? "This invitation was already used" : look.state === "withdrawn" ? "This invitation was withdrawn" : "This link does not work"}
+          {look.state === "expired"
+            ? "This invitation has expired"
+            : look.state === "used"
+              ? "This invitation was already used"
+              : look.state === "withdrawn"
+                ? "This invitation was withdrawn"
+                : "This link does not work"}
         </h1>
         <p className="text-sm text-muted">{LINK_REFUSALS[look.state]}</p>
         <p className="mt-5 text-sm">

@@ -12,7 +12,15 @@ export function CompleteResetForm({ token }: { token: string }) {
   return (
     <form action={action} className="flex flex-col gap-3" noValidate>
       <input type="hidden" name="token" value={token} />
-      <TextField label="New password" name="password" type="password" autoComplete="new-password" required hint="At least 10 characters." error={fieldError(state, "password")} />
+      <TextField
+        label="New password"
+        name="password"
+        type="password"
+        autoComplete="new-password"
+        required
+        hint="At least 10 characters."
+        error={fieldError(state, "password")}
+      />
       <FormMessage message={state.status === "error" ? state.message : undefined} />
       <Button type="submit" disabled={pending}>
         {pending ? "Saving…" : "Save and sign in"}

@@ -10,5 +10,11 @@ import { acceptSchema } from "@/lib/validation/team";
 export const POST = route(async (req) => {
   const input = await readJson(req, acceptSchema);
   const accepted = await acceptAndSignIn(input);
-  return Response.json({ membership: { productionId: accepted.productionId, role: accepted.role, userId: accepted.userId }, landing: accepted.landing }, { status: 201 });
+  return Response.json(
+    {
+      membership: { productionId: accepted.productionId, role: accepted.role, userId: accepted.userId },
+      landing: accepted.landing,
+    },
+    { status: 201 },
+  );
 });

@@ -23,7 +23,11 @@ export default async function ChecksPage({ params }: { params: Promise<{ product
       productionId={productionId}
       initial={{ report, circuits, dataLines }}
       positions={positions.map((p) => ({ id: p.id, name: p.name, unitIds: unitOrder[p.id] ?? [] }))}
-      rights={{ electrics: can(member, "rig.editElectrics"), run: can(member, "studies.run"), export: can(member, "studies.view") }}
+      rights={{
+        electrics: can(member, "rig.editElectrics"),
+        run: can(member, "studies.run"),
+        export: can(member, "studies.view"),
+      }}
     />
   );
 }

@@ -15,19 +15,31 @@ export const metadata: Metadata = { title: "Cues" };
  * The designer writes cues here; everyone else (the stage manager first of all) reads the cue
  * sheet. The designer can open the sheet too with ?view=sheet.
  */
-export default async function CuesPage({ params, searchParams }: { params: Promise<{ productionId: string }>; searchParams: Promise<{ view?: string }> }) {
+export default async function CuesPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ productionId: string }>;
+  searchParams: Promise<{ view?: string }>;
+}) {
   const { productionId, member } = await memberForPage((await params).productionId);
   const canEdit = can(member, "cues.edit");
   const showSheet = !canEdit || (await searchParams).view === "sheet";
   const queryClient = makeQueryClient();
   const production = await requireProduction(productionId);
   if (showSheet) {
-    await queryClient.prefetchQuery({ queryKey: productionKeys.cueSheet(productionId), queryFn: () => getCueSheet({ productionId }) });
+    await queryClient.prefetchQuery({
+      queryKey: productionKeys.cueSheet(productionId),
+      queryFn: () => getCueSheet({ productionId }),
+    });
   } else {
     await queryClient.prefetchQuery({
       queryKey: productionKeys.cues(productionId),
       queryFn: async () => {
-        const [cues, channels] = await Promise.all([getCuesByProduction({ productionId }), getChannelLabels({ productionId })]);
+        const [cues, channels] = await Promise.all([
+          getCuesByProduction({ productionId }),
+          getChannelLabels({ productionId }),
+        ]);
         return { cues, channels };
       },
     });
@@ -36,9 +48,24 @@ export default async function CuesPage({ params, searchParams }: { params: Promi
     <main className="px-4 py-4 print:p-0">
       <HydrationBoundary state={dehydrate(queryClient)}>
         {showSheet ? (
-          <CueSheetView productionId={productionId} productionName={production.name} canEditNotes={can(member, "cues.editCallNotes")} canWriteCues={canEdit} />
+          <CueSheetView
+            productionId={productionId}
+            productionName={production.name}
+            canEditNotes={can(member, "cues.editCallNotes")}
+            canWriteCues={canEdit}
+          />
         ) : (
-          <CueWorkspace productionId={productionId} stage={{ prosceniumWidth: production.prosceniumWidth, stageWidth: production.stageWidth, stageDepth: production.stageDepth, apronDepth: production.apronDepth, backWallY: production.backWallY, datumName: production.datumName }} />
+          <CueWorkspace
+            productionId={productionId}
+            stage={{
+              prosceniumWidth: production.prosceniumWidth,
+              stageWidth: production.stageWidth,
+              stageDepth: production.stageDepth,
+              apronDepth: production.apronDepth,
+              backWallY: production.backWallY,
+              datumName: production.datumName,
+            }}
+          />
         )}
       </HydrationBoundary>
     </main>

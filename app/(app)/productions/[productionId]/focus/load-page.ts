@@ -32,6 +32,10 @@ export async function loadFocusPage(rawProductionId: string): Promise<FocusPageD
     drawnLandmarks: landmarksFromRows(drawn),
     extras: extrasByFixture(accessories),
     userNames: Object.fromEntries(team.map((m) => [m.userId, m.name])),
-    rights: { focus: can(member, "rig.editElectrics"), designerNotes: can(member, "plot.edit"), export: can(member, "rig.export") },
+    rights: {
+      focus: can(member, "rig.editElectrics"),
+      designerNotes: can(member, "plot.edit"),
+      export: can(member, "rig.export"),
+    },
   };
 }

@@ -10,7 +10,13 @@ export const metadata: Metadata = { title: "Notes" };
 
 type Search = { subject?: string; subjectId?: string };
 
-export default async function NotesPage({ params, searchParams }: { params: Promise<{ productionId: string }>; searchParams: Promise<Search> }) {
+export default async function NotesPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ productionId: string }>;
+  searchParams: Promise<Search>;
+}) {
   const { productionId, member, user } = await memberForPage((await params).productionId);
   const [notes, subjects, currentCue, production, search] = await Promise.all([
     getNotesByProduction({ productionId }),
@@ -21,7 +27,8 @@ export default async function NotesPage({ params, searchParams }: { params: Prom
   ]);
   // A notes button elsewhere (a fixture, a cue, a position) opens this page with the subject chosen.
   const subjectId = Number(search.subjectId);
-  const preset = search.subject && Number.isInteger(subjectId) && subjectId > 0 ? { subject: search.subject, subjectId } : null;
+  const preset =
+    search.subject && Number.isInteger(subjectId) && subjectId > 0 ? { subject: search.subject, subjectId } : null;
   return (
     <NotesView
       productionId={productionId}

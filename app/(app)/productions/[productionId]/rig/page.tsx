@@ -17,8 +17,13 @@ export const metadata: Metadata = { title: "Rig" };
 
 const TYPE_FIELDS = TYPE_COLUMNS.flatMap((c) => c.fields as string[]);
 
-
-export default async function RigPage({ params, searchParams }: { params: Promise<{ productionId: string }>; searchParams: Promise<{ view?: string }> }) {
+export default async function RigPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ productionId: string }>;
+  searchParams: Promise<{ view?: string }>;
+}) {
   const { productionId, member } = await memberForPage((await params).productionId);
   const [production, fixtures, types, positions, accessories, checks] = await Promise.all([
     requireProduction(productionId),
@@ -28,22 +33,38 @@ export default async function RigPage({ params, searchParams }: { params: Promis
     getAccessoriesByProduction({ productionId }),
     requireChecksReport({ productionId }),
   ]);
-  const editable = RIG_COLUMNS.filter((c) => c.importKey && c.id !== "unitNumber" && c.id !== "focusPoint" && canEditField(member, "fixture", c.attribute ?? c.id)).map((c) => c.id);
+  const editable = RIG_COLUMNS.filter(
+    (c) =>
+      c.importKey &&
+      c.id !== "unitNumber" &&
+      c.id !== "focusPoint" &&
+      canEditField(member, "fixture", c.attribute ?? c.id),
+  ).map((c) => c.id);
   const view = (await searchParams).view;
   return (
     <>
-    <ChecksBadge productionId={productionId} summary={checks.summary} className="fixed right-4 bottom-4 z-30 shadow" />
-    <RigWorkspace
-      productionId={productionId}
-      productionName={production.name}
-      units={production.displayUnits}
-      initialView={view && isRigViewId(view) ? view : "hang"}
-      initialFixtures={fixtures}
-      initialTypes={types}
-      initialAccessories={accessories}
-      positions={positions.map((p) => ({ id: p.id, name: p.name }))}
-      rights={{ editable, typeFields: TYPE_FIELDS.filter((f) => canEditField(member, "fixtureType", f)), canImport: can(member, "rig.import"), canPlot: can(member, "plot.edit"), canElectrics: can(member, "rig.editElectrics") }}
-    />
+      <ChecksBadge
+        productionId={productionId}
+        summary={checks.summary}
+        className="fixed right-4 bottom-4 z-30 shadow"
+      />
+      <RigWorkspace
+        productionId={productionId}
+        productionName={production.name}
+        units={production.displayUnits}
+        initialView={view && isRigViewId(view) ? view : "hang"}
+        initialFixtures={fixtures}
+        initialTypes={types}
+        initialAccessories={accessories}
+        positions={positions.map((p) => ({ id: p.id, name: p.name }))}
+        rights={{
+          editable,
+          typeFields: TYPE_FIELDS.filter((f) => canEditField(member, "fixtureType", f)),
+          canImport: can(member, "rig.import"),
+          canPlot: can(member, "plot.edit"),
+          canElectrics: can(member, "rig.editElectrics"),
+        }}
+      />
     </>
   );
 }

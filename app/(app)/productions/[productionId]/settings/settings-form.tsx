@@ -29,7 +29,12 @@ export function SettingsForm({ production: initial, canEdit }: { production: Pro
   const [state, action, pending] = useActionState<SettingsState, FormData>(async (prev, form) => {
     const next = await updateSettingsAction(initial.id, prev, form);
     // Saved, or refused because someone else saved first (409): show the row as it is now.
-    const now = next.status === "ok" ? next.production : next.status === "error" ? (next.current as ProductionDto | undefined) : undefined;
+    const now =
+      next.status === "ok"
+        ? next.production
+        : next.status === "error"
+          ? (next.current as ProductionDto | undefined)
+          : undefined;
     if (now) setProduction(now);
     return next;
   }, IDLE);
@@ -44,22 +49,46 @@ export function SettingsForm({ production: initial, canEdit }: { production: Pro
         <Card title="Production">
           <div className="grid gap-3 sm:grid-cols-2">
             <TextField label="Name" name="name" defaultValue={typed("name", production.name)} error={err("name")} />
-            <TextField label="Venue" name="venue" defaultValue={typed("venue", production.venue)} error={err("venue")} />
+            <TextField
+              label="Venue"
+              name="venue"
+              defaultValue={typed("venue", production.venue)}
+              error={err("venue")}
+            />
             <label className="flex flex-col gap-1 text-sm">
               <span className="font-medium">Display units</span>
-              <select name="displayUnits" defaultValue={units} className="min-h-10 rounded-md border border-line bg-surface px-3">
+              <select
+                name="displayUnits"
+                defaultValue={units}
+                className="min-h-10 rounded-md border border-line bg-surface px-3"
+              >
                 <option value="metric">Metric (m)</option>
                 <option value="imperial">Imperial (ft and in)</option>
               </select>
             </label>
-            <TextField label="Datum line name" name="datumName" defaultValue={typed("datumName", production.datumName)} hint="e.g. setting line, plaster line, stage edge" error={err("datumName")} />
+            <TextField
+              label="Datum line name"
+              name="datumName"
+              defaultValue={typed("datumName", production.datumName)}
+              hint="e.g. setting line, plaster line, stage edge"
+              error={err("datumName")}
+            />
           </div>
         </Card>
         <Card title="Stage outline">
-          <p className="mb-3 text-xs text-muted">Type lengths as 3.2, 3.2 m, 320 cm, 10&apos;6&quot;, 10&apos; 6 1/2&quot; or 126&quot;.</p>
+          <p className="mb-3 text-xs text-muted">
+            Type lengths as 3.2, 3.2 m, 320 cm, 10&apos;6&quot;, 10&apos; 6 1/2&quot; or 126&quot;.
+          </p>
           <div className="grid gap-3 sm:grid-cols-3">
             {LENGTHS.map(([field, label, hint]) => (
-              <TextField key={field} label={label} name={field} hint={hint || undefined} defaultValue={typed(field, formatLength(production[field] as number, units))} error={err(field)} />
+              <TextField
+                key={field}
+                label={label}
+                name={field}
+                hint={hint || undefined}
+                defaultValue={typed(field, formatLength(production[field] as number, units))}
+                error={err(field)}
+              />
             ))}
           </div>
         </Card>
@@ -67,11 +96,18 @@ export function SettingsForm({ production: initial, canEdit }: { production: Pro
           <div className="grid gap-3 sm:grid-cols-3">
             <p className="text-sm text-muted sm:col-span-2" data-testid="settings-electrical">
               The electrical code, supply system and voltage, and the continuous-load factor are chosen with the{" "}
-              <a className="underline" href={`/productions/${production.id}/checks`}>checks</a>: the code sets the defaults, never the display units.
+              <a className="underline" href={`/productions/${production.id}/checks`}>
+                checks
+              </a>
+              : the code sets the defaults, never the display units.
             </p>
             <label className="flex flex-col gap-1 text-sm">
               <span className="font-medium">Unit numbers on overhead positions run</span>
-              <select name="numberingRule" defaultValue={production.numberingRule} className="min-h-10 rounded-md border border-line bg-surface px-3">
+              <select
+                name="numberingRule"
+                defaultValue={production.numberingRule}
+                className="min-h-10 rounded-md border border-line bg-surface px-3"
+              >
                 <option value="from-stage-left">from stage left</option>
                 <option value="from-stage-right">from stage right</option>
               </select>
@@ -87,7 +123,10 @@ export function SettingsForm({ production: initial, canEdit }: { production: Pro
         ) : (
           <p className="text-sm text-muted">Only the designer can change these settings.</p>
         )}
-        <FormMessage message={state.status === "idle" ? undefined : state.message} tone={state.status === "ok" ? "ok" : "error"} />
+        <FormMessage
+          message={state.status === "idle" ? undefined : state.message}
+          tone={state.status === "ok" ? "ok" : "error"}
+        />
       </div>
     </form>
   );

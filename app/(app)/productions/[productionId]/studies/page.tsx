@@ -13,7 +13,13 @@ import { StudiesWorkspace } from "./_components/studies-workspace";
 export const metadata: Metadata = { title: "Studies" };
 
 /** Coverage of the acting areas and the shadows performers cast, for a cue or any chosen light. */
-export default async function StudiesPage({ params, searchParams }: { params: Promise<{ productionId: string }>; searchParams: Promise<{ study?: string }> }) {
+export default async function StudiesPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ productionId: string }>;
+  searchParams: Promise<{ study?: string }>;
+}) {
   const { productionId, member } = await memberForPage((await params).productionId, "studies.view");
   const [production, study, cues, areas, performers, panels, colours] = await Promise.all([
     requireProduction(productionId),
@@ -32,7 +38,14 @@ export default async function StudiesPage({ params, searchParams }: { params: Pr
         canRun={can(member, "studies.run")}
         initialStudy={initialStudy}
         units={production.displayUnits}
-        stage={{ prosceniumWidth: production.prosceniumWidth, stageWidth: production.stageWidth, stageDepth: production.stageDepth, apronDepth: production.apronDepth, backWallY: production.backWallY, datumName: production.datumName }}
+        stage={{
+          prosceniumWidth: production.prosceniumWidth,
+          stageWidth: production.stageWidth,
+          stageDepth: production.stageDepth,
+          apronDepth: production.apronDepth,
+          backWallY: production.backWallY,
+          datumName: production.datumName,
+        }}
         heights={{ head: study.headHeight, face: study.faceHeight, deck: study.showDeckHeight }}
         cues={cues.map((c) => ({ id: c.id, number: c.number, label: c.label }))}
         areas={areas.map((a) => ({ id: a.id, name: a.name, polygon: a.polygon }))}

@@ -14,17 +14,26 @@ export const metadata: Metadata = { title: "Team" };
 export default async function TeamPage({ params }: { params: Promise<{ productionId: string }> }) {
   const { productionId, member, user } = await memberForPage((await params).productionId);
   const manages = can(member, "team.manage");
-  const [team, invitations] = await Promise.all([getTeam({ productionId }), manages ? getOpenInvitations({ productionId }) : Promise.resolve([])]);
+  const [team, invitations] = await Promise.all([
+    getTeam({ productionId }),
+    manages ? getOpenInvitations({ productionId }) : Promise.resolve([]),
+  ]);
   return (
     <main className="mx-auto flex max-w-4xl flex-col gap-4 px-4 py-6">
       <Card title="Team">
         <table className="w-full text-sm">
           <thead className="text-left text-xs uppercase tracking-wide text-muted">
             <tr>
-              <th scope="col" className="py-1">Name</th>
+              <th scope="col" className="py-1">
+                Name
+              </th>
               <th scope="col">E-mail</th>
               <th scope="col">Role</th>
-              {manages ? <th scope="col"><span className="sr-only">Remove</span></th> : null}
+              {manages ? (
+                <th scope="col">
+                  <span className="sr-only">Remove</span>
+                </th>
+              ) : null}
             </tr>
           </thead>
           <tbody>
@@ -36,20 +45,38 @@ export default async function TeamPage({ params }: { params: Promise<{ productio
                 </td>
                 <td className="text-muted">{m.email}</td>
                 <td>
-                  {manages ? <RoleForm productionId={productionId} memberId={m.userId} role={m.role} version={m.version} name={m.name} /> : ROLE_LABELS[m.role]}
+                  {manages ? (
+                    <RoleForm
+                      productionId={productionId}
+                      memberId={m.userId}
+                      role={m.role}
+                      version={m.version}
+                      name={m.name}
+                    />
+                  ) : (
+                    ROLE_LABELS[m.role]
+                  )}
                   {m.isOwner ? <span className="text-xs text-muted"> · owner</span> : null}
                 </td>
-                {manages ? <td>{<RemoveForm productionId={productionId} memberId={m.userId} name={m.name} />}</td> : null}
+                {manages ? (
+                  <td>{<RemoveForm productionId={productionId} memberId={m.userId} name={m.name} />}</td>
+                ) : null}
               </tr>
             ))}
           </tbody>
         </table>
-        {manages ? null : <p className="mt-4 text-xs text-muted">Only the production&apos;s owner can invite people and change roles.</p>}
+        {manages ? null : (
+          <p className="mt-4 text-xs text-muted">
+            Only the production&apos;s owner can invite people and change roles.
+          </p>
+        )}
       </Card>
       {manages ? (
         <>
           <Card title="Invite someone">
-            <p className="mb-3 text-sm text-muted">They receive an e-mail with a link that works once and expires after a week.</p>
+            <p className="mb-3 text-sm text-muted">
+              They receive an e-mail with a link that works once and expires after a week.
+            </p>
             <InviteForm productionId={productionId} />
           </Card>
           <Card
@@ -68,7 +95,10 @@ export default async function TeamPage({ params }: { params: Promise<{ productio
                   <li key={i.id} className="flex flex-wrap items-center justify-between gap-2 py-2">
                     <span>
                       {i.email} · {ROLE_LABELS[i.role]}
-                      <span className="text-xs text-muted"> · expires {new Date(i.expiresAt).toUTCString().slice(0, 16)}</span>
+                      <span className="text-xs text-muted">
+                        {" "}
+                        · expires {new Date(i.expiresAt).toUTCString().slice(0, 16)}
+                      </span>
                     </span>
                     <InvitationForms productionId={productionId} invitationId={i.id} email={i.email} />
                   </li>

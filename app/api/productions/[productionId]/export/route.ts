@@ -6,7 +6,11 @@ import { exportRig } from "@/lib/data/rig-export";
 type Ctx = { params: Promise<{ productionId: string }> };
 
 const querySchema = z.object({
-  view: z.enum(["hang", "patch", "program", "focus", "all", "stock", "workbook"], { error: "view must be hang, patch, program, focus, all, stock or workbook" }).default("all"),
+  view: z
+    .enum(["hang", "patch", "program", "focus", "all", "stock", "workbook"], {
+      error: "view must be hang, patch, program, focus, all, stock or workbook",
+    })
+    .default("all"),
   format: z.enum(["csv", "xlsx"], { error: "format must be csv or xlsx" }).default("xlsx"),
   columns: z
     .string()

@@ -23,7 +23,12 @@ export const { POST } = collectionRoutes({
     run: async ({ productionId, userId, input }) => {
       const issued = await createInvitation({ productionId, userId, ...input });
       const mail = await mailInvitation(issued, issued.invitation.invitedBy ?? "The production's owner");
-      return { ...issued.invitation, mailSent: mail.sent, mailError: mail.error ?? null, message: deliveryNote(mail, input.email) };
+      return {
+        ...issued.invitation,
+        mailSent: mail.sent,
+        mailError: mail.error ?? null,
+        message: deliveryNote(mail, input.email),
+      };
     },
   },
 });

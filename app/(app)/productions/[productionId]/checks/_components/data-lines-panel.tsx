@@ -8,7 +8,19 @@ import { ApiError } from "@/lib/http/api-client";
 import { sendDeleteDataLine, sendNewDataLine, useChecksWrite } from "./use-checks";
 import type { PositionChoice } from "./checks-view";
 
-export function DataLinesPanel({ productionId, lines, results, positions, canEdit }: { productionId: number; lines: DataLineDto[]; results: DataLineResult[]; positions: PositionChoice[]; canEdit: boolean }) {
+export function DataLinesPanel({
+  productionId,
+  lines,
+  results,
+  positions,
+  canEdit,
+}: {
+  productionId: number;
+  lines: DataLineDto[];
+  results: DataLineResult[];
+  positions: PositionChoice[];
+  canEdit: boolean;
+}) {
   const create = useChecksWrite(productionId, sendNewDataLine);
   const remove = useChecksWrite(productionId, (base, id: number) => sendDeleteDataLine(base, id));
   const [positionId, setPositionId] = useState<number | "">("");
@@ -36,11 +48,19 @@ export function DataLinesPanel({ productionId, lines, results, positions, canEdi
                 <tr key={l.id} className="border-t border-line">
                   <td className="py-1">{l.name}</td>
                   <td>{l.universe ?? "–"}</td>
-                  <td className={r?.overLimit ? "font-semibold text-danger" : ""}>{r?.devices ?? 0}{r?.overLimit ? " (over 32: split the run)" : ""}</td>
+                  <td className={r?.overLimit ? "font-semibold text-danger" : ""}>
+                    {r?.devices ?? 0}
+                    {r?.overLimit ? " (over 32: split the run)" : ""}
+                  </td>
                   <td>{r?.lastDevice ?? "–"}</td>
                   <td className="text-right print:hidden">
                     {canEdit ? (
-                      <Button variant="quiet" type="button" onClick={() => remove.mutate(l.id)} disabled={remove.isPending}>
+                      <Button
+                        variant="quiet"
+                        type="button"
+                        onClick={() => remove.mutate(l.id)}
+                        disabled={remove.isPending}
+                      >
                         Remove
                       </Button>
                     ) : null}
@@ -60,12 +80,23 @@ export function DataLinesPanel({ productionId, lines, results, positions, canEdi
             e.preventDefault();
             const p = positions.find((x) => x.id === positionId);
             if (!p) return;
-            create.mutate({ name: `${p.name} run${lines.some((l) => l.name === `${p.name} run`) ? ` ${lines.length + 1}` : ""}`.slice(0, 60), universe: universe ? Number(universe) : null, fixtureIds: p.unitIds });
+            create.mutate({
+              name: `${p.name} run${lines.some((l) => l.name === `${p.name} run`) ? ` ${lines.length + 1}` : ""}`.slice(
+                0,
+                60,
+              ),
+              universe: universe ? Number(universe) : null,
+              fixtureIds: p.unitIds,
+            });
           }}
         >
           <label className="flex flex-col gap-1 text-sm">
             <span className="font-medium">New run along</span>
-            <select className="min-h-10 rounded-md border border-line bg-surface px-2" value={positionId} onChange={(e) => setPositionId(e.target.value ? Number(e.target.value) : "")}>
+            <select
+              className="min-h-10 rounded-md border border-line bg-surface px-2"
+              value={positionId}
+              onChange={(e) => setPositionId(e.target.value ? Number(e.target.value) : "")}
+            >
               <option value="">choose a position</option>
               {positions.map((p) => (
                 <option key={p.id} value={p.id}>
@@ -76,12 +107,22 @@ export function DataLinesPanel({ productionId, lines, results, positions, canEdi
           </label>
           <label className="flex flex-col gap-1 text-sm">
             <span className="font-medium">Universe it carries</span>
-            <input className="min-h-10 w-28 rounded-md border border-line bg-surface px-2" inputMode="numeric" value={universe} onChange={(e) => setUniverse(e.target.value)} placeholder="optional" />
+            <input
+              className="min-h-10 w-28 rounded-md border border-line bg-surface px-2"
+              inputMode="numeric"
+              value={universe}
+              onChange={(e) => setUniverse(e.target.value)}
+              placeholder="optional"
+            />
           </label>
           <Button type="submit" variant="secondary" disabled={!positionId || create.isPending}>
             Add run
           </Button>
-          {error ? <span className="text-xs text-danger" aria-live="polite">{error}</span> : null}
+          {error ? (
+            <span className="text-xs text-danger" aria-live="polite">
+              {error}
+            </span>
+          ) : null}
         </form>
       ) : null}
     </div>

@@ -5,7 +5,15 @@ import type { SharedStart, UniverseMap as UniverseStrip } from "@/lib/checks/dmx
 
 const FILL = { used: "var(--accent)", shared: "var(--success)", conflict: "var(--danger)" } as const;
 
-export function UniverseMap({ universes, shared, unpatched }: { universes: UniverseStrip[]; shared: SharedStart[]; unpatched: number }) {
+export function UniverseMap({
+  universes,
+  shared,
+  unpatched,
+}: {
+  universes: UniverseStrip[];
+  shared: SharedStart[];
+  unpatched: number;
+}) {
   return (
     <div className="flex flex-col gap-2">
       <Legend />
@@ -14,9 +22,22 @@ export function UniverseMap({ universes, shared, unpatched }: { universes: Unive
           {universes.map((u) => (
             <li key={u.universe} className="grid grid-cols-[7rem_1fr_5rem] items-center gap-2 text-xs">
               <span className="font-medium">Universe {u.universe}</span>
-              <svg viewBox="0 0 512 10" preserveAspectRatio="none" className="h-4 w-full rounded-sm bg-raised" role="img" aria-label={`Universe ${u.universe}: ${u.slotsUsed} of 512 slots used`}>
+              <svg
+                viewBox="0 0 512 10"
+                preserveAspectRatio="none"
+                className="h-4 w-full rounded-sm bg-raised"
+                role="img"
+                aria-label={`Universe ${u.universe}: ${u.slotsUsed} of 512 slots used`}
+              >
                 {u.segments.map((s) => (
-                  <rect key={s.start} x={s.start - 1} y={0} width={s.end - s.start + 1} height={10} fill={FILL[s.state]}>
+                  <rect
+                    key={s.start}
+                    x={s.start - 1}
+                    y={0}
+                    width={s.end - s.start + 1}
+                    height={10}
+                    fill={FILL[s.state]}
+                  >
                     <title>{`${s.start}–${s.end}: ${s.state}`}</title>
                   </rect>
                 ))}
@@ -30,7 +51,9 @@ export function UniverseMap({ universes, shared, unpatched }: { universes: Unive
       )}
       <p className="text-sm text-muted">
         {unpatched} unit{unpatched === 1 ? "" : "s"} unpatched.
-        {shared.length ? ` ${shared.length} start address${shared.length === 1 ? " is" : "es are"} shared on purpose:` : ""}
+        {shared.length
+          ? ` ${shared.length} start address${shared.length === 1 ? " is" : "es are"} shared on purpose:`
+          : ""}
       </p>
       {shared.length ? (
         <ul className="list-disc pl-5 text-xs">

@@ -20,7 +20,12 @@ async function load(id: number): Promise<ChecksData> {
 }
 
 export function useChecks(productionId: number, initial: ChecksData) {
-  return useQuery({ queryKey: key(productionId), queryFn: () => load(productionId), initialData: initial, staleTime: 5_000 });
+  return useQuery({
+    queryKey: key(productionId),
+    queryFn: () => load(productionId),
+    initialData: initial,
+    staleTime: 5_000,
+  });
 }
 
 /** One write against the checks' data; on success (or a 409, which carries the current row) the page reloads its data. */
@@ -32,11 +37,20 @@ export function useChecksWrite<V>(productionId: number, send: (base: string, var
   });
 }
 
-export const sendSettings = (base: string, patch: Partial<ElectricalSettingsDto> & { version: number }) => apiFetch(`${base}/checks/settings`, { method: "PATCH", json: patch });
-export const sendNewCircuit = (base: string, c: { name: string; ratingA: number; phase: string | null; power: CircuitDto["power"] }) => apiFetch(`${base}/circuits`, { method: "POST", json: c });
-export const sendCircuit = (base: string, { id, ...patch }: Partial<CircuitDto> & { id: number; version: number }) => apiFetch(`${base}/circuits/${id}`, { method: "PATCH", json: patch });
+export const sendSettings = (base: string, patch: Partial<ElectricalSettingsDto> & { version: number }) =>
+  apiFetch(`${base}/checks/settings`, { method: "PATCH", json: patch });
+export const sendNewCircuit = (
+  base: string,
+  c: { name: string; ratingA: number; phase: string | null; power: CircuitDto["power"] },
+) => apiFetch(`${base}/circuits`, { method: "POST", json: c });
+export const sendCircuit = (base: string, { id, ...patch }: Partial<CircuitDto> & { id: number; version: number }) =>
+  apiFetch(`${base}/circuits/${id}`, { method: "PATCH", json: patch });
 export const sendDeleteCircuit = (base: string, id: number) => apiFetch(`${base}/circuits/${id}`, { method: "DELETE" });
-export const sendNewDataLine = (base: string, d: { name: string; universe: number | null; fixtureIds: number[] }) => apiFetch(`${base}/data-lines`, { method: "POST", json: d });
-export const sendDeleteDataLine = (base: string, id: number) => apiFetch(`${base}/data-lines/${id}`, { method: "DELETE" });
-export const sendLiftLines = (base: string, { positionId, ...patch }: { positionId: number; liftLines: number | null; version: number }) =>
-  apiFetch(`${base}/checks/positions/${positionId}`, { method: "PATCH", json: patch });
+export const sendNewDataLine = (base: string, d: { name: string; universe: number | null; fixtureIds: number[] }) =>
+  apiFetch(`${base}/data-lines`, { method: "POST", json: d });
+export const sendDeleteDataLine = (base: string, id: number) =>
+  apiFetch(`${base}/data-lines/${id}`, { method: "DELETE" });
+export const sendLiftLines = (
+  base: string,
+  { positionId, ...patch }: { positionId: number; liftLines: number | null; version: number },
+) => apiFetch(`${base}/checks/positions/${positionId}`, { method: "PATCH", json: patch });

@@ -5,14 +5,30 @@ import { classifyMoves, type TrackedShow } from "@/lib/cues";
 import type { ChannelLabel } from "@/lib/dto/cue";
 import { Card } from "@/components/ui/card";
 
-function Group({ title, items, describe, testId }: { title: string; items: Array<{ channel: number; from: number; to: number }>; describe: (ch: number) => string; testId: string }) {
+function Group({
+  title,
+  items,
+  describe,
+  testId,
+}: {
+  title: string;
+  items: Array<{ channel: number; from: number; to: number }>;
+  describe: (ch: number) => string;
+  testId: string;
+}) {
   return (
     <div data-testid={testId}>
-      <h4 className="text-xs font-semibold uppercase tracking-wide text-muted">{title} ({items.length})</h4>
+      <h4 className="text-xs font-semibold uppercase tracking-wide text-muted">
+        {title} ({items.length})
+      </h4>
       {items.length ? (
         <ul className="mt-1 flex flex-wrap gap-1 text-xs">
           {items.slice(0, 60).map((m) => (
-            <li key={m.channel} title={describe(m.channel)} className="rounded border border-line px-1.5 py-0.5 tabular-nums">
+            <li
+              key={m.channel}
+              title={describe(m.channel)}
+              className="rounded border border-line px-1.5 py-0.5 tabular-nums"
+            >
               {m.channel}: {Math.round(m.from)}→{Math.round(m.to)}
             </li>
           ))}
@@ -26,7 +42,15 @@ function Group({ title, items, describe, testId }: { title: string; items: Array
 }
 
 /** Which channels go up, go down, or carry their level on (tracked) in the selected cue. */
-export function ChannelMoves({ show, index, channels }: { show: TrackedShow; index: number; channels: ChannelLabel[] }) {
+export function ChannelMoves({
+  show,
+  index,
+  channels,
+}: {
+  show: TrackedShow;
+  index: number;
+  channels: ChannelLabel[];
+}) {
   const moves = useMemo(() => classifyMoves(show, index), [show, index]);
   const info = useMemo(() => new Map(channels.map((c) => [c.channel, c])), [channels]);
   const describe = (ch: number) => {

@@ -13,18 +13,38 @@ import { extendBounds, stageBounds, stageOutline, type StageSettings } from "@/l
 import { fitBounds, planToScreen, type View } from "@/lib/plot/view";
 import { useViewNavigation } from "@/components/plot/use-view-navigation";
 
-export type LookPool = { id: number; pool: PlanePool; mark: Point | null; cuts: Array<{ a: Point; b: Point }>; level: number; channel: number | null };
+export type LookPool = {
+  id: number;
+  pool: PlanePool;
+  mark: Point | null;
+  cuts: Array<{ a: Point; b: Point }>;
+  level: number;
+  channel: number | null;
+};
 
 // The look is drawn as a darkened stage in either theme: light adds up on black, as it does in the room.
 function stagePalette(base: PlotPalette): PlotPalette {
-  return { ...base, dark: true, deck: "#16130f", canvas: "#0c0a08", muted: "#7d7469", ink: "#b9b0a4", surface: "#16130f" };
+  return {
+    ...base,
+    dark: true,
+    deck: "#16130f",
+    canvas: "#0c0a08",
+    muted: "#7d7469",
+    ink: "#b9b0a4",
+    surface: "#16130f",
+  };
 }
 
 /** A pool's fill for a level: warm light whose strength follows the level (times the exposure); the core is brighter. */
 function litPalette(p: PlotPalette, level: number, exposure: number): PlotPalette {
   // poolDim: the dark theme draws the look dimmer (app/globals.css --pool-dim), for a dark house.
   const a = (k: number) => Math.min(1, k * level * exposure * p.poolDim).toFixed(3);
-  return { ...p, poolOuter: `rgba(255,170,90,${a(0.3)})`, poolCore: `rgba(255,200,130,${a(0.3)})`, poolEdge: `rgba(255,200,130,${a(0.25)})` };
+  return {
+    ...p,
+    poolOuter: `rgba(255,170,90,${a(0.3)})`,
+    poolCore: `rgba(255,200,130,${a(0.3)})`,
+    poolEdge: `rgba(255,200,130,${a(0.25)})`,
+  };
 }
 
 function darkPalette(p: PlotPalette): PlotPalette {
@@ -86,8 +106,17 @@ export function CuePlanCanvas({ pools, stage }: { pools: LookPool[]; stage: Stag
 
   const outline = useMemo(() => stageOutline(stage), [stage]);
   // Frame the stage and the pools' centres (not their full extent: a wide wash would shrink the stage).
-  const bounds = useMemo(() => extendBounds(stageBounds(stage), pools.map((p) => p.pool.outer!.centre)), [stage, pools]);
-  const height = Math.round(Math.min(560, Math.max(260, (width * (bounds.maxY - bounds.minY)) / (bounds.maxX - bounds.minX) + 40)));
+  const bounds = useMemo(
+    () =>
+      extendBounds(
+        stageBounds(stage),
+        pools.map((p) => p.pool.outer!.centre),
+      ),
+    [stage, pools],
+  );
+  const height = Math.round(
+    Math.min(560, Math.max(260, (width * (bounds.maxY - bounds.minY)) / (bounds.maxX - bounds.minX) + 40)),
+  );
   const fitted = useMemo(() => fitBounds(bounds, { width, height }, 20), [bounds, width, height]);
   // The view moves with the hand (use-view-navigation). Stepping through cues keeps it; a new frame (the
   // plan resized, the stage changed) puts the framed stage back.
@@ -101,7 +130,14 @@ export function CuePlanCanvas({ pools, stage }: { pools: LookPool[]; stage: Stag
   // The plan sits in a scrolling page: a plain wheel scrolls the page, Ctrl/⌘ + wheel (or a trackpad pinch) zooms.
   useViewNavigation({ element: box, view, wheelNeedsModifier: true, onFrame: () => layer.current?.draw() });
   const lit = pools.filter((p) => p.level > 0).length;
-  const exposure = useMemo(() => lookExposure(pools.map((p) => ({ outer: p.pool.outer!, level: p.level })), bounds), [pools, bounds]);
+  const exposure = useMemo(
+    () =>
+      lookExposure(
+        pools.map((p) => ({ outer: p.pool.outer!, level: p.level })),
+        bounds,
+      ),
+    [pools, bounds],
+  );
 
   return (
     <div
@@ -111,7 +147,12 @@ export function CuePlanCanvas({ pools, stage }: { pools: LookPool[]; stage: Stag
         view.current = frame.current;
         layer.current?.batchDraw();
       }}
-      data-testid="cue-plan" data-lit={lit} data-exposure={exposure.toFixed(2)} aria-label={`Plan of the look: ${lit} of ${pools.length} pools lit`} role="img">
+      data-testid="cue-plan"
+      data-lit={lit}
+      data-exposure={exposure.toFixed(2)}
+      aria-label={`Plan of the look: ${lit} of ${pools.length} pools lit`}
+      role="img"
+    >
       {palette ? (
         <Stage width={width} height={height} listening={false}>
           <Layer ref={layer} listening={false}>
@@ -131,7 +172,9 @@ export function CuePlanCanvas({ pools, stage }: { pools: LookPool[]; stage: Stag
       ) : (
         <div style={{ height }} className="bg-black" />
       )}
-      <p className="pointer-events-none absolute bottom-1 right-2 text-[11px] text-[#8d857a]">Drag to pan · Ctrl + wheel or pinch to zoom · double-click to frame</p>
+      <p className="pointer-events-none absolute bottom-1 right-2 text-[11px] text-[#8d857a]">
+        Drag to pan · Ctrl + wheel or pinch to zoom · double-click to frame
+      </p>
     </div>
   );
 }

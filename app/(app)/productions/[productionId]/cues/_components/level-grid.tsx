@@ -25,7 +25,14 @@ function cellAt(show: TrackedShow, index: number, col: number): { level: number;
   return { level, kind };
 }
 
-type Props = { show: TrackedShow; cues: CueDto[]; channels: ChannelLabel[]; selectedIndex: number; onSelect: (id: number) => void; focusChannel: { channel: number } | null };
+type Props = {
+  show: TrackedShow;
+  cues: CueDto[];
+  channels: ChannelLabel[];
+  selectedIndex: number;
+  onSelect: (id: number) => void;
+  focusChannel: { channel: number } | null;
+};
 
 /** Channels down, cues across: every channel's level in the cues around the selected one. Only rows in view are drawn. */
 export function LevelGrid({ show, cues, channels, selectedIndex, onSelect, focusChannel }: Props) {
@@ -38,9 +45,9 @@ export function LevelGrid({ show, cues, channels, selectedIndex, onSelect, focus
   const { scrollToIndex } = rows;
 
   // After a typed line, the first channel it touched comes into view.
+  // biome-ignore lint/correctness/useExhaustiveDependencies: only when a line was typed, not on every change of the show
   useEffect(() => {
     if (focusChannel) scrollToIndex(show.column.get(focusChannel.channel) ?? -1);
-    // eslint-disable-next-line react-hooks/exhaustive-deps -- only when a line was typed, not on every change of the show
   }, [focusChannel, scrollToIndex]);
 
   if (!cues.length) return null;
@@ -56,28 +63,64 @@ export function LevelGrid({ show, cues, channels, selectedIndex, onSelect, focus
   return (
     <section aria-labelledby="grid-title" className="rounded-lg border border-line bg-surface">
       <header className="flex flex-wrap items-center justify-between gap-2 px-3 pt-2">
-        <h3 id="grid-title" className="text-sm font-semibold uppercase tracking-wide text-muted">Levels</h3>
+        <h3 id="grid-title" className="text-sm font-semibold uppercase tracking-wide text-muted">
+          Levels
+        </h3>
         <form onSubmit={goTo} className="flex items-center gap-1 text-xs">
-          <label htmlFor="grid-jump" className="text-muted">Go to channel</label>
-          <input id="grid-jump" value={jump} onChange={(e) => setJump(e.target.value)} inputMode="numeric" className="min-h-8 w-16 rounded border border-line bg-canvas px-1.5" aria-describedby="grid-jump-error" />
-          <span id="grid-jump-error" role="alert" className="text-danger">{jumpError}</span>
+          <label htmlFor="grid-jump" className="text-muted">
+            Go to channel
+          </label>
+          <input
+            id="grid-jump"
+            value={jump}
+            onChange={(e) => setJump(e.target.value)}
+            inputMode="numeric"
+            className="min-h-8 w-16 rounded border border-line bg-canvas px-1.5"
+            aria-describedby="grid-jump-error"
+          />
+          <span id="grid-jump-error" role="alert" className="text-danger">
+            {jumpError}
+          </span>
         </form>
       </header>
       <p className="px-3 text-xs text-muted">
-        ▲ up · ▼ down · bold = recorded in the cue · grey = tracked from before · cues {first + 1}–{first + visible.length} of {cues.length} · {show.channels.length} channels
+        ▲ up · ▼ down · bold = recorded in the cue · grey = tracked from before · cues {first + 1}–
+        {first + visible.length} of {cues.length} · {show.channels.length} channels
       </p>
-      <div ref={rows.ref} onScroll={rows.onScroll} className="max-h-[28rem] overflow-auto" data-testid="level-grid-scroll">
-        <table className="w-full border-collapse text-xs tabular-nums" aria-label="Levels by channel and cue" aria-rowcount={show.channels.length + 1}>
+      <div
+        ref={rows.ref}
+        onScroll={rows.onScroll}
+        className="max-h-[28rem] overflow-auto"
+        data-testid="level-grid-scroll"
+      >
+        <table
+          className="w-full border-collapse text-xs tabular-nums"
+          aria-label="Levels by channel and cue"
+          aria-rowcount={show.channels.length + 1}
+        >
           <thead className="sticky top-0 z-10 bg-raised">
             <tr style={{ height: ROW }}>
-              <th scope="col" className="sticky left-0 bg-raised px-2 text-left">Ch</th>
+              <th scope="col" className="sticky left-0 bg-raised px-2 text-left">
+                Ch
+              </th>
               {visible.map(({ cue, index }) => (
-                <th key={cue.id} scope="col" className={`px-1 text-right ${index === selectedIndex ? "bg-accent/20" : ""}`}>
+                <th
+                  key={cue.id}
+                  scope="col"
+                  className={`px-1 text-right ${index === selectedIndex ? "bg-accent/20" : ""}`}
+                >
                   {/* Named by what it shows plus words for a screen reader ("Select cue 1.5, block"). */}
                   <button type="button" onClick={() => onSelect(cue.id)} className="h-6 w-full text-right">
                     <span className="sr-only">Select cue </span>
                     {formatCueNumber(cue.number)}
-                    {cue.block ? <><span className="sr-only">, block</span><span aria-hidden="true" className="ml-0.5 text-[10px] text-muted">B</span></> : null}
+                    {cue.block ? (
+                      <>
+                        <span className="sr-only">, block</span>
+                        <span aria-hidden="true" className="ml-0.5 text-[10px] text-muted">
+                          B
+                        </span>
+                      </>
+                    ) : null}
                   </button>
                 </th>
               ))}
@@ -89,15 +132,29 @@ export function LevelGrid({ show, cues, channels, selectedIndex, onSelect, focus
               const col = rows.first + k;
               const info = label.get(ch);
               return (
-                <tr key={ch} style={{ height: ROW }} aria-rowindex={col + 2} className="border-t border-line/60" data-testid={`grid-ch-${ch}`}>
-                  <th scope="row" className="sticky left-0 bg-surface px-2 text-left font-medium" title={[...(info?.purposes ?? []), ...(info?.areas ?? [])].join(" · ")}>
+                <tr
+                  key={ch}
+                  style={{ height: ROW }}
+                  aria-rowindex={col + 2}
+                  className="border-t border-line/60"
+                  data-testid={`grid-ch-${ch}`}
+                >
+                  <th
+                    scope="row"
+                    className="sticky left-0 bg-surface px-2 text-left font-medium"
+                    title={[...(info?.purposes ?? []), ...(info?.areas ?? [])].join(" · ")}
+                  >
                     {ch}
                   </th>
                   {visible.map(({ cue, index }) => {
                     const m = cellAt(show, index, col);
                     const shown = m.kind !== "tracked" || m.level > 0;
                     return (
-                      <td key={cue.id} data-testid={`cell-${ch}-${formatCueNumber(cue.number)}`} className={`px-1 text-right ${index === selectedIndex ? "bg-accent/10" : ""} ${CELL[m.kind]}`}>
+                      <td
+                        key={cue.id}
+                        data-testid={`cell-${ch}-${formatCueNumber(cue.number)}`}
+                        className={`px-1 text-right ${index === selectedIndex ? "bg-accent/10" : ""} ${CELL[m.kind]}`}
+                      >
                         {shown ? `${MARK[m.kind]}${Math.round(m.level)}` : ""}
                       </td>
                     );

@@ -3,7 +3,19 @@
 import { useEffect, useState } from "react";
 
 /** A cell the stage manager can type into; saves on Enter or when leaving the field. Read-only otherwise. */
-export function NoteCell({ value, editable, label, narrow, onSave }: { value: string | null; editable: boolean; label: string; narrow?: boolean; onSave: (v: string) => void }) {
+export function NoteCell({
+  value,
+  editable,
+  label,
+  narrow,
+  onSave,
+}: {
+  value: string | null;
+  editable: boolean;
+  label: string;
+  narrow?: boolean;
+  onSave: (v: string) => void;
+}) {
   const [draft, setDraft] = useState(value ?? "");
   useEffect(() => setDraft(value ?? ""), [value]);
   if (!editable) return <span className="whitespace-pre-wrap">{value}</span>;

@@ -5,7 +5,21 @@ import { Button } from "@/components/ui/button";
 
 const cell = "min-h-9 w-full rounded-md border border-line bg-surface px-2 text-ink aria-invalid:border-danger";
 
-function Field({ draft, field, label, errors, onChange, mono }: { draft: PartDraft; field: keyof Omit<PartDraft, "key">; label: string; errors: Record<string, string>; onChange: (d: PartDraft) => void; mono?: boolean }) {
+function Field({
+  draft,
+  field,
+  label,
+  errors,
+  onChange,
+  mono,
+}: {
+  draft: PartDraft;
+  field: keyof Omit<PartDraft, "key">;
+  label: string;
+  errors: Record<string, string>;
+  onChange: (d: PartDraft) => void;
+  mono?: boolean;
+}) {
   const id = `part-${draft.key}-${field}`;
   const error = errors[id];
   return (
@@ -19,18 +33,37 @@ function Field({ draft, field, label, errors, onChange, mono }: { draft: PartDra
         onChange={(e) => onChange({ ...draft, [field]: e.target.value })}
         className={`${cell} ${mono ? "font-mono" : ""}`}
       />
-      {error ? <span id={`${id}-error`} className="text-xs text-danger">{error}</span> : null}
+      {error ? (
+        <span id={`${id}-error`} className="text-xs text-danger">
+          {error}
+        </span>
+      ) : null}
     </td>
   );
 }
 
 /** Parts of the cue: each row a number, a label, its own time and wait, and the channels it moves. */
-export function PartsEditor({ drafts, onChange, errors, cueTime }: { drafts: PartDraft[]; onChange: (d: PartDraft[]) => void; errors: Record<string, string>; cueTime: string }) {
+export function PartsEditor({
+  drafts,
+  onChange,
+  errors,
+  cueTime,
+}: {
+  drafts: PartDraft[];
+  onChange: (d: PartDraft[]) => void;
+  errors: Record<string, string>;
+  cueTime: string;
+}) {
   const put = (i: number) => (d: PartDraft) => onChange(drafts.map((x, k) => (k === i ? d : x)));
   return (
-    <fieldset className="col-span-2 flex flex-col gap-2 rounded-md border border-line p-2 sm:col-span-4" data-testid="parts-editor">
+    <fieldset
+      className="col-span-2 flex flex-col gap-2 rounded-md border border-line p-2 sm:col-span-4"
+      data-testid="parts-editor"
+    >
       <legend className="px-1 text-sm font-medium">Parts</legend>
-      <p className="text-xs text-muted">Channels in a part fade with the part&apos;s own time and wait; every other channel with the cue&apos;s.</p>
+      <p className="text-xs text-muted">
+        Channels in a part fade with the part&apos;s own time and wait; every other channel with the cue&apos;s.
+      </p>
       {drafts.length ? (
         <table className="w-full text-sm">
           <thead>
@@ -52,7 +85,12 @@ export function PartsEditor({ drafts, onChange, errors, cueTime }: { drafts: Par
                 <Field draft={d} field="delay" label="wait" errors={errors} onChange={put(i)} />
                 <Field draft={d} field="channels" label="channels" errors={errors} onChange={put(i)} mono />
                 <td className="px-1 py-1 align-top">
-                  <button type="button" onClick={() => onChange(drafts.filter((_, k) => k !== i))} aria-label={`Remove part ${d.part}`} className="min-h-9 min-w-9 rounded-md text-muted hover:bg-raised hover:text-danger">
+                  <button
+                    type="button"
+                    onClick={() => onChange(drafts.filter((_, k) => k !== i))}
+                    aria-label={`Remove part ${d.part}`}
+                    className="min-h-9 min-w-9 rounded-md text-muted hover:bg-raised hover:text-danger"
+                  >
                     ✕
                   </button>
                 </td>
@@ -61,9 +99,18 @@ export function PartsEditor({ drafts, onChange, errors, cueTime }: { drafts: Par
           </tbody>
         </table>
       ) : null}
-      {errors.parts ? <p role="alert" className="text-xs text-danger">{errors.parts}</p> : null}
+      {errors.parts ? (
+        <p role="alert" className="text-xs text-danger">
+          {errors.parts}
+        </p>
+      ) : null}
       <div>
-        <Button type="button" variant="secondary" onClick={() => onChange([...drafts, blankPartDraft(drafts, cueTime)])} disabled={drafts.length >= 20}>
+        <Button
+          type="button"
+          variant="secondary"
+          onClick={() => onChange([...drafts, blankPartDraft(drafts, cueTime)])}
+          disabled={drafts.length >= 20}
+        >
           Add a part
         </Button>
       </div>

@@ -9,6 +9,7 @@ import { useEffect, useState } from "react";
 export function useSavedTableView<T extends object>(key: string, initial: T): [T, (update: (v: T) => T) => void] {
   const [view, setView] = useState<T>(initial);
   const [ready, setReady] = useState(false);
+  // biome-ignore lint/correctness/useExhaustiveDependencies: read once per key; `initial` is a fresh object each render
   useEffect(() => {
     try {
       const saved = window.localStorage.getItem(key);
@@ -17,7 +18,6 @@ export function useSavedTableView<T extends object>(key: string, initial: T): [T
       // a damaged or blocked store: keep the defaults
     }
     setReady(true);
-    // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [key]);
   useEffect(() => {
     if (!ready) return;

@@ -7,7 +7,15 @@ import { useCallback, useEffect, useRef, useState } from "react";
  * overscan) are rendered, and two spacer rows keep the scroll height true. Enough for 400 channels
  * or 600 cues without a library.
  */
-export function useVirtualRows({ count, rowHeight, overscan = 12 }: { count: number; rowHeight: number; overscan?: number }) {
+export function useVirtualRows({
+  count,
+  rowHeight,
+  overscan = 12,
+}: {
+  count: number;
+  rowHeight: number;
+  overscan?: number;
+}) {
   const ref = useRef<HTMLDivElement>(null);
   const [scrollTop, setScrollTop] = useState(0);
   const [viewport, setViewport] = useState(480);
@@ -34,5 +42,13 @@ export function useVirtualRows({ count, rowHeight, overscan = 12 }: { count: num
     },
     [rowHeight],
   );
-  return { ref, onScroll, first, last, padTop: first * rowHeight, padBottom: (count - last) * rowHeight, scrollToIndex };
+  return {
+    ref,
+    onScroll,
+    first,
+    last,
+    padTop: first * rowHeight,
+    padBottom: (count - last) * rowHeight,
+    scrollToIndex,
+  };
 }

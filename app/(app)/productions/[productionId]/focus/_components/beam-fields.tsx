@@ -20,7 +20,8 @@ type LeafKey = (typeof LEAVES)[number]["key"];
 type Errors = Partial<Record<string, string>>;
 const input = "min-h-12 rounded-md border border-line bg-surface px-2 text-base text-ink";
 
-const leavesOf = (f: FixtureDto) => Object.fromEntries(LEAVES.map((l) => [l.key, f[l.key] ?? ""])) as Record<LeafKey, string>;
+const leavesOf = (f: FixtureDto) =>
+  Object.fromEntries(LEAVES.map((l) => [l.key, f[l.key] ?? ""])) as Record<LeafKey, string>;
 
 /**
  * Gobo rotation (the designer's) and barn doors as focused (the crew's), on the deck. Checked here with the
@@ -35,11 +36,18 @@ export function BeamFields({ fixture, data }: { fixture: FixtureDto; data: Focus
   // Reset when the unit or these fields change, not on every new copy of the row (marking focused or a new
   // photo would otherwise wipe what is being typed).
   const { id, goboRotationDeg, barnDoorTop, barnDoorBottom, barnDoorLeft, barnDoorRight } = fixture;
+  // biome-ignore lint/correctness/useExhaustiveDependencies: reset when the unit or these fields change (see above)
   useEffect(() => {
     setRotation(goboRotationDeg?.toString() ?? "");
-    setLeaves({ barnDoorTop: barnDoorTop ?? "", barnDoorBottom: barnDoorBottom ?? "", barnDoorLeft: barnDoorLeft ?? "", barnDoorRight: barnDoorRight ?? "" });
+    setLeaves({
+      barnDoorTop: barnDoorTop ?? "",
+      barnDoorBottom: barnDoorBottom ?? "",
+      barnDoorLeft: barnDoorLeft ?? "",
+      barnDoorRight: barnDoorRight ?? "",
+    });
     setErrors({});
   }, [id, goboRotationDeg, barnDoorTop, barnDoorBottom, barnDoorLeft, barnDoorRight]);
+  // biome-ignore lint/correctness/useExhaustiveDependencies: the message belongs to the unit; a new unit clears it
   useEffect(() => setMessage(null), [id]);
 
   const save = (patch: FocusPatch) => {
@@ -54,7 +62,8 @@ export function BeamFields({ fixture, data }: { fixture: FixtureDto; data: Focus
       {
         onSuccess: () => setMessage({ text: "Saved.", tone: "ok" }),
         onError: (err) => {
-          if (err instanceof ApiError) setErrors(Object.fromEntries(Object.entries(err.fieldErrors).map(([k, v]) => [k, v[0]])));
+          if (err instanceof ApiError)
+            setErrors(Object.fromEntries(Object.entries(err.fieldErrors).map(([k, v]) => [k, v[0]])));
           setMessage({ text: err.message, tone: "error" });
         },
       },
@@ -62,46 +71,91 @@ export function BeamFields({ fixture, data }: { fixture: FixtureDto; data: Focus
   };
   const rotationValue = rotation.trim() === "" ? null : Number(rotation.trim().replace(/°$/, "").replace(",", "."));
   const leavesDirty = LEAVES.some((l) => (leaves[l.key].trim() || null) !== (fixture[l.key] ?? null));
-  const doorsText = barnDoorWords({ top: fixture.barnDoorTop, bottom: fixture.barnDoorBottom, left: fixture.barnDoorLeft, right: fixture.barnDoorRight });
+  const doorsText = barnDoorWords({
+    top: fixture.barnDoorTop,
+    bottom: fixture.barnDoorBottom,
+    left: fixture.barnDoorLeft,
+    right: fixture.barnDoorRight,
+  });
 
   return (
-    <section className="flex flex-col gap-3 rounded-md border border-line bg-surface p-3" aria-label="Gobo rotation and barn doors" data-testid="beam-fields">
+    <section
+      className="flex flex-col gap-3 rounded-md border border-line bg-surface p-3"
+      aria-label="Gobo rotation and barn doors"
+      data-testid="beam-fields"
+    >
       <div className="flex flex-col gap-1">
         <h3 className="text-sm font-medium text-ink">Gobo rotation</h3>
         {data.rights.designerNotes ? (
           <div className="flex flex-wrap items-end gap-2">
             <label className="flex flex-col text-xs text-muted">
               Degrees clockwise, looking along the beam (0–359.9)
-              <input className={input} inputMode="decimal" value={rotation} onChange={(e) => setRotation(e.target.value)} aria-invalid={!!errors.goboRotationDeg}
-                aria-describedby="gobo-rotation-error" data-testid="gobo-rotation" />
+              <input
+                className={input}
+                inputMode="decimal"
+                value={rotation}
+                onChange={(e) => setRotation(e.target.value)}
+                aria-invalid={!!errors.goboRotationDeg}
+                aria-describedby="gobo-rotation-error"
+                data-testid="gobo-rotation"
+              />
             </label>
-            <Button type="button" variant="secondary" className="min-h-12" disabled={update.isPending || rotationValue === (fixture.goboRotationDeg ?? null)}
-              onClick={() => save({ goboRotationDeg: rotationValue })}>
+            <Button
+              type="button"
+              variant="secondary"
+              className="min-h-12"
+              disabled={update.isPending || rotationValue === (fixture.goboRotationDeg ?? null)}
+              onClick={() => save({ goboRotationDeg: rotationValue })}
+            >
               Save rotation
             </Button>
           </div>
         ) : (
-          <p className="text-sm">{fixture.goboRotationDeg != null ? goboRotationWords(fixture.goboRotationDeg) : <span className="italic text-muted">{fixture.gobo ? "not recorded" : "no gobo"}</span>}</p>
+          <p className="text-sm">
+            {fixture.goboRotationDeg != null ? (
+              goboRotationWords(fixture.goboRotationDeg)
+            ) : (
+              <span className="italic text-muted">{fixture.gobo ? "not recorded" : "no gobo"}</span>
+            )}
+          </p>
         )}
-        <p id="gobo-rotation-error" className="text-sm text-danger" aria-live="polite">{errors.goboRotationDeg ?? ""}</p>
+        <p id="gobo-rotation-error" className="text-sm text-danger" aria-live="polite">
+          {errors.goboRotationDeg ?? ""}
+        </p>
       </div>
       <div className="flex flex-col gap-1">
         <h3 className="text-sm font-medium text-ink">Barn doors as focused</h3>
         {data.rights.focus ? (
           <>
-            <p className="text-xs text-muted">Each leaf as seen from behind the unit, in words: “in halfway”, “to the leg”. Doors cut their own side of the beam.</p>
+            <p className="text-xs text-muted">
+              Each leaf as seen from behind the unit, in words: “in halfway”, “to the leg”. Doors cut their own side of
+              the beam.
+            </p>
             <div className="grid grid-cols-2 gap-2">
               {LEAVES.map((l) => (
                 <label key={l.key} className="flex flex-col text-xs text-muted">
                   {l.label}
-                  <input className={input} maxLength={60} value={leaves[l.key]} onChange={(e) => setLeaves({ ...leaves, [l.key]: e.target.value })}
-                    aria-invalid={!!errors[l.key]} data-testid={`barn-door-${l.label.toLowerCase()}`} />
+                  <input
+                    className={input}
+                    maxLength={60}
+                    value={leaves[l.key]}
+                    onChange={(e) => setLeaves({ ...leaves, [l.key]: e.target.value })}
+                    aria-invalid={!!errors[l.key]}
+                    data-testid={`barn-door-${l.label.toLowerCase()}`}
+                  />
                   {errors[l.key] && <span className="text-sm text-danger">{errors[l.key]}</span>}
                 </label>
               ))}
             </div>
-            <Button type="button" variant="secondary" className="min-h-12 self-end" disabled={update.isPending || !leavesDirty}
-              onClick={() => save(Object.fromEntries(LEAVES.map((l) => [l.key, leaves[l.key].trim() || null])) as FocusPatch)}>
+            <Button
+              type="button"
+              variant="secondary"
+              className="min-h-12 self-end"
+              disabled={update.isPending || !leavesDirty}
+              onClick={() =>
+                save(Object.fromEntries(LEAVES.map((l) => [l.key, leaves[l.key].trim() || null])) as FocusPatch)
+              }
+            >
               Save barn doors
             </Button>
           </>

@@ -28,13 +28,23 @@ export function FocusCall({ data }: { data: FocusPageData }) {
 
   const positionId = idParam(params.get("position")) ?? fixtures[0]?.positionId ?? null;
   const position = data.positions.find((p) => p.id === positionId);
-  const units = useMemo(() => orderForStrip(position?.kind, fixtures.filter((f) => f.positionId === positionId)), [fixtures, positionId, position?.kind]);
-  const current = units.find((f) => f.id === idParam(params.get("unit"))) ?? units.find((f) => !f.focused) ?? units[0] ?? null;
+  const units = useMemo(
+    () =>
+      orderForStrip(
+        position?.kind,
+        fixtures.filter((f) => f.positionId === positionId),
+      ),
+    [fixtures, positionId, position?.kind],
+  );
+  const current =
+    units.find((f) => f.id === idParam(params.get("unit"))) ?? units.find((f) => !f.focused) ?? units[0] ?? null;
   const { charts, landmarks } = useCharts(data, current ? [current] : []);
   const chart = charts[0];
 
   const go = (next: { position?: number | null; unit?: number | null }) =>
-    router.replace(`${pathname}?${toQuery({ position: next.position ?? positionId, unit: next.unit ?? undefined })}`, { scroll: false });
+    router.replace(`${pathname}?${toQuery({ position: next.position ?? positionId, unit: next.unit ?? undefined })}`, {
+      scroll: false,
+    });
   const nextUnit = () => {
     const i = units.findIndex((f) => f.id === current?.id);
     const after = [...units.slice(i + 1), ...units.slice(0, i)].find((f) => !f.focused);
@@ -56,40 +66,87 @@ export function FocusCall({ data }: { data: FocusPageData }) {
       <div className="flex flex-wrap items-end gap-3">
         <label className="flex flex-col text-xs text-muted">
           Position
-          <select className="min-h-12 rounded-md border border-line bg-surface px-2 text-base text-ink" value={positionId ?? ""} onChange={(e) => go({ position: Number(e.target.value), unit: null })} data-testid="call-position">
+          <select
+            className="min-h-12 rounded-md border border-line bg-surface px-2 text-base text-ink"
+            value={positionId ?? ""}
+            onChange={(e) => go({ position: Number(e.target.value), unit: null })}
+            data-testid="call-position"
+          >
             {data.positions.map((p) => (
-              <option key={p.id} value={p.id}>{p.name}</option>
+              <option key={p.id} value={p.id}>
+                {p.name}
+              </option>
             ))}
           </select>
         </label>
-        <p className="text-sm text-muted" aria-live="polite" data-testid="call-progress">{done} of {units.length} focused</p>
+        <p className="text-sm text-muted" aria-live="polite" data-testid="call-progress">
+          {done} of {units.length} focused
+        </p>
         {/* Stays in the page so a screen reader hears each unit change (a region added with its text is not read). */}
         <p className="sr-only" aria-live="polite" data-testid="call-announce">
-          {current ? `Unit ${current.unitNumber}${current.channel != null ? `, channel ${current.channel}` : ""}${current.focused ? ", focused" : ""}` : ""}
+          {current
+            ? `Unit ${current.unitNumber}${current.channel != null ? `, channel ${current.channel}` : ""}${current.focused ? ", focused" : ""}`
+            : ""}
         </p>
         <div className="ml-auto flex gap-2">
-          <Link href={`/productions/${data.production.id}/focus?${toQuery({ position: positionId })}`} className="inline-flex min-h-12 items-center rounded-md border border-line bg-surface px-3 text-sm text-ink">All charts</Link>
-          <a href={pdf} className="inline-flex min-h-12 items-center rounded-md border border-line bg-surface px-3 text-sm text-ink" data-testid="call-pdf">PDF of this position</a>
+          <Link
+            href={`/productions/${data.production.id}/focus?${toQuery({ position: positionId })}`}
+            className="inline-flex min-h-12 items-center rounded-md border border-line bg-surface px-3 text-sm text-ink"
+          >
+            All charts
+          </Link>
+          <a
+            href={pdf}
+            className="inline-flex min-h-12 items-center rounded-md border border-line bg-surface px-3 text-sm text-ink"
+            data-testid="call-pdf"
+          >
+            PDF of this position
+          </a>
         </div>
       </div>
       {!current ? (
-        <p className="rounded-md border border-line bg-surface p-6 text-sm text-muted">No units hang on this position.</p>
+        <p className="rounded-md border border-line bg-surface p-6 text-sm text-muted">
+          No units hang on this position.
+        </p>
       ) : (
         <div className={vertical ? "grid grid-cols-[5.5rem_minmax(0,1fr)] gap-3" : "flex flex-col gap-3"}>
           <UnitStrip kind={position?.kind} units={units} currentId={current.id} onPick={(id) => go({ unit: id })} />
           <div className="flex min-w-0 flex-col gap-3">
             <div className="flex gap-2">
-              <button type="button" onClick={() => step(-1)} className="min-h-12 flex-1 rounded-md border border-line bg-surface text-sm text-ink" aria-label="Previous unit">← Previous</button>
-              <button type="button" onClick={() => step(1)} className="min-h-12 flex-1 rounded-md border border-line bg-surface text-sm text-ink" aria-label="Next unit">Next →</button>
+              <button
+                type="button"
+                onClick={() => step(-1)}
+                className="min-h-12 flex-1 rounded-md border border-line bg-surface text-sm text-ink"
+                aria-label="Previous unit"
+              >
+                ← Previous
+              </button>
+              <button
+                type="button"
+                onClick={() => step(1)}
+                className="min-h-12 flex-1 rounded-md border border-line bg-surface text-sm text-ink"
+                aria-label="Next unit"
+              >
+                Next →
+              </button>
             </div>
             {inBrowser && chart ? (
               <>
                 <ChartCard chart={chart} landmarks={landmarks} units={data.production.displayUnits} />
                 <div className="grid gap-3 sm:grid-cols-2">
                   <figure className="m-0" data-testid="pool-plan">
-                    <div><PoolPlan current={current} neighbours={neighbours} landmarks={landmarks} stage={data.production} /></div>
+                    <div>
+                      <PoolPlan
+                        current={current}
+                        neighbours={neighbours}
+                        landmarks={landmarks}
+                        stage={data.production}
+                      />
+                    </div>
                     <figcaption className="mt-1 text-xs text-muted">
-                      {neighbours.length ? `Also on this mark: ${neighbours.map((n) => `${n.positionName} unit ${n.unitNumber}`).join(", ")}` : "No other unit aims at this mark."}
+                      {neighbours.length
+                        ? `Also on this mark: ${neighbours.map((n) => `${n.positionName} unit ${n.unitNumber}`).join(", ")}`
+                        : "No other unit aims at this mark."}
                     </figcaption>
                   </figure>
                   <FocusControls fixture={current} chart={chart} data={data} onNext={nextUnit} />

@@ -8,7 +8,21 @@ import type { FixtureDto } from "@/lib/dto/fixture";
 import type { FocusChart } from "@/lib/focus/chart-model";
 import type { FocusPageData } from "./types";
 
-function NoteField({ id, label, value, editable, onSave, busy }: { id: string; label: string; value: string | null; editable: boolean; onSave: (v: string | null) => void; busy: boolean }) {
+function NoteField({
+  id,
+  label,
+  value,
+  editable,
+  onSave,
+  busy,
+}: {
+  id: string;
+  label: string;
+  value: string | null;
+  editable: boolean;
+  onSave: (v: string | null) => void;
+  busy: boolean;
+}) {
   const [text, setText] = useState(value ?? "");
   useEffect(() => setText(value ?? ""), [value]);
   if (!editable) {
@@ -22,10 +36,25 @@ function NoteField({ id, label, value, editable, onSave, busy }: { id: string; l
   const dirty = text !== (value ?? "");
   return (
     <div className="flex flex-col gap-1">
-      <label htmlFor={id} className="text-xs text-muted">{label}</label>
-      <textarea id={id} value={text} onChange={(e) => setText(e.target.value)} rows={3} maxLength={4000} className="rounded-md border border-line bg-surface p-2 text-sm text-ink" />
+      <label htmlFor={id} className="text-xs text-muted">
+        {label}
+      </label>
+      <textarea
+        id={id}
+        value={text}
+        onChange={(e) => setText(e.target.value)}
+        rows={3}
+        maxLength={4000}
+        className="rounded-md border border-line bg-surface p-2 text-sm text-ink"
+      />
       {/* aria-disabled, not disabled: a disabled button drops the focus to the page once the note is saved. */}
-      <Button type="button" variant="secondary" aria-disabled={!dirty || busy} onClick={() => dirty && !busy && onSave(text.trim() ? text : null)} className="self-end">
+      <Button
+        type="button"
+        variant="secondary"
+        aria-disabled={!dirty || busy}
+        onClick={() => dirty && !busy && onSave(text.trim() ? text : null)}
+        className="self-end"
+      >
         Save {label.toLowerCase()}
       </Button>
     </div>
@@ -33,9 +62,20 @@ function NoteField({ id, label, value, editable, onSave, busy }: { id: string; l
 }
 
 /** Mark focused (with time and who) and the two kinds of notes, each editable only where the role allows. */
-export function FocusControls({ fixture, chart, data, onNext }: { fixture: FixtureDto; chart: FocusChart; data: FocusPageData; onNext: () => void }) {
+export function FocusControls({
+  fixture,
+  chart,
+  data,
+  onNext,
+}: {
+  fixture: FixtureDto;
+  chart: FocusChart;
+  data: FocusPageData;
+  onNext: () => void;
+}) {
   const update = useUpdateFocus(data.production.id);
   const [message, setMessage] = useState<{ text: string; tone: "error" | "ok" } | null>(null);
+  // biome-ignore lint/correctness/useExhaustiveDependencies: the message belongs to the unit; a new unit clears it
   useEffect(() => setMessage(null), [fixture.id]);
 
   const save = (patch: FocusPatch, then?: () => void) =>
@@ -51,30 +91,73 @@ export function FocusControls({ fixture, chart, data, onNext }: { fixture: Fixtu
     );
 
   return (
-    <section className="flex flex-col gap-3 rounded-md border border-line bg-surface p-3" aria-label="Focus status and notes">
-      <p className={`text-sm ${fixture.focused ? "font-medium text-success" : "text-muted"}`} data-testid="focused-line">{chart.focusedLine}</p>
+    <section
+      className="flex flex-col gap-3 rounded-md border border-line bg-surface p-3"
+      aria-label="Focus status and notes"
+    >
+      <p
+        className={`text-sm ${fixture.focused ? "font-medium text-success" : "text-muted"}`}
+        data-testid="focused-line"
+      >
+        {chart.focusedLine}
+      </p>
       {data.rights.focus ? (
         <div className="flex flex-wrap gap-2">
           {fixture.focused ? (
-            <Button type="button" variant="secondary" disabled={update.isPending} onClick={() => save({ focused: false })} data-testid="unmark-focused">
+            <Button
+              type="button"
+              variant="secondary"
+              disabled={update.isPending}
+              onClick={() => save({ focused: false })}
+              data-testid="unmark-focused"
+            >
               Undo focused
             </Button>
           ) : (
             <>
-              <Button type="button" disabled={update.isPending} onClick={() => save({ focused: true }, onNext)} className="min-h-12 px-6 text-base" data-testid="mark-focused">
+              <Button
+                type="button"
+                disabled={update.isPending}
+                onClick={() => save({ focused: true }, onNext)}
+                className="min-h-12 px-6 text-base"
+                data-testid="mark-focused"
+              >
                 Focused — next unit
               </Button>
-              <Button type="button" variant="secondary" disabled={update.isPending} onClick={() => save({ focused: true })} className="min-h-12" data-testid="mark-focused-stay">
+              <Button
+                type="button"
+                variant="secondary"
+                disabled={update.isPending}
+                onClick={() => save({ focused: true })}
+                className="min-h-12"
+                data-testid="mark-focused-stay"
+              >
                 Mark focused
               </Button>
             </>
           )}
         </div>
       ) : (
-        <p className="text-xs text-muted">Your role can read these charts; the electricians and the designer mark units focused.</p>
+        <p className="text-xs text-muted">
+          Your role can read these charts; the electricians and the designer mark units focused.
+        </p>
       )}
-      <NoteField id="as-focused-notes" label="As-focused notes" value={fixture.focusNotes} editable={data.rights.focus} busy={update.isPending} onSave={(v) => save({ focusNotes: v })} />
-      <NoteField id="designer-notes" label="Designer notes" value={fixture.notes} editable={data.rights.designerNotes} busy={update.isPending} onSave={(v) => save({ notes: v })} />
+      <NoteField
+        id="as-focused-notes"
+        label="As-focused notes"
+        value={fixture.focusNotes}
+        editable={data.rights.focus}
+        busy={update.isPending}
+        onSave={(v) => save({ focusNotes: v })}
+      />
+      <NoteField
+        id="designer-notes"
+        label="Designer notes"
+        value={fixture.notes}
+        editable={data.rights.designerNotes}
+        busy={update.isPending}
+        onSave={(v) => save({ notes: v })}
+      />
       <div aria-live="polite">{message && <FormMessage message={message.text} tone={message.tone} />}</div>
     </section>
   );

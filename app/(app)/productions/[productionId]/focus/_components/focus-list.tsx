@@ -20,7 +20,11 @@ export function FocusList({ data }: { data: FocusPageData }) {
   const parsed = focusFilterSchema.safeParse(Object.fromEntries(params.entries()));
   const filter: Partial<FocusFilter> = parsed.success ? parsed.data : {};
   const { data: fixtures } = useFocusFixtures(data.production.id, data.fixtures);
-  const shown = useMemo(() => filterFixtures(fixtures, filter), [fixtures, filter.position, filter.point, filter.chFrom, filter.chTo, filter.status]); // eslint-disable-line react-hooks/exhaustive-deps
+  // biome-ignore lint/correctness/useExhaustiveDependencies: `filter` is parsed anew each render; its fields are what matter
+  const shown = useMemo(
+    () => filterFixtures(fixtures, filter),
+    [fixtures, filter.position, filter.point, filter.chFrom, filter.chTo, filter.status],
+  );
   // Charts are drawn a window at a time: all of a big rig at once is tens of thousands of pixels and seconds
   // of work on a tablet. The window resets when the filter changes.
   const filterKey = params.toString();
@@ -38,11 +42,19 @@ export function FocusList({ data }: { data: FocusPageData }) {
     <main className="mx-auto w-full max-w-7xl space-y-4 px-4 py-5">
       <div className="no-print flex flex-wrap items-end justify-between gap-4">
         <FilterBar data={data} filter={filter} onChange={setFilter} />
-        <Link href={callHref} className="inline-flex min-h-10 items-center rounded-md bg-accent px-4 text-sm font-medium text-accent-ink hover:opacity-90" data-testid="open-focus-call">
+        <Link
+          href={callHref}
+          className="inline-flex min-h-10 items-center rounded-md bg-accent px-4 text-sm font-medium text-accent-ink hover:opacity-90"
+          data-testid="open-focus-call"
+        >
           Start the focus call
         </Link>
       </div>
-      {!parsed.success && <p className="text-sm text-danger">These filters cannot be read: {parsed.error.issues[0]?.message}. Showing every chart.</p>}
+      {!parsed.success && (
+        <p className="text-sm text-danger">
+          These filters cannot be read: {parsed.error.issues[0]?.message}. Showing every chart.
+        </p>
+      )}
       <div className="no-print flex flex-wrap items-end justify-between gap-4 border-y border-line py-3">
         <p className="text-sm text-muted" data-testid="chart-count" aria-live="polite">
           {shown.length} chart{shown.length === 1 ? "" : "s"} · {focusedCount} focused · in hanging order
@@ -52,7 +64,9 @@ export function FocusList({ data }: { data: FocusPageData }) {
       {!inBrowser ? (
         <p className="text-sm text-muted">Drawing the charts…</p>
       ) : charts.length === 0 ? (
-        <p className="rounded-md border border-line bg-surface p-6 text-sm text-muted">No fixtures match these filters.</p>
+        <p className="rounded-md border border-line bg-surface p-6 text-sm text-muted">
+          No fixtures match these filters.
+        </p>
       ) : (
         <>
           <div className="grid gap-4 lg:grid-cols-2" data-testid="chart-list">
@@ -61,11 +75,20 @@ export function FocusList({ data }: { data: FocusPageData }) {
             ))}
           </div>
           {shown.length > charts.length && (
-            <div className="no-print flex flex-wrap items-center gap-3 rounded-md border border-line bg-surface p-3 text-sm" data-testid="chart-window">
+            <div
+              className="no-print flex flex-wrap items-center gap-3 rounded-md border border-line bg-surface p-3 text-sm"
+              data-testid="chart-window"
+            >
               <span className="text-muted">
-                Showing {charts.length} of {shown.length} charts.{filter.position == null ? " Choose a position above to see one position at a time, or" : ""}
+                Showing {charts.length} of {shown.length} charts.
+                {filter.position == null ? " Choose a position above to see one position at a time, or" : ""}
               </span>
-              <button type="button" className="min-h-10 rounded-md border border-line bg-raised px-3 text-ink" onClick={() => setWindowed({ key: filterKey, size: size + CHART_WINDOW })} data-testid="show-more-charts">
+              <button
+                type="button"
+                className="min-h-10 rounded-md border border-line bg-raised px-3 text-ink"
+                onClick={() => setWindowed({ key: filterKey, size: size + CHART_WINDOW })}
+                data-testid="show-more-charts"
+              >
                 Show {Math.min(CHART_WINDOW, shown.length - charts.length)} more
               </button>
             </div>

@@ -29,7 +29,9 @@ async function shrinkForUpload(file: File): Promise<File> {
     canvas.getContext("2d")!.drawImage(bitmap, 0, 0, canvas.width, canvas.height);
     bitmap.close();
     const blob = await new Promise<Blob | null>((resolve) => canvas.toBlob(resolve, "image/jpeg", 0.88));
-    return blob && blob.size < file.size ? new File([blob], file.name.replace(/\.\w+$/, "") + ".jpg", { type: "image/jpeg" }) : file;
+    return blob && blob.size < file.size
+      ? new File([blob], file.name.replace(/\.\w+$/, "") + ".jpg", { type: "image/jpeg" })
+      : file;
   } catch {
     return file;
   }
@@ -44,12 +46,16 @@ export function FocusPhoto({ fixture, chart, data }: { fixture: FixtureDto; char
   const [message, setMessage] = useState<{ text: string; tone: "error" | "ok" } | null>(null);
   const [confirming, setConfirming] = useState(false);
   const [preparing, setPreparing] = useState(false);
+  // biome-ignore lint/correctness/useExhaustiveDependencies: the message and the question belong to the unit; a new unit clears them
   useEffect(() => {
     setMessage(null);
     setConfirming(false);
   }, [fixture.id]);
   const busy = upload.isPending || remove.isPending || preparing;
-  const done = (text: string) => ({ onSuccess: () => setMessage({ text, tone: "ok" as const }), onError: (err: Error) => setMessage({ text: err.message, tone: "error" as const }) });
+  const done = (text: string) => ({
+    onSuccess: () => setMessage({ text, tone: "ok" as const }),
+    onError: (err: Error) => setMessage({ text: err.message, tone: "error" as const }),
+  });
 
   const onFile = async (picked: File | undefined) => {
     if (!picked) return;
@@ -57,24 +63,43 @@ export function FocusPhoto({ fixture, chart, data }: { fixture: FixtureDto; char
     setPreparing(true);
     const file = await shrinkForUpload(picked).finally(() => setPreparing(false));
     if (file.size > MAX_BYTES) {
-      setMessage({ text: `The photo is ${(file.size / 1048576).toFixed(1)} MB; the limit is 15 MB. Nothing was saved.`, tone: "error" });
+      setMessage({
+        text: `The photo is ${(file.size / 1048576).toFixed(1)} MB; the limit is 15 MB. Nothing was saved.`,
+        tone: "error",
+      });
       return;
     }
     setMessage({ text: "Uploading…", tone: "ok" });
-    upload.mutate({ id: fixture.id, version: fixture.version, file }, done(chart.photo ? "Photo replaced." : "Photo saved."));
+    upload.mutate(
+      { id: fixture.id, version: fixture.version, file },
+      done(chart.photo ? "Photo replaced." : "Photo saved."),
+    );
   };
   const label = `unit ${fixture.unitNumber} on ${fixture.positionName}`;
 
   return (
-    <section className="flex flex-col gap-2 rounded-md border border-line bg-surface p-3" aria-label="Focus photo" data-testid="focus-photo">
+    <section
+      className="flex flex-col gap-2 rounded-md border border-line bg-surface p-3"
+      aria-label="Focus photo"
+      data-testid="focus-photo"
+    >
       <h3 className="text-sm font-medium text-ink">Focus photo</h3>
       {chart.photo ? (
         <a href={chart.photo.href} target="_blank" rel="noopener" className="self-start">
           {/* eslint-disable-next-line @next/next/no-img-element -- our own route serves a small re-encoded copy */}
-          <img src={chart.photo.thumbSrc} alt={`Focus photo of ${label}`} className="max-h-48 w-auto rounded border border-line" data-testid="focus-photo-preview" />
+          <img
+            src={chart.photo.thumbSrc}
+            alt={`As focused: ${label}`}
+            className="max-h-48 w-auto rounded border border-line"
+            data-testid="focus-photo-preview"
+          />
         </a>
       ) : (
-        <p className="text-sm text-muted">{data.rights.focus ? "No photo yet. Take one of the pool on the deck once the unit is focused." : "No photo taken."}</p>
+        <p className="text-sm text-muted">
+          {data.rights.focus
+            ? "No photo yet. Take one of the pool on the deck once the unit is focused."
+            : "No photo taken."}
+        </p>
       )}
       {data.rights.focus && (
         <div className="flex flex-wrap gap-2">
@@ -91,20 +116,37 @@ export function FocusPhoto({ fixture, chart, data }: { fixture: FixtureDto; char
               e.target.value = "";
             }}
           />
-          <label htmlFor={inputId} aria-disabled={busy} className={`${pick} ${chart.photo ? "border border-line bg-surface text-ink" : "bg-accent text-accent-ink"} ${busy ? "pointer-events-none opacity-50" : ""} peer-focus-visible:outline-2 peer-focus-visible:outline-accent`}>
+          <label
+            htmlFor={inputId}
+            aria-disabled={busy}
+            className={`${pick} ${chart.photo ? "border border-line bg-surface text-ink" : "bg-accent text-accent-ink"} ${busy ? "pointer-events-none opacity-50" : ""} peer-focus-visible:outline-2 peer-focus-visible:outline-accent`}
+          >
             {upload.isPending ? "Uploading…" : chart.photo ? "Replace photo" : "Add photo"}
           </label>
           {chart.photo &&
             (confirming ? (
-              <Button type="button" variant="danger" className="min-h-12" disabled={busy} data-testid="focus-photo-remove-confirm"
+              <Button
+                type="button"
+                variant="danger"
+                className="min-h-12"
+                disabled={busy}
+                data-testid="focus-photo-remove-confirm"
                 onClick={() => {
                   setConfirming(false);
                   remove.mutate({ id: fixture.id, version: fixture.version }, done("Photo removed."));
-                }}>
+                }}
+              >
                 Tap again to remove
               </Button>
             ) : (
-              <Button type="button" variant="secondary" className="min-h-12" disabled={busy} onClick={() => setConfirming(true)} data-testid="focus-photo-remove">
+              <Button
+                type="button"
+                variant="secondary"
+                className="min-h-12"
+                disabled={busy}
+                onClick={() => setConfirming(true)}
+                data-testid="focus-photo-remove"
+              >
                 Remove photo
               </Button>
             ))}

@@ -6,10 +6,21 @@ import { CHARTS_PER_PAGE, sheetCount, type ChartsPerPage, type Paper } from "@/l
 import { browserTimeZone } from "./use-charts";
 
 const field = "min-h-10 rounded-md border border-line bg-surface px-2 text-sm text-ink";
-const linkButton = "inline-flex min-h-10 items-center rounded-md border border-line bg-surface px-3 text-sm font-medium text-ink hover:bg-raised";
+const linkButton =
+  "inline-flex min-h-10 items-center rounded-md border border-line bg-surface px-3 text-sm font-medium text-ink hover:bg-raised";
 
 /** Layout for printing (charts a page, paper) and the three ways out: print view, PDF, Excel. */
-export function PrintOptions({ productionId, filter, charts, canExport }: { productionId: number; filter: Partial<FocusFilter>; charts: { positionId: number }[]; canExport: boolean }) {
+export function PrintOptions({
+  productionId,
+  filter,
+  charts,
+  canExport,
+}: {
+  productionId: number;
+  filter: Partial<FocusFilter>;
+  charts: { positionId: number }[];
+  canExport: boolean;
+}) {
   const [perPage, setPerPage] = useState<ChartsPerPage>(4);
   const [paper, setPaper] = useState<Paper>("A4");
   const [pdfBusy, setPdfBusy] = useState(false);
@@ -21,9 +32,16 @@ export function PrintOptions({ productionId, filter, charts, canExport }: { prod
     <div className="flex flex-wrap items-end gap-3" role="group" aria-label="Print">
       <label className="flex flex-col text-xs text-muted">
         Charts a page
-        <select className={field} value={perPage} onChange={(e) => setPerPage(Number(e.target.value) as ChartsPerPage)} data-testid="per-page">
+        <select
+          className={field}
+          value={perPage}
+          onChange={(e) => setPerPage(Number(e.target.value) as ChartsPerPage)}
+          data-testid="per-page"
+        >
           {CHARTS_PER_PAGE.map((n) => (
-            <option key={n} value={n}>{n}</option>
+            <option key={n} value={n}>
+              {n}
+            </option>
           ))}
         </select>
       </label>
@@ -34,7 +52,13 @@ export function PrintOptions({ productionId, filter, charts, canExport }: { prod
           <option value="Letter">US Letter</option>
         </select>
       </label>
-      <a className={linkButton} href={`/productions/${productionId}/focus/print?${query}`} target="_blank" rel="noopener" data-testid="print-view">
+      <a
+        className={linkButton}
+        href={`/productions/${productionId}/focus/print?${query}`}
+        target="_blank"
+        rel="noopener"
+        data-testid="print-view"
+      >
         Print view
       </a>
       <a
@@ -51,7 +75,11 @@ export function PrintOptions({ productionId, filter, charts, canExport }: { prod
         {pdfBusy ? "Preparing PDF…" : `PDF (${count ? `about ${pages} page${pages === 1 ? "" : "s"}` : "empty"})`}
       </a>
       {canExport && (
-        <a className={linkButton} href={`/api/productions/${productionId}/focus/xlsx?${toQuery({ ...filter, tz: browserTimeZone() })}`} data-testid="download-xlsx">
+        <a
+          className={linkButton}
+          href={`/api/productions/${productionId}/focus/xlsx?${toQuery({ ...filter, tz: browserTimeZone() })}`}
+          data-testid="download-xlsx"
+        >
           Excel
         </a>
       )}

@@ -14,11 +14,22 @@ export function orderForStrip(kind: PositionKind | undefined, units: FixtureDto[
   return list.sort((a, b) => a.x - b.x);
 }
 
-export function UnitStrip({ kind, units, currentId, onPick }: { kind: PositionKind | undefined; units: FixtureDto[]; currentId: number | null; onPick: (id: number) => void }) {
+export function UnitStrip({
+  kind,
+  units,
+  currentId,
+  onPick,
+}: {
+  kind: PositionKind | undefined;
+  units: FixtureDto[];
+  currentId: number | null;
+  onPick: (id: number) => void;
+}) {
   const vertical = !!kind && POINT_HUNG_KINDS.has(kind);
   const ref = useRef<HTMLElement>(null);
   // The strip scrolls inside itself (any number of units, any screen): keep the current unit in its view
   // by scrolling the strip alone (scrollIntoView would move the page as well).
+  // biome-ignore lint/correctness/useExhaustiveDependencies: scroll when the current unit changes; the effect reads it from the page
   useEffect(() => {
     const nav = ref.current;
     const button = nav?.querySelector<HTMLElement>('[aria-current="true"]');
@@ -50,11 +61,24 @@ export function UnitStrip({ kind, units, currentId, onPick }: { kind: PositionKi
             } border ${current ? "border-accent" : "border-line"}`}
           >
             {/* The name is the text shown plus words only a screen reader needs: "Unit 11, channel 11, focused". */}
-            <span className="font-semibold"><span className="sr-only">Unit </span>{f.unitNumber}</span>
+            <span className="font-semibold">
+              <span className="sr-only">Unit </span>
+              {f.unitNumber}
+            </span>
             <span className="text-xs">
               <span className="sr-only">, </span>
               {f.focused ? <span aria-hidden="true">✓ </span> : null}
-              {f.channel != null ? <><span className="sr-only">channel </span>{f.channel}</> : <><span className="sr-only">no channel</span><span aria-hidden="true">—</span></>}
+              {f.channel != null ? (
+                <>
+                  <span className="sr-only">channel </span>
+                  {f.channel}
+                </>
+              ) : (
+                <>
+                  <span className="sr-only">no channel</span>
+                  <span aria-hidden="true">—</span>
+                </>
+              )}
               {f.focused ? <span className="sr-only">, focused</span> : null}
             </span>
           </button>

@@ -13,17 +13,35 @@ const noop = () => () => {};
  * (the server cannot know it), which also keeps the server's HTML and the first client render identical.
  */
 export function useInBrowser(): boolean {
-  return useSyncExternalStore(noop, () => true, () => false);
+  return useSyncExternalStore(
+    noop,
+    () => true,
+    () => false,
+  );
 }
 
 export function browserTimeZone(): string | undefined {
   return typeof Intl !== "undefined" ? Intl.DateTimeFormat().resolvedOptions().timeZone : undefined;
 }
 
-export function useCharts(data: Pick<FocusPageData, "production" | "userNames" | "drawnLandmarks" | "extras">, fixtures: FixtureDto[]) {
-  const landmarks = useMemo(() => mergeLandmarks(data.drawnLandmarks, outlineLandmarks(data.production)), [data.production, data.drawnLandmarks]);
+export function useCharts(
+  data: Pick<FocusPageData, "production" | "userNames" | "drawnLandmarks" | "extras">,
+  fixtures: FixtureDto[],
+) {
+  const landmarks = useMemo(
+    () => mergeLandmarks(data.drawnLandmarks, outlineLandmarks(data.production)),
+    [data.production, data.drawnLandmarks],
+  );
   const charts = useMemo<FocusChart[]>(
-    () => fixtures.map((f) => buildFocusChart(f, data.production, { landmarks, userNames: data.userNames, timeZone: browserTimeZone(), extras: data.extras[f.id] })),
+    () =>
+      fixtures.map((f) =>
+        buildFocusChart(f, data.production, {
+          landmarks,
+          userNames: data.userNames,
+          timeZone: browserTimeZone(),
+          extras: data.extras[f.id],
+        }),
+      ),
     [fixtures, data.production, data.userNames, data.extras, landmarks],
   );
   return { charts, landmarks };

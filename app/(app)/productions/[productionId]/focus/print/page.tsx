@@ -11,7 +11,10 @@ import { PrintButton } from "../_components/print-button";
 
 export const metadata: Metadata = { title: "Print focus charts" };
 
-type Props = { params: Promise<{ productionId: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
+type Props = {
+  params: Promise<{ productionId: string }>;
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+};
 
 /** The printable sheets (the browser's print stylesheet); the server's PDF prints these same sheets. */
 export default async function FocusPrintPage({ params, searchParams }: Props) {
@@ -25,15 +28,31 @@ export default async function FocusPrintPage({ params, searchParams }: Props) {
 
   const { production, charts, landmarks } = await loadFocusCharts({ productionId, filter, timeZone: options.tz });
   const sheets = paginate(charts, options.perPage, { newPagePerPosition: options.newPagePerPosition });
-  const sheetOptions = { productionName: production.name, printedAt: formatStamp(new Date(), options.tz), perPage: options.perPage, units: production.displayUnits, landmarks };
+  const sheetOptions = {
+    productionName: production.name,
+    printedAt: formatStamp(new Date(), options.tz),
+    perPage: options.perPage,
+    units: production.displayUnits,
+    landmarks,
+  };
   return (
     <>
       {/* biome-ignore lint/security/noDangerouslySetInnerHtml: the charts' own constant stylesheet, no user text */}
       <style dangerouslySetInnerHTML={{ __html: CHART_CSS + sheetCss(options.paper) }} />
       <div className="no-print flex flex-wrap items-center gap-3 border-b border-line bg-surface px-4 py-3 text-sm">
-        <Link href={`/productions/${productionId}/focus?${toQuery({ ...filter })}`} className="text-muted hover:text-ink">← Back to the charts</Link>
-        <span data-testid="print-summary">{charts.length} charts · {options.perPage} a page · {options.paper === "A4" ? "A4" : "US Letter"} · {sheets.length} page{sheets.length === 1 ? "" : "s"}</span>
-        {problem.length > 0 && <span className="text-danger">Some options could not be read ({problem.join("; ")}); defaults used.</span>}
+        <Link
+          href={`/productions/${productionId}/focus?${toQuery({ ...filter })}`}
+          className="text-muted hover:text-ink"
+        >
+          ← Back to the charts
+        </Link>
+        <span data-testid="print-summary">
+          {charts.length} charts · {options.perPage} a page · {options.paper === "A4" ? "A4" : "US Letter"} ·{" "}
+          {sheets.length} page{sheets.length === 1 ? "" : "s"}
+        </span>
+        {problem.length > 0 && (
+          <span className="text-danger">Some options could not be read ({problem.join("; ")}); defaults used.</span>
+        )}
         <span className="ml-auto" />
         <PrintButton />
       </div>

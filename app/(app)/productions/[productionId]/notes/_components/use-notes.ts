@@ -25,7 +25,22 @@ export function useWorkCall(productionId: number, initial: WorkCallStop[]) {
   });
 }
 
-export type NoteWrite = Partial<Omit<NoteDto, "id" | "productionId" | "authorId" | "createdAt" | "updatedAt" | "closedBy" | "closedAt" | "origin" | "showReportId" | "runningCueId" | "runningCueNumber">>;
+export type NoteWrite = Partial<
+  Omit<
+    NoteDto,
+    | "id"
+    | "productionId"
+    | "authorId"
+    | "createdAt"
+    | "updatedAt"
+    | "closedBy"
+    | "closedAt"
+    | "origin"
+    | "showReportId"
+    | "runningCueId"
+    | "runningCueNumber"
+  >
+>;
 
 export function useNoteWrites(productionId: number) {
   const qc = useQueryClient();
@@ -56,16 +71,24 @@ export function useCurrentCue(productionId: number, initial: CurrentCueDto) {
     refetchInterval: 15_000,
   });
   const set = useMutation({
-    mutationFn: (cueId: number | null) => apiFetch<{ currentCue: CurrentCueDto }>(`${api(productionId)}/current-cue`, { method: "PUT", json: { cueId } }),
+    mutationFn: (cueId: number | null) =>
+      apiFetch<{ currentCue: CurrentCueDto }>(`${api(productionId)}/current-cue`, { method: "PUT", json: { cueId } }),
     onSuccess: (r) => qc.setQueryData(key, r.currentCue),
   });
   return { current: query.data, set };
 }
 
-export type SpotAnswer = { cueId: number | null; stateLabel: string; total: number; contributions: SpotContribution[]; warnings: string[] };
+export type SpotAnswer = {
+  cueId: number | null;
+  stateLabel: string;
+  total: number;
+  contributions: SpotContribution[];
+  warnings: string[];
+};
 
 export function useSpot(productionId: number) {
   return useMutation({
-    mutationFn: (req: { x: number; y: number; cueId?: number }) => apiFetch<SpotAnswer>(`${api(productionId)}/spot`, { method: "POST", json: req }),
+    mutationFn: (req: { x: number; y: number; cueId?: number }) =>
+      apiFetch<SpotAnswer>(`${api(productionId)}/spot`, { method: "POST", json: req }),
   });
 }

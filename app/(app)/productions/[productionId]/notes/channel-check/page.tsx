@@ -12,7 +12,18 @@ export default async function ChannelCheckPage({ params }: { params: Promise<{ p
   // Channel order, as the board brings them up; units with no channel cannot be brought up and are left out.
   const units = fixtures
     .filter((f) => f.channel != null)
-    .sort((a, b) => a.channel! - b.channel! || a.positionName.localeCompare(b.positionName) || compareUnitNumbers(a.unitNumber, b.unitNumber))
-    .map((f) => ({ id: f.id, channel: f.channel!, label: `${f.positionName} unit ${f.unitNumber}`, type: f.typeName, colour: f.colour }));
+    .sort(
+      (a, b) =>
+        a.channel! - b.channel! ||
+        a.positionName.localeCompare(b.positionName) ||
+        compareUnitNumbers(a.unitNumber, b.unitNumber),
+    )
+    .map((f) => ({
+      id: f.id,
+      channel: f.channel!,
+      label: `${f.positionName} unit ${f.unitNumber}`,
+      type: f.typeName,
+      colour: f.colour,
+    }));
   return <ChannelCheckView productionId={productionId} units={units} />;
 }

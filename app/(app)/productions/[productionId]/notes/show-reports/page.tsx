@@ -10,5 +10,12 @@ export const metadata: Metadata = { title: "Show reports" };
 export default async function ShowReportsPage({ params }: { params: Promise<{ productionId: string }> }) {
   const { productionId, member } = await memberForPage((await params).productionId);
   const [reports, subjects] = await Promise.all([getShowReports({ productionId }), getNoteSubjects({ productionId })]);
-  return <ShowReportsView productionId={productionId} initial={reports} subjects={subjects} canFile={can(member, "notes.fileShowReport")} />;
+  return (
+    <ShowReportsView
+      productionId={productionId}
+      initial={reports}
+      subjects={subjects}
+      canFile={can(member, "notes.fileShowReport")}
+    />
+  );
 }

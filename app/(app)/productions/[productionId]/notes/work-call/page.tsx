@@ -10,7 +10,11 @@ export const metadata: Metadata = { title: "Work call" };
 
 export default async function WorkCallPage({ params }: { params: Promise<{ productionId: string }> }) {
   const { productionId, member } = await memberForPage((await params).productionId);
-  const [stops, subjects, production] = await Promise.all([getWorkCall({ productionId }), getNoteSubjects({ productionId }), requireProduction(productionId)]);
+  const [stops, subjects, production] = await Promise.all([
+    getWorkCall({ productionId }),
+    getNoteSubjects({ productionId }),
+    requireProduction(productionId),
+  ]);
   return (
     <WorkCallView
       productionId={productionId}

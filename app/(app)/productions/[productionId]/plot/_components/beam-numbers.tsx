@@ -14,7 +14,9 @@ export function BeamNumbers({ g, units, isPreview }: { g: FixtureGeometry; units
   ];
   return (
     <div data-testid="beam-numbers" data-preview={isPreview ? "yes" : "no"} className="text-sm">
-      <p className="mb-1 text-xs text-muted">{isPreview ? "Preview while dragging — saved values follow on release." : "From the server."}</p>
+      <p className="mb-1 text-xs text-muted">
+        {isPreview ? "Preview while dragging — saved values follow on release." : "From the server."}
+      </p>
       <dl className="grid grid-cols-[1fr_auto] gap-x-3 gap-y-0.5">
         {rows.map(([k, v, id]) => (
           <Row key={id} label={k} value={v} id={id} />
@@ -30,7 +32,9 @@ function Row({ label, value, id }: { label: string; value: string; id: string })
   return (
     <>
       <dt className="text-muted">{label}</dt>
-      <dd className="text-right tabular-nums" data-testid={`num-${id}`}>{value}</dd>
+      <dd className="text-right tabular-nums" data-testid={`num-${id}`}>
+        {value}
+      </dd>
     </>
   );
 }

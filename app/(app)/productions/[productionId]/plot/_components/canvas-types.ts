@@ -5,7 +5,17 @@ import type { VertexTarget } from "@/lib/plot/pick-target";
 
 export type { VertexTarget };
 
-export type Tool = "select" | "position-line" | "position-point" | "area" | "landmark" | "cut" | "calibrate" | "align" | "place" | "underlay";
+export type Tool =
+  | "select"
+  | "position-line"
+  | "position-point"
+  | "area"
+  | "landmark"
+  | "cut"
+  | "calibrate"
+  | "align"
+  | "place"
+  | "underlay";
 
 export const LAYERS = ["underlay", "positions", "fixtures", "pools", "marks", "labels", "areas", "landmarks"] as const;
 export type LayerName = (typeof LAYERS)[number];
@@ -17,7 +27,11 @@ export type Selection = { fixtures: ReadonlySet<number>; positionId: number | nu
 export const PLOT_CANVAS_DESCRIPTION_ID = "plot-canvas-description";
 
 /** Nothing selected. One shared value: a selection is always replaced, never changed in place. */
-export const EMPTY_SELECTION: Selection = Object.freeze({ fixtures: new Set<number>(), positionId: null, focusPointId: null });
+export const EMPTY_SELECTION: Selection = Object.freeze({
+  fixtures: new Set<number>(),
+  positionId: null,
+  focusPointId: null,
+});
 
 /** What the canvas asks the editor to do; the editor owns saving, undo and messages. */
 export type CanvasEvents = {

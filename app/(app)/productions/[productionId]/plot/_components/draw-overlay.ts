@@ -8,7 +8,13 @@ import type { Ctx, Size } from "@/components/plot/draw-stage";
 import { diamondPath, planPath, strokeSegment } from "@/components/plot/plan-paths";
 import type { Gesture, Tool } from "./canvas-types";
 
-export function drawOverlay(ctx: Ctx, v: View, size: Size, pal: PlotPalette, o: { gesture: Gesture | null; draft: Point[]; tool: Tool; units: "metric" | "imperial" }) {
+export function drawOverlay(
+  ctx: Ctx,
+  v: View,
+  size: Size,
+  pal: PlotPalette,
+  o: { gesture: Gesture | null; draft: Point[]; tool: Tool; units: "metric" | "imperial" },
+) {
   const g = o.gesture;
   ctx.strokeStyle = pal.selection;
   ctx.fillStyle = pal.selection;

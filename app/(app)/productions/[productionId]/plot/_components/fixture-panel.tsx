@@ -11,13 +11,15 @@ import type { PanelProps } from "./panel-props";
 const numberOrNull = (text: string, what: string, opts: { int?: boolean } = {}): number | null => {
   if (text === "") return null;
   const n = Number(text.replace(/°$/, ""));
-  if (!Number.isFinite(n) || (opts.int && !Number.isInteger(n))) throw new RangeError(`${what} must be a ${opts.int ? "whole " : ""}number.`);
+  if (!Number.isFinite(n) || (opts.int && !Number.isInteger(n)))
+    throw new RangeError(`${what} must be a ${opts.int ? "whole " : ""}number.`);
   return n;
 };
 
 /** The same limits the API enforces, said at the field before the request goes out. */
 const inRange = (n: number | null, what: string, min: number, max: number) => {
-  if (n !== null && !(n > min && n < max)) throw new RangeError(`${what} must be more than ${Math.max(0, min)}° and less than ${max}°.`);
+  if (n !== null && !(n > min && n < max))
+    throw new RangeError(`${what} must be more than ${Math.max(0, min)}° and less than ${max}°.`);
   return n;
 };
 
@@ -49,13 +51,39 @@ export function FixturePanel(p: PanelProps & { fixture: PlotFixture }) {
         <p className="text-sm font-medium" data-testid="fixture-title">
           Unit {f.unitNumber} · {f.positionName}
         </p>
-        <p className="text-xs text-muted">{f.typeName} ({f.family}){f.purpose ? ` · ${f.purpose}` : ""}</p>
-        <PanelField label="Channel" value={f.channel?.toString() ?? ""} editable={ed} testId="field-channel" commit={save("Change the channel", (t) => ({ channel: numberOrNull(t, "Channel", { int: true }) }))} />
-        <PanelField label="Purpose" value={f.purpose ?? ""} editable={ed} commit={save("Change the purpose", (t) => ({ purpose: t || null }))} />
-        <PanelField label="Colour" value={f.colour ?? ""} editable={ed} commit={save("Change the colour", (t) => ({ colour: t || null }))} />
+        <p className="text-xs text-muted">
+          {f.typeName} ({f.family}){f.purpose ? ` · ${f.purpose}` : ""}
+        </p>
+        <PanelField
+          label="Channel"
+          value={f.channel?.toString() ?? ""}
+          editable={ed}
+          testId="field-channel"
+          commit={save("Change the channel", (t) => ({ channel: numberOrNull(t, "Channel", { int: true }) }))}
+        />
+        <PanelField
+          label="Purpose"
+          value={f.purpose ?? ""}
+          editable={ed}
+          commit={save("Change the purpose", (t) => ({ purpose: t || null }))}
+        />
+        <PanelField
+          label="Colour"
+          value={f.colour ?? ""}
+          editable={ed}
+          commit={save("Change the colour", (t) => ({ colour: t || null }))}
+        />
       </PanelSection>
       <PanelSection title="Focus" testId="focus-section">
-        {g.focus ? <p className="text-xs text-muted">Mark: {describePoint(g.focus, { units, datumName: p.production.datumName })}</p> : <p className="text-xs text-caution">No focus mark yet{ed ? ": drag from the unit or pick a focus point." : "."}</p>}
+        {g.focus ? (
+          <p className="text-xs text-muted">
+            Mark: {describePoint(g.focus, { units, datumName: p.production.datumName })}
+          </p>
+        ) : (
+          <p className="text-xs text-caution">
+            No focus mark yet{ed ? ": drag from the unit or pick a focus point." : "."}
+          </p>
+        )}
         {ed ? (
           <>
             <label className="flex flex-col gap-0.5 text-sm">
@@ -66,13 +94,17 @@ export function FixturePanel(p: PanelProps & { fixture: PlotFixture }) {
                 onChange={(e) => {
                   const id = e.target.value ? Number(e.target.value) : null;
                   const m = g.focus;
-                  void p.cmd.patchFixture(f.id, "Aim the unit", () => (id ? { focusPointId: id } : { focusPointId: null, focusX: m?.x ?? f.x, focusY: m?.y ?? f.y + 2 }));
+                  void p.cmd.patchFixture(f.id, "Aim the unit", () =>
+                    id ? { focusPointId: id } : { focusPointId: null, focusX: m?.x ?? f.x, focusY: m?.y ?? f.y + 2 },
+                  );
                 }}
                 className="min-h-9 rounded-md border border-line bg-surface px-2"
               >
                 <option value="">its own mark</option>
                 {p.data.focusPoints.map((fp) => (
-                  <option key={fp.id} value={fp.id}>{fp.name}</option>
+                  <option key={fp.id} value={fp.id}>
+                    {fp.name}
+                  </option>
                 ))}
               </select>
             </label>
@@ -80,7 +112,12 @@ export function FixturePanel(p: PanelProps & { fixture: PlotFixture }) {
               <legend className="text-muted">Aim height</legend>
               {(["deck", "head"] as const).map((a) => (
                 <label key={a} className="flex items-center gap-1">
-                  <input type="radio" name={`aim-${f.id}`} checked={f.aim === a} onChange={() => void p.cmd.patchFixture(f.id, "Change the aim height", () => ({ aim: a }))} />
+                  <input
+                    type="radio"
+                    name={`aim-${f.id}`}
+                    checked={f.aim === a}
+                    onChange={() => void p.cmd.patchFixture(f.id, "Change the aim height", () => ({ aim: a }))}
+                  />
                   {a === "deck" ? "deck" : `head (${formatLength(p.production.headHeight, units)})`}
                 </label>
               ))}
@@ -89,14 +126,39 @@ export function FixturePanel(p: PanelProps & { fixture: PlotFixture }) {
         ) : (
           <PanelField label="Aim at" value={f.focusPointName ?? "its own mark"} editable={false} commit={() => null} />
         )}
-        <PanelField label="Cone (°)" value={g.coneDeg.toFixed(1)} hint={type ? `this type: ${type.coneMinDeg}–${type.coneMaxDeg}°` : undefined} editable={ed} testId="field-cone"
-          commit={save("Change the cone", (t) => ({ coneDeg: inRange(numberOrNull(t, "Cone"), "Cone", 0, 180) }))} />
-        <PanelField label="Edge softness (°)" value={g.softnessDeg.toFixed(1)} editable={ed} testId="field-softness"
-          commit={save("Change the softness", (t) => ({ softnessDeg: inRange(numberOrNull(t, "Softness"), "Softness", -1e-9, 90) }))} />
-        <PanelField label="Lens height" value={f.lensHeight == null ? "" : formatLength(f.lensHeight, units)} placeholder={`${formatLength(g.lensHeight, units)} (trim − lens drop)`} hint="Empty: trim less the type's lens drop" editable={ed} testId="field-lens-height"
-          commit={save("Change the lens height", (t) => ({ lensHeight: t === "" ? null : parseLength(t, unit) }))} />
+        <PanelField
+          label="Cone (°)"
+          value={g.coneDeg.toFixed(1)}
+          hint={type ? `this type: ${type.coneMinDeg}–${type.coneMaxDeg}°` : undefined}
+          editable={ed}
+          testId="field-cone"
+          commit={save("Change the cone", (t) => ({ coneDeg: inRange(numberOrNull(t, "Cone"), "Cone", 0, 180) }))}
+        />
+        <PanelField
+          label="Edge softness (°)"
+          value={g.softnessDeg.toFixed(1)}
+          editable={ed}
+          testId="field-softness"
+          commit={save("Change the softness", (t) => ({
+            softnessDeg: inRange(numberOrNull(t, "Softness"), "Softness", -1e-9, 90),
+          }))}
+        />
+        <PanelField
+          label="Lens height"
+          value={f.lensHeight == null ? "" : formatLength(f.lensHeight, units)}
+          placeholder={`${formatLength(g.lensHeight, units)} (trim − lens drop)`}
+          hint="Empty: trim less the type's lens drop"
+          editable={ed}
+          testId="field-lens-height"
+          commit={save("Change the lens height", (t) => ({ lensHeight: t === "" ? null : parseLength(t, unit) }))}
+        />
         {ed ? (
-          <PanelField label="Throw (moves the mark along the beam)" value={g.throw == null ? "" : formatLength(g.throw, units)} editable testId="field-throw" error={throwError}
+          <PanelField
+            label="Throw (moves the mark along the beam)"
+            value={g.throw == null ? "" : formatLength(g.throw, units)}
+            editable
+            testId="field-throw"
+            error={throwError}
             commit={(t) => {
               setThrowError(null);
               let throwM: number;
@@ -106,11 +168,22 @@ export function FixturePanel(p: PanelProps & { fixture: PlotFixture }) {
                 return (err as Error).message;
               }
               if (!g.focus) return "Give the unit a focus mark first.";
-              const r = markForThrow({ source: g.source, mark: g.focus, aimZ: g.focus.z, throwM, describe: (m) => formatLength(m, units) });
+              const r = markForThrow({
+                source: g.source,
+                mark: g.focus,
+                aimZ: g.focus.z,
+                throwM,
+                describe: (m) => formatLength(m, units),
+              });
               if (!r.ok) return r.reason;
-              void p.cmd.patchFixture(f.id, "Set the throw", () => ({ focusX: round(r.mark.x), focusY: round(r.mark.y), focusPointId: null }));
+              void p.cmd.patchFixture(f.id, "Set the throw", () => ({
+                focusX: round(r.mark.x),
+                focusY: round(r.mark.y),
+                focusPointId: null,
+              }));
               return null;
-            }} />
+            }}
+          />
         ) : null}
         <BeamNumbers g={g} units={units} isPreview={Boolean(live)} />
       </PanelSection>
@@ -120,12 +193,35 @@ export function FixturePanel(p: PanelProps & { fixture: PlotFixture }) {
             {(f.shutterCuts ?? []).map((c) => (
               <li key={c.label} className="flex justify-between">
                 {c.label} shutter
-                {ed ? <button type="button" className="text-xs text-danger" onClick={() => void p.cmd.patchFixture(f.id, "Remove a cut", (x) => ({ shutterCuts: (x.shutterCuts ?? []).filter((k) => k.label !== c.label) }))}>Remove</button> : null}
+                {ed ? (
+                  <button
+                    type="button"
+                    className="text-xs text-danger"
+                    onClick={() =>
+                      void p.cmd.patchFixture(f.id, "Remove a cut", (x) => ({
+                        shutterCuts: (x.shutterCuts ?? []).filter((k) => k.label !== c.label),
+                      }))
+                    }
+                  >
+                    Remove
+                  </button>
+                ) : null}
               </li>
             ))}
           </ul>
-        ) : <p className="text-xs text-muted">No cuts.</p>}
-        {ed ? <button type="button" className="self-start rounded-md border border-line px-2 py-1 text-sm" onClick={() => p.setTool("cut")} aria-pressed={p.tool === "cut"}>Draw a cut</button> : null}
+        ) : (
+          <p className="text-xs text-muted">No cuts.</p>
+        )}
+        {ed ? (
+          <button
+            type="button"
+            className="self-start rounded-md border border-line px-2 py-1 text-sm"
+            onClick={() => p.setTool("cut")}
+            aria-pressed={p.tool === "cut"}
+          >
+            Draw a cut
+          </button>
+        ) : null}
       </PanelSection>
     </>
   );

@@ -6,7 +6,16 @@ import { useEffect, useId, useState } from "react";
  * A side-panel field that commits on Enter or blur. `commit` answers an error message (shown at the
  * field, announced) or null. Read-only members see plain text, with no input at all.
  */
-export function PanelField({ label, value, placeholder, hint, editable, commit, testId, error: outsideError }: {
+export function PanelField({
+  label,
+  value,
+  placeholder,
+  hint,
+  editable,
+  commit,
+  testId,
+  error: outsideError,
+}: {
   label: string;
   value: string;
   placeholder?: string;
@@ -29,7 +38,9 @@ export function PanelField({ label, value, placeholder, hint, editable, commit, 
     return (
       <div className="flex items-baseline justify-between gap-2 text-sm">
         <span className="text-muted">{label}</span>
-        <span data-testid={testId} className="text-right">{value || placeholder || "—"}</span>
+        <span data-testid={testId} className="text-right">
+          {value || placeholder || "—"}
+        </span>
       </div>
     );
   }
@@ -62,7 +73,15 @@ export function PanelField({ label, value, placeholder, hint, editable, commit, 
   );
 }
 
-export function PanelSection({ title, children, testId }: { title: string; children: React.ReactNode; testId?: string }) {
+export function PanelSection({
+  title,
+  children,
+  testId,
+}: {
+  title: string;
+  children: React.ReactNode;
+  testId?: string;
+}) {
   return (
     <section className="border-b border-line px-3 py-3" data-testid={testId}>
       <h3 className="mb-2 text-xs font-semibold uppercase tracking-wide text-muted">{title}</h3>

@@ -5,7 +5,14 @@ import { Layer, Stage } from "react-konva";
 import type Konva from "konva";
 import { PlanShape } from "@/components/plot/plan-shape";
 import { readPalette, type PlotPalette } from "@/components/plot/palette";
-import { drawAreas, drawGrid, drawLandmarks, drawPositions, drawStageOutline, type Ctx } from "@/components/plot/draw-stage";
+import {
+  drawAreas,
+  drawGrid,
+  drawLandmarks,
+  drawPositions,
+  drawStageOutline,
+  type Ctx,
+} from "@/components/plot/draw-stage";
 import { drawFixtures, drawFocusPoints, drawMarks, drawPool } from "@/components/plot/draw-rig";
 import { drawPoolEdges, drawPoolWashes } from "@/components/plot/draw-pools";
 import { drawUnderlay } from "@/components/plot/draw-underlay";
@@ -41,7 +48,12 @@ function PlotCanvas(props: PlotCanvasProps) {
   const fitted = useRef(false);
   const drawnOnce = useRef(false);
   // Bitmaps of the costly layers, reused while the view moves (components/plot/snapshot.ts).
-  const snaps = useRef({ washes: new LayerSnapshot(0.5), edges: new LayerSnapshot(), rig: new LayerSnapshot(), chosen: new LayerSnapshot() });
+  const snaps = useRef({
+    washes: new LayerSnapshot(0.5),
+    edges: new LayerSnapshot(),
+    rig: new LayerSnapshot(),
+    chosen: new LayerSnapshot(),
+  });
   /** True while the PNG export draws at its own pixel ratio: every layer is drawn directly. */
   const exporting = useRef(false);
 
@@ -63,7 +75,8 @@ function PlotCanvas(props: PlotCanvasProps) {
     // back makes the browser rasterise now, so the figure is the whole cost, not just the script's.
     const perf = (window as unknown as { __plotDrawMs?: number[] }).__plotDrawMs;
     if (now && perf) {
-      for (const l of which === "overlay" ? [overlayLayer.current] : stage.current?.getLayers() ?? []) l?.getContext()._context.getImageData(0, 0, 1, 1);
+      for (const l of which === "overlay" ? [overlayLayer.current] : (stage.current?.getLayers() ?? []))
+        l?.getContext()._context.getImageData(0, 0, 1, 1);
       perf.push(performance.now() - t0);
     }
     if (which === "overlay") return;
@@ -98,7 +111,12 @@ function PlotCanvas(props: PlotCanvasProps) {
 
   useEffect(() => {
     const el = container.current!;
-    const ro = new ResizeObserver(([e]) => setSize({ width: Math.max(50, Math.floor(e.contentRect.width)), height: Math.max(50, Math.floor(e.contentRect.height)) }));
+    const ro = new ResizeObserver(([e]) =>
+      setSize({
+        width: Math.max(50, Math.floor(e.contentRect.width)),
+        height: Math.max(50, Math.floor(e.contentRect.height)),
+      }),
+    );
     ro.observe(el);
     const mo = new MutationObserver(() => setPalette(readPalette()));
     mo.observe(document.documentElement, { attributes: true, attributeFilter: ["class"] });
@@ -126,23 +144,27 @@ function PlotCanvas(props: PlotCanvasProps) {
     redraw();
   }, [redraw]);
 
-  useImperativeHandle(props.handleRef, () => ({
-    fit,
-    zoom: (factor: number) => {
-      const { size: sz } = live.current;
-      view.current = zoomAbout(view.current, { x: sz.width / 2, y: sz.height / 2 }, factor);
-      redraw();
-    },
-    toDataURL: () => {
-      exporting.current = true;
-      try {
-        return stage.current?.toDataURL({ pixelRatio: 2 }) ?? "";
-      } finally {
-        exporting.current = false;
-      }
-    },
-    view: () => view.current,
-  }), [fit, redraw]);
+  useImperativeHandle(
+    props.handleRef,
+    () => ({
+      fit,
+      zoom: (factor: number) => {
+        const { size: sz } = live.current;
+        view.current = zoomAbout(view.current, { x: sz.width / 2, y: sz.height / 2 }, factor);
+        redraw();
+      },
+      toDataURL: () => {
+        exporting.current = true;
+        try {
+          return stage.current?.toDataURL({ pixelRatio: 2 }) ?? "";
+        } finally {
+          exporting.current = false;
+        }
+      },
+      view: () => view.current,
+    }),
+    [fit, redraw],
+  );
 
   const press = useCanvasGestures({ container, view, gesture, draft, preview, live, redraw });
   /** `moving` is true while a pan, pinch or wheel zoom is under way: the snapshots are moved, not redrawn. */
@@ -157,14 +179,22 @@ function PlotCanvas(props: PlotCanvasProps) {
 
   /** Draws a costly layer through its snapshot (or directly for the PNG export) and notes fresh drawings for the bench. */
   // biome-ignore lint/correctness/useExhaustiveDependencies: reads refs only (`live`, `snaps`, `view`, `moving`, `exporting`), so it never needs remaking
-  const throughSnapshot = useCallback((ctx: Ctx, which: keyof typeof snaps.current, stamp: unknown[], paint: (g: Ctx, v: View, s: { width: number; height: number }) => void) => {
-    const sz = live.current.size;
-    if (exporting.current) return paint(ctx, view.current, sz);
-    const snap = snaps.current[which];
-    if (snap.draw(ctx, view.current, sz, stamp, paint, moving.current) === "fresh") {
-      (window as unknown as { __plotFreshMs?: number[] }).__plotFreshMs?.push(snap.lastFreshMs);
-    }
-  }, []);
+  const throughSnapshot = useCallback(
+    (
+      ctx: Ctx,
+      which: keyof typeof snaps.current,
+      stamp: unknown[],
+      paint: (g: Ctx, v: View, s: { width: number; height: number }) => void,
+    ) => {
+      const sz = live.current.size;
+      if (exporting.current) return paint(ctx, view.current, sz);
+      const snap = snaps.current[which];
+      if (snap.draw(ctx, view.current, sz, stamp, paint, moving.current) === "fresh") {
+        (window as unknown as { __plotFreshMs?: number[] }).__plotFreshMs?.push(snap.lastFreshMs);
+      }
+    },
+    [],
+  );
 
   const drawUnderlayLayer = useCallback((ctx: Ctx) => {
     const { props: p, underlay: u, palette: pal, size: sz } = live.current;
@@ -183,65 +213,96 @@ function PlotCanvas(props: PlotCanvasProps) {
     const handles = p.canEdit && p.tool === "select";
     if (p.layers.areas) drawAreas(ctx, v, p.data.areaZones, pal, p.layers.labels, handles);
     if (p.layers.landmarks) drawLandmarks(ctx, v, p.data.landmarks, pal, p.layers.labels, handles);
-    if (p.layers.positions) drawPositions(ctx, v, p.data.positions, pal, p.layers.labels, new Set(p.selection.positionId ? [p.selection.positionId] : []));
+    if (p.layers.positions)
+      drawPositions(
+        ctx,
+        v,
+        p.data.positions,
+        pal,
+        p.layers.labels,
+        new Set(p.selection.positionId ? [p.selection.positionId] : []),
+      );
   }, []);
 
   // Every pool, faint. A unit whose mark is being dragged keeps its saved pool here (the live one is
   // drawn strongly on top), so starting a drag does not redraw 1,500 pools.
-  const drawPoolLayer = useCallback((ctx: Ctx) => {
-    const { props: p, palette: pal, items: its } = live.current;
-    if (!pal || !p.layers.pools) return;
-    throughSnapshot(ctx, "washes", [its, pal], (g, v, s) => drawPoolWashes(g, v, its, pal, visiblePlanBounds(v, s)));
-    throughSnapshot(ctx, "edges", [its, pal], (g, v, s) => drawPoolEdges(g, v, its, pal, visiblePlanBounds(v, s)));
-  }, [throughSnapshot]);
+  const drawPoolLayer = useCallback(
+    (ctx: Ctx) => {
+      const { props: p, palette: pal, items: its } = live.current;
+      if (!pal || !p.layers.pools) return;
+      throughSnapshot(ctx, "washes", [its, pal], (g, v, s) => drawPoolWashes(g, v, its, pal, visiblePlanBounds(v, s)));
+      throughSnapshot(ctx, "edges", [its, pal], (g, v, s) => drawPoolEdges(g, v, its, pal, visiblePlanBounds(v, s)));
+    },
+    [throughSnapshot],
+  );
 
-  const drawRig = useCallback((ctx: Ctx) => {
-    const { props: p, palette: pal, items: its } = live.current;
-    if (!pal) return;
-    const skip = preview.current?.id ?? null;
-    throughSnapshot(ctx, "rig", [its, pal, p.layers, p.selection, p.data.focusPoints, skip], (g, v, s) => {
-      const shown = skip != null ? its.filter((i) => i.id !== skip) : its;
-      if (p.layers.marks) {
-        drawMarks(g, v, shown, pal, p.selection.fixtures);
-        drawFocusPoints(g, v, p.data.focusPoints, pal, p.layers.labels, p.selection.focusPointId);
+  const drawRig = useCallback(
+    (ctx: Ctx) => {
+      const { props: p, palette: pal, items: its } = live.current;
+      if (!pal) return;
+      const skip = preview.current?.id ?? null;
+      throughSnapshot(ctx, "rig", [its, pal, p.layers, p.selection, p.data.focusPoints, skip], (g, v, s) => {
+        const shown = skip != null ? its.filter((i) => i.id !== skip) : its;
+        if (p.layers.marks) {
+          drawMarks(g, v, shown, pal, p.selection.fixtures);
+          drawFocusPoints(g, v, p.data.focusPoints, pal, p.layers.labels, p.selection.focusPointId);
+        }
+        if (p.layers.fixtures)
+          drawFixtures(g, v, shown, pal, { labels: p.layers.labels, selected: p.selection.fixtures, visible: s });
+      });
+      if (!drawnOnce.current && fitted.current) {
+        // The first complete picture (palette read, view fitted): bench:plot and the e2e tests wait for it.
+        drawnOnce.current = true;
+        performance.mark("plot:first-draw");
+        requestAnimationFrame(() => {
+          performance.mark("plot:first-paint");
+          if (container.current) container.current.dataset.drawn = "yes";
+        });
       }
-      if (p.layers.fixtures) drawFixtures(g, v, shown, pal, { labels: p.layers.labels, selected: p.selection.fixtures, visible: s });
-    });
-    if (!drawnOnce.current && fitted.current) {
-      // The first complete picture (palette read, view fitted): bench:plot and the e2e tests wait for it.
-      drawnOnce.current = true;
-      performance.mark("plot:first-draw");
-      requestAnimationFrame(() => {
-        performance.mark("plot:first-paint");
-        if (container.current) container.current.dataset.drawn = "yes";
-      });
-    }
-  }, [throughSnapshot]);
+    },
+    [throughSnapshot],
+  );
 
-  const drawOver = useCallback((ctx: Ctx) => {
-    const { props: p, palette: pal, size: sz, items: its } = live.current;
-    if (!pal) return;
-    const v = view.current;
-    const pv = preview.current;
-    // The selection's pools again, with their edges, so the ones being worked on stand out.
-    if (p.layers.pools && p.selection.fixtures.size) {
-      throughSnapshot(ctx, "chosen", [its, pal, p.selection, pv?.id ?? null], (g, gv) => {
-        for (const it of its) if (p.selection.fixtures.has(it.id) && it.id !== pv?.id) drawPool(g, gv, it, pal, true);
+  const drawOver = useCallback(
+    (ctx: Ctx) => {
+      const { props: p, palette: pal, size: sz, items: its } = live.current;
+      if (!pal) return;
+      const v = view.current;
+      const pv = preview.current;
+      // The selection's pools again, with their edges, so the ones being worked on stand out.
+      if (p.layers.pools && p.selection.fixtures.size) {
+        throughSnapshot(ctx, "chosen", [its, pal, p.selection, pv?.id ?? null], (g, gv) => {
+          for (const it of its) if (p.selection.fixtures.has(it.id) && it.id !== pv?.id) drawPool(g, gv, it, pal, true);
+        });
+      }
+      if (pv) {
+        const stackIndex = its.find((i) => i.id === pv.id)?.stack.index ?? 0;
+        const item = toRigItem(pv, stackIndex);
+        if (p.layers.pools) drawPool(ctx, v, item, pal, true);
+        drawMarks(ctx, v, [item], pal, new Set([pv.id]));
+        drawFixtures(ctx, v, [item], pal, { labels: p.layers.labels, selected: new Set([pv.id]), visible: sz });
+      }
+      drawOverlay(ctx, v, sz, pal, {
+        gesture: gesture.current,
+        draft: draft.current,
+        tool: p.tool,
+        units: p.production.displayUnits,
       });
-    }
-    if (pv) {
-      const stackIndex = its.find((i) => i.id === pv.id)?.stack.index ?? 0;
-      const item = toRigItem(pv, stackIndex);
-      if (p.layers.pools) drawPool(ctx, v, item, pal, true);
-      drawMarks(ctx, v, [item], pal, new Set([pv.id]));
-      drawFixtures(ctx, v, [item], pal, { labels: p.layers.labels, selected: new Set([pv.id]), visible: sz });
-    }
-    drawOverlay(ctx, v, sz, pal, { gesture: gesture.current, draft: draft.current, tool: p.tool, units: p.production.displayUnits });
-  }, [throughSnapshot]);
+    },
+    [throughSnapshot],
+  );
 
   return (
     // biome-ignore lint/a11y/noNoninteractiveTabindex: the plan is the editor's surface and takes the keyboard (arrows nudge, Delete, Space pans)
-    <div ref={container} data-testid="plot-canvas" role="application" tabIndex={0} className="relative h-full w-full touch-none select-none overflow-hidden outline-none" aria-label="Plot: plan view of the stage" aria-describedby={PLOT_CANVAS_DESCRIPTION_ID}>
+    <div
+      ref={container}
+      data-testid="plot-canvas"
+      role="application"
+      tabIndex={0}
+      className="relative h-full w-full touch-none select-none overflow-hidden outline-none"
+      aria-label="Plot: plan view of the stage"
+      aria-describedby={PLOT_CANVAS_DESCRIPTION_ID}
+    >
       <Stage ref={stage} width={size.width} height={size.height} listening={false}>
         {/* Underlay and plan share a layer: both are cheap, and every layer is a canvas to allocate and composite. */}
         <Layer listening={false}>
@@ -264,6 +325,9 @@ function PlotCanvas(props: PlotCanvasProps) {
 
 /** The view that shows the whole stage and every position. */
 function fittedView(p: Pick<PlotCanvasProps, "data" | "production">, size: { width: number; height: number }): View {
-  const pts = p.data.positions.flatMap((q) => [{ x: q.x1, y: q.y1 }, ...(q.x2 != null && q.y2 != null ? [{ x: q.x2, y: q.y2 }] : [])]);
+  const pts = p.data.positions.flatMap((q) => [
+    { x: q.x1, y: q.y1 },
+    ...(q.x2 != null && q.y2 != null ? [{ x: q.x2, y: q.y2 }] : []),
+  ]);
   return fitBounds(extendBounds(stageBounds(p.production), pts), size, 32);
 }

@@ -2,14 +2,26 @@
 // The plot's commands that make or remove units: hang one from the shelf, delete the selection,
 // duplicate it. Each runs through the editor's one-at-a-time queue and leaves an undo step.
 import type { Point } from "@/lib/optics";
-import { nearestPosition, numberingOrder, projectOntoPosition, unitNumberForInsert, type NumberingDirection } from "@/lib/plot/along-position";
+import {
+  nearestPosition,
+  numberingOrder,
+  projectOntoPosition,
+  unitNumberForInsert,
+  type NumberingDirection,
+} from "@/lib/plot/along-position";
 import { compareUnitNumbers } from "@/lib/rig/unit-number";
 import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import { creationFields, type Commands } from "./use-commands";
 import { isVertical } from "./rig-items";
 
 /** Hangs one unit of a type at the nearest position, numbered so nobody else is renumbered. */
-export function placeFixture(cmd: Commands, typeId: number, at: Point, direction: NumberingDirection, tolerance: number) {
+export function placeFixture(
+  cmd: Commands,
+  typeId: number,
+  at: Point,
+  direction: NumberingDirection,
+  tolerance: number,
+) {
   const data = cmd.latest();
   const hit = nearestPosition(data.positions, at, tolerance);
   if (!hit) {
@@ -20,7 +32,8 @@ export function placeFixture(cmd: Commands, typeId: number, at: Point, direction
   const onPos = data.fixtures.filter((f) => f.positionId === pos.id);
   const existing = onPos.map((f) => f.unitNumber);
   let before: string | null = null;
-  if (onPos.length && isVertical(pos.kind)) before = existing.slice().sort(compareUnitNumbers).at(-1)!; // booms: the new unit goes below
+  if (onPos.length && isVertical(pos.kind))
+    before = existing.slice().sort(compareUnitNumbers).at(-1)!; // booms: the new unit goes below
   else if (onPos.length) {
     const order = numberingOrder([...onPos, { id: -1, x: hit.point.x, y: hit.point.y } as PlotFixture], direction);
     const idx = order.findIndex((f) => f.id === -1);
@@ -29,8 +42,12 @@ export function placeFixture(cmd: Commands, typeId: number, at: Point, direction
   const unitNumber = unitNumberForInsert(existing, before);
   const lensHeight = isVertical(pos.kind) ? Math.max(0.3, pos.trimHeight - 0.9 * onPos.length) : null;
   return cmd.run("Hang a unit", async () => {
-    const [created] = await cmd.actions.createFixtures([{ positionId: pos.id, fixtureTypeId: typeId, unitNumber, x: hit.point.x, y: hit.point.y, lensHeight }]);
-    cmd.remember(`Hang unit ${unitNumber}`, () => cmd.run("Undo hang", () => cmd.actions.deleteFixtures([created.id])).then(() => undefined));
+    const [created] = await cmd.actions.createFixtures([
+      { positionId: pos.id, fixtureTypeId: typeId, unitNumber, x: hit.point.x, y: hit.point.y, lensHeight },
+    ]);
+    cmd.remember(`Hang unit ${unitNumber}`, () =>
+      cmd.run("Undo hang", () => cmd.actions.deleteFixtures([created.id])).then(() => undefined),
+    );
     return created;
   });
 }
@@ -68,6 +85,8 @@ export function duplicateFixtures(cmd: Commands, ids: number[]) {
     });
     if (!copies.length) return;
     const created = await cmd.actions.createFixtures(copies);
-    cmd.remember(`Duplicate ${created.length}`, () => cmd.run("Undo duplicate", () => cmd.actions.deleteFixtures(created.map((c) => c.id))).then(() => undefined));
+    cmd.remember(`Duplicate ${created.length}`, () =>
+      cmd.run("Undo duplicate", () => cmd.actions.deleteFixtures(created.map((c) => c.id))).then(() => undefined),
+    );
   });
 }

@@ -48,16 +48,24 @@ export function toRigItem(f: PlotFixture, stackIndex = 0): RigItem {
 }
 
 /** The fixture as it would be with a new mark (and/or a new plan point), computed in the browser. */
-export function previewFixture(data: PlotPayload, f: PlotFixture, change: { mark?: Point; at?: Point }, headHeight: number): PlotFixture {
+export function previewFixture(
+  data: PlotPayload,
+  f: PlotFixture,
+  change: { mark?: Point; at?: Point },
+  headHeight: number,
+): PlotFixture {
   const position = data.positions.find((p) => p.id === f.positionId);
   const type = data.fixtureTypes.find((t) => t.id === f.fixtureTypeId);
   if (!position || !type) return f;
-  const point = f.focusPointId ? data.focusPoints.find((p) => p.id === f.focusPointId) ?? null : null;
+  const point = f.focusPointId ? (data.focusPoints.find((p) => p.id === f.focusPointId) ?? null) : null;
   const next = {
     ...f,
     ...(change.at ? { x: change.at.x, y: change.at.y } : {}),
     ...(change.mark ? { focusX: change.mark.x, focusY: change.mark.y, focusPointId: null } : {}),
   };
-  const computed = computeFixtureGeometry({ ...next, focusPoint: change.mark ? null : point, position, type }, headHeight);
+  const computed = computeFixtureGeometry(
+    { ...next, focusPoint: change.mark ? null : point, position, type },
+    headHeight,
+  );
   return { ...next, computed };
 }

@@ -5,7 +5,13 @@ import type { NumberingDirection } from "@/lib/plot/along-position";
 import { symbolOutline, symbolShape } from "@/lib/plot/symbol";
 
 /** The production's fixture types: drag one onto a position, or pick it and click a position. */
-export function TypeShelf({ types, armedTypeId, arm, direction, setDirection }: {
+export function TypeShelf({
+  types,
+  armedTypeId,
+  arm,
+  direction,
+  setDirection,
+}: {
   types: FixtureTypeDto[];
   armedTypeId: number | null;
   arm: (id: number | null) => void;
@@ -35,11 +41,17 @@ export function TypeShelf({ types, armedTypeId, arm, direction, setDirection }: 
             </button>
           </li>
         ))}
-        {!types.length ? <li className="px-2 text-xs text-muted">No fixture types yet. Add them on the rig tab.</li> : null}
+        {!types.length ? (
+          <li className="px-2 text-xs text-muted">No fixture types yet. Add them on the rig tab.</li>
+        ) : null}
       </ul>
       <label className="flex flex-col gap-1 border-t border-line p-3 text-xs text-muted">
         Unit numbers run
-        <select value={direction} onChange={(e) => setDirection(e.target.value as NumberingDirection)} className="rounded border border-line bg-surface px-1 py-1 text-sm text-ink">
+        <select
+          value={direction}
+          onChange={(e) => setDirection(e.target.value as NumberingDirection)}
+          className="rounded border border-line bg-surface px-1 py-1 text-sm text-ink"
+        >
           <option value="from-stage-left">from stage left</option>
           <option value="from-stage-right">from stage right</option>
         </select>
@@ -49,7 +61,9 @@ export function TypeShelf({ types, armedTypeId, arm, direction, setDirection }: 
 }
 
 function MiniSymbol({ family }: { family: string }) {
-  const pts = symbolOutline(symbolShape(family)).map(([x, y]) => `${x * 18},${y * 18}`).join(" ");
+  const pts = symbolOutline(symbolShape(family))
+    .map(([x, y]) => `${x * 18},${y * 18}`)
+    .join(" ");
   return (
     <svg width="22" height="22" viewBox="-11 -11 22 22" aria-hidden className="shrink-0">
       <polygon points={pts} transform="rotate(90)" className="fill-surface stroke-ink" strokeWidth="1.2" />

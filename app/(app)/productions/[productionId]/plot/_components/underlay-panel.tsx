@@ -20,7 +20,9 @@ export function UnderlayPanel(p: PanelProps) {
     <PanelSection title="Groundplan underlay" testId="underlay-panel">
       {u ? (
         <p className="text-xs text-muted" data-testid="underlay-info">
-          {u.fileName} · {u.widthPx ?? "?"}×{u.heightPx ?? "?"} px · 1 px = {formatLength(u.metresPerPixel, p.production.displayUnits)}{u.locked ? " · locked" : ""}
+          {u.fileName} · {u.widthPx ?? "?"}×{u.heightPx ?? "?"} px · 1 px ={" "}
+          {formatLength(u.metresPerPixel, p.production.displayUnits)}
+          {u.locked ? " · locked" : ""}
         </p>
       ) : (
         <p className="text-xs text-muted">No groundplan yet.</p>
@@ -33,33 +35,73 @@ export function UnderlayPanel(p: PanelProps) {
             if (file) void p.cmd.run("Upload the groundplan", () => p.cmd.actions.uploadUnderlay(file));
           }}
         >
-          <input type="file" aria-label="Groundplan image" accept="image/png,image/jpeg,image/webp" data-testid="underlay-file" onChange={(e) => setFile(e.target.files?.[0] ?? null)} className="text-xs" />
-          <button type="submit" disabled={!file} className="self-start rounded-md border border-line px-2 py-1 text-sm">Upload</button>
+          <input
+            type="file"
+            aria-label="Groundplan image"
+            accept="image/png,image/jpeg,image/webp"
+            data-testid="underlay-file"
+            onChange={(e) => setFile(e.target.files?.[0] ?? null)}
+            className="text-xs"
+          />
+          <button type="submit" disabled={!file} className="self-start rounded-md border border-line px-2 py-1 text-sm">
+            Upload
+          </button>
           <span className="text-xs text-muted">PNG, JPEG or WebP, up to 15 MB.</span>
         </form>
       ) : null}
       {u && ed ? (
         <>
           <div className="flex flex-wrap gap-1">
-            <ToolButton {...p} t="calibrate" disabled={u.locked}>Calibrate scale</ToolButton>
-            <ToolButton {...p} t="align" disabled={u.locked}>Set datum point</ToolButton>
-            <ToolButton {...p} t="underlay" disabled={u.locked}>Move</ToolButton>
+            <ToolButton {...p} t="calibrate" disabled={u.locked}>
+              Calibrate scale
+            </ToolButton>
+            <ToolButton {...p} t="align" disabled={u.locked}>
+              Set datum point
+            </ToolButton>
+            <ToolButton {...p} t="underlay" disabled={u.locked}>
+              Move
+            </ToolButton>
           </div>
-          <PanelField label="Rotation (°)" value={String(u.rotationDeg)} editable={!u.locked} testId="underlay-rotation"
+          <PanelField
+            label="Rotation (°)"
+            value={String(u.rotationDeg)}
+            editable={!u.locked}
+            testId="underlay-rotation"
             commit={async (t) => {
               const n = Number(t);
               if (!Number.isFinite(n)) return "Rotation must be a number of degrees.";
               await patch("Rotate the groundplan", { rotationDeg: n });
               return null;
-            }} />
+            }}
+          />
           <label className="flex flex-col gap-0.5 text-sm">
             <span className="text-muted">Opacity {Math.round(u.opacity * 100)} %</span>
-            <input type="range" min="0" max="100" defaultValue={Math.round(u.opacity * 100)} key={u.version} data-testid="underlay-opacity"
-              onPointerUp={(e) => void patch("Change the opacity", { opacity: Number((e.target as HTMLInputElement).value) / 100 })}
-              onKeyUp={(e) => void patch("Change the opacity", { opacity: Number((e.target as HTMLInputElement).value) / 100 })} />
+            <input
+              type="range"
+              min="0"
+              max="100"
+              defaultValue={Math.round(u.opacity * 100)}
+              key={u.version}
+              data-testid="underlay-opacity"
+              onPointerUp={(e) =>
+                void patch("Change the opacity", { opacity: Number((e.target as HTMLInputElement).value) / 100 })
+              }
+              onKeyUp={(e) =>
+                void patch("Change the opacity", { opacity: Number((e.target as HTMLInputElement).value) / 100 })
+              }
+            />
           </label>
           <label className="flex items-center gap-2 text-sm">
-            <input type="checkbox" checked={u.locked} data-testid="underlay-lock" onChange={(e) => void patch(e.target.checked ? "Lock the groundplan" : "Unlock the groundplan", { locked: e.target.checked })} />
+            <input
+              type="checkbox"
+              checked={u.locked}
+              data-testid="underlay-lock"
+              onChange={(e) =>
+                void patch(e.target.checked ? "Lock the groundplan" : "Unlock the groundplan", {
+                  locked: e.target.checked,
+                })
+              }
+            />
             Locked (cannot be moved or rescaled)
           </label>
         </>
@@ -70,8 +112,13 @@ export function UnderlayPanel(p: PanelProps) {
 
 function ToolButton(p: PanelProps & { t: PanelProps["tool"]; disabled: boolean; children: React.ReactNode }) {
   return (
-    <button type="button" disabled={p.disabled} aria-pressed={p.tool === p.t} onClick={() => p.setTool(p.tool === p.t ? "select" : p.t)}
-      className="rounded-md border border-line px-2 py-1 text-sm aria-pressed:bg-accent aria-pressed:text-accent-ink disabled:opacity-50">
+    <button
+      type="button"
+      disabled={p.disabled}
+      aria-pressed={p.tool === p.t}
+      onClick={() => p.setTool(p.tool === p.t ? "select" : p.t)}
+      className="rounded-md border border-line px-2 py-1 text-sm aria-pressed:bg-accent aria-pressed:text-accent-ink disabled:opacity-50"
+    >
       {p.children}
     </button>
   );

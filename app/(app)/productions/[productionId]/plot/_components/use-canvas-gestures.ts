@@ -177,7 +177,10 @@ export function useCanvasGestures({ container, view, gesture, draft, preview, li
         if (g.kind === "box") {
           const b = boundsOf(g.from, g.to);
           const ids = items.filter((i) => inBounds(b, i)).map((i) => i.id);
-          p.events.select({ ...EMPTY_SELECTION, fixtures: new Set([...(e.shiftKey ? p.selection.fixtures : []), ...ids]) }, false);
+          p.events.select(
+            { ...EMPTY_SELECTION, fixtures: new Set([...(e.shiftKey ? p.selection.fixtures : []), ...ids]) },
+            false,
+          );
         }
         finish();
       },

@@ -27,32 +27,47 @@ export function useCommands(productionId: number) {
   const [undoLabel, setUndoLabel] = useState<string | null>(null);
   const [busy, setBusy] = useState(0);
 
-  const latest = useCallback(() => qc.getQueryData<PlotPayload>(productionKeys.plot(productionId))!, [qc, productionId]);
+  const latest = useCallback(
+    () => qc.getQueryData<PlotPayload>(productionKeys.plot(productionId))!,
+    [qc, productionId],
+  );
   const fixture = useCallback((id: number) => latest().fixtures.find((f) => f.id === id) ?? null, [latest]);
 
-  const run = useCallback(<T,>(label: string, work: () => Promise<T>, retry?: () => void): Promise<T | undefined> => {
-    setBusy((n) => n + 1);
-    const next = queue.current.then(async () => {
-      try {
-        const result = await work();
-        setNotice(null);
-        return result;
-      } catch (err) {
-        if (err instanceof ApiError && err.status === 409) {
-          await actions.refresh();
-          setNotice({ tone: "conflict", text: `Someone else changed this first (${label.toLowerCase()}). Their version is shown now; yours was not saved.`, retry });
-        } else if (err instanceof ApiError) {
-          const fields = Object.entries(err.fieldErrors ?? {}).map(([k, v]) => `${k}: ${v[0]}`).join("; ");
-          setNotice({ tone: "error", text: `${label}: ${err.message}${fields && !err.message.includes(fields) ? ` (${fields})` : ""}` });
-        } else setNotice({ tone: "error", text: `${label}: the server could not be reached. Nothing was changed.` });
-        return undefined;
-      } finally {
-        setBusy((n) => n - 1);
-      }
-    });
-    queue.current = next;
-    return next;
-  }, [actions]);
+  const run = useCallback(
+    <T>(label: string, work: () => Promise<T>, retry?: () => void): Promise<T | undefined> => {
+      setBusy((n) => n + 1);
+      const next = queue.current.then(async () => {
+        try {
+          const result = await work();
+          setNotice(null);
+          return result;
+        } catch (err) {
+          if (err instanceof ApiError && err.status === 409) {
+            await actions.refresh();
+            setNotice({
+              tone: "conflict",
+              text: `Someone else changed this first (${label.toLowerCase()}). Their version is shown now; yours was not saved.`,
+              retry,
+            });
+          } else if (err instanceof ApiError) {
+            const fields = Object.entries(err.fieldErrors ?? {})
+              .map(([k, v]) => `${k}: ${v[0]}`)
+              .join("; ");
+            setNotice({
+              tone: "error",
+              text: `${label}: ${err.message}${fields && !err.message.includes(fields) ? ` (${fields})` : ""}`,
+            });
+          } else setNotice({ tone: "error", text: `${label}: the server could not be reached. Nothing was changed.` });
+          return undefined;
+        } finally {
+          setBusy((n) => n - 1);
+        }
+      });
+      queue.current = next;
+      return next;
+    },
+    [actions],
+  );
 
   const remember = useCallback((label: string, fn: () => Promise<void>) => {
     undo.current.push({ label, undo: fn });
@@ -61,20 +76,32 @@ export function useCommands(productionId: number) {
 
   return useMemo(() => {
     /** Patches a fixture with its latest version; `patchFor` may read the latest row (for nudges). */
-    function patchFixture(id: number, label: string, patchFor: (f: PlotFixture) => Record<string, unknown> | null, opts: { undoable?: boolean } = {}) {
+    function patchFixture(
+      id: number,
+      label: string,
+      patchFor: (f: PlotFixture) => Record<string, unknown> | null,
+      opts: { undoable?: boolean } = {},
+    ) {
       const attempt = () =>
-        run(label, async () => {
-          const f = fixture(id);
-          if (!f) return;
-          const patch = patchFor(f);
-          if (!patch) return;
-          const before = Object.fromEntries(Object.keys(patch).map((k) => [k, f[k as keyof PlotFixture] ?? null]));
-          await actions.patchFixture(id, { ...patch, version: f.version });
-          if (opts.undoable !== false) remember(label, () => run(`Undo ${label.toLowerCase()}`, async () => {
-            const now = fixture(id);
-            if (now) await actions.patchFixture(id, { ...before, version: now.version });
-          }).then(() => undefined));
-        }, () => void attempt());
+        run(
+          label,
+          async () => {
+            const f = fixture(id);
+            if (!f) return;
+            const patch = patchFor(f);
+            if (!patch) return;
+            const before = Object.fromEntries(Object.keys(patch).map((k) => [k, f[k as keyof PlotFixture] ?? null]));
+            await actions.patchFixture(id, { ...patch, version: f.version });
+            if (opts.undoable !== false)
+              remember(label, () =>
+                run(`Undo ${label.toLowerCase()}`, async () => {
+                  const now = fixture(id);
+                  if (now) await actions.patchFixture(id, { ...before, version: now.version });
+                }).then(() => undefined),
+              );
+          },
+          () => void attempt(),
+        );
       return attempt();
     }
     return {

@@ -8,7 +8,14 @@ import { deleteFixtures, duplicateFixtures } from "./plot-commands";
 const NUDGE_M = 0.05;
 const BIG_NUDGE_M = 0.25;
 
-export function usePlotKeys({ cmd, canEdit, selection, setSelection, handle, setTool }: {
+export function usePlotKeys({
+  cmd,
+  canEdit,
+  selection,
+  setSelection,
+  handle,
+  setTool,
+}: {
   cmd: Commands;
   canEdit: boolean;
   selection: Selection;
@@ -44,7 +51,12 @@ export function usePlotKeys({ cmd, canEdit, selection, setSelection, handle, set
       if (ids.length !== 1) return;
       const id = ids[0];
       const step = e.shiftKey ? BIG_NUDGE_M : NUDGE_M;
-      const arrows: Record<string, [number, number]> = { ArrowLeft: [-step, 0], ArrowRight: [step, 0], ArrowUp: [0, step], ArrowDown: [0, -step] };
+      const arrows: Record<string, [number, number]> = {
+        ArrowLeft: [-step, 0],
+        ArrowRight: [step, 0],
+        ArrowUp: [0, step],
+        ArrowDown: [0, -step],
+      };
       if (arrows[e.key]) {
         e.preventDefault();
         const [dx, dy] = arrows[e.key];
@@ -54,10 +66,17 @@ export function usePlotKeys({ cmd, canEdit, selection, setSelection, handle, set
         });
       }
       const cone = { "[": -1, "]": 1 }[e.key];
-      if (cone) return void cmd.patchFixture(id, "Change the cone", (f) => ({ coneDeg: Math.min(179, Math.max(1, Math.round(f.computed.coneDeg + cone))) }));
+      if (cone)
+        return void cmd.patchFixture(id, "Change the cone", (f) => ({
+          coneDeg: Math.min(179, Math.max(1, Math.round(f.computed.coneDeg + cone))),
+        }));
       const soft = { ",": -0.5, ".": 0.5 }[e.key];
-      if (soft) return void cmd.patchFixture(id, "Change the softness", (f) => ({ softnessDeg: Math.max(0, f.computed.softnessDeg + soft) }));
-      if (e.key === "h") return void cmd.patchFixture(id, "Change the aim height", (f) => ({ aim: f.aim === "deck" ? "head" : "deck" }));
+      if (soft)
+        return void cmd.patchFixture(id, "Change the softness", (f) => ({
+          softnessDeg: Math.max(0, f.computed.softnessDeg + soft),
+        }));
+      if (e.key === "h")
+        return void cmd.patchFixture(id, "Change the aim height", (f) => ({ aim: f.aim === "deck" ? "head" : "deck" }));
     }
     window.addEventListener("keydown", onKey);
     return () => window.removeEventListener("keydown", onKey);

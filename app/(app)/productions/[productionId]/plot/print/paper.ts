@@ -10,8 +10,18 @@ export const PAPERS = {
 export type PaperName = keyof typeof PAPERS;
 
 export const SCALES = {
-  metric: [{ ratio: 25, label: "1:25" }, { ratio: 50, label: "1:50" }, { ratio: 100, label: "1:100" }, { ratio: 200, label: "1:200" }],
-  imperial: [{ ratio: 24, label: `1/2" = 1'-0"` }, { ratio: 48, label: `1/4" = 1'-0"` }, { ratio: 96, label: `1/8" = 1'-0"` }, { ratio: 192, label: `1/16" = 1'-0"` }],
+  metric: [
+    { ratio: 25, label: "1:25" },
+    { ratio: 50, label: "1:50" },
+    { ratio: 100, label: "1:100" },
+    { ratio: 200, label: "1:200" },
+  ],
+  imperial: [
+    { ratio: 24, label: `1/2" = 1'-0"` },
+    { ratio: 48, label: `1/4" = 1'-0"` },
+    { ratio: 96, label: `1/8" = 1'-0"` },
+    { ratio: 192, label: `1/16" = 1'-0"` },
+  ],
 } as const;
 
 export const MARGIN_MM = 10;

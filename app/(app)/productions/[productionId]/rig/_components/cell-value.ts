@@ -34,12 +34,18 @@ export function readTyped(kind: ColumnKind, text: string, units: Units): unknown
 
 export function editText(kind: ColumnKind, v: unknown, units: Units): string {
   if (v === null || v === undefined) return "";
-  if (kind === "length" && typeof v === "number") return units === "metric" ? String(Number(v.toFixed(3))) : formatLength(v, units);
+  if (kind === "length" && typeof v === "number")
+    return units === "metric" ? String(Number(v.toFixed(3))) : formatLength(v, units);
   return String(v);
 }
 
 /** An empty cell's value in effect ("26° from type"), or null where the unit has none to inherit. */
-export function inheritedText(kind: ColumnKind, columnId: string, f: FixtureDto, units: Units): { text: string; from: string } | null {
+export function inheritedText(
+  kind: ColumnKind,
+  columnId: string,
+  f: FixtureDto,
+  units: Units,
+): { text: string; from: string } | null {
   const inherited = inheritedValue(columnId, f);
   if (!inherited) return null;
   return { text: showValue(kind, inherited.value, units), from: inherited.from === "type" ? "from type" : "from trim" };

@@ -15,7 +15,19 @@ export type Choice = { id: number; name: string };
  * A table cell the signed-in role may edit. Validated as typed (the API's own field schema), saved
  * with the row's version; a stale version shows the other person's value instead of overwriting it.
  */
-export function EditableCell({ fixture, column, units, productionId, choices }: { fixture: FixtureDto; column: RigColumn; units: Units; productionId: number; choices?: Choice[] }) {
+export function EditableCell({
+  fixture,
+  column,
+  units,
+  productionId,
+  choices,
+}: {
+  fixture: FixtureDto;
+  column: RigColumn;
+  units: Units;
+  productionId: number;
+  choices?: Choice[];
+}) {
   const attr = column.attribute ?? column.id;
   const update = useUpdateRigFixture(productionId);
   const [editing, setEditing] = useState(false);
@@ -37,7 +49,12 @@ export function EditableCell({ fixture, column, units, productionId, choices }: 
   }, [editing]);
 
   async function save(next: unknown) {
-    const schema = (fixtureFieldsSchema.shape as Record<string, { safeParse: (v: unknown) => { success: boolean; error?: { issues: Array<{ message: string }> } } }>)[attr];
+    const schema = (
+      fixtureFieldsSchema.shape as Record<
+        string,
+        { safeParse: (v: unknown) => { success: boolean; error?: { issues: Array<{ message: string }> } } }
+      >
+    )[attr];
     const checked = schema.safeParse(next);
     if (!checked.success) {
       refocus.current = false;
@@ -50,13 +67,25 @@ export function EditableCell({ fixture, column, units, productionId, choices }: 
     } catch (err) {
       if (err instanceof ApiError && err.status === 409) {
         const current = (err.current as Record<string, unknown> | undefined)?.[attr];
-        setMessage({ tone: "conflict", text: `Someone else changed this first; it is now ${current === null || current === undefined || current === "" ? "empty" : showValue(column.kind, current, units)}. Your edit was not saved.` });
-      } else setMessage({ tone: "error", text: err instanceof ApiError ? (err.fieldErrors[attr]?.[0] ?? err.message) : "Could not save." });
+        setMessage({
+          tone: "conflict",
+          text: `Someone else changed this first; it is now ${current === null || current === undefined || current === "" ? "empty" : showValue(column.kind, current, units)}. Your edit was not saved.`,
+        });
+      } else
+        setMessage({
+          tone: "error",
+          text: err instanceof ApiError ? (err.fieldErrors[attr]?.[0] ?? err.message) : "Could not save.",
+        });
     }
   }
 
   const note = message ? (
-    <span id={noteId} role={message.tone === "error" ? "alert" : "status"} className={`block max-w-56 whitespace-normal text-xs ${message.tone === "error" ? "text-danger" : "text-caution"}`} data-testid="cell-message">
+    <span
+      id={noteId}
+      role={message.tone === "error" ? "alert" : "status"}
+      className={`block max-w-56 whitespace-normal text-xs ${message.tone === "error" ? "text-danger" : "text-caution"}`}
+      data-testid="cell-message"
+    >
       {message.text}
     </span>
   ) : null;
@@ -64,20 +93,38 @@ export function EditableCell({ fixture, column, units, productionId, choices }: 
   if (column.kind === "bool") {
     return (
       <label className="flex min-h-8 min-w-11 cursor-pointer items-center gap-1 px-2 pointer-coarse:min-h-11">
-        <input type="checkbox" data-cell-control aria-label={`${column.header}, ${unit}`} checked={Boolean(value)} disabled={update.isPending} onChange={(e) => save(e.target.checked)} />
+        <input
+          type="checkbox"
+          data-cell-control
+          aria-label={`${column.header}, ${unit}`}
+          checked={Boolean(value)}
+          disabled={update.isPending}
+          onChange={(e) => save(e.target.checked)}
+        />
         {note}
       </label>
     );
   }
   if (choices || column.id === "aim") {
-    const options = choices ?? [{ id: 0, name: "deck" }, { id: 1, name: "head" }];
+    const options = choices ?? [
+      { id: 0, name: "deck" },
+      { id: 1, name: "head" },
+    ];
     const current = choices ? (fixture as unknown as Record<string, number>)[attr] : value;
     return (
       <span>
-        <select data-cell-control aria-label={`${column.header}, ${unit}`} className="min-h-8 max-w-44 rounded border border-line/70 bg-transparent px-1 py-0.5 hover:border-field pointer-coarse:min-h-11 print:appearance-none print:border-0" value={String(current)} disabled={update.isPending}
-          onChange={(e) => save(choices ? Number(e.target.value) : e.target.value)}>
+        <select
+          data-cell-control
+          aria-label={`${column.header}, ${unit}`}
+          className="min-h-8 max-w-44 rounded border border-line/70 bg-transparent px-1 py-0.5 hover:border-field pointer-coarse:min-h-11 print:appearance-none print:border-0"
+          value={String(current)}
+          disabled={update.isPending}
+          onChange={(e) => save(choices ? Number(e.target.value) : e.target.value)}
+        >
           {options.map((o) => (
-            <option key={o.id} value={choices ? o.id : o.name}>{o.name}</option>
+            <option key={o.id} value={choices ? o.id : o.name}>
+              {o.name}
+            </option>
           ))}
         </select>
         {note}
@@ -89,9 +136,18 @@ export function EditableCell({ fixture, column, units, productionId, choices }: 
       <span>
         {/* The name carries the value shown ("Circuit 101, unit 1 on FOH Bridge 2, edit"); the button fills the
             cell, so a tap anywhere in it edits, with a faint underline that says "editable" without hover. */}
-        <button ref={cellButton} type="button" data-cell-control aria-label={`${column.header} ${shown || "empty"}, ${unit}, edit`}
+        <button
+          ref={cellButton}
+          type="button"
+          data-cell-control
+          aria-label={`${column.header} ${shown || "empty"}, ${unit}, edit`}
           className="min-h-8 w-full min-w-11 rounded px-2 text-left underline decoration-field/60 decoration-dotted underline-offset-4 hover:bg-raised pointer-coarse:min-h-11 print:no-underline"
-          onClick={() => { setText(editText(column.kind, value, units)); setEditing(true); setMessage(null); }}>
+          onClick={() => {
+            setText(editText(column.kind, value, units));
+            setEditing(true);
+            setMessage(null);
+          }}
+        >
           {shown || <EmptyOrInherited column={column} fixture={fixture} units={units} />}
         </button>
         {note}
@@ -109,9 +165,17 @@ export function EditableCell({ fixture, column, units, productionId, choices }: 
         value={text}
         onChange={(e) => setText(e.target.value)}
         onKeyDown={(e) => {
-          if (e.key === "Escape") { refocus.current = true; setEditing(false); setMessage(null); }
+          if (e.key === "Escape") {
+            refocus.current = true;
+            setEditing(false);
+            setMessage(null);
+          }
           // preventDefault: otherwise the Enter's keypress lands on the cell's button, now focused again, and reopens the editor.
-          if (e.key === "Enter") { e.preventDefault(); refocus.current = true; commit(); }
+          if (e.key === "Enter") {
+            e.preventDefault();
+            refocus.current = true;
+            commit();
+          }
         }}
         onBlur={() => commit()}
       />

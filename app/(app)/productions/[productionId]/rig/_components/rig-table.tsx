@@ -2,8 +2,19 @@
 
 import { Fragment, type KeyboardEvent, useMemo, useState } from "react";
 import {
-  flexRender, getCoreRowModel, getExpandedRowModel, getFilteredRowModel, getGroupedRowModel, getSortedRowModel, useReactTable,
-  type ColumnDef, type GroupingState, type Row, type RowSelectionState, type SortingState, type VisibilityState,
+  flexRender,
+  getCoreRowModel,
+  getExpandedRowModel,
+  getFilteredRowModel,
+  getGroupedRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type ColumnDef,
+  type GroupingState,
+  type Row,
+  type RowSelectionState,
+  type SortingState,
+  type VisibilityState,
 } from "@tanstack/react-table";
 import type { FixtureDto } from "@/lib/dto/fixture";
 import { RIG_COLUMNS, headerWithUnit, type Units } from "@/lib/rig/columns";
@@ -34,7 +45,17 @@ type Props = {
 };
 
 /** One table of every fixture: stored fields beside computed focus values, sort, filter, group and inline edit. */
-export function RigTable({ fixtures, units, productionId, editable, selectable, choices, typeWeights, state, onState }: Props) {
+export function RigTable({
+  fixtures,
+  units,
+  productionId,
+  editable,
+  selectable,
+  choices,
+  typeWeights,
+  state,
+  onState,
+}: Props) {
   const [collapsed, setCollapsed] = useState<Set<string>>(new Set());
   const bodies = useMemo(() => cellCounts(fixtures), [fixtures]);
   const hangOrder = useMemo(() => {
@@ -58,9 +79,19 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
       getGroupingValue: (f) => String(c.value(f) ?? "—"),
       cell: ({ row }) =>
         editable.includes(c.id) ? (
-          <EditableCell fixture={row.original} column={c} units={units} productionId={productionId} choices={c.id === "position" ? choices.position : c.id === "type" ? choices.type : undefined} />
+          <EditableCell
+            fixture={row.original}
+            column={c}
+            units={units}
+            productionId={productionId}
+            choices={c.id === "position" ? choices.position : c.id === "type" ? choices.type : undefined}
+          />
         ) : (
-          <span className={`block px-2 ${c.importKey ? "" : "text-muted"}`}>{showValue(c.kind, c.value(row.original), units) || <EmptyOrInherited column={c} fixture={row.original} units={units} dash={false} />}</span>
+          <span className={`block px-2 ${c.importKey ? "" : "text-muted"}`}>
+            {showValue(c.kind, c.value(row.original), units) || (
+              <EmptyOrInherited column={c} fixture={row.original} units={units} dash={false} />
+            )}
+          </span>
         ),
       meta: { computed: !c.importKey },
     }));
@@ -71,13 +102,24 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
         enableHiding: false,
         header: ({ table }) => (
           <label className={TAP_TARGET}>
-            <input type="checkbox" aria-label="Select every shown fixture" checked={table.getIsAllRowsSelected()} onChange={table.getToggleAllRowsSelectedHandler()} />
+            <input
+              type="checkbox"
+              aria-label="Select every shown fixture"
+              checked={table.getIsAllRowsSelected()}
+              onChange={table.getToggleAllRowsSelectedHandler()}
+            />
           </label>
         ),
         cell: ({ row }) =>
           row.getCanSelect() ? (
             <label className={TAP_TARGET}>
-              <input type="checkbox" data-cell-control aria-label={`Select unit ${row.original.unitNumber} on ${row.original.positionName}`} checked={row.getIsSelected()} onChange={row.getToggleSelectedHandler()} />
+              <input
+                type="checkbox"
+                data-cell-control
+                aria-label={`Select unit ${row.original.unitNumber} on ${row.original.positionName}`}
+                checked={row.getIsSelected()}
+                onChange={row.getToggleSelectedHandler()}
+              />
             </label>
           ) : null,
       });
@@ -89,13 +131,26 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
     data: fixtures,
     columns,
     getRowId: (f) => String(f.id),
-    state: { sorting: state.sorting, grouping: state.grouping, columnVisibility: state.visibility, globalFilter: state.filter, rowSelection: state.selection, expanded: true },
+    state: {
+      sorting: state.sorting,
+      grouping: state.grouping,
+      columnVisibility: state.visibility,
+      globalFilter: state.filter,
+      rowSelection: state.selection,
+      expanded: true,
+    },
     onSortingChange: (u) => onState({ sorting: typeof u === "function" ? u(state.sorting) : u }),
     onRowSelectionChange: (u) => onState({ selection: typeof u === "function" ? u(state.selection) : u }),
     onGlobalFilterChange: (v) => onState({ filter: String(v ?? "") }),
     globalFilterFn: (row, _id, filter: string) => {
       const needle = filter.toLowerCase();
-      return RIG_COLUMNS.some((c) => state.visibility[c.id] !== false && String(showValue(c.kind, c.value(row.original), units)).toLowerCase().includes(needle));
+      return RIG_COLUMNS.some(
+        (c) =>
+          state.visibility[c.id] !== false &&
+          String(showValue(c.kind, c.value(row.original), units))
+            .toLowerCase()
+            .includes(needle),
+      );
     },
     groupedColumnMode: false,
     enableMultiSort: true,
@@ -110,10 +165,18 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
   const visibleCount = table.getVisibleLeafColumns().length;
   const shownBodies = new Set<string>(); // bodies whose heading row is already drawn in this render
   const renderRow = (row: Row<FixtureDto>, isCell = false) => (
-    <tr key={row.id} data-testid="rig-row" data-cell={isCell ? row.original.cell ?? "" : undefined}
-      className={`border-b border-line/60 align-middle hover:bg-raised/50 print:break-inside-avoid ${row.getIsSelected() ? "bg-accent/10" : ""}`}>
+    <tr
+      key={row.id}
+      data-testid="rig-row"
+      data-cell={isCell ? (row.original.cell ?? "") : undefined}
+      className={`border-b border-line/60 align-middle hover:bg-raised/50 print:break-inside-avoid ${row.getIsSelected() ? "bg-accent/10" : ""}`}
+    >
       {row.getVisibleCells().map((cell, i) => (
-        <td key={cell.id} tabIndex={-1} className={`whitespace-nowrap p-0 ${stickyCell(cell.column.id, selectable, "bg-surface")} ${cell.column.id === "select" ? "print:hidden" : ""} ${isCell && i === 0 ? "border-l-4 border-l-accent/40" : ""}`}>
+        <td
+          key={cell.id}
+          tabIndex={-1}
+          className={`whitespace-nowrap p-0 ${stickyCell(cell.column.id, selectable, "bg-surface")} ${cell.column.id === "select" ? "print:hidden" : ""} ${isCell && i === 0 ? "border-l-4 border-l-accent/40" : ""}`}
+        >
           {flexRender(cell.column.columnDef.cell, cell.getContext())}
         </td>
       ))}
@@ -122,7 +185,11 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
   return (
     <div className="overflow-x-auto rounded-lg border border-line bg-surface print:overflow-visible print:border-0">
       {/* biome-ignore lint/a11y/noNoninteractiveElementInteractions: arrow keys move between the cells' own controls (a grid's keys) */}
-      <table className="w-full border-collapse text-sm print:text-[9pt]" data-testid="rig-table" onKeyDown={moveBetweenCells}>
+      <table
+        className="w-full border-collapse text-sm print:text-[9pt]"
+        data-testid="rig-table"
+        onKeyDown={moveBetweenCells}
+      >
         <thead className="sticky top-0 bg-raised print:static print:bg-transparent">
           {table.getHeaderGroups().map((hg) => (
             <tr key={hg.id}>
@@ -130,12 +197,23 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
                 const sorted = h.column.getIsSorted();
                 const computed = (h.column.columnDef.meta as { computed?: boolean } | undefined)?.computed;
                 return (
-                  <th key={h.id} scope="col" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}
-                    className={`whitespace-nowrap border-b border-line px-2 py-1.5 text-left text-xs font-semibold ${stickyCell(h.id, selectable, "bg-raised")} ${computed ? "italic text-muted" : ""} ${h.id === "select" ? "print:hidden" : ""}`}>
+                  <th
+                    key={h.id}
+                    scope="col"
+                    aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}
+                    className={`whitespace-nowrap border-b border-line px-2 py-1.5 text-left text-xs font-semibold ${stickyCell(h.id, selectable, "bg-raised")} ${computed ? "italic text-muted" : ""} ${h.id === "select" ? "print:hidden" : ""}`}
+                  >
                     {h.column.getCanSort() ? (
-                      <button type="button" className="inline-flex min-h-8 items-center gap-1 hover:text-accent pointer-coarse:min-h-11 pointer-coarse:min-w-11" onClick={h.column.getToggleSortingHandler()} title="Click to sort; shift-click to add a second sort">
+                      <button
+                        type="button"
+                        className="inline-flex min-h-8 items-center gap-1 hover:text-accent pointer-coarse:min-h-11 pointer-coarse:min-w-11"
+                        onClick={h.column.getToggleSortingHandler()}
+                        title="Click to sort; shift-click to add a second sort"
+                      >
                         {flexRender(h.column.columnDef.header, h.getContext())}
-                        <span aria-hidden className="print:hidden">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : ""}</span>
+                        <span aria-hidden className="print:hidden">
+                          {sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : ""}
+                        </span>
                       </button>
                     ) : (
                       flexRender(h.column.columnDef.header, h.getContext())
@@ -150,8 +228,15 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
           {table.getRowModel().rows.map((row) =>
             row.getIsGrouped() ? (
               <tr key={row.id} className="bg-canvas print:break-after-avoid">
-                <th colSpan={visibleCount} scope="colgroup" className="border-b border-line px-2 pb-1 pt-3 text-left text-sm font-semibold">
-                  {String(row.groupingValue)} <span className="font-normal text-muted">· {row.subRows.length} unit{row.subRows.length === 1 ? "" : "s"}</span>
+                <th
+                  colSpan={visibleCount}
+                  scope="colgroup"
+                  className="border-b border-line px-2 pb-1 pt-3 text-left text-sm font-semibold"
+                >
+                  {String(row.groupingValue)}{" "}
+                  <span className="font-normal text-muted">
+                    · {row.subRows.length} unit{row.subRows.length === 1 ? "" : "s"}
+                  </span>
                 </th>
               </tr>
             ) : (
@@ -163,17 +248,33 @@ export function RigTable({ fixtures, units, productionId, editable, selectable, 
                   const first = !shownBodies.has(key!);
                   shownBodies.add(key!);
                   const open = !collapsed.has(key!);
-                  const toggle = () => setCollapsed((c) => { const n = new Set(c); if (n.has(key!)) n.delete(key!); else n.add(key!); return n; });
+                  const toggle = () =>
+                    setCollapsed((c) => {
+                      const n = new Set(c);
+                      if (n.has(key!)) n.delete(key!);
+                      else n.add(key!);
+                      return n;
+                    });
                   return (
                     <>
                       {first ? (
                         <tr className="border-b border-line/60 bg-raised/40" data-testid="rig-body">
                           <td colSpan={visibleCount} className="px-2 py-1 text-sm">
-                            <button type="button" aria-expanded={open} onClick={toggle} className="inline-flex min-h-8 items-center gap-1 font-semibold pointer-coarse:min-h-11 hover:text-accent print:pointer-events-none">
-                              <span aria-hidden className="inline-block w-3 print:hidden">{open ? "▾" : "▸"}</span>
+                            <button
+                              type="button"
+                              aria-expanded={open}
+                              onClick={toggle}
+                              className="inline-flex min-h-8 items-center gap-1 font-semibold pointer-coarse:min-h-11 hover:text-accent print:pointer-events-none"
+                            >
+                              <span aria-hidden className="inline-block w-3 print:hidden">
+                                {open ? "▾" : "▸"}
+                              </span>
                               Unit {row.original.unitNumber} on {row.original.positionName} · {row.original.typeName}
                             </button>{" "}
-                            <span className="text-muted">— one body of {cells} cells, {formatKg(typeWeights.get(row.original.fixtureTypeId))} to hang (each cell has its own channel and circuit below)</span>
+                            <span className="text-muted">
+                              — one body of {cells} cells, {formatKg(typeWeights.get(row.original.fixtureTypeId))} to
+                              hang (each cell has its own channel and circuit below)
+                            </span>
                           </td>
                         </tr>
                       ) : null}

@@ -52,7 +52,10 @@ export function RigWorkspace(props: Props) {
   const [view, setView] = useState<RigViewId>(props.initialView);
   const [state, setState] = useState<TableState>(() => stateFor(props.initialView));
   const [panel, setPanel] = useState<"import" | "types" | "accessories" | null>(null);
-  const choices = useMemo(() => ({ position: props.positions, type: types.map((t) => ({ id: t.id, name: t.name })) }), [props.positions, types]);
+  const choices = useMemo(
+    () => ({ position: props.positions, type: types.map((t) => ({ id: t.id, name: t.name })) }),
+    [props.positions, types],
+  );
 
   function chooseView(id: RigViewId) {
     setView(id);
@@ -63,7 +66,9 @@ export function RigWorkspace(props: Props) {
   const visibleColumns = RIG_COLUMNS.filter((c) => state.visibility[c.id] !== false).map((c) => c.id);
   const exportHref = (format: "csv" | "xlsx", which: string = view) =>
     `/api/productions/${productionId}/export?view=${which}&format=${format}${which === view && view !== "stock" ? `&columns=${visibleColumns.join(",")}` : ""}`;
-  const selectedIds = Object.keys(state.selection).filter((k) => state.selection[k]).map(Number);
+  const selectedIds = Object.keys(state.selection)
+    .filter((k) => state.selection[k])
+    .map(Number);
   const bulkAllowed = rights.canPlot || rights.canElectrics;
   const current = VIEW_BY_ID.get(view)!;
 
@@ -80,11 +85,18 @@ export function RigWorkspace(props: Props) {
 
   return (
     <main className="flex flex-col gap-3 px-4 py-4 print:p-0">
-      <h1 className="hidden text-base font-semibold print:block">{props.productionName} — rig, {current.label.toLowerCase()}</h1>
+      <h1 className="hidden text-base font-semibold print:block">
+        {props.productionName} — rig, {current.label.toLowerCase()}
+      </h1>
       <nav aria-label="Rig views" className="flex flex-wrap gap-1 print:hidden">
         {RIG_VIEWS.map((v) => (
-          <button key={v.id} type="button" aria-pressed={v.id === view} onClick={() => chooseView(v.id)}
-            className={`min-h-10 rounded-md border px-3 py-1.5 text-sm pointer-coarse:min-h-11 ${v.id === view ? "border-accent bg-accent text-accent-ink" : "border-line bg-surface hover:bg-raised"}`}>
+          <button
+            key={v.id}
+            type="button"
+            aria-pressed={v.id === view}
+            onClick={() => chooseView(v.id)}
+            className={`min-h-10 rounded-md border px-3 py-1.5 text-sm pointer-coarse:min-h-11 ${v.id === view ? "border-accent bg-accent text-accent-ink" : "border-line bg-surface hover:bg-raised"}`}
+          >
             {v.label}
           </button>
         ))}
@@ -94,41 +106,126 @@ export function RigWorkspace(props: Props) {
       <div className="flex flex-wrap items-center gap-2 print:hidden">
         {view !== "stock" ? (
           <>
-            <input type="search" aria-label="Filter fixtures" placeholder="Filter: position, colour, purpose …" value={state.filter}
-              onChange={(e) => setState((s) => ({ ...s, filter: e.target.value }))} className="min-h-10 w-64 rounded-md border border-line bg-surface px-3 text-sm" />
+            <input
+              type="search"
+              aria-label="Filter fixtures"
+              placeholder="Filter: position, colour, purpose …"
+              value={state.filter}
+              onChange={(e) => setState((s) => ({ ...s, filter: e.target.value }))}
+              className="min-h-10 w-64 rounded-md border border-line bg-surface px-3 text-sm"
+            />
             <label className="flex items-center gap-1 text-sm">
-              <input type="checkbox" checked={state.grouping.length > 0} onChange={(e) => setState((s) => ({ ...s, grouping: e.target.checked ? ["position"] : [] }))} />
+              <input
+                type="checkbox"
+                checked={state.grouping.length > 0}
+                onChange={(e) => setState((s) => ({ ...s, grouping: e.target.checked ? ["position"] : [] }))}
+              />
               Group by position
             </label>
-            <ColumnChooser visibility={state.visibility} onChange={(visibility) => setState((s) => ({ ...s, visibility }))} />
+            <ColumnChooser
+              visibility={state.visibility}
+              onChange={(visibility) => setState((s) => ({ ...s, visibility }))}
+            />
           </>
         ) : null}
         <span className="grow" />
-        <Button variant="secondary" onClick={() => window.print()}>Print</Button>
-        <a className="inline-flex min-h-10 items-center rounded-md border border-line bg-surface px-3 text-sm hover:bg-raised" href={exportHref("csv")} download>Export CSV</a>
-        <a className="inline-flex min-h-10 items-center rounded-md border border-line bg-surface px-3 text-sm hover:bg-raised" href={exportHref("xlsx")} download data-testid="export-xlsx">Export .xlsx</a>
-        <a className="inline-flex min-h-10 items-center rounded-md border border-line bg-surface px-3 text-sm hover:bg-raised" href={exportHref("xlsx", "workbook")} download>Whole workbook</a>
-        <Button variant="secondary" aria-expanded={panel === "types"} onClick={(e) => togglePanel("types", e.currentTarget)}>Fixture types</Button>
-        <Button variant="secondary" aria-expanded={panel === "accessories"} onClick={(e) => togglePanel("accessories", e.currentTarget)}>Accessories</Button>
-        {rights.canImport ? <Button aria-expanded={panel === "import"} onClick={(e) => togglePanel("import", e.currentTarget)}>Import a file</Button> : null}
+        <Button variant="secondary" onClick={() => window.print()}>
+          Print
+        </Button>
+        <a
+          className="inline-flex min-h-10 items-center rounded-md border border-line bg-surface px-3 text-sm hover:bg-raised"
+          href={exportHref("csv")}
+          download
+        >
+          Export CSV
+        </a>
+        <a
+          className="inline-flex min-h-10 items-center rounded-md border border-line bg-surface px-3 text-sm hover:bg-raised"
+          href={exportHref("xlsx")}
+          download
+          data-testid="export-xlsx"
+        >
+          Export .xlsx
+        </a>
+        <a
+          className="inline-flex min-h-10 items-center rounded-md border border-line bg-surface px-3 text-sm hover:bg-raised"
+          href={exportHref("xlsx", "workbook")}
+          download
+        >
+          Whole workbook
+        </a>
+        <Button
+          variant="secondary"
+          aria-expanded={panel === "types"}
+          onClick={(e) => togglePanel("types", e.currentTarget)}
+        >
+          Fixture types
+        </Button>
+        <Button
+          variant="secondary"
+          aria-expanded={panel === "accessories"}
+          onClick={(e) => togglePanel("accessories", e.currentTarget)}
+        >
+          Accessories
+        </Button>
+        {rights.canImport ? (
+          <Button aria-expanded={panel === "import"} onClick={(e) => togglePanel("import", e.currentTarget)}>
+            Import a file
+          </Button>
+        ) : null}
       </div>
 
       {panel === "import" ? <ImportPanel productionId={productionId} units={units} onClose={closePanel} /> : null}
-      {panel === "accessories" ? <AccessoriesPanel productionId={productionId} fixtures={fixtures} accessories={accessories} canEdit={rights.canElectrics} onClose={closePanel} /> : null}
-      {panel === "types" ? <TypesPanel productionId={productionId} types={types} canAdd={rights.canPlot} editableFields={rights.typeFields} units={units} onClose={closePanel} /> : null}
+      {panel === "accessories" ? (
+        <AccessoriesPanel
+          productionId={productionId}
+          fixtures={fixtures}
+          accessories={accessories}
+          canEdit={rights.canElectrics}
+          onClose={closePanel}
+        />
+      ) : null}
+      {panel === "types" ? (
+        <TypesPanel
+          productionId={productionId}
+          types={types}
+          canAdd={rights.canPlot}
+          editableFields={rights.typeFields}
+          units={units}
+          onClose={closePanel}
+        />
+      ) : null}
 
       {view === "stock" ? (
         <StockPanel fixtures={fixtures} types={types} accessories={accessories} />
       ) : (
         <>
           {bulkAllowed && selectedIds.length ? (
-            <BulkBar productionId={productionId} fixtures={fixtures} selectedIds={selectedIds} canPlot={rights.canPlot} canElectrics={rights.canElectrics} onDone={() => setState((s) => ({ ...s, selection: {} }))} />
+            <BulkBar
+              productionId={productionId}
+              fixtures={fixtures}
+              selectedIds={selectedIds}
+              canPlot={rights.canPlot}
+              canElectrics={rights.canElectrics}
+              onDone={() => setState((s) => ({ ...s, selection: {} }))}
+            />
           ) : null}
           <p className="text-xs text-muted print:hidden">
-            {fixtures.length} fixtures. Lengths in {units === "metric" ? "metres" : "feet and inches"}; grey italic columns are computed from the beam model.
+            {fixtures.length} fixtures. Lengths in {units === "metric" ? "metres" : "feet and inches"}; grey italic
+            columns are computed from the beam model.
             {rights.editable.length ? " Click a value to change it." : " Your role can read the rig but not change it."}
           </p>
-          <RigTable fixtures={fixtures} units={units} typeWeights={typeWeights} productionId={productionId} editable={rights.editable} selectable={bulkAllowed} choices={choices} state={state} onState={(p) => setState((s) => ({ ...s, ...p }))} />
+          <RigTable
+            fixtures={fixtures}
+            units={units}
+            typeWeights={typeWeights}
+            productionId={productionId}
+            editable={rights.editable}
+            selectable={bulkAllowed}
+            choices={choices}
+            state={state}
+            onState={(p) => setState((s) => ({ ...s, ...p }))}
+          />
         </>
       )}
     </main>

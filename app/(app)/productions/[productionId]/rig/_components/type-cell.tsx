@@ -11,7 +11,19 @@ import { useUpdateFixtureType } from "@/hooks/use-rig";
  * One figure of a fixture type: plain text for a role that may not change it, else a button that opens
  * an input. Checked as typed; saved with the type's version; a stale version shows the current figure.
  */
-export function TypeCell({ productionId, type, column, units, editable }: { productionId: number; type: FixtureTypeDto; column: TypeColumn; units: Units; editable: boolean }) {
+export function TypeCell({
+  productionId,
+  type,
+  column,
+  units,
+  editable,
+}: {
+  productionId: number;
+  type: FixtureTypeDto;
+  column: TypeColumn;
+  units: Units;
+  editable: boolean;
+}) {
   const update = useUpdateFixtureType(productionId);
   const [editing, setEditing] = useState(false);
   const [text, setText] = useState("");
@@ -21,7 +33,11 @@ export function TypeCell({ productionId, type, column, units, editable }: { prod
   const label = `${column.header} of ${type.name}`;
 
   const note = message ? (
-    <span role={message.tone === "error" ? "alert" : "status"} className={`block max-w-56 whitespace-normal text-xs ${message.tone === "error" ? "text-danger" : "text-caution"}`} data-testid="type-cell-message">
+    <span
+      role={message.tone === "error" ? "alert" : "status"}
+      className={`block max-w-56 whitespace-normal text-xs ${message.tone === "error" ? "text-danger" : "text-caution"}`}
+      data-testid="type-cell-message"
+    >
       {message.text}
     </span>
   ) : null;
@@ -38,8 +54,15 @@ export function TypeCell({ productionId, type, column, units, editable }: { prod
       setMessage(null);
     } catch (err) {
       if (err instanceof ApiError && err.status === 409 && err.current) {
-        setMessage({ tone: "conflict", text: `Someone else changed this type first; it is now ${typeCellText(err.current as FixtureTypeDto, column, units) || "empty"}. Your edit was not saved.` });
-      } else setMessage({ tone: "error", text: err instanceof ApiError ? (Object.values(err.fieldErrors)[0]?.[0] ?? err.message) : "Could not save." });
+        setMessage({
+          tone: "conflict",
+          text: `Someone else changed this type first; it is now ${typeCellText(err.current as FixtureTypeDto, column, units) || "empty"}. Your edit was not saved.`,
+        });
+      } else
+        setMessage({
+          tone: "error",
+          text: err instanceof ApiError ? (Object.values(err.fieldErrors)[0]?.[0] ?? err.message) : "Could not save.",
+        });
     }
   }
 
@@ -47,7 +70,17 @@ export function TypeCell({ productionId, type, column, units, editable }: { prod
   if (!editing) {
     return (
       <span>
-        <button type="button" aria-label={`Edit ${label}`} className="min-h-6 w-full min-w-10 rounded px-1 text-left hover:bg-raised" onClick={() => { closing.current = false; setText(shown); setEditing(true); setMessage(null); }}>
+        <button
+          type="button"
+          aria-label={`Edit ${label}`}
+          className="min-h-6 w-full min-w-10 rounded px-1 text-left hover:bg-raised"
+          onClick={() => {
+            closing.current = false;
+            setText(shown);
+            setEditing(true);
+            setMessage(null);
+          }}
+        >
           {shown || <span className="text-muted">–</span>}
         </button>
         {note}
@@ -56,13 +89,22 @@ export function TypeCell({ productionId, type, column, units, editable }: { prod
   }
   return (
     <span>
-      <input autoFocus aria-label={label} aria-invalid={message?.tone === "error" || undefined}
+      <input
+        autoFocus
+        aria-label={label}
+        aria-invalid={message?.tone === "error" || undefined}
         className="w-full min-w-16 rounded border border-accent bg-surface px-1 aria-invalid:border-danger"
-        value={text} onChange={(e) => setText(e.target.value)} onBlur={() => void commit()}
+        value={text}
+        onChange={(e) => setText(e.target.value)}
+        onBlur={() => void commit()}
         onKeyDown={(e) => {
-          if (e.key === "Escape") { setEditing(false); setMessage(null); }
+          if (e.key === "Escape") {
+            setEditing(false);
+            setMessage(null);
+          }
           if (e.key === "Enter") void commit();
-        }} />
+        }}
+      />
       {note}
     </span>
   );

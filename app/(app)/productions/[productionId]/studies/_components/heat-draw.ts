@@ -8,7 +8,12 @@ import { contourSegments } from "@/lib/studies/contours";
 import { heatPixels } from "@/lib/studies/heat-colours";
 
 /** One pixel a cell, made once per grid; the canvas scales it to the view. */
-export function heatImage(g: GridCells, values: ArrayLike<number>, scaleMax: number, mode: "light" | "difference"): HTMLCanvasElement {
+export function heatImage(
+  g: GridCells,
+  values: ArrayLike<number>,
+  scaleMax: number,
+  mode: "light" | "difference",
+): HTMLCanvasElement {
   const c = document.createElement("canvas");
   c.width = g.cols;
   c.height = g.rows;
@@ -27,7 +32,14 @@ export function drawHeat(ctx: Ctx, v: View, g: GridCells, img: HTMLCanvasElement
   ctx.restore();
 }
 
-export function drawContours(ctx: Ctx, v: View, g: GridCells, values: ArrayLike<number>, levels: number[], pal: PlotPalette) {
+export function drawContours(
+  ctx: Ctx,
+  v: View,
+  g: GridCells,
+  values: ArrayLike<number>,
+  levels: number[],
+  pal: PlotPalette,
+) {
   ctx.save();
   ctx.strokeStyle = pal.dark ? "rgba(255,255,255,0.75)" : "rgba(20,20,20,0.7)";
   ctx.lineWidth = 1;
@@ -44,7 +56,13 @@ export function drawContours(ctx: Ctx, v: View, g: GridCells, values: ArrayLike<
   ctx.restore();
 }
 
-export function drawUnits(ctx: Ctx, v: View, units: Array<{ source: Point }>, pal: PlotPalette, highlight: ReadonlySet<number> = new Set()) {
+export function drawUnits(
+  ctx: Ctx,
+  v: View,
+  units: Array<{ source: Point }>,
+  pal: PlotPalette,
+  highlight: ReadonlySet<number> = new Set(),
+) {
   ctx.save();
   units.forEach((u, k) => {
     const s = planToScreen(v, u.source);

@@ -17,14 +17,25 @@ export function parseChannelLevels(text: string): { levels: Record<string, numbe
     const from = Number(m[1]);
     const to = m[2] ? Number(m[2]) : from;
     const level = /^f/i.test(m[3]) ? 100 : Number(m[3]);
-    if (from < 1 || to < from || to - from > 2000) return { error: `"${item}": channels run from 1 upward, low to high.` };
+    if (from < 1 || to < from || to - from > 2000)
+      return { error: `"${item}": channels run from 1 upward, low to high.` };
     if (level > 100) return { error: `"${item}": a level is 0 to 100.` };
     for (let ch = from; ch <= to; ch++) levels[String(ch)] = level;
   }
   return { levels };
 }
 
-export function LightPicker({ label, cues, value, onChange }: { label: string; cues: CueChoice[]; value: LightSource; onChange: (s: LightSource) => void }) {
+export function LightPicker({
+  label,
+  cues,
+  value,
+  onChange,
+}: {
+  label: string;
+  cues: CueChoice[];
+  value: LightSource;
+  onChange: (s: LightSource) => void;
+}) {
   const id = useId();
   const [text, setText] = useState("");
   const [error, setError] = useState<string | null>(null);

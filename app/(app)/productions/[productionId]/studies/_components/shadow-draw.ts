@@ -5,7 +5,13 @@ import { planPath } from "@/components/plot/plan-paths";
 import { planToScreen, type View } from "@/lib/plot/view";
 import type { OccluderShadows, PerformerMarkDto, ScenicPanelDto } from "@/lib/dto/studies";
 
-export function drawShadows(ctx: Ctx, v: View, occluders: OccluderShadows[], pal: PlotPalette, selectedFixture: number | null) {
+export function drawShadows(
+  ctx: Ctx,
+  v: View,
+  occluders: OccluderShadows[],
+  pal: PlotPalette,
+  selectedFixture: number | null,
+) {
   ctx.save();
   for (const o of occluders) {
     for (const s of o.shadows) {
@@ -27,7 +33,14 @@ export function drawShadows(ctx: Ctx, v: View, occluders: OccluderShadows[], pal
   ctx.restore();
 }
 
-export function drawOccluders(ctx: Ctx, v: View, performers: PerformerMarkDto[], panels: ScenicPanelDto[], pal: PlotPalette, active: number | null) {
+export function drawOccluders(
+  ctx: Ctx,
+  v: View,
+  performers: PerformerMarkDto[],
+  panels: ScenicPanelDto[],
+  pal: PlotPalette,
+  active: number | null,
+) {
   ctx.save();
   ctx.font = "12px 'IBM Plex Sans', system-ui, sans-serif";
   ctx.textAlign = "left";

@@ -13,7 +13,10 @@ import { drawOccluders, drawShadows } from "./shadow-draw";
 import { LightPicker } from "./light-picker";
 import type { LightSource, StudiesProps } from "./types";
 
-const StudyCanvas = dynamic(() => import("./study-canvas").then((m) => m.StudyCanvas), { ssr: false, loading: () => <div className="h-[520px] animate-pulse rounded-md bg-raised" /> });
+const StudyCanvas = dynamic(() => import("./study-canvas").then((m) => m.StudyCanvas), {
+  ssr: false,
+  loading: () => <div className="h-[520px] animate-pulse rounded-md bg-raised" />,
+});
 
 type Reply = ShadowResult & { stateLabel: string; performers: PerformerMarkDto[]; panels: ScenicPanelDto[] };
 /** Fewer sides and lens samples while a mark is dragged: the preview stays smooth, the server's answer follows. */
@@ -21,11 +24,14 @@ const LIVE = { sides: 12, lensSamples: 8 };
 
 export function ShadowStudy(p: StudiesProps) {
   const qc = useQueryClient();
-  const [source, setSource] = useState<LightSource>(p.cues[0] ? { kind: "cue", cueId: p.cues[0].id } : { kind: "full" });
+  const [source, setSource] = useState<LightSource>(
+    p.cues[0] ? { kind: "cue", cueId: p.cues[0].id } : { kind: "full" },
+  );
   const key = ["productions", p.productionId, "studies", "shadows", source];
   const q = useQuery({
     queryKey: key,
-    queryFn: () => apiFetch<Reply>(`/api/productions/${p.productionId}/studies/shadows`, { method: "POST", json: { source } }),
+    queryFn: () =>
+      apiFetch<Reply>(`/api/productions/${p.productionId}/studies/shadows`, { method: "POST", json: { source } }),
     placeholderData: keepPreviousData,
   });
   const data = q.data;
@@ -35,13 +41,23 @@ export function ShadowStudy(p: StudiesProps) {
   const [message, setMessage] = useState<string | null>(null);
   const grabbed = useRef<number | null>(null);
 
-  const performers = useMemo(() => (data?.performers ?? []).map((m) => (drag && m.id === drag.id ? { ...m, x: drag.at.x, y: drag.at.y } : m)), [data, drag]);
+  const performers = useMemo(
+    () => (data?.performers ?? []).map((m) => (drag && m.id === drag.id ? { ...m, x: drag.at.x, y: drag.at.y } : m)),
+    [data, drag],
+  );
   const occluders: OccluderShadows[] = useMemo(() => {
     if (!data) return [];
     if (!drag) return data.occluders;
     // Live: only the dragged performer is recomputed here, with lib/optics, as the pointer moves.
     const moved = performers.filter((m) => m.id === drag.id);
-    const live = shadowStudy({ lights: data.lights, performers: moved, panels: [], backWallY: data.backWallY, deckHeight: data.deckHeight, outlines: LIVE });
+    const live = shadowStudy({
+      lights: data.lights,
+      performers: moved,
+      panels: [],
+      backWallY: data.backWallY,
+      deckHeight: data.deckHeight,
+      outlines: LIVE,
+    });
     return data.occluders.map((o) => (o.kind === "performer" && o.id === drag.id ? live[0] : o));
   }, [data, drag, performers]);
   const active = activeId ?? performers[0]?.id ?? null;
@@ -52,10 +68,19 @@ export function ShadowStudy(p: StudiesProps) {
     const mark = data?.performers.find((m) => m.id === id);
     if (!mark) return;
     try {
-      await apiFetch(`/api/productions/${p.productionId}/performer-marks/${id}`, { method: "PATCH", json: { version: mark.version, ...changes } });
+      await apiFetch(`/api/productions/${p.productionId}/performer-marks/${id}`, {
+        method: "PATCH",
+        json: { version: mark.version, ...changes },
+      });
       setMessage(null);
     } catch (err) {
-      setMessage(err instanceof ApiError && err.status === 409 ? "Someone else changed this mark meanwhile; showing their version." : err instanceof Error ? err.message : "Could not save the mark.");
+      setMessage(
+        err instanceof ApiError && err.status === 409
+          ? "Someone else changed this mark meanwhile; showing their version."
+          : err instanceof Error
+            ? err.message
+            : "Could not save the mark.",
+      );
     }
     await refresh();
     setDrag(null);
@@ -64,7 +89,10 @@ export function ShadowStudy(p: StudiesProps) {
   const addPerformer = async () => {
     const n = (data?.performers.length ?? 0) + 1;
     try {
-      await apiFetch(`/api/productions/${p.productionId}/performer-marks`, { method: "POST", json: { name: `Performer ${n}`, x: 0, y: Math.min(3, p.stage.stageDepth / 2) } });
+      await apiFetch(`/api/productions/${p.productionId}/performer-marks`, {
+        method: "POST",
+        json: { name: `Performer ${n}`, x: 0, y: Math.min(3, p.stage.stageDepth / 2) },
+      });
     } catch (err) {
       setMessage(err instanceof Error ? err.message : "Could not add the performer.");
     }
@@ -90,13 +118,32 @@ export function ShadowStudy(p: StudiesProps) {
     <section className="flex flex-col gap-3" aria-label="Shadow study">
       <div className="flex flex-wrap items-end gap-3 rounded-md border border-line bg-surface p-3">
         <LightPicker label="Light" cues={p.cues} value={source} onChange={setSource} />
-        {p.canRun && <Button variant="secondary" onClick={addPerformer}>Add a performer</Button>}
+        {p.canRun && (
+          <Button variant="secondary" onClick={addPerformer}>
+            Add a performer
+          </Button>
+        )}
         {p.canRun && <PanelForm productionId={p.productionId} onSaved={refresh} />}
       </div>
-      {message && <p role="alert" className="text-sm text-danger">{message}</p>}
-      {data?.warnings.map((w) => <p key={w} className="text-sm text-caution">{w}</p>)}
-      <p className="text-xs text-muted">Drag a performer to move them; the shadows follow. Lens sizes come from each unit&apos;s type. Back wall at {fmt(data?.backWallY ?? null)} from the datum.</p>
-      <div className="grid gap-3 lg:grid-cols-[3fr_2fr]" data-testid="shadow-result" data-state={q.isFetching ? "loading" : data ? "ready" : "empty"}>
+      {message && (
+        <p role="alert" className="text-sm text-danger">
+          {message}
+        </p>
+      )}
+      {data?.warnings.map((w) => (
+        <p key={w} className="text-sm text-caution">
+          {w}
+        </p>
+      ))}
+      <p className="text-xs text-muted">
+        Drag a performer to move them; the shadows follow. Lens sizes come from each unit&apos;s type. Back wall at{" "}
+        {fmt(data?.backWallY ?? null)} from the datum.
+      </p>
+      <div
+        className="grid gap-3 lg:grid-cols-[3fr_2fr]"
+        data-testid="shadow-result"
+        data-state={q.isFetching ? "loading" : data ? "ready" : "empty"}
+      >
         <StudyCanvas
           label={`Shadows: ${data?.stateLabel ?? ""}`}
           stage={p.stage}
@@ -104,7 +151,13 @@ export function ShadowStudy(p: StudiesProps) {
           areas={p.areas}
           over={(ctx, v, pal) => {
             drawShadows(ctx, v, occluders, pal, selectedFixture);
-            drawUnits(ctx, v, data?.lights ?? [], pal, new Set(data?.lights.flatMap((l, k) => (l.fixtureId === selectedFixture ? [k] : [])) ?? []));
+            drawUnits(
+              ctx,
+              v,
+              data?.lights ?? [],
+              pal,
+              new Set(data?.lights.flatMap((l, k) => (l.fixtureId === selectedFixture ? [k] : [])) ?? []),
+            );
             drawOccluders(ctx, v, performers, data?.panels ?? [], pal, drag?.id ?? active);
           }}
           onPointerDown={(pt) => {
@@ -128,19 +181,48 @@ export function ShadowStudy(p: StudiesProps) {
         <div className="flex flex-col gap-2 text-sm">
           <ul className="flex flex-col gap-1" aria-label="Performers and scenery">
             {(data?.performers ?? []).map((m) => (
-              <li key={m.id} className={`flex flex-wrap items-center gap-2 rounded border border-line px-2 py-1 ${m.id === active ? "bg-raised" : ""}`}>
-                <button className="font-medium underline-offset-2 hover:underline" onClick={() => setActiveId(m.id)}>{m.name}</button>
-                <span className="text-xs text-muted">{fmt(m.x)} × {fmt(m.y)}</span>
-                <MetreInput label="Height" value={m.height} disabled={!p.canRun} onCommit={(v) => saveMark(m.id, { height: v })} />
-                <MetreInput label="Shoulders" value={m.shoulderWidth} disabled={!p.canRun} onCommit={(v) => saveMark(m.id, { shoulderWidth: v })} />
-                {p.canRun && <Button variant="quiet" onClick={() => removeRow("performer-marks", m.id)}>Remove</Button>}
+              <li
+                key={m.id}
+                className={`flex flex-wrap items-center gap-2 rounded border border-line px-2 py-1 ${m.id === active ? "bg-raised" : ""}`}
+              >
+                <button
+                  type="button"
+                  className="font-medium underline-offset-2 hover:underline"
+                  onClick={() => setActiveId(m.id)}
+                >
+                  {m.name}
+                </button>
+                <span className="text-xs text-muted">
+                  {fmt(m.x)} × {fmt(m.y)}
+                </span>
+                <MetreInput
+                  label="Height"
+                  value={m.height}
+                  disabled={!p.canRun}
+                  onCommit={(v) => saveMark(m.id, { height: v })}
+                />
+                <MetreInput
+                  label="Shoulders"
+                  value={m.shoulderWidth}
+                  disabled={!p.canRun}
+                  onCommit={(v) => saveMark(m.id, { shoulderWidth: v })}
+                />
+                {p.canRun && (
+                  <Button variant="quiet" onClick={() => removeRow("performer-marks", m.id)}>
+                    Remove
+                  </Button>
+                )}
               </li>
             ))}
             {(data?.panels ?? []).map((s) => (
               <li key={`panel-${s.id}`} className="flex items-center gap-2 rounded border border-line px-2 py-1">
                 <span className="font-medium">{s.name}</span>
                 <span className="text-xs text-muted">panel {fmt(s.height)} high</span>
-                {p.canRun && <Button variant="quiet" onClick={() => removeRow("scenic-panels", s.id)}>Remove</Button>}
+                {p.canRun && (
+                  <Button variant="quiet" onClick={() => removeRow("scenic-panels", s.id)}>
+                    Remove
+                  </Button>
+                )}
               </li>
             ))}
           </ul>
@@ -148,16 +230,32 @@ export function ShadowStudy(p: StudiesProps) {
             <table className="w-full text-left text-xs" data-testid="shadow-table">
               <caption className="text-left text-sm font-medium">Shadows of {activeShadows.name}</caption>
               <thead className="text-muted">
-                <tr><th>Unit</th><th>Length</th><th>Soft edge at tip</th><th>Hard core width</th><th>On the back wall</th></tr>
+                <tr>
+                  <th>Unit</th>
+                  <th>Length</th>
+                  <th>Soft edge at tip</th>
+                  <th>Hard core width</th>
+                  <th>On the back wall</th>
+                </tr>
               </thead>
               <tbody>
                 {activeShadows.shadows.map((s) => (
-                  <tr key={s.fixtureId} onClick={() => setSelectedFixture(s.fixtureId)} className={`cursor-pointer border-t border-line ${selectedFixture === s.fixtureId ? "bg-raised" : ""}`}>
+                  <tr
+                    key={s.fixtureId}
+                    onClick={() => setSelectedFixture(s.fixtureId)}
+                    className={`cursor-pointer border-t border-line ${selectedFixture === s.fixtureId ? "bg-raised" : ""}`}
+                  >
                     <td className="py-0.5">{s.unitLabel}</td>
                     <td>{s.lands === "unbounded" ? "to the horizon" : fmt(s.length)}</td>
                     <td>{fmt(s.penumbraWidth)}</td>
                     <td>{s.umbraWidth === 0 ? "none (all soft)" : fmt(s.umbraWidth)}</td>
-                    <td className={s.lands === "wall" ? "font-medium text-danger" : ""}>{s.lands === "wall" ? `yes, ${fmt(s.wallHeight)} up` : s.lands === "none" ? (s.reason ?? "—") : "no"}</td>
+                    <td className={s.lands === "wall" ? "font-medium text-danger" : ""}>
+                      {s.lands === "wall"
+                        ? `yes, ${fmt(s.wallHeight)} up`
+                        : s.lands === "none"
+                          ? (s.reason ?? "—")
+                          : "no"}
+                    </td>
                   </tr>
                 ))}
               </tbody>
@@ -171,7 +269,17 @@ export function ShadowStudy(p: StudiesProps) {
   );
 }
 
-function MetreInput({ label, value, disabled, onCommit }: { label: string; value: number; disabled: boolean; onCommit: (v: number) => void }) {
+function MetreInput({
+  label,
+  value,
+  disabled,
+  onCommit,
+}: {
+  label: string;
+  value: number;
+  disabled: boolean;
+  onCommit: (v: number) => void;
+}) {
   const [text, setText] = useState(String(value));
   return (
     <label className="flex items-center gap-1 text-xs text-muted">
@@ -197,17 +305,33 @@ function PanelForm({ productionId, onSaved }: { productionId: number; onSaved: (
   const [open, setOpen] = useState(false);
   const [f, setF] = useState({ name: "", x1: "-2", y1: "6", x2: "2", y2: "6", height: "3" });
   const [error, setError] = useState<string | null>(null);
-  if (!open) return <Button variant="secondary" onClick={() => setOpen(true)}>Add a scenery panel</Button>;
+  if (!open)
+    return (
+      <Button variant="secondary" onClick={() => setOpen(true)}>
+        Add a scenery panel
+      </Button>
+    );
   const submit = async (e: React.FormEvent) => {
     e.preventDefault();
     try {
-      const body = { name: f.name, x1: Number(f.x1), y1: Number(f.y1), x2: Number(f.x2), y2: Number(f.y2), height: Number(f.height) };
+      const body = {
+        name: f.name,
+        x1: Number(f.x1),
+        y1: Number(f.y1),
+        x2: Number(f.x2),
+        y2: Number(f.y2),
+        height: Number(f.height),
+      };
       await apiFetch(`/api/productions/${productionId}/scenic-panels`, { method: "POST", json: body });
       setOpen(false);
       setError(null);
       onSaved();
     } catch (err) {
-      setError(err instanceof ApiError ? [err.message, ...Object.values(err.fieldErrors).flat()].join(" ") : "Could not save the panel.");
+      setError(
+        err instanceof ApiError
+          ? [err.message, ...Object.values(err.fieldErrors).flat()].join(" ")
+          : "Could not save the panel.",
+      );
     }
   };
   return (
@@ -215,11 +339,19 @@ function PanelForm({ productionId, onSaved }: { productionId: number; onSaved: (
       {(["name", "x1", "y1", "x2", "y2", "height"] as const).map((k) => (
         <label key={k} className="flex flex-col">
           {k === "name" ? "Panel name" : k === "height" ? "Height (m)" : `${k} (m)`}
-          <input className={`mt-1 rounded border border-line bg-surface px-1 py-1 text-sm text-ink ${k === "name" ? "w-32" : "w-16"}`} value={f[k]} onChange={(e) => setF({ ...f, [k]: e.target.value })} />
+          <input
+            className={`mt-1 rounded border border-line bg-surface px-1 py-1 text-sm text-ink ${k === "name" ? "w-32" : "w-16"}`}
+            value={f[k]}
+            onChange={(e) => setF({ ...f, [k]: e.target.value })}
+          />
         </label>
       ))}
-      <Button type="submit" variant="secondary">Save panel</Button>
-      <span aria-live="polite" className="text-danger">{error}</span>
+      <Button type="submit" variant="secondary">
+        Save panel
+      </Button>
+      <span aria-live="polite" className="text-danger">
+        {error}
+      </span>
     </form>
   );
 }

@@ -19,6 +19,7 @@ export function StudiesWorkspace(props: StudiesProps) {
       <div role="tablist" aria-label="Study" className="flex gap-2">
         {(["coverage", "shadows"] as const).map((s) => (
           <button
+            type="button"
             key={s}
             role="tab"
             aria-selected={study === s}

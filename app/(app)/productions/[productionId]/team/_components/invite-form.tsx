@@ -13,13 +13,27 @@ export function InviteForm({ productionId }: { productionId: number }) {
   const roleError = fieldError(state, "role");
   return (
     <form action={action} className="flex flex-wrap items-end gap-3" noValidate aria-label="Invite someone">
-      <TextField label="E-mail" name="email" type="email" required className="min-w-56 flex-1" defaultValue={typedValue(state, "email")} error={fieldError(state, "email")} />
+      <TextField
+        label="E-mail"
+        name="email"
+        type="email"
+        required
+        className="min-w-56 flex-1"
+        defaultValue={typedValue(state, "email")}
+        error={fieldError(state, "email")}
+      />
       <div className="flex flex-col gap-1 text-sm">
         {/* A label of its own (not wrapping the select): a wrapping label's name would include the chosen option. */}
         <label htmlFor="invite-role" className="font-medium">
           Role
         </label>
-        <select id="invite-role" name="role" defaultValue={typedValue(state, "role") ?? "viewer"} aria-invalid={roleError ? true : undefined} className="min-h-10 rounded-md border border-line bg-surface px-3 text-ink">
+        <select
+          id="invite-role"
+          name="role"
+          defaultValue={typedValue(state, "role") ?? "viewer"}
+          aria-invalid={roleError ? true : undefined}
+          className="min-h-10 rounded-md border border-line bg-surface px-3 text-ink"
+        >
           {ROLES.map((r) => (
             <option key={r} value={r}>
               {ROLE_LABELS[r]}

@@ -15,13 +15,30 @@ function Outcome({ state }: { state: ActionState<object> }) {
   );
 }
 
-export function RoleForm({ productionId, memberId, role, version, name }: { productionId: number; memberId: number; role: Role; version: number; name: string }) {
+export function RoleForm({
+  productionId,
+  memberId,
+  role,
+  version,
+  name,
+}: {
+  productionId: number;
+  memberId: number;
+  role: Role;
+  version: number;
+  name: string;
+}) {
   const [state, action, pending] = useActionState(changeRoleAction.bind(null, productionId), IDLE);
   return (
     <form action={action} className="flex flex-wrap items-center gap-2">
       <input type="hidden" name="memberId" value={memberId} />
       <input type="hidden" name="version" value={version} />
-      <select name="role" defaultValue={role} aria-label={`Role of ${name}`} className="min-h-9 rounded-md border border-line bg-surface px-2 text-sm text-ink">
+      <select
+        name="role"
+        defaultValue={role}
+        aria-label={`Role of ${name}`}
+        className="min-h-9 rounded-md border border-line bg-surface px-2 text-sm text-ink"
+      >
         {ROLES.map((r) => (
           <option key={r} value={r}>
             {ROLE_LABELS[r]}
@@ -55,20 +72,40 @@ export function RemoveForm({ productionId, memberId, name }: { productionId: num
   );
 }
 
-export function InvitationForms({ productionId, invitationId, email }: { productionId: number; invitationId: number; email: string }) {
+export function InvitationForms({
+  productionId,
+  invitationId,
+  email,
+}: {
+  productionId: number;
+  invitationId: number;
+  email: string;
+}) {
   const [resent, resend, resending] = useActionState(resendInvitationAction.bind(null, productionId), IDLE);
   const [withdrawn, withdraw, withdrawing] = useActionState(withdrawInvitationAction.bind(null, productionId), IDLE);
   return (
     <div className="flex flex-wrap items-center gap-2">
       <form action={resend}>
         <input type="hidden" name="invitationId" value={invitationId} />
-        <Button type="submit" variant="secondary" disabled={resending} className="min-h-9 px-3" aria-label={`Send the invitation to ${email} again`}>
+        <Button
+          type="submit"
+          variant="secondary"
+          disabled={resending}
+          className="min-h-9 px-3"
+          aria-label={`Send the invitation to ${email} again`}
+        >
           Send again
         </Button>
       </form>
       <form action={withdraw}>
         <input type="hidden" name="invitationId" value={invitationId} />
-        <Button type="submit" variant="quiet" disabled={withdrawing} className="min-h-9 px-2" aria-label={`Withdraw the invitation to ${email}`}>
+        <Button
+          type="submit"
+          variant="quiet"
+          disabled={withdrawing}
+          className="min-h-9 px-2"
+          aria-label={`Withdraw the invitation to ${email}`}
+        >
           Withdraw
         </Button>
       </form>

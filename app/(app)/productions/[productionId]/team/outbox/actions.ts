@@ -9,5 +9,9 @@ import { retryQueuedMail } from "@/lib/mail/send";
 export const retryMailAction = memberAction("team.manage", z.object({}), async (_input, { productionId }) => {
   const sent = await retryQueuedMail();
   revalidatePath(`/productions/${productionId}/team/outbox`);
-  return { message: sent ? `${sent} queued message${sent === 1 ? "" : "s"} sent.` : "Nothing was sent: the queue is empty or the mail server still refuses (see each message)." };
+  return {
+    message: sent
+      ? `${sent} queued message${sent === 1 ? "" : "s"} sent.`
+      : "Nothing was sent: the queue is empty or the mail server still refuses (see each message).",
+  };
 });

@@ -25,9 +25,13 @@ export default async function OutboxPage({ params }: { params: Promise<{ product
       </p>
       <Card title="Outbox" actions={waiting ? <RetryButton productionId={productionId} /> : undefined}>
         <p className="mb-3 text-sm text-muted">
-          {waiting ? `${waiting} message${waiting === 1 ? " waits" : "s wait"} for the mail server; they are retried automatically.` : "Every message has been handed to the mail server."}
+          {waiting
+            ? `${waiting} message${waiting === 1 ? " waits" : "s wait"} for the mail server; they are retried automatically.`
+            : "Every message has been handed to the mail server."}
         </p>
-        {mail.length === 0 ? <p className="text-sm text-muted">Nothing has been sent for this production yet.</p> : null}
+        {mail.length === 0 ? (
+          <p className="text-sm text-muted">Nothing has been sent for this production yet.</p>
+        ) : null}
         <ul className="flex flex-col divide-y divide-line">
           {mail.map((m) => (
             <li key={m.id} className="py-3 text-sm">
@@ -37,7 +41,13 @@ export default async function OutboxPage({ params }: { params: Promise<{ product
                   <span className="text-xs text-muted">
                     {" "}
                     · {new Date(m.createdAt).toUTCString().slice(5, 22)} ·{" "}
-                    {m.status === "sent" ? "sent" : <span className="text-danger">queued after {m.attempts} attempt{m.attempts === 1 ? "" : "s"}</span>}
+                    {m.status === "sent" ? (
+                      "sent"
+                    ) : (
+                      <span className="text-danger">
+                        queued after {m.attempts} attempt{m.attempts === 1 ? "" : "s"}
+                      </span>
+                    )}
                   </span>
                 </summary>
                 {m.lastError ? <p className="mt-2 text-xs text-danger">{m.lastError}</p> : null}

@@ -12,7 +12,11 @@ export function RetryButton({ productionId }: { productionId: number }) {
       <Button type="submit" variant="secondary" disabled={pending} className="min-h-9 px-3">
         {pending ? "Trying…" : "Try queued mail now"}
       </Button>
-      {state.status !== "idle" ? <span role="status" className="text-xs text-muted">{state.message}</span> : null}
+      {state.status !== "idle" ? (
+        <span role="status" className="text-xs text-muted">
+          {state.message}
+        </span>
+      ) : null}
     </form>
   );
 }

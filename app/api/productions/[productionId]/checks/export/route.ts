@@ -21,7 +21,21 @@ export const GET = route(async (req, { params }: Ctx) => {
   const stamp = report.computedAt.slice(0, 10);
   const [body, type, name] =
     q.format === "csv"
-      ? [new TextEncoder().encode(writeCsv(reportSheet(report, q.part))), "text/csv; charset=utf-8", `checks-${q.part}-${stamp}.csv`]
-      : [new Uint8Array(await writeXlsx(reportWorkbook(report), { title: "Checks" })), "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet", `checks-${stamp}.xlsx`];
-  return new Response(body, { headers: { "content-type": type, "content-disposition": `attachment; filename="${name}"`, "cache-control": "no-store" } });
+      ? [
+          new TextEncoder().encode(writeCsv(reportSheet(report, q.part))),
+          "text/csv; charset=utf-8",
+          `checks-${q.part}-${stamp}.csv`,
+        ]
+      : [
+          new Uint8Array(await writeXlsx(reportWorkbook(report), { title: "Checks" })),
+          "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet",
+          `checks-${stamp}.xlsx`,
+        ];
+  return new Response(body, {
+    headers: {
+      "content-type": type,
+      "content-disposition": `attachment; filename="${name}"`,
+      "cache-control": "no-store",
+    },
+  });
 });

@@ -9,5 +9,8 @@ type Ctx = { params: Promise<{ productionId: string }> };
 export const POST = route(async (req, { params }: Ctx) => {
   const { productionId, user } = await requireMember((await params).productionId, "rig.editElectrics");
   const { circuits } = await readJson(req, createCircuitsSchema);
-  return Response.json({ circuits: await createCircuits({ productionId, userId: user.id, inputs: circuits }) }, { status: 201 });
+  return Response.json(
+    { circuits: await createCircuits({ productionId, userId: user.id, inputs: circuits }) },
+    { status: 201 },
+  );
 });

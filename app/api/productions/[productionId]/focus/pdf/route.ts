@@ -18,7 +18,10 @@ export const GET = route(async (req, { params }: Ctx) => {
   const { productionId } = await requireMember((await params).productionId, "production.view");
   const filter = readQuery(req, focusFilterSchema.and(printOptionsSchema));
   if (chromiumMissing()) {
-    throw new AppError("unavailable", `PDF printing needs Chromium at ${CHROMIUM_PATH}, which is not installed on this server. Install it (apt-get install chromium; npm start does this), or open the print view and use your browser's "Save as PDF".`);
+    throw new AppError(
+      "unavailable",
+      `PDF printing needs Chromium at ${CHROMIUM_PATH}, which is not installed on this server. Install it (apt-get install chromium; npm start does this), or open the print view and use your browser's "Save as PDF".`,
+    );
   }
   const loaded = await loadFocusCharts({ productionId, filter, timeZone: filter.tz });
   const { production, landmarks } = loaded;
@@ -28,7 +31,13 @@ export const GET = route(async (req, { params }: Ctx) => {
   const pdf = await renderPdf({
     title: `${production.name} — focus charts`,
     paper: filter.paper,
-    sheets: focusSheetsMarkup(sheets, { productionName: production.name, printedAt, perPage: filter.perPage, units: production.displayUnits, landmarks }),
+    sheets: focusSheetsMarkup(sheets, {
+      productionName: production.name,
+      printedAt,
+      perPage: filter.perPage,
+      units: production.displayUnits,
+      landmarks,
+    }),
     footerText: `${production.name} · focus charts · printed ${printedAt}`,
   });
   return new Response(new Uint8Array(pdf), {

@@ -23,10 +23,21 @@ export const POST = route(async (req, { params }: Ctx) => {
     getScenicPanelsByProduction({ productionId }),
   ]);
   const deckHeight = production.showDeckHeight;
-  const { lights, warnings } = studyLights(fixtures, state.levels, { headHeight: production.headHeight, deckHeight, colours });
+  const { lights, warnings } = studyLights(fixtures, state.levels, {
+    headHeight: production.headHeight,
+    deckHeight,
+    colours,
+  });
   const occluders = shadowStudy({ lights, performers, panels, backWallY: production.backWallY, deckHeight });
   const result: ShadowResult & { stateLabel: string; performers: typeof performers; panels: typeof panels } = {
-    occluders, lights, backWallY: production.backWallY, deckHeight, warnings, stateLabel: state.label, performers, panels,
+    occluders,
+    lights,
+    backWallY: production.backWallY,
+    deckHeight,
+    warnings,
+    stateLabel: state.label,
+    performers,
+    panels,
   };
   return result;
 });

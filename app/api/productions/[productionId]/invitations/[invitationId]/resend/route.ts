@@ -12,5 +12,12 @@ export const POST = route(async (_req, ctx: Ctx) => {
   const id = parseId(params.invitationId, "Invitation");
   const issued = await resendInvitation({ productionId, id, userId: user.id });
   const mail = await mailInvitation(issued, user.name);
-  return { invitation: { ...issued.invitation, mailSent: mail.sent, mailError: mail.error ?? null, message: deliveryNote(mail, issued.invitation.email) } };
+  return {
+    invitation: {
+      ...issued.invitation,
+      mailSent: mail.sent,
+      mailError: mail.error ?? null,
+      message: deliveryNote(mail, issued.invitation.email),
+    },
+  };
 });

@@ -10,6 +10,11 @@ export const GET = route(async (_req, { params }: Ctx) => {
   const { productionId } = await requireMember(p.productionId);
   const { bytes, contentType } = await readUploadFile({ productionId, uploadId: parseId(p.uploadId, "Upload") });
   return new Response(Buffer.from(bytes), {
-    headers: { "content-type": contentType, "x-content-type-options": "nosniff", "cache-control": "private, max-age=3600", "content-disposition": "inline" },
+    headers: {
+      "content-type": contentType,
+      "x-content-type-options": "nosniff",
+      "cache-control": "private, max-age=3600",
+      "content-disposition": "inline",
+    },
   });
 });
