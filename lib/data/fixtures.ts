@@ -48,6 +48,26 @@ async function joinerFor(productionId: number, headHeight: number) {
 }
 
 /** Every fixture of a production in hanging order (position order, then unit number), with computed geometry. */
+/** The change record of one fixture's update, before and after, in the update's own transaction. */
+export function recordFixtureUpdate(
+  change: { productionId: number; userId: number; fixtureId: number; before: Fixture; after: Fixture },
+  transaction: Transaction,
+) {
+  const { productionId, userId, fixtureId, before, after } = change;
+  return recordChange(
+    {
+      productionId,
+      userId,
+      entity: "fixture",
+      entityId: fixtureId,
+      action: "update",
+      before: toFixtureRecord(before),
+      after: toFixtureRecord(after),
+    },
+    transaction,
+  );
+}
+
 export async function getFixturesByProduction({ productionId }: { productionId: number }): Promise<FixtureDto[]> {
   const production = await requireProduction(productionId);
   const [rows, { join, positions }] = await Promise.all([
@@ -154,18 +174,7 @@ export async function updateFixture({
       }
       throw err;
     });
-    await recordChange(
-      {
-        productionId,
-        userId,
-        entity: "fixture",
-        entityId: fixtureId,
-        action: "update",
-        before: toFixtureRecord(before),
-        after: toFixtureRecord(after),
-      },
-      transaction,
-    );
+    await recordFixtureUpdate({ productionId, userId, fixtureId, before, after }, transaction);
   });
   return (await getFixtureById({ productionId, fixtureId }))!;
 }

@@ -12,7 +12,7 @@ import { fileStore, MAX_UPLOAD_BYTES } from "@/lib/storage";
 import { decoder, readImageHeader, refusal } from "@/lib/storage/image-decode";
 import type { ChartPhoto } from "@/lib/focus/chart-model";
 import type { FixtureDto } from "@/lib/dto/fixture";
-import { getFixtureById, toFixtureRecord } from "./fixtures";
+import { getFixtureById, recordFixtureUpdate, toFixtureRecord } from "./fixtures";
 import { toUploadDto } from "./uploads";
 import { versionedUpdate } from "./versioned";
 import { recordChange } from "./changes";
@@ -117,18 +117,7 @@ export async function setFocusPhoto(o: {
         { productionId, userId, entity: "upload", entityId: upload.id, action: "create", after: toUploadDto(upload) },
         transaction,
       );
-      await recordChange(
-        {
-          productionId,
-          userId,
-          entity: "fixture",
-          entityId: fixtureId,
-          action: "update",
-          before: toFixtureRecord(before),
-          after: toFixtureRecord(after),
-        },
-        transaction,
-      );
+      await recordFixtureUpdate({ productionId, userId, fixtureId, before, after }, transaction);
       if (before.focusPhotoUploadId != null)
         oldKey = await dropUpload(productionId, before.focusPhotoUploadId, userId, transaction);
     });
@@ -183,18 +172,7 @@ export async function removeFocusPhoto(o: {
       what: "Fixture",
       transaction,
     });
-    await recordChange(
-      {
-        productionId,
-        userId,
-        entity: "fixture",
-        entityId: fixtureId,
-        action: "update",
-        before: toFixtureRecord(before),
-        after: toFixtureRecord(after),
-      },
-      transaction,
-    );
+    await recordFixtureUpdate({ productionId, userId, fixtureId, before, after }, transaction);
     if (before.focusPhotoUploadId != null)
       oldKey = await dropUpload(productionId, before.focusPhotoUploadId, userId, transaction);
   });
