@@ -28,6 +28,13 @@ export function proxy(request: NextRequest) {
 }
 
 export const config = {
-  // Static files and images need no nonce; everything else, pages and API alike, passes through.
-  matcher: [{ source: "/((?!_next/static|_next/image|favicon.ico|icons/|manifest.webmanifest).*)" }],
+  // Static files need no nonce. The three upload routes are left out because Next buffers (and past 10 MB
+  // cuts short) the body of any request a proxy sees, which would defeat their own streaming size caps; they
+  // apply the same cross-site rule themselves (lib/http/upload-form.ts).
+  matcher: [
+    {
+      source:
+        "/((?!_next/static|_next/image|favicon.ico|icons/|manifest.webmanifest|api/productions/[^/]+/uploads$|api/productions/[^/]+/import$|api/productions/[^/]+/fixtures/[^/]+/photo$).*)",
+    },
+  ],
 };

@@ -21,6 +21,19 @@ describe("cross-site writes are refused before they reach a handler", () => {
     expect(after.json).toEqual(before.json);
   });
 
+  it("an upload route, which the proxy leaves to itself, refuses a foreign Origin just the same", async () => {
+    const s = await new ApiSession().signIn(DESIGNER);
+    const productionId = await demoProductionId(s);
+    const form = new FormData();
+    form.append("file", new Blob([new Uint8Array([0x89, 0x50, 0x4e, 0x47])], { type: "image/png" }), "x.png");
+    const res = await fetch(`${BASE_URL}/api/productions/${productionId}/uploads`, {
+      method: "POST",
+      headers: { cookie: s.cookie, origin: "http://127.0.0.1:1" },
+      body: form,
+    });
+    expect(res.status).toBe(403);
+  });
+
   it("a text/plain body (what a plain cross-site form can send) is 415, naming the type", async () => {
     const res = await fetch(`${BASE_URL}/api/auth/sign-in`, {
       method: "POST",
