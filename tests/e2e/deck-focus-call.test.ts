@@ -121,7 +121,7 @@ describe("the focus call fits the screen", () => {
     const { id, positionId } = await productionWith40(page);
     await checkEveryScreen(page, `/productions/${id}/focus/call?position=${positionId}`, 40, "deck-focus-call-40");
     // On the phone the last unit sits in the strip's scrolled part; picking it makes it current.
-    const last = page.getByTestId("unit-strip").getByRole("button", { name: /^Unit 40,/ });
+    const last = page.getByTestId("unit-strip").getByRole("button", { name: /^Unit 40\b/ });
     await last.click();
     await expect.poll(() => last.getAttribute("aria-current"), { timeout: 30_000 }).toBe("true");
     await expectControlsOnScreen(page, "40 units, phone, last unit picked");

@@ -102,15 +102,15 @@ describe("rig import and export as the electrician", () => {
 
   it("lets the electrician edit a circuit inline but not a colour", async () => {
     const { page } = await openRig();
-    const cell = page.getByRole("button", { name: /^Edit Dimmer of/ }).first();
+    const cell = page.getByRole("button", { name: /^Dimmer .*, unit .*, edit$/ }).first();
     await cell.waitFor(); // the editable cells are drawn: a Colour one would be among them
-    expect(await page.getByRole("button", { name: /^Edit Colour of/ }).count()).toBe(0);
+    expect(await page.getByRole("button", { name: /^Colour .*, edit$/ }).count()).toBe(0);
     await cell.click();
     const input = page.getByRole("textbox", { name: /^Dimmer of/ });
     await input.fill("D-E2E");
     await input.press("Enter");
     await page
-      .getByRole("button", { name: /^Edit Dimmer of/ })
+      .getByRole("button", { name: /^Dimmer D-E2E, unit .*, edit$/ })
       .filter({ hasText: "D-E2E" })
       .waitFor();
     await page.close();
