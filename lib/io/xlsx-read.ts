@@ -2,7 +2,7 @@ import { Readable } from "node:stream";
 import ExcelJS from "exceljs";
 import { FileProblem, toRawTable, type RawRow, type RawTable } from "./raw-table";
 import { checkColumn, fillMerges } from "./sheet-limits";
-import { openXmlWorkbook, type XmlSheet, type XmlWorkbook } from "./xlsx-sheet-xml";
+import { openXmlWorkbook, repackWorkbook, type XmlSheet, type XmlWorkbook } from "./xlsx-sheet-xml";
 
 type CellValue = ExcelJS.CellValue;
 
@@ -118,13 +118,15 @@ function chooseSheet(
  */
 export async function readXlsx(bytes: Uint8Array, opts: ReadOptions = {}): Promise<RawTable> {
   let workbook: XmlWorkbook | null;
+  let repacked: Uint8Array | undefined;
   try {
     workbook = openXmlWorkbook(bytes);
+    if (!workbook) repacked = repackWorkbook(bytes);
   } catch (err) {
     if (err instanceof FileProblem) throw err;
     throw new FileProblem(BROKEN);
   }
-  if (!workbook) return readXlsxWithExcelJs(bytes, opts);
+  if (!workbook) return readXlsxWithExcelJs(repacked!, opts);
   const read = (s: XmlSheet): SheetRead => {
     const { records, merges } = s.read();
     fillMerges(records, merges);

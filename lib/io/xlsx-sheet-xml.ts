@@ -4,7 +4,7 @@
 // 5,000-row file ten times slower than reading the same rows from CSV (docs/benchmarks.md); importing
 // needs only each cell's text. Unzipped with fflate. Anything laid out in a way this reader does not
 // expect (prefixed XML names, a missing part) returns null, and the caller reads the file with ExcelJS.
-import { unzipSync } from "fflate";
+import { unzipSync, zipSync } from "fflate";
 import { checkColumn, checkDeclaredDimension } from "./sheet-limits";
 import { FileProblem, type RawRow } from "./raw-table";
 
@@ -137,13 +137,13 @@ const resolveTarget = (target: string) =>
  * The sheets of a workbook in tab order, each read only when asked. Throws when the bytes are not a
  * zip; null when the zip does not hold a workbook laid out as this reader expects.
  */
-export function openXmlWorkbook(bytes: Uint8Array, { maxUnzippedBytes = MAX_UNZIPPED_BYTES } = {}): XmlWorkbook | null {
-  // A few megabytes of zip can unpack to gigabytes (a "zip bomb"); the parts' declared sizes are added up
-  // before anything is inflated, and the file is refused past the cap instead of exhausting the server.
+// A few megabytes of zip can unpack to gigabytes (a "zip bomb"); the parts' declared sizes are added up
+// before anything is inflated, and the file is refused past the cap instead of exhausting the server.
+function unzipCapped(bytes: Uint8Array, wanted: (name: string) => boolean, maxUnzippedBytes: number) {
   let unzipped = 0;
-  const files = unzipSync(bytes, {
+  return unzipSync(bytes, {
     filter: (f) => {
-      if (!f.name.startsWith("xl/") || !(f.name.endsWith(".xml") || f.name.endsWith(".rels"))) return false;
+      if (!wanted(f.name)) return false;
       unzipped += f.originalSize;
       if (unzipped > maxUnzippedBytes)
         throw new FileProblem(
@@ -152,6 +152,27 @@ export function openXmlWorkbook(bytes: Uint8Array, { maxUnzippedBytes = MAX_UNZI
       return true;
     },
   });
+}
+
+/**
+ * The same workbook, unpacked and packed again (stored, not compressed) so that what reaches ExcelJS
+ * is a well-formed zip. ExcelJS's streaming unzip waits forever on some damaged archives (a flipped
+ * byte in a local header; found by tests/unit/fuzz/readers.test.ts), which would hang an upload.
+ * Throws when the bytes do not unpack.
+ */
+export function repackWorkbook(bytes: Uint8Array, { maxUnzippedBytes = MAX_UNZIPPED_BYTES } = {}): Uint8Array {
+  return zipSync(
+    unzipCapped(bytes, () => true, maxUnzippedBytes),
+    { level: 0 },
+  );
+}
+
+export function openXmlWorkbook(bytes: Uint8Array, { maxUnzippedBytes = MAX_UNZIPPED_BYTES } = {}): XmlWorkbook | null {
+  const files = unzipCapped(
+    bytes,
+    (name) => name.startsWith("xl/") && (name.endsWith(".xml") || name.endsWith(".rels")),
+    maxUnzippedBytes,
+  );
   // Node's own UTF-8 decoding is several times faster than fflate's strFromU8 on a sheet of megabytes.
   const text = (name: string) =>
     files[name]
