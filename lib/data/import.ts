@@ -8,6 +8,7 @@ import { normaliseHeader, suggestMapping, type ColumnTarget } from "@/lib/io/fie
 import { missingRequiredColumns, rowChecker, type LengthUnit, type RowError } from "@/lib/io/rows";
 import type { RawTable } from "@/lib/io/raw-table";
 import { planImport, type ImportPlanResult, type Snapshot } from "@/lib/rig/import-plan";
+import { importDiff } from "@/lib/io/import-diff";
 import type { ImportPreview } from "@/lib/dto/import";
 import type { DmxMode } from "@/lib/dto/fixture-type";
 import { attributeOf } from "@/lib/rig/fixture-fields";
@@ -102,6 +103,7 @@ async function prepare(productionId: number, member: Member, req: ImportRequest,
   const columnOf = (key: string) => table.headers[mapping.indexOf(key as ColumnTarget)] ?? key;
 
   let errors: RowError[] = [];
+  let snapshot: Snapshot | null = null;
   let plan: ImportPlanResult = {
     plans: [],
     errors: [],
@@ -121,7 +123,8 @@ async function prepare(productionId: number, member: Member, req: ImportRequest,
   } else {
     progress?.("checking", 0, table.rows.length);
     const checked = await checkInSlices(table, mapping, lengthUnit, progress);
-    plan = planImport(checked.rows, await loadSnapshot(productionId, mapping), {
+    snapshot = await loadSnapshot(productionId, mapping);
+    plan = planImport(checked.rows, snapshot, {
       member,
       createMissing: req.createMissing,
       columnOf,
@@ -129,6 +132,7 @@ async function prepare(productionId: number, member: Member, req: ImportRequest,
     errors = [...checked.errors, ...plan.errors].sort((a, b) => a.row - b.row);
     progress?.("checking", table.rows.length, table.rows.length);
   }
+  const diff = snapshot ? importDiff(plan.plans, snapshot, production.displayUnits) : null;
   const preview: ImportPreview = {
     fileName: req.fileName,
     format: table.format,
@@ -145,6 +149,8 @@ async function prepare(productionId: number, member: Member, req: ImportRequest,
     counts: plan.counts,
     newPositions: plan.newPositions,
     newTypes: plan.newTypes,
+    changes: diff?.changed ?? [],
+    changedTotal: diff?.changedTotal ?? 0,
   };
   return { preview, plan, table, mapping, lengthUnit };
 }

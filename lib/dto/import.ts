@@ -2,6 +2,7 @@
 import type { ColumnTarget } from "@/lib/io/fields";
 import type { LengthUnit, RowError } from "@/lib/io/rows";
 import type { ImportPlanResult } from "@/lib/rig/import-plan";
+import type { FixtureChange } from "@/lib/io/import-diff";
 
 export type ImportPreview = {
   fileName: string;
@@ -20,4 +21,7 @@ export type ImportPreview = {
   counts: ImportPlanResult["counts"];
   newPositions: string[];
   newTypes: string[];
+  /** Each fixture the import would change, with every changed field's old and new value (the first few hundred). */
+  changes: FixtureChange[];
+  changedTotal: number;
 };

@@ -8,6 +8,7 @@ import { ApiError } from "@/lib/http/api-client";
 import { useRigImport, type ImportOptions } from "@/hooks/use-rig-import";
 import { Button } from "@/components/ui/button";
 import { ImportPreviewTable } from "./import-preview-table";
+import { ImportChanges } from "./import-changes";
 
 /** Upload → preview and map → every row checked → one all-or-nothing commit with a progress bar. */
 export function ImportPanel({
@@ -199,6 +200,7 @@ export function ImportPanel({
             {checked.newPositions.length ? `; new positions: ${checked.newPositions.join(", ")}` : ""}
             {checked.newTypes.length ? `; new types: ${checked.newTypes.join(", ")}` : ""}.
           </p>
+          <ImportChanges preview={checked} />
           {checked.errorCount ? (
             <div className="rounded-md border border-danger p-2" data-testid="import-errors">
               <p className="text-sm font-semibold text-danger">
