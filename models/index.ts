@@ -25,6 +25,7 @@ import { initDataLine, DataLine } from "./data-line";
 import { initInvitation, Invitation } from "./invitation";
 import { initNote, Note } from "./note";
 import { initShowReport, ShowReport, ShowReportFault } from "./show-report";
+import { initRevision, Revision } from "./revision";
 
 const models = {
   User,
@@ -52,6 +53,7 @@ const models = {
   Note,
   ShowReport,
   ShowReportFault,
+  Revision,
 };
 export type Db = typeof models & { sequelize: Sequelize };
 
@@ -116,6 +118,7 @@ function createDb(): Db {
     initInvitation,
     initNote,
     initShowReport,
+    initRevision,
   ]) {
     init(sequelize);
   }
@@ -156,4 +159,5 @@ export {
   Note,
   ShowReport,
   ShowReportFault,
+  Revision,
 };
