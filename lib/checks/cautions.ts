@@ -10,7 +10,7 @@ export const POWER_CAUTIONS: string[] = [
   "Switch-mode loads (LED units, moving lights, discharge lamps) draw a large inrush current at power-up: bring them up in stages and check the breakers' trip curves.",
   "Switch-mode loads are not linear: on a three-phase supply their harmonics add up in the neutral, which can carry more current than a phase even when the phases are balanced. Size the neutral for it.",
   "Switch-mode units are counted at their wattage as VA; where the data sheet gives a power factor below 1 or an input current, the current is higher: use the data sheet.",
-  "Accessories' power (scrollers, rotators) is not counted on the circuits: many take a separate supply.",
+  "Powered accessories (scrollers, gobo rotators, motorised irises) are counted on their host unit's circuit. Where one takes its own power supply, that supply carries the load instead; its own rating and circuit must be checked too.",
 ];
 
 export const DMX_CAUTIONS: string[] = [

@@ -63,6 +63,7 @@ export function runChecks(input: ChecksInput): ChecksResult {
   };
 }
 
+export * from "./accessory-power";
 export * from "./beams";
 export * from "./cautions";
 export * from "./dmx";

@@ -1,7 +1,8 @@
 // Power check: the load on every circuit (or dimmer) from its fixtures, against its rating and the
 // continuous-load limit of the chosen code; totals and balance per phase. Pure.
+import { type AccessoryLoad, poweredAccessoriesByHost } from "./accessory-power";
 import { circuitCapacityW, continuousCapacityW, type EffectiveElectrical } from "./electrical";
-import type { CheckFixture, Finding } from "./types";
+import type { CheckAccessory, CheckFixture, Finding } from "./types";
 
 export type CheckCircuit = { id: number; name: string; ratingA: number; phase: string | null; dimmed: boolean };
 
@@ -13,7 +14,7 @@ export type CircuitLoad = {
   ratingA: number;
   dimmed: boolean;
   units: number;
-  /** Watts for lamp loads, VA for switch-mode ones, summed. */
+  /** Watts for lamp loads, VA for switch-mode ones and powered accessories, summed. */
   loadVA: number;
   amps: number;
   capacityW: number;
@@ -21,8 +22,11 @@ export type CircuitLoad = {
   /** amps / rating, 0–1+. */
   fraction: number;
   status: CircuitStatus;
+  /** Units, and accessories as "scroller on 12 (1st electric)", with no wattage entered. */
   notCounted: string[];
   switchModeUnits: number;
+  /** Powered accessories drawing from this circuit through their host unit, listed per unit. */
+  accessories: AccessoryLoad[];
 };
 export type PhaseLoad = { phase: string; loadVA: number; amps: number; circuits: number };
 export type PowerResult = {
@@ -95,6 +99,8 @@ export function checkPower(input: {
   fixtures: CheckFixture[];
   circuits: CheckCircuit[];
   electrical: EffectiveElectrical;
+  /** Accessories of any kind; the powered ones count on their host unit's circuit. */
+  accessories?: CheckAccessory[];
 }): PowerResult {
   const e = input.electrical;
   const findings: Finding[] = [];
@@ -103,11 +109,22 @@ export function checkPower(input: {
   const members = new Map<number, CheckFixture[]>(input.circuits.map((c) => [c.id, []]));
   const notCounted: { id: number; label: string }[] = [];
   const notOnCircuit: { id: number; label: string }[] = [];
+  const poweredOf = poweredAccessoriesByHost(input.accessories ?? []);
+  const accessoryLoads = (u: CheckFixture): AccessoryLoad[] =>
+    (poweredOf.get(u.id) ?? []).map((a) => ({
+      accessoryId: a.id,
+      fixtureId: u.id,
+      unit: u.label,
+      kind: a.kind,
+      wattage: a.wattage,
+    }));
 
   for (const f of input.fixtures) {
     // The circuit field names where the unit is plugged in; without one, its dimmer does.
     const ref = f.circuit?.trim() || f.dimmer?.trim() || "";
     if (f.wattage == null) notCounted.push({ id: f.id, label: f.label });
+    for (const a of accessoryLoads(f))
+      if (a.wattage == null) notCounted.push({ id: f.id, label: `${a.kind} on ${f.label}` });
     if (!ref) {
       notOnCircuit.push({ id: f.id, label: f.label });
       continue;
@@ -129,7 +146,10 @@ export function checkPower(input: {
   const circuits = input.circuits.map((c): CircuitLoad => {
     const units = members.get(c.id)!;
     const counted = units.filter((u) => u.wattage != null);
-    const loadVA = counted.reduce((sum, u) => sum + (u.wattage as number), 0);
+    const accessories = units.flatMap(accessoryLoads);
+    const loadVA =
+      counted.reduce((sum, u) => sum + (u.wattage as number), 0) +
+      accessories.reduce((sum, a) => sum + (a.wattage ?? 0), 0);
     const a = amps(loadVA, e.voltage);
     const status = circuitStatus(a, c.ratingA, e.derating);
     const switchMode = units.filter((u) => u.loadKind === "switch-mode");
@@ -162,14 +182,30 @@ export function checkPower(input: {
         fixtureIds: switchMode.map((u) => u.id),
       });
     }
-    const missing = units.filter((u) => u.wattage == null);
-    if (missing.length) {
+    if (c.dimmed && accessories.length) {
       findings.push({
         area: "power",
         severity: "warning",
         subject,
-        message: `${missing.length} unit${missing.length === 1 ? "" : "s"} with no wattage not counted: the total is incomplete.`,
-        fixtureIds: missing.map((u) => u.id),
+        message: `${accessories.map((a) => `the ${a.kind} on unit ${a.unit}`).join(", ")} ${accessories.length === 1 ? "is" : "are"} counted on this dimmed circuit through ${accessories.length === 1 ? "its" : "their"} host: an accessory's driver needs constant power. Feed it from a non-dim circuit or its own supply.`,
+        fixtureIds: [...new Set(accessories.map((a) => a.fixtureId))],
+      });
+    }
+    const missing = units.filter((u) => u.wattage == null);
+    const missingAccessories = accessories.filter((a) => a.wattage == null);
+    if (missing.length || missingAccessories.length) {
+      const parts = [
+        missing.length ? `${missing.length} unit${missing.length === 1 ? "" : "s"}` : "",
+        missingAccessories.length
+          ? `${missingAccessories.length} powered accessor${missingAccessories.length === 1 ? "y" : "ies"}`
+          : "",
+      ].filter(Boolean);
+      findings.push({
+        area: "power",
+        severity: "warning",
+        subject,
+        message: `${parts.join(" and ")} with no wattage not counted: the total is incomplete.`,
+        fixtureIds: [...new Set([...missing.map((u) => u.id), ...missingAccessories.map((a) => a.fixtureId)])],
       });
     }
     return {
@@ -185,8 +221,9 @@ export function checkPower(input: {
       continuousW: continuousCapacityW(e.voltage, c.ratingA, e.derating),
       fraction: a / c.ratingA,
       status,
-      notCounted: missing.map((u) => u.label),
+      notCounted: [...missing.map((u) => u.label), ...missingAccessories.map((a) => `${a.kind} on ${a.unit}`)],
       switchModeUnits: switchMode.length,
+      accessories,
     };
   });
 
@@ -217,8 +254,8 @@ export function checkPower(input: {
       area: "power",
       severity: "warning",
       subject: "Wattage",
-      message: `${notCounted.length} unit${notCounted.length === 1 ? " has" : "s have"} no wattage and ${notCounted.length === 1 ? "is" : "are"} not counted: the totals are incomplete.`,
-      fixtureIds: notCounted.map((u) => u.id),
+      message: `${notCounted.length} unit${notCounted.length === 1 ? " or powered accessory has" : "s or powered accessories have"} no wattage and ${notCounted.length === 1 ? "is" : "are"} not counted: the totals are incomplete.`,
+      fixtureIds: [...new Set(notCounted.map((u) => u.id))],
     });
   if (notOnCircuit.length)
     findings.push({

@@ -48,6 +48,7 @@ export function reportSheet(report: ChecksReport, part: ReportPart): SheetOut {
           col("% of rating", 12),
           col("Continuous limit W", 18),
           col("Status", 16),
+          col("Accessories W/VA", 30),
           col("Not counted", 30),
         ],
         rows: report.power.circuits.map((c) => [
@@ -61,6 +62,7 @@ export function reportSheet(report: ChecksReport, part: ReportPart): SheetOut {
           pct(c.fraction),
           r1(c.continuousW),
           c.status,
+          c.accessories.map((a) => `${a.kind} on ${a.unit}: ${a.wattage ?? "not counted"}`).join(", ") || null,
           c.notCounted.join(", ") || null,
         ]),
       };

@@ -56,5 +56,7 @@ export type CheckAccessory = {
   universe: number | null;
   address: number | null;
   footprint: number | null;
+  /** Watts (VA) entered for it; null when not entered. Only powered kinds need one (see accessory-power.ts). */
+  wattage: number | null;
   weightKg: number | null;
 };

@@ -169,6 +169,7 @@ type AccessoryRow = {
   universe: number | null;
   address: number | null;
   footprint: number | null;
+  wattage: number;
   weightKg: number;
 };
 type CircuitRow = { id: number; name: string; ratingA: number; phase: string | null; power: string };
@@ -232,7 +233,7 @@ export async function getChecksReport({ productionId }: { productionId: number }
       productionId,
     ),
     select<AccessoryRow>(
-      "SELECT id, fixture_id AS fixtureId, kind, universe, address, footprint, weight_kg AS weightKg FROM accessories WHERE production_id = ?",
+      "SELECT id, fixture_id AS fixtureId, kind, universe, address, footprint, wattage, weight_kg AS weightKg FROM accessories WHERE production_id = ?",
       productionId,
     ),
     select<CircuitRow>(
@@ -298,6 +299,8 @@ export async function getChecksReport({ productionId }: { productionId: number }
       universe: a.universe,
       address: a.address,
       footprint: a.footprint,
+      // 0 is the table's "not entered", as for the types.
+      wattage: Number(a.wattage) > 0 ? Number(a.wattage) : null,
       weightKg: Number(a.weightKg) > 0 ? Number(a.weightKg) : null,
     })),
     positions: positions.map(toCheckPosition),

@@ -41,7 +41,16 @@ describe("rated load", () => {
       positions: [batten(200)],
       fixtures: [unit({ id: 1, weightKg: 8, alongM: 2 }), unit({ id: 2, weightKg: 9, alongM: 8 })],
       accessories: [
-        { id: 1, fixtureId: 1, kind: "scroller", universe: null, address: null, footprint: null, weightKg: 2.5 },
+        {
+          id: 1,
+          fixtureId: 1,
+          kind: "scroller",
+          universe: null,
+          address: null,
+          footprint: null,
+          wattage: 50,
+          weightKg: 2.5,
+        },
       ],
       settings: { cableKgPerM: 0.5, hardwareKgPerUnit: 1 },
     });

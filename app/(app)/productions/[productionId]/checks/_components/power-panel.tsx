@@ -152,6 +152,13 @@ function CircuitRow({
       <td className="tabular-nums">
         {load?.units ?? 0}
         {load?.notCounted.length ? ` (${load.notCounted.length} not counted)` : ""}
+        {load?.accessories.length ? (
+          <span className="block text-xs text-muted" data-testid="circuit-accessories">
+            {load.accessories
+              .map((a) => `+ ${a.kind} on ${a.unit}: ${a.wattage == null ? "not counted" : `${fmt(a.wattage, 0)} VA`}`)
+              .join("; ")}
+          </span>
+        ) : null}
       </td>
       <td className="tabular-nums">{fmt(load?.loadVA ?? 0, 0)}</td>
       <td className="tabular-nums">{fmt(load?.amps ?? 0)}</td>
