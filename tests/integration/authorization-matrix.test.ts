@@ -130,6 +130,7 @@ const EXPECTED: Record<string, Scope> = {
   "GET /api/productions/[productionId]/notes/current-cue": ALL,
   "PUT /api/productions/[productionId]/notes/current-cue": ["designer", "electrician", "stageManager"],
   "GET /api/productions/[productionId]/notes/work-call": ALL,
+  "GET /api/productions/[productionId]/notes/counts": ALL, // the badges' open-note counts
   "POST /api/productions/[productionId]/notes/channel-check": DE,
   "POST /api/productions/[productionId]/notes/spot": ALL,
   "GET /api/productions/[productionId]/notes/show-reports": ALL,

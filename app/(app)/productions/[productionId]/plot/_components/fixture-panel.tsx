@@ -4,6 +4,7 @@ import { useState } from "react";
 import { describePoint, formatLength, parseLength } from "@/lib/optics";
 import { markForThrow } from "@/lib/plot/throw-to-mark";
 import type { PlotFixture } from "@/lib/plot/slim-fixtures";
+import { NotesButton } from "@/components/notes/notes-button";
 import { BeamNumbers } from "./beam-numbers";
 import { PanelField, PanelSection } from "./panel-field";
 import type { PanelProps } from "./panel-props";
@@ -48,9 +49,15 @@ export function FixturePanel(p: PanelProps & { fixture: PlotFixture }) {
   return (
     <>
       <PanelSection title="Unit" testId="fixture-panel">
-        <p className="text-sm font-medium" data-testid="fixture-title">
-          Unit {f.unitNumber} · {f.positionName}
-        </p>
+        <div className="flex items-center justify-between gap-2">
+          <p className="text-sm font-medium" data-testid="fixture-title">
+            Unit {f.unitNumber} · {f.positionName}
+          </p>
+          <NotesButton
+            productionId={p.production.id}
+            target={{ subject: "fixture", subjectId: f.id, label: `unit ${f.unitNumber}, ${f.positionName}` }}
+          />
+        </div>
         <p className="text-xs text-muted">
           {f.typeName} ({f.family}){f.purpose ? ` · ${f.purpose}` : ""}
         </p>

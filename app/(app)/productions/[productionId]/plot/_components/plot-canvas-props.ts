@@ -3,6 +3,7 @@
 import type { RefObject } from "react";
 import type { ProductionDto } from "@/lib/dto/production";
 import type { PlotPayload } from "@/hooks/use-plot";
+import type { NoteCounts } from "@/lib/notes/counts";
 import type { CanvasEvents, CanvasHandle, LayerVisibility, Selection, Tool } from "./canvas-types";
 
 export type PlotCanvasProps = {
@@ -14,4 +15,6 @@ export type PlotCanvasProps = {
   canEdit: boolean;
   events: CanvasEvents;
   handleRef: RefObject<CanvasHandle | null>;
+  /** Open notes per unit, drawn as badges (components/notes/draw-note-badges.ts). */
+  noteCounts?: NoteCounts;
 };

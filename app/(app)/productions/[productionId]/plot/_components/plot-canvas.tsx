@@ -18,6 +18,7 @@ import { drawPoolEdges, drawPoolWashes } from "@/components/plot/draw-pools";
 import { drawUnderlay } from "@/components/plot/draw-underlay";
 import { LayerSnapshot } from "@/components/plot/snapshot";
 import { drawOverlay } from "./draw-overlay";
+import { drawNoteBadges } from "@/components/notes/draw-note-badges";
 import { stageBounds, stageOutline, extendBounds } from "@/lib/plot/stage-outline";
 import { fitBounds, visiblePlanBounds, zoomAbout, type View } from "@/lib/plot/view";
 import { useViewNavigation } from "@/components/plot/use-view-navigation";
@@ -96,7 +97,7 @@ function PlotCanvas(props: PlotCanvasProps) {
       }
     }
     redraw();
-  }, [data, layers, selection, palette, size, props.tool, redraw]);
+  }, [data, layers, selection, palette, size, props.tool, props.noteCounts, redraw]);
 
   useLayoutEffect(() => {
     // Size, colours and the fitted view before anything is drawn: Konva draws every layer as soon as the
@@ -282,6 +283,8 @@ function PlotCanvas(props: PlotCanvasProps) {
         drawMarks(ctx, v, [item], pal, new Set([pv.id]));
         drawFixtures(ctx, v, [item], pal, { labels: p.layers.labels, selected: new Set([pv.id]), visible: sz });
       }
+      const badges = p.layers.fixtures ? drawNoteBadges(ctx, v, its, p.noteCounts, pal, sz) : 0;
+      if (container.current) container.current.dataset.noteBadges = String(badges);
       drawOverlay(ctx, v, sz, pal, {
         gesture: gesture.current,
         draft: draft.current,

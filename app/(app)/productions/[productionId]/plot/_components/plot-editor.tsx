@@ -3,6 +3,7 @@
 import dynamic from "next/dynamic";
 import { useCallback, useEffect, useRef, useState } from "react";
 import { usePlot, type PlotWirePayload } from "@/hooks/use-plot";
+import { useNoteCounts } from "@/hooks/use-note-counts";
 import type { ProductionDto } from "@/lib/dto/production";
 import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import type { NumberingDirection } from "@/lib/plot/along-position";
@@ -48,6 +49,7 @@ export function PlotEditor({
   const [dragging, setDragging] = useState(false);
   const data = usePlot(production.id, initial, production.headHeight, { paused: dragging });
   const cmd = useCommands(production.id);
+  const noteCounts = useNoteCounts(production.id).data;
   const [tool, setTool] = useState<Tool>("select");
   const [layers, setLayers] = useState<LayerVisibility>(ALL_ON);
   const [selection, setSelection] = useState<Selection>(EMPTY_SELECTION);
@@ -194,6 +196,7 @@ export function PlotEditor({
             canEdit={canEdit}
             events={events}
             handleRef={handle}
+            noteCounts={noteCounts}
           />
           <p className="pointer-events-none absolute right-3 top-2 rounded bg-surface/80 px-2 py-0.5 text-xs text-muted">
             {hintFor(tool, canEdit)}

@@ -1,5 +1,6 @@
 "use client";
 
+import { NotesButton } from "@/components/notes/notes-button";
 import { formatLength, parseLength } from "@/lib/optics";
 import { POSITION_KINDS, POSITION_KIND_LABELS } from "@/lib/rig/position-kinds";
 import { numberingOrder, numberingOrderVertical, renumber, type NumberingDirection } from "@/lib/plot/along-position";
@@ -51,6 +52,11 @@ export function PositionPanel(p: PanelProps & { position: PositionDto }) {
 
   return (
     <PanelSection title="Hanging position" testId="position-panel">
+      <NotesButton
+        productionId={p.production.id}
+        target={{ subject: "position", subjectId: pos.id, label: `position ${pos.name}` }}
+        className="self-start"
+      />
       <PanelField
         label="Name"
         value={pos.name}
