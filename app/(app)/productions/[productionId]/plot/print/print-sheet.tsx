@@ -1,46 +1,60 @@
 import type { ProductionDto } from "@/lib/dto/production";
 import type { PlotData } from "@/lib/dto/plot";
+import type { Point } from "@/lib/optics";
+import { leaderEnd } from "@/lib/plot/label-placement";
 import { stageOutline } from "@/lib/plot/stage-outline";
-import { symbolOutline, symbolShape } from "@/lib/plot/symbol";
+import { symbolOutline } from "@/lib/plot/symbol";
 import type { Bounds } from "@/lib/plot/view";
-import { MARGIN_MM, PAPERS, TITLE_MM, drawingArea, type PaperName } from "./paper";
+import type { SheetLayout } from "./paper";
+import { LABEL_FONT_MM, type KeyEntry, sheetLabels, sheetMap, sheetUnits, symbolMm } from "./sheet-plan";
+import { SymbolKey } from "./symbol-key";
+import { TitleBlock, type TitleFields } from "./title-block";
 
-type Pt = { x: number; y: number };
-
-/** One landscape sheet as SVG in millimetres: the plan at a true scale, and Throwline's title block. */
+/**
+ * One sheet as SVG in millimetres: the plan at a true scale with its labels placed clear of each other
+ * and of the units, the key of symbols in use, and Throwline's title block. On screen the sheet shrinks
+ * to the window's width; on paper it is exactly the sheet's size.
+ */
 export function PrintSheet({
   production,
   data,
-  paper,
+  layout,
   scale,
   bounds,
+  keyEntries,
+  title,
 }: {
   production: ProductionDto;
   data: PlotData;
-  paper: PaperName;
+  layout: SheetLayout;
   scale: { ratio: number; label: string };
   bounds: Bounds;
+  keyEntries: KeyEntry[];
+  title: TitleFields;
 }) {
-  const sheet = PAPERS[paper];
-  const area = drawingArea(paper);
+  const { sheet, drawing } = layout;
   const k = 1000 / scale.ratio; // mm on paper per metre on stage
-  const cx = (bounds.minX + bounds.maxX) / 2;
-  const cy = (bounds.minY + bounds.maxY) / 2;
-  const fits = (bounds.maxX - bounds.minX) * k <= area.w && (bounds.maxY - bounds.minY) * k <= area.h;
-  // biome-ignore lint/correctness/noComponentHookFactories: X and Y are the sheet's coordinate maps (mm), not components
-  const X = (p: Pt) => MARGIN_MM + area.w / 2 + (p.x - cx) * k;
-  // biome-ignore lint/correctness/noComponentHookFactories: see X
-  const Y = (p: Pt) => MARGIN_MM + area.h / 2 - (p.y - cy) * k;
-  const pts = (list: Pt[]) => list.map((p) => `${X(p).toFixed(2)},${Y(p).toFixed(2)}`).join(" ");
+  const fits = (bounds.maxX - bounds.minX) * k <= drawing.w && (bounds.maxY - bounds.minY) * k <= drawing.h;
+  const toSheet = sheetMap(drawing, bounds, k);
+  const pts = (list: Point[]) =>
+    list
+      .map(toSheet)
+      .map((p) => `${p.x.toFixed(2)},${p.y.toFixed(2)}`)
+      .join(" ");
   const o = stageOutline(production);
-  const sym = Math.max(2.5, 0.45 * k);
-  const date = new Date().toISOString().slice(0, 10);
-  const tb = { x: MARGIN_MM, y: sheet.h - MARGIN_MM - TITLE_MM + 4, w: sheet.w - 2 * MARGIN_MM, h: TITLE_MM - 4 };
+  const sym = symbolMm(k);
+  const units = sheetUnits(data, toSheet, sym);
+  const { labels, unplaced } = sheetLabels(data, toSheet, units, sym, drawing, [
+    { text: "CL", a: toSheet(o.centreLine[1]), b: toSheet(o.centreLine[0]) },
+    { text: production.datumName, a: toSheet(o.datumLine[0]), b: toSheet(o.datumLine[1]) },
+  ]);
+  const notes = unplaced.length ? [`No room on the plan to label: ${unplaced.join(", ")}`] : [];
   return (
     <>
-      <style>{`@page { size: ${sheet.w}mm ${sheet.h}mm; margin: 0 }`}</style>
+      <style>{`@page { size: ${sheet.w}mm ${sheet.h}mm; margin: 0 }
+@media print { svg[data-testid="print-sheet"] { width: ${sheet.w}mm !important; height: ${sheet.h}mm !important; max-width: none !important; } }`}</style>
       {!fits ? (
-        <p className="no-print mb-2 text-sm text-caution">
+        <p className="no-print mb-2 text-sm text-caution" role="status">
           The plan does not fit this sheet at {scale.label}; the edges are cut off. Choose a larger sheet or a smaller
           scale.
         </p>
@@ -49,16 +63,23 @@ export function PrintSheet({
         role="img"
         aria-label="The printed plot"
         data-testid="print-sheet"
-        width={`${sheet.w}mm`}
-        height={`${sheet.h}mm`}
         viewBox={`0 0 ${sheet.w} ${sheet.h}`}
-        className="bg-white text-black"
+        style={{ width: "100%", maxWidth: `${sheet.w}mm`, height: "auto", display: "block" }}
+        className="bg-white text-black shadow print:shadow-none"
         fontFamily="IBM Plex Sans, sans-serif"
       >
         <clipPath id="drawing">
-          <rect x={MARGIN_MM} y={MARGIN_MM} width={area.w} height={area.h} />
+          <rect x={drawing.x} y={drawing.y} width={drawing.w} height={drawing.h} />
         </clipPath>
-        <rect x={MARGIN_MM} y={MARGIN_MM} width={area.w} height={area.h} fill="none" stroke="#000" strokeWidth="0.35" />
+        <rect
+          x={drawing.x}
+          y={drawing.y}
+          width={drawing.w}
+          height={drawing.h}
+          fill="none"
+          stroke="#000"
+          strokeWidth="0.35"
+        />
         <g clipPath="url(#drawing)" fill="none" stroke="#000">
           <polygon points={pts(o.deck)} strokeWidth="0.35" />
           {o.apron.length ? <polygon points={pts(o.apron)} strokeWidth="0.35" /> : null}
@@ -70,40 +91,29 @@ export function PrintSheet({
           {data.areaZones.map((z) => (
             <polygon key={z.id} points={pts(z.polygon)} strokeWidth="0.2" strokeDasharray="1 1" />
           ))}
-          {data.positions.map((p) => (
-            <g key={p.id}>
-              {p.x2 != null && p.y2 != null ? (
-                <polyline
-                  points={pts([
-                    { x: p.x1, y: p.y1 },
-                    { x: p.x2, y: p.y2 },
-                  ])}
-                  strokeWidth="0.6"
-                />
-              ) : (
-                <circle cx={X({ x: p.x1, y: p.y1 })} cy={Y({ x: p.x1, y: p.y1 })} r="1.5" strokeWidth="0.4" />
-              )}
-              <text
-                x={X({ x: Math.min(p.x1, p.x2 ?? p.x1), y: p.y1 }) - 2}
-                y={Y({ x: p.x1, y: p.y1 }) + 1}
-                fontSize="2.6"
-                textAnchor="end"
-                fill="#000"
-                stroke="none"
-              >
-                {p.name}
-              </text>
-            </g>
-          ))}
-          {data.fixtures.map((f) => {
-            const ang = f.computed.panDeg == null ? 90 : -f.computed.panDeg;
-            const poly = symbolOutline(symbolShape(f.family))
+          {data.positions.map((p) => {
+            const a = toSheet({ x: p.x1, y: p.y1 });
+            return p.x2 != null && p.y2 != null ? (
+              <polyline
+                key={p.id}
+                points={pts([
+                  { x: p.x1, y: p.y1 },
+                  { x: p.x2, y: p.y2 },
+                ])}
+                strokeWidth="0.6"
+              />
+            ) : (
+              <circle key={p.id} cx={a.x} cy={a.y} r="1.2" strokeWidth="0.4" />
+            );
+          })}
+          {units.map((u) => {
+            const poly = symbolOutline(u.shape)
               .map(([a, b]) => `${(a * sym).toFixed(2)},${(b * sym).toFixed(2)}`)
               .join(" ");
             return (
-              <g key={f.id} transform={`translate(${X(f).toFixed(2)} ${Y(f).toFixed(2)})`}>
-                <polygon points={poly} transform={`rotate(${ang.toFixed(1)})`} fill="#fff" strokeWidth="0.25" />
-                {f.channel != null ? (
+              <g key={u.id} transform={`translate(${u.at.x.toFixed(2)} ${u.at.y.toFixed(2)})`} data-testid="sheet-unit">
+                <polygon points={poly} transform={`rotate(${u.angleDeg.toFixed(1)})`} fill="#fff" strokeWidth="0.25" />
+                {u.channel != null ? (
                   <text
                     fontSize={Math.min(2.4, sym * 0.45)}
                     textAnchor="middle"
@@ -111,77 +121,37 @@ export function PrintSheet({
                     fill="#000"
                     stroke="none"
                   >
-                    {f.channel}
+                    {u.channel}
                   </text>
                 ) : null}
               </g>
             );
           })}
+          {labels.map((l) => {
+            const end = leaderEnd(l.box, l.anchor);
+            const font = l.kind === "line" ? LABEL_FONT_MM * 0.85 : LABEL_FONT_MM;
+            return (
+              <g key={l.id} data-testid="sheet-label" data-box={`${l.box.x},${l.box.y},${l.box.w},${l.box.h}`}>
+                {l.leader ? (
+                  <line x1={l.anchor.x} y1={l.anchor.y} x2={end.x} y2={end.y} stroke="#000" strokeWidth="0.15" />
+                ) : null}
+                <text
+                  x={l.box.x}
+                  y={l.box.y + l.box.h * 0.78}
+                  fontSize={font}
+                  fontStyle={l.kind === "line" ? "italic" : undefined}
+                  fill="#000"
+                  stroke="none"
+                >
+                  {l.text}
+                </text>
+              </g>
+            );
+          })}
         </g>
-        <g data-testid="title-block" fontSize="3" fill="#000">
-          <rect x={tb.x} y={tb.y} width={tb.w} height={tb.h} fill="none" stroke="#000" strokeWidth="0.5" />
-          <line
-            x1={tb.x + tb.w * 0.45}
-            y1={tb.y}
-            x2={tb.x + tb.w * 0.45}
-            y2={tb.y + tb.h}
-            stroke="#000"
-            strokeWidth="0.25"
-          />
-          <text x={tb.x + 4} y={tb.y + 8} fontSize="6" fontWeight="600">
-            {production.name}
-          </text>
-          <text x={tb.x + 4} y={tb.y + 14}>
-            {production.venue || "Venue not set"} · light plot
-          </text>
-          <text x={tb.x + 4} y={tb.y + 20} fontSize="2.4">
-            Planning drawing. Check dimensions on site; hanging loads follow the venue&apos;s ratings and a qualified
-            person.
-          </text>
-          {[
-            ["Revision", "—"],
-            ["Date", date],
-            ["Scale", `${scale.label} on ${PAPERS[paper].label}`],
-            ["Datum", `${production.datumName} (y = 0), centre line x = 0`],
-          ].map(([k2, v], i) => (
-            <text key={k2} x={tb.x + tb.w * 0.45 + 4 + (i % 2) * (tb.w * 0.27)} y={tb.y + 8 + Math.floor(i / 2) * 9}>
-              <tspan fontSize="2.2" fill="#555">
-                {k2.toUpperCase()}{" "}
-              </tspan>
-              {v}
-            </text>
-          ))}
-          <ScaleRule x={tb.x + tb.w - 60} y={tb.y + tb.h - 4} k={k} units={production.displayUnits} />
-        </g>
+        <SymbolKey box={layout.key} entries={keyEntries} columns={layout.keyColumns} notes={notes} />
+        <TitleBlock box={layout.title} fields={title} k={k} units={production.displayUnits} />
       </svg>
     </>
-  );
-}
-
-function ScaleRule({ x, y, k, units }: { x: number; y: number; k: number; units: "metric" | "imperial" }) {
-  const unit = units === "metric" ? 1 : 0.3048 * 5; // 1 m, or 5 ft, per segment
-  const seg = unit * k;
-  const n = Math.max(1, Math.min(5, Math.floor(50 / seg)));
-  return (
-    <g>
-      {Array.from({ length: n }, (_, i) => (
-        <rect
-          key={i}
-          x={x + i * seg}
-          y={y - 1.5}
-          width={seg}
-          height="1.5"
-          fill={i % 2 ? "#fff" : "#000"}
-          stroke="#000"
-          strokeWidth="0.2"
-        />
-      ))}
-      <text x={x} y={y - 2.5} fontSize="2.2">
-        0
-      </text>
-      <text x={x + n * seg} y={y - 2.5} fontSize="2.2" textAnchor="end">
-        {units === "metric" ? `${n} m` : `${n * 5} ft`}
-      </text>
-    </g>
   );
 }
