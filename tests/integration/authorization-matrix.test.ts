@@ -143,6 +143,20 @@ const EXPECTED: Record<string, Scope> = {
   "POST /api/productions/[productionId]/invitations": D,
   "DELETE /api/productions/[productionId]/invitations/[invitationId]": D,
   "POST /api/productions/[productionId]/invitations/[invitationId]/resend": D,
+  // Revisions: everyone reads them and each thing's history; issuing and restoring from one is the designer's and
+  // the electrician's (a restore also needs each restored field's own right); the shop's address is the owner's;
+  // each member chooses for themselves whether the revision e-mail comes.
+  "GET /api/productions/[productionId]/revisions": ALL,
+  "POST /api/productions/[productionId]/revisions": DE,
+  "GET /api/productions/[productionId]/revisions/[revisionId]": ALL,
+  "POST /api/productions/[productionId]/revisions/[revisionId]/restore": DE,
+  "GET /api/productions/[productionId]/revisions/compare": ALL,
+  "GET /api/productions/[productionId]/revisions/equipment": ALL,
+  "GET /api/productions/[productionId]/revisions/shop": D,
+  "PUT /api/productions/[productionId]/revisions/shop": D,
+  "GET /api/productions/[productionId]/revisions/mail-choice": ALL,
+  "PUT /api/productions/[productionId]/revisions/mail-choice": ALL,
+  "GET /api/productions/[productionId]/history": ALL,
   // Accepting: the link's token is the proof.
   "POST /api/invitations/accept": "public",
 };
@@ -189,7 +203,11 @@ beforeAll(async () => {
 
 const MISSING = 2_147_483_000;
 /** Query strings a read needs to be a valid request at all. */
-const QUERY: Record<string, string> = { "GET /api/productions/[productionId]/cues/export": "?format=csv" };
+const QUERY: Record<string, string> = {
+  "GET /api/productions/[productionId]/cues/export": "?format=csv",
+  "GET /api/productions/[productionId]/revisions/compare": "?from=current&to=current",
+  "GET /api/productions/[productionId]/history": `?entity=fixture&id=${MISSING}`,
+};
 function concretePath(pattern: string, method: string): string {
   return pattern.replace(/\[(\w+)\]/g, (_, name: string) => {
     if (name === "productionId") return String(productionId);
