@@ -19,6 +19,7 @@ export function NotesButton({
   target,
   defaultKind,
   compact = false,
+  cellControl = false,
   className = "",
 }: {
   productionId: number;
@@ -26,6 +27,8 @@ export function NotesButton({
   defaultKind?: NoteKind;
   /** In a table row: the count alone (or a faint "+") at a cell's height. */
   compact?: boolean;
+  /** In the rig table: the control the arrow keys land on in its cell. */
+  cellControl?: boolean;
   className?: string;
 }) {
   const { data: counts } = useNoteCounts(productionId);
@@ -49,7 +52,9 @@ export function NotesButton({
           e.stopPropagation();
           setOpen(true);
         }}
-        onKeyDown={(e) => e.stopPropagation()}
+        data-cell-control={cellControl ? "" : undefined}
+        // A row that acts on Enter or Space (the cue list) must not take the button's own press; arrows still move.
+        onKeyDown={(e) => (e.key === "Enter" || e.key === " ") && e.stopPropagation()}
         className={`inline-flex min-h-7 min-w-7 items-center justify-center gap-1 rounded-full border px-1.5 text-xs font-semibold tabular-nums pointer-coarse:min-h-11 pointer-coarse:min-w-11 print:hidden ${tone} ${className}`}
       >
         {compact

@@ -2,6 +2,7 @@
 // One thing's notes in a modal dialog: what is still to do on it, a quick note with the thing filled in,
 // and a way into the Notes tab filtered to it (where notes are moved along and closed).
 import { useEffect, useRef, useState } from "react";
+import { createPortal } from "react-dom";
 import Link from "next/link";
 import { Button } from "@/components/ui/button";
 import { useAddNote, useProductionNotes } from "@/hooks/use-note-counts";
@@ -57,7 +58,9 @@ export function TargetNotesDialog({
     }
   }
 
-  return (
+  // In the page's body, so a table cell's styles (no wrapping, sticky columns) don't reach the panel. React
+  // still bubbles its events to the opener's ancestors: the dialog stops clicks and keys from reaching them.
+  return createPortal(
     <dialog
       ref={dialog}
       aria-labelledby={titleId}
@@ -151,6 +154,7 @@ export function TargetNotesDialog({
       >
         All notes on {target.label} in the Notes tab
       </Link>
-    </dialog>
+    </dialog>,
+    document.body,
   );
 }

@@ -15,6 +15,7 @@ import { compareCueNumbers, formatCueNumber, formatFadeTime, formatSplitTime } f
 import type { CueDto } from "@/lib/dto/cue";
 import { useVirtualRows } from "./use-virtual-rows";
 import { useSavedTableView } from "./use-saved-table-view";
+import { NotesButton } from "@/components/notes/notes-button";
 
 const ROW = 30; // px, fixed so long lists render only what is in view
 
@@ -25,6 +26,21 @@ const columns = [
     sortingFn: (a, b) => compareCueNumbers(a.original.number, b.original.number),
     enableHiding: false,
     cell: (c) => <span className="font-semibold tabular-nums">{formatCueNumber(c.getValue())}</span>,
+  }),
+  col.display({
+    id: "notes",
+    header: "Notes",
+    cell: (c) => (
+      <NotesButton
+        compact
+        productionId={(c.table.options.meta as { productionId: number }).productionId}
+        target={{
+          subject: "cue",
+          subjectId: c.row.original.id,
+          label: `cue ${formatCueNumber(c.row.original.number)}`,
+        }}
+      />
+    ),
   }),
   col.accessor("label", { header: "Label" }),
   col.accessor("page", { header: "Page", sortingFn: "alphanumeric", sortUndefined: "last" }),
@@ -80,6 +96,7 @@ export function CueListTable({
     data: cues,
     columns,
     getRowId: (r) => String(r.id),
+    meta: { productionId },
     state: { sorting: view.sorting, columnVisibility: view.visibility, globalFilter: filter },
     onSortingChange: (u) => setView((v) => ({ ...v, sorting: typeof u === "function" ? u(v.sorting) : u })),
     onColumnVisibilityChange: (u) =>

@@ -132,7 +132,12 @@ export function FocusCall({ data }: { data: FocusPageData }) {
             </div>
             {inBrowser && chart ? (
               <>
-                <ChartCard chart={chart} landmarks={landmarks} units={data.production.displayUnits} />
+                <ChartCard
+                  chart={chart}
+                  landmarks={landmarks}
+                  units={data.production.displayUnits}
+                  productionId={data.production.id}
+                />
                 <div className="grid gap-3 sm:grid-cols-2">
                   <figure className="m-0" data-testid="pool-plan">
                     <div>

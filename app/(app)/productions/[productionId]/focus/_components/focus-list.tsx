@@ -71,7 +71,13 @@ export function FocusList({ data }: { data: FocusPageData }) {
         <>
           <div className="grid gap-4 lg:grid-cols-2" data-testid="chart-list">
             {charts.map((c) => (
-              <ChartCard key={c.id} chart={c} landmarks={landmarks} units={data.production.displayUnits} />
+              <ChartCard
+                key={c.id}
+                chart={c}
+                landmarks={landmarks}
+                units={data.production.displayUnits}
+                productionId={data.production.id}
+              />
             ))}
           </div>
           {shown.length > charts.length && (

@@ -19,6 +19,7 @@ import {
 import type { FixtureDto } from "@/lib/dto/fixture";
 import { RIG_COLUMNS, headerWithUnit, type Units } from "@/lib/rig/columns";
 import { compareUnitNumbers } from "@/lib/rig/unit-number";
+import { NotesButton } from "@/components/notes/notes-button";
 import { EditableCell, type Choice } from "./editable-cell";
 import { EmptyOrInherited } from "./inherited-value";
 import { showValue } from "./cell-value";
@@ -95,6 +96,28 @@ export function RigTable({
         ),
       meta: { computed: !c.importKey },
     }));
+    // Open notes on each unit, beside its number (the counts come from one request for the whole table).
+    const afterUnit = defs.findIndex((d) => d.id === "unitNumber") + 1;
+    defs.splice(afterUnit, 0, {
+      id: "notes",
+      header: "Notes",
+      enableSorting: false,
+      enableHiding: false,
+      cell: ({ row }) => (
+        <span className="flex justify-center px-1">
+          <NotesButton
+            compact
+            cellControl
+            productionId={productionId}
+            target={{
+              subject: "fixture",
+              subjectId: row.original.id,
+              label: `unit ${row.original.unitNumber}, ${row.original.positionName}`,
+            }}
+          />
+        </span>
+      ),
+    });
     if (selectable) {
       defs.unshift({
         id: "select",
