@@ -6,6 +6,7 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from "sequelize";
+import { FIXTURE_MOUNTINGS, type FixtureMounting } from "./fixture-mountings";
 
 export type DmxMode = { name: string; footprint: number };
 
@@ -27,6 +28,11 @@ export class FixtureType extends Model<InferAttributes<FixtureType>, InferCreati
   declare frameSize: string | null;
   declare goboSize: string | null;
   declare lensDropM: CreationOptional<number>;
+  /** Where the lens sits against the trim: under the pipe (less lensDropM), above it (plus lensRiseM), level, or on the floor. */
+  declare mounting: CreationOptional<FixtureMounting>;
+  declare lensRiseM: CreationOptional<number>;
+  /** The room one unit takes along a pipe (centre to centre), used to space units placed on the plot. */
+  declare bodyWidthM: CreationOptional<number>;
   declare cells: CreationOptional<number>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
@@ -52,6 +58,9 @@ export function initFixtureType(sequelize: Sequelize) {
       frameSize: { type: DataTypes.STRING(40), allowNull: true },
       goboSize: { type: DataTypes.STRING(20), allowNull: true },
       lensDropM: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0.4 },
+      mounting: { type: DataTypes.ENUM(...FIXTURE_MOUNTINGS), allowNull: false, defaultValue: "under-hung" },
+      lensRiseM: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0.35 },
+      bodyWidthM: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0.45 },
       cells: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
       version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
       createdAt: DataTypes.DATE,

@@ -1,3 +1,5 @@
+import type { FixtureMounting } from "@/models/fixture-mountings";
+
 export type DmxMode = { name: string; footprint: number };
 
 export type FixtureTypeDto = {
@@ -19,6 +21,9 @@ export type FixtureTypeDto = {
   frameSize: string | null;
   goboSize: string | null;
   lensDropM: number;
+  mounting: FixtureMounting;
+  lensRiseM: number;
+  bodyWidthM: number;
   cells: number;
   version: number;
   updatedAt: string;

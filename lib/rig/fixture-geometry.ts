@@ -1,6 +1,7 @@
 // What the server computes for every fixture it returns: where the lens is, where it aims,
 // and its pools at the deck and at head height. The API is the authority for these numbers.
 import { beamAim, poolAtPlane, type PlanePool, type Vec3 } from "@/lib/optics";
+import type { FixtureMounting } from "@/models/fixture-mountings";
 
 /** A fixture's own stored aim: where it hangs, where it points, how big and soft its beam is (null = the default). */
 export type FixtureAim = {
@@ -17,8 +18,11 @@ export type FixtureAim = {
 export type GeometryInput = FixtureAim & {
   focusPoint: { x: number; y: number } | null;
   position: { trimHeight: number };
-  type: { coneMinDeg: number; coneMaxDeg: number; defaultSoftnessDeg: number; lensDropM: number };
+  type: { coneMinDeg: number; coneMaxDeg: number; defaultSoftnessDeg: number } & MountedType;
 };
+
+/** What a type says about where its lens sits; a type stored before mountings existed is under-hung. */
+export type MountedType = { lensDropM: number; mounting?: FixtureMounting; lensRiseM?: number };
 
 export type FixtureGeometry = {
   lensHeight: number;
@@ -39,13 +43,30 @@ export type FixtureGeometry = {
   head: PlanePool | null;
 };
 
-/** Lens height defaults to the position's trim less the type's lens drop (booms and ladders set their own). */
-export function defaultLensHeight(trimHeight: number, lensDropM: number): number {
-  return Math.max(0, trimHeight - lensDropM);
+/**
+ * The lens height a unit takes from its position's trim when it has none of its own (booms and ladders
+ * set their own). The trim is the height of the pipe, rail or truss chord the unit is clamped to (for a
+ * floor position, of the deck or platform it stands on):
+ * - under-hung: hanging below the pipe, the lens sits the type's lens drop under the trim;
+ * - over-hung: standing on a rail or truss top, its lens rise above the trim;
+ * - side-arm: clamped beside the pipe on an arm, the lens is level with the pipe (common practice, no source);
+ * - floor: standing on its base or stand, its lens rise above the surface at the trim.
+ * The one home of this rule: the API, the plot's previews and the studies all ask here.
+ */
+export function defaultLensHeight(trimHeight: number, type: MountedType): number {
+  switch (type.mounting ?? "under-hung") {
+    case "over-hung":
+    case "floor":
+      return Math.max(0, trimHeight + (type.lensRiseM ?? 0));
+    case "side-arm":
+      return Math.max(0, trimHeight);
+    default:
+      return Math.max(0, trimHeight - type.lensDropM);
+  }
 }
 
 export function computeFixtureGeometry(f: GeometryInput, headHeight: number): FixtureGeometry {
-  const lensHeight = f.lensHeight ?? defaultLensHeight(f.position.trimHeight, f.type.lensDropM);
+  const lensHeight = f.lensHeight ?? defaultLensHeight(f.position.trimHeight, f.type);
   const coneDeg = f.coneDeg ?? f.type.coneMaxDeg;
   const softnessDeg = f.softnessDeg ?? f.type.defaultSoftnessDeg;
   const source: Vec3 = { x: f.x, y: f.y, z: lensHeight };

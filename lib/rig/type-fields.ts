@@ -5,12 +5,25 @@ import { fixtureTypeFieldsSchema } from "@/lib/validation/rig";
 import { FIXTURE_FAMILIES, formatLength, fromDatasheet, parseLength, type Family } from "@/lib/optics";
 import { FLAT_TENTH_ACROSS_BAND } from "@/lib/optics/profile";
 import type { FixtureTypeDto } from "@/lib/dto/fixture-type";
+import { FIXTURE_MOUNTINGS, MOUNTING_LABELS, mountingFromText } from "./mounting";
 
 export type TypeColumn = {
   key: string;
   header: string;
   fields: Array<keyof FixtureTypeDto>;
-  kind: "text" | "cone" | "number" | "optionalNumber" | "datasheet" | "modes" | "length" | "optionalText" | "readOnly";
+  kind:
+    | "text"
+    | "cone"
+    | "number"
+    | "optionalNumber"
+    | "datasheet"
+    | "modes"
+    | "length"
+    | "optionalText"
+    | "choice"
+    | "readOnly";
+  /** The values a "choice" column offers, with their words. */
+  choices?: ReadonlyArray<{ value: string; label: string }>;
 };
 
 export const TYPE_COLUMNS: TypeColumn[] = [
@@ -33,7 +46,19 @@ export const TYPE_COLUMNS: TypeColumn[] = [
   { key: "dmxModes", header: "DMX modes (slots)", fields: ["dmxModes"], kind: "modes" },
   { key: "frameSize", header: "Frame", fields: ["frameSize"], kind: "optionalText" },
   { key: "goboSize", header: "Gobo", fields: ["goboSize"], kind: "optionalText" },
+  // Where the lens sits against the trim (lib/rig/fixture-geometry.ts): the drop counts under-hung, the rise
+  // over-hung and on the floor; a side arm holds the lens level with the pipe.
+  {
+    key: "mounting",
+    header: "Mounting",
+    fields: ["mounting"],
+    kind: "choice",
+    choices: FIXTURE_MOUNTINGS.map((m) => ({ value: m, label: MOUNTING_LABELS[m] })),
+  },
   { key: "lensDropM", header: "Lens drop", fields: ["lensDropM"], kind: "length" },
+  { key: "lensRiseM", header: "Lens rise", fields: ["lensRiseM"], kind: "length" },
+  // The room one unit takes on a pipe, centre to centre: units placed on the plot are spaced by it.
+  { key: "bodyWidthM", header: "Body width", fields: ["bodyWidthM"], kind: "length" },
   { key: "cells", header: "Cells", fields: ["cells"], kind: "number" },
 ];
 
@@ -44,7 +69,9 @@ export function typeCellText(t: FixtureTypeDto, column: TypeColumn, units: "metr
     case "modes":
       return t.dmxModes.map((m) => `${m.name} ${m.footprint}`).join(", ");
     case "length":
-      return formatLength(t.lensDropM, units);
+      return formatLength(t[column.fields[0]] as number, units);
+    case "choice":
+      return column.choices?.find((c) => c.value === t[column.fields[0]])?.label ?? String(t[column.fields[0]]);
     case "datasheet": {
       // The model's own 50 % and 10 % full angles at the widest cone, as a datasheet would print them.
       const s = Math.min(t.defaultSoftnessDeg, t.coneMaxDeg / 2);
@@ -159,8 +186,18 @@ export function parseTypeCell(
         break;
       }
       case "length":
-        patch = { lensDropM: parseLength(text, units === "imperial" ? "ft" : "m") };
+        patch = { [column.fields[0]]: parseLength(text, units === "imperial" ? "ft" : "m") };
         break;
+      case "choice": {
+        const value = column.key === "mounting" ? mountingFromText(text) : null;
+        if (!value)
+          return {
+            ok: false,
+            message: `${header}: choose one of ${(column.choices ?? []).map((c) => c.label).join(", ")}`,
+          };
+        patch = { [column.fields[0]]: value };
+        break;
+      }
       case "optionalText":
         patch = { [column.fields[0]]: text.trim() || null };
         break;

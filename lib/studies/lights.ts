@@ -12,6 +12,8 @@ import {
   type LitBeam,
 } from "@/lib/optics";
 import type { StudyLight } from "@/lib/dto/studies";
+import { defaultLensHeight } from "@/lib/rig/fixture-geometry";
+import type { FixtureMounting } from "@/models/fixture-mountings";
 
 export type StudyFixture = {
   id: number;
@@ -32,6 +34,8 @@ export type StudyFixture = {
     coneMaxDeg: number;
     defaultSoftnessDeg: number;
     lensDropM: number;
+    mounting?: FixtureMounting;
+    lensRiseM?: number;
     lensApertureM: number;
     peakCandela: number;
     /** A zoom's range and its peak at the narrow end: the peak follows the zoom setting (lib/optics/zoom-peak.ts). */
@@ -79,7 +83,7 @@ export function studyLights(
     const t = transmissionOf(f.colour, s.colours);
     for (const m of t.missing) missing.add(m);
     const output = lightFromLevel(Math.min(1, level / 100), curve) * t.factor;
-    const source = { x: f.x, y: f.y, z: f.lensHeight ?? Math.max(0, f.trimHeight - f.type.lensDropM) };
+    const source = { x: f.x, y: f.y, z: f.lensHeight ?? defaultLensHeight(f.trimHeight, f.type) };
     const focus = { x: f.focus.x, y: f.focus.y, z: s.deckHeight + (f.aim === "head" ? s.headHeight : 0) };
     const coneDeg = f.coneDeg ?? f.type.coneMaxDeg;
     const softnessDeg = f.softnessDeg ?? f.type.defaultSoftnessDeg;

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { POSITION_KINDS } from "@/lib/rig/position-kinds";
 import { versionSchema } from "./common";
+import { FIXTURE_MOUNTINGS } from "@/models/fixture-mountings";
 
 const coord = (what: string) =>
   z
@@ -73,6 +74,17 @@ export const fixtureTypeFieldsSchema = z.object({
   frameSize: z.string().trim().max(40).nullable(),
   goboSize: z.string().trim().max(20).nullable(),
   lensDropM: z.number().min(0).max(5),
+  mounting: z.enum(FIXTURE_MOUNTINGS, {
+    error: `Mounting must be one of: ${FIXTURE_MOUNTINGS.join(", ")}`,
+  }),
+  lensRiseM: z
+    .number({ error: "Lens rise must be a length" })
+    .min(0, { error: "Lens rise cannot be negative" })
+    .max(5, { error: "Lens rise: at most 5 m" }),
+  bodyWidthM: z
+    .number({ error: "Body width must be a length" })
+    .min(0.05, { error: "Body width: at least 5 cm" })
+    .max(5, { error: "Body width: at most 5 m" }),
   cells: z.number().int().min(1).max(64),
 });
 const coneOrder = (t: { coneMinDeg?: number; coneMaxDeg?: number }) =>
@@ -87,6 +99,9 @@ export const createFixtureTypeSchema = fixtureTypeFieldsSchema
     frameSize: true,
     goboSize: true,
     lensDropM: true,
+    mounting: true,
+    lensRiseM: true,
+    bodyWidthM: true,
     cells: true,
   })
   .strict()

@@ -72,7 +72,11 @@ describe("a datasheet's beam and field angles typed into the types table", () =>
     frameSize: null,
     goboSize: null,
     lensDropM: 0.45,
+    mounting: "under-hung" as const,
+    lensRiseM: 0.35,
+    bodyWidthM: 0.45,
     cells: 1,
+    loadKind: null,
     version: 1,
     updatedAt: "2026-12-05T10:00:00.000Z",
   };

@@ -42,10 +42,10 @@ export function TypeCell({
     </span>
   ) : null;
 
-  async function commit() {
+  async function commit(typed = text) {
     if (closing.current) return;
-    if (text === shown) return setEditing(false);
-    const parsed = parseTypeCell(column, text, units, type);
+    if (typed === shown) return setEditing(false);
+    const parsed = parseTypeCell(column, typed, units, type);
     if (!parsed.ok) return setMessage({ tone: "error", text: parsed.message });
     closing.current = true;
     setEditing(false);
@@ -83,6 +83,33 @@ export function TypeCell({
         >
           {shown || <span className="text-muted">–</span>}
         </button>
+        {note}
+      </span>
+    );
+  }
+  if (column.kind === "choice") {
+    return (
+      <span>
+        <select
+          autoFocus
+          aria-label={label}
+          className="min-h-8 w-full min-w-32 rounded border border-accent bg-surface px-1"
+          value={text}
+          onChange={(e) => {
+            setText(e.target.value);
+            void commit(e.target.value);
+          }}
+          onBlur={() => setEditing(false)}
+          onKeyDown={(e) => {
+            if (e.key === "Escape") setEditing(false);
+          }}
+        >
+          {(column.choices ?? []).map((c) => (
+            <option key={c.value} value={c.label}>
+              {c.label}
+            </option>
+          ))}
+        </select>
         {note}
       </span>
     );
