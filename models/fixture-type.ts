@@ -6,6 +6,7 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from "sequelize";
+import { LOAD_KINDS, type LoadKindValue } from "./electrical-options";
 import { FIXTURE_MOUNTINGS, type FixtureMounting } from "./fixture-mountings";
 
 export type DmxMode = { name: string; footprint: number };
@@ -33,6 +34,8 @@ export class FixtureType extends Model<InferAttributes<FixtureType>, InferCreati
   declare lensRiseM: CreationOptional<number>;
   /** The room one unit takes along a pipe (centre to centre), used to space units placed on the plot. */
   declare bodyWidthM: CreationOptional<number>;
+  /** lamp or switch-mode; null: not said, read from the family (lib/checks/load-kind.ts). */
+  declare loadKind: CreationOptional<LoadKindValue | null>;
   declare cells: CreationOptional<number>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
@@ -61,6 +64,7 @@ export function initFixtureType(sequelize: Sequelize) {
       mounting: { type: DataTypes.ENUM(...FIXTURE_MOUNTINGS), allowNull: false, defaultValue: "under-hung" },
       lensRiseM: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0.35 },
       bodyWidthM: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0.45 },
+      loadKind: { type: DataTypes.ENUM(...LOAD_KINDS), allowNull: true },
       cells: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
       version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
       createdAt: DataTypes.DATE,

@@ -95,6 +95,7 @@ const FIXTURE_TYPE_FIELDS: Record<string, Permission> = {
   wattage: "rig.editElectrics",
   weightKg: "rig.editElectrics",
   dmxModes: "rig.editElectrics",
+  loadKind: "rig.editElectrics",
 };
 
 const CUE_FIELDS: Record<string, Permission> = {

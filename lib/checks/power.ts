@@ -191,6 +191,19 @@ export function checkPower(input: {
         fixtureIds: [...new Set(accessories.map((a) => a.fixtureId))],
       });
     }
+    // Not an inference: a multi-slot type read as a lamp only because its Load is empty is worth a look.
+    const unsure = c.dimmed
+      ? units.filter((u) => u.loadKind === "lamp" && u.loadKindSource === "family" && (u.footprint ?? 1) > 1)
+      : [];
+    if (unsure.length) {
+      findings.push({
+        area: "power",
+        severity: "warning",
+        subject,
+        message: `${unsure.map((u) => `Unit ${u.label} (${u.typeName})`).join(", ")} ${unsure.length === 1 ? "takes" : "take"} several DMX slots on this dimmed circuit and ${unsure.length === 1 ? "its type does" : "their types do"} not say lamp or switch-mode: counted as a lamp. If it has an electronic supply, set the type's Load to switch-mode.`,
+        fixtureIds: unsure.map((u) => u.id),
+      });
+    }
     const missing = units.filter((u) => u.wattage == null);
     const missingAccessories = accessories.filter((a) => a.wattage == null);
     if (missing.length || missingAccessories.length) {

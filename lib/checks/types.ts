@@ -37,6 +37,8 @@ export type CheckFixture = {
   /** Kilograms from the type; null when not entered. */
   weightKg: number | null;
   loadKind: LoadKind;
+  /** "set" on the type, or read from its "family" because the type does not say (lib/checks/load-kind.ts). */
+  loadKindSource?: "set" | "family";
   /** Multi-cell bodies: one row per cell, one body. The body's weight is counted once. */
   bodyKey: string | null;
 };

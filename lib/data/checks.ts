@@ -160,6 +160,7 @@ type TypeRow = {
   wattage: number;
   weightKg: number;
   dmxModes: unknown;
+  loadKind: "lamp" | "switch-mode" | null;
   cells: number;
 };
 type AccessoryRow = {
@@ -225,7 +226,7 @@ export async function getChecksReport({ productionId }: { productionId: number }
       productionId,
     ),
     select<TypeRow>(
-      "SELECT id, name, family, wattage, weight_kg AS weightKg, dmx_modes AS dmxModes, cells FROM fixture_types WHERE production_id = ?",
+      "SELECT id, name, family, wattage, weight_kg AS weightKg, dmx_modes AS dmxModes, load_kind AS loadKind, cells FROM fixture_types WHERE production_id = ?",
       productionId,
     ),
     select<PositionRow>(
@@ -268,6 +269,7 @@ export async function getChecksReport({ productionId }: { productionId: number }
     // A type's wattage is the whole unit's; each cell row of a multi-cell body draws its share on its own circuit.
     const cells = f.bodyKey && t && t.cells > 1 ? t.cells : 1;
     const position = positionById.get(f.positionId);
+    const load = t ? loadKindOfType(t) : ({ kind: "lamp", source: "family" } as const);
     return {
       id: f.id,
       label: position ? `${f.unitNumber} (${position.name})` : f.unitNumber,
@@ -284,7 +286,8 @@ export async function getChecksReport({ productionId }: { productionId: number }
       // Types store 0 for "not entered"; no real unit draws 0 W or weighs 0 kg, so 0 is reported as missing.
       wattage: t && Number(t.wattage) > 0 ? Number(t.wattage) / cells : null,
       weightKg: t && Number(t.weightKg) > 0 ? Number(t.weightKg) : null,
-      loadKind: t ? loadKindOfType(t) : "lamp",
+      loadKind: load.kind,
+      loadKindSource: load.source,
       bodyKey: f.bodyKey,
       alongM: position ? along(position, Number(f.x), Number(f.y)) : null,
     };

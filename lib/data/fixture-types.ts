@@ -28,6 +28,7 @@ const TYPE_KEYS = [
   "mounting",
   "lensRiseM",
   "bodyWidthM",
+  "loadKind",
   "cells",
   "version",
   "updatedAt",

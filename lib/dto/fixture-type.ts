@@ -24,6 +24,8 @@ export type FixtureTypeDto = {
   mounting: FixtureMounting;
   lensRiseM: number;
   bodyWidthM: number;
+  /** lamp or switch-mode; null: not said, the checks read it from the family. */
+  loadKind: "lamp" | "switch-mode" | null;
   cells: number;
   version: number;
   updatedAt: string;

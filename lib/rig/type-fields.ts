@@ -43,6 +43,8 @@ export const TYPE_COLUMNS: TypeColumn[] = [
   { key: "peakCandelaNarrow", header: "Peak at narrowest (cd)", fields: ["peakCandelaNarrow"], kind: "optionalNumber" },
   { key: "wattage", header: "Power (W)", fields: ["wattage"], kind: "number" },
   { key: "weightKg", header: "Weight (kg)", fields: ["weightKg"], kind: "number" },
+  // lamp or switch-mode; empty leaves it to the family (the power check says which it used).
+  { key: "loadKind", header: "Load", fields: ["loadKind"], kind: "optionalText" },
   { key: "dmxModes", header: "DMX modes (slots)", fields: ["dmxModes"], kind: "modes" },
   { key: "frameSize", header: "Frame", fields: ["frameSize"], kind: "optionalText" },
   { key: "goboSize", header: "Gobo", fields: ["goboSize"], kind: "optionalText" },

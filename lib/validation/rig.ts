@@ -85,6 +85,9 @@ export const fixtureTypeFieldsSchema = z.object({
     .number({ error: "Body width must be a length" })
     .min(0.05, { error: "Body width: at least 5 cm" })
     .max(5, { error: "Body width: at most 5 m" }),
+  loadKind: z
+    .enum(["lamp", "switch-mode"], { error: "Load must be lamp or switch-mode, or empty to go by the family" })
+    .nullable(),
   cells: z.number().int().min(1).max(64),
 });
 const coneOrder = (t: { coneMinDeg?: number; coneMaxDeg?: number }) =>
@@ -102,6 +105,7 @@ export const createFixtureTypeSchema = fixtureTypeFieldsSchema
     mounting: true,
     lensRiseM: true,
     bodyWidthM: true,
+    loadKind: true,
     cells: true,
   })
   .strict()

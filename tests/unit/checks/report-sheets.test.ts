@@ -88,7 +88,8 @@ describe("report sheets", () => {
       "93.8",
       "1920",
       "over-continuous",
-      "",
+      "", // no powered accessories
+      "", // nothing not counted
     ]);
   });
 
