@@ -1,5 +1,6 @@
 import "server-only";
 import { acceptInvitation } from "@/lib/data/invitations";
+import { joinInvitedProduction } from "@/lib/data/pending-invitations";
 import { LANDING_TAB } from "./roles";
 import { getCurrentUser } from "./session";
 import { startSession } from "./sign-in";
@@ -24,4 +25,10 @@ export async function acceptAndSignIn(input: { token: string; name?: string; pas
   });
   if (accepted.createdAccount) await startSession(accepted.userId);
   return { ...accepted, landing: landingForRole(accepted.productionId, accepted.role) };
+}
+
+/** Joins, as the signed-in account, a production that invited the account's own address (no link needed). */
+export async function joinPendingInvitation(a: { invitationId: number; userId: number }) {
+  const joined = await joinInvitedProduction(a);
+  return { ...joined, landing: landingForRole(joined.productionId, joined.role) };
 }

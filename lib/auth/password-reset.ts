@@ -3,8 +3,10 @@ import { createPasswordReset, consumePasswordReset } from "@/lib/data/password-r
 import { endUserSessions } from "@/lib/data/sessions";
 import { appOrigin } from "@/lib/mail/links";
 import { noAccountMessage, passwordResetMessage } from "@/lib/mail/messages";
-import { sendMail } from "@/lib/mail/send";
+import { queueMail } from "@/lib/mail/send";
+import { clientAddress } from "./client-address";
 import { hashPassword } from "./password";
+import { countMailRequest } from "./request-limits";
 import { clearAccountFailures } from "./sign-in-limits";
 import { startSession } from "./sign-in";
 
@@ -13,10 +15,12 @@ export const RESET_REQUESTED =
   "If a Throwline account uses that address, a link to choose a new password is on its way. Check your e-mail.";
 
 /**
- * A request for a reset link. Known or unknown, the address gets an e-mail and the page the same
- * answer, so the form cannot be used to learn who has an account.
+ * A request for a reset link. Known or unknown, the address gets an e-mail (queued, sent after the
+ * response) and the page the same answer, so the form cannot be used to learn who has an account.
+ * Requests are limited per address and per client (429 with the wait).
  */
 export async function requestPasswordReset(email: string): Promise<string> {
+  await countMailRequest({ action: "reset", email, client: await clientAddress() });
   const reset = await createPasswordReset(email);
   const origin = await appOrigin();
   const message = reset
@@ -24,7 +28,7 @@ export async function requestPasswordReset(email: string): Promise<string> {
     : noAccountMessage({
         signUpHint: `To use Throwline, start a production of your own at ${origin}/sign-up or ask a production's owner for an invitation.`,
       });
-  await sendMail({ productionId: null, to: email.trim().toLowerCase(), ...message });
+  await queueMail({ productionId: null, to: email.trim().toLowerCase(), ...message });
   return RESET_REQUESTED;
 }
 

@@ -1,22 +1,13 @@
 import "server-only";
-import { headers } from "next/headers";
 import { AppError } from "@/lib/errors";
-import { authenticate, createUser } from "@/lib/data/users";
+import { authenticate } from "@/lib/data/users";
 import { createSessionRecord, endSessionRecord } from "@/lib/data/sessions";
+import { clientAddress } from "./client-address";
 import { assertSignInAllowed, clearAccountFailures, recordSignInFailure } from "./sign-in-limits";
 import { getSession, SESSION_TTL_SECONDS } from "./session";
 
 // One message for an unknown address and a wrong password: the form never reveals which accounts exist.
 export const WRONG_CREDENTIALS = "That e-mail and password do not match an account.";
-
-/**
- * The address a request came from. Next's server sets X-Forwarded-For to the peer's address; behind a load
- * balancer, the balancer's own entry is the first. Only the per-address limit uses it.
- */
-async function clientAddress(): Promise<string> {
-  const h = await headers();
-  return h.get("x-forwarded-for")?.split(",")[0].trim() || h.get("x-real-ip") || "unknown";
-}
 
 /** Signs this browser in as the user (a new server-side session record). */
 export async function startSession(userId: number) {
@@ -34,12 +25,6 @@ export async function signInWithPassword(input: { email: string; password: strin
     throw new AppError("unauthorized", WRONG_CREDENTIALS);
   }
   await clearAccountFailures(input.email);
-  await startSession(user.id);
-  return user;
-}
-
-export async function signUpAndSignIn(input: { name: string; email: string; password: string }) {
-  const user = await createUser(input);
   await startSession(user.id);
   return user;
 }

@@ -11,3 +11,6 @@ export const LINK_TOKEN_PATTERN = /^[A-Za-z0-9_-]{43}$/;
 
 export const INVITATION_TTL_DAYS = 7;
 export const RESET_TTL_MINUTES = 60;
+// A day: long enough to finish from another device or after a rehearsal, short enough that an old mail
+// in a shared inbox is no standing offer. Common practice, no source.
+export const SIGN_UP_TTL_HOURS = 24;

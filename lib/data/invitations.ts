@@ -91,8 +91,9 @@ export async function createInvitation(a: {
   });
 }
 
-const openWhere = (productionId: number, email?: string) => ({
-  productionId,
+/** The one rule of an open invitation: not used, not withdrawn, not expired (a production's, an address's, or both). */
+export const openWhere = (productionId: number | null, email?: string) => ({
+  ...(productionId !== null ? { productionId } : {}),
   ...(email ? { email } : {}),
   usedAt: null,
   withdrawnAt: null,
@@ -184,7 +185,7 @@ export async function lookUpInvitation(token: string): Promise<InvitationLook> {
   };
 }
 
-function stateOf(row: Invitation | null): "invalid" | "used" | "withdrawn" | "expired" | "open" {
+export function stateOf(row: Invitation | null): "invalid" | "used" | "withdrawn" | "expired" | "open" {
   if (!row) return "invalid";
   if (row.usedAt) return "used";
   if (row.withdrawnAt) return "withdrawn";

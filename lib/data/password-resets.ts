@@ -17,15 +17,19 @@ export type ResetState = keyof typeof RESET_REFUSALS | "open";
 export async function createPasswordReset(
   email: string,
 ): Promise<{ token: string; expiresAt: Date; userId: number } | null> {
-  const { User, sequelize } = getDb();
-  const user = await User.findOne({ where: { email: normalise(email) }, attributes: ["id"] });
+  const user = await getDb().User.findOne({ where: { email: normalise(email) }, attributes: ["id"] });
   if (!user) return null;
+  return { ...(await issuePasswordReset(user.id)), userId: user.id };
+}
+
+/** A reset link for an account already looked up (a sign-up request for an address that has one offers it). */
+export async function issuePasswordReset(userId: number): Promise<{ token: string; expiresAt: Date }> {
   const token = newLinkToken();
   const expiresAt = new Date(Date.now() + RESET_TTL_MINUTES * 60_000);
-  await sequelize.query("INSERT INTO password_resets (token_hash, user_id, expires_at) VALUES (?, ?, ?)", {
-    replacements: [hashLinkToken(token), user.id, expiresAt],
+  await getDb().sequelize.query("INSERT INTO password_resets (token_hash, user_id, expires_at) VALUES (?, ?, ?)", {
+    replacements: [hashLinkToken(token), userId, expiresAt],
   });
-  return { token, expiresAt, userId: user.id };
+  return { token, expiresAt };
 }
 
 type ResetRow = { userId: number; expiresAt: Date; usedAt: Date | null };

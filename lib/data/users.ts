@@ -1,8 +1,6 @@
 import "server-only";
-import { UniqueConstraintError } from "sequelize";
 import { getDb } from "@/models";
-import { AppError } from "@/lib/errors";
-import { DUMMY_HASH, hashPassword, verifyPassword } from "@/lib/auth/password";
+import { DUMMY_HASH, verifyPassword } from "@/lib/auth/password";
 import type { UserDto } from "@/lib/dto/people";
 
 const toUserDto = (u: { id: number; email: string; name: string }): UserDto => ({
@@ -20,33 +18,6 @@ export async function authenticate({ email, password }: { email: string; passwor
   const ok = await verifyPassword(password, user?.passwordHash ?? DUMMY_HASH);
   if (!user || !ok) return null;
   return toUserDto(user);
-}
-
-export async function createUser({
-  email,
-  name,
-  password,
-}: {
-  email: string;
-  name: string;
-  password: string;
-}): Promise<UserDto> {
-  const { User } = getDb();
-  try {
-    const user = await User.create({
-      email: normalise(email),
-      name: name.trim(),
-      passwordHash: await hashPassword(password),
-    });
-    return toUserDto(user);
-  } catch (err) {
-    if (err instanceof UniqueConstraintError) {
-      throw new AppError("conflict", "An account with that e-mail already exists. Sign in instead.", {
-        fieldErrors: { email: ["already registered"] },
-      });
-    }
-    throw err;
-  }
 }
 
 export async function getUserByEmail(email: string): Promise<UserDto | null> {

@@ -17,6 +17,7 @@ export const signInSchema = z.object({
     .max(200, { error: `That is longer than any Throwline password (at most ${PASSWORD_MAX_BYTES} characters)` }),
 });
 
+/** The fields of a new account (the finishing form and an invitation accepted as a new account use them). */
 export const signUpSchema = z.object({
   name: z
     .string({ error: "Name is required" })
@@ -33,4 +34,30 @@ export const signUpSchema = z.object({
     .refine((p) => utf8Bytes(p) <= PASSWORD_MAX_BYTES, {
       error: `Use at most ${PASSWORD_MAX_BYTES} characters (accented letters and symbols count as two or more)`,
     }),
+});
+
+/** A token as it appears in a mailed link (43 base64url characters); anything else is refused unread. */
+export const linkTokenSchema = z
+  .string({ error: "The link's token is missing" })
+  .regex(/^[A-Za-z0-9_-]{43}$/, { error: "That link is not valid" });
+
+/** Asking to sign up: a name and an address. The password is chosen from the mailed link. */
+export const signUpRequestSchema = z.strictObject({
+  name: signUpSchema.shape.name,
+  email: signUpSchema.shape.email,
+});
+
+/** Finishing a sign-up from its link: the address is the link's, so only a name and a password. */
+export const finishSignUpSchema = z.strictObject({
+  token: linkTokenSchema,
+  name: signUpSchema.shape.name,
+  password: signUpSchema.shape.password,
+});
+
+/** Joining a production that invited the signed-in account's address. */
+export const joinInvitationSchema = z.strictObject({
+  invitationId: z.coerce
+    .number({ error: "Choose an invitation" })
+    .int({ error: "Choose an invitation" })
+    .positive({ error: "Choose an invitation" }),
 });

@@ -1,7 +1,8 @@
 // Sessions end on the server, sign-in attempts are limited per account and per address, and bodies are
 // capped before they are read. Through the real route handlers against MariaDB.
 import { describe, expect, it } from "vitest";
-import { ApiSession, BASE_URL, freshUser } from "./support/api";
+import { signUpLinkToken } from "@/tests/support/sign-up";
+import { ApiSession, BASE_URL, freshUser, postVia, uniqueEmail } from "./support/api";
 import { SIGN_IN_LIMITS } from "@/lib/auth/sign-in-limits";
 
 /** A unique client address per test, so per-address counts never leak between tests (X-Forwarded-For). */
@@ -105,19 +106,14 @@ describe("bodies and passwords", () => {
   });
 
   it("a password longer than bcrypt can check gets its own message at sign-up, naming the field", async () => {
-    const r = await new ApiSession().post("/api/auth/sign-up", {
-      name: "Long",
-      email: `long-${Date.now()}@example.test`,
-      password: "p".repeat(73),
-    });
+    const email = uniqueEmail("long");
+    const s = new ApiSession();
+    const token = await signUpLinkToken(postVia(s), { name: "Long", email });
+    const r = await s.post("/api/auth/sign-up/complete", { token, name: "Long", password: "p".repeat(73) });
     expect(r.status).toBe(400);
     expect(r.json.error.fieldErrors.password[0]).toMatch(/at most 72 characters/);
-    // 72 ASCII characters are exactly 72 bytes: accepted.
-    const ok = await new ApiSession().post("/api/auth/sign-up", {
-      name: "Long",
-      email: `long-ok-${Date.now()}@example.test`,
-      password: "p".repeat(72),
-    });
+    // 72 ASCII characters are exactly 72 bytes: accepted (and the refused try did not use up the link).
+    const ok = await s.post("/api/auth/sign-up/complete", { token, name: "Long", password: "p".repeat(72) });
     expect(ok.status).toBe(201);
   });
 });

@@ -5,7 +5,7 @@ import * as mariadb from "mariadb";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DEMO_USERS } from "@/tests/support/demo";
 import { linkIn, waitForMail } from "@/tests/support/outbox";
-import { ApiSession, demoProductionId, demoSession, uniqueEmail } from "./support/api";
+import { ApiSession, demoProductionId, demoSession, freshUser, uniqueEmail } from "./support/api";
 
 let owner: ApiSession;
 let pid = 0;
@@ -154,13 +154,9 @@ describe("an invitation by e-mail", () => {
   }, 60_000);
 
   it("a signed-in user with an account joins with it (no second account)", async () => {
-    const email = uniqueEmail("existing");
-    const s = new ApiSession();
-    expect(
-      (await s.post("/api/auth/sign-up", { name: "Has Account", email, password: "a-long-test-password" })).status,
-    ).toBe(201);
+    const { session: s, email } = await freshUser("existing");
     await invite(email, "electrician");
-    const { token } = await tokenFor(email);
+    const { token } = await tokenFor(email, 2); // the first mail was the sign-up link
     const r = await s.post("/api/invitations/accept", { token });
     expect(r.status, JSON.stringify(r.json)).toBe(201);
     expect(r.json.landing).toBe(`/productions/${pid}`);

@@ -9,7 +9,8 @@ export default function SignUpPage() {
     <section className="rounded-lg border border-line bg-surface p-6">
       <h1 className="mb-1 text-xl font-semibold">Create an account</h1>
       <p className="mb-5 text-sm text-muted">
-        Start a production of your own, or wait for an invitation to someone else&apos;s.
+        Tell us your name and e-mail address. We send a link there; from it you choose a password, then start a
+        production of your own or join the ones that have invited you.
       </p>
       <SignUpForm />
       <p className="mt-5 text-sm text-muted">

@@ -9,6 +9,12 @@ import { FormMessage } from "@/components/ui/form-message";
 
 export function SignUpForm() {
   const [state, action, pending] = useActionState(signUpAction, IDLE);
+  if (state.status === "ok")
+    return (
+      <p role="status" className="text-sm">
+        {state.message}
+      </p>
+    );
   return (
     <form action={action} className="flex flex-col gap-3" noValidate>
       <TextField
@@ -23,23 +29,15 @@ export function SignUpForm() {
         label="E-mail"
         name="email"
         type="email"
-        autoComplete="username"
+        autoComplete="email"
         required
+        hint="We send a link there; you choose your password from it."
         defaultValue={typedValue(state, "email")}
         error={fieldError(state, "email")}
       />
-      <TextField
-        label="Password"
-        name="password"
-        type="password"
-        autoComplete="new-password"
-        required
-        hint="At least 10 characters."
-        error={fieldError(state, "password")}
-      />
       <FormMessage message={state.status === "error" ? state.message : undefined} />
       <Button type="submit" disabled={pending}>
-        {pending ? "Creating…" : "Create account"}
+        {pending ? "Sending…" : "Send me a link"}
       </Button>
     </form>
   );

@@ -1,5 +1,6 @@
 // A small HTTP client with a cookie jar, for integration tests through the real route handlers.
 import { DEMO_PASSWORD, DEMO_USERS, type DemoRole, demoIdFrom } from "../../support/demo";
+import { type Post, signUpThroughMail, TEST_PASSWORD } from "../../support/sign-up";
 
 export { DEMO_PASSWORD, DEMO_USERS };
 export const BASE_URL = process.env.APP_URL ?? "http://127.0.0.1:3000";
@@ -22,11 +23,12 @@ export class ApiSession {
   /** The session cookie as a request header value, for raw fetches (multipart, binary downloads). */
   cookie = "";
 
-  async request(method: string, path: string, body?: unknown, rawBody?: string) {
+  async request(method: string, path: string, body?: unknown, rawBody?: string, headers: Record<string, string> = {}) {
     const res = await fetchOnce(BASE_URL + path, {
       method,
       redirect: "manual",
       headers: {
+        ...headers,
         ...(this.cookie ? { cookie: this.cookie } : {}),
         ...(body !== undefined || rawBody !== undefined ? { "content-type": "application/json" } : {}),
       },
@@ -60,13 +62,25 @@ export class ApiSession {
 
 export const uniqueEmail = (tag: string) => `${tag}-${Date.now()}-${Math.floor(Math.random() * 1e6)}@example.test`;
 
-/** Signs up a fresh account and returns its session. */
-export async function freshUser(tag: string) {
+/** This session as a sign-up helper's POST (tests/support/sign-up.ts). */
+export const postVia =
+  (s: ApiSession): Post =>
+  (path, body, headers) =>
+    s.request("POST", path, body, undefined, headers);
+
+/**
+ * A fresh account, signed up the way a person does it (the link read from the mail stand-in's capture),
+ * and its signed-in session.
+ */
+export async function freshUser(tag: string, opts: { password?: string } = {}) {
   const s = new ApiSession();
   const email = uniqueEmail(tag);
-  const r = await s.post("/api/auth/sign-up", { name: `Test ${tag}`, email, password: "a-long-test-password" });
-  if (r.status !== 201) throw new Error(`sign-up failed: ${r.status} ${JSON.stringify(r.json)}`);
-  return { session: s, email, user: r.json.user };
+  const { user } = await signUpThroughMail(postVia(s), {
+    name: `Test ${tag}`,
+    email,
+    password: opts.password ?? TEST_PASSWORD,
+  });
+  return { session: s, email, user };
 }
 
 /** A session of one of the demo accounts. */

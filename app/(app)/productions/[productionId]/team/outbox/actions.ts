@@ -5,9 +5,9 @@ import { z } from "zod";
 import { memberAction } from "@/lib/auth/member-action";
 import { retryQueuedMail } from "@/lib/mail/send";
 
-/** Tries every queued message whose next attempt is due now, instead of waiting for the minute timer. */
+/** Tries every message of this production still queued now, instead of waiting for its next turn. */
 export const retryMailAction = memberAction("team.manage", z.object({}), async (_input, { productionId }) => {
-  const sent = await retryQueuedMail();
+  const sent = await retryQueuedMail({ productionId });
   revalidatePath(`/productions/${productionId}/team/outbox`);
   return {
     message: sent
