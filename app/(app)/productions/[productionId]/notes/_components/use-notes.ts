@@ -3,7 +3,6 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { apiFetch } from "@/lib/http/api-client";
 import type { CurrentCueDto, NoteDto } from "@/lib/notes/dto";
-import type { SpotContribution } from "@/lib/notes/spot";
 import type { WorkCallStop } from "@/lib/notes/work-call";
 
 export const notesKey = (productionId: number) => ["productions", productionId, "notes"] as const;
@@ -78,17 +77,4 @@ export function useCurrentCue(productionId: number, initial: CurrentCueDto) {
   return { current: query.data, set };
 }
 
-export type SpotAnswer = {
-  cueId: number | null;
-  stateLabel: string;
-  total: number;
-  contributions: SpotContribution[];
-  warnings: string[];
-};
-
-export function useSpot(productionId: number) {
-  return useMutation({
-    mutationFn: (req: { x: number; y: number; cueId?: number }) =>
-      apiFetch<SpotAnswer>(`${api(productionId)}/spot`, { method: "POST", json: req }),
-  });
-}
+export { type SpotAnswer, useSpot } from "@/hooks/use-spot";

@@ -4,6 +4,7 @@ import dynamic from "next/dynamic";
 import { useCallback, useEffect, useRef, useState } from "react";
 import { usePlot, type PlotWirePayload } from "@/hooks/use-plot";
 import { useNoteCounts } from "@/hooks/use-note-counts";
+import { SpotTool } from "@/components/notes/spot-tool";
 import type { ProductionDto } from "@/lib/dto/production";
 import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import type { NumberingDirection } from "@/lib/plot/along-position";
@@ -201,6 +202,12 @@ export function PlotEditor({
           <p className="pointer-events-none absolute right-3 top-2 rounded bg-surface/80 px-2 py-0.5 text-xs text-muted">
             {hintFor(tool, canEdit)}
           </p>
+          <SpotTool
+            productionId={production.id}
+            units={production.displayUnits}
+            datumName={production.datumName}
+            view={() => handle.current?.view()}
+          />
         </div>
         <SidePanel
           data={data}
