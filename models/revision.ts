@@ -7,8 +7,9 @@ import {
   type Sequelize,
 } from "sequelize";
 
-export const REVISION_PURPOSES = ["bid", "hang", "focus", "tech", "archive"] as const;
-export type RevisionPurpose = (typeof REVISION_PURPOSES)[number];
+import { REVISION_PURPOSES, type RevisionPurpose } from "./revision-purposes";
+
+export { REVISION_PURPOSES, type RevisionPurpose };
 
 /** One issued revision of a production's paperwork, with the snapshot it was issued from (JSON text). */
 export class Revision extends Model<InferAttributes<Revision>, InferCreationAttributes<Revision>> {

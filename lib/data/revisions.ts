@@ -205,3 +205,20 @@ export async function getPreviousRevisionId({
   );
   return row?.id ?? null;
 }
+
+/** The current version of every fixture and cue, for restore buttons that send the version the page showed. */
+export async function getRowVersions({
+  productionId,
+}: {
+  productionId: number;
+}): Promise<{ fixtures: Record<number, number>; cues: Record<number, number> }> {
+  const { sequelize } = getDb();
+  const read = (table: string) =>
+    sequelize.query<{ id: number; version: number }>(`SELECT id, version FROM ${table} WHERE production_id = ?`, {
+      replacements: [productionId],
+      type: QueryTypes.SELECT,
+    });
+  const toMap = (rows: Array<{ id: number; version: number }>) =>
+    Object.fromEntries(rows.map((r) => [r.id, r.version]));
+  return { fixtures: toMap(await read("fixtures")), cues: toMap(await read("cues")) };
+}

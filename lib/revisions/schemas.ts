@@ -1,6 +1,6 @@
 // The checks at the revisions' edges: issuing, comparing, restoring, the equipment list, a thing's history.
 import { z } from "zod";
-import { REVISION_PURPOSES } from "@/models/revision";
+import { REVISION_PURPOSES } from "@/models/revision-purposes";
 
 const id = (what: string) =>
   z.coerce

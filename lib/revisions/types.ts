@@ -1,6 +1,6 @@
 // The shapes of a revision: the snapshot of the paperwork it was issued from, and what changed between two
 // snapshots. Plain data only (JSON in the revisions table, DTOs for the screens), so client code may import it.
-import type { RevisionPurpose } from "@/models/revision";
+import type { RevisionPurpose } from "@/models/revision-purposes";
 
 export type { RevisionPurpose };
 
