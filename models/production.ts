@@ -34,6 +34,8 @@ export class Production extends Model<InferAttributes<Production>, InferCreation
   declare cableKgPerM: CreationOptional<number>;
   declare hardwareKgPerUnit: CreationOptional<number>;
   declare numberingRule: CreationOptional<NumberingRule>;
+  /** When the owner archived it (off the members' list until restored); null while in use. */
+  declare archivedAt: CreationOptional<Date | null>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -68,6 +70,7 @@ export function initProduction(sequelize: Sequelize) {
         allowNull: false,
         defaultValue: "from-stage-left",
       },
+      archivedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
       version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,

@@ -14,6 +14,8 @@ export const PERMISSIONS = [
   "studies.run", // studies and checks
   "revisions.issue", // issue a revision, e-mail the team
   "team.manage",
+  "production.archive", // put away and restore (the owner's)
+  "production.delete", // delete with everything in it (the owner's)
   "notes.write", // write a note, change an open one (any member)
   "notes.setCurrentCue", // the "current cue" new notes pick up (stage manager, board operator)
   "notes.closeWork", // mark a work note done or cannot-do, or reopen it

@@ -61,10 +61,12 @@ const TABLE: Record<Role, ReadonlySet<Permission>> = {
   viewer: new Set<Permission>(["production.view", "rig.export", "studies.view", "notes.write"]),
 };
 
-/** Team management belongs to the production's owner, whatever their role. */
+/** The production's owner holds these whatever their role: the team, and archiving or deleting the production. */
+const OWNER_ONLY: ReadonlySet<Permission> = new Set(["team.manage", "production.archive", "production.delete"]);
+
 export function can(member: Member | null | undefined, permission: Permission): boolean {
   if (!member) return false;
-  if (permission === "team.manage") return member.isOwner;
+  if (OWNER_ONLY.has(permission)) return member.isOwner;
   return TABLE[member.role].has(permission);
 }
 

@@ -3,7 +3,7 @@ import { getDb, type Production } from "@/models";
 import { AppError, notFound } from "@/lib/errors";
 import type { ProductionSettings } from "@/lib/validation/production";
 import type { ProductionDto, ProductionListItem, ProductionOverview } from "@/lib/dto/production";
-import { plain } from "./plain";
+import { iso, plain } from "./plain";
 import { versionedUpdate } from "./versioned";
 import { recordChange } from "./changes";
 import { inTransaction } from "./transaction";
@@ -53,6 +53,7 @@ export async function getProductionsByUser({ userId }: { userId: number }): Prom
     role: m.role,
     isOwner: m.isOwner,
     fixtureCount: byId.get(m.productionId) ?? 0,
+    archivedAt: iso((m as unknown as { production: Production }).production.archivedAt),
   }));
 }
 

@@ -33,6 +33,10 @@ const EXPECTED: Record<string, Scope> = {
   "GET /api/productions/[productionId]/accessories": ALL,
   "POST /api/productions/[productionId]/accessories": DE,
   "PATCH /api/productions/[productionId]/accessories/[accessoryId]": DE,
+  // Archiving, restoring and deleting the production: its owner's (the demo's owner is its designer). A DELETE
+  // here carries no typed name, so even the owner's is refused (400) and the demo stays.
+  "DELETE /api/productions/[productionId]": D,
+  "PUT /api/productions/[productionId]/archive": D,
   "DELETE /api/productions/[productionId]/accessories/[accessoryId]": DE,
   // Plot: positions, focus marks, acting areas, landmarks, underlays: the designer's.
   "GET /api/productions/[productionId]/area-zones": ALL,

@@ -27,6 +27,9 @@ const EXPECTED: Record<Permission, Record<Role, boolean>> = {
   "studies.run": { designer: true, electrician: true, stage_manager: false, viewer: false },
   "revisions.issue": { designer: true, electrician: true, stage_manager: false, viewer: false },
   "team.manage": { designer: false, electrician: false, stage_manager: false, viewer: false },
+  // Archiving and deleting a production: its owner's alone (issue "starting out": the owner archives and deletes).
+  "production.archive": { designer: false, electrician: false, stage_manager: false, viewer: false },
+  "production.delete": { designer: false, electrician: false, stage_manager: false, viewer: false },
   // Notes: any member writes; closing follows who changes that part of the show (DESIGN.md's table:
   // the rig and focus are the designer's and the crew's, cues the designer's, the stage manager calls).
   "notes.write": { designer: true, electrician: true, stage_manager: true, viewer: true },
@@ -50,6 +53,14 @@ describe("role table (DESIGN.md, Roles)", () => {
 
   it("team management belongs to the owner whatever the role", () => {
     for (const role of ROLES) expect(can({ role, isOwner: true }, "team.manage")).toBe(true);
+  });
+
+  it("archiving and deleting a production belong to the owner whatever the role", () => {
+    for (const role of ROLES)
+      for (const p of ["production.archive", "production.delete"] as const) {
+        expect(can({ role, isOwner: true }, p)).toBe(true);
+        expect(can({ role, isOwner: false }, p)).toBe(false);
+      }
   });
 
   it("a non-member can do nothing", () => {
