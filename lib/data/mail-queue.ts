@@ -4,6 +4,8 @@ import { getDb } from "@/models";
 
 // Every message is written here before it is handed to the SMTP server, so a server that is down loses
 // nothing: the row stays queued with the failure, and is tried again later.
+/** A file sent with a message, kept with it (base64) so a retry sends the same bytes. */
+export type MailAttachment = { filename: string; contentType: string; base64: string };
 export type QueuedMail = {
   id: number;
   productionId: number | null;
@@ -11,6 +13,7 @@ export type QueuedMail = {
   subject: string;
   text: string;
   attempts: number;
+  attachments?: MailAttachment[];
 };
 export type MailRecord = QueuedMail & {
   status: "queued" | "sent";
@@ -27,10 +30,12 @@ export async function enqueueMail(m: {
   to: string;
   subject: string;
   text: string;
+  attachments?: MailAttachment[];
 }): Promise<QueuedMail> {
+  const files = m.attachments?.length ? JSON.stringify(m.attachments) : null;
   const [id] = await getDb().sequelize.query(
-    "INSERT INTO outgoing_mail (production_id, to_address, subject, body_text) VALUES (?, ?, ?, ?)",
-    { replacements: [m.productionId, m.to, m.subject.slice(0, 300), m.text], type: QueryTypes.INSERT },
+    "INSERT INTO outgoing_mail (production_id, to_address, subject, body_text, attachments) VALUES (?, ?, ?, ?, ?)",
+    { replacements: [m.productionId, m.to, m.subject.slice(0, 300), m.text, files], type: QueryTypes.INSERT },
   );
   return { id: Number(id), ...m, attempts: 0 };
 }
@@ -51,11 +56,29 @@ export async function markMailFailed(id: number, attemptsBefore: number, error: 
 
 /** Queued messages whose next try is due, oldest first. */
 export async function dueMail(limit = 20): Promise<QueuedMail[]> {
-  return getDb().sequelize.query<QueuedMail>(
-    `SELECT id, production_id AS productionId, to_address AS \`to\`, subject, body_text AS text, attempts
+  const rows = await getDb().sequelize.query<QueuedMail & { files: string | null }>(
+    `SELECT id, production_id AS productionId, to_address AS \`to\`, subject, body_text AS text, attempts,
+            attachments AS files
        FROM outgoing_mail WHERE status = 'queued' AND next_attempt_at <= NOW(3) ORDER BY id LIMIT ?`,
     { replacements: [limit], type: QueryTypes.SELECT },
   );
+  return rows.map(withAttachments);
+}
+
+const withAttachments = ({ files, ...m }: QueuedMail & { files: string | null }): QueuedMail => ({
+  ...m,
+  attachments: files ? JSON.parse(files) : undefined,
+});
+
+/** A production's messages still queued, due or not, oldest first (the outbox's "try now"). */
+export async function queuedMailOfProduction(productionId: number, limit = 100): Promise<QueuedMail[]> {
+  const rows = await getDb().sequelize.query<QueuedMail & { files: string | null }>(
+    `SELECT id, production_id AS productionId, to_address AS \`to\`, subject, body_text AS text, attempts,
+            attachments AS files
+       FROM outgoing_mail WHERE status = 'queued' AND production_id = ? ORDER BY id LIMIT ?`,
+    { replacements: [productionId, limit], type: QueryTypes.SELECT },
+  );
+  return rows.map(withAttachments);
 }
 
 /** A production's mail, newest first, for the outbox page. */

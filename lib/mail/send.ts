@@ -1,9 +1,24 @@
 import "server-only";
+import { after } from "next/server";
 import { env } from "@/lib/env";
-import { dueMail, enqueueMail, markMailFailed, markMailSent, type QueuedMail } from "@/lib/data/mail-queue";
+import {
+  dueMail,
+  enqueueMail,
+  markMailFailed,
+  markMailSent,
+  type MailAttachment,
+  type QueuedMail,
+  queuedMailOfProduction,
+} from "@/lib/data/mail-queue";
 import { mailTransport } from "./transport";
 
-export type Outgoing = { productionId: number | null; to: string; subject: string; text: string };
+export type Outgoing = {
+  productionId: number | null;
+  to: string;
+  subject: string;
+  text: string;
+  attachments?: MailAttachment[];
+};
 export type SendOutcome = { queuedId: number; sent: boolean; error?: string };
 
 async function deliver(m: QueuedMail): Promise<SendOutcome> {
@@ -14,7 +29,12 @@ async function deliver(m: QueuedMail): Promise<SendOutcome> {
     return { queuedId: m.id, sent: false, error };
   }
   try {
-    await transport.sendMail({ from: env().MAIL_FROM, to: m.to, subject: m.subject, text: m.text });
+    const attachments = m.attachments?.map((a) => ({
+      filename: a.filename,
+      contentType: a.contentType,
+      content: Buffer.from(a.base64, "base64"),
+    }));
+    await transport.sendMail({ from: env().MAIL_FROM, to: m.to, subject: m.subject, text: m.text, attachments });
     await markMailSent(m.id);
     return { queuedId: m.id, sent: true };
   } catch (err) {
@@ -26,10 +46,14 @@ async function deliver(m: QueuedMail): Promise<SendOutcome> {
 
 let retryTimer: ReturnType<typeof setInterval> | null = null;
 
-/** Tries every queued message whose time has come; returns how many went out. */
-export async function retryQueuedMail(): Promise<number> {
+/**
+ * Tries every queued message whose time has come; returns how many went out. With a production, every
+ * message of that production still queued is tried now, whatever its wait (the outbox's "try now").
+ */
+export async function retryQueuedMail(opts: { productionId?: number } = {}): Promise<number> {
   let sent = 0;
-  for (const m of await dueMail()) if ((await deliver(m)).sent) sent++;
+  const queued = opts.productionId ? await queuedMailOfProduction(opts.productionId) : await dueMail();
+  for (const m of queued) if ((await deliver(m)).sent) sent++;
   return sent;
 }
 
@@ -48,4 +72,16 @@ export async function sendMail(message: Outgoing): Promise<SendOutcome> {
   const queued = await enqueueMail(message);
   keepRetrying();
   return deliver(queued);
+}
+
+/**
+ * Queues a message and hands it to the mail server only after the response has gone out. For account
+ * mail (sign-up, password reset): the answer to the request then takes the same time whichever message
+ * it queued and however slow the mail server is, so neither reveals whether the address has an account.
+ */
+export async function queueMail(message: Outgoing): Promise<{ queuedId: number }> {
+  const queued = await enqueueMail(message);
+  keepRetrying();
+  after(() => deliver(queued).catch(() => undefined));
+  return { queuedId: queued.id };
 }
