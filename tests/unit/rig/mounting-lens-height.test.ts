@@ -107,7 +107,7 @@ describe("the fixture's computed geometry and the studies use the same lens heig
         peakCandela: 40000,
       },
     };
-    const { lights } = studyLights([f], "full", { headHeight: 1.7, deckHeight: 0, colours: [] });
+    const { lights } = studyLights([f], "full", { headHeight: 1.7, deckHeight: 0, colours: new Map() });
     expect(lights[0].source.z).toBeCloseTo(7.35, 12); // 7 + 0.35, by hand
   });
 });

@@ -9,6 +9,7 @@ import {
   unitNumberForInsert,
   type NumberingDirection,
 } from "@/lib/plot/along-position";
+import { freeSpotAlong, nudgeOntoPosition } from "@/lib/plot/nudge";
 import { compareUnitNumbers } from "@/lib/rig/unit-number";
 import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import { creationFields, type Commands } from "./use-commands";
@@ -30,26 +31,88 @@ export function placeFixture(
   }
   const pos = hit.position;
   const onPos = data.fixtures.filter((f) => f.positionId === pos.id);
+  const spot = freeSpot(data, pos, typeId, hit.point, onPos);
+  if (!spot) {
+    const type = data.fixtureTypes.find((t) => t.id === typeId);
+    cmd.setNotice({
+      tone: "info",
+      text: `No room left on ${pos.name} for another ${type?.name ?? "unit"}: move or remove a unit there, or drop it on another position.`,
+    });
+    return;
+  }
   const existing = onPos.map((f) => f.unitNumber);
   let before: string | null = null;
   if (onPos.length && isVertical(pos.kind))
     before = existing.slice().sort(compareUnitNumbers).at(-1)!; // booms: the new unit goes below
   else if (onPos.length) {
-    const order = numberingOrder([...onPos, { id: -1, x: hit.point.x, y: hit.point.y } as PlotFixture], direction);
+    const order = numberingOrder([...onPos, { id: -1, x: spot.point.x, y: spot.point.y } as PlotFixture], direction);
     const idx = order.findIndex((f) => f.id === -1);
     before = idx === 0 ? null : order[idx - 1].unitNumber;
   }
   const unitNumber = unitNumberForInsert(existing, before);
-  const lensHeight = isVertical(pos.kind) ? Math.max(0.3, pos.trimHeight - 0.9 * onPos.length) : null;
-  return cmd.run("Hang a unit", async () => {
-    const [created] = await cmd.actions.createFixtures([
-      { positionId: pos.id, fixtureTypeId: typeId, unitNumber, x: hit.point.x, y: hit.point.y, lensHeight },
-    ]);
-    cmd.remember(`Hang unit ${unitNumber}`, () =>
-      cmd.run("Undo hang", () => cmd.actions.deleteFixtures([created.id])).then(() => undefined),
-    );
-    return created;
-  });
+  return cmd
+    .run("Hang a unit", async () => {
+      const [created] = await cmd.actions.createFixtures([
+        {
+          positionId: pos.id,
+          fixtureTypeId: typeId,
+          unitNumber,
+          x: spot.point.x,
+          y: spot.point.y,
+          lensHeight: spot.lensHeight,
+        },
+      ]);
+      cmd.remember(`Hang unit ${unitNumber}`, () =>
+        cmd.run("Undo hang", () => cmd.actions.deleteFixtures([created.id])).then(() => undefined),
+      );
+      return created;
+    })
+    .then((created) => {
+      if (created && spot.moved)
+        cmd.setNotice({
+          tone: "info",
+          text: `That spot on ${pos.name} was taken: unit ${unitNumber} hangs at the next free spot.`,
+        });
+      return created;
+    });
+}
+
+/** Room one unit takes when its type does not say (18 in centres; common practice, no source). */
+const FALLBACK_BODY_WIDTH_M = 0.45;
+/** Units on a boom or ladder sit this far apart in height (the plot's long-standing spacing). */
+const STACK_SPACING_M = 0.9;
+
+/**
+ * Where a new unit hangs on the position it was dropped on: along a line position, nudged clear of the
+ * units there by the types' body widths; on a boom or ladder, the next free height below the others.
+ * Null when the position has no room left (never two symbols on one point).
+ */
+function freeSpot(
+  data: ReturnType<Commands["latest"]>,
+  pos: ReturnType<Commands["latest"]>["positions"][number],
+  typeId: number,
+  at: Point,
+  onPos: PlotFixture[],
+): { point: Point; lensHeight: number | null; moved: boolean } | null {
+  if (isVertical(pos.kind)) {
+    const wanted = Math.max(0.3, pos.trimHeight - STACK_SPACING_M * onPos.length);
+    const height = freeSpotAlong({
+      length: pos.trimHeight,
+      wanted,
+      width: STACK_SPACING_M,
+      occupied: onPos.map((f) => ({ along: f.computed.lensHeight, width: STACK_SPACING_M })),
+    });
+    return height === null ? null : { point: at, lensHeight: height, moved: Math.abs(height - wanted) > 1e-9 };
+  }
+  const widths = new Map(data.fixtureTypes.map((t) => [t.id, t.bodyWidthM ?? FALLBACK_BODY_WIDTH_M]));
+  const widthOf = (id: number) => widths.get(id) ?? FALLBACK_BODY_WIDTH_M;
+  const nudged = nudgeOntoPosition(
+    pos,
+    at,
+    widthOf(typeId),
+    onPos.map((f) => ({ x: f.x, y: f.y, width: widthOf(f.fixtureTypeId) })),
+  );
+  return nudged && { ...nudged, lensHeight: null };
 }
 
 /** Deletes the units; undo hangs them again whole (read in full first, not from the slim plot rows). */
