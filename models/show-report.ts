@@ -6,6 +6,14 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from "sequelize";
+import {
+  NOTE_KINDS,
+  NOTE_PRIORITIES,
+  NOTE_SUBJECTS,
+  type NoteKind,
+  type NotePriority,
+  type NoteSubject,
+} from "./note-vocabulary";
 
 /** The stage manager's report after one performance. */
 export class ShowReport extends Model<InferAttributes<ShowReport>, InferCreationAttributes<ShowReport>> {
@@ -15,6 +23,9 @@ export class ShowReport extends Model<InferAttributes<ShowReport>, InferCreation
   declare performedOn: string;
   declare summary: string;
   declare authorId: number;
+  /** When it went to the team (its items became notes); null while it is a draft the stage manager edits. */
+  declare sentAt: Date | null;
+  declare sentBy: number | null;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -31,6 +42,22 @@ export class ShowReportFault extends Model<InferAttributes<ShowReportFault>, Inf
   declare updatedAt: CreationOptional<Date>;
 }
 
+/** One lighting item of a report: held while the report is a draft, written as a note when it is sent. */
+export class ShowReportItem extends Model<InferAttributes<ShowReportItem>, InferCreationAttributes<ShowReportItem>> {
+  declare id: CreationOptional<number>;
+  declare showReportId: number;
+  declare sortOrder: number;
+  declare body: string;
+  declare kind: NoteKind;
+  declare subject: NoteSubject;
+  declare subjectId: number | null;
+  declare priority: NotePriority | null;
+  declare ownerId: number | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+/** Sets up the report, its fault log and its items (the items ride here so models/index.ts needs no new line). */
 export function initShowReport(sequelize: Sequelize) {
   ShowReport.init(
     {
@@ -40,6 +67,8 @@ export function initShowReport(sequelize: Sequelize) {
       performedOn: { type: DataTypes.DATEONLY, allowNull: false },
       summary: { type: DataTypes.TEXT, allowNull: false },
       authorId: { type: DataTypes.INTEGER, allowNull: false },
+      sentAt: { type: DataTypes.DATE, allowNull: true },
+      sentBy: { type: DataTypes.INTEGER, allowNull: true },
       version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
@@ -57,5 +86,21 @@ export function initShowReport(sequelize: Sequelize) {
       updatedAt: DataTypes.DATE,
     },
     { sequelize, tableName: "show_report_faults", underscored: true },
+  );
+  ShowReportItem.init(
+    {
+      id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+      showReportId: { type: DataTypes.INTEGER, allowNull: false },
+      sortOrder: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+      body: { type: DataTypes.TEXT, allowNull: false },
+      kind: { type: DataTypes.ENUM(...NOTE_KINDS), allowNull: false },
+      subject: { type: DataTypes.ENUM(...NOTE_SUBJECTS), allowNull: false },
+      subjectId: { type: DataTypes.INTEGER, allowNull: true },
+      priority: { type: DataTypes.ENUM(...NOTE_PRIORITIES), allowNull: true },
+      ownerId: { type: DataTypes.INTEGER, allowNull: true },
+      createdAt: DataTypes.DATE,
+      updatedAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: "show_report_items", underscored: true },
   );
 }

@@ -70,12 +70,13 @@ const SUBJECT_TABLES: Record<Exclude<NoteSubject, "production">, { table: string
   focus_point: { table: "focus_points", what: "Focus point" },
 };
 
-/** The note's subject must be a row of this production; a 400 names the field otherwise. */
-async function checkSubject(
+/** The note's subject must be a row of this production; a 400 names the field (`field`, subjectId by default). */
+export async function checkSubject(
   productionId: number,
   subject: NoteSubject,
   subjectId: number | null,
   transaction: Transaction,
+  field = "subjectId",
 ) {
   if (subject === "production") return;
   const { table, what } = SUBJECT_TABLES[subject];
@@ -86,7 +87,7 @@ async function checkSubject(
   });
   if (!rows.length)
     throw new AppError("bad_request", `${what} ${subjectId} is not in this production.`, {
-      fieldErrors: { subjectId: [`no such ${what.toLowerCase()}`] },
+      fieldErrors: { [field]: [`no such ${what.toLowerCase()}`] },
     });
 }
 

@@ -35,15 +35,33 @@ export type ShowReportFaultDto = {
   kind: "lamp_out" | "fault";
   description: string;
 };
-/** A filed show report with its fault log and the ids of the notes it wrote. */
+/** A lighting item of a report: kept while the report is a draft, a note once it is sent. */
+export type ShowReportItemDto = {
+  id: number;
+  body: string;
+  kind: NoteKind;
+  subject: NoteSubject;
+  subjectId: number | null;
+  priority: NotePriority | null;
+  ownerId: number | null;
+};
+/**
+ * A show report with its fault log and items. A draft (sentAt null) is the stage manager's to edit; once sent
+ * its items and logged faults are notes (noteIds) and the report is read-only.
+ */
 export type ShowReportDto = {
   id: number;
   performance: string;
   performedOn: string;
   summary: string;
   authorId: number;
+  status: "draft" | "sent";
+  sentAt: string | null;
+  sentBy: number | null;
   version: number;
   createdAt: string;
+  updatedAt: string;
   faults: ShowReportFaultDto[];
+  items: ShowReportItemDto[];
   noteIds: number[];
 };

@@ -101,50 +101,72 @@ export const spotRequestSchema = z
   .strict();
 
 /** The stage manager's report: lighting items become notes; the lamp-out and fault log stays with the report. */
+const showReportFields = {
+  performance: z
+    .string({ error: "Performance is required" })
+    .trim()
+    .min(1, { error: 'Performance is required (e.g. "Evening 3")' })
+    .max(80, { error: "Performance is at most 80 characters" }),
+  performedOn: z.iso.date({ error: "Date must be a date (YYYY-MM-DD)" }),
+  summary: z
+    .string({ error: "Summary must be text" })
+    .trim()
+    .max(4000, { error: "Summary is at most 4,000 characters" }),
+  items: z
+    .array(
+      z
+        .object({
+          body: noteFields.body,
+          kind: noteFields.kind,
+          subject: noteFields.subject,
+          subjectId: noteFields.subjectId.optional(),
+          priority: noteFields.priority.optional(),
+          ownerId: noteFields.ownerId.optional(),
+        })
+        .strict()
+        .refine(subjectHasId, subjectRule),
+      { error: "Lighting items must be a list" },
+    )
+    .max(100, { error: "At most 100 lighting items" }),
+  faults: z
+    .array(
+      z
+        .object({
+          fixtureId: id("Fixture").nullable(),
+          kind: z.enum(["lamp_out", "fault"], { error: "Each log entry is a lamp out or a fault" }),
+          description: z
+            .string({ error: "Say what happened" })
+            .trim()
+            .min(1, { error: "Say what happened" })
+            .max(300, { error: "At most 300 characters" }),
+        })
+        .strict(),
+      { error: "The fault log must be a list" },
+    )
+    .max(200, { error: "At most 200 log entries" }),
+};
+
+/** A new report; `send: false` keeps it as a draft to edit (the default files and sends it at once). */
 export const showReportSchema = z
   .object({
-    performance: z
-      .string({ error: "Performance is required" })
-      .trim()
-      .min(1, { error: 'Performance is required (e.g. "Evening 3")' })
-      .max(80, { error: "Performance is at most 80 characters" }),
-    performedOn: z.iso.date({ error: "Date must be a date (YYYY-MM-DD)" }),
-    summary: z
-      .string({ error: "Summary must be text" })
-      .trim()
-      .max(4000, { error: "Summary is at most 4,000 characters" }),
-    items: z
-      .array(
-        z
-          .object({
-            body: noteFields.body,
-            kind: noteFields.kind,
-            subject: noteFields.subject,
-            subjectId: noteFields.subjectId.optional(),
-            priority: noteFields.priority.optional(),
-            ownerId: noteFields.ownerId.optional(),
-          })
-          .strict()
-          .refine(subjectHasId, subjectRule),
-        { error: "Lighting items must be a list" },
-      )
-      .max(100, { error: "At most 100 lighting items" }),
-    faults: z
-      .array(
-        z
-          .object({
-            fixtureId: id("Fixture").nullable(),
-            kind: z.enum(["lamp_out", "fault"], { error: "Each log entry is a lamp out or a fault" }),
-            description: z
-              .string({ error: "Say what happened" })
-              .trim()
-              .min(1, { error: "Say what happened" })
-              .max(300, { error: "At most 300 characters" }),
-          })
-          .strict(),
-        { error: "The fault log must be a list" },
-      )
-      .max(200, { error: "At most 200 log entries" }),
+    ...showReportFields,
+    send: z.boolean({ error: "Send must be true or false" }).optional(),
   })
   .strict();
 export type ShowReportInput = z.output<typeof showReportSchema>;
+export type ShowReportContent = Omit<ShowReportInput, "send">;
+
+/** A change to a draft report: any of its parts (items and faults replace the lists), with the version read. */
+export const updateShowReportSchema = z
+  .object(showReportFields)
+  .partial()
+  .extend({ version: versionSchema })
+  .strict()
+  .refine((r) => Object.keys(r).some((k) => k !== "version"), {
+    error: "Nothing to change: send at least one part of the report",
+    path: ["(body)"],
+  });
+export type UpdateShowReportPatch = z.output<typeof updateShowReportSchema>;
+
+/** Sending a draft: the version read, so a report changed meanwhile is not sent unseen. */
+export const sendShowReportSchema = z.object({ version: versionSchema }).strict();

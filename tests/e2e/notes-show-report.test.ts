@@ -28,10 +28,10 @@ describe("notes: show report to work call", () => {
     const unitValue = await unit.locator("option").nth(1).getAttribute("value");
     await unit.selectOption(unitValue!);
     await sm.page.getByLabel("Seen").fill("dark from the top of act two");
-    await sm.page.getByRole("button", { name: "File the report" }).click();
+    await sm.page.getByRole("button", { name: "File and send to the team" }).click();
     await sm.page
       .getByRole("status")
-      .filter({ hasText: "Report filed: 1 note written." })
+      .filter({ hasText: "Report sent to the team: 1 note written." })
       .waitFor({ timeout: UI_TIMEOUT });
     await sm.page.getByRole("heading", { name: new RegExp(performance) }).waitFor();
     await screenshot(sm.page, "notes-show-report-filed");

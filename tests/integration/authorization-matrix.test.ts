@@ -21,7 +21,11 @@ const EXPECTED: Record<string, Scope> = {
   "GET /api/auth/me": "signed-in",
   "POST /api/auth/sign-in": "public",
   "POST /api/auth/sign-out": "public",
-  "POST /api/auth/sign-up": "public",
+  "POST /api/auth/sign-up": "public", // the same answer whether or not the address has an account
+  "POST /api/auth/sign-up/complete": "public", // the mailed link's token is the proof
+  // Invitations to the signed-in account's own address, joined without their link.
+  "GET /api/auth/invitations": "signed-in",
+  "POST /api/auth/invitations/join": "signed-in",
   "POST /api/auth/password-reset": "public", // the same answer whether or not the address has an account
   "POST /api/auth/password-reset/confirm": "public", // the link's token is the proof
   "GET /api/health": "public",
@@ -29,14 +33,14 @@ const EXPECTED: Record<string, Scope> = {
   "POST /api/productions": "signed-in",
   "GET /api/productions/[productionId]": ALL,
   "PATCH /api/productions/[productionId]": D, // settings
-  // Accessories (scrollers, irises …): the electrician's side of the rig.
-  "GET /api/productions/[productionId]/accessories": ALL,
-  "POST /api/productions/[productionId]/accessories": DE,
-  "PATCH /api/productions/[productionId]/accessories/[accessoryId]": DE,
   // Archiving, restoring and deleting the production: its owner's (the demo's owner is its designer). A DELETE
   // here carries no typed name, so even the owner's is refused (400) and the demo stays.
   "DELETE /api/productions/[productionId]": D,
   "PUT /api/productions/[productionId]/archive": D,
+  // Accessories (scrollers, irises …): the electrician's side of the rig.
+  "GET /api/productions/[productionId]/accessories": ALL,
+  "POST /api/productions/[productionId]/accessories": DE,
+  "PATCH /api/productions/[productionId]/accessories/[accessoryId]": DE,
   "DELETE /api/productions/[productionId]/accessories/[accessoryId]": DE,
   // Plot: positions, focus marks, acting areas, landmarks, underlays: the designer's.
   "GET /api/productions/[productionId]/area-zones": ALL,
@@ -68,6 +72,8 @@ const EXPECTED: Record<string, Scope> = {
   "DELETE /api/productions/[productionId]/fixture-types/[fixtureTypeId]": D,
   "GET /api/productions/[productionId]/rig/starter-types": ALL,
   "POST /api/productions/[productionId]/rig/starter-types": D,
+  "GET /api/productions/[productionId]/rig/copy-types": D, // the designer's other productions' types
+  "POST /api/productions/[productionId]/rig/copy-types": D,
   // Fixtures: hanging and removing units is the designer's; electrics and status the electrician's (field level).
   "GET /api/productions/[productionId]/fixtures": ALL,
   "POST /api/productions/[productionId]/fixtures": D,
@@ -98,6 +104,7 @@ const EXPECTED: Record<string, Scope> = {
   "GET /api/productions/[productionId]/checks": ALL,
   "GET /api/productions/[productionId]/checks/export": ALL,
   "GET /api/productions/[productionId]/checks/settings": ALL,
+  "GET /api/productions/[productionId]/checks/units": ALL,
   "PATCH /api/productions/[productionId]/checks/settings": DE,
   "PATCH /api/productions/[productionId]/checks/positions/[positionId]": DE,
   "GET /api/productions/[productionId]/circuits": ALL,
@@ -139,6 +146,8 @@ const EXPECTED: Record<string, Scope> = {
   "POST /api/productions/[productionId]/notes/spot": ALL,
   "GET /api/productions/[productionId]/notes/show-reports": ALL,
   "POST /api/productions/[productionId]/notes/show-reports": ["stageManager"],
+  "PATCH /api/productions/[productionId]/notes/show-reports/[reportId]": ["stageManager"], // a draft, until sent
+  "POST /api/productions/[productionId]/notes/show-reports/[reportId]/send": ["stageManager"],
   // Team: everyone sees who is on it; invitations, role changes and removal are the owner's (the demo's owner is its designer).
   "GET /api/productions/[productionId]/team": ALL,
   "PATCH /api/productions/[productionId]/team/[memberId]": D,

@@ -10,8 +10,9 @@ import type { NoteSubjects } from "@/lib/notes/subjects";
 import { KIND_LABELS } from "@/lib/notes/words";
 import { NOTE_KINDS, type NoteKind } from "@/models/note-vocabulary";
 import { notesKey } from "../../_components/use-notes";
+import { itemForServer, itemFromServer, type Item } from "./report-items";
+import { ReportCard } from "./report-card";
 
-type Item = { body: string; kind: NoteKind; fixtureId: string };
 type Fault = { fixtureId: string; kind: "lamp_out" | "fault"; description: string };
 const input = "rounded border border-line bg-raised px-2 py-1";
 const today = () => new Date().toISOString().slice(0, 10);
@@ -44,44 +45,106 @@ export function ShowReportsView({
   const [faults, setFaults] = useState<Fault[]>([]);
   const [errors, setErrors] = useState<Record<string, string[]>>({});
   const [message, setMessage] = useState<string | null>(null);
-  const file = useMutation({
-    mutationFn: () =>
-      apiFetch<{ report: ShowReportDto }>(`/api/productions/${productionId}/notes/show-reports`, {
-        method: "POST",
-        json: {
-          performance,
-          performedOn,
-          summary,
-          items: items.map((i) =>
-            i.fixtureId
-              ? { body: i.body, kind: i.kind, subject: "fixture", subjectId: Number(i.fixtureId) }
-              : { body: i.body, kind: i.kind, subject: "production" },
-          ),
-          faults: faults.map((f) => ({
-            fixtureId: f.fixtureId ? Number(f.fixtureId) : null,
-            kind: f.kind,
-            description: f.description,
-          })),
-        },
-      }),
-    onSettled: () => qc.invalidateQueries({ queryKey: notesKey(productionId) }),
+  /** The draft being edited (its id and the version read), or null for a new report. */
+  const [editing, setEditing] = useState<{ id: number; version: number } | null>(null);
+  const api = `/api/productions/${productionId}/notes/show-reports`;
+  const refresh = () => qc.invalidateQueries({ queryKey: notesKey(productionId) });
+  const body = () => ({
+    performance,
+    performedOn,
+    summary,
+    items: items.map(itemForServer),
+    faults: faults.map((f) => ({
+      fixtureId: f.fixtureId ? Number(f.fixtureId) : null,
+      kind: f.kind,
+      description: f.description,
+    })),
   });
-  const submit = async (e: React.FormEvent) => {
+  const save = useMutation({
+    mutationFn: (send: boolean) =>
+      editing
+        ? apiFetch<{ showReport: ShowReportDto }>(`${api}/${editing.id}`, {
+            method: "PATCH",
+            json: { version: editing.version, ...body() },
+          }).then((r) => ({ report: r.showReport }))
+        : apiFetch<{ report: ShowReportDto }>(api, { method: "POST", json: { ...body(), send } }),
+    onSettled: refresh,
+  });
+  const send = useMutation({
+    mutationFn: (r: { id: number; version: number }) =>
+      apiFetch<{ report: ShowReportDto }>(`${api}/${r.id}/send`, { method: "POST", json: { version: r.version } }),
+    onSettled: refresh,
+  });
+  const clear = () => {
+    setEditing(null);
+    setPerformance("");
+    setPerformedOn(today());
+    setSummary("");
+    setItems([]);
+    setFaults([]);
+  };
+  const load = (r: ShowReportDto) => {
+    setErrors({});
+    setMessage(`Editing the draft for ${r.performance}.`);
+    setEditing({ id: r.id, version: r.version });
+    setPerformance(r.performance);
+    setPerformedOn(r.performedOn);
+    setSummary(r.summary);
+    setItems(r.items.map(itemFromServer));
+    setFaults(
+      r.faults.map((f) => ({
+        fixtureId: f.fixtureId == null ? "" : String(f.fixtureId),
+        kind: f.kind,
+        description: f.description,
+      })),
+    );
+  };
+  const failed = (err: unknown) => {
+    if (err instanceof ApiError) setErrors(err.fieldErrors);
+    if (err instanceof ApiError && err.status === 409) {
+      const current = err.current as ShowReportDto | undefined;
+      if (current?.status === "draft") {
+        load(current);
+        setMessage(`${err.message} The form now shows it; make your change again.`);
+        return;
+      }
+      clear();
+    }
+    setMessage((err as Error).message);
+  };
+  const submit = async (e: React.FormEvent, sendNow: boolean) => {
     e.preventDefault();
     setErrors({});
     setMessage(null);
     try {
-      const r = await file.mutateAsync();
-      setMessage(`Report filed: ${r.report.noteIds.length} note${r.report.noteIds.length === 1 ? "" : "s"} written.`);
-      setPerformance("");
-      setSummary("");
-      setItems([]);
-      setFaults([]);
+      let r = (await save.mutateAsync(sendNow)).report;
+      // An edited draft is saved first, then sent at the version the save left it at.
+      if (sendNow && r.status === "draft") r = (await send.mutateAsync(r)).report;
+      setMessage(
+        r.status === "sent"
+          ? `Report sent to the team: ${r.noteIds.length} note${r.noteIds.length === 1 ? "" : "s"} written.`
+          : `Draft saved for ${r.performance}. It goes to nobody until you send it.`,
+      );
+      if (r.status === "sent") clear();
+      else setEditing({ id: r.id, version: r.version });
     } catch (err) {
-      if (err instanceof ApiError) setErrors(err.fieldErrors);
-      setMessage((err as Error).message);
+      failed(err);
     }
   };
+  const sendDraft = async (r: ShowReportDto) => {
+    setErrors({});
+    setMessage(null);
+    try {
+      const sent = (await send.mutateAsync(r)).report;
+      if (editing?.id === r.id) clear();
+      setMessage(
+        `Report sent to the team: ${sent.noteIds.length} note${sent.noteIds.length === 1 ? "" : "s"} written.`,
+      );
+    } catch (err) {
+      failed(err);
+    }
+  };
+  const busy = save.isPending || send.isPending;
   const unitSelect = (value: string, onChange: (v: string) => void, label: string) => (
     <label className="flex flex-col gap-1">
       {label}
@@ -107,8 +170,8 @@ export function ShowReportsView({
       <h2 className="text-base font-semibold">Show reports</h2>
       {canFile ? (
         <form
-          onSubmit={submit}
-          aria-label="New show report"
+          onSubmit={(e) => submit(e, (e.nativeEvent as SubmitEvent).submitter?.dataset.send === "yes")}
+          aria-label={editing ? "Edit the draft show report" : "New show report"}
           className="flex flex-col gap-3 rounded-md border border-line bg-surface p-3 text-sm"
         >
           <div className="flex flex-wrap gap-3">
@@ -176,7 +239,12 @@ export function ShowReportsView({
                 </label>
                 {unitSelect(
                   it.fixtureId,
-                  (v) => setItems(items.map((x, j) => (j === i ? { ...x, fixtureId: v } : x))),
+                  (v) =>
+                    setItems(
+                      items.map((x, j) =>
+                        j === i ? { ...x, fixtureId: v, subject: v ? "fixture" : "production", subjectId: null } : x,
+                      ),
+                    ),
                   "Unit",
                 )}
                 <Button type="button" variant="quiet" onClick={() => setItems(items.filter((_, j) => j !== i))}>
@@ -238,10 +306,18 @@ export function ShowReportsView({
               Log a lamp out or fault
             </Button>
           </fieldset>
-          <div className="flex items-center gap-3">
-            <Button type="submit" disabled={file.isPending}>
-              File the report
+          <div className="flex flex-wrap items-center gap-3">
+            <Button type="submit" data-send="yes" disabled={busy}>
+              {editing ? "Save and send to the team" : "File and send to the team"}
             </Button>
+            <Button type="submit" variant="secondary" disabled={busy}>
+              {editing ? "Save the draft" : "Save as a draft"}
+            </Button>
+            {editing ? (
+              <Button type="button" variant="quiet" onClick={clear}>
+                Stop editing (keeps the saved draft)
+              </Button>
+            ) : null}
             {message ? <span role="status">{message}</span> : null}
           </div>
           {errorList.length ? (
@@ -255,30 +331,26 @@ export function ShowReportsView({
           ) : null}
         </form>
       ) : null}
-      <section aria-label="Filed reports" className="flex flex-col gap-3">
+      <section aria-label="Reports" className="flex flex-col gap-3">
         {reports.length === 0 ? <p className="text-sm text-muted">No show reports yet.</p> : null}
         {reports.map((r) => (
-          <article key={r.id} className="rounded-md border border-line bg-surface p-3 text-sm">
-            <h3 className="font-medium">
-              {r.performance} · {r.performedOn}
-            </h3>
-            {r.summary ? <p className="whitespace-pre-wrap">{r.summary}</p> : null}
-            {r.faults.length ? (
-              <ul className="mt-1">
-                {r.faults.map((f) => (
-                  <li key={f.id}>
-                    {f.kind === "lamp_out" ? "Lamp out" : "Fault"}
-                    {f.fixtureId != null ? ` · ${fixtureLabel(f.fixtureId)}` : ""}: {f.description}
-                  </li>
-                ))}
-              </ul>
-            ) : (
-              <p className="text-muted">No lamps out or faults logged.</p>
-            )}
-            <p className="mt-1 text-xs text-muted">
-              {r.noteIds.length} note{r.noteIds.length === 1 ? "" : "s"} written from this report.
-            </p>
-          </article>
+          <ReportCard
+            key={r.id}
+            report={r}
+            fixtureLabel={fixtureLabel}
+            actions={
+              r.status === "draft" && canFile ? (
+                <span className="ml-auto flex gap-2">
+                  <Button type="button" variant="secondary" disabled={busy} onClick={() => load(r)}>
+                    Edit {r.performance}
+                  </Button>
+                  <Button type="button" disabled={busy} onClick={() => sendDraft(r)}>
+                    Send {r.performance}
+                  </Button>
+                </span>
+              ) : null
+            }
+          />
         ))}
       </section>
     </main>
