@@ -174,6 +174,7 @@ export function checkDataLines(
         area: "dmx",
         severity: "error",
         subject,
+        unitNote: `data line ${line.name} over ${UNIT_LOADS_PER_SEGMENT} devices`,
         message: `${units.length} devices on one run: EIA-485 allows ${UNIT_LOADS_PER_SEGMENT} unit loads per segment (one device is usually one unit load). Split the run with a DMX splitter or buffer.`,
         fixtureIds: units.map((u) => u.id),
       });
@@ -196,6 +197,7 @@ export function checkDataLines(
           subject,
           message: `The run carries universe ${line.universe} but ${elsewhere.map((u) => `unit ${u.label} (universe ${u.universe})`).join(", ")} ${elsewhere.length === 1 ? "is" : "are"} patched to another universe.`,
           fixtureIds: elsewhere.map((u) => u.id),
+          unitNote: `on data line ${line.name} but patched to another universe`,
         });
     }
     return {
@@ -231,6 +233,7 @@ export function checkDmx(input: {
         severity: "error",
         subject,
         message: `Universe ${d.universe} is outside 1–${MAX_UNIVERSE}.`,
+        unitNote: `universe ${d.universe} out of range`,
         fixtureIds: [d.fixtureId],
       });
       return;
@@ -241,6 +244,7 @@ export function checkDmx(input: {
         area: "dmx",
         severity: "error",
         subject,
+        unitNote: `DMX ${d.universe}/${d.start} runs past slot ${SLOTS_PER_UNIVERSE}`,
         message: `Address ${d.start} with a footprint of ${d.footprint} slots runs to slot ${end}: a universe has slots 1–${SLOTS_PER_UNIVERSE}, and a unit may not straddle two.`,
         fixtureIds: [d.fixtureId],
       });
@@ -256,6 +260,7 @@ export function checkDmx(input: {
         severity: "warning",
         subject: `Unit ${f.label}`,
         message: "Patched, but its footprint is not known (no DMX mode chosen): not counted on the universe map.",
+        unitNote: "DMX footprint not known",
         fixtureIds: [f.id],
       });
     admit(fixtureDevice(f));
@@ -272,6 +277,7 @@ export function checkDmx(input: {
       subject: `Universe ${claim.universe}, address ${claim.start}`,
       message: `${names(claim.members)} (slots ${claim.start}–${claim.end}) overlap${claim.members.length === 1 ? "s" : ""} ${names(all)}.`,
       fixtureIds: [...new Set(claim.members.map((m) => m.fixtureId))],
+      unitNote: `DMX overlap at ${claim.universe}/${claim.start}`,
     });
   }
   const shared = claims
@@ -290,6 +296,7 @@ export function checkDmx(input: {
       subject: "Unpatched",
       message: `${unpatched.length} unit${unpatched.length === 1 ? " has" : "s have"} no universe and address.`,
       fixtureIds: unpatched.map((u) => u.id),
+      unitNote: "unpatched: no universe and address",
     });
 
   const channels = new Set(input.fixtures.map((f) => f.channel).filter((c): c is number => c != null));

@@ -10,6 +10,7 @@ import {
   type RiggingSettings,
 } from "./rigging";
 import type { CheckAccessory, Finding, Severity } from "./types";
+import { findingKey, type UnitFlag, unitFlags } from "./unit-flags";
 
 export type ChecksInput = {
   fixtures: RiggingFixture[];
@@ -31,6 +32,8 @@ export type ChecksResult = {
   summary: ChecksSummary;
   /** The worst finding per fixture, for badges on the plot and the rig table. */
   fixtureSeverity: Record<number, Exclude<Severity, "info">>;
+  /** Per unit: worst severity, short notes and the checks-page row (lib/checks/unit-flags.ts). */
+  units: Record<number, UnitFlag>;
 };
 
 const RANK: Record<Severity, number> = { error: 0, warning: 1, info: 2 };
@@ -39,9 +42,9 @@ export function runChecks(input: ChecksInput): ChecksResult {
   const dmx = checkDmx(input);
   const power = checkPower(input);
   const rigging = checkRigging({ ...input, settings: input.rigging });
-  const findings = [...dmx.findings, ...power.findings, ...rigging.findings].sort(
-    (a, b) => RANK[a.severity] - RANK[b.severity],
-  );
+  const findings = [...dmx.findings, ...power.findings, ...rigging.findings]
+    .sort((a, b) => RANK[a.severity] - RANK[b.severity])
+    .map((f) => ({ ...f, key: findingKey(f) }));
   const fixtureSeverity: Record<number, "error" | "warning"> = {};
   for (const f of findings) {
     if (f.severity === "info") continue;
@@ -60,6 +63,7 @@ export function runChecks(input: ChecksInput): ChecksResult {
       fixtures: input.fixtures.length,
     },
     fixtureSeverity,
+    units: unitFlags(findings, new Map(input.fixtures.map((f) => [f.id, f.label]))),
   };
 }
 
@@ -72,3 +76,4 @@ export * from "./load-kind";
 export * from "./power";
 export * from "./rigging";
 export * from "./types";
+export * from "./unit-flags";

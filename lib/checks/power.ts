@@ -136,6 +136,7 @@ export function checkPower(input: {
         severity: "warning",
         subject: `Unit ${f.label}`,
         message: `Circuit "${ref}" is not in the circuit list: its load is not checked. Add the circuit with its rating.`,
+        unitNote: `circuit "${ref}" not in the circuit list`,
         fixtureIds: [f.id],
       });
       continue;
@@ -162,6 +163,7 @@ export function checkPower(input: {
         severity: "error",
         subject,
         message: `${fmt(a)} A on a ${c.ratingA} A circuit (${Math.round(loadVA)} W at ${e.voltage} V): over its rating.`,
+        unitNote: `circuit ${c.name} overloaded (${fmt(a)} A on ${c.ratingA} A)`,
         fixtureIds: ids,
       });
     } else if (status === "over-continuous") {
@@ -169,6 +171,7 @@ export function checkPower(input: {
         area: "power",
         severity: "warning",
         subject,
+        unitNote: `circuit ${c.name} over its continuous-load limit`,
         message: `${fmt(a)} A is over the continuous-load limit of ${fmt(c.ratingA * (e.derating as number))} A (${Math.round((e.derating as number) * 100)} % of ${c.ratingA} A).`,
         fixtureIds: ids,
       });
@@ -180,6 +183,7 @@ export function checkPower(input: {
         subject,
         message: `${switchMode.map((u) => `Unit ${u.label}`).join(", ")} ${switchMode.length === 1 ? "has" : "have"} an electronic supply on a dimmed circuit: set that dimmer to non-dim or use a constant-power circuit. A dimmer can damage the unit's power supply.`,
         fixtureIds: switchMode.map((u) => u.id),
+        unitNote: `electronic unit on dimmed circuit ${c.name}: set it to non-dim`,
       });
     }
     if (c.dimmed && accessories.length) {
@@ -189,6 +193,7 @@ export function checkPower(input: {
         subject,
         message: `${accessories.map((a) => `the ${a.kind} on unit ${a.unit}`).join(", ")} ${accessories.length === 1 ? "is" : "are"} counted on this dimmed circuit through ${accessories.length === 1 ? "its" : "their"} host: an accessory's driver needs constant power. Feed it from a non-dim circuit or its own supply.`,
         fixtureIds: [...new Set(accessories.map((a) => a.fixtureId))],
+        unitNote: `powered accessory on dimmed circuit ${c.name}`,
       });
     }
     // Not an inference: a multi-slot type read as a lamp only because its Load is empty is worth a look.
@@ -202,6 +207,7 @@ export function checkPower(input: {
         subject,
         message: `${unsure.map((u) => `Unit ${u.label} (${u.typeName})`).join(", ")} ${unsure.length === 1 ? "takes" : "take"} several DMX slots on this dimmed circuit and ${unsure.length === 1 ? "its type does" : "their types do"} not say lamp or switch-mode: counted as a lamp. If it has an electronic supply, set the type's Load to switch-mode.`,
         fixtureIds: unsure.map((u) => u.id),
+        unitNote: `load kind not set, on dimmed circuit ${c.name}`,
       });
     }
     const missing = units.filter((u) => u.wattage == null);
@@ -219,6 +225,7 @@ export function checkPower(input: {
         subject,
         message: `${parts.join(" and ")} with no wattage not counted: the total is incomplete.`,
         fixtureIds: [...new Set([...missing.map((u) => u.id), ...missingAccessories.map((a) => a.fixtureId)])],
+        unitNote: "no wattage: not counted",
       });
     }
     return {
@@ -269,6 +276,7 @@ export function checkPower(input: {
       subject: "Wattage",
       message: `${notCounted.length} unit${notCounted.length === 1 ? " or powered accessory has" : "s or powered accessories have"} no wattage and ${notCounted.length === 1 ? "is" : "are"} not counted: the totals are incomplete.`,
       fixtureIds: [...new Set(notCounted.map((u) => u.id))],
+      unitNote: "no wattage: not counted",
     });
   if (notOnCircuit.length)
     findings.push({

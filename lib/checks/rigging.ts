@@ -99,6 +99,7 @@ function positionLoad(
       subject,
       message: `${totalKg.toFixed(1)} kg is ${pct(fraction!)} of its rated load of ${p.ratedLoadKg} kg: over the rating.`,
       fixtureIds: ids,
+      unitNote: `${p.name} over its rated load`,
     });
   else if (status === "near")
     findings.push({
@@ -107,6 +108,7 @@ function positionLoad(
       subject,
       message: `${totalKg.toFixed(1)} kg is ${pct(fraction!)} of its rated load of ${p.ratedLoadKg} kg: close to the rating.`,
       fixtureIds: ids,
+      unitNote: `${p.name} close to its rated load`,
     });
   else if (status === "no-rating" && units.length)
     findings.push({
@@ -126,6 +128,7 @@ function positionLoad(
       subject,
       message: `No weight entered for ${notCounted.join(", ")}: not counted, the total is incomplete.`,
       fixtureIds: [...missing.map((u) => u.id), ...missingAcc.map((a) => a.fixtureId)],
+      unitNote: "no weight: not counted",
     });
 
   let bendingEquivalentKg: number | null = null;
@@ -147,6 +150,7 @@ function positionLoad(
         subject,
         message: `Its units bend the pipe as much as ${bendingEquivalentKg.toFixed(1)} kg spread evenly would (heavy units near mid-span count up to twice): more than the rated ${p.ratedLoadKg} kg if that is a distributed-load rating.`,
         fixtureIds: ids,
+        unitNote: `${p.name} may be over a distributed-load rating`,
       });
     }
     if (p.liftLines != null && p.liftLines >= 2)

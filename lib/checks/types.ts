@@ -14,6 +14,10 @@ export type Finding = {
   message: string;
   /** Fixture ids concerned, so the plot and the rig table can badge them. */
   fixtureIds?: number[];
+  /** What a unit's badge says about it ("circuit 14 over its rating"); info findings badge a unit only with one. */
+  unitNote?: string;
+  /** Stable anchor of the finding's row on the checks page (set by runChecks). */
+  key?: string;
 };
 
 /** A fixture as the checks see it: identity, type facts and its DMX and power fields. */

@@ -13,7 +13,13 @@ export function FindingsList({ findings }: { findings: Finding[] }) {
   return (
     <ul className="flex flex-col gap-1 text-sm" data-testid="checks-findings">
       {findings.map((f, i) => (
-        <li key={`${f.area}-${i}`} className="flex gap-3" data-severity={f.severity}>
+        // A unit's badge on the plot or the rig table links here by the finding's key.
+        <li
+          key={f.key ?? `${f.area}-${i}`}
+          id={f.key}
+          className="flex scroll-mt-24 gap-3 rounded target:ring-2 target:ring-accent"
+          data-severity={f.severity}
+        >
           <span
             className={`h-fit w-12 shrink-0 rounded border px-1 text-center text-xs font-semibold uppercase ${TONE[f.severity]}`}
           >

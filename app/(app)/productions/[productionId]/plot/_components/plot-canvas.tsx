@@ -19,6 +19,8 @@ import { drawUnderlay } from "@/components/plot/draw-underlay";
 import { LayerSnapshot } from "@/components/plot/snapshot";
 import { drawOverlay } from "./draw-overlay";
 import { drawNoteBadges } from "@/components/notes/draw-note-badges";
+import { drawCheckBadges, placeCheckLinks, PlotCheckLinks } from "@/components/checks/plot-check-badges";
+import { useUnitChecks } from "@/components/checks/use-unit-checks";
 import { stageBounds, stageOutline, extendBounds } from "@/lib/plot/stage-outline";
 import { fitBounds, visiblePlanBounds, zoomAbout, type View } from "@/lib/plot/view";
 import { useViewNavigation } from "@/components/plot/use-view-navigation";
@@ -61,6 +63,11 @@ function PlotCanvas(props: PlotCanvasProps) {
   const outline = useMemo(() => stageOutline(production), [production]);
   const items = useMemo(() => buildRigItems(data), [data]);
   const underlay = data.underlays[0] ?? null;
+  // What the checks flag on each unit: a badge on its symbol and a link over it (components/checks).
+  const checkFlags = useUnitChecks(production.id).data?.units;
+  const flags = useRef(checkFlags);
+  flags.current = checkFlags;
+  const checkLinks = useRef<HTMLDivElement | null>(null);
 
   // Everything the draw functions read, in one ref so they stay stable between renders.
   const live = useRef({ props, items, outline, palette, size, underlay });
@@ -97,7 +104,7 @@ function PlotCanvas(props: PlotCanvasProps) {
       }
     }
     redraw();
-  }, [data, layers, selection, palette, size, props.tool, props.noteCounts, redraw]);
+  }, [data, layers, selection, palette, size, props.tool, props.noteCounts, checkFlags, redraw]);
 
   useLayoutEffect(() => {
     // Size, colours and the fitted view before anything is drawn: Konva draws every layer as soon as the
@@ -285,6 +292,9 @@ function PlotCanvas(props: PlotCanvasProps) {
       }
       const badges = p.layers.fixtures ? drawNoteBadges(ctx, v, its, p.noteCounts, pal, sz) : 0;
       if (container.current) container.current.dataset.noteBadges = String(badges);
+      const checked = p.layers.fixtures ? drawCheckBadges(ctx, v, its, flags.current, pal, sz) : 0;
+      if (container.current) container.current.dataset.checkBadges = String(checked);
+      placeCheckLinks(checkLinks.current, v, its, sz, p.layers.fixtures);
       drawOverlay(ctx, v, sz, pal, {
         gesture: gesture.current,
         draft: draft.current,
@@ -322,6 +332,7 @@ function PlotCanvas(props: PlotCanvasProps) {
           <PlanShape draw={drawOver} />
         </Layer>
       </Stage>
+      <PlotCheckLinks productionId={production.id} flags={checkFlags} layerRef={checkLinks} />
     </div>
   );
 }

@@ -20,6 +20,7 @@ import type { FixtureDto } from "@/lib/dto/fixture";
 import { RIG_COLUMNS, headerWithUnit, type Units } from "@/lib/rig/columns";
 import { compareUnitNumbers } from "@/lib/rig/unit-number";
 import { NotesButton } from "@/components/notes/notes-button";
+import { UnitCheckCell } from "@/components/checks/unit-check-badge";
 import { EditableCell, type Choice } from "./editable-cell";
 import { EmptyOrInherited } from "./inherited-value";
 import { showValue } from "./cell-value";
@@ -43,6 +44,8 @@ type Props = {
   typeWeights: Map<number, number>;
   state: TableState;
   onState: (patch: Partial<TableState>) => void;
+  /** Present for a role that may take units out of the rig (asked of the policy by the page). */
+  onDelete?: (fixture: FixtureDto) => void;
 };
 
 /** One table of every fixture: stored fields beside computed focus values, sort, filter, group and inline edit. */
@@ -56,6 +59,7 @@ export function RigTable({
   typeWeights,
   state,
   onState,
+  onDelete,
 }: Props) {
   const [collapsed, setCollapsed] = useState<Set<string>>(new Set());
   const bodies = useMemo(() => cellCounts(fixtures), [fixtures]);
@@ -118,6 +122,40 @@ export function RigTable({
         </span>
       ),
     });
+    // What the checks flag on each unit, after its notes (one request for the whole table).
+    defs.splice(afterUnit + 1, 0, {
+      id: "checks",
+      header: "Checks",
+      enableSorting: false,
+      enableHiding: false,
+      cell: ({ row }) => (
+        <span className="flex justify-center px-1">
+          <UnitCheckCell productionId={productionId} fixtureId={row.original.id} />
+        </span>
+      ),
+    });
+    if (onDelete) {
+      defs.push({
+        id: "delete",
+        header: () => <span className="sr-only">Delete</span>,
+        enableSorting: false,
+        enableHiding: false,
+        cell: ({ row }) => (
+          <span className="flex justify-center px-1 print:hidden">
+            <button
+              type="button"
+              data-cell-control
+              aria-label={`Delete unit ${row.original.unitNumber} on ${row.original.positionName}${row.original.cell ? `, cell ${row.original.cell}` : ""}`}
+              title="Delete this unit (Undo puts it back)"
+              onClick={() => onDelete(row.original)}
+              className="min-h-8 min-w-8 rounded px-1 text-muted hover:bg-danger/10 hover:text-danger focus-visible:outline-2 focus-visible:outline-accent pointer-coarse:min-h-11 pointer-coarse:min-w-11"
+            >
+              <span aria-hidden>✕</span>
+            </button>
+          </span>
+        ),
+      });
+    }
     if (selectable) {
       defs.unshift({
         id: "select",
@@ -148,7 +186,7 @@ export function RigTable({
       });
     }
     return defs;
-  }, [units, editable, productionId, choices, selectable, hangOrder]);
+  }, [units, editable, productionId, choices, selectable, hangOrder, onDelete]);
 
   const table = useReactTable({
     data: fixtures,
