@@ -12,6 +12,7 @@ import { ensureNodeModules } from "./lib/node-modules.mjs";
 import { startMariaDb, stopRunningMariaDb } from "./lib/mariadb.mjs";
 import { ROOT, bin, buildIfStale, freePort, migrate, seedWhenEmpty, waitForHttp } from "./lib/project.mjs";
 import { startMailStandIn } from "./lib/mail-stand-in.mjs";
+import { startS3StandIn } from "./lib/s3-stand-in.mjs";
 
 // `npm test -- cues plot` runs only test files whose path contains one of the words (still all three
 // suites). TEST_DIST_DIR and TEST_RESULTS_DIR let several runs share one checkout without colliding.
@@ -123,6 +124,27 @@ function typecheck() {
   }
 }
 
+/** `next start` of the test build on a free loopback port; resolves with its address once it answers. */
+async function startAppServer(env) {
+  const port = await freePort();
+  const baseUrl = `http://127.0.0.1:${port}`;
+  const server = spawn(process.execPath, [bin("next"), "start", "-p", String(port), "-H", "127.0.0.1"], {
+    cwd: ROOT,
+    stdio: ["ignore", "ignore", "inherit"],
+    env: { ...process.env, ...env, NEXT_DIST_DIR: DIST_DIR, NODE_ENV: "production", TEST_RESULTS_DIR: RESULTS },
+  });
+  cleanups.push(
+    () =>
+      new Promise((resolve) => {
+        if (server.exitCode !== null) return resolve();
+        server.once("exit", resolve);
+        server.kill("SIGTERM");
+      }),
+  );
+  await waitForHttp(`${baseUrl}/api/health`);
+  return baseUrl;
+}
+
 async function main() {
   mkdirSync(RESULTS, { recursive: true });
   ensurePackages(["mariadb", "mariadbClient", "chromium", "pdftoppm", "fonts", "libreoffice"]);
@@ -138,7 +160,12 @@ async function main() {
   const mail = await startMailStandIn({ port: await freePort(), outboxDir: path.join(dbDir, "outbox") });
   cleanups.push(() => mail.stop());
 
+  // Uploads go to an S3 bucket on a local stand-in, as with several app servers in a real deployment.
+  const s3 = await startS3StandIn({ port: await freePort(), dir: path.join(dbDir, "s3") });
+  cleanups.push(() => s3.stop());
+
   const env = {
+    ...s3.env,
     DATABASE_URL: db.url,
     SESSION_SECRET: randomBytes(36).toString("base64url"),
     SMTP_URL: mail.url,
@@ -160,24 +187,13 @@ async function main() {
   let serverUp = false;
   try {
     buildIfStale(DIST_DIR, env);
-    const port = await freePort();
-    const baseUrl = `http://127.0.0.1:${port}`;
-    const server = spawn(process.execPath, [bin("next"), "start", "-p", String(port), "-H", "127.0.0.1"], {
-      cwd: ROOT,
-      stdio: ["ignore", "ignore", "inherit"],
-      env: { ...process.env, ...env, NEXT_DIST_DIR: DIST_DIR, NODE_ENV: "production", TEST_RESULTS_DIR: RESULTS },
-    });
-    cleanups.push(
-      () =>
-        new Promise((resolve) => {
-          if (server.exitCode !== null) return resolve();
-          server.once("exit", resolve);
-          server.kill("SIGTERM");
-        }),
+    // A second server (same build, same MariaDB and bucket) for the two-servers test, only when it runs.
+    const second = testFiles("tests/integration").some(
+      (f) => f === "tests/integration" || f.endsWith("two-servers.test.ts"),
     );
-    await waitForHttp(`${baseUrl}/api/health`);
+    const [baseUrl, secondUrl] = await Promise.all([startAppServer(env), second ? startAppServer(env) : null]);
     serverUp = true;
-    Object.assign(env, { APP_URL: baseUrl });
+    Object.assign(env, { APP_URL: baseUrl }, secondUrl ? { APP_URL_SECOND: secondUrl } : {});
   } catch (err) {
     log(`The app could not be built or started: ${err.message}`);
     totals.failed += 1;
