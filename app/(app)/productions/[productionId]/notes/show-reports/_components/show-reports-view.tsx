@@ -7,13 +7,11 @@ import { Button } from "@/components/ui/button";
 import { ApiError, apiFetch } from "@/lib/http/api-client";
 import type { ShowReportDto } from "@/lib/notes/dto";
 import type { NoteSubjects } from "@/lib/notes/subjects";
-import { KIND_LABELS } from "@/lib/notes/words";
-import { NOTE_KINDS, type NoteKind } from "@/models/note-vocabulary";
 import { notesKey } from "../../_components/use-notes";
 import { itemForServer, itemFromServer, type Item } from "./report-items";
 import { ReportCard } from "./report-card";
+import { FaultsFieldset, ItemsFieldset, type Fault } from "./report-form-lists";
 
-type Fault = { fixtureId: string; kind: "lamp_out" | "fault"; description: string };
 const input = "rounded border border-line bg-raised px-2 py-1";
 const today = () => new Date().toISOString().slice(0, 10);
 
@@ -207,111 +205,15 @@ export function ShowReportsView({
               onChange={(e) => setSummary(e.target.value)}
             />
           </label>
-          <fieldset className="flex flex-col gap-2">
-            <legend className="font-medium">
-              Lighting items (each becomes a note for whoever does that kind of job)
-            </legend>
-            {items.map((it, i) => (
-              <div key={i} className="flex flex-wrap items-end gap-2">
-                <label className="flex flex-1 flex-col gap-1">
-                  Item {i + 1}
-                  <input
-                    className={input}
-                    value={it.body}
-                    onChange={(e) => setItems(items.map((x, j) => (j === i ? { ...x, body: e.target.value } : x)))}
-                  />
-                </label>
-                <label className="flex flex-col gap-1">
-                  Kind
-                  <select
-                    className={input}
-                    value={it.kind}
-                    onChange={(e) =>
-                      setItems(items.map((x, j) => (j === i ? { ...x, kind: e.target.value as NoteKind } : x)))
-                    }
-                  >
-                    {NOTE_KINDS.map((k) => (
-                      <option key={k} value={k}>
-                        {KIND_LABELS[k]}
-                      </option>
-                    ))}
-                  </select>
-                </label>
-                {unitSelect(
-                  it.fixtureId,
-                  (v) =>
-                    setItems(
-                      items.map((x, j) =>
-                        j === i ? { ...x, fixtureId: v, subject: v ? "fixture" : "production", subjectId: null } : x,
-                      ),
-                    ),
-                  "Unit",
-                )}
-                <Button type="button" variant="quiet" onClick={() => setItems(items.filter((_, j) => j !== i))}>
-                  Remove
-                </Button>
-              </div>
-            ))}
-            <Button
-              type="button"
-              variant="secondary"
-              onClick={() => setItems([...items, { body: "", kind: "work", fixtureId: "" }])}
-            >
-              Add a lighting item
-            </Button>
-          </fieldset>
-          <fieldset className="flex flex-col gap-2">
-            <legend className="font-medium">Lamp-out and fault log (a logged unit gets a work note)</legend>
-            {faults.map((f, i) => (
-              <div key={i} className="flex flex-wrap items-end gap-2">
-                {unitSelect(
-                  f.fixtureId,
-                  (v) => setFaults(faults.map((x, j) => (j === i ? { ...x, fixtureId: v } : x))),
-                  `Entry ${i + 1}: unit`,
-                )}
-                <label className="flex flex-col gap-1">
-                  What
-                  <select
-                    className={input}
-                    value={f.kind}
-                    onChange={(e) =>
-                      setFaults(faults.map((x, j) => (j === i ? { ...x, kind: e.target.value as Fault["kind"] } : x)))
-                    }
-                  >
-                    <option value="lamp_out">Lamp out</option>
-                    <option value="fault">Fault</option>
-                  </select>
-                </label>
-                <label className="flex flex-1 flex-col gap-1">
-                  Seen
-                  <input
-                    className={input}
-                    value={f.description}
-                    maxLength={300}
-                    onChange={(e) =>
-                      setFaults(faults.map((x, j) => (j === i ? { ...x, description: e.target.value } : x)))
-                    }
-                  />
-                </label>
-                <Button type="button" variant="quiet" onClick={() => setFaults(faults.filter((_, j) => j !== i))}>
-                  Remove
-                </Button>
-              </div>
-            ))}
-            <Button
-              type="button"
-              variant="secondary"
-              onClick={() => setFaults([...faults, { fixtureId: "", kind: "lamp_out", description: "" }])}
-            >
-              Log a lamp out or fault
-            </Button>
-          </fieldset>
+          <ItemsFieldset items={items} setItems={setItems} unitSelect={unitSelect} />
+          <FaultsFieldset faults={faults} setFaults={setFaults} unitSelect={unitSelect} />
           <div className="flex flex-wrap items-center gap-3">
-            <Button type="submit" data-send="yes" disabled={busy}>
-              {editing ? "Save and send to the team" : "File and send to the team"}
-            </Button>
+            {/* The draft button comes first: Enter in a field saves a draft and never sends the report. */}
             <Button type="submit" variant="secondary" disabled={busy}>
               {editing ? "Save the draft" : "Save as a draft"}
+            </Button>
+            <Button type="submit" data-send="yes" disabled={busy}>
+              {editing ? "Save and send to the team" : "File and send to the team"}
             </Button>
             {editing ? (
               <Button type="button" variant="quiet" onClick={clear}>
