@@ -94,7 +94,7 @@ export function SpotTool({
         data-testid="spot-panel"
         data-x={point?.x}
         data-y={point?.y}
-        className="absolute bottom-3 left-3 z-20 flex max-h-[70%] w-[min(26rem,calc(100%-1.5rem))] flex-col gap-2 overflow-y-auto rounded-md border border-line bg-surface p-3 text-sm shadow-lg"
+        className="absolute right-3 top-10 z-20 flex max-h-[calc(100%-3.5rem)] w-[min(20rem,calc(100%-1.5rem))] flex-col gap-2 overflow-y-auto rounded-md border border-line bg-surface p-3 text-sm shadow-lg"
       >
         <div className="flex items-center justify-between gap-2">
           <h2 className="font-semibold">What lights this spot?</h2>

@@ -113,24 +113,34 @@ describe("notes badges and the plot's spot question", () => {
         : f.focusX != null && f.focusY != null
           ? { x: f.focusX, y: f.focusY }
           : undefined;
-    // A unit that is up in some cue and has a mark: its mark is lit in that cue.
-    let cue = cues[0];
-    let lit: Fixture | undefined;
-    for (const c of cues) {
-      lit = fixtures.find((f) => f.channel != null && (c.levels?.[f.channel] ?? 0) > 0 && markOf(f));
-      if (lit) {
-        cue = c;
-        break;
-      }
-    }
-    expect(lit, "the demo has a unit up in a cue with a focus mark").toBeTruthy();
-    const mark = markOf(lit!)!;
+    // Units up in some cue with a mark: each mark is lit in that cue.
+    const candidates = cues.flatMap((c) =>
+      fixtures
+        .filter((f) => f.channel != null && (c.levels?.[f.channel] ?? 0) > 0 && markOf(f))
+        .map((f) => ({ cue: c, lit: f, mark: markOf(f)! })),
+    );
+    expect(candidates.length, "the demo has a unit up in a cue with a focus mark").toBeGreaterThan(0);
 
     await openPlot(page);
     await page.getByTestId("spot-mode").click();
     const panel = page.getByTestId("spot-panel");
+    await panel.waitFor();
+    // A mark the panel itself does not cover, so the tap lands on the stage.
+    const box = (await panel.boundingBox())!;
+    let chosen = candidates[0];
+    let at = await toPage(page, chosen.mark);
+    for (const c of candidates) {
+      const p = await toPage(page, c.mark);
+      const covered =
+        p.x > box.x - 10 && p.x < box.x + box.width + 10 && p.y > box.y - 10 && p.y < box.y + box.height + 10;
+      if (!covered) {
+        chosen = c;
+        at = p;
+        break;
+      }
+    }
+    const { cue, lit, mark } = chosen;
     await panel.getByLabel("In cue").selectOption(String(cue.id));
-    const at = await toPage(page, mark);
     await page.mouse.click(at.x, at.y);
     const rows = panel.getByTestId("spot-row");
     await rows.first().waitFor({ timeout: UI_TIMEOUT });
@@ -142,7 +152,7 @@ describe("notes badges and the plot's spot question", () => {
     const answer = await (await page.request.post(`${api}/notes/spot`, { data: { ...picked, cueId: cue.id } })).json();
     const ranked = answer.contributions as Array<{ fixtureId: number; label: string }>;
     expect(ranked.length).toBeGreaterThan(0);
-    expect(ranked.some((c) => c.fixtureId === lit!.id)).toBe(true);
+    expect(ranked.some((c) => c.fixtureId === lit.id)).toBe(true);
     await eventually(async () => (await rows.count()) === ranked.length).toBe(true);
     for (const [i, c] of ranked.slice(0, 5).entries()) expect(await rows.nth(i).textContent()).toContain(c.label);
 
