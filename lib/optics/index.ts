@@ -25,7 +25,7 @@ export {
 export { clipPoolByCuts, ellipseToPolygon, MAX_CUTS, type CutLine } from "./cuts";
 export { convexHull, pointInPolygon, polygonArea } from "./polygon";
 export { penumbraWidth, shadowOf, umbraWidth, type Occluder, type Shadow, type ShadowInput } from "./shadow";
-export { shadowPolygons, type ShadowPolygons } from "./shadow-polygons";
+export { shadowPolygons, shadowPolygonsOf, type OutlineOptions, type ShadowPolygons } from "./shadow-polygons";
 export {
   footcandlesToLux,
   formatIlluminance,

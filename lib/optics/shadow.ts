@@ -72,13 +72,10 @@ function performerOutline(source: Vec3, o: Extract<Occluder, { kind: "performer"
 }
 
 function panelOutline(source: Vec3, o: Extract<Occluder, { kind: "panel" }>): Outline {
-  for (const [k, p] of [
-    ["a", o.a],
-    ["b", o.b],
-  ] as const) {
-    assertFinite(`Panel point ${k}.x`, p.x);
-    assertFinite(`Panel point ${k}.y`, p.y);
-  }
+  assertFinite("Panel point a.x", o.a.x);
+  assertFinite("Panel point a.y", o.a.y);
+  assertFinite("Panel point b.x", o.b.x);
+  assertFinite("Panel point b.y", o.b.y);
   const lx = o.b.x - o.a.x;
   const ly = o.b.y - o.a.y;
   const len = Math.hypot(lx, ly);
@@ -116,7 +113,10 @@ function edgeAt(p: Point, o: Occluder, outline: Outline): Edge {
 
 /** The edge that casts the tip (see Edge). `backWallY` Infinity for no wall. */
 export function occludingEdge(source: Vec3, o: Occluder, backWallY = Infinity): Edge {
-  const outline = outlineOf(source, o);
+  return edgeOfOutline(source, o, outlineOf(source, o), backWallY);
+}
+
+function edgeOfOutline(source: Vec3, o: Occluder, outline: Outline, backWallY: number): Edge {
   if (source.z <= o.height) return edgeAt(outline.mostDownstage, o, outline);
   const up = outline.mostUpstage;
   // The most upstage top point's ray is the one that reaches farthest up the wall; if even it meets the deck
@@ -129,7 +129,19 @@ export function occludingEdge(source: Vec3, o: Occluder, backWallY = Infinity): 
   return edgeAt(outline.farthest, o, outline);
 }
 
-const NONE = { tip: null, length: null, wallHeight: null, penumbraWidth: null, umbraWidth: null, incidenceDeg: null };
+/** A shadow with no measures, as one literal (an object spread here cost more than the geometry). */
+function without(lands: "none" | "unbounded", reason: string): Shadow {
+  return {
+    lands,
+    reason,
+    tip: null,
+    length: null,
+    wallHeight: null,
+    penumbraWidth: null,
+    umbraWidth: null,
+    incidenceDeg: null,
+  };
+}
 
 /** Where the shadow of a performer or a panel lands for one lens, and its edge widths at the tip. */
 export function shadowOf(i: ShadowInput): Shadow {
@@ -139,16 +151,18 @@ export function shadowOf(i: ShadowInput): Shadow {
   if (i.apertureDiameter < 0) throw new RangeError(`Lens aperture cannot be negative (got ${i.apertureDiameter}).`);
   if (Number.isNaN(i.backWallY)) throw new RangeError("Back-wall depth must be a number (Infinity for none).");
   if (s.y >= i.backWallY) throw new RangeError("The lens is behind the back wall.");
-  const e = occludingEdge(s, i.occluder, i.backWallY);
-  if (outlineOf(s, i.occluder).mostUpstage.y >= i.backWallY) {
+  // One outline serves every question below: the study asks this for every unit against every performer.
+  const outline = outlineOf(s, i.occluder);
+  const e = edgeOfOutline(s, i.occluder, outline, i.backWallY);
+  if (outline.mostUpstage.y >= i.backWallY) {
     throw new RangeError("The occluder is at or behind the back wall.");
   }
-  if (e.insideReason) return { lands: "none", reason: e.insideReason, ...NONE };
-  if (s.z < e.top.z && e.top.y <= s.y + 1e-12 && outlineOf(s, i.occluder).mostUpstage.y > s.y) {
+  if (e.insideReason) return without("none", e.insideReason);
+  if (s.z < e.top.z && e.top.y <= s.y + 1e-12 && outline.mostUpstage.y > s.y) {
     // Beside the occluder and below its top: rays over points just upstage of the lens climb the wall without
     // end, so there is no highest point to report.
     const reason = "The lens is beside the occluder and below its top, so the shadow runs to the horizon.";
-    return { lands: "unbounded", reason, ...NONE };
+    return without("unbounded", reason);
   }
 
   const dx = e.top.x - s.x;
@@ -160,7 +174,7 @@ export function shadowOf(i: ShadowInput): Shadow {
   const tWall = dy > 0 && Number.isFinite(i.backWallY) ? (i.backWallY - s.y) / dy : Infinity;
   if (tDeck === Infinity && tWall === Infinity) {
     const reason = "The lens is level with or below the top, so the shadow runs to the horizon.";
-    return { lands: "unbounded", reason, ...NONE };
+    return without("unbounded", reason);
   }
   const onWall = tWall < tDeck;
   // t − 1 from the edge's own offsets: with a distant source (the Sun) t is 1 + 1e-11 and t − 1 would be
