@@ -1,6 +1,8 @@
 // A small starter shelf of generic fixture types a designer can add to a production. The figures are
 // typical values from memory for each class of unit, not any manufacturer's data sheet and no brand:
-// replace them with the real figures of the units in your stock.
+// replace them with the real figures of the units in your stock. Every figure below is from memory.
+// A PC (pebble-convex) unit behaves like a fresnel on the deck (peaked, spot/flood, barn doors), so it
+// shares the fresnel family; its harder edge shows as less softness.
 import type { z } from "zod";
 import type { createFixtureTypeSchema } from "@/lib/validation/rig";
 
@@ -58,6 +60,22 @@ export const STARTER_TYPES: StarterType[] = [
     cells: 1,
   },
   {
+    name: "Generic profile 50°",
+    family: "profile",
+    coneMinDeg: 50,
+    coneMaxDeg: 50,
+    defaultSoftnessDeg: 3,
+    peakCandela: 12000,
+    wattage: 750,
+    weightKg: 7.3,
+    dmxModes: dimmer,
+    lensApertureM: 0.1,
+    frameSize: "6.25 in",
+    goboSize: "B",
+    lensDropM: 0.45,
+    cells: 1,
+  },
+  {
     name: "Generic zoom profile 25–50°",
     family: "profile",
     coneMinDeg: 25,
@@ -82,6 +100,22 @@ export const STARTER_TYPES: StarterType[] = [
     peakCandela: 30000,
     wattage: 1000,
     weightKg: 6,
+    dmxModes: dimmer,
+    lensApertureM: 0.15,
+    frameSize: "7.5 in",
+    goboSize: null,
+    lensDropM: 0.35,
+    cells: 1,
+  },
+  {
+    name: "Generic PC 150 mm",
+    family: "fresnel",
+    coneMinDeg: 10,
+    coneMaxDeg: 55,
+    defaultSoftnessDeg: 4,
+    peakCandela: 35000,
+    wattage: 1000,
+    weightKg: 6.5,
     dmxModes: dimmer,
     lensApertureM: 0.15,
     frameSize: "7.5 in",
@@ -142,5 +176,22 @@ export const STARTER_TYPES: StarterType[] = [
     goboSize: null,
     lensDropM: 0.35,
     cells: 4,
+  },
+  {
+    // Run by an operator from the back of the house; some have a DMX dimmer, most are worked by hand.
+    name: "Generic followspot, long throw",
+    family: "followspot",
+    coneMinDeg: 2,
+    coneMaxDeg: 9,
+    defaultSoftnessDeg: 0.5,
+    peakCandela: 900000,
+    wattage: 1200,
+    weightKg: 35,
+    dmxModes: [{ name: "dimmer, where fitted", footprint: 1 }],
+    lensApertureM: 0.2,
+    frameSize: null,
+    goboSize: null,
+    lensDropM: 0,
+    cells: 1,
   },
 ];

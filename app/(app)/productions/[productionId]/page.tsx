@@ -8,6 +8,9 @@ import { formatLength } from "@/lib/optics";
 import { Card } from "@/components/ui/card";
 import { requireChecksReport } from "@/lib/data/checks";
 import { checksStatusLines } from "@/lib/checks/status";
+import { getFixtureTypesByProduction } from "@/lib/data/fixture-types";
+import { can } from "@/lib/auth/policy";
+import { AddTypes } from "@/components/rig/add-types";
 
 // The layout's title template covers the tabs below it, not this page of its own segment.
 export async function generateMetadata({ params }: { params: Promise<{ productionId: string }> }): Promise<Metadata> {
@@ -16,12 +19,13 @@ export async function generateMetadata({ params }: { params: Promise<{ productio
 }
 
 export default async function OverviewPage({ params }: { params: Promise<{ productionId: string }> }) {
-  const { productionId } = await memberForPage((await params).productionId);
-  const [production, overview, team, checks] = await Promise.all([
+  const { productionId, member } = await memberForPage((await params).productionId);
+  const [production, overview, team, checks, types] = await Promise.all([
     requireProduction(productionId),
     getProductionOverview({ productionId }),
     getTeamByProduction({ productionId }),
     requireChecksReport({ productionId }),
+    getFixtureTypesByProduction({ productionId }),
   ]);
   // What the checks found, or which of them have nothing to check yet: never a bare all-clear.
   const checkLines = checksStatusLines(checks, {
@@ -41,6 +45,16 @@ export default async function OverviewPage({ params }: { params: Promise<{ produ
   ];
   return (
     <main className="mx-auto grid max-w-6xl gap-4 px-4 py-6 lg:grid-cols-3">
+      {types.length === 0 ? (
+        // A new production has no fixture types, so nothing can be hung yet: offer a start.
+        <Card title="No fixture types yet" className="lg:col-span-3">
+          {can(member, "plot.edit") ? (
+            <AddTypes productionId={productionId} existingNames={[]} />
+          ) : (
+            <p className="text-sm text-muted">The designer adds fixture types before units can be hung.</p>
+          )}
+        </Card>
+      ) : null}
       <Card title="Where things stand" className="lg:col-span-2">
         {/* A list of links (a link may not sit between a term and its description list). */}
         <ul className="grid grid-cols-2 gap-3 sm:grid-cols-3" data-testid="overview-counts">

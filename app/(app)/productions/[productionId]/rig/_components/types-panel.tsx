@@ -1,14 +1,11 @@
 "use client";
 
-import { useState } from "react";
 import type { FixtureTypeDto } from "@/lib/dto/fixture-type";
-import { STARTER_TYPES } from "@/lib/rig/starter-types";
 import { TYPE_COLUMNS } from "@/lib/rig/type-fields";
 import { TypeCell } from "./type-cell";
 import type { Units } from "@/lib/rig/columns";
-import { ApiError } from "@/lib/http/api-client";
-import { useAddStarterTypes } from "@/hooks/use-rig";
 import { Button } from "@/components/ui/button";
+import { AddTypes } from "@/components/rig/add-types";
 
 /** The production's fixture types (figures editable per the role table), and the generic starter shelf the designer can add from. */
 export function TypesPanel({
@@ -27,9 +24,6 @@ export function TypesPanel({
   onClose: () => void;
 }) {
   const editable = new Set(editableFields);
-  const add = useAddStarterTypes(productionId);
-  const [message, setMessage] = useState<string | null>(null);
-  const have = new Set(types.map((t) => t.name.toLowerCase()));
   return (
     <section className="rounded-lg border border-line bg-surface p-4 print:hidden" aria-label="Fixture types">
       <header className="mb-2 flex items-center justify-between">
@@ -74,33 +68,7 @@ export function TypesPanel({
       </div>
       {canAdd ? (
         <div className="mt-3">
-          <h3 className="text-sm font-semibold">Starter shelf</h3>
-          <p className="text-xs text-muted">
-            Generic types with typical figures from memory — no brand and not a data sheet. Replace the figures with
-            those of your own units.
-          </p>
-          <div className="mt-2 flex flex-wrap gap-2">
-            {STARTER_TYPES.filter((t) => !have.has(t.name.toLowerCase())).map((t) => (
-              <Button
-                key={t.name}
-                variant="secondary"
-                disabled={add.isPending}
-                onClick={() =>
-                  add.mutateAsync([t.name]).then(
-                    () => setMessage(`Added ${t.name}.`),
-                    (e) => setMessage(e instanceof ApiError ? e.message : "Could not add."),
-                  )
-                }
-              >
-                + {t.name}
-              </Button>
-            ))}
-          </div>
-          {message ? (
-            <p role="status" className="mt-2 text-sm">
-              {message}
-            </p>
-          ) : null}
+          <AddTypes productionId={productionId} existingNames={types.map((t) => t.name)} />
         </div>
       ) : null}
     </section>
