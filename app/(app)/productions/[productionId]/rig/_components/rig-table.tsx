@@ -20,7 +20,6 @@ import type { FixtureDto } from "@/lib/dto/fixture";
 import { RIG_COLUMNS, headerWithUnit, type Units } from "@/lib/rig/columns";
 import { compareUnitNumbers } from "@/lib/rig/unit-number";
 import { NotesButton } from "@/components/notes/notes-button";
-import { UnitCheckCell } from "@/components/checks/unit-check-badge";
 import { EditableCell, type Choice } from "./editable-cell";
 import { EmptyOrInherited } from "./inherited-value";
 import { showValue } from "./cell-value";
@@ -119,18 +118,6 @@ export function RigTable({
               label: `unit ${row.original.unitNumber}, ${row.original.positionName}`,
             }}
           />
-        </span>
-      ),
-    });
-    // What the checks flag on each unit, after its notes (one request for the whole table).
-    defs.splice(afterUnit + 1, 0, {
-      id: "checks",
-      header: "Checks",
-      enableSorting: false,
-      enableHiding: false,
-      cell: ({ row }) => (
-        <span className="flex justify-center px-1">
-          <UnitCheckCell productionId={productionId} fixtureId={row.original.id} />
         </span>
       ),
     });

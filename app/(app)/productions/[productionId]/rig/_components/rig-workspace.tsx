@@ -1,6 +1,6 @@
 "use client";
 
-import { useMemo, useRef, useState } from "react";
+import { useEffect, useMemo, useRef, useState } from "react";
 import { usePathname, useRouter } from "next/navigation";
 import type { FixtureDto } from "@/lib/dto/fixture";
 import type { FixtureTypeDto } from "@/lib/dto/fixture-type";
@@ -16,6 +16,7 @@ import { ImportPanel } from "./import-panel";
 import { StockPanel } from "./stock-panel";
 import { TypesPanel } from "./types-panel";
 import { AccessoriesPanel } from "./accessories-panel";
+import { useRigDelete } from "./use-rig-delete";
 
 type Rights = { editable: string[]; typeFields: string[]; canImport: boolean; canPlot: boolean; canElectrics: boolean };
 type Props = {
@@ -71,6 +72,28 @@ export function RigWorkspace(props: Props) {
     .map(Number);
   const bulkAllowed = rights.canPlot || rights.canElectrics;
   const current = VIEW_BY_ID.get(view)!;
+  const deletion = useRigDelete(productionId);
+  const { undoLast, undoLabel, remove } = deletion;
+  // Stable while nothing changes, so the table does not rebuild its columns on every render.
+  const onDelete = useMemo(
+    () => (rights.canPlot ? (f: FixtureDto) => void remove([f]) : undefined),
+    [rights.canPlot, remove],
+  );
+
+  // Ctrl/Cmd+Z undoes the last delete, as on the plot, unless the keys belong to a field being typed in.
+  useEffect(() => {
+    if (!undoLabel) return;
+    const onKey = (e: KeyboardEvent) => {
+      const t = e.target as HTMLElement | null;
+      if (t?.closest("input, textarea, select, [contenteditable=true]")) return;
+      if ((e.ctrlKey || e.metaKey) && !e.shiftKey && e.key.toLowerCase() === "z") {
+        e.preventDefault();
+        void undoLast();
+      }
+    };
+    window.addEventListener("keydown", onKey);
+    return () => window.removeEventListener("keydown", onKey);
+  }, [undoLabel, undoLast]);
 
   // A panel that closes gives the focus back to the button that opened it (keyboard users stay in place).
   const opener = useRef<HTMLElement | null>(null);
@@ -215,7 +238,32 @@ export function RigWorkspace(props: Props) {
             columns are computed from the beam model.
             {rights.editable.length ? " Click a value to change it." : " Your role can read the rig but not change it."}
           </p>
+          {deletion.notice || deletion.undoLabel ? (
+            <div
+              className="flex flex-wrap items-center gap-2 rounded-lg border border-line bg-surface px-3 py-2 text-sm print:hidden"
+              data-testid="rig-undo-bar"
+            >
+              <span
+                role={deletion.notice?.tone === "error" ? "alert" : "status"}
+                className={deletion.notice?.tone === "error" ? "text-danger" : ""}
+              >
+                {deletion.notice?.text}
+              </span>
+              <span className="grow" />
+              {deletion.undoLabel ? (
+                <Button
+                  variant="secondary"
+                  disabled={deletion.busy}
+                  onClick={() => void deletion.undoLast()}
+                  title="Ctrl+Z (⌘Z)"
+                >
+                  Undo: {deletion.undoLabel.toLowerCase()}
+                </Button>
+              ) : null}
+            </div>
+          ) : null}
           <RigTable
+            onDelete={onDelete}
             fixtures={fixtures}
             units={units}
             typeWeights={typeWeights}
