@@ -34,7 +34,9 @@ const SETTINGS_KEYS = [
   "version",
 ] as const;
 
-export const toElectricalSettingsDto = (p: Production): ElectricalSettingsDto => ({
+export const toElectricalSettingsDto = (
+  p: Pick<Production, "id" | (typeof SETTINGS_KEYS)[number]>,
+): ElectricalSettingsDto => ({
   productionId: p.id,
   electricalCode: p.electricalCode,
   supplySystem: p.supplySystem,
@@ -212,15 +214,35 @@ function toCheckPosition(p: PositionRow): CheckPosition {
   };
 }
 
-/** All three checks for a production, computed from its current rows. */
+type SettingsRow = Pick<Production, "id" | (typeof SETTINGS_KEYS)[number]>;
+
+/** All three checks for a production, computed from its current rows; the per-unit flags are left to getUnitChecks. */
 export async function getChecksReport({ productionId }: { productionId: number }): Promise<ChecksReport | null> {
+  const report = await computeChecks(productionId);
+  if (!report) return null;
+  // The flags repeat each unit's notes (about 200 KB at 1,500 units): only the badges' route sends them.
+  const { units: _units, ...rest } = report;
+  return rest;
+}
+
+/** What the checks say about each unit, for the badges on the plot and the rig table. */
+export async function getUnitChecks({ productionId }: { productionId: number }) {
+  const report = await computeChecks(productionId);
+  return report ? { units: report.units, summary: report.summary } : null;
+}
+
+async function computeChecks(productionId: number) {
   const db = getDb();
-  // Plain SQL rows rather than model queries: these reads need no model behaviour, and at 1,500 fixtures
-  // it took Node's CPU for the report from 55 to 47 ms (bench:checks, loaded machine).
+  // Plain SQL rows rather than model queries, one query a table with only the columns used: these reads
+  // need no model behaviour. At 1,500 fixtures that took Node's CPU for the report from 55 to 47 ms
+  // (bench:checks, loaded machine); the production's row as a plain row too saves building a model instance.
   const select = <T extends object>(sql: string, id: number) =>
-    db.sequelize.query<T>(sql, { replacements: [id], type: QueryTypes.SELECT });
-  const [production, fixtures, types, positions, accessories, circuits, lines, cueChannels] = await Promise.all([
-    db.Production.findByPk(productionId, { attributes: ["id", ...SETTINGS_KEYS] }),
+    db.sequelize.query<T>(sql, { replacements: [id], type: QueryTypes.SELECT, raw: true });
+  const [[production], fixtures, types, positions, accessories, circuits, lines, cueChannels] = await Promise.all([
+    select<SettingsRow>(
+      "SELECT id, electrical_code AS electricalCode, supply_system AS supplySystem, voltage, derating, cable_kg_per_m AS cableKgPerM, hardware_kg_per_unit AS hardwareKgPerUnit, version FROM productions WHERE id = ?",
+      productionId,
+    ),
     select<FixtureRow>(
       "SELECT id, position_id AS positionId, fixture_type_id AS fixtureTypeId, unit_number AS unitNumber, body_key AS bodyKey, channel, universe, address, dmx_mode AS dmxMode, footprint, circuit, dimmer, x, y FROM fixtures WHERE production_id = ?",
       productionId,
@@ -245,9 +267,9 @@ export async function getChecksReport({ productionId }: { productionId: number }
       "SELECT id, name, universe, fixture_ids AS fixtureIds FROM data_lines WHERE production_id = ? ORDER BY name",
       productionId,
     ),
-    db.sequelize.query<{ channel: number }>(
+    select<{ channel: number }>(
       "SELECT DISTINCT l.channel FROM cue_levels l JOIN cues c ON c.id = l.cue_id WHERE c.production_id = ?",
-      { replacements: [productionId], type: QueryTypes.SELECT },
+      productionId,
     ),
   ]);
   if (!production) return null;
@@ -335,6 +357,12 @@ export async function getChecksReport({ productionId }: { productionId: number }
     computedAt: new Date().toISOString(),
     computeMs: performance.now() - started,
   };
+}
+
+export async function requireUnitChecks({ productionId }: { productionId: number }) {
+  const flags = await getUnitChecks({ productionId });
+  if (!flags) throw notFound("Production");
+  return flags;
 }
 
 export async function requireChecksReport({ productionId }: { productionId: number }): Promise<ChecksReport> {

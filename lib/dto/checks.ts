@@ -37,7 +37,8 @@ export type ElectricalSettingsDto = {
   version: number;
 };
 
-export type ChecksReport = ChecksResult & {
+/** The report as the checks page and the export read it; the per-unit flags go to the badges' own route. */
+export type ChecksReport = Omit<ChecksResult, "units"> & {
   settings: ElectricalSettingsDto;
   electrical: EffectiveElectrical;
   cautions: { general: string[]; power: string[]; dmx: string[]; loadKindRule: string };
