@@ -4,6 +4,7 @@ import { memberForPage } from "@/lib/auth/page-guards";
 import { requireProduction } from "@/lib/data/productions";
 import { getPlotData } from "@/lib/data/plot";
 import { getTeamByProduction } from "@/lib/data/memberships";
+import { getLatestRevisionStamp } from "@/lib/data/revisions";
 import { stageBounds, extendBounds } from "@/lib/plot/stage-outline";
 import { ORIENTATIONS, PAPERS, SCALES, bestScale, sheetLayout, type PaperName } from "./paper";
 import { PrintSheet } from "./print-sheet";
@@ -31,10 +32,11 @@ export default async function PrintPlotPage({
   searchParams: Promise<Record<string, string | string[] | undefined>>;
 }) {
   const { productionId } = await memberForPage((await params).productionId);
-  const [production, data, team, raw] = await Promise.all([
+  const [production, data, team, revision, raw] = await Promise.all([
     requireProduction(productionId),
     getPlotData({ productionId }),
     getTeamByProduction({ productionId }),
+    getLatestRevisionStamp({ productionId }),
     searchParams,
   ]);
   const q = searchSchema.parse(raw);
@@ -103,8 +105,8 @@ export default async function PrintPlotPage({
           venue: production.venue,
           designer: designers.map((d) => d.name).join(", "),
           date: new Date().toISOString().slice(0, 10),
-          // Slot for the latest issued revision's label, filled once the revisions data layer offers a read.
-          revision: null,
+          // The latest issued revision; until one is issued the block shows a dash.
+          revision: revision ? `${revision.label} (${revision.issuedAt.slice(0, 10)})` : null,
           scale: chosen.label,
           paper: `${PAPERS[paper].label}, ${ORIENTATIONS[orientation].toLowerCase()}`,
           datum: `${production.datumName} (y = 0); CL x = 0`,
