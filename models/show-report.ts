@@ -101,6 +101,7 @@ export function initShowReport(sequelize: Sequelize) {
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },
-    { sequelize, tableName: "show_report_items", underscored: true },
+    // Named outright: lib/data reads it from the instance's registry by this name, and a minified build renames classes.
+    { sequelize, tableName: "show_report_items", modelName: "ShowReportItem", underscored: true },
   );
 }
