@@ -7,7 +7,7 @@ import { log } from "./system.mjs";
 
 const sleep = (ms) => new Promise((r) => setTimeout(r, ms));
 
-function isAlive(pid) {
+export function isAlive(pid) {
   try {
     process.kill(pid, 0);
   } catch {
@@ -24,7 +24,18 @@ function readPid(pidFile) {
   return Number.isInteger(pid) && pid > 0 ? pid : null;
 }
 
-function canQuery({ port, user, password, database }) {
+/**
+ * The server's own folder for temporary tables. Not /tmp: engineers' sandboxes can share /tmp while each
+ * has its own process ids, and two servers with the same pid name their temporary tables alike and
+ * remove each other's (seen as "Could not remove temporary table … Unknown table" during set-up).
+ */
+export function tmpDirOf(dir) {
+  const tmp = path.join(dir, "tmp");
+  mkdirSync(tmp, { recursive: true });
+  return tmp;
+}
+
+export function canQuery({ port, user, password, database }) {
   const r = spawnSync(
     "mariadb",
     ["--protocol=tcp", "-h127.0.0.1", `-P${port}`, `-u${user}`, `-p${password}`, database, "-e", "select 1"],
@@ -37,7 +48,8 @@ function sqlString(s) {
   return `'${String(s).replace(/\\/g, "\\\\").replace(/'/g, "\\'")}'`;
 }
 
-function initialise({ dir, database, user, password }) {
+/** A new data folder with the app's database and user (the user may connect from 127.0.0.1 only). */
+export function initialise({ dir, database, user, password }) {
   const dataDir = path.join(dir, "data");
   mkdirSync(dir, { recursive: true });
   const initSql = path.join(dir, "init.sql");
@@ -62,6 +74,7 @@ function initialise({ dir, database, user, password }) {
       "--auth-root-authentication-method=socket",
       "--skip-test-db",
       "--skip-name-resolve",
+      `--tmpdir=${tmpDirOf(dir)}`,
       `--extra-file=${initSql}`,
     ],
     { encoding: "utf8" },
@@ -102,6 +115,7 @@ export async function startMariaDb({ dir, port, database = "throwline", user = "
       "--user=root",
       "--skip-name-resolve",
       `--log-error=${path.join(dir, "error.log")}`,
+      `--tmpdir=${tmpDirOf(dir)}`,
       "--character-set-server=utf8mb4",
       "--collation-server=utf8mb4_unicode_ci",
       "--innodb-buffer-pool-size=128M",
