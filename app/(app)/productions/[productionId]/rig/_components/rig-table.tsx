@@ -101,9 +101,10 @@ export function RigTable({
     }));
     // Open notes on each unit, beside its number (the counts come from one request for the whole table).
     const afterUnit = defs.findIndex((d) => d.id === "unitNumber") + 1;
+    // Not "notes": that is the unit's own notes field (a RIG_COLUMNS column).
     defs.splice(afterUnit, 0, {
-      id: "notes",
-      header: "Notes",
+      id: "openNotes",
+      header: "Open notes",
       enableSorting: false,
       enableHiding: false,
       cell: ({ row }) => (
