@@ -1,0 +1,98 @@
+// The mail server down: the stand-in is stopped (scripts/lib/mail-stand-in.mjs stops listening while its
+// control file exists), an owner invites someone and someone asks for a password reset; both are saved
+// and their mail queued with the failure, which the outbox page shows. Once the server is back, the
+// outbox's "try now" sends the invitation, the minute timer sends the reset, and both links work.
+import { rmSync, writeFileSync } from "node:fs";
+import net from "node:net";
+import path from "node:path";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { BrowserContext } from "playwright-core";
+import { linkIn, mailTo, waitForMail } from "../support/outbox";
+import { openBrowser, screenshot, signedIn, type SignedIn } from "./support/browser";
+
+const CONTROL = path.join(process.env.MAIL_OUTBOX_DIR ?? "", "stand-in-stopped");
+
+/** Whether the mail stand-in accepts connections right now. */
+function smtpListening(): Promise<boolean> {
+  const url = new URL(process.env.SMTP_URL!);
+  return new Promise((resolve) => {
+    const socket = net.connect(Number(url.port), url.hostname);
+    socket.once("connect", () => {
+      socket.destroy();
+      resolve(true);
+    });
+    socket.once("error", () => resolve(false));
+  });
+}
+
+async function untilSmtp(listening: boolean) {
+  const end = Date.now() + 10_000;
+  while ((await smtpListening()) !== listening) {
+    if (Date.now() > end) throw new Error(`the mail stand-in did not ${listening ? "start" : "stop"}`);
+    await new Promise((r) => setTimeout(r, 100));
+  }
+}
+
+let owner: SignedIn;
+let guest: BrowserContext;
+beforeAll(async () => {
+  owner = await signedIn("designer");
+  guest = await openBrowser();
+}, 120_000);
+afterAll(async () => {
+  rmSync(CONTROL, { force: true }); // never leave the stand-in stopped for the tests after this one
+  await owner?.close();
+  await guest?.close();
+});
+
+describe("the mail server down", () => {
+  it("queues the mail with the failure on the outbox page, and delivers it by the retry once the server is back", async () => {
+    const invited = `e2e-outage-${Date.now()}@example.test`;
+    const resetFor = `e2e-outage-reset-${Date.now()}@example.test`;
+    const { page, productionId } = owner;
+
+    writeFileSync(CONTROL, "");
+    await untilSmtp(false);
+    try {
+      await page.goto(`/productions/${productionId}/team`);
+      await page.getByLabel("E-mail").fill(invited);
+      await page.getByLabel("Role", { exact: true }).selectOption("electrician");
+      await page.getByRole("button", { name: "Send invitation" }).click();
+      await page.getByText(/could not be sent yet/).waitFor();
+      const reset = await guest.request.post("/api/auth/password-reset", { data: { email: resetFor } });
+      expect(reset.status()).toBe(202); // the same answer: the outage is the queue's business
+
+      await page.goto(`/productions/${productionId}/team/outbox`);
+      const item = page.getByRole("listitem").filter({ hasText: invited });
+      await item.getByText(/queued after 1 attempt/).waitFor();
+      await item.locator("summary").click();
+      await item.getByText(/The mail server refused or did not answer/).waitFor();
+      await screenshot(page, "mail-outage-outbox-queued");
+      expect(await mailTo(invited)).toHaveLength(0);
+    } finally {
+      rmSync(CONTROL, { force: true });
+    }
+    await untilSmtp(true);
+
+    await page.getByRole("button", { name: "Try queued mail now" }).click();
+    const invitation = await waitForMail(invited);
+    // The outbox page shows it sent.
+    await expect
+      .poll(async () => {
+        await page.reload();
+        return page.getByRole("listitem").filter({ hasText: invited }).locator("summary").textContent();
+      })
+      .toMatch(/· sent$/);
+    await screenshot(page, "mail-outage-outbox-sent");
+
+    // Nothing lost: the delivered link is the live one.
+    const join = await guest.newPage();
+    await join.goto(linkIn(invitation, "/invite/").pathname);
+    await join.getByRole("heading", { name: /^Join / }).waitFor();
+
+    // The reset mail belongs to no production: the queue's own timer sends it once its wait is over
+    // (a minute after the failure, checked every minute).
+    const resetMail = await waitForMail(resetFor, 1, 150_000);
+    expect(resetMail.subject).toBe("Throwline password request");
+  }, 240_000);
+});
