@@ -9,6 +9,8 @@ import { FocusChartCard } from "./focus-chart-card";
 export type SheetOptions = {
   productionName: string;
   printedAt: string;
+  /** The latest issued revision's label, printed on every sheet; null before the first. */
+  revision?: string | null;
   perPage: ChartsPerPage;
   units: Units;
   landmarks: Landmark[];
@@ -30,7 +32,7 @@ export function FocusSheet({ sheet, o }: { sheet: Sheet; o: SheetOptions }) {
           <b>{o.productionName}</b>
           {` · ${sheet.positions.join(", ")}`}
         </span>
-        <span>{`Focus charts · printed ${o.printedAt} · page ${sheet.page} of ${sheet.of}`}</span>
+        <span>{`Focus charts${o.revision ? ` · revision ${o.revision}` : ""} · printed ${o.printedAt} · page ${sheet.page} of ${sheet.of}`}</span>
       </header>
       <div className="fc-grid">
         {sheet.charts.map((c) => (

@@ -165,6 +165,7 @@ const EXPECTED: Record<string, Scope> = {
   "POST /api/productions/[productionId]/revisions/[revisionId]/restore": DE,
   "GET /api/productions/[productionId]/revisions/compare": ALL,
   "GET /api/productions/[productionId]/revisions/equipment": ALL,
+  "GET /api/productions/[productionId]/revisions/latest": ALL,
   "GET /api/productions/[productionId]/revisions/shop": D,
   "PUT /api/productions/[productionId]/revisions/shop": D,
   "GET /api/productions/[productionId]/revisions/mail-choice": ALL,

@@ -12,6 +12,8 @@ import { isRigViewId } from "@/lib/rig/views";
 import { RigWorkspace } from "./_components/rig-workspace";
 import { requireChecksReport } from "@/lib/data/checks";
 import { ChecksBadge } from "@/components/checks/checks-badge";
+import { getLatestRevisionStamp } from "@/lib/data/revisions";
+import { revisionStampText } from "@/components/revisions/revision-marks";
 
 export const metadata: Metadata = { title: "Rig" };
 
@@ -25,13 +27,14 @@ export default async function RigPage({
   searchParams: Promise<{ view?: string }>;
 }) {
   const { productionId, member } = await memberForPage((await params).productionId);
-  const [production, fixtures, types, positions, accessories, checks] = await Promise.all([
+  const [production, fixtures, types, positions, accessories, checks, revision] = await Promise.all([
     requireProduction(productionId),
     getFixturesByProduction({ productionId }),
     getFixtureTypesByProduction({ productionId }),
     getPositionsByProduction({ productionId }),
     getAccessoriesByProduction({ productionId }),
     requireChecksReport({ productionId }),
+    getLatestRevisionStamp({ productionId }),
   ]);
   const editable = RIG_COLUMNS.filter(
     (c) =>
@@ -48,6 +51,8 @@ export default async function RigPage({
         summary={checks.summary}
         className="fixed right-4 bottom-4 z-30 shadow"
       />
+      {/* The printed rig carries the revision it belongs to; the rows changed since it carry a side bar. */}
+      <p className="hidden px-4 text-xs print:block print:p-0">{revisionStampText(revision)}</p>
       <RigWorkspace
         productionId={productionId}
         productionName={production.name}

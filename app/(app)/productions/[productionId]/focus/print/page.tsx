@@ -6,6 +6,7 @@ import { focusFilterSchema, printOptionsSchema, toQuery } from "@/lib/focus/filt
 import { paginate } from "@/lib/focus/pages";
 import { formatStamp } from "@/lib/focus/words";
 import { loadFocusCharts } from "@/lib/pdf/focus-source";
+import { getLatestRevisionStamp } from "@/lib/data/revisions";
 import { FocusSheets } from "@/components/focus/focus-sheets";
 import { PrintButton } from "../_components/print-button";
 
@@ -27,10 +28,12 @@ export default async function FocusPrintPage({ params, searchParams }: Props) {
   const problem = [filterResult, optionsResult].flatMap((r) => (r.success ? [] : r.error.issues.map((i) => i.message)));
 
   const { production, charts, landmarks } = await loadFocusCharts({ productionId, filter, timeZone: options.tz });
+  const revision = (await getLatestRevisionStamp({ productionId }))?.label ?? null;
   const sheets = paginate(charts, options.perPage, { newPagePerPosition: options.newPagePerPosition });
   const sheetOptions = {
     productionName: production.name,
     printedAt: formatStamp(new Date(), options.tz),
+    revision,
     perPage: options.perPage,
     units: production.displayUnits,
     landmarks,

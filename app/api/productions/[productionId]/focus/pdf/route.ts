@@ -1,4 +1,5 @@
 import { route, readQuery } from "@/lib/http/respond";
+import { getLatestRevisionStamp } from "@/lib/data/revisions";
 import { requireMember } from "@/lib/auth/guards";
 import { focusFilterSchema, printOptionsSchema } from "@/lib/focus/filters";
 import { paginate } from "@/lib/focus/pages";
@@ -27,6 +28,7 @@ export const GET = route(async (req, { params }: Ctx) => {
   const { production, landmarks } = loaded;
   const charts = await withEmbeddedPhotos(productionId, loaded.charts);
   const printedAt = formatStamp(new Date(), filter.tz);
+  const revision = (await getLatestRevisionStamp({ productionId }))?.label ?? null;
   const sheets = paginate(charts, filter.perPage, { newPagePerPosition: filter.newPagePerPosition });
   const pdf = await renderPdf({
     title: `${production.name} — focus charts`,
@@ -34,11 +36,12 @@ export const GET = route(async (req, { params }: Ctx) => {
     sheets: focusSheetsMarkup(sheets, {
       productionName: production.name,
       printedAt,
+      revision,
       perPage: filter.perPage,
       units: production.displayUnits,
       landmarks,
     }),
-    footerText: `${production.name} · focus charts · printed ${printedAt}`,
+    footerText: `${production.name} · focus charts${revision ? ` · revision ${revision}` : ""} · printed ${printedAt}`,
   });
   return new Response(new Uint8Array(pdf), {
     headers: {
