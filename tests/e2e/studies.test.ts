@@ -1,5 +1,6 @@
 // Both studies drawn in Chromium for the demo production: the coverage heat map with an acting area's
-// dark spot, face light, and the shadow study with a performer dragged to a new mark (saved through the API).
+// dark spot, face light, and the shadow study with a performer dragged to a new mark (saved through the API);
+// then both pages at tablet portrait (800 × 1280) and a laptop (1440 × 900) with no sideways scrolling.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { screenshot, signedIn, type SignedIn } from "./support/browser";
 import { eventually, UI_TIMEOUT } from "./support/wait";
@@ -97,4 +98,48 @@ describe("studies", () => {
     await page.getByTestId("shadow-result").and(page.locator("[data-state=ready]")).waitFor({ timeout: 60_000 });
     await screenshot(page, "studies-shadows");
   });
+});
+
+/** How far the page reaches past the window's right edge, in CSS pixels (0 when nothing scrolls sideways). */
+async function sidewaysOverflow(page: SignedIn["page"]): Promise<number> {
+  return page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+}
+
+describe("studies at tablet and laptop sizes", () => {
+  for (const size of [
+    { width: 800, height: 1280, name: "tablet-portrait" },
+    { width: 1440, height: 900, name: "laptop" },
+  ]) {
+    it(`fits ${size.width} × ${size.height} without sideways scrolling, with the demo's areas and marks`, async () => {
+      const at = await signedIn("designer", { width: size.width, height: size.height });
+      try {
+        const { page } = at;
+        await page.goto(`/productions/${at.productionId}/studies`);
+        await page.getByTestId("coverage-result").and(page.locator("[data-state=ready]")).waitFor({ timeout: 120_000 });
+        // The demo seeds acting areas, so the area table is there from the start (seeders/*-demo-studies.cjs).
+        await page
+          .getByTestId("area-table")
+          .getByRole("row", { name: /Mid centre/ })
+          .waitFor();
+        const canvas = page.getByTestId("study-canvas").first();
+        await eventually(async () => Number(await canvas.getAttribute("data-draw-ms")) > 0).toBe(true);
+        expect(await sidewaysOverflow(page)).toBeLessThanOrEqual(0);
+        const box = (await canvas.boundingBox())!;
+        expect(box.x).toBeGreaterThanOrEqual(0);
+        expect(box.x + box.width).toBeLessThanOrEqual(size.width);
+        await screenshot(page, `studies-coverage-${size.name}`);
+
+        await page.goto(`/productions/${at.productionId}/studies?study=shadows`);
+        await page.getByTestId("shadow-result").and(page.locator("[data-state=ready]")).waitFor({ timeout: 120_000 });
+        await page.getByRole("button", { name: "Harbour master" }).click();
+        await page.getByTestId("shadow-table").getByText("Shadows of Harbour master").waitFor();
+        expect(await sidewaysOverflow(page)).toBeLessThanOrEqual(0);
+        const shadowBox = (await page.getByTestId("study-canvas").boundingBox())!;
+        expect(shadowBox.x + shadowBox.width).toBeLessThanOrEqual(size.width);
+        await screenshot(page, `studies-shadows-${size.name}`);
+      } finally {
+        await at.close();
+      }
+    });
+  }
 });

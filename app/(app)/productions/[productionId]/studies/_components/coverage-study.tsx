@@ -355,7 +355,7 @@ export function CoverageStudy(p: StudiesProps) {
         data-testid="coverage-result"
         data-state={A.query.isFetching ? "loading" : a ? "ready" : "empty"}
       >
-        <div className="flex flex-col gap-2">
+        <div className="flex min-w-0 flex-col gap-2">
           <StudyCanvas
             ref={canvasA}
             label={`Heat map: ${what(a)}`}
@@ -379,7 +379,7 @@ export function CoverageStudy(p: StudiesProps) {
           )}
         </div>
         {compare === "side" && (
-          <div className="flex flex-col gap-2">
+          <div className="flex min-w-0 flex-col gap-2">
             <StudyCanvas
               label={`Heat map: ${what(b)}`}
               stage={p.stage}
@@ -413,7 +413,12 @@ export function CoverageStudy(p: StudiesProps) {
 
       {profiles.length > 0 && <LineChart series={profiles} units={p.units} />}
 
-      {a && <AreaTable areas={a.areas} units={p.units} selected={selectedArea} onSelect={setSelectedArea} />}
+      {a && (
+        // A wide table scrolls inside its own box rather than the page (tablet portrait).
+        <div className="min-w-0 overflow-x-auto">
+          <AreaTable areas={a.areas} units={p.units} selected={selectedArea} onSelect={setSelectedArea} />
+        </div>
+      )}
       {selected && (
         <div className="rounded-md border border-line bg-surface p-3 text-sm" data-testid="dark-spot">
           <p className="font-medium">

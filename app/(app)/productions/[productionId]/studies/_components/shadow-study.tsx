@@ -178,7 +178,7 @@ export function ShadowStudy(p: StudiesProps) {
             if (id !== null) saveMark(id, { x: Math.round(pt.x * 100) / 100, y: Math.round(pt.y * 100) / 100 });
           }}
         />
-        <div className="flex flex-col gap-2 text-sm">
+        <div className="flex min-w-0 flex-col gap-2 text-sm">
           <ul className="flex flex-col gap-1" aria-label="Performers and scenery">
             {(data?.performers ?? []).map((m) => (
               <li
@@ -227,39 +227,41 @@ export function ShadowStudy(p: StudiesProps) {
             ))}
           </ul>
           {activeShadows ? (
-            <table className="w-full text-left text-xs" data-testid="shadow-table">
-              <caption className="text-left text-sm font-medium">Shadows of {activeShadows.name}</caption>
-              <thead className="text-muted">
-                <tr>
-                  <th>Unit</th>
-                  <th>Length</th>
-                  <th>Soft edge at tip</th>
-                  <th>Hard core width</th>
-                  <th>On the back wall</th>
-                </tr>
-              </thead>
-              <tbody>
-                {activeShadows.shadows.map((s) => (
-                  <tr
-                    key={s.fixtureId}
-                    onClick={() => setSelectedFixture(s.fixtureId)}
-                    className={`cursor-pointer border-t border-line ${selectedFixture === s.fixtureId ? "bg-raised" : ""}`}
-                  >
-                    <td className="py-0.5">{s.unitLabel}</td>
-                    <td>{s.lands === "unbounded" ? "to the horizon" : fmt(s.length)}</td>
-                    <td>{fmt(s.penumbraWidth)}</td>
-                    <td>{s.umbraWidth === 0 ? "none (all soft)" : fmt(s.umbraWidth)}</td>
-                    <td className={s.lands === "wall" ? "font-medium text-danger" : ""}>
-                      {s.lands === "wall"
-                        ? `yes, ${fmt(s.wallHeight)} up`
-                        : s.lands === "none"
-                          ? (s.reason ?? "—")
-                          : "no"}
-                    </td>
+            <div className="overflow-x-auto">
+              <table className="w-full text-left text-xs" data-testid="shadow-table">
+                <caption className="text-left text-sm font-medium">Shadows of {activeShadows.name}</caption>
+                <thead className="text-muted">
+                  <tr>
+                    <th>Unit</th>
+                    <th>Length</th>
+                    <th>Soft edge at tip</th>
+                    <th>Hard core width</th>
+                    <th>On the back wall</th>
                   </tr>
-                ))}
-              </tbody>
-            </table>
+                </thead>
+                <tbody>
+                  {activeShadows.shadows.map((s) => (
+                    <tr
+                      key={s.fixtureId}
+                      onClick={() => setSelectedFixture(s.fixtureId)}
+                      className={`cursor-pointer border-t border-line ${selectedFixture === s.fixtureId ? "bg-raised" : ""}`}
+                    >
+                      <td className="py-0.5">{s.unitLabel}</td>
+                      <td>{s.lands === "unbounded" ? "to the horizon" : fmt(s.length)}</td>
+                      <td>{fmt(s.penumbraWidth)}</td>
+                      <td>{s.umbraWidth === 0 ? "none (all soft)" : fmt(s.umbraWidth)}</td>
+                      <td className={s.lands === "wall" ? "font-medium text-danger" : ""}>
+                        {s.lands === "wall"
+                          ? `yes, ${fmt(s.wallHeight)} up`
+                          : s.lands === "none"
+                            ? (s.reason ?? "—")
+                            : "no"}
+                      </td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+            </div>
           ) : (
             <p className="text-muted">Add a performer or a panel to see the shadows each lit unit casts.</p>
           )}

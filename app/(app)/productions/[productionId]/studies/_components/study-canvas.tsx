@@ -58,7 +58,7 @@ export const StudyCanvas = forwardRef<StudyCanvasHandle, Props>(function StudyCa
   return (
     <div
       ref={box}
-      className="relative w-full touch-none select-none overflow-hidden rounded-md border border-line"
+      className="relative w-full min-w-0 touch-none select-none overflow-hidden rounded-md border border-line"
       style={{ height }}
       aria-label={p.label}
       role="img"
@@ -69,25 +69,29 @@ export const StudyCanvas = forwardRef<StudyCanvasHandle, Props>(function StudyCa
       onPointerMove={(e) => p.onPointerMove?.(plan(e), e)}
       onPointerUp={(e) => p.onPointerUp?.(plan(e), e)}
     >
+      {/* Out of the flow, so the drawing never widens its box: the box sets the width, the drawing follows it
+          (a drawing in the flow kept a grid column at its first width, and the page scrolled sideways at 800 px). */}
       {pal && (
-        <Stage ref={stageRef} width={width} height={height} listening={false}>
-          <Layer listening={false}>
-            <PlanShape
-              draw={(ctx) => {
-                const t0 = performance.now();
-                ctx.fillStyle = pal.canvas;
-                ctx.fillRect(0, 0, width, height);
-                drawGrid(ctx, view, { width, height }, p.units, pal);
-                drawStageOutline(ctx, view, outline, pal, true);
-                p.under?.(ctx, view, pal);
-                drawAreas(ctx, view, p.areas, pal, true);
-                p.over?.(ctx, view, pal);
-                // Read by the end-to-end test and the benchmark: the whole study drawn once, in ms.
-                box.current?.setAttribute("data-draw-ms", (performance.now() - t0).toFixed(1));
-              }}
-            />
-          </Layer>
-        </Stage>
+        <div className="absolute inset-0">
+          <Stage ref={stageRef} width={width} height={height} listening={false}>
+            <Layer listening={false}>
+              <PlanShape
+                draw={(ctx) => {
+                  const t0 = performance.now();
+                  ctx.fillStyle = pal.canvas;
+                  ctx.fillRect(0, 0, width, height);
+                  drawGrid(ctx, view, { width, height }, p.units, pal);
+                  drawStageOutline(ctx, view, outline, pal, true);
+                  p.under?.(ctx, view, pal);
+                  drawAreas(ctx, view, p.areas, pal, true);
+                  p.over?.(ctx, view, pal);
+                  // Read by the end-to-end test and the benchmark: the whole study drawn once, in ms.
+                  box.current?.setAttribute("data-draw-ms", (performance.now() - t0).toFixed(1));
+                }}
+              />
+            </Layer>
+          </Stage>
+        </div>
       )}
     </div>
   );
