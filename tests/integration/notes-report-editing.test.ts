@@ -27,10 +27,9 @@ afterAll(async () => {
 });
 
 const noteCount = async () => ((await designer.get(`${base}/notes`)).json.notes as unknown[]).length;
+type Report = { id: number; version: number; status: string; summary: string; items: unknown[] };
 const reportById = async (id: number) =>
-  ((await designer.get(`${base}/notes/show-reports`)).json.showReports as Array<{ id: number }>).find(
-    (r) => r.id === id,
-  ) as Record<string, unknown> & { version: number; status: string; summary: string; items: unknown[] };
+  ((await designer.get(`${base}/notes/show-reports`)).json.showReports as Report[]).find((r) => r.id === id);
 
 describe("editing a show report until it is sent", () => {
   it("a draft writes nothing; edits are versioned; sending writes the notes once; a sent report is read-only", async () => {
