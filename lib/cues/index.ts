@@ -9,3 +9,4 @@ export * from "./parts";
 export * from "./running-order";
 export * from "./cue-sheet";
 export * from "./part-form";
+export * from "./unpatched-channels";

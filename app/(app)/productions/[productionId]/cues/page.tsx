@@ -8,12 +8,14 @@ import { getChannelLabels, getCueSheet, getCuesByProduction } from "@/lib/data/c
 import { requireProduction } from "@/lib/data/productions";
 import { CueSheetView } from "./_components/cue-sheet";
 import { CueWorkspace } from "./_components/cue-workspace";
+import { CueLevelsView } from "./_components/cue-levels-view";
+import { CueViewSwitch } from "./_components/cue-view-switch";
 
 export const metadata: Metadata = { title: "Cues" };
 
 /**
  * The designer writes cues here; everyone else (the stage manager first of all) reads the cue
- * sheet. The designer can open the sheet too with ?view=sheet.
+ * sheet, or the levels read only with ?view=levels. The designer can open the sheet too with ?view=sheet.
  */
 export default async function CuesPage({
   params,
@@ -24,7 +26,9 @@ export default async function CuesPage({
 }) {
   const { productionId, member } = await memberForPage((await params).productionId);
   const canEdit = can(member, "cues.edit");
-  const showSheet = !canEdit || (await searchParams).view === "sheet";
+  const view = (await searchParams).view;
+  const showLevels = !canEdit && view === "levels";
+  const showSheet = !showLevels && (!canEdit || view === "sheet");
   const queryClient = makeQueryClient();
   const production = await requireProduction(productionId);
   if (showSheet) {
@@ -47,7 +51,10 @@ export default async function CuesPage({
   return (
     <main className="px-4 py-4 print:p-0">
       <HydrationBoundary state={dehydrate(queryClient)}>
-        {showSheet ? (
+        {canEdit ? null : <CueViewSwitch current={showLevels ? "levels" : "sheet"} />}
+        {showLevels ? (
+          <CueLevelsView productionId={productionId} />
+        ) : showSheet ? (
           <CueSheetView
             productionId={productionId}
             productionName={production.name}

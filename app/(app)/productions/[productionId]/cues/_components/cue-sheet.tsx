@@ -201,7 +201,8 @@ export function CueSheetView({
             {data?.rows.length ?? 0} cues in running order (links followed)
             <span className="print:hidden">
               {" "}
-              · standbys grouped when a cue follows within 5 s{canEditNotes ? " · you can edit page and call note" : ""}
+              · standbys grouped when a cue follows within 5 s
+              {canEditNotes ? " · you can edit page and call note" : " · page and call note are the stage manager's"}
             </span>
           </p>
         </div>
@@ -262,7 +263,7 @@ export function CueSheetView({
               <tr
                 key={row.id}
                 data-testid={`sheet-row-${formatCueNumber(row.original.number)}`}
-                className={`break-inside-avoid border-b border-line align-top ${g && g.size > 1 ? "border-l-4 border-l-accent print:border-l-black" : ""} ${row.original.reached ? "" : "opacity-70"}`}
+                className={`break-inside-avoid border-b border-line align-baseline ${g && g.size > 1 ? "border-l-4 border-l-accent print:border-l-black" : ""} ${row.original.reached ? "" : "opacity-70"}`}
               >
                 {row.getVisibleCells().map((cell) => (
                   <td key={cell.id} className="px-2 py-1.5">

@@ -21,6 +21,7 @@ export function CueWorkspace({ productionId, stage }: { productionId: number; st
   const [typedChannel, setTypedChannel] = useState<{ channel: number } | null>(null);
   const cues = useMemo(() => data?.cues ?? [], [data]);
   const channels = useMemo(() => data?.channels ?? [], [data]);
+  const rigChannels = useMemo(() => channels.map((c) => c.channel), [channels]);
   const show = useMemo(
     () =>
       computeTracking(
@@ -54,6 +55,7 @@ export function CueWorkspace({ productionId, stage }: { productionId: number; st
           productionId={productionId}
           cues={cues}
           selected={selected}
+          rigChannels={rigChannels}
           onSelect={setSelectedId}
           onTyped={(chs) => setTypedChannel(chs.length ? { channel: chs[0] } : null)}
         />

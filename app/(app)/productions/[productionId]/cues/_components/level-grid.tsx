@@ -1,12 +1,31 @@
 "use client";
 
-import { useEffect, useMemo, useState } from "react";
+import { useEffect, useMemo, useRef, useState } from "react";
 import { formatCueNumber, type MoveKind, type TrackedShow } from "@/lib/cues";
 import type { ChannelLabel, CueDto } from "@/lib/dto/cue";
 import { useVirtualRows } from "./use-virtual-rows";
 
-const WINDOW = 12;
 const ROW = 24; // px; every row the same height so the grid can render only the rows in view
+const CH_COLUMN = 56; // px: the channel numbers down the left
+const CUE_COLUMN = 52; // px a cue column needs for "▲100" and a number such as 12.5 (measured at text-xs)
+const MIN_CUES = 8;
+
+/** As many cue columns as the grid's width holds (at least 8), so a wide window shows more of the list. */
+function useCueColumns(): [React.RefObject<HTMLElement | null>, number] {
+  const ref = useRef<HTMLElement>(null);
+  const [count, setCount] = useState(12);
+  useEffect(() => {
+    const el = ref.current;
+    if (!el) return;
+    const measure = () =>
+      setCount(Math.max(MIN_CUES, Math.floor((el.clientWidth - CH_COLUMN) / CUE_COLUMN) || MIN_CUES));
+    measure();
+    const ro = new ResizeObserver(measure);
+    ro.observe(el);
+    return () => ro.disconnect();
+  }, []);
+  return [ref, count];
+}
 
 // Up and down are told apart by an arrow and weight, not by colour alone.
 const CELL: Record<MoveKind, string> = {
@@ -32,10 +51,16 @@ type Props = {
   selectedIndex: number;
   onSelect: (id: number) => void;
   focusChannel: { channel: number } | null;
+  /** A role that may not write levels reads the same grid, said plainly. */
+  readOnly?: boolean;
 };
 
-/** Channels down, cues across: every channel's level in the cues around the selected one. Only rows in view are drawn. */
-export function LevelGrid({ show, cues, channels, selectedIndex, onSelect, focusChannel }: Props) {
+/**
+ * Channels down, cues across: every channel's level in the cues around the selected one. Only rows in
+ * view are drawn; the grid is as tall as the window leaves room for and as wide as its column allows.
+ */
+export function LevelGrid({ show, cues, channels, selectedIndex, onSelect, focusChannel, readOnly }: Props) {
+  const [sectionRef, WINDOW] = useCueColumns();
   const first = Math.max(0, Math.min(selectedIndex - Math.floor(WINDOW / 3), cues.length - WINDOW));
   const visible = cues.slice(first, first + WINDOW).map((c, k) => ({ cue: c, index: first + k }));
   const label = useMemo(() => new Map(channels.map((c) => [c.channel, c])), [channels]);
@@ -61,10 +86,15 @@ export function LevelGrid({ show, cues, channels, selectedIndex, onSelect, focus
   };
 
   return (
-    <section aria-labelledby="grid-title" className="rounded-lg border border-line bg-surface">
+    <section
+      ref={sectionRef}
+      aria-labelledby="grid-title"
+      className="rounded-lg border border-line bg-surface"
+      data-testid="level-grid"
+    >
       <header className="flex flex-wrap items-center justify-between gap-2 px-3 pt-2">
         <h3 id="grid-title" className="text-sm font-semibold uppercase tracking-wide text-muted">
-          Levels
+          Levels{readOnly ? " (read only)" : ""}
         </h3>
         <form onSubmit={goTo} className="flex items-center gap-1 text-xs">
           <label htmlFor="grid-jump" className="text-muted">
@@ -86,11 +116,13 @@ export function LevelGrid({ show, cues, channels, selectedIndex, onSelect, focus
       <p className="px-3 text-xs text-muted">
         ▲ up · ▼ down · bold = recorded in the cue · grey = tracked from before · cues {first + 1}–
         {first + visible.length} of {cues.length} · {show.channels.length} channels
+        {readOnly ? " · levels are written by the designer; choose a cue to move the window" : ""}
       </p>
       <div
         ref={rows.ref}
         onScroll={rows.onScroll}
-        className="max-h-[28rem] overflow-auto"
+        // The window's height less the tabs above and the grid's own header: the whole grid in view once scrolled to.
+        className="max-h-[calc(100dvh-7rem)] min-h-64 overflow-auto"
         data-testid="level-grid-scroll"
       >
         <table

@@ -1,8 +1,12 @@
 "use client";
 
 import { useEffect, useState } from "react";
+import { EDITABLE_FIELD, READ_ONLY_VALUE } from "@/components/ui/field-look";
 
-/** A cell the stage manager can type into; saves on Enter or when leaving the field. Read-only otherwise. */
+/**
+ * A cell the stage manager can type into; saves on Enter or when leaving the field. It looks like a
+ * field (outline, focus ring) only for a role that may change it; for anyone else it is plain text.
+ */
 export function NoteCell({
   value,
   editable,
@@ -18,7 +22,12 @@ export function NoteCell({
 }) {
   const [draft, setDraft] = useState(value ?? "");
   useEffect(() => setDraft(value ?? ""), [value]);
-  if (!editable) return <span className="whitespace-pre-wrap">{value}</span>;
+  if (!editable)
+    return (
+      <span className={`whitespace-pre-wrap ${READ_ONLY_VALUE}`} data-readonly="true">
+        {value}
+      </span>
+    );
   return (
     <>
       <input
@@ -30,7 +39,7 @@ export function NoteCell({
           if (e.key === "Enter") e.currentTarget.blur();
           if (e.key === "Escape") setDraft(value ?? "");
         }}
-        className={`no-print min-h-9 rounded border border-transparent bg-transparent px-1 hover:border-line focus:border-accent ${narrow ? "w-16" : "w-full min-w-40"}`}
+        className={`no-print min-h-9 ${EDITABLE_FIELD} ${narrow ? "w-16 tabular-nums" : "w-full min-w-40"}`}
       />
       <span className="hidden whitespace-pre-wrap print:inline">{value}</span>
     </>

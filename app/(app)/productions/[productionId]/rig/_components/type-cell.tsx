@@ -6,6 +6,7 @@ import { parseTypeCell, typeCellText, type TypeColumn } from "@/lib/rig/type-fie
 import type { Units } from "@/lib/rig/columns";
 import { ApiError } from "@/lib/http/api-client";
 import { useUpdateFixtureType } from "@/hooks/use-rig";
+import { EDITABLE_FIELD, READ_ONLY_VALUE } from "@/components/ui/field-look";
 
 /**
  * One figure of a fixture type: plain text for a role that may not change it, else a button that opens
@@ -66,14 +67,19 @@ export function TypeCell({
     }
   }
 
-  if (!editable) return <span className="px-1">{shown || "—"}</span>;
+  if (!editable)
+    return (
+      <span className={READ_ONLY_VALUE} data-readonly="true">
+        {shown || "—"}
+      </span>
+    );
   if (!editing) {
     return (
       <span>
         <button
           type="button"
           aria-label={`Edit ${label}`}
-          className="min-h-6 w-full min-w-10 rounded px-1 text-left hover:bg-raised"
+          className={`min-h-7 w-full min-w-10 text-left ${EDITABLE_FIELD}`}
           onClick={() => {
             closing.current = false;
             setText(shown);

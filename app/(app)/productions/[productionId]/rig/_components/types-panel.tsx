@@ -36,6 +36,17 @@ export function TypesPanel({
         Starter figures are typical values from memory for generic units, not a maker&apos;s data sheet. Check them
         against your own units; every fixture&apos;s pool and throw follow its type as soon as a figure changes.
       </p>
+      <p className="mb-2 text-xs text-muted" data-testid="types-rights">
+        {editable.size === 0
+          ? "Your role can read these figures but not change them."
+          : TYPE_COLUMNS.every((c) => c.kind === "readOnly" || c.fields.every((f) => editable.has(f)))
+            ? "Outlined figures can be changed: click one to type."
+            : `Outlined figures can be changed (${TYPE_COLUMNS.filter(
+                (c) => c.kind !== "readOnly" && c.fields.every((f) => editable.has(f)),
+              )
+                .map((c) => c.header.replace(/ \(.*\)$/, "").toLowerCase())
+                .join(", ")}); the rest are the designer's.`}
+      </p>
       <div className="overflow-x-auto">
         <table className="w-full text-sm">
           <thead>
