@@ -11,11 +11,15 @@ export const GET = route(async (_req, { params }: Ctx) => {
   return { showReports: await getShowReports({ productionId }) };
 });
 
-/** The stage manager files the report after a performance; its lighting items and logged faults become notes; the team gets it by e-mail. */
+/**
+ * The stage manager files the report after a performance: sent at once (its lighting items and logged faults
+ * become notes; the team gets it by e-mail), or kept as a draft with `send: false` (written nowhere, mailed to nobody).
+ */
 export const POST = route(async (req, { params }: Ctx) => {
   const { productionId, user } = await requireMember((await params).productionId, "notes.fileShowReport");
   const input = await readJson(req, showReportSchema);
   const filed = await fileShowReport({ productionId, userId: user.id, input });
+  if (filed.report.status === "draft") return Response.json(filed, { status: 201 });
   // After the commit: a mail failure leaves the messages queued and never undoes the report.
   const mail = await mailShowReport(productionId, filed.report, filed.notes);
   return Response.json({ ...filed, mail }, { status: 201 });
