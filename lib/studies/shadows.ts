@@ -11,7 +11,7 @@ export type ShadowScene = {
   deckHeight: number;
   /**
    * Outlines cost nearly all of the time (a hull per lens sample, then their overlap): with 16 sides and 8
-   * lens samples about 50 µs a pair of CPU under load ~15 against under 1 µs for the numbers, measured by
+   * lens samples about 55 µs a pair of CPU at load ~22 against under 1 µs for the numbers, measured by
    * bench/studies.ts (see docs/benchmarks.md). The numbers never depend on these settings; the live preview
    * while dragging draws coarser outlines.
    */
