@@ -16,6 +16,7 @@ import type { CueDto } from "@/lib/dto/cue";
 import { useVirtualRows } from "./use-virtual-rows";
 import { useSavedTableView } from "./use-saved-table-view";
 import { NotesButton } from "@/components/notes/notes-button";
+import { HistoryLink } from "@/components/revisions/history-link";
 
 const ROW = 30; // px, fixed so long lists render only what is in view
 
@@ -31,15 +32,24 @@ const columns = [
     id: "notes",
     header: "Notes",
     cell: (c) => (
-      <NotesButton
-        compact
-        productionId={(c.table.options.meta as { productionId: number }).productionId}
-        target={{
-          subject: "cue",
-          subjectId: c.row.original.id,
-          label: `cue ${formatCueNumber(c.row.original.number)}`,
-        }}
-      />
+      <span className="flex items-center">
+        <NotesButton
+          compact
+          productionId={(c.table.options.meta as { productionId: number }).productionId}
+          target={{
+            subject: "cue",
+            subjectId: c.row.original.id,
+            label: `cue ${formatCueNumber(c.row.original.number)}`,
+          }}
+        />
+        <HistoryLink
+          compact
+          productionId={(c.table.options.meta as { productionId: number }).productionId}
+          entity="cue"
+          id={c.row.original.id}
+          name={`cue ${formatCueNumber(c.row.original.number)}`}
+        />
+      </span>
     ),
   }),
   col.accessor("label", { header: "Label" }),

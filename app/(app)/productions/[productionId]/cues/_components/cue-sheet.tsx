@@ -5,6 +5,8 @@ import { flushSync } from "react-dom";
 import Link from "next/link";
 import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from "@tanstack/react-table";
 import { useCueSheet, useUpdateCallNote } from "@/hooks/use-cues";
+import { useLatestRevision } from "@/hooks/use-latest-revision";
+import { CHANGED_EDGE, ChangedWords, RevisionStampLine } from "@/components/revisions/revision-marks";
 import { formatChannels, formatCueNumber, formatFadeTime, formatSplitTime } from "@/lib/cues";
 import type { CueSheetRow } from "@/lib/dto/cue";
 import { ApiError } from "@/lib/http/api-client";
@@ -98,6 +100,8 @@ export function CueSheetView({
   canWriteCues: boolean;
 }) {
   const { data, error } = useCueSheet(productionId);
+  const sinceRevision = useLatestRevision(productionId, "cues");
+  const revisionLabel = sinceRevision.latest ? ` · revision ${sinceRevision.latest.label}` : "";
   const update = useUpdateCallNote(productionId);
   const [paper, setPaper] = useState<"A4" | "letter">("A4");
   const [message, setMessage] = useState<string | null>(null);
@@ -190,7 +194,7 @@ export function CueSheetView({
     );
   return (
     <section aria-labelledby="cue-sheet-title" className="mx-auto max-w-7xl">
-      <style>{printPageCss({ paper, productionName, printedAt })}</style>
+      <style>{printPageCss({ paper, productionName: `${productionName}${revisionLabel}`, printedAt })}</style>
       <header className="mb-3 flex flex-wrap items-end justify-between gap-3">
         <div>
           <h2 id="cue-sheet-title" className="text-xl font-semibold">
@@ -198,6 +202,7 @@ export function CueSheetView({
           </h2>
           <p className="text-sm text-muted print:text-black">
             <span className="hidden print:inline">{productionName} · </span>
+            <RevisionStampLine stamp={sinceRevision.latest} className="print:text-black" /> ·{" "}
             {data?.rows.length ?? 0} cues in running order (links followed)
             <span className="print:hidden">
               {" "}
@@ -265,8 +270,17 @@ export function CueSheetView({
                 data-testid={`sheet-row-${formatCueNumber(row.original.number)}`}
                 className={`break-inside-avoid border-b border-line align-baseline ${g && g.size > 1 ? "border-l-4 border-l-accent print:border-l-black" : ""} ${row.original.reached ? "" : "opacity-70"}`}
               >
-                {row.getVisibleCells().map((cell) => (
+                {row.getVisibleCells().map((cell, i) => (
                   <td key={cell.id} className="px-2 py-1.5">
+                    {i === 0 && sinceRevision.latest && sinceRevision.changed.has(row.original.id) ? (
+                      <span
+                        className={`mr-1 inline-block h-4 align-middle ${CHANGED_EDGE}`}
+                        title={`Changed since revision ${sinceRevision.latest.label}`}
+                        data-changed-since={sinceRevision.latest.label}
+                      >
+                        <ChangedWords label={sinceRevision.latest.label} />
+                      </span>
+                    ) : null}
                     {flexRender(cell.column.columnDef.cell, cell.getContext())}
                   </td>
                 ))}

@@ -5,6 +5,7 @@ import { describePoint, formatLength, parseLength } from "@/lib/optics";
 import { markForThrow } from "@/lib/plot/throw-to-mark";
 import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import { NotesButton } from "@/components/notes/notes-button";
+import { HistoryLink } from "@/components/revisions/history-link";
 import { BeamNumbers } from "./beam-numbers";
 import { PanelField, PanelSection } from "./panel-field";
 import type { PanelProps } from "./panel-props";
@@ -56,6 +57,12 @@ export function FixturePanel(p: PanelProps & { fixture: PlotFixture }) {
           <NotesButton
             productionId={p.production.id}
             target={{ subject: "fixture", subjectId: f.id, label: `unit ${f.unitNumber}, ${f.positionName}` }}
+          />
+          <HistoryLink
+            productionId={p.production.id}
+            entity="fixture"
+            id={f.id}
+            name={`unit ${f.unitNumber} on ${f.positionName}`}
           />
         </div>
         <p className="text-xs text-muted">

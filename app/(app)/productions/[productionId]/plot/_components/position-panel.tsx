@@ -1,6 +1,7 @@
 "use client";
 
 import { NotesButton } from "@/components/notes/notes-button";
+import { HistoryLink } from "@/components/revisions/history-link";
 import { formatLength, parseLength } from "@/lib/optics";
 import { POSITION_KINDS, POSITION_KIND_LABELS } from "@/lib/rig/position-kinds";
 import { numberingOrder, numberingOrderVertical, renumber, type NumberingDirection } from "@/lib/plot/along-position";
@@ -57,6 +58,7 @@ export function PositionPanel(p: PanelProps & { position: PositionDto }) {
         target={{ subject: "position", subjectId: pos.id, label: `position ${pos.name}` }}
         className="self-start"
       />
+      <HistoryLink productionId={p.production.id} entity="position" id={pos.id} name={`position ${pos.name}`} />
       <PanelField
         label="Name"
         value={pos.name}

@@ -23,6 +23,9 @@ import { NotesButton } from "@/components/notes/notes-button";
 import { EditableCell, type Choice } from "./editable-cell";
 import { EmptyOrInherited } from "./inherited-value";
 import { showValue } from "./cell-value";
+import { useLatestRevision } from "@/hooks/use-latest-revision";
+import { CHANGED_EDGE, ChangedWords } from "@/components/revisions/revision-marks";
+import { HistoryLink } from "@/components/revisions/history-link";
 
 export type TableState = {
   sorting: SortingState;
@@ -61,6 +64,7 @@ export function RigTable({
   onDelete,
 }: Props) {
   const [collapsed, setCollapsed] = useState<Set<string>>(new Set());
+  const sinceRevision = useLatestRevision(productionId, "fixtures");
   const bodies = useMemo(() => cellCounts(fixtures), [fixtures]);
   const hangOrder = useMemo(() => {
     const m = new Map<number, number>();
@@ -118,6 +122,13 @@ export function RigTable({
               subjectId: row.original.id,
               label: `unit ${row.original.unitNumber}, ${row.original.positionName}`,
             }}
+          />
+          <HistoryLink
+            compact
+            productionId={productionId}
+            entity="fixture"
+            id={row.original.id}
+            name={`unit ${row.original.unitNumber} on ${row.original.positionName}`}
           />
         </span>
       ),
@@ -213,24 +224,32 @@ export function RigTable({
 
   const visibleCount = table.getVisibleLeafColumns().length;
   const shownBodies = new Set<string>(); // bodies whose heading row is already drawn in this render
-  const renderRow = (row: Row<FixtureDto>, isCell = false) => (
-    <tr
-      key={row.id}
-      data-testid="rig-row"
-      data-cell={isCell ? (row.original.cell ?? "") : undefined}
-      className={`border-b border-line/60 align-middle hover:bg-raised/50 print:break-inside-avoid ${row.getIsSelected() ? "bg-accent/10" : ""}`}
-    >
-      {row.getVisibleCells().map((cell, i) => (
-        <td
-          key={cell.id}
-          tabIndex={-1}
-          className={`whitespace-nowrap p-0 ${stickyCell(cell.column.id, selectable, "bg-surface")} ${cell.column.id === "select" ? "print:hidden" : ""} ${isCell && i === 0 ? "border-l-4 border-l-accent/40" : ""}`}
-        >
-          {flexRender(cell.column.columnDef.cell, cell.getContext())}
-        </td>
-      ))}
-    </tr>
-  );
+  const renderRow = (row: Row<FixtureDto>, isCell = false) => {
+    const changed = sinceRevision.latest && sinceRevision.changed.has(row.original.id) ? sinceRevision.latest : null;
+    // The bar goes on the first cell that prints (the selection box does not).
+    const edgeAt = row.getVisibleCells()[0]?.column.id === "select" ? 1 : 0;
+    return (
+      <tr
+        key={row.id}
+        data-testid="rig-row"
+        data-cell={isCell ? (row.original.cell ?? "") : undefined}
+        data-changed-since={changed?.label}
+        title={changed ? `Changed since revision ${changed.label}` : undefined}
+        className={`border-b border-line/60 align-middle hover:bg-raised/50 print:break-inside-avoid ${row.getIsSelected() ? "bg-accent/10" : ""}`}
+      >
+        {row.getVisibleCells().map((cell, i) => (
+          <td
+            key={cell.id}
+            tabIndex={-1}
+            className={`whitespace-nowrap p-0 ${stickyCell(cell.column.id, selectable, "bg-surface")} ${cell.column.id === "select" ? "print:hidden" : ""} ${i === edgeAt && changed ? CHANGED_EDGE : isCell && i === 0 ? "border-l-4 border-l-accent/40" : ""}`}
+          >
+            {i === edgeAt && changed ? <ChangedWords label={changed.label} /> : null}
+            {flexRender(cell.column.columnDef.cell, cell.getContext())}
+          </td>
+        ))}
+      </tr>
+    );
+  };
   return (
     <div className="overflow-x-auto rounded-lg border border-line bg-surface print:overflow-visible print:border-0">
       {/* biome-ignore lint/a11y/noNoninteractiveElementInteractions: arrow keys move between the cells' own controls (a grid's keys) */}
