@@ -66,6 +66,9 @@ describe("the printed plot", () => {
       await textOf(p.getByTestId("title-production")).toContain(production.name.slice(0, 10));
       await textOf(p.getByTestId("title-scale")).toMatch(/1:\d+/);
       await textOf(p.getByTestId("title-revision")).toMatch(/REVISION/i);
+      // values are written out in full, not cut short, on a narrow portrait sheet too
+      await textOf(p.getByTestId("title-paper")).toContain(`${paper}, ${orient}`);
+      await textOf(p.getByTestId("title-date")).toMatch(/\d{4}-\d\d-\d\d/);
       await textOf(p.getByTestId("title-designer")).toMatch(/DESIGNER\s*\S/i);
       // labels: none on another (boxes written by the sheet in millimetres)
       const boxes: Box[] = (

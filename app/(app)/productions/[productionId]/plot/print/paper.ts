@@ -31,8 +31,11 @@ export const SCALES = {
 export type Scale = { ratio: number; label: string };
 
 export const MARGIN_MM = 10;
-/** Height of the title block strip along the foot of the sheet. */
+/** Height of the title block strip along the foot of the sheet; a narrow sheet stacks it in two bands. */
 export const TITLE_MM = 30;
+export const TITLE_STACKED_MM = 44;
+/** Below this width the title block's particulars go under its name instead of beside it. */
+export const STACK_BELOW_MM = 300;
 /** Gap between the drawing frame, the key and the title block. */
 export const GUTTER_MM = 4;
 /** Width of the key column on a landscape sheet; on a portrait sheet the key is a band above the title block. */
@@ -56,8 +59,9 @@ export type SheetLayout = { sheet: { w: number; h: number }; drawing: Box; key: 
 export function sheetLayout(paper: PaperName, orientation: Orientation, keyRows: number): SheetLayout {
   const sheet = sheetSize(paper, orientation);
   const inner = { x: MARGIN_MM, y: MARGIN_MM, w: sheet.w - 2 * MARGIN_MM, h: sheet.h - 2 * MARGIN_MM };
-  const title = { x: inner.x, y: inner.y + inner.h - TITLE_MM, w: inner.w, h: TITLE_MM };
-  const above = inner.h - TITLE_MM - GUTTER_MM;
+  const titleH = inner.w < STACK_BELOW_MM ? TITLE_STACKED_MM : TITLE_MM;
+  const title = { x: inner.x, y: inner.y + inner.h - titleH, w: inner.w, h: titleH };
+  const above = inner.h - titleH - GUTTER_MM;
   if (orientation === "landscape") {
     const key = { x: inner.x + inner.w - KEY_COLUMN_MM, y: inner.y, w: KEY_COLUMN_MM, h: above };
     const drawing = { x: inner.x, y: inner.y, w: inner.w - KEY_COLUMN_MM - GUTTER_MM, h: above };
