@@ -116,6 +116,8 @@ export function ShowReportsView({
     setMessage(null);
     try {
       let r = (await save.mutateAsync(sendNow)).report;
+      // Kept at once, so a failed send below leaves the form holding the saved draft's version.
+      if (r.status === "draft") setEditing({ id: r.id, version: r.version });
       // An edited draft is saved first, then sent at the version the save left it at.
       if (sendNow && r.status === "draft") r = (await send.mutateAsync(r)).report;
       setMessage(
@@ -124,7 +126,6 @@ export function ShowReportsView({
           : `Draft saved for ${r.performance}. It goes to nobody until you send it.`,
       );
       if (r.status === "sent") clear();
-      else setEditing({ id: r.id, version: r.version });
     } catch (err) {
       failed(err);
     }
