@@ -6,6 +6,8 @@ import { getOpenInvitations } from "@/lib/data/invitations";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import { can } from "@/lib/auth/policy";
 import { Card } from "@/components/ui/card";
+import { getRevisionMailChoices } from "@/lib/data/revision-mail-settings";
+import { RevisionMailToggle } from "@/components/revisions/revision-mail-toggle";
 import { InviteForm } from "./_components/invite-form";
 import { InvitationForms, RemoveForm, RoleForm } from "./_components/row-forms";
 
@@ -14,9 +16,10 @@ export const metadata: Metadata = { title: "Team" };
 export default async function TeamPage({ params }: { params: Promise<{ productionId: string }> }) {
   const { productionId, member, user } = await memberForPage((await params).productionId);
   const manages = can(member, "team.manage");
-  const [team, invitations] = await Promise.all([
+  const [team, invitations, mailChoices] = await Promise.all([
     getTeam({ productionId }),
     manages ? getOpenInvitations({ productionId }) : Promise.resolve([]),
+    getRevisionMailChoices({ productionId }),
   ]);
   return (
     <main className="mx-auto flex max-w-4xl flex-col gap-4 px-4 py-6">
@@ -65,6 +68,17 @@ export default async function TeamPage({ params }: { params: Promise<{ productio
             ))}
           </tbody>
         </table>
+        <div className="mt-4 border-t border-line pt-3">
+          <RevisionMailToggle productionId={productionId} initial={mailChoices[user.id] ?? true} />
+          <p className="text-xs text-muted">
+            Revision e-mail turned off by:{" "}
+            {team
+              .filter((m) => mailChoices[m.userId] === false)
+              .map((m) => m.name)
+              .join(", ") || "nobody"}
+            .
+          </p>
+        </div>
         {manages ? null : (
           <p className="mt-4 text-xs text-muted">
             Only the production&apos;s owner can invite people and change roles.
