@@ -105,8 +105,10 @@ const CONNECTION_LOST_CODES = new Set([
   "ER_POOL_ALREADY_CLOSED",
   "ER_INITIAL_TIMEOUT_ERROR",
 ]);
-// MariaDB server errors: 1053 shutting down, 1927 connection killed, 1040 too many connections.
-const CONNECTION_LOST_ERRNOS = new Set([1053, 1927, 1040]);
+// MariaDB server errors: 1053 shutting down, 1927 connection killed, 1040 too many connections, and
+// 1047, which a Galera node answers while it is not part of the cluster's primary component ("WSREP has
+// not yet prepared node for application use"): the node is up but may not serve, so it is an outage.
+const CONNECTION_LOST_ERRNOS = new Set([1053, 1927, 1040, 1047]);
 
 export type DatabaseTrouble = "busy" | "unreachable" | "refused" | "lock_contention";
 

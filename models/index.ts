@@ -2,6 +2,7 @@
 // so that dev reloads and test files reuse a single pool.
 import { Sequelize } from "sequelize";
 import * as mariadb from "mariadb";
+import { hostChooser, parseHostList } from "@/lib/data/database-hosts";
 import { initUser, User } from "./user";
 import { initProduction, Production } from "./production";
 import { initMembership, Membership } from "./membership";
@@ -91,9 +92,15 @@ function createDb(): Db {
       // A request waits a few seconds for a row another transaction holds, then gives up (503 with
       // Retry-After) instead of holding its connection for the server's default 50 s. One string:
       // Sequelize appends its own time-zone statement to an array given here on every connect.
-      initSql: `SET SESSION innodb_lock_wait_timeout = ${LOCK_WAIT_SECONDS}, SESSION lock_wait_timeout = ${LOCK_WAIT_SECONDS}`,
+      initSql: `SET SESSION innodb_lock_wait_timeout = ${LOCK_WAIT_SECONDS}, SESSION lock_wait_timeout = ${LOCK_WAIT_SECONDS}${
+        // On a Galera cluster (several servers that all take writes) a read first waits until this node
+        // has applied every write committed anywhere before it, so a save made through one app server
+        // is seen at once through another.
+        process.env.DATABASE_FAILOVER_HOSTS ? ", SESSION wsrep_sync_wait = 1" : ""
+      }`,
     },
   });
+  useFailoverHosts(sequelize, url);
   for (const init of [
     initUser,
     initProduction,
@@ -124,6 +131,22 @@ function createDb(): Db {
   }
   associate();
   return { sequelize, ...models };
+}
+
+/** With DATABASE_FAILOVER_HOSTS set, each new connection goes to a server that answers (database-hosts.ts). */
+function useFailoverHosts(sequelize: Sequelize, url: string) {
+  const others = process.env.DATABASE_FAILOVER_HOSTS;
+  if (!others) return;
+  const preferred = new URL(url);
+  const choose = hostChooser([
+    { host: preferred.hostname, port: Number(preferred.port || 3306) },
+    ...parseHostList(others),
+  ]);
+  sequelize.addHook("beforeConnect", async (config) => {
+    const { host, port } = await choose();
+    config.host = host;
+    config.port = String(port); // a string, as Sequelize keeps the port it reads from the URL
+  });
 }
 
 const holder = globalThis as unknown as { __throwlineDb?: Db };

@@ -8,6 +8,7 @@ import { recordChange } from "./changes";
 import { plain } from "./plain";
 import { productionCrud } from "./production-crud";
 import { uniqueNameError } from "./unique";
+import { bulkCreateWithIds } from "./bulk-create";
 import { inTransaction } from "./transaction";
 
 type CreateCircuit = z.infer<typeof createCircuitSchema>;
@@ -56,7 +57,8 @@ export async function createCircuits({
   });
   const { Circuit } = getDb();
   return inTransaction(async (transaction) => {
-    const rows = await Circuit.bulkCreate(
+    const rows = await bulkCreateWithIds(
+      Circuit,
       inputs.map((c) => ({ phase: null, power: "dimmed" as const, ...c, productionId })),
       { transaction },
     ).catch(uniqueNameError("circuit"));

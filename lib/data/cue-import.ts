@@ -7,6 +7,7 @@ import { emptyFileReason, toStoredMoves, type ImportMode } from "@/lib/cues/impo
 import type { ImportOutcome } from "@/lib/dto/cue";
 import { recordChange } from "./changes";
 import { getCuesByProduction } from "./cue-reads";
+import { bulkCreateWithIds } from "./bulk-create";
 import { inTransaction } from "./transaction";
 
 /** Replaces the production's cue list with a USITT ASCII file: all of it, or (on any error) nothing. */
@@ -40,7 +41,8 @@ export async function importCuesFromAscii({
       ({ id: _id, version: _v, updatedAt: _u, ...cue }) => cue,
     );
     await Cue.destroy({ where: { productionId }, transaction });
-    const rows = await Cue.bulkCreate(
+    const rows = await bulkCreateWithIds(
+      Cue,
       cues.map((c) => ({ productionId, ...fieldsForRow(c) })),
       { transaction },
     );

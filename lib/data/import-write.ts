@@ -9,6 +9,7 @@ import { isPointHung, type PositionKind } from "@/lib/rig/position-kinds";
 import type { ImportPlanResult } from "@/lib/rig/import-plan";
 import { batchInsert } from "./batch-insert";
 import type { Progress } from "./import-progress";
+import { bulkCreateWithIds } from "./bulk-create";
 import { inTransaction } from "./transaction";
 
 const CHUNK = 500;
@@ -48,7 +49,7 @@ async function createPositions(productionId: number, names: string[], transactio
       sortOrder: top + 1 + i,
     };
   });
-  const created = await Position.bulkCreate(rows, { transaction });
+  const created = await bulkCreateWithIds(Position, rows, { transaction });
   return new Map(created.map((p) => [lower(p.name), p]));
 }
 
@@ -73,7 +74,7 @@ async function createTypes(productionId: number, names: string[], transaction: T
           goboSize: null,
         };
   });
-  const created = await FixtureType.bulkCreate(rows as never[], { transaction });
+  const created = await bulkCreateWithIds(FixtureType, rows as never[], { transaction });
   return new Map(created.map((t) => [lower(t.name), t.id]));
 }
 

@@ -11,6 +11,10 @@ export const PACKAGES = {
   pdftoppm: { probe: "/usr/bin/pdftoppm", pkg: "poppler-utils" },
   libreoffice: { probe: "/usr/bin/libreoffice", pkg: "libreoffice-calc" },
   fonts: { probe: "/usr/share/fonts/truetype/dejavu/DejaVuSans.ttf", pkg: "fonts-dejavu-core" },
+  // `npm run test:cluster` only: Galera replication and what its rsync state transfer calls.
+  galera: { probe: "/usr/lib/libgalera_smm.so", pkg: "galera-4" },
+  rsync: { probe: "/usr/bin/rsync", pkg: "rsync" },
+  socketStats: { probe: "/usr/bin/ss", pkg: "iproute2" },
 };
 
 export function log(message) {

@@ -262,7 +262,8 @@ describe("show reports", () => {
     const designerId = members.find((m) => m.role === "designer")?.userId;
     const unit = fixtures[2];
     const body = {
-      performance: "Matinee 2",
+      // Its own name per run: the cluster run (npm run test:cluster) files this twice into one database.
+      performance: `Matinee 2 (${Date.now().toString(36)})`,
       performedOn: "2026-12-05",
       summary: "Smooth; one unit dark.",
       items: [
@@ -288,7 +289,7 @@ describe("show reports", () => {
     expect(
       (await designer.get(`${base}/notes/show-reports`)).json.showReports.some(
         (r: { performance: string; summary: string }) =>
-          r.summary === "Smooth; one unit dark." && r.performance === "Matinee 2",
+          r.summary === "Smooth; one unit dark." && r.performance === body.performance,
       ),
     ).toBe(false);
 

@@ -74,6 +74,9 @@ describe("database failures become 503 with a true message and Retry-After, neve
       // 1053: the server is shutting down; 1927: the connection was killed.
       queryFailure(1053, "08S01"),
       queryFailure(1927, "70100"),
+      // 1047 with SQLSTATE 08S01: a Galera node outside the primary component ("WSREP has not yet
+      // prepared node for application use", MariaDB Galera documentation).
+      queryFailure(1047, "08S01"),
     ]) {
       const app = toAppError(err);
       expect(databaseTrouble(err)).toBe("unreachable");
