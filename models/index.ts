@@ -100,7 +100,7 @@ function createDb(): Db {
       }`,
     },
   });
-  useFailoverHosts(sequelize, url);
+  routeToAnsweringHost(sequelize, url);
   for (const init of [
     initUser,
     initProduction,
@@ -134,7 +134,7 @@ function createDb(): Db {
 }
 
 /** With DATABASE_FAILOVER_HOSTS set, each new connection goes to a server that answers (database-hosts.ts). */
-function useFailoverHosts(sequelize: Sequelize, url: string) {
+function routeToAnsweringHost(sequelize: Sequelize, url: string) {
   const others = process.env.DATABASE_FAILOVER_HOSTS;
   if (!others) return;
   const preferred = new URL(url);
