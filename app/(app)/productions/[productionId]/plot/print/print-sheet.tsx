@@ -6,7 +6,7 @@ import { stageOutline } from "@/lib/plot/stage-outline";
 import { symbolOutline } from "@/lib/plot/symbol";
 import type { Bounds } from "@/lib/plot/view";
 import type { SheetLayout } from "./paper";
-import { LABEL_FONT_MM, type KeyEntry, sheetLabels, sheetMap, sheetUnits, symbolMm } from "./sheet-plan";
+import { boxAround, LABEL_FONT_MM, type KeyEntry, sheetLabels, sheetMap, sheetUnits, symbolMm } from "./sheet-plan";
 import { SymbolKey } from "./symbol-key";
 import { TitleBlock, type TitleFields } from "./title-block";
 
@@ -44,10 +44,18 @@ export function PrintSheet({
   const o = stageOutline(production);
   const sym = symbolMm(k);
   const units = sheetUnits(data, toSheet, sym);
-  const { labels, unplaced } = sheetLabels(data, toSheet, units, sym, drawing, [
-    { text: "CL", a: toSheet(o.centreLine[1]), b: toSheet(o.centreLine[0]) },
-    { text: production.datumName, a: toSheet(o.datumLine[0]), b: toSheet(o.datumLine[1]) },
-  ]);
+  const { labels, unplaced } = sheetLabels(
+    data,
+    toSheet,
+    units,
+    sym,
+    drawing,
+    [
+      { text: "CL", a: toSheet(o.centreLine[1]), b: toSheet(o.centreLine[0]) },
+      { text: production.datumName, a: toSheet(o.datumLine[0]), b: toSheet(o.datumLine[1]) },
+    ],
+    [boxAround(o.prosceniumLeft.map(toSheet)), boxAround(o.prosceniumRight.map(toSheet))],
+  );
   const notes = unplaced.length ? [`No room on the plan to label: ${unplaced.join(", ")}`] : [];
   return (
     <>

@@ -68,8 +68,13 @@ export function sheetLabels(
   sym: number,
   drawing: Box,
   lines: Array<{ text: string; a: Point; b: Point }>,
+  /** Other drawn things labels should keep off (the proscenium walls). */
+  walls: Box[] = [],
 ): { labels: SheetLabel[]; unplaced: string[] } {
-  const obstacles: Box[] = units.map((u) => ({ x: u.at.x - sym / 2, y: u.at.y - sym / 2, w: sym, h: sym }));
+  const obstacles: Box[] = [
+    ...units.map((u) => ({ x: u.at.x - sym / 2, y: u.at.y - sym / 2, w: sym, h: sym })),
+    ...walls,
+  ];
   const texts = new Map<string, { text: string; kind: SheetLabel["kind"] }>();
   const requests = [];
   // Longer pipes first: they have the most room and anchor the reader; booms and the stage lines after.
@@ -122,4 +127,13 @@ export function symbolKey(data: PlotData): KeyEntry[] {
 export function clipText(text: string, widthMm: number, fontMm: number): string {
   const max = Math.floor(widthMm / (fontMm * 0.55));
   return text.length <= max ? text : `${text.slice(0, Math.max(1, max - 1))}…`;
+}
+
+/** The sheet box around a drawn polygon. */
+export function boxAround(points: Point[]): Box {
+  const xs = points.map((p) => p.x);
+  const ys = points.map((p) => p.y);
+  const x = Math.min(...xs);
+  const y = Math.min(...ys);
+  return { x, y, w: Math.max(...xs) - x, h: Math.max(...ys) - y };
 }
