@@ -1,5 +1,6 @@
 import "server-only";
-import { finishSignUp, startSignUp } from "@/lib/data/sign-ups";
+import { AppError } from "@/lib/errors";
+import { finishSignUp, lookUpSignUpLink, SIGN_UP_REFUSALS, startSignUp } from "@/lib/data/sign-ups";
 import { issuePasswordReset } from "@/lib/data/password-resets";
 import { appOrigin } from "@/lib/mail/links";
 import { signUpExistingAccountMessage, signUpMessage } from "@/lib/mail/sign-up-messages";
@@ -48,6 +49,10 @@ export async function requestSignUp(input: { name: string; email: string }): Pro
 
 /** Creates the account from a sign-up link with the chosen name and password, and signs this browser in. */
 export async function completeSignUp(input: { token: string; name: string; password: string }) {
+  // A link that cannot be used is refused before the (deliberately slow) password hash is computed.
+  const look = await lookUpSignUpLink(input.token);
+  if (look.state !== "open")
+    throw new AppError(look.state === "invalid" ? "not_found" : "conflict", SIGN_UP_REFUSALS[look.state]);
   const { userId, email } = await finishSignUp({
     token: input.token,
     name: input.name,
