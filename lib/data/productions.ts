@@ -7,6 +7,7 @@ import { iso, plain } from "./plain";
 import { versionedUpdate } from "./versioned";
 import { recordChange } from "./changes";
 import { inTransaction } from "./transaction";
+import { stageDefaultsFor } from "@/lib/plot/stage-defaults";
 
 const PRODUCTION_KEYS = [
   "id",
@@ -71,7 +72,9 @@ export async function createProduction({
 }) {
   const { Production, Membership } = getDb();
   return inTransaction(async (transaction) => {
-    const production = await Production.create({ name, venue, displayUnits }, { transaction });
+    // An imperial production starts from round feet and inches (the columns' defaults are metric).
+    const stage = displayUnits === "imperial" ? stageDefaultsFor("imperial") : {};
+    const production = await Production.create({ name, venue, displayUnits, ...stage }, { transaction });
     await Membership.create({ userId, productionId: production.id, role: "designer", isOwner: true }, { transaction });
     await recordChange(
       {

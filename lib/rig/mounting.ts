@@ -25,3 +25,11 @@ export function mountingFromText(text: string): FixtureMounting | null {
   }
   return null;
 }
+
+/** How a unit's default lens height is worked out for each mounting, in words for hints beside the field. */
+export const LENS_HEIGHT_RULE: Record<FixtureMounting, { short: string; hint: string }> = {
+  "under-hung": { short: "trim − lens drop", hint: "Empty: trim less the type's lens drop (under-hung)" },
+  "over-hung": { short: "trim + lens rise", hint: "Empty: trim plus the type's lens rise (over-hung)" },
+  "side-arm": { short: "level with the pipe", hint: "Empty: level with the pipe (side arm)" },
+  floor: { short: "floor + lens rise", hint: "Empty: the type's lens rise above the floor or platform" },
+};

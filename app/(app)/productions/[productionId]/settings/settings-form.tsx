@@ -17,10 +17,13 @@ const LENGTHS: Array<[keyof ProductionDto, string, string]> = [
   ["stageDepth", "Stage depth", "From the datum line upstage"],
   ["apronDepth", "Apron depth", "Downstage of the datum line"],
   ["backWallY", "Back-wall depth", "Datum line to the back wall"],
-  ["headHeight", "Head height", "For focusing to head height (common practice 1.7–1.8 m)"],
+  ["headHeight", "Head height", "For focusing to head height"],
   ["faceHeight", "Face height", "Where the coverage study measures light on faces, above the deck"],
   ["showDeckHeight", "Show-deck height", "A show deck's top above the stage floor; studies measure from it (0 = none)"],
 ];
+
+// Common practice, no source: 1.7–1.8 m, or 5'6"–6'0" (REFERENCE.md), said in the production's units.
+const HEAD_HEIGHT_PRACTICE = { metric: "common practice 1.7–1.8 m", imperial: `common practice 5' 6"–6' 0"` };
 
 type SettingsState = Awaited<ReturnType<typeof updateSettingsAction>>;
 
@@ -85,7 +88,7 @@ export function SettingsForm({ production: initial, canEdit }: { production: Pro
                 key={field}
                 label={label}
                 name={field}
-                hint={hint || undefined}
+                hint={(field === "headHeight" ? `${hint} (${HEAD_HEIGHT_PRACTICE[units]})` : hint) || undefined}
                 defaultValue={typed(field, formatLength(production[field] as number, units))}
                 error={err(field)}
               />

@@ -7,6 +7,7 @@ import { POSITION_KINDS, POSITION_KIND_LABELS, POINT_HUNG_KINDS, type PositionKi
 import { PanelSection } from "./panel-field";
 import { EMPTY_SELECTION } from "./canvas-types";
 import type { PanelProps } from "./panel-props";
+import { defaultTrimFor } from "@/lib/plot/stage-defaults";
 
 const round = (n: number) => Math.round(n * 1000) / 1000;
 
@@ -30,7 +31,7 @@ export function DraftForm(p: PanelProps) {
   const [kind, setKind] = useState<PositionKind>(
     vertical ? "boom" : d.points[0]?.y < 0 ? "foh-bridge" : "overhead-pipe",
   );
-  const [trim, setTrim] = useState(vertical ? formatLength(4, units) : formatLength(7, units));
+  const [trim, setTrim] = useState(formatLength(defaultTrimFor(units, vertical), units));
   const [load, setLoad] = useState("");
   const [distance, setDistance] = useState("");
   const [error, setError] = useState<string | null>(null);

@@ -3,6 +3,7 @@
 import { useState } from "react";
 import { describePoint, formatLength, parseLength } from "@/lib/optics";
 import { markForThrow } from "@/lib/plot/throw-to-mark";
+import { LENS_HEIGHT_RULE } from "@/lib/rig/mounting";
 import type { PlotFixture } from "@/lib/plot/slim-fixtures";
 import { NotesButton } from "@/components/notes/notes-button";
 import { HistoryLink } from "@/components/revisions/history-link";
@@ -160,8 +161,8 @@ export function FixturePanel(p: PanelProps & { fixture: PlotFixture }) {
         <PanelField
           label="Lens height"
           value={f.lensHeight == null ? "" : formatLength(f.lensHeight, units)}
-          placeholder={`${formatLength(g.lensHeight, units)} (trim − lens drop)`}
-          hint="Empty: trim less the type's lens drop"
+          placeholder={`${formatLength(g.lensHeight, units)} (${LENS_HEIGHT_RULE[type?.mounting ?? "under-hung"].short})`}
+          hint={LENS_HEIGHT_RULE[type?.mounting ?? "under-hung"].hint}
           editable={ed}
           testId="field-lens-height"
           commit={save("Change the lens height", (t) => ({ lensHeight: t === "" ? null : parseLength(t, unit) }))}
