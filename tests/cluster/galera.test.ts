@@ -130,6 +130,7 @@ describe("a node killed mid-load", () => {
     await sleep(4_000);
     killNode(node2);
     killedAt = Date.now();
+    await expect(queryNode(node2, "SELECT 1")).rejects.toThrow();
     await writers;
 
     console.log(`Answers during the load: ${JSON.stringify(Object.fromEntries(statuses))}`);
