@@ -66,4 +66,51 @@ describe("notes: show report to work call", () => {
       return [n.status, n.closedBy];
     }).toEqual(["done", me.id]);
   });
+
+  it("the stage manager saves a draft, edits it, then sends it; once sent it can no longer be edited", async () => {
+    const { page, productionId } = sm;
+    const api = `/api/productions/${productionId}`;
+    const performance = `Draft e2e ${Date.now() % 100000}`;
+    await page.goto(`/productions/${productionId}/notes/show-reports`);
+    await page.getByLabel("Performance").fill(performance);
+    await page.getByLabel("How it went").fill("Half written at the interval.");
+    await page.getByRole("button", { name: "Add a lighting item" }).click();
+    await page.getByLabel("Item 1").fill(`Haze too thin in act one (${performance})`);
+    await page.getByRole("button", { name: "Save as a draft" }).click();
+    await page
+      .getByRole("status")
+      .filter({ hasText: `Draft saved for ${performance}` })
+      .waitFor({ timeout: UI_TIMEOUT });
+    type Listed = { id: number; performance: string; status: string; summary: string; noteIds: number[] };
+    const listed = async () =>
+      ((await (await page.request.get(`${api}/notes/show-reports`)).json()).showReports as Listed[]).find(
+        (r) => r.performance === performance,
+      );
+    const draft = (await listed())!;
+    expect([draft.status, draft.noteIds]).toEqual(["draft", []]);
+    await page.getByTestId(`report-status-${draft.id}`).filter({ hasText: "Draft, not sent" }).waitFor();
+
+    // Leave the form, come back to the draft through its Edit button, finish it and send it.
+    await page.getByRole("button", { name: "Stop editing (keeps the saved draft)" }).click();
+    await page.getByRole("button", { name: `Edit ${performance}` }).click();
+    await expect.poll(() => page.getByLabel("How it went").inputValue()).toBe("Half written at the interval.");
+    await page.getByLabel("How it went").fill("Clean second half; haze note for the crew.");
+    await screenshot(page, "notes-show-report-draft-editing");
+    await page.getByRole("button", { name: "Save and send to the team" }).click();
+    await page
+      .getByRole("status")
+      .filter({ hasText: "Report sent to the team: 1 note written." })
+      .waitFor({ timeout: UI_TIMEOUT });
+    await page.getByTestId(`report-status-${draft.id}`).filter({ hasText: "Sent" }).waitFor();
+    expect(await page.getByRole("button", { name: `Edit ${performance}` }).count()).toBe(0);
+    const sent = (await listed())!;
+    expect([sent.status, sent.summary, sent.noteIds.length]).toEqual([
+      "sent",
+      "Clean second half; haze note for the crew.",
+      1,
+    ]);
+    await screenshot(page, "notes-show-report-draft-sent");
+    // The stage manager wrote the note, so may take it back: the demo keeps no stray work note.
+    expect((await page.request.delete(`${api}/notes/${sent.noteIds[0]}`)).ok()).toBe(true);
+  });
 });
