@@ -305,6 +305,18 @@ export function RigTable({
                   <span className="font-normal text-muted">
                     · {row.subRows.length} unit{row.subRows.length === 1 ? "" : "s"}
                   </span>
+                  {/* The position's own notes, beside its heading. */}
+                  {row.groupingColumnId === "position" && row.getLeafRows()[0] ? (
+                    <NotesButton
+                      className="ml-2"
+                      productionId={productionId}
+                      target={{
+                        subject: "position",
+                        subjectId: row.getLeafRows()[0].original.positionId,
+                        label: `position ${row.getLeafRows()[0].original.positionName}`,
+                      }}
+                    />
+                  ) : null}
                 </th>
               </tr>
             ) : (
