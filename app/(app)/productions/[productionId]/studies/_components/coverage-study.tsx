@@ -415,9 +415,10 @@ export function CoverageStudy(p: StudiesProps) {
 
       {a && (
         // A wide table scrolls inside its own box rather than the page (tablet portrait).
-        <div className="min-w-0 overflow-x-auto">
+        // biome-ignore lint/a11y/noNoninteractiveTabindex: a box that scrolls must be reachable from the keyboard (WCAG 2.1.1)
+        <section className="min-w-0 overflow-x-auto" aria-label="Acting areas" tabIndex={0}>
           <AreaTable areas={a.areas} units={p.units} selected={selectedArea} onSelect={setSelectedArea} />
-        </div>
+        </section>
       )}
       {selected && (
         <div className="rounded-md border border-line bg-surface p-3 text-sm" data-testid="dark-spot">

@@ -227,7 +227,8 @@ export function ShadowStudy(p: StudiesProps) {
             ))}
           </ul>
           {activeShadows ? (
-            <div className="overflow-x-auto">
+            // biome-ignore lint/a11y/noNoninteractiveTabindex: a box that scrolls must be reachable from the keyboard (WCAG 2.1.1)
+            <section className="overflow-x-auto" aria-label="Shadows of the chosen performer or panel" tabIndex={0}>
               <table className="w-full text-left text-xs" data-testid="shadow-table">
                 <caption className="text-left text-sm font-medium">Shadows of {activeShadows.name}</caption>
                 <thead className="text-muted">
@@ -261,7 +262,7 @@ export function ShadowStudy(p: StudiesProps) {
                   ))}
                 </tbody>
               </table>
-            </div>
+            </section>
           ) : (
             <p className="text-muted">Add a performer or a panel to see the shadows each lit unit casts.</p>
           )}
