@@ -1,4 +1,5 @@
-// An electrician overloads a circuit on the checks page and sees the warning badge on the plot.
+// An electrician overloads a circuit on the checks page and sees the warning badge on the plot, and each
+// unit's own badge on the plot and in the rig table, linked to its row on the checks page.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { screenshot, signedIn, type SignedIn } from "./support/browser";
 import { eventually, UI_TIMEOUT } from "./support/wait";
@@ -36,13 +37,13 @@ describe("checks", () => {
       .getByTestId("checks-cautions")
       .getByText(/planning aids, not an engineering or electrical approval/)
       .waitFor();
-    const row = page.locator(`tr[data-circuit="${target.name}"]`);
-    expect(await row.getAttribute("data-status")).toBe("ok");
+    const circuitRow = page.locator(`tr[data-circuit="${target.name}"]`);
+    expect(await circuitRow.getAttribute("data-status")).toBe("ok");
     // Its load draws over 2.5 A (I = P / V), so a 2 A rating is overloaded
     const rating = page.getByLabel(`Rating of circuit ${target.name} in amps`);
     await rating.fill("2");
     await rating.press("Enter");
-    await eventually(() => row.getAttribute("data-status")).toBe("over-rating");
+    await eventually(() => circuitRow.getAttribute("data-status")).toBe("over-rating");
     await eventually(async () => (await summary()).errors).toBe(before.errors + 1);
     await page.getByTestId("checks-findings").getByText(`Circuit ${target.name}:`).first().waitFor();
     await screenshot(page, "checks-overloaded-circuit");
@@ -53,7 +54,35 @@ describe("checks", () => {
     expect(await badge.getAttribute("data-severity")).toBe("error");
     expect(await badge.textContent()).toContain(`${before.errors + 1} to fix`);
     await screenshot(page, "checks-badge-on-plot");
-    await badge.click();
+
+    // Each unit on that circuit carries its own badge: drawn on its symbol, with a link over it named with
+    // what is wrong, which opens the finding's row on the checks page.
+    const unitBadgeName = new RegExp(`^Unit .+, checks to fix: circuit ${target.name} overloaded`);
+    const canvas = page.getByTestId("plot-canvas");
+    await eventually(async () => Number((await canvas.getAttribute("data-check-badges")) ?? 0)).toBeGreaterThan(0);
+    const onPlot = page.getByRole("link", { name: unitBadgeName }).first();
+    await onPlot.waitFor({ timeout: UI_TIMEOUT });
+    expect(await onPlot.getAttribute("data-severity")).toBe("error");
+    const href = (await onPlot.getAttribute("href")) ?? "";
+    expect(href).toMatch(new RegExp(`/productions/${productionId}/checks#finding-power-`));
+    await screenshot(page, "checks-unit-badge-on-plot");
+
+    // The rig table: a Checks cell on the same units, the same words, the same row
+    await page.goto(`/productions/${productionId}/rig`);
+    // Narrow the table to that circuit's units (typing also hurries the long table's hydration on a busy machine)
+    await page.getByLabel("Filter fixtures").fill(target.name);
+    const inTable = page.getByTestId("rig-table").getByRole("link", { name: unitBadgeName }).first();
+    await inTable.waitFor({ timeout: UI_TIMEOUT });
+    expect(await inTable.getAttribute("href")).toBe(href);
+    await screenshot(page, "checks-unit-badge-in-rig");
+    await inTable.click();
+    await page.waitForURL(/\/checks#finding-power-/);
+    const row = page.locator(`[id="${href.split("#")[1]}"]`);
+    await row.waitFor({ timeout: UI_TIMEOUT });
+    expect(await row.textContent()).toContain(`Circuit ${target.name}:`);
+
+    await page.goto(`/productions/${productionId}/plot`);
+    await page.getByTestId("checks-badge").click();
     await page.waitForURL(/\/checks$/);
 
     // Put the demo back for the other tests
