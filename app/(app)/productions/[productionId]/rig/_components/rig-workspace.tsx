@@ -257,7 +257,7 @@ export function RigWorkspace(props: Props) {
                   onClick={() => void deletion.undoLast()}
                   title="Ctrl+Z (⌘Z)"
                 >
-                  Undo: {deletion.undoLabel.toLowerCase()}
+                  Undo: {deletion.undoLabel.charAt(0).toLowerCase() + deletion.undoLabel.slice(1)}
                 </Button>
               ) : null}
             </div>
