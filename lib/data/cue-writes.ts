@@ -223,6 +223,20 @@ export async function renumberCues({
       },
       transaction,
     );
+    // And each moved cue's own history: its number before and after.
+    for (const m of plan.moves)
+      await recordChange(
+        {
+          productionId,
+          userId,
+          entity: "cue",
+          entityId: m.id,
+          action: "update",
+          before: { number: m.from },
+          after: { number: m.to },
+        },
+        transaction,
+      );
     return { renumbered: plan.moves.length };
   });
 }

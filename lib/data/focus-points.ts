@@ -6,6 +6,8 @@ import type { createFocusPointSchema, updateFocusPointSchema } from "@/lib/valid
 import type { FocusPointDto } from "@/lib/dto/plan";
 import { plain } from "./plain";
 import { productionCrud } from "./production-crud";
+import { recordChange } from "./changes";
+import { toFixtureRecord } from "./fixtures";
 
 export const toFocusPointDto = (p: FocusPoint): FocusPointDto =>
   plain(p, ["id", "productionId", "name", "x", "y", "version", "updatedAt"]);
@@ -22,11 +24,23 @@ const focusPoints = productionCrud<
   toDto: toFocusPointDto,
   order: [["name", "ASC"]],
   // Fixtures aimed at a deleted point keep their mark where the point was.
-  beforeDelete: async (row, { productionId, transaction }) => {
-    await getDb().Fixture.update(
+  // Each such fixture's history records the change of its mark.
+  beforeDelete: async (row, { productionId, userId, transaction }) => {
+    const { Fixture } = getDb();
+    const where = { productionId, focusPointId: row.id };
+    const aimed = await Fixture.findAll({ where, order: [["id", "ASC"]], lock: true, transaction });
+    await Fixture.update(
       { focusX: row.x, focusY: row.y, focusPointId: null, version: literal("version + 1") as never },
-      { where: { productionId, focusPointId: row.id }, transaction },
+      { where, transaction },
     );
+    for (const f of aimed) {
+      const before = toFixtureRecord(f);
+      const after = { ...before, focusX: row.x, focusY: row.y, focusPointId: null, version: before.version + 1 };
+      await recordChange(
+        { productionId, userId, entity: "fixture", entityId: f.id, action: "update", before, after },
+        transaction,
+      );
+    }
   },
 });
 

@@ -5,6 +5,8 @@ import type { createPositionSchema, updatePositionSchema } from "@/lib/validatio
 import type { PositionDto } from "@/lib/dto/plan";
 import { plain } from "./plain";
 import { productionCrud } from "./production-crud";
+import { recordChange } from "./changes";
+import { toFixtureRecord } from "./fixtures";
 
 const POSITION_KEYS = [
   "id",
@@ -43,10 +45,19 @@ const positions = productionCrud<
     const last = (await getDb().Position.max("sortOrder", { where: { productionId }, transaction })) as number | null;
     return { x2: null, y2: null, ratedLoadKg: null, ...input, sortOrder: input.sortOrder ?? (last ?? -1) + 1 };
   },
-  // Deleting a position takes the fixtures hung on it (the screen confirms with the user first).
-  beforeDelete: async (row, { productionId, transaction }) => ({
-    fixturesRemoved: await getDb().Fixture.destroy({ where: { productionId, positionId: row.id }, transaction }),
-  }),
+  // Deleting a position takes the fixtures hung on it (the screen confirms with the user first); each
+  // unit's own history ends with its removal, as a delete of the unit itself would record it.
+  beforeDelete: async (row, { productionId, userId, transaction }) => {
+    const { Fixture } = getDb();
+    const where = { productionId, positionId: row.id };
+    const hung = await Fixture.findAll({ where, order: [["id", "ASC"]], lock: true, transaction });
+    for (const f of hung)
+      await recordChange(
+        { productionId, userId, entity: "fixture", entityId: f.id, action: "delete", before: toFixtureRecord(f) },
+        transaction,
+      );
+    return { fixturesRemoved: await Fixture.destroy({ where, transaction }) };
+  },
 });
 
 export const getPositionsByProduction = positions.list;

@@ -33,7 +33,10 @@ export function productionCrud<
     ctx: { productionId: number; transaction: Transaction },
   ) => Promise<object> | object;
   /** Runs before the row is destroyed; may refuse (throw) or tidy dependants. Returns extra facts for the change log. */
-  beforeDelete?: (row: M, ctx: { productionId: number; transaction: Transaction }) => Promise<object | void>;
+  beforeDelete?: (
+    row: M,
+    ctx: { productionId: number; userId: number; transaction: Transaction },
+  ) => Promise<object | void>;
 }) {
   const lower = spec.what.toLowerCase();
 
@@ -93,7 +96,7 @@ export function productionCrud<
     await inTransaction(async (transaction) => {
       const row = await spec.model().findOne({ where: { productionId, id } as never, transaction });
       if (!row) throw notFound(spec.what);
-      const extra = spec.beforeDelete ? await spec.beforeDelete(row, { productionId, transaction }) : undefined;
+      const extra = spec.beforeDelete ? await spec.beforeDelete(row, { productionId, userId, transaction }) : undefined;
       await row.destroy({ transaction });
       await recordChange(
         {

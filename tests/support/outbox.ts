@@ -12,13 +12,23 @@ function outboxDir(): string {
   return dir;
 }
 
+/** A message's summary, or null while the stand-in is still writing it (the next poll reads it whole). */
+function readSummary(file: string): Summary | null {
+  try {
+    return JSON.parse(readFileSync(file, "utf8")) as Summary;
+  } catch {
+    return null;
+  }
+}
+
 /** Every message in the outbox addressed to `to`, oldest first, parsed. */
 export async function mailTo(to: string): Promise<ParsedMail[]> {
   const dir = outboxDir();
   const ids = readdirSync(dir)
     .filter((f) => f.endsWith(".json"))
     .sort()
-    .map((f) => JSON.parse(readFileSync(path.join(dir, f), "utf8")) as Summary)
+    .map((f) => readSummary(path.join(dir, f)))
+    .filter((s): s is Summary => s !== null)
     .filter((s) => s.to.map((a) => a.toLowerCase()).includes(to.toLowerCase()))
     .map((s) => s.id);
   return Promise.all(ids.map((id) => simpleParser(readFileSync(path.join(dir, `${id}.eml`)))));

@@ -11,6 +11,8 @@ import { checksStatusLines } from "@/lib/checks/status";
 import { getFixtureTypesByProduction } from "@/lib/data/fixture-types";
 import { can } from "@/lib/auth/policy";
 import { AddTypes } from "@/components/rig/add-types";
+import { getLatestRevisionStamp } from "@/lib/data/revisions";
+import { revisionStampText } from "@/components/revisions/revision-marks";
 
 // The layout's title template covers the tabs below it, not this page of its own segment.
 export async function generateMetadata({ params }: { params: Promise<{ productionId: string }> }): Promise<Metadata> {
@@ -20,12 +22,13 @@ export async function generateMetadata({ params }: { params: Promise<{ productio
 
 export default async function OverviewPage({ params }: { params: Promise<{ productionId: string }> }) {
   const { productionId, member } = await memberForPage((await params).productionId);
-  const [production, overview, team, checks, types] = await Promise.all([
+  const [production, overview, team, checks, types, revision] = await Promise.all([
     requireProduction(productionId),
     getProductionOverview({ productionId }),
     getTeamByProduction({ productionId }),
     requireChecksReport({ productionId }),
     getFixtureTypesByProduction({ productionId }),
+    getLatestRevisionStamp({ productionId }),
   ]);
   // What the checks found, or which of them have nothing to check yet: never a bare all-clear.
   const checkLines = checksStatusLines(checks, {
@@ -90,7 +93,12 @@ export default async function OverviewPage({ params }: { params: Promise<{ produ
             </li>
           ))}
         </ul>
-        <p className="mt-3 text-xs text-muted">Latest revision: none issued yet.</p>
+        <p className="mt-3 text-xs text-muted">
+          Latest revision:{" "}
+          <Link href={`/productions/${productionId}/revisions`} className="text-accent underline">
+            {revision ? revisionStampText(revision) : "none issued yet"}
+          </Link>
+        </p>
       </Card>
       <Card title="Stage" className="lg:col-span-2">
         <p className="text-sm">

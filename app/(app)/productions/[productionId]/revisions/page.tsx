@@ -125,6 +125,7 @@ export default async function RevisionsPage({
       {comparison ? (
         <Card title="Compare">
           <form
+            key={`${from}-${to}`}
             method="get"
             className="mb-3 flex flex-wrap items-end gap-3 print:hidden"
             aria-label="Compare revisions"
@@ -167,7 +168,13 @@ export default async function RevisionsPage({
         </Card>
       ) : null}
 
-      <EquipmentCard productionId={productionId} revisions={revisions} report={report} query={eq} />
+      <EquipmentCard
+        key={`${eq.of}-${eq.from}-${eq.spares}`}
+        productionId={productionId}
+        revisions={revisions}
+        report={report}
+        query={eq}
+      />
 
       {member.isOwner ? (
         <Card title="Rental shop" className="print:hidden">
