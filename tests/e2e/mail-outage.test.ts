@@ -55,7 +55,7 @@ describe("the mail server down", () => {
     await untilSmtp(false);
     try {
       await page.goto(`/productions/${productionId}/team`);
-      await page.getByLabel("E-mail").fill(invited);
+      await page.getByRole("textbox", { name: "E-mail" }).fill(invited);
       await page.getByLabel("Role", { exact: true }).selectOption("electrician");
       await page.getByRole("button", { name: "Send invitation" }).click();
       await page.getByText(/could not be sent yet/).waitFor();
