@@ -4,7 +4,10 @@ import type { ChecksResult } from "./index";
 
 export type CheckStatusLine = { tone: "error" | "warning" | "muted" | "ok"; text: string };
 
-export function checksStatusLines(r: ChecksResult, facts: { patched: number; fixtures: number }): CheckStatusLine[] {
+export function checksStatusLines(
+  r: Pick<ChecksResult, "summary" | "power" | "rigging">,
+  facts: { patched: number; fixtures: number },
+): CheckStatusLine[] {
   const lines: CheckStatusLine[] = [];
   if (r.summary.errors)
     lines.push({
