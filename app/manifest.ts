@@ -2,15 +2,15 @@ import type { MetadataRoute } from "next";
 
 /**
  * The web app manifest (served at /manifest.webmanifest): lets a tablet on deck add Throwline to its home
- * screen and open it full screen, in the dark theme's colours, straight to the productions (and from there
- * the focus call). The icons are Throwline's own, drawn by scripts/make-icons.mjs into public/icons.
+ * screen and open it full screen, in the dark theme's colours, straight into the focus call (/focus sends
+ * it to the production the tablet followed last, or the person's only one). The icons are Throwline's own, drawn by scripts/make-icons.mjs into public/icons.
  */
 export default function manifest(): MetadataRoute.Manifest {
   return {
     name: "Throwline",
     short_name: "Throwline",
     description: "Plot, focus, cues and paperwork for the lighting department.",
-    start_url: "/productions",
+    start_url: "/focus",
     scope: "/",
     display: "standalone",
     orientation: "any",

@@ -19,7 +19,7 @@ describe("web app manifest and icons", () => {
     const m = await r.json();
     expect(m).toMatchObject({
       name: "Throwline",
-      start_url: "/productions",
+      start_url: "/focus",
       display: "standalone",
       theme_color: "#161412",
     });

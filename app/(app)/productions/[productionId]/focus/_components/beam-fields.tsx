@@ -3,7 +3,8 @@
 import { useEffect, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
-import { useUpdateFocus, type FocusPatch } from "@/hooks/use-focus";
+import type { FocusPatch } from "@/hooks/use-focus";
+import { useOutbox } from "@/lib/offline/outbox-context";
 import { ApiError } from "@/lib/http/api-client";
 import type { FixtureDto } from "@/lib/dto/fixture";
 import { fixtureFieldsSchema } from "@/lib/validation/fixture";
@@ -28,7 +29,8 @@ const leavesOf = (f: FixtureDto) =>
  * API's own schema, so the message at the field is the one the server would give.
  */
 export function BeamFields({ fixture, data }: { fixture: FixtureDto; data: FocusPageData }) {
-  const update = useUpdateFocus(data.production.id);
+  const outbox = useOutbox();
+  const [pending, setPending] = useState(false);
   const [rotation, setRotation] = useState(fixture.goboRotationDeg?.toString() ?? "");
   const [leaves, setLeaves] = useState(leavesOf(fixture));
   const [errors, setErrors] = useState<Errors>({});
@@ -50,24 +52,23 @@ export function BeamFields({ fixture, data }: { fixture: FixtureDto; data: Focus
   // biome-ignore lint/correctness/useExhaustiveDependencies: the message belongs to the unit; a new unit clears it
   useEffect(() => setMessage(null), [id]);
 
-  const save = (patch: FocusPatch) => {
+  const save = async (patch: FocusPatch) => {
     const checked = fixtureFieldsSchema.partial().safeParse(patch);
     if (!checked.success) {
       setErrors(Object.fromEntries(checked.error.issues.map((i) => [String(i.path[0]), i.message])));
       return;
     }
     setErrors({});
-    update.mutate(
-      { id: fixture.id, version: fixture.version, patch },
-      {
-        onSuccess: () => setMessage({ text: "Saved.", tone: "ok" }),
-        onError: (err) => {
-          if (err instanceof ApiError)
-            setErrors(Object.fromEntries(Object.entries(err.fieldErrors).map(([k, v]) => [k, v[0]])));
-          setMessage({ text: err.message, tone: "error" });
-        },
-      },
-    );
+    setPending(true);
+    const outcome = await outbox.save(fixture, patch).finally(() => setPending(false));
+    if (outcome.kind !== "error") {
+      setMessage({ text: outcome.kind === "saved" ? "Saved." : "Waiting to send: kept on this device.", tone: "ok" });
+      return;
+    }
+    const err = outcome.error;
+    if (err instanceof ApiError)
+      setErrors(Object.fromEntries(Object.entries(err.fieldErrors).map(([k, v]) => [k, v[0]])));
+    setMessage({ text: err.message, tone: "error" });
   };
   const rotationValue = rotation.trim() === "" ? null : Number(rotation.trim().replace(/°$/, "").replace(",", "."));
   const leavesDirty = LEAVES.some((l) => (leaves[l.key].trim() || null) !== (fixture[l.key] ?? null));
@@ -104,8 +105,8 @@ export function BeamFields({ fixture, data }: { fixture: FixtureDto; data: Focus
               type="button"
               variant="secondary"
               className="min-h-12"
-              disabled={update.isPending || rotationValue === (fixture.goboRotationDeg ?? null)}
-              onClick={() => save({ goboRotationDeg: rotationValue })}
+              disabled={pending || rotationValue === (fixture.goboRotationDeg ?? null)}
+              onClick={() => void save({ goboRotationDeg: rotationValue })}
             >
               Save rotation
             </Button>
@@ -151,9 +152,9 @@ export function BeamFields({ fixture, data }: { fixture: FixtureDto; data: Focus
               type="button"
               variant="secondary"
               className="min-h-12 self-end"
-              disabled={update.isPending || !leavesDirty}
+              disabled={pending || !leavesDirty}
               onClick={() =>
-                save(Object.fromEntries(LEAVES.map((l) => [l.key, leaves[l.key].trim() || null])) as FocusPatch)
+                void save(Object.fromEntries(LEAVES.map((l) => [l.key, leaves[l.key].trim() || null])) as FocusPatch)
               }
             >
               Save barn doors

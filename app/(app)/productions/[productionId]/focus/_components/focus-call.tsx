@@ -1,17 +1,23 @@
 "use client";
 
 import Link from "next/link";
-import { usePathname, useRouter, useSearchParams } from "next/navigation";
-import { useMemo } from "react";
+import { usePathname, useSearchParams } from "next/navigation";
+import { useEffect, useMemo } from "react";
 import { POINT_HUNG_KINDS } from "@/lib/rig/position-kinds";
 import { useFocusFixtures } from "@/hooks/use-focus";
 import { neighboursOf } from "@/lib/focus/shared-mark";
 import { PoolPlan } from "@/components/focus/pool-plan";
 import { toQuery } from "@/lib/focus/filters";
+import { photoOf } from "@/lib/focus/chart-model";
+import { keepFocusCallOffline } from "@/lib/offline/focus-worker";
+import { rememberFocusProduction } from "@/lib/offline/last-focus";
+import { withPending } from "@/lib/offline/outbox";
+import { useOutbox } from "@/lib/offline/outbox-context";
 import { ChartCard } from "./chart-card";
 import { BeamFields } from "./beam-fields";
 import { FocusControls } from "./focus-controls";
 import { FocusPhoto } from "./focus-photo";
+import { OutboxPanel } from "./outbox-panel";
 import { orderForStrip, UnitStrip } from "./unit-strip";
 import { browserTimeZone, useCharts, useInBrowser } from "./use-charts";
 import type { FocusPageData } from "./types";
@@ -20,10 +26,15 @@ const idParam = (v: string | null) => (v && /^\d+$/.test(v) ? Number(v) : null);
 
 /** The focus call on a tablet: follow one position unit by unit, mark each focused, keep notes. */
 export function FocusCall({ data }: { data: FocusPageData }) {
-  const router = useRouter();
   const pathname = usePathname();
   const params = useSearchParams();
-  const { data: fixtures } = useFocusFixtures(data.production.id, data.fixtures);
+  const { data: saved } = useFocusFixtures(data.production.id, data.fixtures);
+  const outbox = useOutbox();
+  // What the deck sees: the server's rows with this device's waiting edits on top.
+  const fixtures = useMemo(
+    () => saved.map((f) => withPending(f, outbox.byFixture.get(f.id))),
+    [saved, outbox.byFixture],
+  );
   const inBrowser = useInBrowser();
 
   const positionId = idParam(params.get("position")) ?? fixtures[0]?.positionId ?? null;
@@ -41,10 +52,14 @@ export function FocusCall({ data }: { data: FocusPageData }) {
   const { charts, landmarks } = useCharts(data, current ? [current] : []);
   const chart = charts[0];
 
+  // The page holds every position's units, so moving between units and positions asks nothing of the
+  // server (the history API keeps Next's search params in step): it works the same with the network gone.
   const go = (next: { position?: number | null; unit?: number | null }) =>
-    router.replace(`${pathname}?${toQuery({ position: next.position ?? positionId, unit: next.unit ?? undefined })}`, {
-      scroll: false,
-    });
+    window.history.replaceState(
+      null,
+      "",
+      `${pathname}?${toQuery({ position: next.position ?? positionId, unit: next.unit ?? undefined })}`,
+    );
   const nextUnit = () => {
     const i = units.findIndex((f) => f.id === current?.id);
     const after = [...units.slice(i + 1), ...units.slice(0, i)].find((f) => !f.focused);
@@ -55,6 +70,21 @@ export function FocusCall({ data }: { data: FocusPageData }) {
     const target = units[i + d];
     if (target) go({ unit: target.id });
   };
+
+  // Keep this position on the device (the page, its code, the fixtures read, its units' photos) while online.
+  const photoUrls = units.flatMap((f) => {
+    const photo = photoOf(f);
+    return photo ? [photo.thumbSrc, photo.href] : [];
+  });
+  const keepKey = `${positionId}|${photoUrls.join(",")}`;
+  // biome-ignore lint/correctness/useExhaustiveDependencies: keepKey stands for the position and its photos
+  useEffect(() => {
+    rememberFocusProduction(data.production.id);
+    if (!navigator.onLine) return;
+    void keepFocusCallOffline(data.production.id, [`/api/productions/${data.production.id}/fixtures`, ...photoUrls])
+      .then((kept) => document.documentElement.setAttribute("data-focus-kept", kept ? "yes" : "no"))
+      .catch(() => document.documentElement.setAttribute("data-focus-kept", "no"));
+  }, [keepKey, data.production.id]);
 
   const vertical = !!position && POINT_HUNG_KINDS.has(position.kind);
   const done = units.filter((f) => f.focused).length;
@@ -104,13 +134,20 @@ export function FocusCall({ data }: { data: FocusPageData }) {
           </a>
         </div>
       </div>
+      <OutboxPanel />
       {!current ? (
         <p className="rounded-md border border-line bg-surface p-6 text-sm text-muted">
           No units hang on this position.
         </p>
       ) : (
         <div className={vertical ? "grid grid-cols-[5.5rem_minmax(0,1fr)] gap-3" : "flex flex-col gap-3"}>
-          <UnitStrip kind={position?.kind} units={units} currentId={current.id} onPick={(id) => go({ unit: id })} />
+          <UnitStrip
+            kind={position?.kind}
+            units={units}
+            currentId={current.id}
+            waiting={outbox.byFixture}
+            onPick={(id) => go({ unit: id })}
+          />
           <div className="flex min-w-0 flex-col gap-3">
             <div className="flex gap-2">
               <button

@@ -3,7 +3,8 @@
 import { useEffect, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
-import { useUpdateFocus, type FocusPatch } from "@/hooks/use-focus";
+import type { FocusPatch } from "@/hooks/use-focus";
+import { useOutbox } from "@/lib/offline/outbox-context";
 import type { FixtureDto } from "@/lib/dto/fixture";
 import type { FocusChart } from "@/lib/focus/chart-model";
 import type { FocusPageData } from "./types";
@@ -73,22 +74,20 @@ export function FocusControls({
   data: FocusPageData;
   onNext: () => void;
 }) {
-  const update = useUpdateFocus(data.production.id);
+  const outbox = useOutbox();
+  const [pending, setPending] = useState(false);
   const [message, setMessage] = useState<{ text: string; tone: "error" | "ok" } | null>(null);
   // biome-ignore lint/correctness/useExhaustiveDependencies: the message belongs to the unit; a new unit clears it
   useEffect(() => setMessage(null), [fixture.id]);
 
-  const save = (patch: FocusPatch, then?: () => void) =>
-    update.mutate(
-      { id: fixture.id, version: fixture.version, patch },
-      {
-        onSuccess: () => {
-          setMessage({ text: "Saved.", tone: "ok" });
-          then?.();
-        },
-        onError: (err) => setMessage({ text: err.message, tone: "error" }),
-      },
-    );
+  // Offline (or mid-send failure) the edit waits on the device and the unit moves on all the same.
+  const save = async (patch: FocusPatch, then?: () => void) => {
+    setPending(true);
+    const outcome = await outbox.save(fixture, patch).finally(() => setPending(false));
+    if (outcome.kind === "error") return setMessage({ text: outcome.error.message, tone: "error" });
+    setMessage({ text: outcome.kind === "saved" ? "Saved." : "Waiting to send: kept on this device.", tone: "ok" });
+    then?.();
+  };
 
   return (
     <section
@@ -107,8 +106,8 @@ export function FocusControls({
             <Button
               type="button"
               variant="secondary"
-              disabled={update.isPending}
-              onClick={() => save({ focused: false })}
+              disabled={pending}
+              onClick={() => void save({ focused: false })}
               data-testid="unmark-focused"
             >
               Undo focused
@@ -117,8 +116,8 @@ export function FocusControls({
             <>
               <Button
                 type="button"
-                disabled={update.isPending}
-                onClick={() => save({ focused: true }, onNext)}
+                disabled={pending}
+                onClick={() => void save({ focused: true }, onNext)}
                 className="min-h-12 px-6 text-base"
                 data-testid="mark-focused"
               >
@@ -127,8 +126,8 @@ export function FocusControls({
               <Button
                 type="button"
                 variant="secondary"
-                disabled={update.isPending}
-                onClick={() => save({ focused: true })}
+                disabled={pending}
+                onClick={() => void save({ focused: true })}
                 className="min-h-12"
                 data-testid="mark-focused-stay"
               >
@@ -147,16 +146,16 @@ export function FocusControls({
         label="As-focused notes"
         value={fixture.focusNotes}
         editable={data.rights.focus}
-        busy={update.isPending}
-        onSave={(v) => save({ focusNotes: v })}
+        busy={pending}
+        onSave={(v) => void save({ focusNotes: v })}
       />
       <NoteField
         id="designer-notes"
         label="Designer notes"
         value={fixture.notes}
         editable={data.rights.designerNotes}
-        busy={update.isPending}
-        onSave={(v) => save({ notes: v })}
+        busy={pending}
+        onSave={(v) => void save({ notes: v })}
       />
       <div aria-live="polite">{message && <FormMessage message={message.text} tone={message.tone} />}</div>
     </section>

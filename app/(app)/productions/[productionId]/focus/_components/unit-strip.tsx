@@ -3,6 +3,7 @@
 import { useEffect, useRef } from "react";
 import { POINT_HUNG_KINDS, type PositionKind } from "@/lib/rig/position-kinds";
 import type { FixtureDto } from "@/lib/dto/fixture";
+import type { OutboxEntry } from "@/lib/offline/outbox";
 
 /**
  * The position as a strip of its units, in the order the crew meets them: booms and ladders top to
@@ -18,11 +19,14 @@ export function UnitStrip({
   kind,
   units,
   currentId,
+  waiting,
   onPick,
 }: {
   kind: PositionKind | undefined;
   units: FixtureDto[];
   currentId: number | null;
+  /** Units with edits on this device not yet sent (or sent back as a conflict). */
+  waiting?: Map<number, OutboxEntry>;
   onPick: (id: number) => void;
 }) {
   const vertical = !!kind && POINT_HUNG_KINDS.has(kind);
@@ -50,6 +54,7 @@ export function UnitStrip({
     >
       {units.map((f) => {
         const current = f.id === currentId;
+        const entry = waiting?.get(f.id);
         return (
           <button
             key={f.id}
@@ -81,6 +86,12 @@ export function UnitStrip({
               )}
               {f.focused ? <span className="sr-only">, focused</span> : null}
             </span>
+            {entry ? (
+              <span className="text-xs font-medium" data-testid="strip-waiting">
+                <span className="sr-only">, </span>
+                {entry.state === "conflict" ? "conflict" : entry.state === "refused" ? "not saved" : "waiting"}
+              </span>
+            ) : null}
           </button>
         );
       })}

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { Suspense } from "react";
 import { CHART_CSS, PLAN_CSS } from "@/lib/focus/chart-css";
+import { OutboxProvider } from "@/lib/offline/outbox-context";
 import { FocusCall } from "../_components/focus-call";
 import { loadFocusPage } from "../load-page";
 
@@ -13,7 +14,9 @@ export default async function FocusCallPage({ params }: { params: Promise<{ prod
       {/* biome-ignore lint/security/noDangerouslySetInnerHtml: the charts' own constant stylesheet, no user text */}
       <style dangerouslySetInnerHTML={{ __html: CHART_CSS + PLAN_CSS }} />
       <Suspense>
-        <FocusCall data={data} />
+        <OutboxProvider productionId={data.production.id}>
+          <FocusCall data={data} />
+        </OutboxProvider>
       </Suspense>
     </>
   );
