@@ -6,7 +6,8 @@ import { useMemo, useRef, useState } from "react";
 import { ApiError, apiFetch } from "@/lib/http/api-client";
 import type { OccluderShadows, PerformerMarkDto, ScenicPanelDto, ShadowResult } from "@/lib/dto/studies";
 import { shadowStudy } from "@/lib/studies/shadows";
-import { formatLength, type Point } from "@/lib/optics";
+import { formatLength, parseLength, type Point, type Units } from "@/lib/optics";
+import { roundDefaultLength } from "@/lib/optics/round-length";
 import { Button } from "@/components/ui/button";
 import { drawUnits } from "./heat-draw";
 import { drawOccluders, drawShadows } from "./shadow-draw";
@@ -123,7 +124,7 @@ export function ShadowStudy(p: StudiesProps) {
             Add a performer
           </Button>
         )}
-        {p.canRun && <PanelForm productionId={p.productionId} onSaved={refresh} />}
+        {p.canRun && <PanelForm productionId={p.productionId} units={p.units} onSaved={refresh} />}
       </div>
       {message && (
         <p role="alert" className="text-sm text-danger">
@@ -195,14 +196,16 @@ export function ShadowStudy(p: StudiesProps) {
                 <span className="text-xs text-muted">
                   {fmt(m.x)} × {fmt(m.y)}
                 </span>
-                <MetreInput
+                <LengthInput
                   label="Height"
+                  units={p.units}
                   value={m.height}
                   disabled={!p.canRun}
                   onCommit={(v) => saveMark(m.id, { height: v })}
                 />
-                <MetreInput
+                <LengthInput
                   label="Shoulders"
+                  units={p.units}
                   value={m.shoulderWidth}
                   disabled={!p.canRun}
                   onCommit={(v) => saveMark(m.id, { shoulderWidth: v })}
@@ -272,41 +275,63 @@ export function ShadowStudy(p: StudiesProps) {
   );
 }
 
-function MetreInput({
+/** A length typed in the production's units (3.2, 320 cm, 5' 9"), saved in metres; a bad one is named, not sent. */
+function LengthInput({
   label,
   value,
+  units,
   disabled,
   onCommit,
 }: {
   label: string;
   value: number;
+  units: Units;
   disabled: boolean;
   onCommit: (v: number) => void;
 }) {
-  const [text, setText] = useState(String(value));
+  const [text, setText] = useState(formatLength(value, units));
+  const [error, setError] = useState<string | null>(null);
   return (
     <label className="flex items-center gap-1 text-xs text-muted">
       {label}
       <input
-        type="number"
-        step={0.05}
-        className="w-16 rounded border border-line bg-surface px-1 py-0.5 text-ink"
+        className="w-20 rounded border border-line bg-surface px-1 py-0.5 text-ink aria-invalid:border-danger"
         value={text}
         disabled={disabled}
+        aria-invalid={error ? true : undefined}
+        title={error ?? undefined}
         onChange={(e) => setText(e.target.value)}
         onBlur={() => {
-          const v = Number(text);
-          if (Number.isFinite(v) && v !== value) onCommit(v);
+          try {
+            const v = parseLength(text, units === "metric" ? "m" : "ft");
+            setError(null);
+            if (Math.abs(v - value) > 1e-9) onCommit(v);
+          } catch (err) {
+            setError(`${label}: ${(err as Error).message}`);
+          }
         }}
       />
-      m
+      {error ? (
+        <span role="alert" className="text-danger">
+          {error}
+        </span>
+      ) : null}
     </label>
   );
 }
 
-function PanelForm({ productionId, onSaved }: { productionId: number; onSaved: () => void }) {
+function PanelForm({ productionId, units, onSaved }: { productionId: number; units: Units; onSaved: () => void }) {
   const [open, setOpen] = useState(false);
-  const [f, setF] = useState({ name: "", x1: "-2", y1: "6", x2: "2", y2: "6", height: "3" });
+  // Starting figures in round values of the production's units (2 m → 6' 6"; 3 m → 10' 0").
+  const start = (m: number) => formatLength(roundDefaultLength(m, units), units);
+  const [f, setF] = useState(() => ({
+    name: "",
+    x1: start(-2),
+    y1: start(6),
+    x2: start(2),
+    y2: start(6),
+    height: start(3),
+  }));
   const [error, setError] = useState<string | null>(null);
   if (!open)
     return (
@@ -314,16 +339,24 @@ function PanelForm({ productionId, onSaved }: { productionId: number; onSaved: (
         Add a scenery panel
       </Button>
     );
+  const unitWord = units === "metric" ? "m" : "ft and in";
   const submit = async (e: React.FormEvent) => {
     e.preventDefault();
     try {
+      const length = (k: "x1" | "y1" | "x2" | "y2" | "height") => {
+        try {
+          return parseLength(f[k], units === "metric" ? "m" : "ft");
+        } catch (err) {
+          throw new RangeError(`${k === "height" ? "Height" : k}: ${(err as Error).message}`);
+        }
+      };
       const body = {
         name: f.name,
-        x1: Number(f.x1),
-        y1: Number(f.y1),
-        x2: Number(f.x2),
-        y2: Number(f.y2),
-        height: Number(f.height),
+        x1: length("x1"),
+        y1: length("y1"),
+        x2: length("x2"),
+        y2: length("y2"),
+        height: length("height"),
       };
       await apiFetch(`/api/productions/${productionId}/scenic-panels`, { method: "POST", json: body });
       setOpen(false);
@@ -333,7 +366,9 @@ function PanelForm({ productionId, onSaved }: { productionId: number; onSaved: (
       setError(
         err instanceof ApiError
           ? [err.message, ...Object.values(err.fieldErrors).flat()].join(" ")
-          : "Could not save the panel.",
+          : err instanceof RangeError
+            ? err.message
+            : "Could not save the panel.",
       );
     }
   };
@@ -341,9 +376,9 @@ function PanelForm({ productionId, onSaved }: { productionId: number; onSaved: (
     <form onSubmit={submit} className="flex flex-wrap items-end gap-2 text-xs text-muted">
       {(["name", "x1", "y1", "x2", "y2", "height"] as const).map((k) => (
         <label key={k} className="flex flex-col">
-          {k === "name" ? "Panel name" : k === "height" ? "Height (m)" : `${k} (m)`}
+          {k === "name" ? "Panel name" : k === "height" ? `Height (${unitWord})` : `${k} (${unitWord})`}
           <input
-            className={`mt-1 rounded border border-line bg-surface px-1 py-1 text-sm text-ink ${k === "name" ? "w-32" : "w-16"}`}
+            className={`mt-1 rounded border border-line bg-surface px-1 py-1 text-sm text-ink ${k === "name" ? "w-32" : "w-20"}`}
             value={f[k]}
             onChange={(e) => setF({ ...f, [k]: e.target.value })}
           />
