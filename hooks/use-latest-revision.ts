@@ -5,14 +5,13 @@
 import { useQuery } from "@tanstack/react-query";
 import { apiFetch } from "@/lib/http/api-client";
 import type { RevisionStamp } from "@/lib/revisions/types";
-import { productionKeys } from "./query-keys";
+import { latestRevisionKey } from "./latest-revision-key";
 
 export type LatestRevision = { latest: RevisionStamp | null; fixtureIds: number[]; cueIds: number[] };
 
 export function useLatestRevision(productionId: number, of: "fixtures" | "cues") {
-  const key = of === "fixtures" ? productionKeys.fixtures(productionId) : productionKeys.cues(productionId);
   const query = useQuery({
-    queryKey: [...key, "since-revision"],
+    queryKey: latestRevisionKey(productionId, of),
     queryFn: () => apiFetch<LatestRevision>(`/api/productions/${productionId}/revisions/latest`),
     staleTime: 15_000,
   });

@@ -222,3 +222,10 @@ export async function getRowVersions({
     Object.fromEntries(rows.map((r) => [r.id, r.version]));
   return { fixtures: toMap(await read("fixtures")), cues: toMap(await read("cues")) };
 }
+
+/** The answer of GET …/revisions/latest: the stamp and the fixtures and cues changed since it. */
+export async function getLatestRevisionMarks({ productionId }: { productionId: number }) {
+  const latest = await getLatestRevisionStamp({ productionId });
+  const changed = latest ? await getChangedSinceLatest({ productionId }) : null;
+  return { latest, fixtureIds: changed?.fixtureIds ?? [], cueIds: changed?.cueIds ?? [] };
+}

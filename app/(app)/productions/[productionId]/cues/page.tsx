@@ -6,6 +6,8 @@ import { makeQueryClient } from "@/lib/query/query-client";
 import { productionKeys } from "@/hooks/query-keys";
 import { getChannelLabels, getCueSheet, getCuesByProduction } from "@/lib/data/cues";
 import { requireProduction } from "@/lib/data/productions";
+import { getLatestRevisionMarks } from "@/lib/data/revisions";
+import { latestRevisionKey } from "@/hooks/latest-revision-key";
 import { CueSheetView } from "./_components/cue-sheet";
 import { CueWorkspace } from "./_components/cue-workspace";
 import { CueLevelsView } from "./_components/cue-levels-view";
@@ -36,6 +38,8 @@ export default async function CuesPage({
       queryKey: productionKeys.cueSheet(productionId),
       queryFn: () => getCueSheet({ productionId }),
     });
+    // The "changed since revision" bars and the sheet's revision stamp draw with the first paint.
+    queryClient.setQueryData(latestRevisionKey(productionId, "cues"), await getLatestRevisionMarks({ productionId }));
   } else {
     await queryClient.prefetchQuery({
       queryKey: productionKeys.cues(productionId),

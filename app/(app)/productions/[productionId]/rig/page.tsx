@@ -12,7 +12,10 @@ import { isRigViewId } from "@/lib/rig/views";
 import { RigWorkspace } from "./_components/rig-workspace";
 import { requireChecksReport } from "@/lib/data/checks";
 import { ChecksBadge } from "@/components/checks/checks-badge";
-import { getLatestRevisionStamp } from "@/lib/data/revisions";
+import { HydrationBoundary, dehydrate } from "@tanstack/react-query";
+import { getLatestRevisionMarks } from "@/lib/data/revisions";
+import { makeQueryClient } from "@/lib/query/query-client";
+import { latestRevisionKey } from "@/hooks/latest-revision-key";
 import { revisionStampText } from "@/components/revisions/revision-marks";
 
 export const metadata: Metadata = { title: "Rig" };
@@ -27,15 +30,18 @@ export default async function RigPage({
   searchParams: Promise<{ view?: string }>;
 }) {
   const { productionId, member } = await memberForPage((await params).productionId);
-  const [production, fixtures, types, positions, accessories, checks, revision] = await Promise.all([
+  const [production, fixtures, types, positions, accessories, checks, marks] = await Promise.all([
     requireProduction(productionId),
     getFixturesByProduction({ productionId }),
     getFixtureTypesByProduction({ productionId }),
     getPositionsByProduction({ productionId }),
     getAccessoriesByProduction({ productionId }),
     requireChecksReport({ productionId }),
-    getLatestRevisionStamp({ productionId }),
+    getLatestRevisionMarks({ productionId }),
   ]);
+  // The "changed since revision" bars draw with the first paint: the answer goes to the browser's cache.
+  const queryClient = makeQueryClient();
+  queryClient.setQueryData(latestRevisionKey(productionId, "fixtures"), marks);
   const editable = RIG_COLUMNS.filter(
     (c) =>
       c.importKey &&
@@ -52,24 +58,26 @@ export default async function RigPage({
         className="fixed right-4 bottom-4 z-30 shadow"
       />
       {/* The printed rig carries the revision it belongs to; the rows changed since it carry a side bar. */}
-      <p className="hidden px-4 text-xs print:block print:p-0">{revisionStampText(revision)}</p>
-      <RigWorkspace
-        productionId={productionId}
-        productionName={production.name}
-        units={production.displayUnits}
-        initialView={view && isRigViewId(view) ? view : "hang"}
-        initialFixtures={fixtures}
-        initialTypes={types}
-        initialAccessories={accessories}
-        positions={positions.map((p) => ({ id: p.id, name: p.name }))}
-        rights={{
-          editable,
-          typeFields: TYPE_FIELDS.filter((f) => canEditField(member, "fixtureType", f)),
-          canImport: can(member, "rig.import"),
-          canPlot: can(member, "plot.edit"),
-          canElectrics: can(member, "rig.editElectrics"),
-        }}
-      />
+      <p className="hidden px-4 text-xs print:block print:p-0">{revisionStampText(marks.latest)}</p>
+      <HydrationBoundary state={dehydrate(queryClient)}>
+        <RigWorkspace
+          productionId={productionId}
+          productionName={production.name}
+          units={production.displayUnits}
+          initialView={view && isRigViewId(view) ? view : "hang"}
+          initialFixtures={fixtures}
+          initialTypes={types}
+          initialAccessories={accessories}
+          positions={positions.map((p) => ({ id: p.id, name: p.name }))}
+          rights={{
+            editable,
+            typeFields: TYPE_FIELDS.filter((f) => canEditField(member, "fixtureType", f)),
+            canImport: can(member, "rig.import"),
+            canPlot: can(member, "plot.edit"),
+            canElectrics: can(member, "rig.editElectrics"),
+          }}
+        />
+      </HydrationBoundary>
     </>
   );
 }
