@@ -3,6 +3,7 @@
 import { clipPoolByCuts, ellipseToPolygon, type Ellipse, type PlanePool, type Point } from "@/lib/optics";
 import { symbolOutline, symbolPixels, symbolScreenPoint, labelsFit, type SymbolShape } from "@/lib/plot/symbol";
 import { planToScreen, type Bounds, type View } from "@/lib/plot/view";
+import { fillTextOnBacking } from "./label-backing";
 import type { PlotPalette } from "./palette";
 import type { Ctx } from "./draw-stage";
 import { diamondPath, planPath, strokeSegment } from "./plan-paths";
@@ -228,6 +229,6 @@ export function drawFocusPoints(
     ctx.globalAlpha = 0.85;
     ctx.fill();
     ctx.globalAlpha = 1;
-    if (labels) ctx.fillText(p.name, s.x + 10, s.y);
+    if (labels) fillTextOnBacking(ctx, p.name, s.x + 10, s.y, pal);
   }
 }

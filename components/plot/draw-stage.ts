@@ -5,6 +5,7 @@ import { gridLines, gridStep } from "@/lib/plot/grid";
 import type { StageOutline } from "@/lib/plot/stage-outline";
 import { planToScreen, visiblePlanBounds, type View } from "@/lib/plot/view";
 import type { PlotPalette } from "./palette";
+import { fillTextOnBacking } from "./label-backing";
 import { planPath } from "./plan-paths";
 
 export type Ctx = CanvasRenderingContext2D;
@@ -129,7 +130,7 @@ export function drawAreas(
       ctx.font = "italic 12px 'IBM Plex Sans', system-ui, sans-serif";
       ctx.textAlign = "center";
       ctx.textBaseline = "middle";
-      ctx.fillText(z.name, s.x, s.y);
+      fillTextOnBacking(ctx, z.name, s.x, s.y, pal);
     }
   }
 }
@@ -168,7 +169,7 @@ export function drawLandmarks(
     if (labels) {
       ctx.textAlign = "left";
       ctx.textBaseline = "bottom";
-      ctx.fillText(l.name, b.x + 4, b.y - 2);
+      fillTextOnBacking(ctx, l.name, b.x + 4, b.y - 2, pal);
     }
   }
 }

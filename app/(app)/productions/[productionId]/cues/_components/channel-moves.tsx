@@ -4,6 +4,7 @@ import { useMemo } from "react";
 import { classifyMoves, type TrackedShow } from "@/lib/cues";
 import type { ChannelLabel } from "@/lib/dto/cue";
 import { Card } from "@/components/ui/card";
+import { TapHint } from "@/components/ui/tap-hint";
 
 function Group({
   title,
@@ -24,12 +25,16 @@ function Group({
       {items.length ? (
         <ul className="mt-1 flex flex-wrap gap-1 text-xs">
           {items.slice(0, 60).map((m) => (
-            <li
-              key={m.channel}
-              title={describe(m.channel)}
-              className="rounded border border-line px-1.5 py-0.5 tabular-nums"
-            >
-              {m.channel}: {Math.round(m.from)}→{Math.round(m.to)}
+            <li key={m.channel} className="rounded border border-line px-1.5 py-0.5 tabular-nums">
+              {describe(m.channel) ? (
+                <TapHint hint={describe(m.channel)}>
+                  {m.channel}: {Math.round(m.from)}→{Math.round(m.to)}
+                </TapHint>
+              ) : (
+                <>
+                  {m.channel}: {Math.round(m.from)}→{Math.round(m.to)}
+                </>
+              )}
             </li>
           ))}
           {items.length > 60 ? <li className="text-muted">+{items.length - 60} more</li> : null}

@@ -17,6 +17,7 @@ import { useVirtualRows } from "./use-virtual-rows";
 import { useSavedTableView } from "./use-saved-table-view";
 import { NotesButton } from "@/components/notes/notes-button";
 import { HistoryLink } from "@/components/revisions/history-link";
+import { TapHint } from "@/components/ui/tap-hint";
 
 const ROW = 30; // px, fixed so long lists render only what is in view
 
@@ -76,11 +77,13 @@ const columns = [
   col.accessor("callNote", {
     header: "Call note",
     sortUndefined: "last",
-    cell: (c) => (
-      <span className="block max-w-48 truncate" title={c.getValue() ?? ""}>
-        {c.getValue()}
-      </span>
-    ),
+    cell: (c) =>
+      // The cell shows the note's start; the whole note opens with a tap or Enter (no hover on a tablet).
+      c.getValue() ? (
+        <TapHint hint={c.getValue()!} className="block max-w-48 truncate">
+          {c.getValue()}
+        </TapHint>
+      ) : null,
   }),
 ];
 const HIDDEN_AT_FIRST: VisibilityState = { callNote: false, block: false };
@@ -162,6 +165,9 @@ export function CueListTable({
             Back to cue order
           </button>
         ) : null}
+        <span id="cue-sort-hint" className="text-xs text-muted">
+          Tap a column's name to sort, again to reverse; Shift adds a second sort.
+        </span>
         <span className="text-xs text-muted" role="status">
           {rows.length === cues.length ? `${cues.length} cues` : `${rows.length} of ${cues.length} cues`}
         </span>
@@ -189,7 +195,7 @@ export function CueListTable({
                         type="button"
                         onClick={h.column.getToggleSortingHandler()}
                         className="inline-flex items-center gap-1 uppercase hover:text-accent"
-                        title="Sort; shift-click for a second sort"
+                        aria-describedby="cue-sort-hint"
                       >
                         {flexRender(h.column.columnDef.header, h.getContext())}
                         <span aria-hidden>{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : ""}</span>

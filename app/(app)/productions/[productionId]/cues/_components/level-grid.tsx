@@ -3,6 +3,7 @@
 import { useEffect, useMemo, useRef, useState } from "react";
 import { formatCueNumber, type MoveKind, type TrackedShow } from "@/lib/cues";
 import type { ChannelLabel, CueDto } from "@/lib/dto/cue";
+import { TapHint } from "@/components/ui/tap-hint";
 import { useVirtualRows } from "./use-virtual-rows";
 
 const ROW = 24; // px; every row the same height so the grid can render only the rows in view
@@ -163,6 +164,7 @@ export function LevelGrid({ show, cues, channels, selectedIndex, onSelect, focus
             {show.channels.slice(rows.first, rows.last).map((ch, k) => {
               const col = rows.first + k;
               const info = label.get(ch);
+              const purposes = [...(info?.purposes ?? []), ...(info?.areas ?? [])].join(" · ");
               return (
                 <tr
                   key={ch}
@@ -171,12 +173,14 @@ export function LevelGrid({ show, cues, channels, selectedIndex, onSelect, focus
                   className="border-t border-line/60"
                   data-testid={`grid-ch-${ch}`}
                 >
-                  <th
-                    scope="row"
-                    className="sticky left-0 bg-surface px-2 text-left font-medium"
-                    title={[...(info?.purposes ?? []), ...(info?.areas ?? [])].join(" · ")}
-                  >
-                    {ch}
+                  <th scope="row" className="sticky left-0 bg-surface px-2 text-left font-medium">
+                    {purposes ? (
+                      <TapHint hint={purposes} compact testId={`grid-ch-hint-${ch}`}>
+                        {ch}
+                      </TapHint>
+                    ) : (
+                      ch
+                    )}
                   </th>
                   {visible.map(({ cue, index }) => {
                     const m = cellAt(show, index, col);
