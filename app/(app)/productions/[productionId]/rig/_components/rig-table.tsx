@@ -20,12 +20,13 @@ import type { FixtureDto } from "@/lib/dto/fixture";
 import { RIG_COLUMNS, headerWithUnit, type Units } from "@/lib/rig/columns";
 import { compareUnitNumbers } from "@/lib/rig/unit-number";
 import { NotesButton } from "@/components/notes/notes-button";
+import { UnitCheckCell } from "@/components/checks/unit-check-badge";
 import { EditableCell, type Choice } from "./editable-cell";
 import { EmptyOrInherited } from "./inherited-value";
 import { showValue } from "./cell-value";
+import { HistoryLink } from "@/components/revisions/history-link";
 import { useLatestRevision } from "@/hooks/use-latest-revision";
 import { CHANGED_EDGE, ChangedWords } from "@/components/revisions/revision-marks";
-import { HistoryLink } from "@/components/revisions/history-link";
 
 export type TableState = {
   sorting: SortingState;
@@ -130,6 +131,18 @@ export function RigTable({
             id={row.original.id}
             name={`unit ${row.original.unitNumber} on ${row.original.positionName}`}
           />
+        </span>
+      ),
+    });
+    // What the checks flag on each unit, after its notes (one request for the whole table).
+    defs.splice(afterUnit + 1, 0, {
+      id: "checks",
+      header: "Checks",
+      enableSorting: false,
+      enableHiding: false,
+      cell: ({ row }) => (
+        <span className="flex justify-center px-1">
+          <UnitCheckCell productionId={productionId} fixtureId={row.original.id} />
         </span>
       ),
     });
