@@ -75,7 +75,7 @@ export function FocusChartCard({
   return (
     <article className="fc-card" data-testid="focus-chart" data-fixture-id={chart.id}>
       <header className="fc-head">
-        <span className="fc-title">{`${chart.positionName} · unit ${chart.unitNumber}`}</span>
+        <h2 className="fc-title">{`${chart.positionName} · unit ${chart.unitNumber}`}</h2>
         <span className="fc-chan">{`ch ${chart.channel ?? "—"}`}</span>
         <span className={chart.focused ? "fc-status fc-done" : "fc-status"}>{chart.focusedLine}</span>
       </header>
@@ -97,7 +97,7 @@ export function FocusChartCard({
         </dl>
       </div>
       <section className="fc-cuts">
-        <h4>Cuts</h4>
+        <h3>Cuts</h3>
         <Cuts chart={chart} />
       </section>
       <div className="fc-foot">

@@ -10,7 +10,7 @@ export const CHART_CSS = `
   background:var(--fc-surface);color:var(--fc-ink);font-family:"IBM Plex Sans",system-ui,sans-serif;line-height:1.25;overflow:hidden;
   break-inside:avoid;page-break-inside:avoid}
 .fc-head{display:flex;flex-wrap:wrap;align-items:baseline;gap:.3em .9em;border-bottom:1px solid var(--fc-line);padding-bottom:.3em}
-.fc-title{font-weight:600;font-size:1.15em}
+.fc-title{margin:0;font-weight:600;font-size:1.15em}
 .fc-chan{font-weight:600;font-size:1.15em;color:var(--fc-accent)}
 .fc-status{margin-left:auto;color:var(--fc-muted);font-size:.9em}
 .fc-status.fc-done{color:var(--fc-ok);font-weight:500}
@@ -23,7 +23,7 @@ export const CHART_CSS = `
 .fc-row{display:flex;gap:.4em;break-inside:avoid;padding:.08em 0}
 .fc-row dt{flex:0 0 auto;color:var(--fc-muted);min-width:5.6em}
 .fc-row dd{margin:0;min-width:0;overflow-wrap:anywhere}
-.fc-cuts h4{display:inline;margin:0 .4em 0 0;font-size:1em;color:var(--fc-muted);font-weight:500}
+.fc-cuts h3{display:inline;margin:0 .4em 0 0;font-size:1em;color:var(--fc-muted);font-weight:500}
 .fc-cutlist{display:inline;margin:0;padding:0;list-style:none}
 .fc-cutlist li{display:inline}
 .fc-cutlist li+li::before{content:" · "}

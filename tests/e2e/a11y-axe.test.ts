@@ -52,6 +52,12 @@ async function audit(page: Page): Promise<AxeViolation[]> {
   });
 }
 
+/** The rule ids behind the moderate and minor counts, so the summary says what is left to fix. */
+function lesser(violations: AxeViolation[]): string {
+  const ids = violations.filter((v) => v.impact === "moderate" || v.impact === "minor").map((v) => v.id);
+  return ids.length ? ` (${[...new Set(ids)].join(", ")})` : "";
+}
+
 function countsByImpact(violations: AxeViolation[]) {
   const counts: Record<string, number> = { critical: 0, serious: 0, moderate: 0, minor: 0 };
   for (const v of violations) counts[v.impact ?? "minor"] += v.nodes.length;
@@ -86,7 +92,7 @@ for (const viewportName of Object.keys(VIEWPORTS) as ViewportName[]) {
           await page.goto(target.path(productionId), { timeout: 120_000 });
           const violations = await audit(page);
           const counts = countsByImpact(violations);
-          const line = `  ${viewportName.padEnd(7)} ${dark ? "dark " : "light"} ${target.name.padEnd(12)} critical ${counts.critical}, serious ${counts.serious}, moderate ${counts.moderate}, minor ${counts.minor}`;
+          const line = `  ${viewportName.padEnd(7)} ${dark ? "dark " : "light"} ${target.name.padEnd(12)} critical ${counts.critical}, serious ${counts.serious}, moderate ${counts.moderate}, minor ${counts.minor}${lesser(violations)}`;
           summary.push(line);
           console.log(line);
           const blocking = violations

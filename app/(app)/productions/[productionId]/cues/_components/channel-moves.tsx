@@ -19,9 +19,9 @@ function Group({
 }) {
   return (
     <div data-testid={testId}>
-      <h4 className="text-xs font-semibold uppercase tracking-wide text-muted">
+      <h3 className="text-xs font-semibold uppercase tracking-wide text-muted">
         {title} ({items.length})
-      </h4>
+      </h3>
       {items.length ? (
         <ul className="mt-1 flex flex-wrap gap-1 text-xs">
           {items.slice(0, 60).map((m) => (

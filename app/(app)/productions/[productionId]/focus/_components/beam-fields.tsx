@@ -86,7 +86,7 @@ export function BeamFields({ fixture, data }: { fixture: FixtureDto; data: Focus
       data-testid="beam-fields"
     >
       <div className="flex flex-col gap-1">
-        <h3 className="text-sm font-medium text-ink">Gobo rotation</h3>
+        <h2 className="text-sm font-medium text-ink">Gobo rotation</h2>
         {data.rights.designerNotes ? (
           <div className="flex flex-wrap items-end gap-2">
             <label className="flex flex-col text-xs text-muted">
@@ -125,7 +125,7 @@ export function BeamFields({ fixture, data }: { fixture: FixtureDto; data: Focus
         </p>
       </div>
       <div className="flex flex-col gap-1">
-        <h3 className="text-sm font-medium text-ink">Barn doors as focused</h3>
+        <h2 className="text-sm font-medium text-ink">Barn doors as focused</h2>
         {data.rights.focus ? (
           <>
             <p className="text-xs text-muted">

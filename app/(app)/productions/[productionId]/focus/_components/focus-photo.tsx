@@ -83,7 +83,7 @@ export function FocusPhoto({ fixture, chart, data }: { fixture: FixtureDto; char
       aria-label="Focus photo"
       data-testid="focus-photo"
     >
-      <h3 className="text-sm font-medium text-ink">Focus photo</h3>
+      <h2 className="text-sm font-medium text-ink">Focus photo</h2>
       {chart.photo ? (
         <a href={chart.photo.href} target="_blank" rel="noopener" className="self-start">
           {/* eslint-disable-next-line @next/next/no-img-element -- our own route serves a small re-encoded copy */}

@@ -1,6 +1,6 @@
 "use client";
 
-import { Fragment, type KeyboardEvent, useMemo, useState } from "react";
+import { Fragment, type KeyboardEvent, useId, useMemo, useState } from "react";
 import {
   flexRender,
   getCoreRowModel,
@@ -263,6 +263,7 @@ export function RigTable({
       </tr>
     );
   };
+  const sortHintId = useId();
   return (
     <div className="overflow-x-auto rounded-lg border border-line bg-surface print:overflow-visible print:border-0">
       {/* biome-ignore lint/a11y/noNoninteractiveElementInteractions: arrow keys move between the cells' own controls (a grid's keys) */}
@@ -289,7 +290,7 @@ export function RigTable({
                         type="button"
                         className="inline-flex min-h-8 items-center gap-1 hover:text-accent pointer-coarse:min-h-11 pointer-coarse:min-w-11"
                         onClick={h.column.getToggleSortingHandler()}
-                        title="Click to sort; shift-click to add a second sort"
+                        aria-describedby={sortHintId}
                       >
                         {flexRender(h.column.columnDef.header, h.getContext())}
                         <span aria-hidden className="print:hidden">
@@ -380,6 +381,10 @@ export function RigTable({
           )}
         </tbody>
       </table>
+      {/* Written out rather than a tooltip: a tablet has no hover. */}
+      <p id={sortHintId} className="px-2 py-1 text-xs text-muted print:hidden">
+        Tap a column's name to sort, again to reverse; Shift adds a second sort.
+      </p>
       {table.getRowModel().rows.length === 0 ? <p className="p-4 text-sm text-muted">No fixtures match.</p> : null}
       {/* Always in the page, so the count is read out as the filter is typed. */}
       <p className="sr-only" aria-live="polite" data-testid="rig-filter-count">
