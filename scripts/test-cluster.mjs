@@ -4,7 +4,6 @@
 // on two nodes, a node killed mid-load) and then the integration suite's write paths once through each
 // app server. Ends with `N passed, N failed`. Not part of `npm test`: starting three nodes takes a
 // minute or two. docs/scaling.md has the results of a run.
-import { spawn } from "node:child_process";
 import { randomBytes } from "node:crypto";
 import { mkdirSync, mkdtempSync, rmSync } from "node:fs";
 import os from "node:os";
@@ -12,7 +11,9 @@ import path from "node:path";
 import { startGaleraCluster } from "./lib/galera.mjs";
 import { startMailStandIn } from "./lib/mail-stand-in.mjs";
 import { ensureNodeModules } from "./lib/node-modules.mjs";
-import { ROOT, bin, buildIfStale, freePort, migrate, seedWhenEmpty, waitForHttp } from "./lib/project.mjs";
+import { ROOT, buildIfStale, freePort, migrate, seedWhenEmpty } from "./lib/project.mjs";
+import { startAppServer } from "./lib/app-server.mjs";
+import { cleanupList } from "./lib/cleanups.mjs";
 import { ensurePackages, log } from "./lib/system.mjs";
 import { newTotals, runVitestSuite } from "./lib/vitest-run.mjs";
 
@@ -29,50 +30,13 @@ const WRITE_PATH_FILES = [
 const RESULTS = path.resolve(ROOT, process.env.TEST_RESULTS_DIR ?? "test-results/cluster");
 const DIST_DIR = process.env.TEST_DIST_DIR ?? ".next-test";
 const totals = newTotals();
-const cleanups = [];
-
-async function cleanup() {
-  for (const fn of cleanups.reverse()) {
-    try {
-      await fn();
-    } catch (err) {
-      log(`cleanup: ${err.message}`);
-    }
-  }
-  cleanups.length = 0;
-}
-for (const sig of ["SIGINT", "SIGTERM"]) {
-  process.on(sig, async () => {
-    await cleanup();
-    process.exit(130);
-  });
-}
+const cleanups = cleanupList();
 
 const freePorts = async (n) => {
   const ports = new Set();
   while (ports.size < n) ports.add(await freePort());
   return [...ports];
 };
-
-/** A production server on `port`; resolves when it answers its health check. */
-async function startAppServer(port, env) {
-  const server = spawn(process.execPath, [bin("next"), "start", "-p", String(port), "-H", "127.0.0.1"], {
-    cwd: ROOT,
-    stdio: ["ignore", "ignore", "inherit"],
-    env: { ...process.env, ...env, NEXT_DIST_DIR: DIST_DIR, NODE_ENV: "production" },
-  });
-  cleanups.push(
-    () =>
-      new Promise((resolve) => {
-        if (server.exitCode !== null) return resolve();
-        server.once("exit", resolve);
-        server.kill("SIGTERM");
-      }),
-  );
-  const url = `http://127.0.0.1:${port}`;
-  await waitForHttp(`${url}/api/health`, 120_000);
-  return url;
-}
 
 async function main() {
   mkdirSync(RESULTS, { recursive: true });
@@ -113,10 +77,9 @@ async function main() {
   await seedWhenEmpty(viaNode1);
 
   buildIfStale(DIST_DIR, viaNode1);
-  const [portA, portB] = await freePorts(2);
   log("Starting app server A (prefers node 1) and app server B (prefers node 2) …");
-  const appA = await startAppServer(portA, viaNode1);
-  const appB = await startAppServer(portB, viaNode2);
+  const appA = await startAppServer({ distDir: DIST_DIR, env: viaNode1, cleanups });
+  const appB = await startAppServer({ distDir: DIST_DIR, env: viaNode2, cleanups });
 
   // The cluster suite stops and restarts nodes itself: it gets their folders, ports and the app user.
   const clusterEnv = {
@@ -161,7 +124,7 @@ try {
   log(`The cluster run stopped early: ${err.stack ?? err.message}`);
   totals.failed += 1;
 } finally {
-  await cleanup();
+  await cleanups.run();
   const skipped = totals.skipped ? `, ${totals.skipped} skipped` : "";
   process.stdout.write(`\n${totals.passed} passed, ${totals.failed} failed${skipped}\n`);
   exitCode = totals.failed === 0 && totals.passed > 0 ? 0 : 1;

@@ -2,42 +2,28 @@
 // folder, removed afterwards), migrates and seeds it, runs the unit suite, builds the app, starts it,
 // runs the integration suite (through the route handlers over HTTP) and the end-to-end suite in
 // Debian's Chromium, and ends with one plain line: `N passed, N failed`.
-import { spawn, spawnSync } from "node:child_process";
+import { spawnSync } from "node:child_process";
 import { randomBytes } from "node:crypto";
-import { existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync } from "node:fs";
+import { mkdirSync, mkdtempSync, readdirSync, rmSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
+import { cleanupList } from "./lib/cleanups.mjs";
 import { ensurePackages, log } from "./lib/system.mjs";
 import { ensureNodeModules } from "./lib/node-modules.mjs";
 import { startMariaDb, stopRunningMariaDb } from "./lib/mariadb.mjs";
-import { ROOT, bin, buildIfStale, freePort, migrate, seedWhenEmpty, waitForHttp } from "./lib/project.mjs";
+import { ROOT, buildIfStale, freePort, migrate, seedWhenEmpty } from "./lib/project.mjs";
 import { startMailStandIn } from "./lib/mail-stand-in.mjs";
 import { startS3StandIn } from "./lib/s3-stand-in.mjs";
+import { newTotals, runVitestSuite } from "./lib/vitest-run.mjs";
+import { startAppServer } from "./lib/app-server.mjs";
 
 // `npm test -- cues plot` runs only test files whose path contains one of the words (still all three
 // suites). TEST_DIST_DIR and TEST_RESULTS_DIR let several runs share one checkout without colliding.
 const FILTERS = process.argv.slice(2).filter((a) => !a.startsWith("-"));
 const RESULTS = path.resolve(ROOT, process.env.TEST_RESULTS_DIR ?? "test-results");
 const DIST_DIR = process.env.TEST_DIST_DIR ?? ".next-test";
-const cleanups = [];
-const totals = { passed: 0, failed: 0, skipped: 0 };
-
-async function cleanup() {
-  for (const fn of cleanups.reverse()) {
-    try {
-      await fn();
-    } catch (err) {
-      log(`cleanup: ${err.message}`);
-    }
-  }
-  cleanups.length = 0;
-}
-for (const sig of ["SIGINT", "SIGTERM"]) {
-  process.on(sig, async () => {
-    await cleanup();
-    process.exit(130);
-  });
-}
+const cleanups = cleanupList();
+const totals = newTotals();
 
 /** Test files under a folder, narrowed to the FILTERS words when given. */
 function testFiles(dir) {
@@ -48,44 +34,7 @@ function testFiles(dir) {
 }
 
 function runVitest(name, configFile, dir, env) {
-  const files = testFiles(dir);
-  if (files.length === 0) return Promise.resolve(0);
-  const args = ["--config", configFile, ...files];
-  const report = path.join(RESULTS, `${name}.json`);
-  rmSync(report, { force: true });
-  return new Promise((resolve) => {
-    const child = spawn(
-      process.execPath,
-      [bin("vitest"), "run", "--reporter=default", "--reporter=json", `--outputFile.json=${report}`, ...args],
-      {
-        cwd: ROOT,
-        stdio: "inherit",
-        env: { ...process.env, ...env, NO_COLOR: "1", FORCE_COLOR: "0" },
-      },
-    );
-    child.on("exit", (code) => {
-      count(name, report, code);
-      resolve(code);
-    });
-  });
-}
-
-/** Adds a suite's JSON report to the totals; a suite that crashed without a report counts as one failure. */
-function count(name, report, code) {
-  if (!existsSync(report)) {
-    log(`${name}: no report written (exit ${code}); counted as 1 failure.`);
-    totals.failed += 1;
-    return;
-  }
-  const r = JSON.parse(readFileSync(report, "utf8"));
-  // A file that fails to load has no test results of its own: count it as a failure too.
-  const brokenFiles = r.testResults.filter(
-    (f) => f.status === "failed" && f.assertionResults.every((a) => a.status !== "failed"),
-  ).length;
-  totals.passed += r.numPassedTests;
-  totals.failed += r.numFailedTests + brokenFiles;
-  totals.skipped += r.numPendingTests + r.numTodoTests;
-  log(`${name}: ${r.numPassedTests} passed, ${r.numFailedTests + brokenFiles} failed`);
+  return runVitestSuite({ name, configFile, files: testFiles(dir), env, resultsDir: RESULTS, totals });
 }
 
 /** Biome (format + lint, one config in biome.json) over the whole tree counts as one test; it runs first. */
@@ -125,25 +74,8 @@ function typecheck() {
 }
 
 /** `next start` of the test build on a free loopback port; resolves with its address once it answers. */
-async function startAppServer(env) {
-  const port = await freePort();
-  const baseUrl = `http://127.0.0.1:${port}`;
-  const server = spawn(process.execPath, [bin("next"), "start", "-p", String(port), "-H", "127.0.0.1"], {
-    cwd: ROOT,
-    stdio: ["ignore", "ignore", "inherit"],
-    env: { ...process.env, ...env, NEXT_DIST_DIR: DIST_DIR, NODE_ENV: "production", TEST_RESULTS_DIR: RESULTS },
-  });
-  cleanups.push(
-    () =>
-      new Promise((resolve) => {
-        if (server.exitCode !== null) return resolve();
-        server.once("exit", resolve);
-        server.kill("SIGTERM");
-      }),
-  );
-  await waitForHttp(`${baseUrl}/api/health`);
-  return baseUrl;
-}
+const startTestServer = (env) =>
+  startAppServer({ distDir: DIST_DIR, env: { ...env, TEST_RESULTS_DIR: RESULTS }, cleanups });
 
 async function main() {
   mkdirSync(RESULTS, { recursive: true });
@@ -191,7 +123,7 @@ async function main() {
     const second = testFiles("tests/integration").some(
       (f) => f === "tests/integration" || f.endsWith("two-servers.test.ts"),
     );
-    const [baseUrl, secondUrl] = await Promise.all([startAppServer(env), second ? startAppServer(env) : null]);
+    const [baseUrl, secondUrl] = await Promise.all([startTestServer(env), second ? startTestServer(env) : null]);
     serverUp = true;
     Object.assign(env, { APP_URL: baseUrl }, secondUrl ? { APP_URL_SECOND: secondUrl } : {});
   } catch (err) {
@@ -212,7 +144,7 @@ try {
   log(`The test run stopped early: ${err.stack ?? err.message}`);
   totals.failed += 1;
 } finally {
-  await cleanup();
+  await cleanups.run();
   const skipped = totals.skipped ? `, ${totals.skipped} skipped` : "";
   process.stdout.write(`\n${totals.passed} passed, ${totals.failed} failed${skipped}\n`);
   exitCode = totals.failed === 0 && totals.passed > 0 ? 0 : 1;
