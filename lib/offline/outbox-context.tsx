@@ -7,12 +7,14 @@ import { useQueryClient } from "@tanstack/react-query";
 import { createContext, type ReactNode, useCallback, useContext, useEffect, useMemo, useRef, useState } from "react";
 import { productionKeys } from "@/hooks/query-keys";
 import { apiFetch } from "@/lib/http/api-client";
-import type { FixtureDto } from "@/lib/dto/fixture";
+import type { FixtureDto, FixtureRecord } from "@/lib/dto/fixture";
 import { classifyFailure, type FocusPatch, mergeEdit, type OutboxEntry, resendAgainst } from "./outbox";
 import { deleteEntry, outboxAvailable, putEntry, readOutbox } from "./store";
 
-/** How long to wait before trying again when the browser believes it is online but sends keep failing. */
+/** How long to wait before trying again while edits wait (whatever the browser says about the network). */
 const RETRY_MS = 15_000;
+/** The online and offline events are not fired everywhere (some tablets, some emulations): look as well. */
+const LOOK_MS = 3_000;
 
 export type SaveOutcome = { kind: "saved"; fixture: FixtureDto } | { kind: "queued" } | { kind: "error"; error: Error };
 
@@ -35,10 +37,14 @@ export function useOutbox(): Outbox {
   return outbox;
 }
 
+/** A send that has not answered by then is given up and tried again (venue wifi can hold a request forever). */
+const SEND_TIMEOUT_MS = 20_000;
+
 const sendPatch = (productionId: number, fixtureId: number, version: number, patch: FocusPatch) =>
   apiFetch<{ fixture: FixtureDto }>(`/api/productions/${productionId}/fixtures/${fixtureId}`, {
     method: "PATCH",
     json: { version, ...patch },
+    signal: AbortSignal.timeout(SEND_TIMEOUT_MS),
   }).then((r) => r.fixture);
 
 function useOnline(): boolean {
@@ -46,9 +52,11 @@ function useOnline(): boolean {
   useEffect(() => {
     const update = () => setOnline(navigator.onLine);
     update();
+    const look = window.setInterval(update, LOOK_MS);
     window.addEventListener("online", update);
     window.addEventListener("offline", update);
     return () => {
+      window.clearInterval(look);
       window.removeEventListener("online", update);
       window.removeEventListener("offline", update);
     };
@@ -99,7 +107,9 @@ export function OutboxProvider({ productionId, children }: { productionId: numbe
         } catch (err) {
           const kind = classifyFailure(err);
           if (kind === "retry") break;
-          const current = (err as { current?: FixtureDto }).current;
+          // A 409's row is the stored record only (no position name, no worked-out beam): it serves the
+          // conflict's "theirs" and its version; the screen refetches the full rows.
+          const current = (err as { current?: FixtureRecord }).current;
           await serial(() =>
             putEntry(
               kind === "conflict"
@@ -107,7 +117,7 @@ export function OutboxProvider({ productionId, children }: { productionId: numbe
                 : { ...entry, state: "refused", message: (err as Error).message },
             ),
           );
-          if (current) takeRow(current);
+          if (current) void qc.invalidateQueries({ queryKey: productionKeys.fixtures(productionId) });
         }
         await reload();
       }
@@ -115,7 +125,7 @@ export function OutboxProvider({ productionId, children }: { productionId: numbe
       flushing.current = false;
       await reload();
     }
-  }, [productionId, reload, serial, takeRow]);
+  }, [productionId, qc, reload, serial, takeRow]);
 
   const queue = useCallback(
     (fixture: FixtureDto, patch: FocusPatch) =>
@@ -161,13 +171,11 @@ export function OutboxProvider({ productionId, children }: { productionId: numbe
 
   const keepTheirs = useCallback(
     async (fixtureId: number) => {
-      const entry = entries.find((e) => e.fixtureId === fixtureId);
       await serial(() => deleteEntry(productionId, fixtureId));
-      if (entry?.theirs) takeRow(entry.theirs);
       await reload();
       void qc.invalidateQueries({ queryKey: productionKeys.fixtures(productionId) });
     },
-    [entries, productionId, qc, reload, serial, takeRow],
+    [productionId, qc, reload, serial],
   );
 
   const sendMineAgain = useCallback(
@@ -192,10 +200,11 @@ export function OutboxProvider({ productionId, children }: { productionId: numbe
   }, [online, flush, qc, productionId]);
   const hasWaiting = entries.some((e) => e.state === "waiting" || e.state === "sending");
   useEffect(() => {
-    if (!hasWaiting || !online) return;
+    // Tried even when the browser says offline: its guess can be wrong, and a failed try only waits again.
+    if (!hasWaiting) return;
     const timer = window.setInterval(() => void flush(), RETRY_MS);
     return () => window.clearInterval(timer);
-  }, [hasWaiting, online, flush]);
+  }, [hasWaiting, flush]);
 
   const value = useMemo<Outbox>(
     () => ({

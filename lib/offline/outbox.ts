@@ -1,7 +1,7 @@
 // The focus call's outbox: edits made on deck wait here (one entry per unit) until they can be sent.
 // Pure rules only (merging, what the screen shows, the words for a conflict); storage and sending live in
 // store.ts and outbox-context.tsx.
-import type { FixtureDto } from "@/lib/dto/fixture";
+import type { FixtureDto, FixtureRecord } from "@/lib/dto/fixture";
 import type { FocusPatch } from "@/hooks/use-focus";
 
 export type { FocusPatch };
@@ -20,8 +20,8 @@ export type OutboxEntry = {
   patch: FocusPatch;
   queuedAt: string;
   state: OutboxState;
-  /** The server's current row when it answered 409. */
-  theirs?: FixtureDto;
+  /** The server's current row (the stored record) when it answered 409. */
+  theirs?: FixtureRecord;
   /** The server's words when it refused the edit outright (403, 400, 404). */
   message?: string;
 };
@@ -68,7 +68,7 @@ export function withPending(f: FixtureDto, entry: OutboxEntry | undefined): Fixt
 }
 
 /** "Mine again": the same edits, now made against the row the other person left. */
-export function resendAgainst(entry: OutboxEntry, theirs: FixtureDto): OutboxEntry {
+export function resendAgainst(entry: OutboxEntry, theirs: Pick<FixtureRecord, "version">): OutboxEntry {
   return { ...entry, baseVersion: theirs.version, state: "waiting", theirs: undefined, message: undefined };
 }
 

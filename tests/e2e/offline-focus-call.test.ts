@@ -24,7 +24,7 @@ async function productionWithPipe(api: APIRequestContext) {
   const type = (
     await post(`/api/productions/${id}/fixture-types`, {
       name: "Bridge profile",
-      family: "ellipsoidal",
+      family: "profile",
       coneMinDeg: 19,
       coneMaxDeg: 36,
       peakCandela: 30000,
@@ -66,7 +66,7 @@ async function rows(api: APIRequestContext): Promise<Map<string, Row>> {
 const pickUnit = (page: Page, n: number) =>
   page
     .getByTestId("unit-strip")
-    .getByRole("button", { name: new RegExp(`^Unit ${n},`) })
+    .getByRole("button", { name: new RegExp(`^Unit ${n}\\b`) })
     .click();
 
 beforeAll(async () => {
@@ -75,6 +75,18 @@ beforeAll(async () => {
     signedIn("designer", { width: 1280, height: 800 }),
   ]);
   ({ id: productionId, positionId } = await productionWithPipe(booth.context.request));
+  // What the deck sends, in the test's log: shows which write went when, should a check fail.
+  deck.page.on("response", (r) => {
+    if (r.request().method() === "PATCH") console.log(`deck PATCH ${new URL(r.url()).pathname} → ${r.status()}`);
+  });
+  deck.page.on("requestfailed", (r) => {
+    if (r.method() === "PATCH")
+      console.log(`deck PATCH ${new URL(r.url()).pathname} failed: ${r.failure()?.errorText}`);
+  });
+  deck.page.on("console", (m) => {
+    if (m.type() === "error" && !m.text().includes("ERR_INTERNET_DISCONNECTED"))
+      console.log(`deck console: ${m.text()}`);
+  });
 }, 120_000);
 afterAll(async () => {
   await Promise.all([deck?.close(), booth?.close()]);
@@ -93,7 +105,7 @@ describe("the focus call offline", () => {
     await context.setOffline(true);
     await page.reload();
     await page.getByTestId("mark-focused").waitFor();
-    await expect(page.getByTestId("outbox-status").textContent()).resolves.toMatch(/^Offline/);
+    await expect.poll(() => page.getByTestId("outbox-status").textContent()).toMatch(/^Offline/);
 
     // Unit 1: marked focused and on to the next unit.
     await pickUnit(page, 1);
@@ -107,9 +119,13 @@ describe("the focus call offline", () => {
     await page.getByTestId("mark-focused-stay").click();
 
     await expect.poll(() => page.getByTestId("strip-waiting").count()).toBe(2);
+    await expect
+      .poll(() => page.getByTestId("outbox-waiting").textContent())
+      .toMatch(/as-focused notes, marked focused$/);
     const waiting = await page.getByTestId("outbox-waiting").textContent();
     expect(waiting).toContain("unit 1 on FOH Bridge: Marked focused");
-    expect(waiting).toContain("unit 2 on FOH Bridge: Barn door top, as-focused notes, marked focused");
+    // The barn doors go as one edit of all four leaves (the empty ones as empty).
+    expect(waiting).toMatch(/unit 2 on FOH Bridge: Barn door top, .*as-focused notes, marked focused/);
     await expect(page.getByTestId("call-progress").textContent()).resolves.toBe("2 of 4 focused");
     await screenshot(page, "offline-focus-call");
 
@@ -152,7 +168,10 @@ describe("the focus call offline", () => {
 
     await context.setOffline(false);
     const card = page.getByTestId(`outbox-conflict-${three.id}`);
-    await card.waitFor({ timeout: 30_000 });
+    await card.waitFor({ timeout: 45_000 }).catch(async (err) => {
+      console.log(`outbox after reconnecting: ${await page.getByTestId("outbox").textContent()}`);
+      throw err;
+    });
     const text = await card.textContent();
     expect(text).toContain("theirs from the booth");
     expect(text).toContain("mine from the deck");
@@ -167,7 +186,8 @@ describe("the focus call offline", () => {
   }, 180_000);
 
   it("leaves every other page alone: the worker controls only the focus call", async () => {
-    const { page } = deck;
+    const { page, context } = deck;
+    await context.setOffline(false);
     await page.goto(`/productions/${productionId}/rig`);
     expect(await page.evaluate(() => navigator.serviceWorker.controller)).toBeNull();
     const scopes = await page.evaluate(async () =>
