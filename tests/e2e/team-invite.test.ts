@@ -21,7 +21,7 @@ describe("inviting a stage manager", () => {
     const email = `e2e-sm-${Date.now()}@example.test`;
     const { page, productionId } = owner;
     await page.goto(`/productions/${productionId}/team`);
-    await page.getByLabel("E-mail").fill(email);
+    await page.getByLabel("E-mail", { exact: true }).fill(email);
     await page.getByLabel("Role", { exact: true }).selectOption("stage_manager");
     await page.getByRole("button", { name: "Send invitation" }).click();
     await page.getByText(`Invitation sent to ${email}.`).waitFor();
