@@ -181,8 +181,12 @@ describe("the focus call offline", () => {
     await screenshot(page, "offline-focus-call-conflict");
 
     await card.getByRole("button", { name: "Send mine again" }).click();
+    // The card gives way to "waiting to send" at once; the write follows.
     await card.waitFor({ state: "detached", timeout: 30_000 });
-    expect((await rows(booth.context.request)).get("3")!.focusNotes).toBe("mine from the deck");
+    await expect
+      .poll(async () => (await rows(booth.context.request)).get("3")!.focusNotes, { timeout: 30_000 })
+      .toBe("mine from the deck");
+    await expect.poll(() => page.getByTestId("strip-waiting").count(), { timeout: 30_000 }).toBe(0);
   }, 180_000);
 
   it("leaves every other page alone: the worker controls only the focus call", async () => {
