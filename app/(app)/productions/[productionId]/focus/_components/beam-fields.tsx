@@ -154,7 +154,15 @@ export function BeamFields({ fixture, data }: { fixture: FixtureDto; data: Focus
               className="min-h-12 self-end"
               disabled={pending || !leavesDirty}
               onClick={() =>
-                void save(Object.fromEntries(LEAVES.map((l) => [l.key, leaves[l.key].trim() || null])) as FocusPatch)
+                // Only the leaves changed: a leaf someone else set meanwhile is not a conflict unless this one moved too.
+                void save(
+                  Object.fromEntries(
+                    LEAVES.filter((l) => (leaves[l.key].trim() || null) !== (fixture[l.key] ?? null)).map((l) => [
+                      l.key,
+                      leaves[l.key].trim() || null,
+                    ]),
+                  ) as FocusPatch,
+                )
               }
             >
               Save barn doors
