@@ -199,4 +199,12 @@ describe("the focus call offline", () => {
     );
     expect(scopes).toEqual([`/productions/${productionId}/focus/call`]);
   }, 60_000);
+
+  it("opens the installed app (the manifest's start) straight into the focus call this tablet followed last", async () => {
+    const { page } = deck;
+    const manifest = await (await page.request.get("/manifest.webmanifest")).json();
+    await page.goto(manifest.start_url);
+    await page.waitForURL(new RegExp(`/productions/${productionId}/focus/call`));
+    await page.getByTestId("focus-call").waitFor();
+  }, 60_000);
 });
