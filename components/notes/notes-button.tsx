@@ -4,15 +4,9 @@
 import { useState } from "react";
 import { useNoteCounts } from "@/hooks/use-note-counts";
 import { countFor, noteCountLabel } from "@/lib/notes/counts";
-import type { NoteKind, NoteSubject } from "@/models/note-vocabulary";
+import type { NoteKind } from "@/models/note-vocabulary";
+import type { NoteTarget } from "./note-target";
 import { TargetNotesDialog } from "./target-notes-dialog";
-
-export type NoteTarget = {
-  subject: Exclude<NoteSubject, "production">;
-  subjectId: number;
-  /** How a person names it: "unit 7, 1st Electric", "cue 12", "position 1st Electric". */
-  label: string;
-};
 
 export function NotesButton({
   productionId,

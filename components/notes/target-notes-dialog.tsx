@@ -9,7 +9,7 @@ import { useAddNote, useProductionNotes } from "@/hooks/use-note-counts";
 import { ApiError } from "@/lib/http/api-client";
 import { KIND_LABELS, PRIORITY_LABELS, STATUS_LABELS } from "@/lib/notes/words";
 import { CLOSED_STATUSES, NOTE_KINDS, type NoteKind, type NotePriority } from "@/models/note-vocabulary";
-import type { NoteTarget } from "./notes-button";
+import type { NoteTarget } from "./note-target";
 
 const field = "rounded border border-line bg-raised px-2 py-1";
 

@@ -202,8 +202,8 @@ export function CueSheetView({
           </h2>
           <p className="text-sm text-muted print:text-black">
             <span className="hidden print:inline">{productionName} · </span>
-            <RevisionStampLine stamp={sinceRevision.latest} className="print:text-black" /> ·{" "}
-            {data?.rows.length ?? 0} cues in running order (links followed)
+            <RevisionStampLine stamp={sinceRevision.latest} className="print:text-black" /> · {data?.rows.length ?? 0}{" "}
+            cues in running order (links followed)
             <span className="print:hidden">
               {" "}
               · standbys grouped when a cue follows within 5 s
