@@ -21,7 +21,8 @@ export const ChartCard = memo(function ChartCard({
   productionId?: number;
 }) {
   return (
-    <div className="fc-screen relative">
+    // The notes button sits over the chart's top right corner: the header keeps clear of it.
+    <div className={productionId ? "fc-screen relative [&_.fc-head]:pr-24" : "fc-screen relative"}>
       {productionId ? (
         <NotesButton
           productionId={productionId}

@@ -48,7 +48,7 @@ export function GoToUnit({
   return (
     <aside
       aria-label="Go to unit"
-      className="flex w-56 shrink-0 flex-col gap-2 border-r border-line bg-surface p-2 text-sm"
+      className="flex w-56 shrink-0 flex-col gap-2 max-xl:h-[40%] border-r border-line bg-surface p-2 text-sm"
       data-testid="go-to-unit"
     >
       <p id={descriptionId} className="sr-only">

@@ -161,7 +161,9 @@ export function PlotEditor({
           </button>
         </div>
       ) : null}
-      <div className="flex min-h-0 flex-1">
+      {/* Below 1280 px (a tablet) the canvas takes the full width on top and the lists sit under it;
+          side by side they left the canvas a sliver at 800 px. */}
+      <div className="flex min-h-0 flex-1 flex-wrap xl:flex-nowrap">
         {canEdit ? (
           <TypeShelf
             types={data.fixtureTypes}
@@ -184,7 +186,7 @@ export function PlotEditor({
         />
         <div
           ref={canvasBox}
-          className="relative min-w-0 flex-1"
+          className="relative min-w-0 flex-1 max-xl:order-first max-xl:h-[60%] max-xl:basis-full"
           onDragOver={(e) => canEdit && e.preventDefault()}
           onDrop={onDrop}
         >

@@ -19,7 +19,7 @@ export function SidePanel(p: PanelProps) {
     : undefined;
   return (
     <aside
-      className="no-print w-80 shrink-0 overflow-y-auto border-l border-line bg-surface"
+      className="no-print w-80 shrink-0 overflow-y-auto max-xl:h-[40%] max-xl:flex-1 border-l border-line bg-surface"
       aria-label="Details"
       data-testid="side-panel"
     >

@@ -19,7 +19,10 @@ export function TypeShelf({
   setDirection: (d: NumberingDirection) => void;
 }) {
   return (
-    <aside className="no-print flex w-52 shrink-0 flex-col border-r border-line bg-surface" aria-label="Fixture types">
+    <aside
+      className="no-print flex w-52 shrink-0 flex-col max-xl:h-[40%] max-xl:overflow-y-auto border-r border-line bg-surface"
+      aria-label="Fixture types"
+    >
       <h2 className="px-3 pt-3 text-xs font-semibold uppercase tracking-wide text-muted">Hang a unit</h2>
       <p className="px-3 pb-2 text-xs text-muted">Drag a type onto a position, or pick it and click the position.</p>
       <ul className="flex-1 overflow-y-auto px-2" data-testid="type-shelf">
