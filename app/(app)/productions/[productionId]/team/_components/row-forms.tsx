@@ -92,7 +92,8 @@ export function InvitationForms({
           variant="secondary"
           disabled={resending}
           className="min-h-9 px-3"
-          aria-label={`Send the invitation to ${email} again`}
+          // The visible words come first in the spoken name (WCAG 2.5.3, label in name).
+          aria-label={`Send again: the invitation to ${email}`}
         >
           Send again
         </Button>
