@@ -1,7 +1,12 @@
 // Runs before every page and route handler: refuses cross-site writes and oversized bodies, and gives every
 // response its security headers (a fresh script nonce per page). The rules live in lib/http/request-guard.ts.
 import { type NextRequest, NextResponse } from "next/server";
-import { contentSecurityPolicy, refuseCrossSiteWrite, securityHeaders } from "@/lib/http/request-guard";
+import {
+  API_CONTENT_SECURITY_POLICY,
+  contentSecurityPolicy,
+  refuseCrossSiteWrite,
+  securityHeaders,
+} from "@/lib/http/request-guard";
 
 export function proxy(request: NextRequest) {
   const https =
@@ -12,6 +17,14 @@ export function proxy(request: NextRequest) {
   );
   if (refusal) {
     const res = NextResponse.json({ error: refusal.code, message: refusal.message }, { status: refusal.status });
+    for (const [k, v] of Object.entries(securityHeaders(https))) res.headers.set(k, v);
+    return res;
+  }
+  if (request.nextUrl.pathname.startsWith("/api/")) {
+    // JSON and files run no script: the strictest policy, and no nonce to hand down to a page (every
+    // read pays for this proxy, and passing changed request headers on is its costliest part).
+    const res = NextResponse.next();
+    res.headers.set("Content-Security-Policy", API_CONTENT_SECURITY_POLICY);
     for (const [k, v] of Object.entries(securityHeaders(https))) res.headers.set(k, v);
     return res;
   }

@@ -90,6 +90,9 @@ export function contentSecurityPolicy(nonce: string, { dev = false } = {}): stri
   ].join("; ");
 }
 
+/** The policy of the API's answers (JSON, files): nothing in them may load or run anything, or be framed. */
+export const API_CONTENT_SECURITY_POLICY = "default-src 'none'; frame-ancestors 'none'";
+
 /** Headers every response carries. HSTS only over HTTPS: over plain HTTP a browser ignores it anyway. */
 export function securityHeaders(https: boolean): Record<string, string> {
   return {

@@ -79,6 +79,14 @@ describe("security headers", () => {
     expect(a.headers.get("strict-transport-security")).toBeNull();
   });
 
+  it("an API answer carries the strictest policy (it runs no script) and the same headers as a page", async () => {
+    const r = await fetch(`${BASE_URL}/api/health`);
+    expect(r.headers.get("content-security-policy")).toBe("default-src 'none'; frame-ancestors 'none'");
+    expect(r.headers.get("x-content-type-options")).toBe("nosniff");
+    expect(r.headers.get("referrer-policy")).toBe("strict-origin-when-cross-origin");
+    expect(r.headers.get("x-frame-options")).toBe("DENY");
+  });
+
   it("sends HSTS when a TLS-terminating proxy says the request came over HTTPS", async () => {
     const r = await fetch(`${BASE_URL}/api/health`, { headers: { "x-forwarded-proto": "https" } });
     expect(r.headers.get("strict-transport-security")).toMatch(/max-age=31536000/);
