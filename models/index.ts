@@ -65,6 +65,7 @@ function associate() {
   Fixture.belongsTo(Position, { foreignKey: "positionId", as: "position" });
   Fixture.belongsTo(FixtureType, { foreignKey: "fixtureTypeId", as: "fixtureType" });
   Fixture.belongsTo(FocusPoint, { foreignKey: "focusPointId", as: "focusPoint" });
+  Fixture.belongsTo(Production, { foreignKey: "productionId", as: "production" });
   Position.hasMany(Fixture, { foreignKey: "positionId", as: "fixtures" });
   Cue.hasMany(CueLevel, { foreignKey: "cueId", as: "levels" });
   CueLevel.belongsTo(Cue, { foreignKey: "cueId", as: "cue" });

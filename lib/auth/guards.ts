@@ -1,9 +1,8 @@
 import "server-only";
 import { AppError, forbidden } from "@/lib/errors";
-import { parseId } from "@/lib/http/respond";
-import { getCurrentUser } from "./session";
+import { toId } from "@/lib/http/id";
+import { getCurrentMember, getCurrentUser } from "./session";
 import { can, canEditAnyField, forbiddenFields, type Entity, type Member, type Permission } from "./policy";
-import { getMembership } from "@/lib/data/memberships";
 
 export type CurrentUser = { id: number; name: string; email: string };
 export type MemberContext = { user: CurrentUser; member: Member; productionId: number };
@@ -22,11 +21,12 @@ export async function requireMember(
   rawProductionId: string | number,
   permission: Permission = "production.view",
 ): Promise<MemberContext> {
-  const user = await requireUser();
-  const productionId =
-    typeof rawProductionId === "number" ? rawProductionId : parseId(rawProductionId, "That production");
-  const membership = await getMembership({ userId: user.id, productionId });
-  if (!membership) throw new AppError("not_found", "That production was not found.");
+  // The order of the answers: not signed in (401) before a malformed id or an outsider (404).
+  const productionId = typeof rawProductionId === "number" ? rawProductionId : toId(rawProductionId);
+  const found = await getCurrentMember(productionId ?? 0);
+  if (!found) throw new AppError("unauthorized", "Please sign in.");
+  const { user, membership } = found;
+  if (productionId === null || !membership) throw new AppError("not_found", "That production was not found.");
   const member: Member = { role: membership.role, isOwner: membership.isOwner };
   if (!can(member, permission)) throw forbidden();
   return { user, member, productionId };

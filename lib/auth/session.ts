@@ -3,7 +3,7 @@ import { cache } from "react";
 import { cookies, headers } from "next/headers";
 import { getIronSession, type SessionOptions, unsealData } from "iron-session";
 import { env } from "@/lib/env";
-import { getSessionUser } from "@/lib/data/sessions";
+import { getSessionMember, getSessionUser } from "@/lib/data/sessions";
 
 // The sealed cookie carries a random session token; the session is live only while its record exists
 // (lib/data/sessions.ts), so signing out ends it on the server and a replayed cookie is signed out.
@@ -53,3 +53,13 @@ export const getCurrentUser = cache(async () => {
   if (!token) return null;
   return getSessionUser(token);
 });
+
+/**
+ * The signed-in user and their membership of one production, read together (one query), or null when
+ * nobody is signed in. Not cached: a route asks once.
+ */
+export async function getCurrentMember(productionId: number) {
+  const token = await sessionToken();
+  if (!token) return null;
+  return getSessionMember(token, productionId);
+}

@@ -1,5 +1,5 @@
 import "server-only";
-import type { Transaction } from "sequelize";
+import { QueryTypes, type Transaction } from "sequelize";
 import { getDb, type Fixture } from "@/models";
 import { AppError, notFound } from "@/lib/errors";
 import type { FixtureCreate, FixturePatch } from "@/lib/validation/fixture";
@@ -70,6 +70,24 @@ export function recordFixtureUpdate(
   );
 }
 
+/**
+ * A fingerprint of everything the rig list is computed from: the production's fixtures, positions,
+ * types and focus points (row count, highest id, sum of versions, latest change) and its head height.
+ * Every write bumps a version (optimistic locking) and ids only grow, so any committed change moves it;
+ * read before the list itself, a list is never filed under a newer fingerprint than its own data.
+ * One indexed query, a small fraction of computing the list (see lib/http/stamped-json.ts).
+ */
+export async function fixtureListStamp(productionId: number): Promise<string> {
+  const part = (table: string) =>
+    `(SELECT CONCAT_WS('/', COUNT(*), MAX(id), SUM(version), MAX(updated_at)) FROM ${table} WHERE production_id = :id)`;
+  const [row] = await getDb().sequelize.query<{ stamp: string | null }>(
+    `SELECT CONCAT_WS('|', ${["fixtures", "positions", "fixture_types", "focus_points"].map(part).join(", ")},
+       (SELECT CONCAT_WS('/', version, head_height) FROM productions WHERE id = :id)) AS stamp`,
+    { replacements: { id: productionId }, type: QueryTypes.SELECT },
+  );
+  return row?.stamp ?? "";
+}
+
 export async function getFixturesByProduction({ productionId }: { productionId: number }): Promise<FixtureDto[]> {
   const production = await requireProduction(productionId);
   const [rows, { join, positions }] = await Promise.all([
@@ -97,11 +115,61 @@ export async function getFixtureById({
   productionId: number;
   fixtureId: number;
 }): Promise<FixtureDto | null> {
-  const production = await requireProduction(productionId);
-  const row = await getDb().Fixture.findOne({ where: { productionId, id: fixtureId }, raw: true });
-  if (!row) return null;
-  return (await joinerFor(productionId, production.headHeight)).join(toFixtureRecord(row));
+  return (await getFixturesByIds({ productionId, fixtureIds: [fixtureId] }))[0] ?? null;
 }
+
+type JoinedRow = Fixture & {
+  position: Record<string, unknown>;
+  fixtureType: Record<string, unknown>;
+  focusPoint: Record<string, unknown>;
+  production: { headHeight: number };
+};
+
+/**
+ * A few fixtures with their own position, type, focus point and the production's head height, read in
+ * one query (the list reads each related table whole instead; for one row that would be four queries).
+ * Ids not in the production are left out; the order is by id.
+ */
+export async function getFixturesByIds({
+  productionId,
+  fixtureIds,
+  transaction,
+}: {
+  productionId: number;
+  fixtureIds: number[];
+  transaction?: Transaction;
+}): Promise<FixtureDto[]> {
+  if (fixtureIds.length === 0) return [];
+  const { Fixture, Position, FixtureType, FocusPoint, Production } = getDb();
+  const rows = (await Fixture.findAll({
+    where: { productionId, id: fixtureIds },
+    include: [
+      { model: Position, as: "position", where: { productionId } },
+      { model: FixtureType, as: "fixtureType", where: { productionId } },
+      { model: FocusPoint, as: "focusPoint", required: false },
+      { model: Production, as: "production", attributes: ["headHeight"] },
+    ],
+    order: [["id", "ASC"]],
+    raw: true,
+    nest: true,
+    transaction,
+  })) as unknown as JoinedRow[];
+  const out: FixtureDto[] = [];
+  for (const row of rows) {
+    // A fixture with no focus point comes back with a point whose every column is null.
+    const point = row.focusPoint?.id != null ? [row.focusPoint] : [];
+    const join = fixtureJoiner(
+      { positions: [row.position], types: [row.fixtureType], points: point } as never,
+      Number(row.production.headHeight),
+    );
+    const joined = join(toFixtureRecord(row));
+    if (joined) out.push(joined);
+  }
+  return out;
+}
+
+/** The fields checkReferences looks at: a patch touching none of them cannot break a reference or the DMX range. */
+const REFERENCE_FIELDS = ["positionId", "fixtureTypeId", "focusPointId", "address", "footprint"] as const;
 
 /**
  * Checks that referenced rows belong to the same production and that the DMX range fits the universe.
@@ -149,14 +217,18 @@ export async function updateFixture({
   const { version, ...changes } = patch;
   if (Object.keys(changes).length === 0)
     throw new AppError("bad_request", "Nothing to change: send at least one field.");
-  const existing = await Fixture.findOne({ where: { productionId, id: fixtureId } });
-  if (!existing) throw notFound("Fixture");
-  const merged = { ...toFixtureRecord(existing), ...changes } as FixtureRecord;
-  await checkReferences(productionId, merged);
+  // The row is read first only when the change needs it: references and DMX range to check against the
+  // merged row, or the moment a unit is first marked focused. A note or a colour goes straight to the lock.
+  const needsRow = REFERENCE_FIELDS.some((k) => changes[k] !== undefined) || changes.focused === true;
+  const existing = needsRow ? await Fixture.findOne({ where: { productionId, id: fixtureId } }) : null;
+  if (needsRow && !existing) throw notFound("Fixture");
+  if (existing && REFERENCE_FIELDS.some((k) => changes[k] !== undefined))
+    await checkReferences(productionId, { ...toFixtureRecord(existing), ...changes } as FixtureRecord);
 
   const write: Record<string, unknown> = { ...changes };
   if (changes.unitNumber !== undefined) write.unitSort = unitSortKey(changes.unitNumber);
-  if (changes.focused === true && !existing.focused) Object.assign(write, { focusedAt: new Date(), focusedBy: userId });
+  if (changes.focused === true && !existing?.focused)
+    Object.assign(write, { focusedAt: new Date(), focusedBy: userId });
   if (changes.focused === false) Object.assign(write, { focusedAt: null, focusedBy: null });
 
   await inTransaction(async (transaction) => {
@@ -220,8 +292,7 @@ export async function createFixtures({
     }
     return created;
   });
-  const all = await getFixturesByProduction({ productionId });
-  return all.filter((f) => ids.includes(f.id));
+  return getFixturesByIds({ productionId, fixtureIds: ids });
 }
 
 /** Deletes fixtures of this production by id, recording each; unknown ids are a 404 and nothing is deleted. */

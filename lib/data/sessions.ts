@@ -2,7 +2,8 @@ import "server-only";
 import { createHash, randomBytes } from "node:crypto";
 import { QueryTypes } from "sequelize";
 import { getDb } from "@/models";
-import type { UserDto } from "@/lib/dto/people";
+import type { MembershipDto, UserDto } from "@/lib/dto/people";
+import type { Role } from "@/lib/auth/roles";
 
 // The cookie holds a random token; the database holds only its hash, with the user and an expiry.
 const hash = (token: string) => createHash("sha256").update(token).digest("hex");
@@ -32,6 +33,30 @@ export async function getSessionUser(token: string): Promise<UserDto | null> {
     { replacements: [hash(token)], type: QueryTypes.SELECT },
   );
   return rows[0] ?? null;
+}
+
+/**
+ * The user of a live session token with their membership of one production, in one query: every
+ * production request asks both, and this is the per-request cost every read and write pays. The
+ * membership is null for an outsider; the whole answer is null when the session is not live.
+ */
+export async function getSessionMember(
+  token: string,
+  productionId: number,
+): Promise<{ user: UserDto; membership: MembershipDto | null } | null> {
+  const rows = await getDb().sequelize.query<UserDto & { role: Role | null; isOwner: number | null }>(
+    `SELECT u.id, u.email, u.name, m.role, m.is_owner AS isOwner
+       FROM user_sessions s
+       JOIN users u ON u.id = s.user_id
+       LEFT JOIN memberships m ON m.user_id = u.id AND m.production_id = ?
+      WHERE s.token_hash = ? AND s.expires_at > NOW(3)`,
+    { replacements: [productionId, hash(token)], type: QueryTypes.SELECT },
+  );
+  const row = rows[0];
+  if (!row) return null;
+  const user = { id: row.id, email: row.email, name: row.name };
+  const membership = row.role ? { userId: row.id, productionId, role: row.role, isOwner: Boolean(row.isOwner) } : null;
+  return { user, membership };
 }
 
 /** Ends one session (sign-out). */

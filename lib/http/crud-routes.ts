@@ -4,6 +4,7 @@ import { requireFields, requireMember, requireSomeField } from "@/lib/auth/guard
 import type { Entity, Permission } from "@/lib/auth/policy";
 import { notFound } from "@/lib/errors";
 import { parseBody, parseId, readJson, readJsonValue, readQuery, route } from "./respond";
+import { stampedJson } from "./stamped-json";
 
 /**
  * Route handlers for a production-owned entity from one declaration, the HTTP side of
@@ -124,6 +125,11 @@ export type CollectionRouteSpec<S extends z.ZodType, I, L, C> = {
   /** GET (members): every row of the production, in the entity's order. */
   list?: (args: { productionId: number }) => Promise<L>;
   /**
+   * For a list that is costly to build: a fingerprint of what it is built from. The list is then built
+   * once per fingerprint and answered with an ETag (lib/http/stamped-json.ts).
+   */
+  stamp?: (productionId: number) => Promise<string>;
+  /**
    * POST (201): a JSON body read with `schema`, or, for a body that is not JSON (a file upload), the
    * input `read` returns; either way the whole input is checked before `run` writes anything.
    */
@@ -137,11 +143,13 @@ export function collectionRoutes<S extends z.ZodType = never, I = never, L = nev
   spec: CollectionRouteSpec<S, I, L, C>,
 ): Given<L, "GET"> & Given<C, "POST"> {
   const handlers: Partial<Record<"GET" | "POST", Handler>> = {};
-  const { list, create } = spec;
+  const { list, create, stamp } = spec;
   if (list) {
-    handlers.GET = route(async (_req, ctx: Ctx) => {
+    handlers.GET = route(async (req, ctx: Ctx) => {
       const { productionId } = await requireMember((await ctx.params).productionId);
-      return { [spec.key]: await list({ productionId }) };
+      const build = async () => ({ [spec.key]: await list({ productionId }) });
+      if (!stamp) return build();
+      return stampedJson(req, { key: `${spec.key}:${productionId}`, stamp: await stamp(productionId), build });
     });
   }
   if (create) {
