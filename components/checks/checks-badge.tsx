@@ -20,14 +20,17 @@ export function ChecksBadge({
     summary.errors ? `${summary.errors} to fix` : "",
     summary.warnings ? `${summary.warnings} to look at` : "",
   ].filter(Boolean);
+  // Its own landmark: the badge floats over the page, outside the page's main region on the rig table.
   return (
-    <Link
-      href={`/productions/${productionId}/checks`}
-      data-testid="checks-badge"
-      data-severity={summary.errors ? "error" : "warning"}
-      className={`inline-flex items-center gap-1 rounded-full border bg-surface px-3 py-0.5 text-xs font-semibold print:hidden ${tone} ${className}`}
-    >
-      <span aria-hidden>▲</span> Checks: {parts.join(", ")}
-    </Link>
+    <aside aria-label="Checks" className={`flex rounded-full print:hidden ${className}`}>
+      <Link
+        href={`/productions/${productionId}/checks`}
+        data-testid="checks-badge"
+        data-severity={summary.errors ? "error" : "warning"}
+        className={`inline-flex items-center gap-1 rounded-full border bg-surface px-3 py-0.5 text-xs font-semibold ${tone}`}
+      >
+        <span aria-hidden>▲</span> Checks: {parts.join(", ")}
+      </Link>
+    </aside>
   );
 }

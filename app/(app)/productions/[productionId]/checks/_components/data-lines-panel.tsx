@@ -38,7 +38,9 @@ export function DataLinesPanel({
               <th>Universe</th>
               <th>Devices</th>
               <th>Terminate at</th>
-              <th className="print:hidden" />
+              <th className="print:hidden">
+                <span className="sr-only">Remove</span>
+              </th>
             </tr>
           </thead>
           <tbody>

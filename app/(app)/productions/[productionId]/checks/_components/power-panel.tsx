@@ -46,7 +46,9 @@ export function PowerPanel({
                 <th>Load (W / VA)</th>
                 <th>Amps</th>
                 <th>Status</th>
-                <th className="print:hidden" />
+                <th className="print:hidden">
+                  <span className="sr-only">Remove</span>
+                </th>
               </tr>
             </thead>
             <tbody>
