@@ -22,6 +22,12 @@ export type MailRecord = QueuedMail & {
   createdAt: Date;
 };
 
+/**
+ * How long a claim on a message holds: far longer than handing one message to the mail server takes, short
+ * enough that a claim left by a server that stopped mid-send soon runs out and the message is tried again.
+ */
+export const CLAIM_SECONDS = 120;
+
 /** The wait before the next try after `attempts` failures: 1, 2, 4 … minutes, at most an hour. */
 export const retryDelaySeconds = (attempts: number) => Math.min(3600, 60 * 2 ** Math.max(0, attempts - 1));
 
@@ -33,23 +39,42 @@ export async function enqueueMail(m: {
   attachments?: MailAttachment[];
 }): Promise<QueuedMail> {
   const files = m.attachments?.length ? JSON.stringify(m.attachments) : null;
+  // Written already claimed by the send that follows, so no retry (here or on another server) takes it meanwhile.
   const [id] = await getDb().sequelize.query(
-    "INSERT INTO outgoing_mail (production_id, to_address, subject, body_text, attachments) VALUES (?, ?, ?, ?, ?)",
+    `INSERT INTO outgoing_mail (production_id, to_address, subject, body_text, attachments, sending_until)
+     VALUES (?, ?, ?, ?, ?, NOW(3) + INTERVAL ${CLAIM_SECONDS} SECOND)`,
     { replacements: [m.productionId, m.to, m.subject.slice(0, 300), m.text, files], type: QueryTypes.INSERT },
   );
   return { id: Number(id), ...m, attempts: 0 };
 }
 
+/** Not claimed by a send in progress (or its claim ran out). */
+const UNCLAIMED = "(sending_until IS NULL OR sending_until < NOW(3))";
+
+/**
+ * Claims a queued message for one try: true when this caller may send it; false when it was sent meanwhile
+ * or another try holds it (the send right after queuing, the retry timer, another app server). With
+ * `dueOnly`, a message whose next try is not due yet is left alone too (the outbox's "try now" passes false).
+ */
+export async function claimMail(id: number, { dueOnly = true } = {}): Promise<boolean> {
+  const [, affected] = await getDb().sequelize.query(
+    `UPDATE outgoing_mail SET sending_until = NOW(3) + INTERVAL ${CLAIM_SECONDS} SECOND
+      WHERE id = ? AND status = 'queued' AND ${UNCLAIMED}${dueOnly ? " AND next_attempt_at <= NOW(3)" : ""}`,
+    { replacements: [id], type: QueryTypes.UPDATE },
+  );
+  return Number(affected) === 1;
+}
+
 export async function markMailSent(id: number): Promise<void> {
   await getDb().sequelize.query(
-    "UPDATE outgoing_mail SET status = 'sent', sent_at = NOW(3), attempts = attempts + 1, last_error = NULL, updated_at = NOW(3) WHERE id = ?",
+    "UPDATE outgoing_mail SET status = 'sent', sent_at = NOW(3), attempts = attempts + 1, last_error = NULL, sending_until = NULL, updated_at = NOW(3) WHERE id = ?",
     { replacements: [id] },
   );
 }
 
 export async function markMailFailed(id: number, attemptsBefore: number, error: string): Promise<void> {
   await getDb().sequelize.query(
-    "UPDATE outgoing_mail SET attempts = attempts + 1, last_error = ?, next_attempt_at = NOW(3) + INTERVAL ? SECOND, updated_at = NOW(3) WHERE id = ?",
+    "UPDATE outgoing_mail SET attempts = attempts + 1, last_error = ?, next_attempt_at = NOW(3) + INTERVAL ? SECOND, sending_until = NULL, updated_at = NOW(3) WHERE id = ?",
     { replacements: [error.slice(0, 500), retryDelaySeconds(attemptsBefore + 1), id] },
   );
 }
@@ -59,7 +84,7 @@ export async function dueMail(limit = 20): Promise<QueuedMail[]> {
   const rows = await getDb().sequelize.query<QueuedMail & { files: string | null }>(
     `SELECT id, production_id AS productionId, to_address AS \`to\`, subject, body_text AS text, attempts,
             attachments AS files
-       FROM outgoing_mail WHERE status = 'queued' AND next_attempt_at <= NOW(3) ORDER BY id LIMIT ?`,
+       FROM outgoing_mail WHERE status = 'queued' AND next_attempt_at <= NOW(3) AND ${UNCLAIMED} ORDER BY id LIMIT ?`,
     { replacements: [limit], type: QueryTypes.SELECT },
   );
   return rows.map(withAttachments);
@@ -75,7 +100,7 @@ export async function queuedMailOfProduction(productionId: number, limit = 100):
   const rows = await getDb().sequelize.query<QueuedMail & { files: string | null }>(
     `SELECT id, production_id AS productionId, to_address AS \`to\`, subject, body_text AS text, attempts,
             attachments AS files
-       FROM outgoing_mail WHERE status = 'queued' AND production_id = ? ORDER BY id LIMIT ?`,
+       FROM outgoing_mail WHERE status = 'queued' AND production_id = ? AND ${UNCLAIMED} ORDER BY id LIMIT ?`,
     { replacements: [productionId, limit], type: QueryTypes.SELECT },
   );
   return rows.map(withAttachments);

@@ -2,6 +2,7 @@ import "server-only";
 import { after } from "next/server";
 import { env } from "@/lib/env";
 import {
+  claimMail,
   dueMail,
   enqueueMail,
   markMailFailed,
@@ -21,6 +22,7 @@ export type Outgoing = {
 };
 export type SendOutcome = { queuedId: number; sent: boolean; error?: string };
 
+/** Hands one message to the mail server; the caller holds its claim (enqueueMail's, or claimMail's). */
 async function deliver(m: QueuedMail): Promise<SendOutcome> {
   const transport = mailTransport();
   if (!transport) {
@@ -53,7 +55,11 @@ let retryTimer: ReturnType<typeof setInterval> | null = null;
 export async function retryQueuedMail(opts: { productionId?: number } = {}): Promise<number> {
   let sent = 0;
   const queued = opts.productionId ? await queuedMailOfProduction(opts.productionId) : await dueMail();
-  for (const m of queued) if ((await deliver(m)).sent) sent++;
+  for (const m of queued) {
+    // Listed is not owned: another try may have taken it since the list was read.
+    if (!(await claimMail(m.id, { dueOnly: !opts.productionId }))) continue;
+    if ((await deliver(m)).sent) sent++;
+  }
   return sent;
 }
 
