@@ -5,7 +5,6 @@
 // .next-bench-load) and `next start`; everything it starts it stops. BENCH_SECONDS sets each run's
 // length (default 10); BENCH_PROFILE=<folder> writes the server's CPU profile there (node --cpu-prof);
 // BENCH_ONLY=one,write runs only some parts. Each run reports the CPU a request took as well as the wall clock.
-import { type ChildProcess, spawn } from "node:child_process";
 import { randomBytes } from "node:crypto";
 import { mkdtempSync, rmSync } from "node:fs";
 import os from "node:os";
@@ -20,7 +19,9 @@ import { treeCpuMs } from "./support/process-cpu";
 // @ts-expect-error plain ES modules without types (Node built-ins only, shared with the runners)
 import { startMariaDb } from "../scripts/lib/mariadb.mjs";
 // @ts-expect-error plain ES modules without types
-import { bin, buildIfStale, freePort, migrate, seedWhenEmpty, waitForHttp } from "../scripts/lib/project.mjs";
+import { buildIfStale, freePort, migrate, seedWhenEmpty } from "../scripts/lib/project.mjs";
+// @ts-expect-error plain ES modules without types
+import { startAppServer } from "../scripts/lib/app-server.mjs";
 
 const FIXTURES = 1500;
 const [CUES, CHANNELS] = [600, 400];
@@ -51,26 +52,16 @@ async function startApp(databaseUrl: string, dir: string) {
     NEXT_TELEMETRY_DISABLED: "1",
   };
   buildIfStale(distDir, env);
-  const port = await freePort();
   const profile = process.env.BENCH_PROFILE;
-  const profiling = profile ? ["--cpu-prof", `--cpu-prof-dir=${path.resolve(profile)}`] : [];
-  const args = [...profiling, bin("next"), "start", "-p", String(port), "-H", "127.0.0.1"];
-  const server: ChildProcess = spawn(process.execPath, args, {
-    stdio: ["ignore", "ignore", "inherit"],
-    env: { ...process.env, ...env, NEXT_DIST_DIR: distDir, NODE_ENV: "production" },
-  });
-  stops.push(
-    () =>
-      new Promise<void>((resolve) => {
-        if (server.exitCode !== null) return resolve();
-        server.once("exit", () => resolve());
-        server.kill("SIGTERM");
-      }),
-  );
-  const url = `http://127.0.0.1:${port}`;
-  await waitForHttp(`${url}/api/health`);
-  serverPid = server.pid ?? 0;
-  return url;
+  return startAppServer({
+    distDir,
+    env,
+    cleanups: stops,
+    nodeArgs: profile ? ["--cpu-prof", `--cpu-prof-dir=${path.resolve(profile)}`] : [],
+    onStart: (pid: number) => {
+      serverPid = pid;
+    },
+  }) as Promise<string>;
 }
 
 async function signIn(base: string) {

@@ -4,7 +4,6 @@
 // there is one, and otherwise says how to get the HTTP figures. Everything it starts it stops.
 import { existsSync, mkdtempSync, rmSync } from "node:fs";
 import { randomBytes } from "node:crypto";
-import { spawn, type ChildProcess } from "node:child_process";
 import os from "node:os";
 import path from "node:path";
 
@@ -44,7 +43,7 @@ export async function ensureDatabase(): Promise<"given" | "started" | "unavailab
 /** An app to time over HTTP: APP_URL as given, or `next start` from an existing build; null when neither. */
 export async function ensureServer(): Promise<string | null> {
   if (process.env.APP_URL) return process.env.APP_URL;
-  const { ROOT, bin, freePort, waitForHttp } = await import("../../scripts/lib/project.mjs" as string);
+  const { ROOT } = await import("../../scripts/lib/project.mjs" as string);
   const distDir = process.env.BENCH_DIST_DIR ?? ".next";
   if (!existsSync(path.join(ROOT, distDir, "BUILD_ID"))) {
     console.log(
@@ -52,28 +51,15 @@ export async function ensureServer(): Promise<string | null> {
     );
     return null;
   }
-  const port = await freePort();
-  const server: ChildProcess = spawn(process.execPath, [bin("next"), "start", "-p", String(port), "-H", "127.0.0.1"], {
-    cwd: ROOT,
-    stdio: ["ignore", "ignore", "inherit"],
+  const { startAppServer } = await import("../../scripts/lib/app-server.mjs" as string);
+  const url: string = await startAppServer({
+    distDir,
     env: {
-      ...process.env,
-      NEXT_DIST_DIR: distDir,
-      NODE_ENV: "production",
       NEXT_TELEMETRY_DISABLED: "1",
       SESSION_SECRET: process.env.SESSION_SECRET ?? randomBytes(36).toString("base64url"),
     },
+    cleanups: stops,
   });
-  stops.push(
-    () =>
-      new Promise<void>((resolve) => {
-        if (server.exitCode !== null) return resolve();
-        server.once("exit", () => resolve());
-        server.kill("SIGTERM");
-      }),
-  );
-  const url = `http://127.0.0.1:${port}`;
-  await waitForHttp(`${url}/api/health`);
   console.log(`  (started next start from ${distDir} on ${url}; the build must be of this source for fair figures)`);
   return url;
 }

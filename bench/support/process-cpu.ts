@@ -3,7 +3,7 @@
 // reports both.
 import { readdirSync, readFileSync } from "node:fs";
 
-const TICKS_PER_SECOND = 100; // USER_HZ, 100 on Linux
+const TICKS_PER_SECOND = 100; // USER_HZ, the unit of utime and stime in /proc/<pid>/stat (man 5 proc); 100 on Linux
 
 /** utime + stime of one process (ms), or 0 when it is gone. */
 function ownCpuMs(pid: number): number {

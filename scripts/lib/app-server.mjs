@@ -3,11 +3,15 @@
 import { spawn } from "node:child_process";
 import { ROOT, bin, freePort, waitForHttp } from "./project.mjs";
 
-/** Starts the build in `distDir` with `env`; resolves with its address once /api/health answers. */
-export async function startAppServer({ distDir, env, cleanups, timeoutMs = 120_000 }) {
+/**
+ * Starts the build in `distDir` with `env`; resolves with its address once /api/health answers. `nodeArgs`
+ * go to Node before Next (a benchmark's --cpu-prof); `onStart` hears the server's pid (its CPU is measured).
+ */
+export async function startAppServer({ distDir, env, cleanups, timeoutMs = 120_000, nodeArgs = [], onStart }) {
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
-  const server = spawn(process.execPath, [bin("next"), "start", "-p", String(port), "-H", "127.0.0.1"], {
+  const args = [...nodeArgs, bin("next"), "start", "-p", String(port), "-H", "127.0.0.1"];
+  const server = spawn(process.execPath, args, {
     cwd: ROOT,
     stdio: ["ignore", "ignore", "inherit"],
     env: { ...process.env, ...env, NEXT_DIST_DIR: distDir, NODE_ENV: "production" },
@@ -20,6 +24,7 @@ export async function startAppServer({ distDir, env, cleanups, timeoutMs = 120_0
         server.kill("SIGTERM");
       }),
   );
+  onStart?.(server.pid);
   await waitForHttp(`${baseUrl}/api/health`, timeoutMs);
   return baseUrl;
 }
