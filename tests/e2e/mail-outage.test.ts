@@ -2,36 +2,11 @@
 // control file exists), an owner invites someone and someone asks for a password reset; both are saved
 // and their mail queued with the failure, which the outbox page shows. Once the server is back, the
 // outbox's "try now" sends the invitation, the minute timer sends the reset, and both links work.
-import { rmSync, writeFileSync } from "node:fs";
-import net from "node:net";
-import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { startMailStandIn, stopMailStandIn } from "./support/mail-stand-in";
 import type { BrowserContext } from "playwright-core";
 import { linkIn, mailTo, waitForMail } from "../support/outbox";
 import { openBrowser, screenshot, signedIn, type SignedIn } from "./support/browser";
-
-const CONTROL = path.join(process.env.MAIL_OUTBOX_DIR ?? "", "stand-in-stopped");
-
-/** Whether the mail stand-in accepts connections right now. */
-function smtpListening(): Promise<boolean> {
-  const url = new URL(process.env.SMTP_URL!);
-  return new Promise((resolve) => {
-    const socket = net.connect(Number(url.port), url.hostname);
-    socket.once("connect", () => {
-      socket.destroy();
-      resolve(true);
-    });
-    socket.once("error", () => resolve(false));
-  });
-}
-
-async function untilSmtp(listening: boolean) {
-  const end = Date.now() + 10_000;
-  while ((await smtpListening()) !== listening) {
-    if (Date.now() > end) throw new Error(`the mail stand-in did not ${listening ? "start" : "stop"}`);
-    await new Promise((r) => setTimeout(r, 100));
-  }
-}
 
 let owner: SignedIn;
 let guest: BrowserContext;
@@ -40,7 +15,7 @@ beforeAll(async () => {
   guest = await openBrowser();
 }, 120_000);
 afterAll(async () => {
-  rmSync(CONTROL, { force: true }); // never leave the stand-in stopped for the tests after this one
+  await startMailStandIn(); // never leave the stand-in stopped for the tests after this one
   await owner?.close();
   await guest?.close();
 });
@@ -51,8 +26,7 @@ describe("the mail server down", () => {
     const resetFor = `e2e-outage-reset-${Date.now()}@example.test`;
     const { page, productionId } = owner;
 
-    writeFileSync(CONTROL, "");
-    await untilSmtp(false);
+    await stopMailStandIn();
     try {
       await page.goto(`/productions/${productionId}/team`);
       await page.getByRole("textbox", { name: "E-mail" }).fill(invited);
@@ -70,9 +44,8 @@ describe("the mail server down", () => {
       await screenshot(page, "mail-outage-outbox-queued");
       expect(await mailTo(invited)).toHaveLength(0);
     } finally {
-      rmSync(CONTROL, { force: true });
+      await startMailStandIn();
     }
-    await untilSmtp(true);
 
     await page.getByRole("button", { name: "Try queued mail now" }).click();
     const invitation = await waitForMail(invited);

@@ -1,32 +1,9 @@
 // Revisions in Chromium: the designer issues a revision, recolours a unit, issues the next one and sees it
 // listed with that change in its group; the rig marks a unit changed since then with the side bar; with the
 // mail server down a revision is still issued and its e-mail waits in the outbox with the failure.
-import { rmSync, writeFileSync } from "node:fs";
-import net from "node:net";
-import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { startMailStandIn, stopMailStandIn } from "./support/mail-stand-in";
 import { screenshot, signedIn, type SignedIn } from "./support/browser";
-
-const CONTROL = path.join(process.env.MAIL_OUTBOX_DIR ?? "", "stand-in-stopped");
-
-function smtpListening(): Promise<boolean> {
-  const url = new URL(process.env.SMTP_URL!);
-  return new Promise((resolve) => {
-    const socket = net.connect(Number(url.port), url.hostname);
-    socket.once("connect", () => {
-      socket.destroy();
-      resolve(true);
-    });
-    socket.once("error", () => resolve(false));
-  });
-}
-async function untilSmtp(listening: boolean) {
-  const end = Date.now() + 10_000;
-  while ((await smtpListening()) !== listening) {
-    if (Date.now() > end) throw new Error(`the mail stand-in did not ${listening ? "start" : "stop"}`);
-    await new Promise((r) => setTimeout(r, 100));
-  }
-}
 
 let designer: SignedIn;
 const tag = String(Date.now()).slice(-6);
@@ -35,7 +12,7 @@ beforeAll(async () => {
   designer = await signedIn("designer");
 }, 120_000);
 afterAll(async () => {
-  rmSync(CONTROL, { force: true }); // never leave the stand-in stopped for the tests after this one
+  await startMailStandIn(); // never leave the stand-in stopped for the tests after this one
   await designer?.close();
 });
 
@@ -111,8 +88,7 @@ describe("revisions", () => {
   it("issues a revision with the mail server down, its e-mail queued with the failure in the outbox", async () => {
     const { page, productionId } = designer;
     await page.goto(`/productions/${productionId}/revisions`);
-    writeFileSync(CONTROL, "");
-    await untilSmtp(false);
+    await stopMailStandIn();
     try {
       await issue(`E2E ${tag} c`, "mail server down");
       await page.getByText(/e-mails? queued for the team/).waitFor();
@@ -132,8 +108,7 @@ describe("revisions", () => {
         .toMatch(/The mail server refused or did not answer/);
       await screenshot(page, "revisions-mail-queued");
     } finally {
-      rmSync(CONTROL, { force: true });
+      await startMailStandIn();
     }
-    await untilSmtp(true);
   }, 120_000);
 });
