@@ -56,12 +56,17 @@ async function readSheet(sheet: StreamSheet): Promise<SheetRead> {
   const merges: string[] = [];
   sheet.iterator = collectMerges(sheet.iterator, merges);
   const records: RawRow[] = [];
+  let previous = 0;
   for await (const row of sheet) {
+    // A row without a readable index follows the one before it (ECMA-376 Part 1, §18.3.1.73: the row's
+    // r attribute is optional); a damaged file must not give messages about "row null".
+    const rowNumber = Number.isInteger(row.number) && row.number > 0 ? row.number : previous + 1;
+    previous = rowNumber;
     const values = row.values as CellValue[];
-    checkColumn(values.length - 1, row.number);
+    checkColumn(values.length - 1, rowNumber);
     const cells: string[] = [];
     for (let c = 1; c < values.length; c++) cells.push(cellText(values[c] ?? null).trim());
-    if (cells.some((c) => c !== "")) records.push({ rowNumber: row.number, cells });
+    if (cells.some((c) => c !== "")) records.push({ rowNumber, cells });
   }
   fillMerges(records, merges);
   padRows(records);

@@ -107,14 +107,17 @@ function readSheetXml(xml: string, ctx: Context) {
   const records: RawRow[] = [];
   let rowNumber = 0;
   for (const row of xml.matchAll(/<row\b([^>]*?)(?:\/>|>([\s\S]*?)<\/row>)/g)) {
+    // An index that is missing or unreadable (a damaged file) means the row after the one before it, as a
+    // row without r does (ECMA-376 Part 1, §18.3.1.73); never NaN, which messages would show as "row null".
     const r = attr(row[1], "r");
-    rowNumber = r ? Number(r) : rowNumber + 1;
+    rowNumber = r && /^[1-9]\d*$/.test(r) ? Number(r) : rowNumber + 1;
     if (!row[2]) continue;
     const cells: string[] = [];
     let col = 0;
     for (const c of row[2].matchAll(/<c\b([^>]*?)(?:\/>|>([\s\S]*?)<\/c>)/g)) {
       const ref = attr(c[1], "r");
-      col = ref ? columnNumber(/^[A-Z]+/.exec(ref)?.[0] ?? "") : col + 1;
+      const letters = ref ? /^[A-Z]+/.exec(ref)?.[0] : undefined;
+      col = letters ? columnNumber(letters) : col + 1;
       checkColumn(col, rowNumber);
       const text = c[2] ? cellText(c[1], c[2], ctx).trim() : "";
       while (cells.length < col - 1) cells.push("");

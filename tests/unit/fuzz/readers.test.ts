@@ -135,6 +135,15 @@ describe(".xlsx reader", () => {
     expect(process.memoryUsage().heapUsed - before).toBeLessThan(300 * 1024 * 1024);
   }, 120_000);
 
+  it("a row or cell index made unreadable by damage: the row after the one before, never row NaN (found by the fuzzing below)", async () => {
+    // ECMA-376 Part 1, §18.3.1.73 (row) and §18.3.1.4 (c): r is optional; without it a row follows the
+    // previous row and a cell the previous cell. A byte flipped in r ("2" → "j") must read the same way.
+    const xml = `<worksheet ${ns}><sheetData><row r="1"><c r="A1" t="inlineStr"><is><t>Unit</t></is></c><c r="B1" t="inlineStr"><is><t>Type</t></is></c></row><row r="j"><c r="A2"><v>1</v></c><c r="jB2" t="inlineStr"><is><t>Spot</t></is></c></row><row r="3"><c r="A3"><v>2</v></c></row></sheetData></worksheet>`;
+    const t = await readXlsx(workbook(xml));
+    expect(t.rows.map((r) => r.rowNumber)).toEqual([2, 3]);
+    expect(t.rows[0].cells).toEqual(["1", "Spot"]);
+  });
+
   it("a workbook whose zip fflate reads but ExcelJS's streaming unzip waits on forever: a FileProblem (found by the fuzzing below)", async () => {
     // A workbook written by ExcelJS with a few bytes changed; it sent readXlsx to the ExcelJS fallback,
     // whose unzip never settled, so an upload of it would have hung its request.
