@@ -9,8 +9,10 @@ import { fixtureJoiner, joinFixtures } from "@/lib/rig/fixture-join";
 import { unitSortKey } from "@/lib/rig/unit-number";
 import { plain } from "./plain";
 import { jsonColumn } from "./json-column";
-import { versionedUpdate } from "./versioned";
-import { recordChange } from "./changes";
+import { staleVersion } from "./versioned";
+import { recordChange, recordChangeOn } from "./changes";
+import { isDuplicateKey } from "./unique";
+import { byAttribute, driverQuery, inDriverTransaction, selectList, setClause, splitRow, storedNow } from "./driver";
 import { requireProduction } from "./productions";
 import { inTransaction } from "./transaction";
 
@@ -25,7 +27,8 @@ const RECORD_KEYS = [
   "updatedAt",
 ] as const;
 
-export function toFixtureRecord(f: Fixture): FixtureRecord {
+/** A model instance or a row read by attribute name as the stored record (dates as ISO text). */
+export function toFixtureRecord(f: Fixture | Record<string, unknown>): FixtureRecord {
   const record = plain(f as unknown as Record<string, unknown>, RECORD_KEYS) as unknown as FixtureRecord;
   // Booleans are TINYINT in MariaDB and a JSON column can arrive as text on a raw read.
   record.hung = Boolean(record.hung);
@@ -118,51 +121,43 @@ export async function getFixtureById({
   return (await getFixturesByIds({ productionId, fixtureIds: [fixtureId] }))[0] ?? null;
 }
 
-type JoinedRow = Fixture & {
-  position: Record<string, unknown>;
-  fixtureType: Record<string, unknown>;
-  focusPoint: Record<string, unknown>;
-  production: { headHeight: number };
-};
-
 /**
  * A few fixtures with their own position, type, focus point and the production's head height, read in
- * one query (the list reads each related table whole instead; for one row that would be four queries).
- * Ids not in the production are left out; the order is by id.
+ * one statement (the list reads each related table whole instead; for one row that would be four queries).
+ * Ids not in the production are left out; the order is by id. A plain driver statement: this read answers
+ * every single-fixture GET and every edit (lib/data/driver.ts says why).
  */
 export async function getFixturesByIds({
   productionId,
   fixtureIds,
-  transaction,
 }: {
   productionId: number;
   fixtureIds: number[];
-  transaction?: Transaction;
 }): Promise<FixtureDto[]> {
   if (fixtureIds.length === 0) return [];
-  const { Fixture, Position, FixtureType, FocusPoint, Production } = getDb();
-  const rows = (await Fixture.findAll({
-    where: { productionId, id: fixtureIds },
-    include: [
-      { model: Position, as: "position", where: { productionId } },
-      { model: FixtureType, as: "fixtureType", where: { productionId } },
-      { model: FocusPoint, as: "focusPoint", required: false },
-      { model: Production, as: "production", attributes: ["headHeight"] },
-    ],
-    order: [["id", "ASC"]],
-    raw: true,
-    nest: true,
-    transaction,
-  })) as unknown as JoinedRow[];
+  const { Fixture, Position, FixtureType, FocusPoint } = getDb();
+  const rows = await driverQuery(
+    `SELECT ${selectList(Fixture, "f", "fixture")}, ${selectList(Position, "p", "position")},
+            ${selectList(FixtureType, "t", "type")}, ${selectList(FocusPoint, "fp", "point")},
+            pr.head_height AS \`production.headHeight\`
+       FROM fixtures f
+       JOIN positions p ON p.id = f.position_id AND p.production_id = f.production_id
+       JOIN fixture_types t ON t.id = f.fixture_type_id AND t.production_id = f.production_id
+       LEFT JOIN focus_points fp ON fp.id = f.focus_point_id AND fp.production_id = f.production_id
+       JOIN productions pr ON pr.id = f.production_id
+      WHERE f.production_id = ? AND f.id IN (${fixtureIds.map(() => "?").join(", ")})
+      ORDER BY f.id`,
+    [productionId, ...fixtureIds],
+  );
   const out: FixtureDto[] = [];
   for (const row of rows) {
+    const { fixture, position, type, point, production } = splitRow(row);
     // A fixture with no focus point comes back with a point whose every column is null.
-    const point = row.focusPoint?.id != null ? [row.focusPoint] : [];
     const join = fixtureJoiner(
-      { positions: [row.position], types: [row.fixtureType], points: point } as never,
-      Number(row.production.headHeight),
+      { positions: [position], types: [type], points: point.id != null ? [point] : [] } as never,
+      Number(production.headHeight),
     );
-    const joined = join(toFixtureRecord(row));
+    const joined = join(toFixtureRecord(fixture));
     if (joined) out.push(joined);
   }
   return out;
@@ -171,22 +166,34 @@ export async function getFixturesByIds({
 /** The fields checkReferences looks at: a patch touching none of them cannot break a reference or the DMX range. */
 const REFERENCE_FIELDS = ["positionId", "fixtureTypeId", "focusPointId", "address", "footprint"] as const;
 
+/** Whether each referenced row is in the production (the type's DMX modes stand for the type), in one read. */
+const REFERENCES_SQL = `SELECT
+    (SELECT 1 FROM positions WHERE production_id = ? AND id = ?) AS position,
+    (SELECT dmx_modes FROM fixture_types WHERE production_id = ? AND id = ?) AS dmxModes,
+    (SELECT 1 FROM focus_points WHERE production_id = ? AND id = ?) AS point`;
+
+/** Runs one SELECT with positional values: on a Sequelize transaction's connection or a driver connection. */
+type Select = (sql: string, values: unknown[]) => Promise<Array<Record<string, unknown>>>;
+
 /**
- * Checks that referenced rows belong to the same production and that the DMX range fits the universe.
- * Inside a transaction the reads run one after another on its connection (never a second one from the pool).
+ * Checks that referenced rows belong to the same production and that the DMX range fits the universe,
+ * reading through `select` so the reads run inside the caller's transaction (never on a second connection).
  */
-async function checkReferences(productionId: number, merged: FixtureRecord, transaction?: Transaction) {
-  const { Position, FixtureType, FocusPoint } = getDb();
-  const position = await Position.findOne({ where: { productionId, id: merged.positionId }, transaction });
-  const type = await FixtureType.findOne({ where: { productionId, id: merged.fixtureTypeId }, transaction });
-  const point = merged.focusPointId
-    ? await FocusPoint.findOne({ where: { productionId, id: merged.focusPointId }, transaction })
-    : null;
+async function checkReferences(select: Select, productionId: number, merged: FixtureRecord) {
+  const [found] = await select(REFERENCES_SQL, [
+    productionId,
+    merged.positionId,
+    productionId,
+    merged.fixtureTypeId,
+    productionId,
+    merged.focusPointId ?? 0,
+  ]);
+  const dmxModes = found.dmxModes == null ? null : jsonColumn<Array<{ footprint?: number }>>(found.dmxModes);
   const fieldErrors: Record<string, string[]> = {};
-  if (!position) fieldErrors.positionId = ["no such position in this production"];
-  if (!type) fieldErrors.fixtureTypeId = ["no such fixture type in this production"];
-  if (merged.focusPointId && !point) fieldErrors.focusPointId = ["no such focus point in this production"];
-  const footprint = merged.footprint ?? type?.dmxModes?.[0]?.footprint ?? 1;
+  if (found.position == null) fieldErrors.positionId = ["no such position in this production"];
+  if (dmxModes == null) fieldErrors.fixtureTypeId = ["no such fixture type in this production"];
+  if (merged.focusPointId && found.point == null) fieldErrors.focusPointId = ["no such focus point in this production"];
+  const footprint = merged.footprint ?? dmxModes?.[0]?.footprint ?? 1;
   // ANSI E1.11 (DMX512-A): slots 1–512; a fixture may not straddle two universes.
   if (merged.address != null && merged.address + footprint - 1 > 512) {
     fieldErrors.address = [`a ${footprint}-slot fixture at ${merged.address} runs past slot 512`];
@@ -202,6 +209,21 @@ async function checkReferences(productionId: number, merged: FixtureRecord, tran
   }
 }
 
+/** A duplicate (position, unit number) from the database as the 400 the user can act on. */
+function duplicateUnit(message: string) {
+  return (err: unknown): never => {
+    if (isDuplicateKey(err)) {
+      throw new AppError("bad_request", message, { fieldErrors: { unitNumber: ["already used on this position"] } });
+    }
+    throw err;
+  };
+}
+
+/**
+ * An optimistic-locked edit of one fixture, with its change record, in one transaction of five plain
+ * statements: lock the row, (check references when they change), update, log, commit. The row after the
+ * edit is worked out from the locked row and the change rather than read again.
+ */
 export async function updateFixture({
   productionId,
   fixtureId,
@@ -217,39 +239,43 @@ export async function updateFixture({
   const { version, ...changes } = patch;
   if (Object.keys(changes).length === 0)
     throw new AppError("bad_request", "Nothing to change: send at least one field.");
-  // The row is read first only when the change needs it: references and DMX range to check against the
-  // merged row, or the moment a unit is first marked focused. A note or a colour goes straight to the lock.
-  const needsRow = REFERENCE_FIELDS.some((k) => changes[k] !== undefined) || changes.focused === true;
-  const existing = needsRow ? await Fixture.findOne({ where: { productionId, id: fixtureId } }) : null;
-  if (needsRow && !existing) throw notFound("Fixture");
-  if (existing && REFERENCE_FIELDS.some((k) => changes[k] !== undefined))
-    await checkReferences(productionId, { ...toFixtureRecord(existing), ...changes } as FixtureRecord);
+  await inDriverTransaction(async (conn) => {
+    // A locking read: the latest committed row, held until commit, so the 409's current row, the
+    // references checked against and the logged "before" are all true.
+    const [row] = await conn.query("SELECT * FROM fixtures WHERE production_id = ? AND id = ? FOR UPDATE", [
+      productionId,
+      fixtureId,
+    ]);
+    if (!row) throw notFound("Fixture");
+    const stored = byAttribute(Fixture, row);
+    const before = toFixtureRecord(stored);
+    if (before.version !== version) throw staleVersion("Fixture", before);
+    if (REFERENCE_FIELDS.some((k) => changes[k] !== undefined))
+      await checkReferences((sql, values) => conn.query(sql, values), productionId, { ...before, ...changes });
 
-  const write: Record<string, unknown> = { ...changes };
-  if (changes.unitNumber !== undefined) write.unitSort = unitSortKey(changes.unitNumber);
-  if (changes.focused === true && !existing?.focused)
-    Object.assign(write, { focusedAt: new Date(), focusedBy: userId });
-  if (changes.focused === false) Object.assign(write, { focusedAt: null, focusedBy: null });
-
-  await inTransaction(async (transaction) => {
-    const { before, after } = await versionedUpdate({
-      model: Fixture,
-      scope: { productionId },
-      id: fixtureId,
-      version,
-      changes: write,
-      toDto: toFixtureRecord,
-      what: "Fixture",
-      transaction,
-    }).catch((err) => {
-      if ((err as { name?: string }).name === "SequelizeUniqueConstraintError") {
-        throw new AppError("bad_request", "Another fixture on that position already has this unit number.", {
-          fieldErrors: { unitNumber: ["already used on this position"] },
-        });
-      }
-      throw err;
+    const write: Record<string, unknown> = { ...changes, version: before.version + 1, updatedAt: storedNow() };
+    if (changes.unitNumber !== undefined) write.unitSort = unitSortKey(changes.unitNumber);
+    if (changes.focused === true && !before.focused)
+      Object.assign(write, { focusedAt: storedNow(), focusedBy: userId });
+    if (changes.focused === false) Object.assign(write, { focusedAt: null, focusedBy: null });
+    const set = setClause(Fixture, write);
+    await conn
+      .query(`UPDATE fixtures SET ${set.sql} WHERE production_id = ? AND id = ?`, [
+        ...set.values,
+        productionId,
+        fixtureId,
+      ])
+      .catch(duplicateUnit("Another fixture on that position already has this unit number."));
+    const after = toFixtureRecord({ ...stored, ...write });
+    await recordChangeOn(conn, {
+      productionId,
+      userId,
+      entity: "fixture",
+      entityId: fixtureId,
+      action: "update",
+      before,
+      after,
     });
-    await recordFixtureUpdate({ productionId, userId, fixtureId, before, after }, transaction);
   });
   return (await getFixtureById({ productionId, fixtureId }))!;
 }
@@ -269,21 +295,16 @@ export async function createFixtures({
     const created: number[] = [];
     for (const [i, input] of inputs.entries()) {
       const merged = { ...emptyFixture(), ...input } as unknown as FixtureRecord;
-      await checkReferences(productionId, merged, transaction).catch((err) => {
+      const select: Select = (sql, values) =>
+        getDb().sequelize.query(sql, { replacements: values, type: QueryTypes.SELECT, transaction });
+      await checkReferences(select, productionId, merged).catch((err) => {
         if (err instanceof AppError && inputs.length > 1) err.message = `Fixture ${i + 1}: ${err.message}`;
         throw err;
       });
       const row = await Fixture.create(
         { ...emptyFixture(), ...input, productionId, unitSort: unitSortKey(input.unitNumber) },
         { transaction },
-      ).catch((err) => {
-        if ((err as { name?: string }).name === "SequelizeUniqueConstraintError") {
-          throw new AppError("bad_request", `Unit ${input.unitNumber} already exists on that position.`, {
-            fieldErrors: { unitNumber: ["already used on this position"] },
-          });
-        }
-        throw err;
-      });
+      ).catch(duplicateUnit(`Unit ${input.unitNumber} already exists on that position.`));
       await recordChange(
         { productionId, userId, entity: "fixture", entityId: row.id, action: "create", after: toFixtureRecord(row) },
         transaction,

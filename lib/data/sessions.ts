@@ -4,6 +4,7 @@ import { QueryTypes } from "sequelize";
 import { getDb } from "@/models";
 import type { MembershipDto, UserDto } from "@/lib/dto/people";
 import type { Role } from "@/lib/auth/roles";
+import { driverQuery } from "./driver";
 
 // The cookie holds a random token; the database holds only its hash, with the user and an expiry.
 const hash = (token: string) => createHash("sha256").update(token).digest("hex");
@@ -44,13 +45,14 @@ export async function getSessionMember(
   token: string,
   productionId: number,
 ): Promise<{ user: UserDto; membership: MembershipDto | null } | null> {
-  const rows = await getDb().sequelize.query<UserDto & { role: Role | null; isOwner: number | null }>(
+  // A plain driver statement: every production request pays for this read (lib/data/driver.ts).
+  const rows = await driverQuery<Array<UserDto & { role: Role | null; isOwner: number | null }>>(
     `SELECT u.id, u.email, u.name, m.role, m.is_owner AS isOwner
        FROM user_sessions s
        JOIN users u ON u.id = s.user_id
        LEFT JOIN memberships m ON m.user_id = u.id AND m.production_id = ?
       WHERE s.token_hash = ? AND s.expires_at > NOW(3)`,
-    { replacements: [productionId, hash(token)], type: QueryTypes.SELECT },
+    [productionId, hash(token)],
   );
   const row = rows[0];
   if (!row) return null;

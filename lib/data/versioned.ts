@@ -2,6 +2,17 @@ import "server-only";
 import { literal, type Model, type ModelStatic, type Transaction, type WhereOptions } from "sequelize";
 import { AppError, notFound } from "@/lib/errors";
 
+/** The 409 of optimistic locking: someone saved first; the current row goes back so the client can show it. */
+export function staleVersion(what: string, current: unknown): AppError {
+  return new AppError(
+    "conflict",
+    `Someone else changed this ${what.toLowerCase()} first. Here is the current version.`,
+    {
+      current,
+    },
+  );
+}
+
 /**
  * Optimistic locking: the write lands only if the row still has the version the client read.
  * Otherwise 409 with the current row, so the client can show the other person's change.
@@ -30,13 +41,7 @@ export async function versionedUpdate<M extends Model, Dto>(opts: {
   if (count === 0) {
     const current = await model.findOne({ where, transaction, ...lock });
     if (!current) throw notFound(what);
-    throw new AppError(
-      "conflict",
-      `Someone else changed this ${what.toLowerCase()} first. Here is the current version.`,
-      {
-        current: toDto(current),
-      },
-    );
+    throw staleVersion(what, toDto(current));
   }
   const after = await model.findOne({ where, transaction });
   return { before, after: after! };
