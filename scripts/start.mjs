@@ -7,7 +7,16 @@ import { ensureNodeModules } from "./lib/node-modules.mjs";
 import { ensureEnvFile } from "./lib/env-file.mjs";
 import { startMariaDb } from "./lib/mariadb.mjs";
 import { startMailStandIn } from "./lib/mail-stand-in.mjs";
-import { ROOT, bin, buildIfStale, migrate, seedWhenEmpty, DEMO_PASSWORD, DEMO_SIGN_INS } from "./lib/project.mjs";
+import {
+  KEEP_ALIVE_MS,
+  ROOT,
+  bin,
+  buildIfStale,
+  migrate,
+  seedWhenEmpty,
+  DEMO_PASSWORD,
+  DEMO_SIGN_INS,
+} from "./lib/project.mjs";
 
 const dev = process.argv.includes("--dev");
 const dbOnly = process.argv.includes("--db-only");
@@ -77,7 +86,15 @@ async function main() {
   if (!dev) buildIfStale(".next", env);
   const child = spawn(
     process.execPath,
-    [bin("next"), dev ? "dev" : "start", "-p", String(port), "-H", settings.HOST || "127.0.0.1"],
+    [
+      bin("next"),
+      dev ? "dev" : "start",
+      "-p",
+      String(port),
+      "-H",
+      settings.HOST || "127.0.0.1",
+      ...(dev ? [] : ["--keepAliveTimeout", String(KEEP_ALIVE_MS)]),
+    ],
     {
       cwd: ROOT,
       stdio: ["ignore", "inherit", "inherit"],

@@ -1,7 +1,7 @@
 // A production server (`next start`) of a test build on a loopback port, stopped with the script's other
 // cleanups. Only Node built-ins.
 import { spawn } from "node:child_process";
-import { ROOT, bin, freePort, waitForHttp } from "./project.mjs";
+import { KEEP_ALIVE_MS, ROOT, bin, freePort, waitForHttp } from "./project.mjs";
 
 /**
  * Starts the build in `distDir` with `env`; resolves with its address once /api/health answers. `nodeArgs`
@@ -10,7 +10,17 @@ import { ROOT, bin, freePort, waitForHttp } from "./project.mjs";
 export async function startAppServer({ distDir, env, cleanups, timeoutMs = 120_000, nodeArgs = [], onStart }) {
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
-  const args = [...nodeArgs, bin("next"), "start", "-p", String(port), "-H", "127.0.0.1"];
+  const args = [
+    ...nodeArgs,
+    bin("next"),
+    "start",
+    "-p",
+    String(port),
+    "-H",
+    "127.0.0.1",
+    "--keepAliveTimeout",
+    String(KEEP_ALIVE_MS),
+  ];
   const server = spawn(process.execPath, args, {
     cwd: ROOT,
     stdio: ["ignore", "ignore", "inherit"],
