@@ -1,6 +1,8 @@
-// Rules every request meets before any page or route handler runs (applied by proxy.ts): the security
-// headers, and the refusal of cross-site writes. Pure functions of the request's method, path and headers,
-// so they are unit-tested without a server.
+// Rules every request meets before any page or route handler runs: the security headers, and the refusal
+// of cross-site writes. Pages (and their server actions) meet them in proxy.ts; the API, which the proxy
+// leaves alone because every read paid for it, gets its headers from next.config.ts and its refusals from
+// lib/http/respond.ts `route`. Pure functions of the request's method, path and headers, so they are
+// unit-tested without a server.
 
 /** Methods that change state; GET and HEAD never do in this app. */
 const WRITES = new Set(["POST", "PUT", "PATCH", "DELETE"]);
@@ -93,6 +95,9 @@ export function contentSecurityPolicy(nonce: string, { dev = false } = {}): stri
 /** The policy of the API's answers (JSON, files): nothing in them may load or run anything, or be framed. */
 export const API_CONTENT_SECURITY_POLICY = "default-src 'none'; frame-ancestors 'none'";
 
+/** HTTP Strict Transport Security (RFC 6797): a year, subdomains included. */
+export const STRICT_TRANSPORT_SECURITY = "max-age=31536000; includeSubDomains";
+
 /** Headers every response carries. HSTS only over HTTPS: over plain HTTP a browser ignores it anyway. */
 export function securityHeaders(https: boolean): Record<string, string> {
   return {
@@ -100,6 +105,9 @@ export function securityHeaders(https: boolean): Record<string, string> {
     "Referrer-Policy": "strict-origin-when-cross-origin",
     "X-Frame-Options": "DENY",
     "Permissions-Policy": "camera=(self), microphone=(), geolocation=()",
-    ...(https ? { "Strict-Transport-Security": "max-age=31536000; includeSubDomains" } : {}),
+    ...(https ? { "Strict-Transport-Security": STRICT_TRANSPORT_SECURITY } : {}),
   };
 }
+
+/** The status of a refusal as the app's error code (for a route handler, which answers through AppError). */
+export const REFUSAL_CODES = { 403: "forbidden", 413: "too_large", 415: "unsupported" } as const;

@@ -4,11 +4,30 @@ import type { z } from "zod";
 import { AppError, fromZodError, toAppError } from "@/lib/errors";
 import { BodyTooLarge, readBoundedBody } from "@/lib/io/bounded-body";
 import { toId } from "./id";
+import { REFUSAL_CODES, refuseCrossSiteWrite } from "./request-guard";
 
-/** Wraps a route handler: its result becomes JSON, its errors a JSON error with the right status. */
+/**
+ * A write another site could have sent (a foreign Origin or Sec-Fetch-Site), a body a plain HTML form can
+ * send (text/plain, urlencoded) or a declared length past the cap is refused before the handler runs.
+ * The proxy applies the same rule to pages; the API applies it here (see lib/http/request-guard.ts).
+ */
+export function refuseForeignWrite(req: Request): void {
+  const url = new URL(req.url);
+  const refusal = refuseCrossSiteWrite(
+    { method: req.method, pathname: url.pathname, headers: req.headers },
+    url.protocol.replace(":", ""),
+  );
+  if (refusal) throw new AppError(REFUSAL_CODES[refusal.status], refusal.message);
+}
+
+/**
+ * Wraps a route handler: cross-site writes are refused first, its result becomes JSON, its errors a JSON
+ * error with the right status. Every API route goes through here (a test sweeps the route tree).
+ */
 export function route<Ctx>(fn: (req: Request, ctx: Ctx) => Promise<unknown>) {
   return async (req: Request, ctx: Ctx): Promise<Response> => {
     try {
+      refuseForeignWrite(req);
       const result = await fn(req, ctx);
       if (result instanceof Response) return result;
       return NextResponse.json(result ?? { ok: true });

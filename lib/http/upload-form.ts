@@ -1,7 +1,6 @@
 import "server-only";
 import { AppError } from "@/lib/errors";
 import { BodyTooLarge, readBoundedBody } from "@/lib/io/bounded-body";
-import { refuseCrossSiteWrite } from "./request-guard";
 
 // The multipart wrapper (boundaries, part headers, small text fields) adds a little to the file itself.
 const WRAPPER_BYTES = 256 * 1024;
@@ -21,17 +20,6 @@ export async function readUploadForm(
       "too_large",
       `${detail ?? `The ${opts.what} is larger than the ${limitMb} MB limit.`} Nothing was saved.`,
       { fieldErrors: { file: ["over the size limit"] } },
-    );
-  // The proxy does not see upload routes (it would buffer the body), so the cross-site rule is applied here.
-  const url = new URL(req.url);
-  const refusal = refuseCrossSiteWrite(
-    { method: req.method, pathname: url.pathname, headers: req.headers },
-    url.protocol.replace(":", ""),
-  );
-  if (refusal)
-    throw new AppError(
-      refusal.status === 403 ? "forbidden" : refusal.status === 413 ? "too_large" : "unsupported",
-      refusal.message,
     );
   const cap = opts.maxBytes + WRAPPER_BYTES;
   if (Number(req.headers.get("content-length") ?? 0) > cap) throw tooLarge();

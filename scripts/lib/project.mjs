@@ -42,7 +42,7 @@ export async function seedWhenEmpty(env) {
 const SOURCE_DIRS = ["app", "components", "hooks", "lib", "models", "public"];
 const SOURCE_FILES = [
   "package-lock.json",
-  "next.config.mjs",
+  "next.config.ts",
   "tailwind.config.ts",
   "postcss.config.mjs",
   "tsconfig.json",
@@ -86,6 +86,13 @@ export function buildIfStale(distDir, env = {}) {
   });
   writeFileSync(stamp, fingerprint);
 }
+
+/**
+ * `next start`'s idle keep-alive, in ms: past Node's 5 s, so a client that reuses a socket after a pause
+ * (a browser, a test between steps, a proxy in front) does not race the server closing it and get a reset.
+ * 65 s outlasts the 60 s idle timeout common in load balancers (common practice; no standard sets it).
+ */
+export const KEEP_ALIVE_MS = 65_000;
 
 export function freePort() {
   return new Promise((resolve, reject) => {

@@ -1,11 +1,10 @@
 // Every route handler × every kind of caller, against the role table of the design (shared/DESIGN.md,
 // "Roles"), written out here by hand so the code's own policy module is checked, not echoed. The route list
 // is read from the app/api folder: a route or method with no row below fails the first test.
-import { readdirSync, readFileSync } from "node:fs";
-import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { DEMO_USERS } from "@/tests/support/demo";
 import { ApiSession, demoProductionId, freshUser } from "./support/api";
+import { routeTree } from "./support/route-tree";
 
 type Caller = "designer" | "electrician" | "stageManager" | "viewer" | "outsider" | "anonymous";
 type Role = Exclude<Caller, "outsider" | "anonymous">;
@@ -174,25 +173,6 @@ const EXPECTED: Record<string, Scope> = {
   // Accepting: the link's token is the proof.
   "POST /api/invitations/accept": "public",
 };
-
-/** Every exported method of every route.ts under app/api, as "METHOD /api/…". */
-function routeTree(): string[] {
-  const root = path.resolve("app/api");
-  const out: string[] = [];
-  for (const rel of readdirSync(root, { recursive: true }).map(String)) {
-    if (!rel.endsWith("route.ts")) continue;
-    const src = readFileSync(path.join(root, rel), "utf8");
-    const url = `/api/${path.dirname(rel)}`.replace(/\/\.$/, "").replaceAll(path.sep, "/");
-    const methods = new Set<string>();
-    for (const m of src.matchAll(/export\s+(?:const|async function|function)\s+(GET|POST|PUT|PATCH|DELETE)\b/g))
-      methods.add(m[1]);
-    for (const m of src.matchAll(/export\s+const\s*\{([^}]*)\}/g))
-      for (const name of m[1].split(","))
-        if (/^(GET|POST|PUT|PATCH|DELETE)$/.test(name.trim())) methods.add(name.trim());
-    for (const method of methods) out.push(`${method} ${url}`);
-  }
-  return out.sort();
-}
 
 const sessions = {} as Record<Caller, ApiSession>;
 let productionId = 0;

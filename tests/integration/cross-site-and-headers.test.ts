@@ -1,6 +1,8 @@
-// The proxy's rules (proxy.ts, lib/http/request-guard.ts) against the real production server.
+// The request guard's rules (lib/http/request-guard.ts) against the real production server: pages meet
+// them in proxy.ts, the API in every route handler's wrapper (lib/http/respond.ts) and next.config.ts.
 import { describe, expect, it } from "vitest";
 import { ApiSession, BASE_URL, demoProductionId } from "./support/api";
+import { routeTree } from "./support/route-tree";
 
 const DESIGNER = "maren.oduya@quillmere.test";
 
@@ -16,12 +18,12 @@ describe("cross-site writes are refused before they reach a handler", () => {
       body: JSON.stringify({ name: "From elsewhere", kind: "overhead_pipe" }),
     });
     expect(res.status).toBe(403);
-    expect((await res.json()).message).toMatch(/another site/);
+    expect((await res.json()).error.message).toMatch(/another site/);
     const after = await s.get(`/api/productions/${productionId}/positions`);
     expect(after.json).toEqual(before.json);
   });
 
-  it("an upload route, which the proxy leaves to itself, refuses a foreign Origin just the same", async () => {
+  it("an upload route refuses a foreign Origin before it reads the file", async () => {
     const s = await new ApiSession().signIn(DESIGNER);
     const productionId = await demoProductionId(s);
     const form = new FormData();
@@ -41,8 +43,45 @@ describe("cross-site writes are refused before they reach a handler", () => {
       body: JSON.stringify({ email: DESIGNER, password: "lantern-demo-2026" }),
     });
     expect(res.status).toBe(415);
-    expect((await res.json()).message).toContain("text/plain");
+    expect((await res.json()).error.message).toContain("text/plain");
     expect(res.headers.get("set-cookie")).toBeNull();
+  });
+
+  it("every write method of every API route refuses a foreign Origin before its handler runs", async () => {
+    const s = await new ApiSession().signIn(DESIGNER);
+    const productionId = await demoProductionId(s);
+    const writes = routeTree().filter((r) => !r.startsWith("GET "));
+    expect(writes.length).toBeGreaterThan(40);
+    const missed: string[] = [];
+    for (const row of writes) {
+      const [method, pattern] = row.split(" ");
+      // Ids that do not exist: were the refusal not first, the answer would be a 400 or 404 instead.
+      const url = pattern.replace(/\[(\w+)\]/g, (_, name: string) =>
+        name === "productionId" ? String(productionId) : "2147483000",
+      );
+      const res = await fetch(BASE_URL + url, {
+        method,
+        headers: { cookie: s.cookie, origin: "https://elsewhere.test", "content-type": "application/json" },
+        body: "{}",
+      });
+      const body = await res.json().catch(() => null);
+      if (res.status !== 403 || !/another site/.test(body?.error?.message ?? "")) missed.push(`${row} → ${res.status}`);
+    }
+    expect(missed).toEqual([]);
+  });
+
+  it("a fixture edit sent as text/plain is 415 and changes nothing", async () => {
+    const s = await new ApiSession().signIn(DESIGNER);
+    const productionId = await demoProductionId(s);
+    const [fixture] = (await s.get(`/api/productions/${productionId}/fixtures`)).json.fixtures;
+    const res = await fetch(`${BASE_URL}/api/productions/${productionId}/fixtures/${fixture.id}`, {
+      method: "PATCH",
+      headers: { cookie: s.cookie, "content-type": "text/plain" },
+      body: JSON.stringify({ version: fixture.version, notes: "sent as text" }),
+    });
+    expect(res.status).toBe(415);
+    const now = (await s.get(`/api/productions/${productionId}/fixtures/${fixture.id}`)).json.fixture;
+    expect(now.version).toBe(fixture.version);
   });
 
   it("a server action posted with a foreign Origin is 403, not a 500", async () => {
@@ -87,8 +126,22 @@ describe("security headers", () => {
     expect(r.headers.get("x-frame-options")).toBe("DENY");
   });
 
-  it("sends HSTS when a TLS-terminating proxy says the request came over HTTPS", async () => {
-    const r = await fetch(`${BASE_URL}/api/health`, { headers: { "x-forwarded-proto": "https" } });
-    expect(r.headers.get("strict-transport-security")).toMatch(/max-age=31536000/);
+  it("an API path that does not exist, and an API error, carry the same headers", async () => {
+    for (const r of [
+      await fetch(`${BASE_URL}/api/no-such-thing`),
+      await fetch(`${BASE_URL}/api/productions/1/fixtures`),
+    ]) {
+      expect(r.status).toBeGreaterThanOrEqual(400);
+      expect(r.headers.get("content-security-policy")).toBe("default-src 'none'; frame-ancestors 'none'");
+      expect(r.headers.get("x-content-type-options")).toBe("nosniff");
+    }
+  });
+
+  it("sends HSTS when a TLS-terminating proxy says the request came over HTTPS, on pages and the API", async () => {
+    for (const url of ["/api/health", "/sign-in"]) {
+      const r = await fetch(`${BASE_URL}${url}`, { headers: { "x-forwarded-proto": "https" } });
+      expect(r.headers.get("strict-transport-security"), url).toMatch(/max-age=31536000/);
+      expect((await fetch(`${BASE_URL}${url}`)).headers.get("strict-transport-security"), url).toBeNull();
+    }
   });
 });
