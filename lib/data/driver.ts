@@ -34,15 +34,37 @@ export function driverQuery<T = Array<Record<string, unknown>>>(sql: string, val
 }
 
 /**
+ * Waits for statements sent back to back on one connection (the driver pipelines them: each goes out
+ * without waiting for the answer before it, which saves a round trip and an event-loop turn apiece). The
+ * first failure is thrown only once every one has answered, so nothing is still running on the connection.
+ */
+export async function settled<T extends readonly unknown[]>(queries: { [K in keyof T]: Promise<T[K]> }): Promise<T> {
+  const results = await Promise.allSettled(queries);
+  const failed = results.find((r) => r.status === "rejected");
+  if (failed) throw (failed as PromiseRejectedResult).reason;
+  return results.map((r) => (r as PromiseFulfilledResult<unknown>).value) as unknown as T;
+}
+
+type Rows = Array<Record<string, unknown>>;
+
+/**
  * Runs `work` in one transaction on one connection: committed when it returns, rolled back when it throws,
  * and run again from the start when InnoDB picks it as a deadlock victim (as `inTransaction` does).
+ * `opening`, the transaction's first statement (typically the locking read), goes out with START
+ * TRANSACTION and its rows are handed to `work`.
  */
-export function inDriverTransaction<T>(work: (conn: DriverConnection) => Promise<T>): Promise<T> {
+export function inDriverTransaction<T>(
+  work: (conn: DriverConnection, opened: Rows) => Promise<T>,
+  opening?: { sql: string; values: unknown[] },
+): Promise<T> {
   return retryOnDeadlock(() =>
     withDriverConnection(async (conn) => {
-      await conn.query("START TRANSACTION");
       try {
-        const result = await work(conn);
+        const [, opened] = await settled<[unknown, Rows]>([
+          conn.query("START TRANSACTION"),
+          opening ? conn.query<Rows>(opening.sql, opening.values) : Promise.resolve([]),
+        ]);
+        const result = await work(conn, opened);
         await conn.query("COMMIT");
         return result;
       } catch (err) {

@@ -12,7 +12,16 @@ import { jsonColumn } from "./json-column";
 import { staleVersion } from "./versioned";
 import { recordChange, recordChangeOn } from "./changes";
 import { isDuplicateKey } from "./unique";
-import { byAttribute, driverQuery, inDriverTransaction, selectList, setClause, splitRow, storedNow } from "./driver";
+import {
+  byAttribute,
+  driverQuery,
+  inDriverTransaction,
+  selectList,
+  setClause,
+  settled,
+  splitRow,
+  storedNow,
+} from "./driver";
 import { requireProduction } from "./productions";
 import { inTransaction } from "./transaction";
 
@@ -239,13 +248,13 @@ export async function updateFixture({
   const { version, ...changes } = patch;
   if (Object.keys(changes).length === 0)
     throw new AppError("bad_request", "Nothing to change: send at least one field.");
-  await inDriverTransaction(async (conn) => {
-    // A locking read: the latest committed row, held until commit, so the 409's current row, the
-    // references checked against and the logged "before" are all true.
-    const [row] = await conn.query("SELECT * FROM fixtures WHERE production_id = ? AND id = ? FOR UPDATE", [
-      productionId,
-      fixtureId,
-    ]);
+  // The locking read opens the transaction: it sees the latest committed row and holds it until commit,
+  // so the 409's current row, the references checked against and the logged "before" are all true.
+  const lockRow = {
+    sql: "SELECT * FROM fixtures WHERE production_id = ? AND id = ? FOR UPDATE",
+    values: [productionId, fixtureId],
+  };
+  await inDriverTransaction(async (conn, [row]) => {
     if (!row) throw notFound("Fixture");
     const stored = byAttribute(Fixture, row);
     const before = toFixtureRecord(stored);
@@ -259,24 +268,27 @@ export async function updateFixture({
       Object.assign(write, { focusedAt: storedNow(), focusedBy: userId });
     if (changes.focused === false) Object.assign(write, { focusedAt: null, focusedBy: null });
     const set = setClause(Fixture, write);
-    await conn
-      .query(`UPDATE fixtures SET ${set.sql} WHERE production_id = ? AND id = ?`, [
-        ...set.values,
-        productionId,
-        fixtureId,
-      ])
-      .catch(duplicateUnit("Another fixture on that position already has this unit number."));
     const after = toFixtureRecord({ ...stored, ...write });
-    await recordChangeOn(conn, {
-      productionId,
-      userId,
-      entity: "fixture",
-      entityId: fixtureId,
-      action: "update",
-      before,
-      after,
-    });
-  });
+    // The update and its log entry go out together; either failing rolls both back.
+    await settled([
+      conn
+        .query(`UPDATE fixtures SET ${set.sql} WHERE production_id = ? AND id = ?`, [
+          ...set.values,
+          productionId,
+          fixtureId,
+        ])
+        .catch(duplicateUnit("Another fixture on that position already has this unit number.")),
+      recordChangeOn(conn, {
+        productionId,
+        userId,
+        entity: "fixture",
+        entityId: fixtureId,
+        action: "update",
+        before,
+        after,
+      }),
+    ]);
+  }, lockRow);
   return (await getFixtureById({ productionId, fixtureId }))!;
 }
 
