@@ -229,6 +229,8 @@ async function main() {
     const versions = new Map<number, number>();
     for (const f of list.fixtures as Array<{ id: number; version: number }>) versions.set(f.id, f.version);
     let next = 0;
+    // Any answer but 200 is counted by status and its error code, so a non-2xx in the figures is explained.
+    const odd = new Map<string, number>();
     const writes = await cannon({
       url: `${api}/fixtures`,
       requests: [
@@ -246,12 +248,17 @@ async function main() {
           },
           onResponse: (status, body, context: Record<string, number>) => {
             const json = JSON.parse(body);
+            if (status !== 200) {
+              const key = `${status} ${json.error?.code ?? ""} ${json.error?.message ?? ""}`.trim();
+              odd.set(key, (odd.get(key) ?? 0) + 1);
+            }
             const row = status === 200 ? json.fixture : json.error?.current;
             if (row) versions.set(context.id, row.version);
           },
         },
       ],
     });
+    for (const [answer, n] of odd) console.log(`  write answered ${answer} × ${n}`);
     const rawIds = ids.slice(-CONNECTIONS);
     const rawVersions = new Map(rawIds.map((id) => [id, versions.get(id) as number]));
     const rawWrite = (id: number) => async () =>

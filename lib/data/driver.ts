@@ -46,30 +46,40 @@ export async function settled<T extends readonly unknown[]>(queries: { [K in key
 }
 
 type Rows = Array<Record<string, unknown>>;
+type Statement = { sql: string; values: unknown[] };
 
 /**
  * Runs `work` in one transaction on one connection: committed when it returns, rolled back when it throws,
  * and run again from the start when InnoDB picks it as a deadlock victim (as `inTransaction` does).
  * `opening`, the transaction's first statement (typically the locking read), goes out with START
- * TRANSACTION and its rows are handed to `work`.
+ * TRANSACTION and its rows are handed to `work`; `closing`, a read of what was written, goes out with
+ * COMMIT (on the same connection, so it sees the commit) and its rows come back as `closed`.
  */
 export function inDriverTransaction<T>(
   work: (conn: DriverConnection, opened: Rows) => Promise<T>,
-  opening?: { sql: string; values: unknown[] },
-): Promise<T> {
+  { opening, closing }: { opening?: Statement; closing?: Statement } = {},
+): Promise<{ result: T; closed: Rows }> {
   return retryOnDeadlock(() =>
     withDriverConnection(async (conn) => {
+      let committed = false;
       try {
         const [, opened] = await settled<[unknown, Rows]>([
           conn.query("START TRANSACTION"),
           opening ? conn.query<Rows>(opening.sql, opening.values) : Promise.resolve([]),
         ]);
         const result = await work(conn, opened);
-        await conn.query("COMMIT");
-        return result;
+        const commit = conn.query("COMMIT").then(() => {
+          committed = true;
+        });
+        const [, closed] = await settled<[unknown, Rows]>([
+          commit,
+          closing ? conn.query<Rows>(closing.sql, closing.values) : Promise.resolve([]),
+        ]);
+        return { result, closed };
       } catch (err) {
-        // A connection that cannot even roll back is not given back to the pool mid-transaction.
-        await conn.query("ROLLBACK").catch(() => conn.destroy());
+        // After a commit only the closing read can have failed: there is nothing to roll back, and the
+        // error is the read's. A connection that cannot even roll back is not given back to the pool.
+        if (!committed) await conn.query("ROLLBACK").catch(() => conn.destroy());
         throw err;
       }
     }),
@@ -93,9 +103,18 @@ export function columnsOf(model: ModelStatic<Model>): Column[] {
   return columns;
 }
 
-/** `alias.column AS \`prefix.attribute\`` for every attribute of a model, for a joined read. */
-export function selectList(model: ModelStatic<Model>, alias: string, prefix = alias): string {
-  return columnsOf(model)
+/** `alias.column AS \`prefix.attribute\`` for the given attributes of a model (all by default), for a joined read. */
+export function selectList(
+  model: ModelStatic<Model>,
+  alias: string,
+  prefix = alias,
+  attributes?: readonly string[],
+): string {
+  const columns = columnsOf(model);
+  const missing = attributes?.filter((a) => !columns.some((c) => c.attribute === a)) ?? [];
+  if (missing.length) throw new Error(`${model.name} has no attribute ${missing.join(", ")}`);
+  return columns
+    .filter((c) => !attributes || attributes.includes(c.attribute))
     .map((c) => `${alias}.\`${c.column}\` AS \`${prefix}.${c.attribute}\``)
     .join(", ");
 }

@@ -5,7 +5,13 @@ import { AppError, notFound } from "@/lib/errors";
 import type { FixtureCreate, FixturePatch } from "@/lib/validation/fixture";
 import type { FixtureDto, FixtureRecord } from "@/lib/dto/fixture";
 import { emptyFixture, FIXTURE_FIELDS } from "@/lib/rig/fixture-fields";
-import { fixtureJoiner, joinFixtures } from "@/lib/rig/fixture-join";
+import {
+  fixtureJoiner,
+  JOIN_POINT_KEYS,
+  JOIN_POSITION_KEYS,
+  JOIN_TYPE_KEYS,
+  joinFixtures,
+} from "@/lib/rig/fixture-join";
 import { unitSortKey } from "@/lib/rig/unit-number";
 import { plain } from "./plain";
 import { jsonColumn } from "./json-column";
@@ -130,6 +136,24 @@ export async function getFixtureById({
   return (await getFixturesByIds({ productionId, fixtureIds: [fixtureId] }))[0] ?? null;
 }
 
+/** The SELECT … FROM of the joined read, built once from the models (its text does not change). */
+let joinedSelect: string | undefined;
+function joinedFixtureSelect(): string {
+  if (joinedSelect) return joinedSelect;
+  const { Fixture, Position, FixtureType, FocusPoint } = getDb();
+  joinedSelect = `SELECT ${selectList(Fixture, "f", "fixture")},
+            ${selectList(Position, "p", "position", JOIN_POSITION_KEYS)},
+            ${selectList(FixtureType, "t", "type", JOIN_TYPE_KEYS)},
+            ${selectList(FocusPoint, "fp", "point", JOIN_POINT_KEYS)},
+            pr.head_height AS \`production.headHeight\`
+       FROM fixtures f
+       JOIN positions p ON p.id = f.position_id AND p.production_id = f.production_id
+       JOIN fixture_types t ON t.id = f.fixture_type_id AND t.production_id = f.production_id
+       LEFT JOIN focus_points fp ON fp.id = f.focus_point_id AND fp.production_id = f.production_id
+       JOIN productions pr ON pr.id = f.production_id`;
+  return joinedSelect;
+}
+
 /**
  * A few fixtures with their own position, type, focus point and the production's head height, read in
  * one statement (the list reads each related table whole instead; for one row that would be four queries).
@@ -144,20 +168,21 @@ export async function getFixturesByIds({
   fixtureIds: number[];
 }): Promise<FixtureDto[]> {
   if (fixtureIds.length === 0) return [];
-  const { Fixture, Position, FixtureType, FocusPoint } = getDb();
-  const rows = await driverQuery(
-    `SELECT ${selectList(Fixture, "f", "fixture")}, ${selectList(Position, "p", "position")},
-            ${selectList(FixtureType, "t", "type")}, ${selectList(FocusPoint, "fp", "point")},
-            pr.head_height AS \`production.headHeight\`
-       FROM fixtures f
-       JOIN positions p ON p.id = f.position_id AND p.production_id = f.production_id
-       JOIN fixture_types t ON t.id = f.fixture_type_id AND t.production_id = f.production_id
-       LEFT JOIN focus_points fp ON fp.id = f.focus_point_id AND fp.production_id = f.production_id
-       JOIN productions pr ON pr.id = f.production_id
+  const { sql, values } = fixturesByIdsStatement(productionId, fixtureIds);
+  return joinedFixtures(await driverQuery(sql, values));
+}
+
+function fixturesByIdsStatement(productionId: number, fixtureIds: number[]) {
+  return {
+    sql: `${joinedFixtureSelect()}
       WHERE f.production_id = ? AND f.id IN (${fixtureIds.map(() => "?").join(", ")})
       ORDER BY f.id`,
-    [productionId, ...fixtureIds],
-  );
+    values: [productionId, ...fixtureIds],
+  };
+}
+
+/** Rows of the joined read as fixtures with their names and pools. */
+function joinedFixtures(rows: Array<Record<string, unknown>>): FixtureDto[] {
   const out: FixtureDto[] = [];
   for (const row of rows) {
     const { fixture, position, type, point, production } = splitRow(row);
@@ -254,42 +279,48 @@ export async function updateFixture({
     sql: "SELECT * FROM fixtures WHERE production_id = ? AND id = ? FOR UPDATE",
     values: [productionId, fixtureId],
   };
-  await inDriverTransaction(async (conn, [row]) => {
-    if (!row) throw notFound("Fixture");
-    const stored = byAttribute(Fixture, row);
-    const before = toFixtureRecord(stored);
-    if (before.version !== version) throw staleVersion("Fixture", before);
-    if (REFERENCE_FIELDS.some((k) => changes[k] !== undefined))
-      await checkReferences((sql, values) => conn.query(sql, values), productionId, { ...before, ...changes });
+  const { closed } = await inDriverTransaction(
+    async (conn, [row]) => {
+      if (!row) throw notFound("Fixture");
+      const stored = byAttribute(Fixture, row);
+      const before = toFixtureRecord(stored);
+      if (before.version !== version) throw staleVersion("Fixture", before);
+      if (REFERENCE_FIELDS.some((k) => changes[k] !== undefined))
+        await checkReferences((sql, values) => conn.query(sql, values), productionId, { ...before, ...changes });
 
-    const write: Record<string, unknown> = { ...changes, version: before.version + 1, updatedAt: storedNow() };
-    if (changes.unitNumber !== undefined) write.unitSort = unitSortKey(changes.unitNumber);
-    if (changes.focused === true && !before.focused)
-      Object.assign(write, { focusedAt: storedNow(), focusedBy: userId });
-    if (changes.focused === false) Object.assign(write, { focusedAt: null, focusedBy: null });
-    const set = setClause(Fixture, write);
-    const after = toFixtureRecord({ ...stored, ...write });
-    // The update and its log entry go out together; either failing rolls both back.
-    await settled([
-      conn
-        .query(`UPDATE fixtures SET ${set.sql} WHERE production_id = ? AND id = ?`, [
-          ...set.values,
+      const write: Record<string, unknown> = { ...changes, version: before.version + 1, updatedAt: storedNow() };
+      if (changes.unitNumber !== undefined) write.unitSort = unitSortKey(changes.unitNumber);
+      if (changes.focused === true && !before.focused)
+        Object.assign(write, { focusedAt: storedNow(), focusedBy: userId });
+      if (changes.focused === false) Object.assign(write, { focusedAt: null, focusedBy: null });
+      const set = setClause(Fixture, write);
+      const after = toFixtureRecord({ ...stored, ...write });
+      // The update and its log entry go out together; either failing rolls both back.
+      await settled([
+        conn
+          .query(`UPDATE fixtures SET ${set.sql} WHERE production_id = ? AND id = ?`, [
+            ...set.values,
+            productionId,
+            fixtureId,
+          ])
+          .catch(duplicateUnit("Another fixture on that position already has this unit number.")),
+        recordChangeOn(conn, {
           productionId,
-          fixtureId,
-        ])
-        .catch(duplicateUnit("Another fixture on that position already has this unit number.")),
-      recordChangeOn(conn, {
-        productionId,
-        userId,
-        entity: "fixture",
-        entityId: fixtureId,
-        action: "update",
-        before,
-        after,
-      }),
-    ]);
-  }, lockRow);
-  return (await getFixtureById({ productionId, fixtureId }))!;
+          userId,
+          entity: "fixture",
+          entityId: fixtureId,
+          action: "update",
+          before,
+          after,
+        }),
+      ]);
+    },
+    { opening: lockRow, closing: fixturesByIdsStatement(productionId, [fixtureId]) },
+  );
+  // Read on the same connection right after the commit; gone only if deleted in that instant.
+  const [fixture] = joinedFixtures(closed);
+  if (!fixture) throw notFound("Fixture");
+  return fixture;
 }
 
 /** Creates fixtures in one transaction (all or none); returns them with computed geometry. */

@@ -9,6 +9,22 @@ type JoinType = GeometryInput["type"] & { id: number; name: string; family: stri
 type JoinPoint = { id: number; name: string; x: number; y: number };
 export type JoinRecord = FixtureAim & { positionId: number; fixtureTypeId: number; focusPointId: number | null };
 
+// The columns the join reads from each related row, for reads that fetch only these (the type's DMX
+// modes and photometric data, for one, are not needed to name a unit or work out its pool).
+export const JOIN_POSITION_KEYS = ["id", "name", "trimHeight"] as const satisfies ReadonlyArray<keyof JoinPosition>;
+export const JOIN_TYPE_KEYS = [
+  "id",
+  "name",
+  "family",
+  "coneMinDeg",
+  "coneMaxDeg",
+  "defaultSoftnessDeg",
+  "lensDropM",
+  "mounting",
+  "lensRiseM",
+] as const satisfies ReadonlyArray<keyof JoinType>;
+export const JOIN_POINT_KEYS = ["id", "name", "x", "y"] as const satisfies ReadonlyArray<keyof JoinPoint>;
+
 /**
  * Builds the join for one production's rows; it answers null for a fixture whose position or type is
  * not among them (a row read while its position was being deleted), so callers leave it out.
