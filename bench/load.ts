@@ -226,8 +226,10 @@ async function main() {
 
   if (ONLY.has("write")) {
     // Each connection edits its own fixture and carries its version forward, as an editing client does.
+    // Versions as they are now: the list run above changed a fixture behind the first read's back.
+    const current = await (await fetch(`${api}/fixtures`, { headers })).json();
     const versions = new Map<number, number>();
-    for (const f of list.fixtures as Array<{ id: number; version: number }>) versions.set(f.id, f.version);
+    for (const f of current.fixtures as Array<{ id: number; version: number }>) versions.set(f.id, f.version);
     let next = 0;
     // Any answer but 200 is counted by status and its error code, so a non-2xx in the figures is explained.
     const odd = new Map<string, number>();
