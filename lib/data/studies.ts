@@ -8,6 +8,7 @@ import { computeTracking } from "@/lib/cues/tracking";
 import type { CoverageRequest, LightSource } from "@/lib/validation/studies";
 import { computeCoverage, stageBounds } from "@/lib/studies/coverage";
 import type { StudyFixture, Levels } from "@/lib/studies/lights";
+import { JOIN_POSITION_KEYS, JOIN_TYPE_KEYS } from "@/lib/rig/fixture-join";
 import { getCuesByProduction } from "./cue-reads";
 import { getAreaZonesByProduction } from "./area-zones";
 
@@ -93,22 +94,11 @@ export async function getStudyFixtures({ productionId }: { productionId: number 
       ],
       raw: true,
     }) as unknown as Promise<FixtureRow[]>,
-    Position.findAll({ where: { productionId }, attributes: ["id", "name", "trimHeight"], raw: true }),
+    Position.findAll({ where: { productionId }, attributes: [...JOIN_POSITION_KEYS], raw: true }),
     FixtureType.findAll({
       where: { productionId },
-      attributes: [
-        "id",
-        "family",
-        "coneMinDeg",
-        "coneMaxDeg",
-        "defaultSoftnessDeg",
-        "lensDropM",
-        "mounting",
-        "lensRiseM",
-        "lensApertureM",
-        "peakCandela",
-        "peakCandelaNarrow",
-      ],
+      // What the pool needs, and what the light levels need on top.
+      attributes: [...JOIN_TYPE_KEYS, "lensApertureM", "peakCandela", "peakCandelaNarrow"],
       raw: true,
     }),
     FocusPoint.findAll({ where: { productionId }, attributes: ["id", "x", "y"], raw: true }),
