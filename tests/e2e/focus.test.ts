@@ -137,6 +137,15 @@ describe("the electrician's focus call on a tablet", () => {
     );
     const done = onBoom.filter((f: { focused: boolean }) => f.focused).length;
     await textOf(page.getByTestId("call-progress")).toBe(`${done} of 4 focused`);
+    // The unit the call opened on (the first not yet focused) stays on screen when marked without moving on,
+    // for its notes; undone again, the run below starts from the same state.
+    const shown = () => page.getByTestId("focus-chart").first().getAttribute("data-fixture-id");
+    const opened = await shown();
+    await page.getByTestId("mark-focused-stay").click();
+    await textOf(page.getByTestId("focused-line")).toMatch(/^Focused /);
+    expect(await shown()).toBe(opened);
+    await page.getByTestId("unmark-focused").click();
+    await textOf(page.getByTestId("call-progress")).toBe(`${done} of 4 focused`);
     await page.getByTestId("mark-focused").click();
     await textOf(page.getByTestId("call-progress")).toBe(`${done + 1} of 4 focused`);
     // "Focused — next unit" moved on; mark this one without moving, then check who and when.

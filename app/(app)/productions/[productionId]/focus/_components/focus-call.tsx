@@ -65,6 +65,13 @@ export function FocusCall({ data }: { data: FocusPageData }) {
     const after = [...units.slice(i + 1), ...units.slice(0, i)].find((f) => !f.focused);
     if (after) go({ unit: after.id });
   };
+  // A unit chosen for the user (the first not yet focused) is pinned in the address, so marking it focused
+  // keeps it on screen for its notes instead of moving on to the next unfocused one.
+  const unitInAddress = params.get("unit");
+  // biome-ignore lint/correctness/useExhaustiveDependencies: pin once per unit chosen this way
+  useEffect(() => {
+    if (current && !unitInAddress) go({ unit: current.id });
+  }, [current?.id, unitInAddress]);
   const step = (d: number) => {
     const i = units.findIndex((f) => f.id === current?.id);
     const target = units[i + d];
