@@ -1,9 +1,9 @@
 import "server-only";
 // Plain driver statements on a connection from Sequelize's own pool, for the few paths every user hits
 // many times a minute (the session check, one fixture read, a fixture edit). A model query spends far more
-// CPU in Sequelize's query machinery than MariaDB spends answering it (docs/benchmarks.md, write path);
-// these paths keep the pool, its limits, the session settings and the fail-over of models/index.ts, and
-// the same type conversions (the driver's typeCast is Sequelize's), and skip the rest.
+// CPU in Sequelize's query machinery than MariaDB spends answering it (docs/benchmarks-history.md, "Load,
+// fourth pass"). These paths keep the pool, its limits, the session settings and the fail-over of
+// models/index.ts, and the same type conversions (the driver's typeCast is Sequelize's), and skip the rest.
 import { DataTypes, type Model, type ModelStatic } from "sequelize";
 import { getDb } from "@/models";
 import { retryOnDeadlock } from "./transaction";
@@ -13,9 +13,6 @@ export type DriverConnection = {
   query<T = Array<Record<string, unknown>>>(sql: string, values?: unknown[]): Promise<T>;
   destroy(): void;
 };
-
-/** The result of an INSERT, UPDATE or DELETE. */
-export type DriverWrite = { affectedRows: number; insertId: number | bigint };
 
 /** Runs `work` on one connection from the app's pool and gives the connection back. */
 export async function withDriverConnection<T>(work: (conn: DriverConnection) => Promise<T>): Promise<T> {

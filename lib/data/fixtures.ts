@@ -254,8 +254,9 @@ function duplicateUnit(message: string) {
 }
 
 /**
- * An optimistic-locked edit of one fixture, with its change record, in one transaction of five plain
- * statements: lock the row, (check references when they change), update, log, commit. The row after the
+ * An optimistic-locked edit of one fixture, with its change record, in one transaction of plain statements
+ * sent in four round trips: START with the locking read; the reference check, only when a reference or the
+ * address changes; the update with its log entry; COMMIT with the read of the answer. The row after the
  * edit is worked out from the locked row and the change rather than read again.
  */
 export async function updateFixture({
