@@ -9,9 +9,10 @@ import { recordChange } from "./changes";
 import type { CueDto } from "@/lib/dto/cue";
 import { getCueById, getCuesByProduction } from "./cue-reads";
 import { inTransaction } from "./transaction";
+import { isDuplicateKey } from "./unique";
 
 function duplicateNumber(err: unknown, number: number | undefined): never {
-  if ((err as { name?: string }).name === "SequelizeUniqueConstraintError") {
+  if (isDuplicateKey(err)) {
     const n = number == null ? "that number" : formatCueNumber(number);
     throw new AppError("bad_request", `Cue ${n} already exists in this production.`, {
       fieldErrors: { number: [`cue ${n} already exists`] },

@@ -16,6 +16,7 @@ import { getCueById } from "./cue-reads";
 import { writeParts } from "./cue-writes";
 import { versionedUpdate } from "./versioned";
 import { inTransaction } from "./transaction";
+import { isDuplicateKey } from "./unique";
 
 type Restore = {
   productionId: number;
@@ -81,7 +82,7 @@ export async function restoreFixture({ productionId, revisionId, id, version, us
       what: "Fixture",
       transaction,
     }).catch((err) => {
-      if ((err as { name?: string }).name === "SequelizeUniqueConstraintError")
+      if (isDuplicateKey(err))
         throw new AppError("bad_request", `Unit ${then.unitNumber} is now used by another fixture on that position.`, {
           fieldErrors: { unitNumber: ["already used on this position"] },
         });
@@ -131,7 +132,7 @@ export async function restoreCue({ productionId, revisionId, id, version, userId
       what: "Cue",
       transaction,
     }).catch((err) => {
-      if ((err as { name?: string }).name === "SequelizeUniqueConstraintError")
+      if (isDuplicateKey(err))
         throw new AppError(
           "bad_request",
           `Cue ${then.number} now exists again as another cue; renumber that one first.`,
