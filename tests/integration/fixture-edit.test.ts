@@ -3,7 +3,7 @@
 // hold that worked-out row to what MariaDB really stored, and check that every refusal writes nothing.
 import type { Connection } from "mariadb";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { freshUser } from "./support/api";
+import { rigProduction } from "./support/rig";
 import { openTestDb } from "./concurrency-support";
 
 type Row = Record<string, unknown> & { id: number; version: number };
@@ -20,36 +20,15 @@ afterAll(async () => {
   await db?.end();
 });
 
+/** A fresh production (support/rig.ts) with a focus point and two 13-slot units on its pipe. */
 async function rig() {
-  const { session: s } = await freshUser("fixture-edit");
-  const id = (await s.post("/api/productions", { name: "Edits" })).json.production.id as number;
+  const { s, id, lx1: pipe, wash: type } = await rigProduction();
   const api = `/api/productions/${id}`;
-  const pipe = (
-    await s.post(`${api}/positions`, {
-      name: "Pipe",
-      kind: "overhead-pipe",
-      x1: -4,
-      y1: 3,
-      x2: 4,
-      y2: 3,
-      trimHeight: 5.5,
-    })
-  ).json.position;
-  const type = (
-    await s.post(`${api}/fixture-types`, {
-      name: "Four-slot wash",
-      family: "wash",
-      coneMinDeg: 20,
-      coneMaxDeg: 40,
-      peakCandela: 9000,
-      dmxModes: [{ name: "basic", footprint: 4 }],
-    })
-  ).json.fixtureType;
   const point = (await s.post(`${api}/focus-points`, { name: "Down left", x: -2, y: -1 })).json.focusPoint;
   const created = await s.post(`${api}/fixtures`, {
     fixtures: [
-      { positionId: pipe.id, fixtureTypeId: type.id, unitNumber: "1", x: -1, y: 3, universe: 1, address: 1 },
-      { positionId: pipe.id, fixtureTypeId: type.id, unitNumber: "2", x: 1, y: 3, universe: 1, address: 5 },
+      { positionId: pipe.id, fixtureTypeId: type.id, unitNumber: "1", x: -1, y: 1, universe: 1, address: 1 },
+      { positionId: pipe.id, fixtureTypeId: type.id, unitNumber: "2", x: 1, y: 1, universe: 1, address: 14 },
     ],
   });
   expect(created.status).toBe(201);
@@ -141,8 +120,8 @@ describe("one fixture's edit", () => {
       [{ positionId: other.pipe.id }, "positionId"],
       [{ fixtureTypeId: other.type.id }, "fixtureTypeId"],
       [{ focusPointId: other.point.id }, "focusPointId"],
-      // ANSI E1.11: a four-slot unit at 510 would need slots 510–513.
-      [{ address: 510 }, "address"],
+      // ANSI E1.11: a 13-slot unit at 501 would need slots 501–513.
+      [{ address: 501 }, "address"],
     ];
     for (const [change, field] of cases) {
       const res = await s.patch(`${api}/fixtures/${two.id}`, { version: two.version, ...change });
@@ -152,8 +131,8 @@ describe("one fixture's edit", () => {
     const now = (await s.get(`${api}/fixtures/${two.id}`)).json.fixture as Row;
     expect(now.version).toBe(two.version);
     expect(await changeCount(id, two.id)).toBe(before);
-    // The last slot that fits is allowed: 509–512.
-    expect((await s.patch(`${api}/fixtures/${two.id}`, { version: two.version, address: 509 })).status).toBe(200);
+    // The last start that fits is allowed: 500–512.
+    expect((await s.patch(`${api}/fixtures/${two.id}`, { version: two.version, address: 500 })).status).toBe(200);
   });
 
   it("answers 404 for a fixture of another production, and leaves it alone", async () => {
