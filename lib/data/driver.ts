@@ -155,8 +155,11 @@ export function setClause(
 }
 
 /**
- * The moment as a DATETIME column keeps it (whole seconds; MariaDB drops the fraction), so a row worked
- * out in JavaScript after a write says exactly what the database now holds.
+ * The moment as a DATETIME column keeps it, so a row worked out in JavaScript after a write says exactly
+ * what the database now holds. The app's DATETIME columns have no fractional digits and MariaDB truncates
+ * the fraction rather than rounding it (MariaDB Knowledge Base, "Microseconds in MariaDB", unless sql_mode
+ * has TIME_ROUND_FRACTIONAL; cited from memory). tests/integration/fixture-edit.test.ts checks it against
+ * a fresh read.
  */
 export function storedNow(): Date {
   return new Date(Math.floor(Date.now() / 1000) * 1000);
